@@ -1,0 +1,65 @@
+import { type DynamicModule, Module } from '@nestjs/common';
+import { ConfigModule, type ConfigType } from '@nestjs/config';
+import { APP_GUARD } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { resolve } from 'node:path';
+import { AuthModule } from './auth/auth.module.js';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
+import { RolesGuard } from './common/guards/roles.guard.js';
+import { appConfig, authConfig, mailConfig } from './config/app.config.js';
+import { databaseConfig } from './config/database.config.js';
+import { validateEnvironment } from './config/env.validation.js';
+import { sqliteOptions } from './database/typeorm-options.js';
+import { HealthModule } from './health/health.module.js';
+import { OrganisationsModule } from './organisations/organisations.module.js';
+import { UsersModule } from './users/users.module.js';
+
+/** The built web app, served at / when WEB_DIST is set (npm start); read before Nest starts, so from the environment. */
+function webAppModules(): DynamicModule[] {
+  const dist = process.env.WEB_DIST;
+  if (!dist) return [];
+  return [
+    ServeStaticModule.forRoot({
+      rootPath: resolve(dist),
+      exclude: ['/api{/*path}'],
+      serveStaticOptions: {
+        // The service worker and its manifest must never be cached, or updates would not be seen.
+        setHeaders: (res, path) => {
+          if (/(sw\.js|workbox-[\w-]+\.js|manifest\.webmanifest|index\.html)$/.test(path)) {
+            res.setHeader('Cache-Control', 'no-cache');
+          }
+        },
+      },
+    }),
+  ];
+}
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({
+      isGlobal: true,
+      cache: true,
+      ignoreEnvFile: process.env.NODE_ENV === 'test',
+      validate: validateEnvironment,
+      load: [appConfig, authConfig, databaseConfig, mailConfig],
+    }),
+    TypeOrmModule.forRootAsync({
+      inject: [databaseConfig.KEY],
+      useFactory: (db: ConfigType<typeof databaseConfig>) => ({
+        ...sqliteOptions(db.path),
+        autoLoadEntities: true,
+      }),
+    }),
+    ...webAppModules(),
+    AuthModule,
+    UsersModule,
+    OrganisationsModule,
+    HealthModule,
+  ],
+  providers: [
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+  ],
+})
+export class AppModule {}

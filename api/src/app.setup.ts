@@ -1,0 +1,64 @@
+import { BadRequestException, type INestApplication, ValidationPipe } from '@nestjs/common';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import type { ValidationError } from 'class-validator';
+import { ConfigService } from '@nestjs/config';
+import { rateLimit } from 'express-rate-limit';
+import helmet from 'helmet';
+import { BodyErrorFilter } from './common/filters/body-error.filter.js';
+
+function flatten(errors: ValidationError[], parent = ''): string[] {
+  return errors.flatMap((e) => {
+    const path = parent ? `${parent}.${e.property}` : e.property;
+    const own = Object.values(e.constraints ?? {}).map((m) =>
+      m.includes('should not exist') ? `${path} is not a field we accept` : m.startsWith(e.property) ? m.replace(e.property, path) : `${path}: ${m}`,
+    );
+    return [...own, ...flatten(e.children ?? [], path)];
+  });
+}
+
+/** Everything main.ts and the end-to-end tests share, so tests exercise the app as it runs. */
+export function configureApp(app: INestApplication): INestApplication {
+  app.setGlobalPrefix('api');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Plain http on localhost and LAN addresses must not be upgraded.
+          upgradeInsecureRequests: null,
+          'img-src': ["'self'", 'data:', 'blob:'],
+        },
+      },
+      // HSTS makes sense only behind TLS, which a deployment's proxy adds.
+      strictTransportSecurity: false,
+    }),
+  );
+  const config = app.get(ConfigService);
+  // Slows password guessing; counted per client address over a sliding window.
+  app.use(
+    '/api/auth/sign-in',
+    rateLimit({
+      windowMs: config.getOrThrow<number>('app.signInRateWindowMs'),
+      limit: config.getOrThrow<number>('app.signInRateLimit'),
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      message: { statusCode: 429, message: 'Too many sign-in attempts. Wait a minute and try again.', error: 'Too Many Requests' },
+    }),
+  );
+  app.useGlobalFilters(new BodyErrorFilter());
+  app.useGlobalPipes(
+    new ValidationPipe({
+      whitelist: true,
+      forbidNonWhitelisted: true,
+      transform: true,
+      exceptionFactory: (errors) => new BadRequestException(flatten(errors)),
+    }),
+  );
+  const docs = new DocumentBuilder()
+    .setTitle('Wiretrail API')
+    .setDescription('Records, checks and paperwork for electrical alterations and data cabling.')
+    .setVersion('0.1.0')
+    .addBearerAuth()
+    .build();
+  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, docs));
+  return app;
+}

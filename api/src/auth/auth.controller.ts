@@ -1,0 +1,46 @@
+import { Body, Controller, Get, Headers, HttpCode, Post } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { AnyRole } from '../common/decorators/roles.decorator.js';
+import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Public } from '../common/decorators/public.decorator.js';
+import { UsersService } from '../users/users.service.js';
+import { AuthService } from './auth.service.js';
+import { RefreshTokenDto } from './dto/refresh-token.dto.js';
+import { SignInDto } from './dto/sign-in.dto.js';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly auth: AuthService,
+    private readonly users: UsersService,
+  ) {}
+
+  @Public()
+  @Post('sign-in')
+  @HttpCode(200)
+  signIn(@Body() dto: SignInDto, @Headers('user-agent') userAgent?: string) {
+    return this.auth.signIn(dto.email, dto.password, userAgent);
+  }
+
+  @Public()
+  @Post('refresh')
+  @HttpCode(200)
+  refresh(@Body() dto: RefreshTokenDto, @Headers('user-agent') userAgent?: string) {
+    return this.auth.refresh(dto.refreshToken, userAgent);
+  }
+
+  @Public()
+  @Post('sign-out')
+  @HttpCode(204)
+  async signOut(@Body() dto: RefreshTokenDto): Promise<void> {
+    await this.auth.signOut(dto.refreshToken);
+  }
+
+  @ApiBearerAuth()
+  @AnyRole()
+  @Get('me')
+  me(@CurrentUser() user: AuthUser) {
+    return this.users.findOne(user.organisationId, user.id);
+  }
+}

@@ -1,0 +1,37 @@
+import { Inject, Injectable, UnauthorizedException } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { PassportStrategy } from '@nestjs/passport';
+import { InjectRepository } from '@nestjs/typeorm';
+import { ExtractJwt, Strategy } from 'passport-jwt';
+import { Repository } from 'typeorm';
+import { authConfig } from '../config/app.config.js';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { User } from '../users/entities/user.entity.js';
+
+export interface AccessTokenPayload {
+  sub: string;
+  org: string;
+  role: string;
+}
+
+/** Looks the user up on every request so that deactivation and role changes take effect at once. */
+@Injectable()
+export class JwtStrategy extends PassportStrategy(Strategy) {
+  constructor(
+    @Inject(authConfig.KEY) config: ConfigType<typeof authConfig>,
+    @InjectRepository(User) private readonly users: Repository<User>,
+  ) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      ignoreExpiration: false,
+      secretOrKey: config.jwtSecret,
+      algorithms: ['HS256'],
+    });
+  }
+
+  async validate(payload: AccessTokenPayload): Promise<AuthUser> {
+    const user = await this.users.findOneBy({ id: payload.sub, organisationId: payload.org });
+    if (!user || !user.active) throw new UnauthorizedException('Your session has ended. Please sign in again.');
+    return { id: user.id, organisationId: user.organisationId, role: user.role, email: user.email, name: user.name };
+  }
+}

@@ -1,0 +1,17 @@
+import { Column, Entity } from 'typeorm';
+import { BaseRow } from '../../common/entities.js';
+
+@Entity('organisation')
+export class Organisation extends BaseRow {
+  @Column({ type: 'varchar', length: 200 })
+  name: string;
+
+  @Column({ type: 'varchar', length: 500, nullable: true })
+  address: string | null;
+
+  @Column({ type: 'varchar', length: 50, nullable: true })
+  phone: string | null;
+
+  @Column({ type: 'varchar', length: 254, nullable: true })
+  email: string | null;
+}

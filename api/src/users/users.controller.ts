@@ -1,0 +1,36 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
+import { CreateUserDto } from './dto/create-user.dto.js';
+import { ListUsersQueryDto } from './dto/list-users-query.dto.js';
+import { UpdateUserDto } from './dto/update-user.dto.js';
+import { UsersService } from './users.service.js';
+
+@ApiTags('users')
+@ApiBearerAuth()
+@Roles('admin')
+@Controller('users')
+export class UsersController {
+  constructor(private readonly users: UsersService) {}
+
+  @Get()
+  list(@CurrentUser() caller: AuthUser, @Query() query: ListUsersQueryDto) {
+    return this.users.list(caller.organisationId, query);
+  }
+
+  @Get(':id')
+  findOne(@CurrentUser() caller: AuthUser, @Param('id', new ParseUUIDPipe()) id: string) {
+    return this.users.findOne(caller.organisationId, id);
+  }
+
+  @Post()
+  create(@CurrentUser() caller: AuthUser, @Body() dto: CreateUserDto) {
+    return this.users.create(caller.organisationId, dto);
+  }
+
+  @Patch(':id')
+  update(@CurrentUser() caller: AuthUser, @Param('id', new ParseUUIDPipe()) id: string, @Body() dto: UpdateUserDto) {
+    return this.users.update(caller, id, dto);
+  }
+}

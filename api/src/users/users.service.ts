@@ -1,0 +1,84 @@
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { Brackets, IsNull, Repository } from 'typeorm';
+import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
+import { hashPassword } from '../auth/password.js';
+import { definedFields } from '../common/defined-fields.js';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import type { CreateUserDto } from './dto/create-user.dto.js';
+import type { ListUsersQueryDto } from './dto/list-users-query.dto.js';
+import type { UpdateUserDto } from './dto/update-user.dto.js';
+import { type PublicUser, toPublicUser, User } from './entities/user.entity.js';
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+@Injectable()
+export class UsersService {
+  constructor(
+    @InjectRepository(User) private readonly users: Repository<User>,
+    @InjectRepository(RefreshToken) private readonly tokens: Repository<RefreshToken>,
+  ) {}
+
+  async list(organisationId: string, q: ListUsersQueryDto): Promise<Page<PublicUser>> {
+    const qb = this.users.createQueryBuilder('u').where('u.organisationId = :organisationId', { organisationId });
+    if (q.role) qb.andWhere('u.role = :role', { role: q.role });
+    if (q.search) {
+      const like = `%${q.search.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+      qb.andWhere(new Brackets((b) => b.where("u.name LIKE :like ESCAPE '\\'", { like }).orWhere("u.email LIKE :like ESCAPE '\\'", { like })));
+    }
+    const [rows, total] = await qb
+      .orderBy('u.name', 'ASC')
+      .skip((q.page - 1) * q.pageSize)
+      .take(q.pageSize)
+      .getManyAndCount();
+    return { items: rows.map(toPublicUser), total, page: q.page, pageSize: q.pageSize };
+  }
+
+  /** 404 for a row of another organisation: its existence is not ours to reveal. */
+  async findOne(organisationId: string, id: string): Promise<PublicUser> {
+    const user = await this.users.findOneBy({ id, organisationId });
+    if (!user) throw new NotFoundException('No such user.');
+    return toPublicUser(user);
+  }
+
+  async create(organisationId: string, dto: CreateUserDto): Promise<PublicUser> {
+    if (await this.users.existsBy({ email: dto.email })) {
+      throw new ConflictException('A user with that e-mail already exists.');
+    }
+    const user = this.users.create({
+      organisationId,
+      email: dto.email,
+      name: dto.name,
+      role: dto.role,
+      passwordHash: await hashPassword(dto.password),
+      active: true,
+      lastSignInAt: null,
+    });
+    await this.users.save(user);
+    return toPublicUser(user);
+  }
+
+  async update(caller: AuthUser, id: string, dto: UpdateUserDto): Promise<PublicUser> {
+    const user = await this.users.findOneBy({ id, organisationId: caller.organisationId });
+    if (!user) throw new NotFoundException('No such user.');
+    const changes = definedFields(dto);
+    if (Object.keys(changes).length === 0) throw new BadRequestException('Nothing to change: send name, role or active.');
+    if (id === caller.id && dto.role !== undefined && dto.role !== user.role) {
+      throw new ForbiddenException('You cannot change your own role; ask another admin.');
+    }
+    if (id === caller.id && dto.active === false) {
+      throw new ForbiddenException('You cannot deactivate yourself; ask another admin.');
+    }
+    Object.assign(user, changes);
+    await this.users.save(user);
+    if (dto.active === false) {
+      await this.tokens.update({ userId: user.id, revokedAt: IsNull() }, { revokedAt: new Date() });
+    }
+    return toPublicUser(user);
+  }
+}

@@ -1,0 +1,59 @@
+import type { INestApplication } from '@nestjs/common';
+import { Test } from '@nestjs/testing';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import request from 'supertest';
+import { DataSource } from 'typeorm';
+
+export const DEMO_PASSWORD = 'wiretrail-demo';
+
+export interface TestApp {
+  app: INestApplication;
+  http: ReturnType<typeof request>;
+  dataSource: DataSource;
+  close: () => Promise<void>;
+}
+
+/**
+ * Boots the real AppModule on a fresh SQLite file, runs the real migrations and loads the demo scenario.
+ * The environment is set before AppModule is imported because ConfigModule validates it at import.
+ */
+export async function createTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+  const dir = mkdtempSync(join(tmpdir(), 'wiretrail-api-'));
+  Object.assign(process.env, {
+    NODE_ENV: 'test',
+    DATABASE_PATH: join(dir, 'test.sqlite'),
+    JWT_SECRET: 'test-secret-that-is-long-enough-for-hs256-signing',
+    SIGN_IN_RATE_LIMIT: '1000',
+    ...env,
+  });
+  const { AppModule } = await import('../src/app.module.js');
+  const { configureApp } = await import('../src/app.setup.js');
+  const { seedDemoData } = await import('../src/database/seed.js');
+  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+  const app = configureApp(moduleRef.createNestApplication({ logger: ['error'] }));
+  await app.init();
+  const dataSource = app.get(DataSource);
+  await dataSource.runMigrations();
+  await seedDemoData(dataSource);
+  return {
+    app,
+    http: request(app.getHttpServer()),
+    dataSource,
+    close: async () => {
+      await app.close();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function signIn(t: TestApp, email: string, password = DEMO_PASSWORD) {
+  const res = await t.http.post('/api/auth/sign-in').send({ email, password }).expect(200);
+  return res.body as { accessToken: string; refreshToken: string; user: { id: string; organisationId: string; role: string } };
+}
+
+/** Nest's error body, pinned here once: every error the API gives has this shape. */
+export function expectErrorBody(body: unknown, statusCode: number): void {
+  expect(body).toEqual(expect.objectContaining({ statusCode, message: expect.anything() }));
+}
