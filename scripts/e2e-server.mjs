@@ -1,0 +1,33 @@
+#!/usr/bin/env node
+// The server Playwright tests run against: the built product on a throwaway database with the demo data.
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { build, prepareDatabase, root, startChild } from './lib.mjs';
+
+const port = process.env.E2E_PORT ?? '3100';
+if (!existsSync(join(root, 'api/dist/main.js')) || !existsSync(join(root, 'web/dist/index.html'))) build();
+
+const dir = mkdtempSync(join(tmpdir(), 'wiretrail-e2e-'));
+const env = {
+  NODE_ENV: 'production',
+  PORT: port,
+  HOST: '127.0.0.1',
+  DATABASE_PATH: join(dir, 'e2e.sqlite'),
+  JWT_SECRET: 'e2e-secret-long-enough-for-signing-tokens-here',
+  WEB_DIST: join(root, 'web/dist'),
+  SIGN_IN_RATE_LIMIT: '500',
+  SMTP_PORT: '2525',
+};
+prepareDatabase(env);
+const children = [
+  startChild('Mail fake', 'node', ['scripts/mail-fake.mjs'], { SMTP_PORT: '2525', MAIL_FAKE_HTTP_PORT: '2580' }),
+  startChild('API', 'node', ['api/dist/main.js'], env),
+];
+const stop = () => {
+  for (const c of children) c.kill('SIGTERM');
+  rmSync(dir, { recursive: true, force: true });
+  setTimeout(() => process.exit(0), 300);
+};
+process.on('SIGINT', stop);
+process.on('SIGTERM', stop);

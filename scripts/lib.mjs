@@ -1,0 +1,61 @@
+// Shared by start, dev and test: find the repository, install what is missing, prepare the database.
+import { spawn, spawnSync } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+export const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+
+export function run(cmd, args, opts = {}) {
+  const r = spawnSync(cmd, args, { cwd: root, stdio: 'inherit', ...opts, env: { ...process.env, ...opts.env } });
+  if (r.status !== 0) {
+    console.error(`\n✗ ${cmd} ${args.join(' ')} failed (exit ${r.status ?? r.signal}).`);
+    process.exit(r.status ?? 1);
+  }
+}
+
+/** A fresh clone has no node_modules: install exactly what the lockfile says. */
+export function ensureDependencies() {
+  const marker = join(root, 'node_modules', '.package-lock.json');
+  if (existsSync(marker)) return;
+  console.log('Installing dependencies (first run; compiling the SQLite driver takes a minute or two)…');
+  run('npm', ['ci', '--no-audit', '--no-fund'], { env: { PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD: '1' } });
+}
+
+export function build() {
+  run('npm', ['run', 'build']);
+}
+
+/** A per-installation signing secret, made once and kept beside the database, never in the repository. */
+export function jwtSecret(dataDir) {
+  if (process.env.JWT_SECRET) return process.env.JWT_SECRET;
+  mkdirSync(dataDir, { recursive: true });
+  const file = join(dataDir, 'jwt-secret');
+  if (!existsSync(file)) writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
+  return readFileSync(file, 'utf8').trim();
+}
+
+export function prepareDatabase(env) {
+  run('node', ['api/dist/database/migrate-cli.js'], { env });
+  run('node', ['api/dist/database/seed-cli.js'], { env });
+}
+
+export function startChild(name, cmd, args, env) {
+  const child = spawn(cmd, args, { cwd: root, stdio: 'inherit', env: { ...process.env, ...env } });
+  child.on('exit', (code, signal) => {
+    if (signal !== 'SIGTERM') {
+      console.error(`${name} stopped (${signal ?? `exit ${code}`}).`);
+      process.exit(code ?? 1);
+    }
+  });
+  return child;
+}
+
+export const DEMO_SIGN_INS = [
+  ['admin', 'admin@larkfield.example'],
+  ['office', 'office@larkfield.example'],
+  ['technician', 'tech1@larkfield.example'],
+  ['technician', 'tech2@larkfield.example'],
+  ['admin (second organisation)', 'admin@oakmere.example'],
+];

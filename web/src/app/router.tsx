@@ -1,0 +1,53 @@
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { RouteError } from '@/components/errors/route-error';
+import { OfficeLayout } from '@/components/layouts/office-layout';
+import { HomeRedirect, RequireRole, RequireSession } from '@/components/layouts/session-gate';
+import { TechnicianLayout } from '@/components/layouts/technician-layout';
+import { paths } from '@/config/paths';
+
+const technicianScreens: RouteObject[] = [
+  { path: paths.today.path, lazy: () => import('./routes/technician/today') },
+  { path: paths.sync.path, lazy: () => import('./routes/technician/sync') },
+  { path: paths.me.path, lazy: () => import('./routes/technician/me') },
+];
+
+const officeScreens: RouteObject[] = [
+  { path: paths.jobs.path, lazy: () => import('./routes/office/jobs') },
+  { path: paths.schedule.path, lazy: () => import('./routes/office/schedule') },
+  { path: paths.customers.path, lazy: () => import('./routes/office/customers') },
+  { path: paths.conflicts.path, lazy: () => import('./routes/office/conflicts') },
+  {
+    element: <RequireRole roles={['admin']} />,
+    children: [{ path: paths.team.path, lazy: () => import('./routes/office/team') }],
+  },
+];
+
+// Screens load on demand so a technician's phone downloads only its own screens first;
+// the service worker still stores every one for use offline.
+export const routes: RouteObject[] = [
+  {
+    // Shown for the moment before the first lazy screen arrives.
+    HydrateFallback: () => null,
+    errorElement: <RouteError />,
+    children: [
+      { path: paths.signIn.path, lazy: () => import('./routes/sign-in') },
+      {
+        element: <RequireSession />,
+        children: [
+          { index: true, element: <HomeRedirect /> },
+          {
+            element: <RequireRole roles={['technician']} />,
+            children: [{ element: <TechnicianLayout />, children: technicianScreens }],
+          },
+          {
+            element: <RequireRole roles={['office', 'admin']} />,
+            children: [{ element: <OfficeLayout />, children: officeScreens }],
+          },
+          { path: '*', lazy: () => import('./routes/not-found') },
+        ],
+      },
+    ],
+  },
+];
+
+export const createRouter = () => createBrowserRouter(routes);

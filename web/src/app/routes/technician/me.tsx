@@ -1,0 +1,70 @@
+import Button from '@mui/material/Button';
+import List from '@mui/material/List';
+import ListItem from '@mui/material/ListItem';
+import ListItemText from '@mui/material/ListItemText';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import { useColorScheme } from '@mui/material/styles';
+import ToggleButton from '@mui/material/ToggleButton';
+import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
+import Typography from '@mui/material/Typography';
+import { useNavigate } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
+import { env } from '@/config/env';
+import { paths } from '@/config/paths';
+import { signOut } from '@/features/auth/api/sign-in';
+import { useSession } from '@/lib/session';
+
+export function Component() {
+  const session = useSession();
+  const navigate = useNavigate();
+  const { mode, setMode } = useColorScheme();
+  if (!session) return null;
+  return (
+    <>
+      <PageHeader title="Me" />
+      <Stack spacing={2}>
+        <Paper variant="outlined">
+          <List>
+            <ListItem>
+              <ListItemText primary={session.user.name} secondary={session.user.email} />
+            </ListItem>
+            <ListItem>
+              <ListItemText primary="Role" secondary="Technician" />
+            </ListItem>
+          </List>
+        </Paper>
+        <Paper variant="outlined" sx={{ p: 2 }}>
+          <Typography variant="h3" sx={{ mb: 1.5 }} id="theme-label">
+            Screen
+          </Typography>
+          <ToggleButtonGroup
+            exclusive
+            fullWidth
+            aria-labelledby="theme-label"
+            value={mode ?? 'system'}
+            onChange={(_, v) => v && setMode(v)}
+          >
+            <ToggleButton value="light">Daylight</ToggleButton>
+            <ToggleButton value="dark">Dark</ToggleButton>
+            <ToggleButton value="system">As phone</ToggleButton>
+          </ToggleButtonGroup>
+        </Paper>
+        <Button
+          variant="outlined"
+          color="secondary"
+          size="large"
+          onClick={async () => {
+            await signOut();
+            navigate(paths.signIn.path, { replace: true });
+          }}
+        >
+          Sign out
+        </Button>
+        <Typography variant="caption" color="text.secondary" sx={{ textAlign: 'center' }}>
+          Wiretrail {env.version}
+        </Typography>
+      </Stack>
+    </>
+  );
+}

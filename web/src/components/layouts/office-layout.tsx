@@ -1,0 +1,74 @@
+import CalendarMonthOutlined from '@mui/icons-material/CalendarMonthOutlined';
+import CallSplitOutlined from '@mui/icons-material/CallSplitOutlined';
+import GroupsOutlined from '@mui/icons-material/GroupsOutlined';
+import HomeWorkOutlined from '@mui/icons-material/HomeWorkOutlined';
+import ViewKanbanOutlined from '@mui/icons-material/ViewKanbanOutlined';
+import AppBar from '@mui/material/AppBar';
+import Box from '@mui/material/Box';
+import Drawer from '@mui/material/Drawer';
+import List from '@mui/material/List';
+import ListItemButton from '@mui/material/ListItemButton';
+import ListItemIcon from '@mui/material/ListItemIcon';
+import ListItemText from '@mui/material/ListItemText';
+import Toolbar from '@mui/material/Toolbar';
+import Typography from '@mui/material/Typography';
+import { useQuery } from '@tanstack/react-query';
+import { Link as RouterLink, Outlet, useLocation } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { api } from '@/lib/api-client';
+import { useSession } from '@/lib/session';
+import { Logo } from '../logo';
+import { AccountMenu } from './account-menu';
+
+const DRAWER_WIDTH = 248;
+
+const NAV = [
+  { ...paths.jobs, icon: <ViewKanbanOutlined />, adminOnly: false },
+  { ...paths.schedule, icon: <CalendarMonthOutlined />, adminOnly: false },
+  { ...paths.customers, icon: <HomeWorkOutlined />, adminOnly: false },
+  { ...paths.conflicts, icon: <CallSplitOutlined />, adminOnly: false },
+  { ...paths.team, icon: <GroupsOutlined />, adminOnly: true },
+];
+
+/** Desk first: navigation always open on the left, the organisation and the account on top. */
+export function OfficeLayout() {
+  const session = useSession();
+  const { pathname } = useLocation();
+  const organisation = useQuery({
+    queryKey: ['organisations', 'current'],
+    queryFn: ({ signal }) => api.get<{ name: string }>('/organisations/current', signal),
+    staleTime: 5 * 60_000,
+  });
+  const items = NAV.filter((n) => !n.adminOnly || session?.user.role === 'admin');
+  return (
+    <Box sx={{ display: 'flex', minHeight: '100dvh', bgcolor: 'background.default' }}>
+      <AppBar position="fixed" elevation={0} sx={{ zIndex: (t) => t.zIndex.drawer + 1 }}>
+        <Toolbar sx={{ gap: 2 }}>
+          <Logo size={30} />
+          <Typography sx={{ flex: 1, opacity: 0.85 }} noWrap>
+            {organisation.data?.name}
+          </Typography>
+          <AccountMenu />
+        </Toolbar>
+      </AppBar>
+      <Drawer
+        variant="permanent"
+        sx={{ width: DRAWER_WIDTH, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, boxSizing: 'border-box' } }}
+      >
+        <Toolbar />
+        <List component="nav" aria-label="Main" sx={{ px: 1 }}>
+          {items.map((n) => (
+            <ListItemButton key={n.path} component={RouterLink} to={n.path} selected={pathname.startsWith(n.path)} sx={{ borderRadius: 2, mb: 0.5 }}>
+              <ListItemIcon>{n.icon}</ListItemIcon>
+              <ListItemText primary={n.label} />
+            </ListItemButton>
+          ))}
+        </List>
+      </Drawer>
+      <Box component="main" sx={{ flex: 1, p: 3, minWidth: 0 }}>
+        <Toolbar />
+        <Outlet />
+      </Box>
+    </Box>
+  );
+}

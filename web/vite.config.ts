@@ -1,0 +1,52 @@
+/// <reference types="vitest/config" />
+import react from '@vitejs/plugin-react';
+import { fileURLToPath } from 'node:url';
+import { defineConfig } from 'vite';
+import { VitePWA } from 'vite-plugin-pwa';
+import pkg from './package.json' with { type: 'json' };
+
+const THEME_COLOUR = '#1d4b55';
+
+export default defineConfig({
+  define: { __APP_VERSION__: JSON.stringify(pkg.version) },
+  resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
+  plugins: [
+    react(),
+    VitePWA({
+      // Never swap the app under someone mid-form: the page asks, the user chooses when.
+      registerType: 'prompt',
+      injectRegister: false,
+      // Icons are made from public/logo.svg at build time (see pwa-assets.config.ts).
+      pwaAssets: { config: true, overrideManifestIcons: true },
+      manifest: {
+        name: 'Wiretrail',
+        short_name: 'Wiretrail',
+        description: 'Site records, test results and paperwork for electrical and data-cabling work, offline.',
+        theme_color: THEME_COLOUR,
+        background_color: '#f4f7f7',
+        display: 'standalone',
+        start_url: '/',
+        scope: '/',
+        orientation: 'any',
+      },
+      workbox: {
+        // The web manifest is added by the plugin itself; listing it here too would make the worker fail to start.
+        globPatterns: ['**/*.{js,css,html,svg,png,ico,woff2}'],
+        navigateFallback: '/index.html',
+        navigateFallbackDenylist: [/^\/api\//],
+        cleanupOutdatedCaches: true,
+        // Take control on first install so the very first visit already works offline; updates still wait for the user.
+        clientsClaim: true,
+      },
+    }),
+  ],
+  server: {
+    port: 5173,
+    proxy: { '/api': 'http://127.0.0.1:3000' },
+  },
+  build: { sourcemap: true, chunkSizeWarningLimit: 700 },
+  test: {
+    environment: 'node',
+    include: ['src/**/*.test.{ts,tsx}'],
+  },
+});
