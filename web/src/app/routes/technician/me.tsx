@@ -8,6 +8,7 @@ import { useColorScheme } from '@mui/material/styles';
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
+import { DEFAULT_RULE_SET, VERDICT_DISCLAIMER } from '@wiretrail/core';
 import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { env } from '@/config/env';
@@ -49,6 +50,14 @@ export function Component() {
             <ToggleButton value="dark">Dark</ToggleButton>
             <ToggleButton value="system">As phone</ToggleButton>
           </ToggleButtonGroup>
+        </Paper>
+        <Paper variant="outlined" sx={{ p: 2 }}>
+          <Typography variant="h3" sx={{ mb: 1 }}>
+            About the checks
+          </Typography>
+          <Typography variant="body2" color="text.secondary">
+            Rules: {DEFAULT_RULE_SET.name}. {VERDICT_DISCLAIMER}
+          </Typography>
         </Paper>
         <Button
           variant="outlined"
