@@ -12,3 +12,6 @@ export * from './electrical/safe-zones.js';
 export * from './cabling/pin-schemes.js';
 export * from './cabling/wiremap.js';
 export * from './cabling/link-length.js';
+export * from './sync/hlc.js';
+export * from './sync/entities.js';
+export * from './sync/protocol.js';

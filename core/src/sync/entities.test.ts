@@ -1,0 +1,31 @@
+import { describe, expect, it } from 'vitest';
+import { fieldError, isSyncEntity, SYNC_ENTITIES, SYNC_ENTITY_NAMES } from './entities.js';
+
+describe('synced entities', () => {
+  it('covers the domain model, each with a table', () => {
+    expect(SYNC_ENTITY_NAMES).toEqual(expect.arrayContaining(['note', 'photo', 'cableRun', 'pointChange', 'circuit', 'testResult', 'area', 'board', 'visit']));
+    for (const name of SYNC_ENTITY_NAMES) expect(SYNC_ENTITIES[name].table).toMatch(/^[a-z_]+$/);
+    expect(isSyncEntity('note')).toBe(true);
+    expect(isSyncEntity('toString')).toBe(false);
+  });
+
+  it('lets technicians set only observed fields', () => {
+    expect(SYNC_ENTITIES.site.fields.zeOhm?.technician).toBe(true);
+    expect(SYNC_ENTITIES.site.fields.address?.technician).toBeFalsy();
+    expect(SYNC_ENTITIES.visit.fields.plannedStart?.technician).toBeFalsy();
+    expect(SYNC_ENTITIES.visit.fields.status?.technician).toBe(true);
+  });
+
+  it('names the field and what is wrong with a value', () => {
+    expect(fieldError('note', 'text', 'Back box fixed')).toBeNull();
+    expect(fieldError('note', 'text', 42)).toBe('note.text must be text');
+    expect(fieldError('note', 'text', null)).toBe('note.text must not be empty');
+    expect(fieldError('note', 'colour', 'red')).toBe('note.colour is not a field we accept');
+    expect(fieldError('note', 'constructor', 'x')).toBe('note.constructor is not a field we accept');
+    expect(fieldError('circuit', 'kind', 'spiral')).toMatch(/must be one of: ring, radial/);
+    expect(fieldError('circuit', 'deviceRatingA', Number.NaN)).toBe('circuit.deviceRatingA must be a number');
+    expect(fieldError('circuit', 'boardId', 'board-1')).toBe('circuit.boardId must be the id of a board');
+    expect(fieldError('visit', 'plannedStart', '2026-12-02T09:00:00.000Z')).toBeNull();
+    expect(fieldError('visit', 'plannedStart', 'Tuesday')).toMatch(/ISO-8601/);
+  });
+});

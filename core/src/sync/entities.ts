@@ -1,0 +1,237 @@
+/**
+ * The synced entities of Wiretrail and their fields, shared by the server (validation, merge policy, scope)
+ * and the app (local tables). Field names are the product's camelCase names.
+ */
+
+export const SYNC_ENTITY_NAMES = [
+  'customer', 'site', 'area', 'board', 'circuit', 'job', 'visit', 'photo', 'note', 'cableRun', 'pointChange', 'testResult', 'document', 'conflict',
+] as const;
+export type SyncEntityName = (typeof SYNC_ENTITY_NAMES)[number];
+/** Rows a field may point at: synced entities, and users (technicians on a visit). */
+export type RefTarget = SyncEntityName | 'user';
+
+export type FieldType =
+  | { kind: 'string'; max: number }
+  | { kind: 'number'; min?: number; max?: number }
+  | { kind: 'integer'; min?: number; max?: number }
+  | { kind: 'boolean' }
+  | { kind: 'datetime' }
+  | { kind: 'ref'; entity: RefTarget }
+  | { kind: 'refs'; entity: RefTarget }
+  | { kind: 'enum'; values: readonly string[] }
+  | { kind: 'json' };
+
+/**
+ * How a field changed by two people at once is settled:
+ * - `office`: the office owns it (customer details, addresses, schedule, price). The stored value stays
+ *   unless the incoming author's role outranks the one who wrote it.
+ * - `observed`: seen on site (readings, statuses, answers). The later hybrid logical clock wins.
+ * Either way the value not kept goes into a Conflict row.
+ */
+export type MergePolicy = 'office' | 'observed';
+
+export interface FieldSpec {
+  readonly type: FieldType;
+  readonly policy: MergePolicy;
+  /** Must be given when the row is created. */
+  readonly required?: boolean;
+  /** A technician may set this field (within rows they may write). */
+  readonly technician?: boolean;
+}
+
+/**
+ * Who among technicians may write rows of an entity:
+ * - `visit`: rows of a visit assigned to them;
+ * - `site`: rows of a site one of their visits is at;
+ * - `assigned-visit`: the visit row itself, when assigned to them;
+ * - `site-row`: the site row itself, for a site one of their visits is at;
+ * - `none`: office and admin only.
+ * Whatever the row, a technician sets only the fields marked `technician`.
+ */
+export type TechnicianWrite = 'visit' | 'site' | 'assigned-visit' | 'site-row' | 'none';
+
+export interface EntitySpec {
+  readonly name: SyncEntityName;
+  readonly table: string;
+  readonly fields: Readonly<Record<string, FieldSpec>>;
+  readonly technicianWrite: TechnicianWrite;
+  /** Created once, never merged: two devices adding notes never conflict. */
+  readonly appendOnly?: boolean;
+  /** Whether technicians receive these rows at all (in their scope). */
+  readonly technicianVisible: boolean;
+  /** The field that ties the row to a site, for scoping; `id` for the site itself. */
+  readonly siteField: 'siteId' | 'id' | null;
+  /** The field that ties the row to a visit, for technician writes and document locks. */
+  readonly visitField: 'visitId' | 'id' | null;
+  /** Only the server creates these rows (conflicts). */
+  readonly serverOnly?: boolean;
+}
+
+const str = (max = 200): FieldType => ({ kind: 'string', max });
+const text = (): FieldType => ({ kind: 'string', max: 20_000 });
+const num = (min?: number, max?: number): FieldType => ({ kind: 'number', min, max });
+const int = (min?: number, max?: number): FieldType => ({ kind: 'integer', min, max });
+const ref = (entity: RefTarget): FieldType => ({ kind: 'ref', entity });
+const oneOf = (...values: string[]): FieldType => ({ kind: 'enum', values });
+const when: FieldType = { kind: 'datetime' };
+const json: FieldType = { kind: 'json' };
+
+const office = (type: FieldType, required = false): FieldSpec => ({ type, policy: 'office', required });
+const seen = (type: FieldType, required = false): FieldSpec => ({ type, policy: 'observed', required, technician: true });
+
+export const EARTHING_ARRANGEMENTS = ['TN-C-S', 'TN-S', 'TT'] as const;
+export const JOB_STATUSES = ['enquiry', 'booked', 'on-site', 'paperwork', 'done', 'cancelled'] as const;
+export const VISIT_STATUSES = ['planned', 'on-site', 'finished', 'cancelled'] as const;
+export const CIRCUIT_KINDS = ['ring', 'radial', 'lighting', 'other'] as const;
+export const PROTECTIVE_DEVICES = ['B', 'C', 'D', 'BS 88-2', 'BS 88-3', 'BS 3036', 'BS 1362'] as const;
+export const CABLE_MEDIA = ['Cat5e', 'Cat6', 'Cat6A', 'coax', 'speaker', 'HDMI', 'fibre', 'other'] as const;
+export const CABLE_STATUSES = ['unidentified', 'traced', 'terminated', 'tested'] as const;
+export const TRACE_METHODS = ['tone-and-probe', 'continuity', 'tdr', 'visual'] as const;
+export const POINT_ACTIONS = ['add', 'move', 'remove', 'replace'] as const;
+export const POINT_CONNECTIONS = ['ring-extension', 'unfused-spur', 'fused-spur', 'radial'] as const;
+export const PHOTO_SUBJECTS = ['cableRun', 'pointChange', 'circuit'] as const;
+
+const ENTITY_LIST: readonly EntitySpec[] = [
+  {
+    name: 'customer', table: 'customer', technicianWrite: 'none', technicianVisible: true, siteField: null, visitField: null,
+    fields: { name: office(str(), true), email: office(str(254)), phone: office(str(50)), address: office(str(500)), notes: office(text()) },
+  },
+  {
+    name: 'site', table: 'site', technicianWrite: 'site-row', technicianVisible: true, siteField: 'id', visitField: null,
+    fields: {
+      customerId: office(ref('customer'), true), name: office(str()), address: office(str(500), true), postcode: office(str(12)),
+      accessNotes: office(text()),
+      earthing: seen(oneOf(...EARTHING_ARRANGEMENTS)), zeOhm: seen(num(0, 1000)), pfcKa: seen(num(0, 100)),
+    },
+  },
+  {
+    name: 'area', table: 'area', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
+    fields: { siteId: seen(ref('site'), true), name: seen(str(), true), level: seen(str(50)) },
+  },
+  {
+    name: 'board', table: 'board', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
+    fields: { siteId: seen(ref('site'), true), areaId: seen(ref('area')), name: seen(str(), true), description: seen(str(500)) },
+  },
+  {
+    name: 'circuit', table: 'circuit', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
+    fields: {
+      siteId: seen(ref('site'), true), boardId: seen(ref('board'), true), number: seen(str(20), true), description: seen(str(500)),
+      kind: seen(oneOf(...CIRCUIT_KINDS)), deviceType: seen(oneOf(...PROTECTIVE_DEVICES)), deviceRatingA: seen(num(0.5, 1000)),
+      rcdRatingMa: seen(num(1, 3000)), rcdType: seen(str(20)), liveCsaMm2: seen(num(0.5, 400)), cpcCsaMm2: seen(num(0.5, 400)),
+    },
+  },
+  {
+    name: 'job', table: 'job', technicianWrite: 'none', technicianVisible: true, siteField: 'siteId', visitField: null,
+    fields: {
+      siteId: office(ref('site'), true), customerId: office(ref('customer'), true), reference: office(str(40)),
+      title: office(str(), true), status: office(oneOf(...JOB_STATUSES)), description: office(text()),
+    },
+  },
+  {
+    name: 'visit', table: 'visit', technicianWrite: 'assigned-visit', technicianVisible: true, siteField: 'siteId', visitField: 'id',
+    fields: {
+      jobId: office(ref('job'), true), siteId: office(ref('site'), true), technicianIds: office({ kind: 'refs', entity: 'user' }),
+      plannedStart: office(when), plannedEnd: office(when),
+      actualStart: seen(when), actualEnd: seen(when), status: seen(oneOf(...VISIT_STATUSES)),
+    },
+  },
+  {
+    name: 'photo', table: 'photo', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId', appendOnly: true,
+    fields: {
+      visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), areaId: seen(ref('area')),
+      subjectType: seen(oneOf(...PHOTO_SUBJECTS)), subjectId: seen({ kind: 'string', max: 36 }), caption: seen(str(500)), tags: seen(json),
+      takenAt: seen(when), sha256: seen(str(64)), sizeBytes: seen(int(0)), width: seen(int(0)), height: seen(int(0)), uploadState: seen(str(20)),
+    },
+  },
+  {
+    name: 'note', table: 'note', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId', appendOnly: true,
+    fields: { visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), text: seen(text(), true) },
+  },
+  {
+    name: 'cableRun', table: 'cable_run', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
+    fields: {
+      siteId: seen(ref('site'), true), label: seen(str(100), true), medium: seen(oneOf(...CABLE_MEDIA)),
+      endAAreaId: seen(ref('area')), endADescription: seen(str(300)), endATermination: seen(str(100)),
+      endBAreaId: seen(ref('area')), endBDescription: seen(str(300)), endBTermination: seen(str(100)),
+      status: seen(oneOf(...CABLE_STATUSES)), traceMethod: seen(oneOf(...TRACE_METHODS)), lengthM: seen(num(0, 10_000)),
+      nvp: seen(num(0.01, 1)), scheme: seen(oneOf('T568A', 'T568B')), wiremap: seen(json), verdict: seen(oneOf('pass', 'fail', 'check')),
+    },
+  },
+  {
+    name: 'pointChange', table: 'point_change', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
+    fields: {
+      visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), circuitId: seen(ref('circuit')),
+      action: seen(oneOf(...POINT_ACTIONS), true), accessoryKind: seen(str(100)),
+      fromAreaId: seen(ref('area')), fromDescription: seen(str(300)), fromHeightMm: seen(num(0, 10_000)),
+      toAreaId: seen(ref('area')), toDescription: seen(str(300)), toHeightMm: seen(num(0, 10_000)),
+      connection: seen(oneOf(...POINT_CONNECTIONS)), liveCsaMm2: seen(num(0.5, 400)), cpcCsaMm2: seen(num(0.5, 400)),
+      addedRouteM: seen(num(0, 1000)), fuseRatingA: seen(num(0, 100)), loadW: seen(num(0, 100_000)),
+    },
+  },
+  {
+    name: 'testResult', table: 'test_result', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
+    fields: {
+      visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), circuitId: seen(ref('circuit')),
+      readings: seen(json), instrument: seen(str(200)), verdicts: seen(json),
+    },
+  },
+  {
+    name: 'document', table: 'document', technicianWrite: 'none', technicianVisible: true, siteField: 'siteId', visitField: null,
+    fields: {
+      jobId: office(ref('job'), true), siteId: office(ref('site'), true), kind: office(oneOf('certificate', 'cabling-report'), true),
+      number: office(str(40)), signerName: office(str()), pdfSha256: office(str(64)), issuedAt: office(when), emailedAt: office(when),
+    },
+  },
+  {
+    name: 'conflict', table: 'conflict', technicianWrite: 'none', technicianVisible: false, siteField: null, visitField: null, serverOnly: true,
+    fields: {},
+  },
+];
+
+export const SYNC_ENTITIES: Readonly<Record<SyncEntityName, EntitySpec>> = Object.freeze(
+  Object.fromEntries(ENTITY_LIST.map((e) => [e.name, Object.freeze(e)])) as Record<SyncEntityName, EntitySpec>,
+);
+
+export function isSyncEntity(name: unknown): name is SyncEntityName {
+  return typeof name === 'string' && Object.prototype.hasOwnProperty.call(SYNC_ENTITIES, name);
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+export const isUuid = (v: unknown): v is string => typeof v === 'string' && UUID.test(v);
+
+/** Checks one field value against its spec; returns a sentence naming the field, or null when it is fine. */
+export function fieldError(entity: SyncEntityName, field: string, value: unknown): string | null {
+  const spec = Object.prototype.hasOwnProperty.call(SYNC_ENTITIES[entity].fields, field) ? SYNC_ENTITIES[entity].fields[field] : undefined;
+  if (!spec) return `${entity}.${field} is not a field we accept`;
+  if (value === null) return spec.required ? `${entity}.${field} must not be empty` : null;
+  const t = spec.type;
+  const name = `${entity}.${field}`;
+  switch (t.kind) {
+    case 'string':
+      if (typeof value !== 'string') return `${name} must be text`;
+      if (value.length > t.max) return `${name} must be at most ${t.max} characters`;
+      if (spec.required && value.trim() === '') return `${name} must not be empty`;
+      return null;
+    case 'number':
+    case 'integer':
+      if (typeof value !== 'number' || !Number.isFinite(value)) return `${name} must be a number`;
+      if (t.kind === 'integer' && !Number.isInteger(value)) return `${name} must be a whole number`;
+      if (t.min !== undefined && value < t.min) return `${name} must be at least ${t.min}`;
+      if (t.max !== undefined && value > t.max) return `${name} must be at most ${t.max}`;
+      return null;
+    case 'boolean':
+      return typeof value === 'boolean' ? null : `${name} must be true or false`;
+    case 'datetime':
+      return typeof value === 'string' && !Number.isNaN(Date.parse(value)) && /^\d{4}-\d{2}-\d{2}T/.test(value)
+        ? null
+        : `${name} must be an ISO-8601 date and time`;
+    case 'ref':
+      return isUuid(value) ? null : `${name} must be the id of a ${t.entity}`;
+    case 'refs':
+      return Array.isArray(value) && value.every(isUuid) ? null : `${name} must be a list of ids`;
+    case 'enum':
+      return typeof value === 'string' && t.values.includes(value) ? null : `${name} must be one of: ${t.values.join(', ')}`;
+    case 'json':
+      return JSON.stringify(value).length <= 100_000 ? null : `${name} is too large`;
+  }
+}
