@@ -11,8 +11,10 @@ import { appConfig, authConfig, mailConfig } from './config/app.config.js';
 import { databaseConfig } from './config/database.config.js';
 import { validateEnvironment } from './config/env.validation.js';
 import { sqliteOptions } from './database/typeorm-options.js';
+import { ConflictsModule } from './conflicts/conflicts.module.js';
 import { HealthModule } from './health/health.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
+import { SyncModule } from './sync/sync.module.js';
 import { UsersModule } from './users/users.module.js';
 
 /** The built web app, served at / when WEB_DIST is set (npm start); read before Nest starts, so from the environment. */
@@ -56,6 +58,8 @@ function webAppModules(): DynamicModule[] {
     UsersModule,
     OrganisationsModule,
     HealthModule,
+    SyncModule,
+    ConflictsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

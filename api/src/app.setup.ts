@@ -1,4 +1,5 @@
 import { BadRequestException, type INestApplication, ValidationPipe } from '@nestjs/common';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import type { ValidationError } from 'class-validator';
 import { ConfigService } from '@nestjs/config';
@@ -19,6 +20,8 @@ function flatten(errors: ValidationError[], parent = ''): string[] {
 /** Everything main.ts and the end-to-end tests share, so tests exercise the app as it runs. */
 export function configureApp(app: INestApplication): INestApplication {
   app.setGlobalPrefix('api');
+  // A full push batch of field records is larger than Express's 100 kB default.
+  (app as NestExpressApplication).useBodyParser('json', { limit: '5mb' });
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -1,4 +1,5 @@
 import { Foundation1796208527258 } from './1796208527258-Foundation.js';
+import { DomainAndSync1796210074350 } from './1796210074350-DomainAndSync.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
-export const MIGRATIONS = [Foundation1796208527258];
+export const MIGRATIONS = [Foundation1796208527258, DomainAndSync1796210074350];

@@ -1,0 +1,80 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { fieldError, formatHlc, isSyncEntity, SYNC_ENTITIES } from '@wiretrail/core';
+import { InjectRepository } from '@nestjs/typeorm';
+import { IsNull, Not, Repository } from 'typeorm';
+import { v7 as uuidv7 } from 'uuid';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { WriteQueue } from '../common/write-queue.js';
+import { SYNC_SCHEMAS, type SyncRecord } from '../sync/entities/sync-schemas.js';
+import { SyncEngine } from '../sync/sync-engine.service.js';
+import { toSyncedRow } from '../sync/sync.service.js';
+import type { ListConflictsQueryDto } from './dto/list-conflicts-query.dto.js';
+import type { ResolveConflictDto } from './dto/resolve-conflict.dto.js';
+
+@Injectable()
+export class ConflictsService {
+  constructor(
+    @InjectRepository(SYNC_SCHEMAS.conflict) private readonly conflicts: Repository<SyncRecord>,
+    private readonly queue: WriteQueue,
+    private readonly engine: SyncEngine,
+  ) {}
+
+  async list(user: AuthUser, q: ListConflictsQueryDto) {
+    const where = {
+      organisationId: user.organisationId,
+      resolvedAt: q.resolved ? Not(IsNull()) : IsNull(),
+      ...(q.entity ? { entity: q.entity } : {}),
+      ...(q.rowId ? { rowId: q.rowId } : {}),
+    };
+    const [rows, total] = await this.conflicts.findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
+    return { items: rows.map(toSyncedRow), total, page: q.page, pageSize: q.pageSize };
+  }
+
+  async findOne(user: AuthUser, id: string) {
+    const row = await this.conflicts.findOneBy({ id, organisationId: user.organisationId });
+    if (!row) throw new NotFoundException('No such conflict.');
+    return toSyncedRow(row);
+  }
+
+  /**
+   * Settles a conflict: the chosen value is written through the sync engine as the office's own edit,
+   * so every device receives it like any other change.
+   */
+  async resolve(user: AuthUser, id: string, dto: ResolveConflictDto) {
+    return this.queue.run(async (em) => {
+      const conflict = await em.getRepository<SyncRecord>('conflict').findOneBy({ id, organisationId: user.organisationId });
+      if (!conflict) throw new NotFoundException('No such conflict.');
+      if (conflict.resolvedAt) throw new ConflictException('This conflict was already settled.');
+      const entity = conflict.entity as string;
+      const field = conflict.field as string;
+      const actor = { userId: user.id, organisationId: user.organisationId, role: user.role, deviceId: 'office' };
+      const wantsChange = dto.choice !== 'kept';
+      if (wantsChange && conflict.reason === 'locked-by-document') {
+        throw new ConflictException('This record is behind an issued document; keep the recorded value, or issue a new document to change it.');
+      }
+      if (wantsChange && isSyncEntity(entity)) {
+        const row = await em.getRepository<SyncRecord>(entity).findOne({ where: { id: conflict.rowId as string }, withDeleted: true });
+        if (!row) throw new NotFoundException('The record this conflict is about no longer exists.');
+        const hlc = formatHlc({ ms: Date.now(), counter: 0, deviceId: 'office' });
+        const base = { mutationId: uuidv7(), entity, id: row.id, baseVersion: row.version, hlc };
+        let mutation;
+        if (field === '*') {
+          mutation = { ...base, delete: true as const };
+        } else {
+          const value = dto.choice === 'value' ? dto.value : conflict.discardedValue;
+          const problem = SYNC_ENTITIES[entity].fields[field] ? fieldError(entity, field, value) : `${entity}.${field} cannot be set`;
+          if (problem) throw new ConflictException(problem);
+          mutation = { ...base, set: { [field]: value as never } };
+        }
+        const [result] = await this.engine.applyAll(em, actor, [mutation]);
+        if (result!.status === 'rejected') throw new ConflictException(result!.error);
+      }
+      await this.engine.updateServerRow(em, 'conflict', conflict, {
+        resolvedAt: new Date(),
+        resolvedById: user.id,
+        resolution: { choice: dto.choice, ...(dto.choice === 'value' ? { value: dto.value } : {}) },
+      }, actor);
+      return toSyncedRow((await em.getRepository<SyncRecord>('conflict').findOneByOrFail({ id }))!);
+    });
+  }
+}

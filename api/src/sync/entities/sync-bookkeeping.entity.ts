@@ -1,0 +1,93 @@
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+
+/**
+ * The latest change of every synced row, in server order. `seq` comes from one counter, so pulls page through
+ * changes by sequence and never by a device's clock.
+ */
+@Entity('sync_change')
+@Index('IDX_sync_change_org_seq', ['organisationId', 'seq'])
+@Index('IDX_sync_change_site', ['siteId'])
+export class SyncChange {
+  @PrimaryColumn({ type: 'varchar', length: 40 })
+  entity: string;
+
+  @PrimaryColumn({ type: 'varchar', length: 36 })
+  rowId: string;
+
+  @Column({ type: 'varchar', length: 36 })
+  organisationId: string;
+
+  @Column({ type: 'integer', unique: true })
+  seq: number;
+
+  @Column({ type: 'varchar', length: 36, nullable: true })
+  siteId: string | null;
+
+  @Column({ type: 'boolean', default: false })
+  deleted: boolean;
+}
+
+/** One counter for the whole server: the sequence every change is stamped with. */
+@Entity('sync_counter')
+export class SyncCounter {
+  @PrimaryColumn({ type: 'varchar', length: 20 })
+  name: string;
+
+  @Column({ type: 'integer' })
+  value: number;
+}
+
+/** A mutation applied (or refused) once; a replay gets this stored result and changes nothing. */
+@Entity('applied_mutation')
+export class AppliedMutation {
+  @PrimaryColumn({ type: 'varchar', length: 64 })
+  mutationId: string;
+
+  @Column({ type: 'varchar', length: 36 })
+  organisationId: string;
+
+  @Column({ type: 'varchar', length: 36 })
+  userId: string;
+
+  @Column({ type: 'varchar', length: 64 })
+  deviceId: string;
+
+  @Column({ type: 'simple-json' })
+  result: Record<string, unknown>;
+
+  @Column({ type: 'datetime', default: () => "(datetime('now'))" })
+  appliedAt: Date;
+}
+
+/**
+ * What each device was last sent: the checkpoint and the scope (sites) it was computed with, and the pair before,
+ * in case the last reply never arrived. A pull from any other checkpoint gets a reset.
+ */
+@Entity('sync_device')
+export class SyncDevice {
+  @PrimaryColumn({ type: 'varchar', length: 64 })
+  deviceId: string;
+
+  @Column({ type: 'varchar', length: 36 })
+  organisationId: string;
+
+  @Column({ type: 'varchar', length: 36 })
+  userId: string;
+
+  @Column({ type: 'integer', default: 0 })
+  checkpoint: number;
+
+  @Column({ type: 'simple-json' })
+  scope: string[] | null;
+
+  @Column({ type: 'integer', nullable: true })
+  previousCheckpoint: number | null;
+
+  @Column({ type: 'simple-json', nullable: true })
+  previousScope: string[] | null;
+
+  @Column({ type: 'datetime', nullable: true })
+  lastPullAt: Date | null;
+}
+
+export const SYNC_BOOKKEEPING = [SyncChange, SyncCounter, AppliedMutation, SyncDevice];

@@ -1,0 +1,102 @@
+import { type FieldType, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
+import { EntitySchema, type EntitySchemaColumnOptions } from 'typeorm';
+
+/**
+ * What the server keeps about each field of a synced row: the change sequence that last wrote it
+ * (so a push knows whether it changed since the device's base version), the clock and the author.
+ */
+export interface FieldMeta {
+  v: number;
+  hlc: string;
+  by: string;
+  role: string;
+}
+
+/** A synced row as stored: the entity's own fields plus the bookkeeping every synced row carries. */
+export interface SyncRecord {
+  id: string;
+  organisationId: string;
+  version: number;
+  fieldMeta: Record<string, FieldMeta>;
+  deletedAt: Date | null;
+  createdById: string | null;
+  updatedById: string | null;
+  createdAt: Date;
+  updatedAt: Date;
+  [field: string]: unknown;
+}
+
+function columnFor(type: FieldType, required: boolean): EntitySchemaColumnOptions {
+  const nullable = !required;
+  switch (type.kind) {
+    case 'string':
+      return type.max > 2000 ? { type: 'text', nullable } : { type: 'varchar', length: type.max, nullable };
+    case 'number':
+      return { type: 'float', nullable };
+    case 'integer':
+      return { type: 'integer', nullable };
+    case 'boolean':
+      return { type: 'boolean', nullable };
+    case 'datetime':
+      // Kept as the ISO string the device sent, so a value round-trips unchanged through sync.
+      return { type: 'varchar', length: 30, nullable };
+    case 'ref':
+      return { type: 'varchar', length: 36, nullable };
+    case 'enum':
+      return { type: 'varchar', length: 40, nullable };
+    case 'refs':
+    case 'json':
+      return { type: 'simple-json', nullable };
+  }
+}
+
+const COMMON_COLUMNS: Record<string, EntitySchemaColumnOptions> = {
+  id: { type: 'varchar', length: 36, primary: true },
+  organisationId: { type: 'varchar', length: 36 },
+  version: { type: 'integer' },
+  fieldMeta: { type: 'simple-json' },
+  deletedAt: { type: 'datetime', nullable: true },
+  createdById: { type: 'varchar', length: 36, nullable: true },
+  updatedById: { type: 'varchar', length: 36, nullable: true },
+  createdAt: { type: 'datetime', createDate: true },
+  updatedAt: { type: 'datetime', updateDate: true },
+};
+
+/** Conflicts are made by the server only; they sync to office devices like any other row. */
+const CONFLICT_COLUMNS: Record<string, EntitySchemaColumnOptions> = {
+  entity: { type: 'varchar', length: 40 },
+  rowId: { type: 'varchar', length: 36 },
+  field: { type: 'varchar', length: 60 },
+  reason: { type: 'varchar', length: 30 },
+  baseVersion: { type: 'integer' },
+  keptValue: { type: 'simple-json', nullable: true },
+  keptById: { type: 'varchar', length: 36, nullable: true },
+  keptHlc: { type: 'varchar', length: 120, nullable: true },
+  discardedValue: { type: 'simple-json', nullable: true },
+  discardedById: { type: 'varchar', length: 36, nullable: true },
+  discardedHlc: { type: 'varchar', length: 120, nullable: true },
+  discardedDeviceId: { type: 'varchar', length: 64, nullable: true },
+  resolvedAt: { type: 'datetime', nullable: true },
+  resolvedById: { type: 'varchar', length: 36, nullable: true },
+  resolution: { type: 'simple-json', nullable: true },
+};
+
+function buildSchema(name: SyncEntityName): EntitySchema<SyncRecord> {
+  const spec = SYNC_ENTITIES[name];
+  const own = Object.fromEntries(Object.entries(spec.fields).map(([field, f]) => [field, columnFor(f.type, !!f.required)]));
+  const indices = [{ name: `IDX_${spec.table}_organisation_version`, columns: ['organisationId', 'version'] }];
+  if (spec.siteField === 'siteId') indices.push({ name: `IDX_${spec.table}_site`, columns: ['siteId'] });
+  if (spec.visitField === 'visitId') indices.push({ name: `IDX_${spec.table}_visit`, columns: ['visitId'] });
+  return new EntitySchema<SyncRecord>({
+    name,
+    tableName: spec.table,
+    columns: { ...COMMON_COLUMNS, ...(name === 'conflict' ? CONFLICT_COLUMNS : own) },
+    indices,
+  });
+}
+
+export const SYNC_SCHEMAS: Record<SyncEntityName, EntitySchema<SyncRecord>> = Object.fromEntries(
+  SYNC_ENTITY_NAMES.map((n) => [n, buildSchema(n)]),
+) as Record<SyncEntityName, EntitySchema<SyncRecord>>;
+
+export const ALL_SYNC_SCHEMAS = Object.values(SYNC_SCHEMAS);

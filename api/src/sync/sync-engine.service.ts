@@ -1,0 +1,297 @@
+import { Injectable } from '@nestjs/common';
+import {
+  type EntitySpec,
+  fieldError,
+  type FieldValue,
+  isHlc,
+  isSyncEntity,
+  isUuid,
+  type Mutation,
+  type MutationResult,
+  SYNC_ENTITIES,
+  type SyncEntityName,
+} from '@wiretrail/core';
+import { type EntityManager, In, IsNull, Not } from 'typeorm';
+import { v7 as uuidv7 } from 'uuid';
+import type { Role } from '../users/entities/user.entity.js';
+import { User } from '../users/entities/user.entity.js';
+import { AppliedMutation, SyncChange, SyncCounter } from './entities/sync-bookkeeping.entity.js';
+import type { FieldMeta, SyncRecord } from './entities/sync-schemas.js';
+import { decideField, sameValue } from './merge.js';
+import { ScopeService, type TechnicianScope } from './scope.service.js';
+
+export interface Actor {
+  userId: string;
+  organisationId: string;
+  role: Role;
+  deviceId: string;
+}
+
+/** A mutation that can never succeed; it is refused alone and the batch goes on. */
+export class MutationRefused extends Error {}
+
+const BOOKKEEPING = new Set(['id', 'organisationId', 'version', 'fieldMeta', 'deletedAt', 'createdById', 'updatedById', 'createdAt', 'updatedAt']);
+
+/**
+ * Applies mutations to synced rows: exactly once, field by field, with the merge rules of merge.ts,
+ * the technician's write scope, and the lock on records behind an issued document.
+ * Pushes from devices and the office's own REST writes both come through here, so every change is
+ * numbered, tracked per field and pulled the same way.
+ */
+@Injectable()
+export class SyncEngine {
+  constructor(private readonly scopes: ScopeService) {}
+
+  /** Applies a device's mutations in order inside the caller's transaction. */
+  async applyAll(em: EntityManager, actor: Actor, mutations: Mutation[]): Promise<MutationResult[]> {
+    const scope = actor.role === 'technician' ? await this.scopes.technicianScope(em, actor.organisationId, actor.userId) : null;
+    const results: MutationResult[] = [];
+    for (const m of mutations) results.push(await this.applyOnce(em, actor, scope, m));
+    return results;
+  }
+
+  private async applyOnce(em: EntityManager, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
+    const mutationId = typeof m?.mutationId === 'string' ? m.mutationId : '';
+    const done = mutationId ? await em.findOneBy(AppliedMutation, { mutationId }) : null;
+    if (done) {
+      if (done.organisationId !== actor.organisationId) return { mutationId, status: 'rejected', error: 'mutationId was already used.' };
+      return done.result as unknown as MutationResult;
+    }
+    let result: MutationResult;
+    try {
+      result = await this.apply(em, actor, scope, m);
+    } catch (err) {
+      if (!(err instanceof MutationRefused)) throw err;
+      result = { mutationId, status: 'rejected', error: err.message };
+    }
+    if (mutationId) {
+      await em.insert(AppliedMutation, {
+        mutationId,
+        organisationId: actor.organisationId,
+        userId: actor.userId,
+        deviceId: actor.deviceId,
+        result: result as never,
+      });
+    }
+    return result;
+  }
+
+  private async apply(em: EntityManager, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
+    const { mutationId } = m;
+    if (typeof mutationId !== 'string' || mutationId.length < 8 || mutationId.length > 64) throw new MutationRefused('mutationId must be a unique id of 8 to 64 characters.');
+    if (!isSyncEntity(m.entity)) throw new MutationRefused(`entity must be one of the synced entities; got ${JSON.stringify(m.entity)}.`);
+    const spec = SYNC_ENTITIES[m.entity];
+    if (spec.serverOnly) throw new MutationRefused(`${m.entity} rows are made by the server only.`);
+    if (!isUuid(m.id)) throw new MutationRefused('id must be a UUID.');
+    if (!isHlc(m.hlc)) throw new MutationRefused('hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>.');
+    if (!Number.isInteger(m.baseVersion) || m.baseVersion < 0) throw new MutationRefused('baseVersion must be a whole number, 0 for a new row.');
+    const isDelete = m.delete === true;
+    const set = m.set ?? {};
+    if (!isDelete && (typeof set !== 'object' || Array.isArray(set) || Object.keys(set).length === 0)) {
+      throw new MutationRefused('A mutation needs set with at least one field, or delete: true.');
+    }
+    if (isDelete && m.set && Object.keys(m.set).length > 0) throw new MutationRefused('A mutation either sets fields or deletes, not both.');
+    for (const [field, value] of Object.entries(set)) {
+      if (BOOKKEEPING.has(field)) throw new MutationRefused(`${m.entity}.${field} is kept by the server and cannot be set.`);
+      const problem = fieldError(m.entity, field, value);
+      if (problem) throw new MutationRefused(problem);
+    }
+
+    const repo = em.getRepository<SyncRecord>(m.entity);
+    const existing = await repo.findOne({ where: { id: m.id }, withDeleted: true });
+    if (existing && existing.organisationId !== actor.organisationId) throw new MutationRefused(`No ${m.entity} with that id.`);
+
+    this.checkTechnician(actor, scope, spec, m, existing, set, isDelete);
+    await this.checkReferences(em, actor, spec, m.entity, set);
+
+    if (!existing) {
+      if (isDelete) return { mutationId, status: 'applied', version: 0, fieldVersions: {} };
+      return this.create(em, actor, spec, m, set);
+    }
+    if (await this.isLocked(em, spec, m.entity, existing, set)) return this.lockedToConflicts(em, actor, m, existing, set, isDelete);
+    if (isDelete) return this.remove(em, actor, m, existing);
+    return this.update(em, actor, spec, m, existing, set);
+  }
+
+  private async create(em: EntityManager, actor: Actor, spec: EntitySpec, m: Mutation, set: Record<string, FieldValue>): Promise<MutationResult> {
+    const missing = Object.entries(spec.fields).filter(([f, s]) => s.required && (set[f] === undefined || set[f] === null)).map(([f]) => `${m.entity}.${f}`);
+    if (missing.length) throw new MutationRefused(`A new ${m.entity} needs ${missing.join(', ')}.`);
+    const seq = await this.nextSeq(em);
+    const fieldMeta: Record<string, FieldMeta> = {};
+    for (const field of Object.keys(set)) fieldMeta[field] = { v: seq, hlc: m.hlc, by: actor.userId, role: actor.role };
+    const row = { id: m.id, organisationId: actor.organisationId, version: seq, fieldMeta, deletedAt: null, createdById: actor.userId, updatedById: actor.userId, ...set };
+    await em.getRepository<SyncRecord>(m.entity).insert(row as never);
+    await this.recordChange(em, m.entity, row as unknown as SyncRecord, seq);
+    return { mutationId: m.mutationId, status: 'applied', version: seq, fieldVersions: versionsOf(fieldMeta) };
+  }
+
+  private async update(em: EntityManager, actor: Actor, spec: EntitySpec, m: Mutation, row: SyncRecord, set: Record<string, FieldValue>): Promise<MutationResult> {
+    const changes: Record<string, unknown> = {};
+    const lost: Array<{ field: string; keptIncoming: boolean; reason: string }> = [];
+    for (const [field, value] of Object.entries(set)) {
+      const outcome = decideField(spec.fields[field]!, row[field], row.fieldMeta[field], {
+        value, hlc: m.hlc, userId: actor.userId, role: actor.role, baseVersion: m.baseVersion,
+      });
+      if (outcome.apply && !sameValue(row[field], value)) changes[field] = value;
+      else if (outcome.apply && !row.fieldMeta[field]) changes[field] = value;
+      if (outcome.conflict) lost.push({ field, keptIncoming: outcome.conflict.kept === 'incoming', reason: outcome.conflict.reason });
+    }
+    // A concurrent delete loses to an edit: the row comes back.
+    const revived = row.deletedAt !== null && Object.keys(changes).length > 0;
+    if (Object.keys(changes).length === 0 && lost.length === 0) {
+      return { mutationId: m.mutationId, status: 'applied', version: row.version, fieldVersions: versionsOf(row.fieldMeta) };
+    }
+    const seq = await this.nextSeq(em);
+    const conflictIds: string[] = [];
+    for (const l of lost) {
+      const incoming = { value: set[l.field], by: actor.userId, hlc: m.hlc, deviceId: actor.deviceId };
+      const current = { value: row[l.field], by: row.fieldMeta[l.field]?.by ?? null, hlc: row.fieldMeta[l.field]?.hlc ?? null, deviceId: null };
+      conflictIds.push(await this.writeConflict(em, actor, m.entity, row.id, l.field, l.reason, m.baseVersion, l.keptIncoming ? incoming : current, l.keptIncoming ? current : incoming));
+    }
+    const fieldMeta = { ...row.fieldMeta };
+    for (const field of Object.keys(changes)) fieldMeta[field] = { v: seq, hlc: m.hlc, by: actor.userId, role: actor.role };
+    const next = { ...changes, fieldMeta, version: seq, updatedById: actor.userId, ...(revived ? { deletedAt: null } : {}) };
+    await em.getRepository<SyncRecord>(m.entity).update({ id: row.id }, next as never);
+    await this.recordChange(em, m.entity, { ...row, ...next } as SyncRecord, seq);
+    return {
+      mutationId: m.mutationId,
+      status: lost.some((l) => !l.keptIncoming) ? 'merged' : 'applied',
+      version: seq,
+      fieldVersions: versionsOf(fieldMeta),
+      ...(conflictIds.length ? { conflictIds } : {}),
+    };
+  }
+
+  private async remove(em: EntityManager, actor: Actor, m: Mutation, row: SyncRecord): Promise<MutationResult> {
+    if (row.deletedAt) return { mutationId: m.mutationId, status: 'applied', version: row.version, fieldVersions: versionsOf(row.fieldMeta) };
+    const editedSince = Object.entries(row.fieldMeta).filter(([, meta]) => meta.v > m.baseVersion && meta.by !== actor.userId);
+    if (editedSince.length > 0) {
+      // Someone edited the row after this device last saw it: the edit wins and the delete is kept for review.
+      const seq = await this.nextSeq(em);
+      const id = await this.writeConflict(em, actor, m.entity, row.id, '*', 'edit-beats-delete', m.baseVersion,
+        { value: 'kept', by: editedSince[0]![1].by, hlc: editedSince[0]![1].hlc, deviceId: null },
+        { value: 'deleted', by: actor.userId, hlc: m.hlc, deviceId: actor.deviceId });
+      await em.getRepository<SyncRecord>(m.entity).update({ id: row.id }, { version: seq } as never);
+      await this.recordChange(em, m.entity, row, seq);
+      return { mutationId: m.mutationId, status: 'merged', version: seq, fieldVersions: versionsOf(row.fieldMeta), conflictIds: [id] };
+    }
+    const seq = await this.nextSeq(em);
+    await em.getRepository<SyncRecord>(m.entity).update({ id: row.id }, { deletedAt: new Date(), version: seq, updatedById: actor.userId } as never);
+    await this.recordChange(em, m.entity, row, seq, true);
+    return { mutationId: m.mutationId, status: 'applied', version: seq, fieldVersions: versionsOf(row.fieldMeta) };
+  }
+
+  /** A signed certificate's records do not change under it: every attempted change goes to the office as a conflict. */
+  private async lockedToConflicts(em: EntityManager, actor: Actor, m: Mutation, row: SyncRecord, set: Record<string, FieldValue>, isDelete: boolean): Promise<MutationResult> {
+    const conflictIds: string[] = [];
+    const entries: Array<[string, unknown]> = isDelete ? [['*', 'deleted']] : Object.entries(set).filter(([f, v]) => !sameValue(row[f], v));
+    for (const [field, value] of entries) {
+      const current = { value: field === '*' ? 'kept' : row[field], by: row.fieldMeta[field]?.by ?? null, hlc: row.fieldMeta[field]?.hlc ?? null, deviceId: null };
+      conflictIds.push(await this.writeConflict(em, actor, m.entity, row.id, field, 'locked-by-document', m.baseVersion, current, { value, by: actor.userId, hlc: m.hlc, deviceId: actor.deviceId }));
+    }
+    return { mutationId: m.mutationId, status: conflictIds.length ? 'merged' : 'applied', version: row.version, fieldVersions: versionsOf(row.fieldMeta), ...(conflictIds.length ? { conflictIds } : {}) };
+  }
+
+  private async writeConflict(
+    em: EntityManager, actor: Actor, entity: SyncEntityName, rowId: string, field: string, reason: string, baseVersion: number,
+    kept: { value: unknown; by: string | null; hlc: string | null; deviceId: string | null },
+    discarded: { value: unknown; by: string | null; hlc: string | null; deviceId: string | null },
+  ): Promise<string> {
+    const seq = await this.nextSeq(em);
+    const id = uuidv7();
+    const row = {
+      id, organisationId: actor.organisationId, version: seq, fieldMeta: {}, deletedAt: null, createdById: actor.userId, updatedById: actor.userId,
+      entity, rowId, field, reason, baseVersion,
+      keptValue: kept.value ?? null, keptById: kept.by, keptHlc: kept.hlc,
+      discardedValue: discarded.value ?? null, discardedById: discarded.by, discardedHlc: discarded.hlc, discardedDeviceId: discarded.deviceId,
+      resolvedAt: null, resolvedById: null, resolution: null,
+    };
+    await em.getRepository<SyncRecord>('conflict').insert(row as never);
+    await this.recordChange(em, 'conflict', row as unknown as SyncRecord, seq);
+    return id;
+  }
+
+  private checkTechnician(actor: Actor, scope: TechnicianScope | null, spec: EntitySpec, m: Mutation, existing: SyncRecord | null, set: Record<string, FieldValue>, isDelete: boolean): void {
+    if (!scope) return;
+    const refuse = (why: string) => {
+      throw new MutationRefused(why);
+    };
+    if (spec.technicianWrite === 'none') refuse(`A technician cannot change ${m.entity} records; the office can.`);
+    const officeFields = Object.keys(set).filter((f) => !spec.fields[f]?.technician);
+    if (officeFields.length) refuse(`${officeFields.map((f) => `${m.entity}.${f}`).join(', ')} can be changed by the office only.`);
+    if (isDelete && (spec.technicianWrite === 'assigned-visit' || spec.technicianWrite === 'site-row')) refuse(`A technician cannot delete a ${m.entity}.`);
+    switch (spec.technicianWrite) {
+      case 'assigned-visit':
+        if (!existing || !scope.visitIds.has(m.id)) refuse('That visit is not assigned to you.');
+        return;
+      case 'site-row':
+        if (!existing || !scope.siteIds.has(m.id)) refuse('That site is not one of your visits.');
+        return;
+      case 'visit': {
+        const visitId = (existing?.visitId ?? set.visitId) as string | undefined;
+        if (existing && set.visitId !== undefined && set.visitId !== existing.visitId) refuse(`A ${m.entity} cannot move to another visit.`);
+        if (!visitId || !scope.visitIds.has(visitId)) refuse('That visit is not assigned to you.');
+        const siteId = (set.siteId ?? existing?.siteId) as string | undefined;
+        if (siteId !== scope.visitSite.get(visitId!)) refuse(`${m.entity}.siteId must be the site of its visit.`);
+        return;
+      }
+      case 'site': {
+        const siteId = (existing?.siteId ?? set.siteId) as string | undefined;
+        if (existing && set.siteId !== undefined && set.siteId !== existing.siteId) refuse(`A ${m.entity} cannot move to another site.`);
+        if (!siteId || !scope.siteIds.has(siteId)) refuse('That site is not one of your visits.');
+        return;
+      }
+    }
+  }
+
+  /** Every id a row points at must be a row of the same organisation. */
+  private async checkReferences(em: EntityManager, actor: Actor, spec: EntitySpec, entity: SyncEntityName, set: Record<string, FieldValue>): Promise<void> {
+    for (const [field, value] of Object.entries(set)) {
+      const type = spec.fields[field]!.type;
+      if (value === null || (type.kind !== 'ref' && type.kind !== 'refs')) continue;
+      const ids = type.kind === 'ref' ? [value as string] : (value as string[]);
+      if (ids.length === 0) continue;
+      const found =
+        type.entity === 'user'
+          ? await em.countBy(User, { id: In(ids), organisationId: actor.organisationId })
+          : await em.getRepository<SyncRecord>(type.entity).countBy({ id: In(ids), organisationId: actor.organisationId, deletedAt: IsNull() });
+      if (found !== new Set(ids).size) throw new MutationRefused(`${entity}.${field} points at a ${type.entity} that does not exist.`);
+    }
+  }
+
+  /** Records behind an issued certificate or report: the rows of that job's visits, and the issued document itself. */
+  private async isLocked(em: EntityManager, spec: EntitySpec, entity: SyncEntityName, row: SyncRecord, set: Record<string, FieldValue>): Promise<boolean> {
+    if (entity === 'document') return row.issuedAt != null && Object.keys(set).some((f) => f !== 'emailedAt');
+    if (!spec.visitField) return false;
+    const visitId = (spec.visitField === 'id' ? row.id : row.visitId) as string | null;
+    if (!visitId) return false;
+    const visit = await em.getRepository<SyncRecord>('visit').findOne({ where: { id: visitId }, withDeleted: true });
+    if (!visit?.jobId) return false;
+    return (await em.getRepository<SyncRecord>('document').countBy({ jobId: visit.jobId as string, issuedAt: Not(IsNull()), deletedAt: IsNull() })) > 0;
+  }
+
+  /** Changes a row the server owns (a conflict's resolution) and numbers the change so devices pull it. */
+  async updateServerRow(em: EntityManager, entity: SyncEntityName, row: SyncRecord, changes: Record<string, unknown>, actor: Actor): Promise<number> {
+    const seq = await this.nextSeq(em);
+    const next = { ...changes, version: seq, updatedById: actor.userId };
+    await em.getRepository<SyncRecord>(entity).update({ id: row.id }, next as never);
+    await this.recordChange(em, entity, { ...row, ...next } as SyncRecord, seq);
+    return seq;
+  }
+
+  async nextSeq(em: EntityManager): Promise<number> {
+    const updated = await em.update(SyncCounter, { name: 'global' }, { value: () => 'value + 1' });
+    if (!updated.affected) await em.insert(SyncCounter, { name: 'global', value: 1 });
+    return (await em.findOneByOrFail(SyncCounter, { name: 'global' })).value;
+  }
+
+  private async recordChange(em: EntityManager, entity: SyncEntityName, row: SyncRecord, seq: number, deleted = false): Promise<void> {
+    const spec = SYNC_ENTITIES[entity];
+    const siteId = spec.siteField === 'id' ? row.id : spec.siteField === 'siteId' ? ((row.siteId as string) ?? null) : null;
+    await em.upsert(SyncChange, { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted }, ['entity', 'rowId']);
+  }
+}
+
+export function versionsOf(meta: Record<string, FieldMeta>): Record<string, number> {
+  return Object.fromEntries(Object.entries(meta).map(([f, m]) => [f, m.v]));
+}

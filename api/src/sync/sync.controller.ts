@@ -1,0 +1,26 @@
+import { Body, Controller, Get, HttpCode, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { AnyRole } from '../common/decorators/roles.decorator.js';
+import { PullQueryDto } from './dto/pull-query.dto.js';
+import { PushDto } from './dto/push.dto.js';
+import { SyncService } from './sync.service.js';
+
+@ApiTags('sync')
+@ApiBearerAuth()
+@AnyRole()
+@Controller('sync')
+export class SyncController {
+  constructor(private readonly sync: SyncService) {}
+
+  @Post('push')
+  @HttpCode(200)
+  push(@CurrentUser() user: AuthUser, @Body() dto: PushDto) {
+    return this.sync.push(user, dto.deviceId, dto.mutations);
+  }
+
+  @Get('pull')
+  pull(@CurrentUser() user: AuthUser, @Query() q: PullQueryDto) {
+    return this.sync.pull(user, q.deviceId, q.checkpoint, q.limit);
+  }
+}

@@ -1,0 +1,20 @@
+import { Global, Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { WriteQueue } from '../common/write-queue.js';
+import { User } from '../users/entities/user.entity.js';
+import { SYNC_BOOKKEEPING } from './entities/sync-bookkeeping.entity.js';
+import { ALL_SYNC_SCHEMAS } from './entities/sync-schemas.js';
+import { ScopeService } from './scope.service.js';
+import { SyncController } from './sync.controller.js';
+import { SyncEngine } from './sync-engine.service.js';
+import { SyncService } from './sync.service.js';
+
+/** Global so that every feature writing synced rows shares the one write queue and engine. */
+@Global()
+@Module({
+  imports: [TypeOrmModule.forFeature([...ALL_SYNC_SCHEMAS, ...SYNC_BOOKKEEPING, User])],
+  controllers: [SyncController],
+  providers: [WriteQueue, SyncEngine, SyncService, ScopeService],
+  exports: [WriteQueue, SyncEngine, SyncService, ScopeService],
+})
+export class SyncModule {}

@@ -1,0 +1,148 @@
+import { Injectable, PayloadTooLargeException } from '@nestjs/common';
+import {
+  type Change,
+  MAX_PULL_LIMIT,
+  MAX_PUSH_MUTATIONS,
+  type Mutation,
+  type PullResponse,
+  type PushResponse,
+  SYNC_ENTITIES,
+  type SyncEntityName,
+  type SyncedRow,
+} from '@wiretrail/core';
+import { type EntityManager, In } from 'typeorm';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { WriteQueue } from '../common/write-queue.js';
+import { SyncChange, SyncDevice } from './entities/sync-bookkeeping.entity.js';
+import type { SyncRecord } from './entities/sync-schemas.js';
+import { ScopeService } from './scope.service.js';
+import { SyncEngine, versionsOf } from './sync-engine.service.js';
+
+const HIDDEN = new Set(['organisationId', 'fieldMeta', 'deletedAt']);
+
+/** The row as a device sees it: its fields, version and per-field versions, none of the server's bookkeeping. */
+export function toSyncedRow(row: SyncRecord): SyncedRow {
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(row)) if (!HIDDEN.has(k)) out[k] = v instanceof Date ? v.toISOString() : v;
+  return { ...out, id: row.id, version: row.version, fieldVersions: versionsOf(row.fieldMeta ?? {}) } as SyncedRow;
+}
+
+@Injectable()
+export class SyncService {
+  constructor(
+    private readonly queue: WriteQueue,
+    private readonly engine: SyncEngine,
+    private readonly scopes: ScopeService,
+  ) {}
+
+  async push(user: AuthUser, deviceId: string, mutations: Mutation[]): Promise<PushResponse> {
+    if (mutations.length > MAX_PUSH_MUTATIONS) {
+      throw new PayloadTooLargeException(`A push carries at most ${MAX_PUSH_MUTATIONS} mutations; send the rest in another batch.`);
+    }
+    const actor = { userId: user.id, organisationId: user.organisationId, role: user.role, deviceId };
+    const results = await this.queue.run((em) => this.engine.applyAll(em, actor, mutations));
+    return { results };
+  }
+
+  /**
+   * Changes after the checkpoint that this user may see, in server order. Scope is worked out afresh each time:
+   * sites that entered it since the checkpoint arrive whole, sites that left it arrive as deletions.
+   */
+  async pull(user: AuthUser, deviceId: string, checkpoint: number, limit: number): Promise<PullResponse> {
+    return this.queue.run(async (em) => {
+      const take = Math.min(Math.max(limit, 1), MAX_PULL_LIMIT);
+      const device = await em.findOneBy(SyncDevice, { deviceId });
+      const isTechnician = user.role === 'technician';
+      const scope = isTechnician ? await this.scopes.technicianScope(em, user.organisationId, user.id) : null;
+      const sitesNow = scope ? [...scope.siteIds].sort() : null;
+
+      let sitesThen: string[] | null = sitesNow;
+      if (checkpoint > 0) {
+        const known = device && device.userId === user.id && device.organisationId === user.organisationId;
+        if (known && checkpoint === device.checkpoint) sitesThen = device.scope;
+        else if (known && checkpoint === device.previousCheckpoint) sitesThen = device.previousScope;
+        else return { changes: [], checkpoint: 0, hasMore: true, reset: true };
+      }
+
+      const qb = em
+        .getRepository(SyncChange)
+        .createQueryBuilder('c')
+        .where('c.organisationId = :org', { org: user.organisationId })
+        .andWhere('c.seq > :checkpoint', { checkpoint })
+        .orderBy('c.seq', 'ASC')
+        .take(take);
+      if (scope) {
+        const visible = Object.values(SYNC_ENTITIES).filter((s) => s.technicianVisible && s.siteField).map((s) => s.name);
+        qb.andWhere('((c.entity IN (:...visible) AND c.siteId IN (:...sites)) OR (c.entity = :customer AND c.rowId IN (:...customers)))', {
+          visible,
+          sites: sitesNow!.length ? sitesNow : [''],
+          customer: 'customer',
+          customers: scope.customerIds.size ? [...scope.customerIds] : [''],
+        });
+      }
+      const page = await qb.getMany();
+      const hasMore = page.length === take;
+      const next = page.length ? page[page.length - 1]!.seq : checkpoint;
+
+      const extra: SyncChange[] = [];
+      if (scope && checkpoint > 0) {
+        const then = new Set(sitesThen ?? []);
+        const gained = sitesNow!.filter((s) => !then.has(s));
+        const lost = [...then].filter((s) => !scope.siteIds.has(s));
+        const customersThen = await this.scopes.customersOfSites(em, user.organisationId, [...then]);
+        if (gained.length) {
+          const newCustomers = [...scope.customerIds].filter((c) => !customersThen.has(c));
+          extra.push(...(await em.find(SyncChange, { where: { organisationId: user.organisationId, siteId: In(gained), deleted: false } })));
+          if (newCustomers.length) extra.push(...(await em.find(SyncChange, { where: { entity: 'customer', rowId: In(newCustomers) } })));
+        }
+        if (lost.length) {
+          const evicted = await em.find(SyncChange, { where: { organisationId: user.organisationId, siteId: In(lost) } });
+          const goneCustomers = [...customersThen].filter((c) => !scope.customerIds.has(c));
+          evicted.push(...(await em.find(SyncChange, { where: { entity: 'customer', rowId: In(goneCustomers) } })));
+          extra.push(...evicted.map((c) => Object.assign(new SyncChange(), c, { deleted: true, evict: true })));
+        }
+      }
+
+      const changes = await this.materialise(em, [...extra.filter((c) => c.seq <= next || (c as { evict?: boolean }).evict), ...page]);
+      await this.rememberDevice(em, user, deviceId, checkpoint, sitesThen, next, sitesNow);
+      return { changes, checkpoint: next, hasMore };
+    });
+  }
+
+  private async materialise(em: EntityManager, entries: SyncChange[]): Promise<Change[]> {
+    const byEntity = new Map<string, string[]>();
+    for (const c of entries) if (!c.deleted) byEntity.set(c.entity, [...(byEntity.get(c.entity) ?? []), c.rowId]);
+    const rows = new Map<string, SyncRecord>();
+    for (const [entity, ids] of byEntity) {
+      for (const r of await em.getRepository<SyncRecord>(entity).find({ where: { id: In(ids) }, withDeleted: true })) rows.set(`${entity}:${r.id}`, r);
+    }
+    const seen = new Set<string>();
+    const out: Change[] = [];
+    // Later entries for the same row supersede earlier ones (an eviction after a catch-up, say).
+    for (const c of [...entries].reverse()) {
+      const key = `${c.entity}:${c.rowId}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      const row = c.deleted ? null : (rows.get(key) ?? null);
+      const deleted = c.deleted || !row || row.deletedAt !== null;
+      out.push({ entity: c.entity as SyncEntityName, id: c.rowId, version: row?.version ?? c.seq, deleted, row: deleted ? null : toSyncedRow(row!) });
+    }
+    return out.reverse();
+  }
+
+  private async rememberDevice(
+    em: EntityManager, user: AuthUser, deviceId: string,
+    checkpoint: number, sitesThen: string[] | null, next: number, sitesNow: string[] | null,
+  ): Promise<void> {
+    await em.save(SyncDevice, {
+      deviceId,
+      organisationId: user.organisationId,
+      userId: user.id,
+      checkpoint: next,
+      scope: sitesNow,
+      previousCheckpoint: checkpoint,
+      previousScope: sitesThen,
+      lastPullAt: new Date(),
+    });
+  }
+}
