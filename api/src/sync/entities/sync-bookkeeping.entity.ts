@@ -77,7 +77,8 @@ export class SyncDevice {
   @Column({ type: 'integer', default: 0 })
   checkpoint: number;
 
-  @Column({ type: 'simple-json' })
+  /** Site ids; null for office and admin, who see the whole organisation. */
+  @Column({ type: 'simple-json', nullable: true })
   scope: string[] | null;
 
   @Column({ type: 'integer', nullable: true })
