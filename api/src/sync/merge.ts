@@ -1,4 +1,4 @@
-import { compareHlc, type FieldSpec } from '@wiretrail/core';
+import { compareHlc, type FieldSpec, parseHlc } from '@wiretrail/core';
 import type { FieldMeta } from './entities/sync-schemas.js';
 
 const RANK: Record<string, number> = { technician: 1, office: 2, admin: 3 };
@@ -23,7 +23,8 @@ export function sameValue(a: unknown, b: unknown): boolean {
 
 /**
  * Decides one field of a push against what the server holds. The rules, in order:
- * 1. Nobody else wrote the field since the device's base version: apply it.
+ * 1. Nobody else wrote the field since the device's base version (or the same device did, earlier in its own
+ *    sequence): apply it.
  * 2. Someone did, but the values agree: apply (nothing is lost).
  * 3. Observed fields (readings, statuses, answers): the later hybrid logical clock wins; ties are already broken
  *    by the device id inside the clock string.
@@ -33,7 +34,7 @@ export function sameValue(a: unknown, b: unknown): boolean {
  * Whenever a different value is not kept, the caller stores it in a Conflict row.
  */
 export function decideField(spec: FieldSpec, current: unknown, meta: FieldMeta | undefined, incoming: Incoming): FieldOutcome {
-  if (!meta || meta.v <= incoming.baseVersion) return { apply: true };
+  if (!meta || meta.v <= incoming.baseVersion || sameDevice(meta.hlc, incoming.hlc)) return { apply: true };
   if (sameValue(current, incoming.value)) return { apply: true };
   if (spec.policy === 'observed') {
     return compareHlc(incoming.hlc, meta.hlc) > 0
@@ -46,4 +47,11 @@ export function decideField(spec: FieldSpec, current: unknown, meta: FieldMeta |
   return wins
     ? { apply: true, conflict: { kept: 'incoming', reason: 'office-owned' } }
     : { apply: false, conflict: { kept: 'current', reason: 'office-owned' } };
+}
+
+/** Two clocks from one device: its changes are already in order, never concurrent with each other. */
+export function sameDevice(a: string, b: string): boolean {
+  const x = parseHlc(a);
+  const y = parseHlc(b);
+  return !!x && !!y && x.deviceId === y.deviceId;
 }

@@ -17,7 +17,7 @@ import type { Role } from '../users/entities/user.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { AppliedMutation, SyncChange, SyncCounter } from './entities/sync-bookkeeping.entity.js';
 import type { FieldMeta, SyncRecord } from './entities/sync-schemas.js';
-import { decideField, sameValue } from './merge.js';
+import { decideField, sameDevice, sameValue } from './merge.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
 
 export interface Actor {
@@ -164,7 +164,7 @@ export class SyncEngine {
 
   private async remove(em: EntityManager, actor: Actor, m: Mutation, row: SyncRecord): Promise<MutationResult> {
     if (row.deletedAt) return { mutationId: m.mutationId, status: 'applied', version: row.version, fieldVersions: versionsOf(row.fieldMeta) };
-    const editedSince = Object.entries(row.fieldMeta).filter(([, meta]) => meta.v > m.baseVersion && meta.by !== actor.userId);
+    const editedSince = Object.entries(row.fieldMeta).filter(([, meta]) => meta.v > m.baseVersion && !sameDevice(meta.hlc, m.hlc));
     if (editedSince.length > 0) {
       // Someone edited the row after this device last saw it: the edit wins and the delete is kept for review.
       const seq = await this.nextSeq(em);
