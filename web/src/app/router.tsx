@@ -2,11 +2,11 @@ import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { RouteError } from '@/components/errors/route-error';
 import { OfficeLayout } from '@/components/layouts/office-layout';
 import { HomeRedirect, RequireRole, RequireSession } from '@/components/layouts/session-gate';
-import { TechnicianLayout } from '@/components/layouts/technician-layout';
 import { paths } from '@/config/paths';
 
 const technicianScreens: RouteObject[] = [
   { path: paths.today.path, lazy: () => import('./routes/technician/today') },
+  { path: paths.visit.path, lazy: () => import('./routes/technician/visit') },
   { path: paths.sync.path, lazy: () => import('./routes/technician/sync') },
   { path: paths.me.path, lazy: () => import('./routes/technician/me') },
 ];
@@ -37,7 +37,8 @@ export const routes: RouteObject[] = [
           { index: true, element: <HomeRedirect /> },
           {
             element: <RequireRole roles={['technician']} />,
-            children: [{ element: <TechnicianLayout />, children: technicianScreens }],
+            // The technician's shell brings the local database and sync with it, so it loads on demand too.
+            children: [{ lazy: () => import('@/components/layouts/technician-layout'), children: technicianScreens }],
           },
           {
             element: <RequireRole roles={['office', 'admin']} />,

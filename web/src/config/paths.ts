@@ -5,6 +5,7 @@ export const paths = {
   signIn: { path: '/sign-in', href: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in') },
   home: { path: '/' },
   today: { path: '/today', label: 'Today' },
+  visit: { path: '/visits/:visitId', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}` },
   sync: { path: '/sync', label: 'Sync' },
   me: { path: '/me', label: 'Me' },
   jobs: { path: '/jobs', label: 'Jobs' },

@@ -7,10 +7,13 @@ import BottomNavigationAction from '@mui/material/BottomNavigationAction';
 import Box from '@mui/material/Box';
 import Paper from '@mui/material/Paper';
 import Toolbar from '@mui/material/Toolbar';
+import { useEffect } from 'react';
 import { Link as RouterLink, Outlet, useLocation } from 'react-router-dom';
 import { paths } from '@/config/paths';
-import { ConnectionChip } from '../connection-chip';
+import { useSession } from '@/lib/session';
+import { startSync } from '@/lib/sync/sync-runner';
 import { Logo } from '../logo';
+import { SyncStatusChip } from '../sync-status-chip';
 
 const TABS = [
   { ...paths.today, icon: <TodayOutlined /> },
@@ -18,16 +21,20 @@ const TABS = [
   { ...paths.me, icon: <AccountCircleOutlined /> },
 ];
 
-/** Phone first: the thumb reaches the bottom bar; the connection state is always in view. */
+/** Phone first: the thumb reaches the bottom bar; what has reached the office is always in view. */
 export function TechnicianLayout() {
   const { pathname } = useLocation();
-  const current = TABS.find((t) => pathname.startsWith(t.path))?.path ?? false;
+  const userId = useSession()?.user.id;
+  // Sync runs while someone is signed in; signing out unmounts this layout and stops it (the outbox stays).
+  useEffect(() => (userId ? startSync(userId) : undefined), [userId]);
+  // A visit is opened from Today, so Today stays lit while it is open.
+  const current = pathname.startsWith('/visits/') ? paths.today.path : (TABS.find((t) => pathname.startsWith(t.path))?.path ?? false);
   return (
     <Box sx={{ minHeight: '100dvh', display: 'flex', flexDirection: 'column', bgcolor: 'background.default' }}>
       <AppBar position="sticky" color="primary" elevation={0}>
         <Toolbar sx={{ justifyContent: 'space-between', gap: 1 }}>
           <Logo size={30} />
-          <ConnectionChip />
+          <SyncStatusChip />
         </Toolbar>
       </AppBar>
       <Box component="main" sx={{ flex: 1, px: 2, pt: 2, pb: 12 }}>
@@ -43,3 +50,5 @@ export function TechnicianLayout() {
     </Box>
   );
 }
+
+export { TechnicianLayout as Component };

@@ -1,11 +1,17 @@
+import CloudSyncOutlined from '@mui/icons-material/CloudSyncOutlined';
 import Alert from '@mui/material/Alert';
+import Button from '@mui/material/Button';
 import List from '@mui/material/List';
 import ListItem from '@mui/material/ListItem';
 import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
 import { useEffect, useState } from 'react';
-import { useOnline } from '@/components/connection-chip';
 import { PageHeader } from '@/components/page-header';
+import { FailedChanges } from '@/features/sync/components/failed-changes';
+import { useSession } from '@/lib/session';
+import { syncNow } from '@/lib/sync/sync-runner';
+import { useSyncStatus } from '@/lib/sync/use-sync-status';
 
 interface StorageState {
   usedMb: number | null;
@@ -13,7 +19,7 @@ interface StorageState {
   persisted: boolean | null;
 }
 
-function useStorageState(): StorageState {
+function useStorageState(refreshKey: unknown): StorageState {
   const [state, setState] = useState<StorageState>({ usedMb: null, quotaMb: null, persisted: null });
   useEffect(() => {
     let live = true;
@@ -31,43 +37,101 @@ function useStorageState(): StorageState {
     return () => {
       live = false;
     };
-  }, []);
+  }, [refreshKey]);
   return state;
 }
 
 const mb = (v: number | null) => (v == null ? 'unknown' : v < 10 ? `${v.toFixed(1)} MB` : `${Math.round(v)} MB`);
+const when = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
+
+function ago(iso: string, now: number): string {
+  const minutes = Math.round((now - Date.parse(iso)) / 60_000);
+  if (minutes < 1) return 'just now';
+  if (minutes < 60) return `${minutes} min ago`;
+  const hours = Math.round(minutes / 60);
+  return hours < 48 ? `${hours} h ago` : `${Math.round(hours / 24)} days ago`;
+}
+
+function waitingWords(n: number): string {
+  return n === 0 ? 'Nothing waiting' : n === 1 ? '1 change waiting to send' : `${n} changes waiting to send`;
+}
 
 export function Component() {
-  const online = useOnline();
-  const storage = useStorageState();
+  const session = useSession();
+  const status = useSyncStatus();
+  const storage = useStorageState(status.lastSyncAt);
+  const [now, setNow] = useState(() => Date.now());
+  useEffect(() => {
+    const t = setInterval(() => setNow(Date.now()), 30_000);
+    return () => clearInterval(t);
+  }, []);
+
   return (
     <>
       <PageHeader title="Sync" subtitle="What this phone holds, and what is waiting to reach the office." />
-      {online ? (
-        <Alert severity="success" sx={{ mb: 2 }}>
-          Connected. Nothing is waiting to send.
-        </Alert>
-      ) : (
+      {!status.online ? (
         <Alert severity="warning" sx={{ mb: 2 }}>
           No signal. Everything you record is kept on this phone and sent when the connection returns.
+          {status.pending > 0 ? ` ${waitingWords(status.pending)}.` : ''}
         </Alert>
-      )}
-      <Paper variant="outlined">
-        <List>
-          <ListItem>
-            <ListItemText primary="Changes waiting" secondary="0" />
-          </ListItem>
-          <ListItem>
-            <ListItemText primary="Storage used on this phone" secondary={`${mb(storage.usedMb)} of ${mb(storage.quotaMb)}`} />
-          </ListItem>
-          <ListItem>
-            <ListItemText
-              primary="Protected from clean-up by the browser"
-              secondary={storage.persisted == null ? 'unknown' : storage.persisted ? 'Yes' : 'Not yet'}
-            />
-          </ListItem>
-        </List>
-      </Paper>
+      ) : status.syncing ? (
+        <Alert severity="info" sx={{ mb: 2 }}>
+          Sending and fetching…
+        </Alert>
+      ) : status.lastError ? (
+        <Alert severity="warning" sx={{ mb: 2 }}>
+          {status.lastError}
+        </Alert>
+      ) : status.pending > 0 ? (
+        <Alert severity="info" sx={{ mb: 2 }}>
+          {waitingWords(status.pending)}. They go out on their own in a moment, or tap Sync now.
+        </Alert>
+      ) : status.lastSyncAt ? (
+        <Alert severity="success" sx={{ mb: 2 }}>
+          Up to date. Nothing is waiting to send.
+        </Alert>
+      ) : null}
+      <Stack spacing={2}>
+        <Button
+          variant="contained"
+          size="large"
+          startIcon={<CloudSyncOutlined />}
+          disabled={!status.online || status.syncing}
+          onClick={() => void syncNow()}
+          sx={{ minHeight: 56 }}
+        >
+          {status.syncing ? 'Syncing…' : 'Sync now'}
+        </Button>
+        {session && <FailedChanges userId={session.user.id} />}
+        <Paper variant="outlined">
+          <List>
+            <ListItem>
+              <ListItemText primary="Changes waiting" secondary={status.ready ? waitingWords(status.pending) : '…'} />
+            </ListItem>
+            <ListItem>
+              <ListItemText
+                primary="Last successful sync"
+                secondary={status.lastSyncAt ? `${when.format(new Date(status.lastSyncAt))} (${ago(status.lastSyncAt, now)})` : 'Not yet on this phone'}
+              />
+            </ListItem>
+            <ListItem>
+              <ListItemText primary="Storage used on this phone" secondary={`${mb(storage.usedMb)} of ${mb(storage.quotaMb)}`} />
+            </ListItem>
+            <ListItem>
+              <ListItemText
+                primary="Protected from clean-up by the browser"
+                secondary={
+                  storage.persisted == null
+                    ? 'unknown'
+                    : storage.persisted
+                      ? 'Yes'
+                      : 'Not granted. Add Wiretrail to the home screen and open it daily so the browser keeps its records.'
+                }
+              />
+            </ListItem>
+          </List>
+        </Paper>
+      </Stack>
     </>
   );
 }

@@ -1,0 +1,103 @@
+import type { APIRequestContext } from '@playwright/test';
+import { expect, PHONE, test } from '../fixtures.js';
+import { DEMO_PASSWORD } from '../pages/sign-in-page.js';
+
+test.use({ viewport: PHONE });
+
+interface PulledChange {
+  entity: string;
+  id: string;
+  deleted: boolean;
+  row: Record<string, unknown> | null;
+}
+
+/** Everything the office can see, read the way any device reads it: pull from the start until there is no more. */
+async function officeRows(request: APIRequestContext): Promise<PulledChange[]> {
+  const signIn = await request.post('/api/auth/sign-in', { data: { email: 'office@larkfield.example', password: DEMO_PASSWORD } });
+  expect(signIn.ok()).toBe(true);
+  const { accessToken } = (await signIn.json()) as { accessToken: string };
+  const deviceId = `office-e2e-${Date.now()}`;
+  const changes: PulledChange[] = [];
+  let checkpoint = 0;
+  for (;;) {
+    const res = await request.get(`/api/sync/pull?checkpoint=${checkpoint}&limit=1000&deviceId=${deviceId}`, {
+      headers: { authorization: `Bearer ${accessToken}` },
+    });
+    expect(res.ok()).toBe(true);
+    const page = (await res.json()) as { changes: PulledChange[]; checkpoint: number; hasMore: boolean };
+    changes.push(...page.changes);
+    checkpoint = page.checkpoint;
+    if (!page.hasMore) return changes;
+  }
+}
+
+test('a technician records a note and a circuit with no signal, and the office gets them once the phone is back online', async ({
+  page,
+  context,
+  request,
+  signInPage,
+}) => {
+  test.setTimeout(90_000);
+  const stamp = Date.now().toString(36);
+  const noteText = `Lounge sockets moved; ring continuity checked before boxing in (${stamp})`;
+  const circuitNumber = `E${stamp.slice(-6)}`;
+  const circuitDescription = `Fused spur for the electric fire (${stamp})`;
+
+  await signInPage.goto();
+  await signInPage.signIn('tech1@larkfield.example');
+  await expect(page.getByRole('heading', { name: 'Today', level: 1 })).toBeVisible();
+  await page.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+    if (!navigator.serviceWorker.controller) {
+      await new Promise<void>((resolve) => navigator.serviceWorker.addEventListener('controllerchange', () => resolve(), { once: true }));
+    }
+  });
+  // The first sync brings the technician's visits onto the phone.
+  await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
+  const visit = page.getByRole('region', { name: 'My visits' }).getByRole('link', { name: /Move two lounge sockets/ });
+  await visit.click();
+  await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
+  const visitId = page.url().split('/').pop()!;
+  await expect(page.getByRole('heading', { level: 1, name: /Move two lounge sockets/ })).toBeVisible();
+  await expect(page.getByText(/prove dead/)).toBeVisible();
+
+  await context.setOffline(true);
+  await expect(page.getByText('No signal — saving on this phone')).toBeVisible();
+
+  await page.getByLabel('Note', { exact: true }).fill(noteText);
+  await page.getByRole('button', { name: 'Add note' }).click();
+  await expect(page.getByRole('list', { name: 'Notes on this visit' }).getByText(noteText)).toBeVisible();
+
+  const circuitForm = page.getByRole('form', { name: 'Add a circuit' });
+  await expect(circuitForm.getByLabel('Board', { exact: true })).toHaveValue(/[0-9a-f-]{36}/);
+  await circuitForm.getByLabel('Circuit number', { exact: true }).fill(circuitNumber);
+  await circuitForm.getByLabel('Description', { exact: true }).fill(circuitDescription);
+  await circuitForm.getByLabel('Kind', { exact: true }).selectOption('radial');
+  await circuitForm.getByRole('button', { name: 'Add circuit' }).click();
+  const circuits = page.getByRole('list', { name: 'Circuits on this site' });
+  await expect(circuits.getByText(`${circuitNumber} · ${circuitDescription}`)).toBeVisible();
+
+  await expect(page.getByText('No signal — saving on this phone · 2 waiting')).toBeVisible();
+
+  // Reloaded with no network: the service worker serves the app, the records come from the phone.
+  await page.reload();
+  await expect(page.getByRole('heading', { level: 1, name: /Move two lounge sockets/ })).toBeVisible();
+  await expect(page.getByText(noteText)).toBeVisible();
+  await expect(page.getByText(`${circuitNumber} · ${circuitDescription}`)).toBeVisible();
+  await expect(page.getByText('No signal — saving on this phone · 2 waiting')).toBeVisible();
+
+  await context.setOffline(false);
+  await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Sync' }).click();
+  await expect(page.getByRole('heading', { name: 'Sync', level: 1 })).toBeVisible();
+  await expect(page.getByText('Nothing waiting')).toBeVisible();
+
+  // The office sees exactly one of each, as typed.
+  const rows = await officeRows(request);
+  const notes = rows.filter((c) => c.entity === 'note' && !c.deleted && c.row?.text === noteText);
+  expect(notes).toHaveLength(1);
+  expect(notes[0]!.row).toMatchObject({ visitId, text: noteText });
+  const added = rows.filter((c) => c.entity === 'circuit' && !c.deleted && c.row?.number === circuitNumber);
+  expect(added).toHaveLength(1);
+  expect(added[0]!.row).toMatchObject({ description: circuitDescription, kind: 'radial', siteId: notes[0]!.row!.siteId });
+});
