@@ -40,8 +40,14 @@ class DeviceModel {
     return formatHlc(this.clock);
   }
 
+  /**
+   * While a row has unsent changes, what the user sees rests on the base of the first of them; later pulls
+   * update the shadow underneath, but the screen kept showing the unsent values. Claiming the newer base would
+   * let this device overwrite values its user never saw.
+   */
   private baseVersion(key: Key): number {
-    return this.shadow.get(key)?.version ?? 0;
+    const pending = this.outbox.find((m) => `${m.entity}:${m.id}` === key);
+    return pending ? pending.baseVersion : (this.shadow.get(key)?.version ?? 0);
   }
 
   edit(key: Key, field: string, value: unknown): void {
@@ -81,9 +87,11 @@ class DeviceModel {
       const key = `${m!.entity}:${m!.id}`;
       const shadow = this.shadow.get(key);
       // Applied as sent: the server now holds it, unless a pull already brought a newer state of the row.
+      // The base version stays the one last pulled: the reply's version may include other devices' changes
+      // that this device has not seen, and claiming it would hide them from the merge.
       if (r.status === 'applied' && r.version !== undefined && (!shadow || shadow.version <= r.version)) {
         if (m!.delete) this.shadow.delete(key);
-        else if (shadow) this.shadow.set(key, { ...shadow, fields: { ...shadow.fields, ...m!.set }, version: r.version });
+        else if (shadow) this.shadow.set(key, { ...shadow, fields: { ...shadow.fields, ...m!.set } });
       }
       this.refresh(key);
     }
