@@ -4,6 +4,13 @@ import { APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { resolve } from 'node:path';
+import { AreasModule } from './areas/areas.module.js';
+import { BoardsModule } from './boards/boards.module.js';
+import { CircuitsModule } from './circuits/circuits.module.js';
+import { CustomersModule } from './customers/customers.module.js';
+import { JobsModule } from './jobs/jobs.module.js';
+import { SitesModule } from './sites/sites.module.js';
+import { VisitsModule } from './visits/visits.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
@@ -60,6 +67,13 @@ function webAppModules(): DynamicModule[] {
     HealthModule,
     SyncModule,
     ConflictsModule,
+    CustomersModule,
+    SitesModule,
+    AreasModule,
+    BoardsModule,
+    CircuitsModule,
+    JobsModule,
+    VisitsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

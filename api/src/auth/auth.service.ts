@@ -3,8 +3,9 @@ import type { ConfigType } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
 import { InjectRepository } from '@nestjs/typeorm';
 import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
-import { IsNull, Repository } from 'typeorm';
+import { type EntityManager, IsNull, Repository } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
+import { WriteQueue } from '../common/write-queue.js';
 import { authConfig } from '../config/app.config.js';
 import { type PublicUser, toPublicUser, User } from '../users/entities/user.entity.js';
 import { RefreshToken } from './entities/refresh-token.entity.js';
@@ -27,8 +28,8 @@ export class AuthService {
   constructor(
     @Inject(authConfig.KEY) private readonly config: ConfigType<typeof authConfig>,
     @InjectRepository(User) private readonly users: Repository<User>,
-    @InjectRepository(RefreshToken) private readonly tokens: Repository<RefreshToken>,
     private readonly jwt: JwtService,
+    private readonly queue: WriteQueue,
   ) {}
 
   async signIn(email: string, password: string, userAgent?: string): Promise<SessionTokens> {
@@ -39,56 +40,56 @@ export class AuthService {
     // Hash even when the e-mail is unknown, so the answer takes as long either way.
     const ok = await verifyPassword(password, user?.passwordHash ?? (await decoyHash()));
     if (!user || !ok || !user.active) throw new UnauthorizedException(BAD_CREDENTIALS);
-    await this.users.update({ id: user.id }, { lastSignInAt: new Date() });
-    return this.issue(user, uuidv7(), userAgent);
+    return this.queue.run(async (em) => {
+      await em.update(User, { id: user.id }, { lastSignInAt: new Date() });
+      return this.issue(em, user, uuidv7(), userAgent);
+    });
   }
 
   async refresh(presented: string, userAgent?: string): Promise<SessionTokens> {
+    // In the write queue: two refreshes racing with one token see each other's rotation. A refusal comes back
+    // as null rather than an exception, so that a revocation made on the way (reuse detected) is committed.
+    const session = await this.queue.run((em) => this.rotate(em, presented, userAgent));
+    if (!session) throw new UnauthorizedException(SESSION_ENDED);
+    return session;
+  }
+
+  private async rotate(em: EntityManager, presented: string, userAgent?: string): Promise<SessionTokens | null> {
     const [id, secret] = presented.split('.');
-    const token = await this.tokens.findOneBy({ id });
-    if (!token || !secret || !safeEqualHex(token.tokenHash, sha256(secret))) {
-      throw new UnauthorizedException(SESSION_ENDED);
-    }
+    const token = await em.findOneBy(RefreshToken, { id });
+    if (!token || !secret || !safeEqualHex(token.tokenHash, sha256(secret))) return null;
     if (token.rotatedAt || token.revokedAt) {
       // A rotated token came back: someone else may hold this session. End all of it.
-      await this.revokeFamily(token.familyId);
-      throw new UnauthorizedException(SESSION_ENDED);
+      await this.revokeFamily(em, token.familyId);
+      return null;
     }
-    if (token.expiresAt.getTime() <= Date.now()) throw new UnauthorizedException(SESSION_ENDED);
-    const user = await this.users.findOneBy({ id: token.userId, organisationId: token.organisationId });
+    if (token.expiresAt.getTime() <= Date.now()) return null;
+    const user = await em.findOneBy(User, { id: token.userId, organisationId: token.organisationId });
     if (!user || !user.active) {
-      await this.revokeFamily(token.familyId);
-      throw new UnauthorizedException(SESSION_ENDED);
+      await this.revokeFamily(em, token.familyId);
+      return null;
     }
-    // Only the first of two racing refreshes may rotate the token.
-    const claimed = await this.tokens.update({ id: token.id, rotatedAt: IsNull(), revokedAt: IsNull() }, { rotatedAt: new Date() });
-    if (!claimed.affected) {
-      await this.revokeFamily(token.familyId);
-      throw new UnauthorizedException(SESSION_ENDED);
-    }
-    return this.issue(user, token.familyId, userAgent);
+    await em.update(RefreshToken, { id: token.id }, { rotatedAt: new Date() });
+    return this.issue(em, user, token.familyId, userAgent);
   }
 
-  async signOut(presented: string): Promise<void> {
+  signOut(presented: string): Promise<void> {
     const [id, secret] = presented.split('.');
-    const token = await this.tokens.findOneBy({ id });
-    if (token && secret && safeEqualHex(token.tokenHash, sha256(secret))) await this.revokeFamily(token.familyId);
+    return this.queue.run(async (em) => {
+      const token = await em.findOneBy(RefreshToken, { id });
+      if (token && secret && safeEqualHex(token.tokenHash, sha256(secret))) await this.revokeFamily(em, token.familyId);
+    });
   }
 
-  /** Ends every session of a user (deactivation, password reset). */
-  async revokeAllForUser(userId: string): Promise<void> {
-    await this.tokens.update({ userId, revokedAt: IsNull() }, { revokedAt: new Date() });
+  private async revokeFamily(em: EntityManager, familyId: string): Promise<void> {
+    await em.update(RefreshToken, { familyId, revokedAt: IsNull() }, { revokedAt: new Date() });
   }
 
-  private async revokeFamily(familyId: string): Promise<void> {
-    await this.tokens.update({ familyId, revokedAt: IsNull() }, { revokedAt: new Date() });
-  }
-
-  private async issue(user: User, familyId: string, userAgent?: string): Promise<SessionTokens> {
+  private async issue(em: EntityManager, user: User, familyId: string, userAgent?: string): Promise<SessionTokens> {
     const payload: AccessTokenPayload = { sub: user.id, org: user.organisationId, role: user.role };
     const accessToken = await this.jwt.signAsync(payload, { expiresIn: this.config.accessTokenTtlSeconds });
     const secret = randomBytes(32).toString('base64url');
-    const row = this.tokens.create({
+    const row = em.create(RefreshToken, {
       organisationId: user.organisationId,
       userId: user.id,
       familyId,
@@ -98,7 +99,7 @@ export class AuthService {
       revokedAt: null,
       userAgent: userAgent?.slice(0, 300) ?? null,
     });
-    await this.tokens.save(row);
+    await em.save(row);
     return { accessToken, refreshToken: `${row.id}.${secret}`, user: toPublicUser(user) };
   }
 }

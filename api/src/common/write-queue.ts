@@ -2,9 +2,11 @@ import { Injectable } from '@nestjs/common';
 import { DataSource, type EntityManager } from 'typeorm';
 
 /**
- * Every write transaction goes through this queue. TypeORM shares one SQLite connection, so two
- * transactions interleaving across awaits would collide ("cannot start a transaction within a transaction");
- * queueing them in the process makes them take turns, and WAL keeps readers going meanwhile.
+ * Every database transaction, and every read of synced rows, goes through this queue. TypeORM keeps one
+ * SQLite connection, so anything run on it while a transaction is open across an await would land inside that
+ * transaction: a second BEGIN fails ("cannot start a transaction within a transaction"), another request's write
+ * would commit or roll back with it, and a read would see changes that may yet be rolled back. Taking turns in
+ * the process avoids all three; WAL and the busy timeout cover other processes (the CLI, a second instance).
  */
 @Injectable()
 export class WriteQueue {
@@ -14,6 +16,13 @@ export class WriteQueue {
 
   run<T>(work: (em: EntityManager) => Promise<T>): Promise<T> {
     const next = this.tail.then(() => this.dataSource.transaction(work));
+    this.tail = next.catch(() => undefined);
+    return next;
+  }
+
+  /** A read that must not see a transaction half done. */
+  read<T>(work: (em: EntityManager) => Promise<T>): Promise<T> {
+    const next = this.tail.then(() => work(this.dataSource.manager));
     this.tail = next.catch(() => undefined);
     return next;
   }

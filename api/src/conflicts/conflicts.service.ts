@@ -1,11 +1,10 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { fieldError, formatHlc, isSyncEntity, SYNC_ENTITIES } from '@wiretrail/core';
-import { InjectRepository } from '@nestjs/typeorm';
-import { IsNull, Not, Repository } from 'typeorm';
+import { IsNull, Not } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
-import { SYNC_SCHEMAS, type SyncRecord } from '../sync/entities/sync-schemas.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListConflictsQueryDto } from './dto/list-conflicts-query.dto.js';
@@ -14,7 +13,6 @@ import type { ResolveConflictDto } from './dto/resolve-conflict.dto.js';
 @Injectable()
 export class ConflictsService {
   constructor(
-    @InjectRepository(SYNC_SCHEMAS.conflict) private readonly conflicts: Repository<SyncRecord>,
     private readonly queue: WriteQueue,
     private readonly engine: SyncEngine,
   ) {}
@@ -26,12 +24,12 @@ export class ConflictsService {
       ...(q.entity ? { entity: q.entity } : {}),
       ...(q.rowId ? { rowId: q.rowId } : {}),
     };
-    const [rows, total] = await this.conflicts.findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
+    const [rows, total] = await this.queue.read((em) => em.getRepository<SyncRecord>('conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize }));
     return { items: rows.map(toSyncedRow), total, page: q.page, pageSize: q.pageSize };
   }
 
   async findOne(user: AuthUser, id: string) {
-    const row = await this.conflicts.findOneBy({ id, organisationId: user.organisationId });
+    const row = await this.queue.read((em) => em.getRepository<SyncRecord>('conflict').findOneBy({ id, organisationId: user.organisationId }));
     if (!row) throw new NotFoundException('No such conflict.');
     return toSyncedRow(row);
   }

@@ -2,12 +2,16 @@ import { BadRequestException, Injectable, NotFoundException } from '@nestjs/comm
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
 import { definedFields } from '../common/defined-fields.js';
+import { WriteQueue } from '../common/write-queue.js';
 import type { UpdateOrganisationDto } from './dto/update-organisation.dto.js';
 import { Organisation } from './entities/organisation.entity.js';
 
 @Injectable()
 export class OrganisationsService {
-  constructor(@InjectRepository(Organisation) private readonly organisations: Repository<Organisation>) {}
+  constructor(
+    @InjectRepository(Organisation) private readonly organisations: Repository<Organisation>,
+    private readonly queue: WriteQueue,
+  ) {}
 
   /** A caller may only ever see their own organisation; any other id is simply not found. */
   async findOwn(callerOrganisationId: string, id: string): Promise<Organisation> {
@@ -21,6 +25,6 @@ export class OrganisationsService {
     const changes = definedFields(dto);
     if (Object.keys(changes).length === 0) throw new BadRequestException('Nothing to change.');
     Object.assign(org, changes);
-    return this.organisations.save(org);
+    return this.queue.run((em) => em.save(org));
   }
 }

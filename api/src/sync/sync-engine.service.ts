@@ -255,7 +255,7 @@ export class SyncEngine {
         type.entity === 'user'
           ? await em.countBy(User, { id: In(ids), organisationId: actor.organisationId })
           : await em.getRepository<SyncRecord>(type.entity).countBy({ id: In(ids), organisationId: actor.organisationId, deletedAt: IsNull() });
-      if (found !== new Set(ids).size) throw new MutationRefused(`${entity}.${field} points at a ${type.entity} that does not exist.`);
+      if (found !== new Set(ids).size) throw new MutationRefused(`${entity}.${field} points at ${type.entity === 'area' ? 'an' : 'a'} ${type.entity} that does not exist.`);
     }
   }
 

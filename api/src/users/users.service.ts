@@ -4,6 +4,7 @@ import { Brackets, IsNull, Repository } from 'typeorm';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
 import { hashPassword } from '../auth/password.js';
 import { definedFields } from '../common/defined-fields.js';
+import { WriteQueue } from '../common/write-queue.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
 import type { ListUsersQueryDto } from './dto/list-users-query.dto.js';
@@ -21,7 +22,7 @@ export interface Page<T> {
 export class UsersService {
   constructor(
     @InjectRepository(User) private readonly users: Repository<User>,
-    @InjectRepository(RefreshToken) private readonly tokens: Repository<RefreshToken>,
+    private readonly queue: WriteQueue,
   ) {}
 
   async list(organisationId: string, q: ListUsersQueryDto): Promise<Page<PublicUser>> {
@@ -59,7 +60,7 @@ export class UsersService {
       active: true,
       lastSignInAt: null,
     });
-    await this.users.save(user);
+    await this.queue.run((em) => em.save(user));
     return toPublicUser(user);
   }
 
@@ -75,10 +76,10 @@ export class UsersService {
       throw new ForbiddenException('You cannot deactivate yourself; ask another admin.');
     }
     Object.assign(user, changes);
-    await this.users.save(user);
-    if (dto.active === false) {
-      await this.tokens.update({ userId: user.id, revokedAt: IsNull() }, { revokedAt: new Date() });
-    }
+    await this.queue.run(async (em) => {
+      await em.save(user);
+      if (dto.active === false) await em.update(RefreshToken, { userId: user.id, revokedAt: IsNull() }, { revokedAt: new Date() });
+    });
     return toPublicUser(user);
   }
 }

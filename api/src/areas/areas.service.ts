@@ -1,0 +1,12 @@
+import { Injectable } from '@nestjs/common';
+import { type Listing, RecordsService } from '../common/records/records.service.js';
+import type { ListAreasQueryDto } from './dto/list-areas-query.dto.js';
+
+@Injectable()
+export class AreasService extends RecordsService<ListAreasQueryDto> {
+  protected readonly entity = 'area';
+
+  protected listing(q: ListAreasQueryDto): Listing {
+    return { search: ['name', 'level'], filters: { siteId: q.siteId }, order: [['siteId', 'ASC'], ['name', 'ASC']] };
+  }
+}

@@ -1,0 +1,15 @@
+import { IdField, TextField } from '../../common/records/record-fields.js';
+
+export class CreateBoardDto {
+  @IdField('site', { required: true })
+  siteId: string;
+
+  @IdField('area', { description: 'where the board is; an area of the same site' })
+  areaId?: string | null;
+
+  @TextField(200, { required: true, example: 'Consumer unit' })
+  name: string;
+
+  @TextField(500, { example: '10-way dual RCD board' })
+  description?: string | null;
+}

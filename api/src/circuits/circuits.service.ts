@@ -1,0 +1,18 @@
+import { Injectable } from '@nestjs/common';
+import { type Listing, RecordsService, type SameSiteRef } from '../common/records/records.service.js';
+import type { ListCircuitsQueryDto } from './dto/list-circuits-query.dto.js';
+
+@Injectable()
+export class CircuitsService extends RecordsService<ListCircuitsQueryDto> {
+  protected readonly entity = 'circuit';
+  protected readonly sameSite: SameSiteRef[] = [{ field: 'boardId', entity: 'board' }];
+
+  protected listing(q: ListCircuitsQueryDto): Listing {
+    return {
+      search: ['number', 'description'],
+      filters: { siteId: q.siteId, boardId: q.boardId },
+      // Way numbers are text ("1", "10", "L1-3"): shorter first puts 2 before 10.
+      order: [['boardId', 'ASC'], ['LENGTH(r.number)', 'ASC'], ['number', 'ASC']],
+    };
+  }
+}

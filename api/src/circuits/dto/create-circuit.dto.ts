@@ -1,0 +1,37 @@
+import { CIRCUIT_KINDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import { ChoiceField, IdField, NumberField, TextField } from '../../common/records/record-fields.js';
+
+export class CreateCircuitDto {
+  @IdField('site', { required: true })
+  siteId: string;
+
+  @IdField('board', { required: true, description: 'a board of the same site' })
+  boardId: string;
+
+  @TextField(20, { required: true, example: '1', description: 'the way number as marked on the board' })
+  number: string;
+
+  @TextField(500, { example: 'Sockets, ground floor' })
+  description?: string | null;
+
+  @ChoiceField(CIRCUIT_KINDS)
+  kind?: (typeof CIRCUIT_KINDS)[number] | null;
+
+  @ChoiceField(PROTECTIVE_DEVICES, { description: 'protective device type' })
+  deviceType?: (typeof PROTECTIVE_DEVICES)[number] | null;
+
+  @NumberField(0.5, 1000, { example: 32, description: 'protective device rating, A' })
+  deviceRatingA?: number | null;
+
+  @NumberField(1, 3000, { example: 30, description: 'RCD rated residual operating current, mA' })
+  rcdRatingMa?: number | null;
+
+  @TextField(20, { example: 'A' })
+  rcdType?: string | null;
+
+  @NumberField(0.5, 400, { example: 2.5, description: 'live conductor cross-section, mm²' })
+  liveCsaMm2?: number | null;
+
+  @NumberField(0.5, 400, { example: 1.5, description: 'circuit protective conductor cross-section, mm²' })
+  cpcCsaMm2?: number | null;
+}

@@ -1,0 +1,71 @@
+import { describe, expect, it } from '@jest/globals';
+import { type FieldType, SYNC_ENTITIES } from '@wiretrail/core';
+import { plainToInstance } from 'class-transformer';
+import { getMetadataStorage, validate } from 'class-validator';
+import { CreateAreaDto } from '../../areas/dto/create-area.dto.js';
+import { CreateBoardDto } from '../../boards/dto/create-board.dto.js';
+import { CreateCircuitDto } from '../../circuits/dto/create-circuit.dto.js';
+import { CreateCustomerDto } from '../../customers/dto/create-customer.dto.js';
+import { CreateJobDto } from '../../jobs/dto/create-job.dto.js';
+import { CreateSiteDto } from '../../sites/dto/create-site.dto.js';
+import { CreateVisitDto } from '../../visits/dto/create-visit.dto.js';
+import type { OfficeRecord } from './records.service.js';
+
+/** The office's DTOs must accept exactly what the field registry accepts, or REST and sync would disagree. */
+const DTOS: Record<OfficeRecord, new () => object> = {
+  customer: CreateCustomerDto,
+  site: CreateSiteDto,
+  area: CreateAreaDto,
+  board: CreateBoardDto,
+  circuit: CreateCircuitDto,
+  job: CreateJobDto,
+  visit: CreateVisitDto,
+};
+
+const ID = '01890000-0000-7000-8000-000000000000';
+
+/** Values on each side of the registry's limits. */
+function samples(type: FieldType): { good: unknown[]; bad: unknown[] } {
+  switch (type.kind) {
+    case 'string':
+      return { good: ['x', 'x'.repeat(type.max)], bad: ['x'.repeat(type.max + 1), 42] };
+    case 'number':
+      return { good: [type.min, type.max], bad: [type.min! - 0.01, type.max! + 0.01, '1'] };
+    case 'enum':
+      return { good: [...type.values], bad: ['none of these'] };
+    case 'ref':
+      return { good: [ID], bad: ['abc'] };
+    case 'refs':
+      return { good: [[], [ID]], bad: [['abc'], ID] };
+    case 'datetime':
+      return { good: ['2026-03-14T09:26:53.589Z'], bad: ['2026-03-14', 'soon'] };
+    default:
+      throw new Error(`no samples for ${type.kind}`);
+  }
+}
+
+async function problems(dto: new () => object, field: string, value: unknown): Promise<string[]> {
+  const errors = await validate(plainToInstance(dto, { [field]: value }));
+  return errors.filter((e) => e.property === field).flatMap((e) => Object.values(e.constraints ?? {}));
+}
+
+describe.each(Object.entries(DTOS))('the %s DTO', (entity, dto) => {
+  const spec = SYNC_ENTITIES[entity as OfficeRecord];
+
+  it('has exactly the fields of the registry', () => {
+    const own = new Set(getMetadataStorage().getTargetValidationMetadatas(dto, '', true, false).map((m) => m.propertyName));
+    expect([...own].sort()).toEqual(Object.keys(spec.fields).sort());
+  });
+
+  it.each(Object.entries(spec.fields))('limits %s as the registry does', async (field, f) => {
+    const { good, bad } = samples(f.type);
+    for (const value of good) expect([value, await problems(dto, field, value)]).toEqual([value, []]);
+    for (const value of bad) {
+      const found = await problems(dto, field, value);
+      expect([value, found.length > 0]).toEqual([value, true]);
+      expect(found.every((m) => m.startsWith(field))).toBe(true);
+    }
+    const missing = await problems(dto, field, undefined);
+    expect(missing.length > 0).toBe(!!f.required);
+  });
+});

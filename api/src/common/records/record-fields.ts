@@ -1,0 +1,104 @@
+import { applyDecorators } from '@nestjs/common';
+import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
+import { Transform } from 'class-transformer';
+import {
+  ArrayUnique,
+  IsArray,
+  IsDefined,
+  IsIn,
+  IsISO8601,
+  IsNumber,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  MinLength,
+} from 'class-validator';
+
+/**
+ * Property decorators for the fields of synced records. Each DTO states its limits, taken from the field registry
+ * in @wiretrail/core (record-dtos.spec.ts checks that they agree), and every message names the field.
+ */
+export interface FieldOptions {
+  /** Must be given when the record is created. */
+  required?: boolean;
+  example?: unknown;
+  description?: string;
+}
+
+function presence(o: FieldOptions, api: ApiPropertyOptions): PropertyDecorator[] {
+  const doc = { ...api, ...(o.example !== undefined ? { example: o.example } : {}), ...(o.description ? { description: o.description } : {}) };
+  // Optional fields accept null, which clears a stored value.
+  return o.required
+    ? [ApiProperty(doc), IsDefined({ message: '$property is required' })]
+    : [ApiPropertyOptional({ ...doc, nullable: true }), IsOptional()];
+}
+
+const trimmed = Transform(({ value }) => (typeof value === 'string' ? value.trim() : value));
+
+export function TextField(max: number, o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { type: String, maxLength: max }),
+    trimmed,
+    IsString({ message: '$property must be text' }),
+    MaxLength(max, { message: `$property must be at most ${max} characters` }),
+    ...(o.required ? [MinLength(1, { message: '$property must not be empty' })] : []),
+  );
+}
+
+export function NumberField(min: number, max: number, o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { type: Number, minimum: min, maximum: max }),
+    IsNumber({ allowNaN: false, allowInfinity: false }, { message: '$property must be a number' }),
+    Min(min, { message: `$property must be at least ${min}` }),
+    Max(max, { message: `$property must be at most ${max}` }),
+  );
+}
+
+export function ChoiceField(values: readonly string[], o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { enum: [...values] }),
+    IsIn(values as string[], { message: `$property must be one of: ${values.join(', ')}` }),
+  );
+}
+
+/** The id of another record of the same organisation; whether it exists is checked when the record is written. */
+export function IdField(of: string, o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { type: String, format: 'uuid', description: o.description ?? `the id of a ${of}` }),
+    IsUUID('all', { message: `$property must be the id of a ${of}` }),
+  );
+}
+
+export function IdListField(of: string, o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { type: [String], description: o.description ?? `ids of ${of}s` }),
+    IsArray({ message: `$property must be a list of ${of} ids` }),
+    IsUUID('all', { each: true, message: `$property must be a list of ${of} ids` }),
+    ArrayUnique({ message: `$property must not name the same ${of} twice` }),
+  );
+}
+
+/** A date and time with its zone; the offset must be given, since the office and the site may not share a clock. */
+const DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:?\d{2})$/;
+
+/**
+ * Stored in UTC with milliseconds, the form devices send, so that stored times compare and sort as text
+ * (the schedule's order and date ranges rely on it).
+ */
+const inUtc = Transform(({ value }) =>
+  typeof value === 'string' && DATE_TIME.test(value) && !Number.isNaN(Date.parse(value)) ? new Date(value).toISOString() : value,
+);
+
+export function DateTimeField(o: FieldOptions = {}): PropertyDecorator {
+  const message = '$property must be an ISO-8601 date and time with its zone, like 2026-03-14T09:00:00Z';
+  return applyDecorators(
+    ...presence(o, { type: String, format: 'date-time', example: o.example ?? '2026-03-14T09:00:00.000Z' }),
+    inUtc,
+    IsISO8601({ strict: true }, { message }),
+    Matches(DATE_TIME, { message }),
+  );
+}

@@ -1,0 +1,190 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { formatHlc, type Mutation, type MutationResult, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
+import { DataSource, type EntityManager, IsNull } from 'typeorm';
+import { v7 as uuidv7 } from 'uuid';
+import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
+import { type Actor, SyncEngine } from '../../sync/sync-engine.service.js';
+import { toSyncedRow } from '../../sync/sync.service.js';
+import type { AuthUser } from '../decorators/current-user.decorator.js';
+import { definedFields } from '../defined-fields.js';
+import { WriteQueue } from '../write-queue.js';
+import type { PageQueryDto } from './page-query.dto.js';
+
+/** The records the office reads and writes directly; the rest arrive from devices through sync. */
+export type OfficeRecord = 'customer' | 'site' | 'area' | 'board' | 'circuit' | 'job' | 'visit';
+
+export interface RecordPage {
+  items: SyncedRow[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+/** How one kind of record is listed. Columns are the record's field names. */
+export interface Listing {
+  /** Fields the search text is looked for in. */
+  search: string[];
+  /** Also match records whose referenced row matches, e.g. a visit by its job's title. */
+  searchThrough?: Array<{ field: string; entity: OfficeRecord; columns: string[] }>;
+  /** Exact matches; an undefined value is no filter. */
+  filters?: Record<string, string | undefined>;
+  /** A JSON list field holding this id (a visit's technicians). */
+  listContains?: Record<string, string | undefined>;
+  /** From inclusive, to exclusive. Works on times because they are stored as UTC ISO text. */
+  range?: { field: string; from?: string; to?: string };
+  /** A field name, or an SQL expression over the alias `r`; the id is added last so pages never overlap. */
+  order: Array<[sort: string, direction: 'ASC' | 'DESC', nulls?: 'NULLS FIRST' | 'NULLS LAST']>;
+}
+
+/** A reference that must lie on the record's own site: a circuit's board, a board's area, a visit's job. */
+export interface SameSiteRef {
+  field: string;
+  entity: OfficeRecord;
+}
+
+const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
+const sortKey = (sort: string) => (/^\w+$/.test(sort) ? `r.${sort}` : sort);
+
+/**
+ * List, get, create and update for one kind of synced record, as the office does them over REST.
+ * Writes go through the sync engine as the office's own mutations, so versions, per-field history, document locks
+ * and conflicts work exactly as for a device's push, and every device pulls the change.
+ * A feature's service extends this and says which record it serves and how it is listed.
+ */
+@Injectable()
+export abstract class RecordsService<Q extends PageQueryDto> {
+  protected abstract readonly entity: OfficeRecord;
+  protected readonly sameSite: SameSiteRef[] = [];
+  protected abstract listing(query: Q): Listing;
+
+  constructor(
+    protected readonly dataSource: DataSource,
+    protected readonly queue: WriteQueue,
+    protected readonly engine: SyncEngine,
+  ) {}
+
+  async list(user: AuthUser, q: Q): Promise<RecordPage> {
+    const l = this.listing(q);
+    const params: Record<string, unknown> = { org: user.organisationId };
+    const where = ['r.organisationId = :org', 'r.deletedAt IS NULL'];
+    for (const [field, value] of Object.entries(l.filters ?? {})) {
+      if (value === undefined) continue;
+      where.push(`r.${field} = :eq_${field}`);
+      params[`eq_${field}`] = value;
+    }
+    for (const [field, value] of Object.entries(l.listContains ?? {})) {
+      if (value === undefined) continue;
+      where.push(`EXISTS (SELECT 1 FROM json_each(r.${field}) AS item WHERE item.value = :in_${field})`);
+      params[`in_${field}`] = value;
+    }
+    if (l.range?.from !== undefined) {
+      where.push(`r.${l.range.field} >= :rangeFrom`);
+      params.rangeFrom = l.range.from;
+    }
+    if (l.range?.to !== undefined) {
+      where.push(`r.${l.range.field} < :rangeTo`);
+      params.rangeTo = l.range.to;
+    }
+    if (q.search && (l.search.length || l.searchThrough?.length)) {
+      params.like = `%${escapeLike(q.search)}%`;
+      const matches = (columns: string[], alias: string) => columns.map((c) => `${alias}.${c} LIKE :like ESCAPE '\\'`);
+      const through = (l.searchThrough ?? []).map(
+        (s) => `r.${s.field} IN (SELECT t.id FROM "${SYNC_ENTITIES[s.entity].table}" AS t WHERE t.organisationId = :org AND (${matches(s.columns, 't').join(' OR ')}))`,
+      );
+      where.push(`(${[...matches(l.search, 'r'), ...through].join(' OR ')})`);
+    }
+
+    const [rows, total] = await this.queue.read((em) => {
+      const qb = em.getRepository<SyncRecord>(this.entity).createQueryBuilder('r').where(where.join(' AND '), params);
+      for (const [sort, direction, nulls] of l.order) qb.addOrderBy(sortKey(sort), direction, nulls);
+      if (!l.order.some(([sort]) => sort === 'id')) qb.addOrderBy('r.id', 'ASC');
+      return qb.offset((q.page - 1) * q.pageSize).limit(q.pageSize).getManyAndCount();
+    });
+    return { items: rows.map(toSyncedRow), total, page: q.page, pageSize: q.pageSize };
+  }
+
+  /** Another organisation's record answers exactly like a missing one: its existence is not ours to reveal. */
+  async findOne(user: AuthUser, id: string): Promise<SyncedRow> {
+    return toSyncedRow(await this.queue.read((em) => this.current(em, user, id)));
+  }
+
+  async create(user: AuthUser, dto: object): Promise<SyncedRow> {
+    const set = definedFields(dto) as Record<string, unknown>;
+    const id = uuidv7();
+    const { result, row } = await this.queue.run(async (em) => {
+      await this.checkSameSite(em, user, set, set);
+      const [result] = await this.engine.applyAll(em, this.actor(user), [this.mutation(id, 0, set)]);
+      return { result: result!, row: await em.getRepository<SyncRecord>(this.entity).findOneBy({ id }) };
+    });
+    return this.answer(result, row);
+  }
+
+  async update(user: AuthUser, id: string, dto: object): Promise<SyncedRow> {
+    const set = definedFields(dto) as Record<string, unknown>;
+    if (Object.keys(set).length === 0) throw new BadRequestException('Nothing to change: send at least one field.');
+    const { result, row } = await this.queue.run(async (em) => {
+      const existing = await this.current(em, user, id);
+      await this.checkSameSite(em, user, { ...existing, ...set }, set);
+      // The base is the version just read, inside the same transaction: the office's edit is the latest word.
+      const [result] = await this.engine.applyAll(em, this.actor(user), [this.mutation(id, existing.version, set)]);
+      return { result: result!, row: await em.getRepository<SyncRecord>(this.entity).findOneBy({ id }) };
+    });
+    return this.answer(result, row);
+  }
+
+  private async current(em: EntityManager, user: AuthUser, id: string): Promise<SyncRecord> {
+    const row = await em.getRepository<SyncRecord>(this.entity).findOneBy({ id, organisationId: user.organisationId, deletedAt: IsNull() });
+    if (!row) throw new NotFoundException(`No such ${this.entity}.`);
+    return row;
+  }
+
+  /**
+   * The engine checks that a referenced row exists in the organisation; this adds that it is on the same site.
+   * A reference that does not exist at all is left for the engine to refuse with its own message.
+   */
+  private async checkSameSite(em: EntityManager, user: AuthUser, merged: Record<string, unknown>, set: Record<string, unknown>): Promise<void> {
+    for (const ref of this.sameSite) {
+      if (!(ref.field in set) && !('siteId' in set)) continue;
+      const refId = merged[ref.field];
+      if (typeof refId !== 'string') continue;
+      const target = await em
+        .getRepository<SyncRecord>(ref.entity)
+        .findOne({ where: { id: refId, organisationId: user.organisationId, deletedAt: IsNull() }, select: { id: true, siteId: true } });
+      if (target && target.siteId !== merged.siteId) {
+        throw new BadRequestException(`${ref.field} must be on this ${this.entity}'s site.`);
+      }
+    }
+  }
+
+  private actor(user: AuthUser): Actor {
+    return { userId: user.id, organisationId: user.organisationId, role: user.role, deviceId: 'office' };
+  }
+
+  private mutation(id: string, baseVersion: number, set: Record<string, unknown>): Mutation {
+    return {
+      mutationId: uuidv7(),
+      entity: this.entity,
+      id,
+      baseVersion,
+      set: set as Mutation['set'],
+      hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId: 'office' }),
+    };
+  }
+
+  /** Thrown after the transaction, so that conflicts the engine recorded are kept. */
+  private answer(result: MutationResult, row: SyncRecord | null): SyncedRow {
+    if (result.status === 'rejected') {
+      const error = result.error ?? `The ${this.entity} was not saved.`;
+      throw /^No \w+ with that id/.test(error) ? new NotFoundException(`No such ${this.entity}.`) : new BadRequestException(error);
+    }
+    if (result.status === 'merged') {
+      throw new ConflictException({
+        statusCode: 409,
+        message: `This ${this.entity} is part of an issued document, so the change was not made; it waits in Conflicts for review.`,
+        error: 'Conflict',
+        conflictIds: result.conflictIds ?? [],
+      });
+    }
+    return toSyncedRow(row!);
+  }
+}

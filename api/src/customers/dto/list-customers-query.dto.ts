@@ -1,0 +1,4 @@
+import { PageQueryDto } from '../../common/records/page-query.dto.js';
+
+/** search matches name, e-mail, phone or address. */
+export class ListCustomersQueryDto extends PageQueryDto {}

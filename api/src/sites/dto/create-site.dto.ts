@@ -1,0 +1,28 @@
+import { EARTHING_ARRANGEMENTS } from '@wiretrail/core';
+import { ChoiceField, IdField, NumberField, TextField } from '../../common/records/record-fields.js';
+
+export class CreateSiteDto {
+  @IdField('customer', { required: true })
+  customerId: string;
+
+  @TextField(200, { example: 'Orchard Rise' })
+  name?: string | null;
+
+  @TextField(500, { required: true, example: '14 Orchard Rise, Wendmouth' })
+  address: string;
+
+  @TextField(12, { example: 'WM2 4HD' })
+  postcode?: string | null;
+
+  @TextField(20_000, { example: 'Key safe by the back door' })
+  accessNotes?: string | null;
+
+  @ChoiceField(EARTHING_ARRANGEMENTS)
+  earthing?: (typeof EARTHING_ARRANGEMENTS)[number] | null;
+
+  @NumberField(0, 1000, { description: 'external earth fault loop impedance Ze, ohms' })
+  zeOhm?: number | null;
+
+  @NumberField(0, 100, { description: 'prospective fault current, kA' })
+  pfcKa?: number | null;
+}
