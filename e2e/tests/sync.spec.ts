@@ -1,6 +1,6 @@
 import type { APIRequestContext } from '@playwright/test';
-import { expect, PHONE, test } from '../fixtures.js';
-import { DEMO_PASSWORD } from '../pages/sign-in-page.js';
+import { DESK, expect, PHONE, test } from '../fixtures.js';
+import { DEMO_PASSWORD, SignInPage } from '../pages/sign-in-page.js';
 
 test.use({ viewport: PHONE });
 
@@ -36,6 +36,7 @@ test('a technician records a note and a circuit with no signal, and the office g
   context,
   request,
   signInPage,
+  browser,
 }) => {
   test.setTimeout(90_000);
   const stamp = Date.now().toString(36);
@@ -100,4 +101,20 @@ test('a technician records a note and a circuit with no signal, and the office g
   const added = rows.filter((c) => c.entity === 'circuit' && !c.deleted && c.row?.number === circuitNumber);
   expect(added).toHaveLength(1);
   expect(added[0]!.row).toMatchObject({ description: circuitDescription, kind: 'radial', siteId: notes[0]!.row!.siteId });
+
+  // And in the office's own screens, at the desk.
+  const desk = await browser.newContext({ viewport: DESK, serviceWorkers: 'block' });
+  try {
+    const office = await desk.newPage();
+    const officeSignIn = new SignInPage(office);
+    await officeSignIn.goto();
+    await officeSignIn.signIn('office@larkfield.example');
+    await office.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Customers & sites' }).click();
+    await office.getByRole('table', { name: 'Sites' }).getByRole('link', { name: 'Orchard Rise' }).click();
+    const row = office.getByRole('table', { name: 'Circuits' }).getByRole('row', { name: new RegExp(circuitNumber) });
+    await expect(row).toContainText(circuitDescription);
+    await expect(row).toContainText('Radial');
+  } finally {
+    await desk.close();
+  }
 });

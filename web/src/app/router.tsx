@@ -15,6 +15,7 @@ const officeScreens: RouteObject[] = [
   { path: paths.jobs.path, lazy: () => import('./routes/office/jobs') },
   { path: paths.schedule.path, lazy: () => import('./routes/office/schedule') },
   { path: paths.customers.path, lazy: () => import('./routes/office/customers') },
+  { path: paths.site.path, lazy: () => import('./routes/office/site') },
   { path: paths.conflicts.path, lazy: () => import('./routes/office/conflicts') },
   {
     element: <RequireRole roles={['admin']} />,

@@ -11,6 +11,7 @@ export const paths = {
   jobs: { path: '/jobs', label: 'Jobs' },
   schedule: { path: '/schedule', label: 'Schedule' },
   customers: { path: '/customers', label: 'Customers & sites' },
+  site: { path: '/sites/:siteId', href: (siteId: string) => `/sites/${encodeURIComponent(siteId)}` },
   conflicts: { path: '/conflicts', label: 'Conflicts' },
   team: { path: '/team', label: 'Team' },
   account: { path: '/account', label: 'My account' },

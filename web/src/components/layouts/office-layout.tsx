@@ -58,7 +58,7 @@ export function OfficeLayout() {
         <Toolbar />
         <List component="nav" aria-label="Main" sx={{ px: 1 }}>
           {items.map((n) => (
-            <ListItemButton key={n.path} component={RouterLink} to={n.path} selected={pathname.startsWith(n.path)} sx={{ borderRadius: 2, mb: 0.5 }}>
+            <ListItemButton key={n.path} component={RouterLink} to={n.path} selected={pathname.startsWith(n.path) || (n.path === paths.customers.path && pathname.startsWith('/sites/'))} sx={{ borderRadius: 2, mb: 0.5 }}>
               <ListItemIcon>{n.icon}</ListItemIcon>
               <ListItemText primary={n.label} />
             </ListItemButton>

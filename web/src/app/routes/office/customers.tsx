@@ -1,14 +1,11 @@
-import HomeWorkOutlined from '@mui/icons-material/HomeWorkOutlined';
-import { EmptyState } from '@/components/empty-state';
 import { PageHeader } from '@/components/page-header';
+import { CustomersAndSites } from '@/features/sites/components/customers-and-sites';
 
 export function Component() {
   return (
     <>
       <PageHeader title="Customers & sites" subtitle="Who you work for, where, and what each site's installation holds." />
-      <EmptyState icon={<HomeWorkOutlined />} title="No customers yet">
-        Customers and their sites (address, earthing arrangement, Ze, boards and circuits) are kept here.
-      </EmptyState>
+      <CustomersAndSites />
     </>
   );
 }
