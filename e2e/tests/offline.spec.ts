@@ -1,4 +1,4 @@
-import { expect, PHONE, test } from '../fixtures.js';
+import { expect, PHONE, test, waitForServiceWorker } from '../fixtures.js';
 
 test.use({ viewport: PHONE });
 
@@ -6,13 +6,7 @@ test('after one visit online, the app opens with no network and shows the shell'
   await signInPage.goto();
   await signInPage.signIn('tech1@larkfield.example');
   await expect(page.getByRole('heading', { name: 'Today', level: 1 })).toBeVisible();
-  // Wait until the service worker controls the page, so the reload below is served by it alone.
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-    if (!navigator.serviceWorker.controller) {
-      await new Promise<void>((resolve) => navigator.serviceWorker.addEventListener('controllerchange', () => resolve(), { once: true }));
-    }
-  });
+  await waitForServiceWorker(page);
 
   await context.setOffline(true);
   await page.reload();

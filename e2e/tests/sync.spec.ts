@@ -1,5 +1,5 @@
 import type { APIRequestContext } from '@playwright/test';
-import { DESK, expect, PHONE, test } from '../fixtures.js';
+import { DESK, expect, PHONE, test, waitForServiceWorker } from '../fixtures.js';
 import { DEMO_PASSWORD, SignInPage } from '../pages/sign-in-page.js';
 
 test.use({ viewport: PHONE });
@@ -47,12 +47,7 @@ test('a technician records a note and a circuit with no signal, and the office g
   await signInPage.goto();
   await signInPage.signIn('tech1@larkfield.example');
   await expect(page.getByRole('heading', { name: 'Today', level: 1 })).toBeVisible();
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-    if (!navigator.serviceWorker.controller) {
-      await new Promise<void>((resolve) => navigator.serviceWorker.addEventListener('controllerchange', () => resolve(), { once: true }));
-    }
-  });
+  await waitForServiceWorker(page);
   // The first sync brings the technician's visits onto the phone.
   await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
   const visit = page.getByRole('region', { name: 'My visits' }).getByRole('link', { name: /Move two lounge sockets/ });

@@ -1,4 +1,4 @@
-import { type FieldValue, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
+import { type FieldValue, type Mutation, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
 import Dexie, { type Table } from 'dexie';
 
 /**
@@ -68,16 +68,8 @@ export interface NoteRow extends LocalRow {
 }
 
 /** A change made on this phone and not yet acknowledged by the server, in the order it was made. */
-export interface OutboxEntry {
+export interface OutboxEntry extends Mutation {
   seq?: number;
-  mutationId: string;
-  entity: SyncEntityName;
-  id: string;
-  /** The row's server version when the change was made; 0 for a row made on this phone. */
-  baseVersion: number;
-  set?: Record<string, FieldValue>;
-  delete?: true;
-  hlc: string;
   /** Only the user who made a change sends it, even if someone else signs in on this phone meanwhile. */
   userId: string;
   createdAt: string;
