@@ -15,3 +15,4 @@ export * from './cabling/link-length.js';
 export * from './sync/hlc.js';
 export * from './sync/entities.js';
 export * from './sync/protocol.js';
+export * from './sync/photos.js';
