@@ -45,14 +45,28 @@ export class SyncEngine {
   /** Applies a device's mutations in order inside the caller's transaction. */
   async applyAll(em: EntityManager, actor: Actor, mutations: Mutation[]): Promise<MutationResult[]> {
     const scope = actor.role === 'technician' ? await this.scopes.technicianScope(em, actor.organisationId, actor.userId) : null;
-    const results: MutationResult[] = [];
-    for (const m of mutations) results.push(await this.applyOnce(em, actor, scope, m));
-    return results;
+    // One look-up for the whole batch's replays, one counter read and write, and remembered reference checks:
+    // per-mutation round trips dominate the cost of a push.
+    const ids = mutations.map((m) => m?.mutationId).filter((id): id is string => typeof id === 'string');
+    const applied = ids.length ? await em.find(AppliedMutation, { where: { mutationId: In(ids) } }) : [];
+    const batch: Batch = { applied: new Map(applied.map((a) => [a.mutationId, a])), known: new Set(), seq: null };
+    this.batches.set(em, batch);
+    try {
+      const results: MutationResult[] = [];
+      for (const m of mutations) results.push(await this.applyOnce(em, actor, scope, m));
+      if (batch.seq) await em.update(SyncCounter, { name: 'global' }, { value: batch.seq.value });
+      return results;
+    } finally {
+      this.batches.delete(em);
+    }
   }
+
+  private readonly batches = new WeakMap<EntityManager, Batch>();
 
   private async applyOnce(em: EntityManager, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
     const mutationId = typeof m?.mutationId === 'string' ? m.mutationId : '';
-    const done = mutationId ? await em.findOneBy(AppliedMutation, { mutationId }) : null;
+    const batch = this.batches.get(em);
+    const done = mutationId ? (batch ? batch.applied.get(mutationId) : await em.findOneBy(AppliedMutation, { mutationId })) : null;
     if (done) {
       if (done.organisationId !== actor.organisationId) return { mutationId, status: 'rejected', error: 'mutationId was already used.' };
       return done.result as unknown as MutationResult;
@@ -65,13 +79,10 @@ export class SyncEngine {
       result = { mutationId, status: 'rejected', error: err.message };
     }
     if (mutationId) {
-      await em.insert(AppliedMutation, {
-        mutationId,
-        organisationId: actor.organisationId,
-        userId: actor.userId,
-        deviceId: actor.deviceId,
-        result: result as never,
-      });
+      const record = { mutationId, organisationId: actor.organisationId, userId: actor.userId, deviceId: actor.deviceId, result: result as never };
+      await em.insert(AppliedMutation, record);
+      // The same id twice in one batch is a replay too.
+      batch?.applied.set(mutationId, record as unknown as AppliedMutation);
     }
     return result;
   }
@@ -177,6 +188,7 @@ export class SyncEngine {
     }
     const seq = await this.nextSeq(em);
     await em.getRepository<SyncRecord>(m.entity).update({ id: row.id }, { deletedAt: new Date(), version: seq, updatedById: actor.userId } as never);
+    this.batches.get(em)?.known.delete(`${m.entity}:${row.id}`);
     await this.recordChange(em, m.entity, row, seq, true);
     return { mutationId: m.mutationId, status: 'applied', version: seq, fieldVersions: versionsOf(row.fieldMeta) };
   }
@@ -249,13 +261,15 @@ export class SyncEngine {
     for (const [field, value] of Object.entries(set)) {
       const type = spec.fields[field]!.type;
       if (value === null || (type.kind !== 'ref' && type.kind !== 'refs')) continue;
-      const ids = type.kind === 'ref' ? [value as string] : (value as string[]);
+      const batch = this.batches.get(em);
+      const ids = (type.kind === 'ref' ? [value as string] : (value as string[])).filter((id) => !batch?.known.has(`${type.entity}:${id}`));
       if (ids.length === 0) continue;
       const found =
         type.entity === 'user'
           ? await em.countBy(User, { id: In(ids), organisationId: actor.organisationId })
           : await em.getRepository<SyncRecord>(type.entity).countBy({ id: In(ids), organisationId: actor.organisationId, deletedAt: IsNull() });
       if (found !== new Set(ids).size) throw new MutationRefused(`${entity}.${field} points at ${type.entity === 'area' ? 'an' : 'a'} ${type.entity} that does not exist.`);
+      for (const id of ids) batch?.known.add(`${type.entity}:${id}`);
     }
   }
 
@@ -280,6 +294,15 @@ export class SyncEngine {
   }
 
   async nextSeq(em: EntityManager): Promise<number> {
+    const batch = this.batches.get(em);
+    if (batch?.seq) return ++batch.seq.value;
+    if (batch) {
+      // Read once per batch; applyAll writes the final value back before the transaction commits.
+      const current = await em.findOneBy(SyncCounter, { name: 'global' });
+      if (!current) await em.insert(SyncCounter, { name: 'global', value: 0 });
+      batch.seq = { value: (current?.value ?? 0) + 1 };
+      return batch.seq.value;
+    }
     const updated = await em.update(SyncCounter, { name: 'global' }, { value: () => 'value + 1' });
     if (!updated.affected) await em.insert(SyncCounter, { name: 'global', value: 1 });
     return (await em.findOneByOrFail(SyncCounter, { name: 'global' })).value;
@@ -290,6 +313,13 @@ export class SyncEngine {
     const siteId = spec.siteField === 'id' ? row.id : spec.siteField === 'siteId' ? ((row.siteId as string) ?? null) : null;
     await em.upsert(SyncChange, { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted }, ['entity', 'rowId']);
   }
+}
+
+interface Batch {
+  applied: Map<string, AppliedMutation>;
+  /** Referenced rows already found to exist in this batch. */
+  known: Set<string>;
+  seq: { value: number } | null;
 }
 
 export function versionsOf(meta: Record<string, FieldMeta>): Record<string, number> {
