@@ -5,10 +5,13 @@ import { cpus, totalmem } from 'node:os';
 import { join } from 'node:path';
 import { root } from '../lib.mjs';
 import { ensureBuilt, printTable } from './harness.mjs';
+import { benchWeb } from './web.mjs';
+import { benchApiLoad } from './api-load.mjs';
+import { benchSyncPull } from './sync-pull.mjs';
 import { benchSyncPush } from './sync-push.mjs';
 
 const only = process.argv.slice(2);
-const suites = { 'sync-push': benchSyncPush };
+const suites = { 'sync-push': benchSyncPush, 'sync-pull': benchSyncPull, 'api-load': benchApiLoad, web: benchWeb };
 
 ensureBuilt();
 const results = [];
