@@ -1,0 +1,141 @@
+import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import { RequestMethod } from '@nestjs/common';
+import { METHOD_METADATA, PATH_METADATA } from '@nestjs/common/constants.js';
+import { ModulesContainer, Reflector } from '@nestjs/core';
+import { JwtService } from '@nestjs/jwt';
+import { IS_PUBLIC_KEY } from '../src/common/decorators/public.decorator.js';
+import { ROLES_KEY } from '../src/common/decorators/roles.decorator.js';
+import { createTestApp, signIn, type TestApp } from './test-app.js';
+
+interface Route {
+  method: 'get' | 'post' | 'patch' | 'put' | 'delete';
+  path: string;
+  roles: string[] | null;
+  isPublic: boolean;
+}
+
+const VERBS: Partial<Record<RequestMethod, Route['method']>> = {
+  [RequestMethod.GET]: 'get',
+  [RequestMethod.POST]: 'post',
+  [RequestMethod.PATCH]: 'patch',
+  [RequestMethod.PUT]: 'put',
+  [RequestMethod.DELETE]: 'delete',
+};
+
+/** Every route the running app serves, read from its controllers, so a new route cannot be left out of the matrix. */
+function routesOf(t: TestApp): Route[] {
+  const reflector = t.app.get(Reflector);
+  const routes: Route[] = [];
+  for (const module of t.app.get(ModulesContainer).values()) {
+    for (const wrapper of module.controllers.values()) {
+      const ctrl = wrapper.metatype as (new (...args: never[]) => unknown) | null;
+      if (!ctrl) continue;
+      const base = String(Reflect.getMetadata(PATH_METADATA, ctrl) ?? '');
+      for (const name of Object.getOwnPropertyNames(ctrl.prototype)) {
+        const handler = ctrl.prototype[name as keyof typeof ctrl.prototype] as unknown;
+        if (typeof handler !== 'function' || name === 'constructor') continue;
+        const verb = Reflect.getMetadata(METHOD_METADATA, handler) as RequestMethod | undefined;
+        if (verb === undefined || !VERBS[verb]) continue;
+        const sub = String(Reflect.getMetadata(PATH_METADATA, handler) ?? '');
+        const path = `/api/${[base, sub].filter((p) => p && p !== '/').join('/')}`.replace(/\/+/g, '/');
+        routes.push({
+          method: VERBS[verb]!,
+          path,
+          roles: reflector.getAllAndOverride<string[] | undefined>(ROLES_KEY, [handler as () => void, ctrl]) ?? null,
+          isPublic: !!reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, [handler as () => void, ctrl]),
+        });
+      }
+    }
+  }
+  return routes;
+}
+
+describe('authorisation matrix: every route × every role × own and other organisation × bad tokens', () => {
+  let t: TestApp;
+  let routes: Route[];
+  const tokens: Record<string, string> = {};
+  let larkfieldIds: string[];
+  let larkfieldOrg: string;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    routes = routesOf(t);
+    for (const [role, email] of [['admin', 'admin@larkfield.example'], ['office', 'office@larkfield.example'], ['technician', 'tech1@larkfield.example'], ['otherAdmin', 'admin@oakmere.example']] as const) {
+      const s = await signIn(t, email);
+      tokens[role] = s.accessToken;
+      if (role === 'admin') larkfieldOrg = s.user.organisationId;
+    }
+    const pulled = await t.http.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=matrix-office').set('authorization', `Bearer ${tokens.office}`);
+    larkfieldIds = (pulled.body.changes as Array<{ id: string }>).map((c) => c.id);
+  });
+  afterAll(() => t.close());
+
+  const fill = (path: string, id: string) => path.replace(/:[A-Za-z]+/g, id);
+  const send = (r: Route, token: string | null, id = '01890000-0000-7000-8000-000000000000') => {
+    const req = t.http[r.method](fill(r.path, id));
+    if (token) req.set('authorization', `Bearer ${token}`);
+    return r.method === 'get' || r.method === 'delete' ? req : req.send({});
+  };
+
+  it('finds the routes of every feature', () => {
+    const paths = routes.map((r) => `${r.method} ${r.path}`);
+    for (const expected of ['post /api/auth/sign-in', 'get /api/users', 'post /api/sync/push', 'get /api/sync/pull', 'get /api/conflicts', 'get /api/circuits', 'patch /api/visits/:id']) {
+      expect(paths).toContain(expected);
+    }
+    expect(routes.length).toBeGreaterThan(35);
+    // Deny by default: every route names its roles or is public.
+    expect(routes.filter((r) => !r.isPublic && !r.roles)).toEqual([]);
+  });
+
+  it('gives each role exactly the routes it is allowed, and never a 5xx', async () => {
+    const failures: string[] = [];
+    let refused = 0;
+    for (const r of routes.filter((x) => !x.isPublic)) {
+      for (const role of ['admin', 'office', 'technician']) {
+        const res = await send(r, tokens[role]!);
+        const allowed = r.roles!.includes(role);
+        const ok = allowed ? res.status !== 403 && res.status !== 401 && res.status < 500 : res.status === 403;
+        if (!ok) failures.push(`${role} ${r.method} ${r.path} → ${res.status}`);
+        if (!allowed) refused++;
+        expect(res.body).toEqual(expect.any(Object));
+      }
+    }
+    expect(failures).toEqual([]);
+    expect(refused).toBeGreaterThan(30);
+  });
+
+  it('answers 401 to no token, an expired token and a tampered token on every protected route', async () => {
+    const jwt = t.app.get(JwtService);
+    const admin = JSON.parse(Buffer.from(tokens.admin!.split('.')[1]!, 'base64url').toString());
+    const expired = await jwt.signAsync({ sub: admin.sub, org: admin.org, role: 'admin' }, { expiresIn: -10 });
+    const [h, p, s] = tokens.technician!.split('.');
+    const raised = Buffer.from(JSON.stringify({ ...JSON.parse(Buffer.from(p!, 'base64url').toString()), role: 'admin' })).toString('base64url');
+    const tampered = `${h}.${raised}.${s}`;
+    const forged = await new JwtService({ secret: 'not-our-secret-but-long-enough-to-sign' }).signAsync({ sub: admin.sub, org: admin.org, role: 'admin' });
+    const failures: string[] = [];
+    for (const r of routes.filter((x) => !x.isPublic)) {
+      for (const [name, token] of [['none', null], ['expired', expired], ['tampered', tampered], ['forged', forged]] as const) {
+        const res = await send(r, token);
+        if (res.status !== 401) failures.push(`${name} ${r.method} ${r.path} → ${res.status}`);
+      }
+    }
+    expect(failures).toEqual([]);
+  });
+
+  it("never shows another organisation's rows: every id route answers 404 to Oakmere for Larkfield's ids", async () => {
+    const failures: string[] = [];
+    for (const r of routes.filter((x) => !x.isPublic && x.path.includes(':') && x.roles!.includes('admin'))) {
+      for (const id of [larkfieldOrg, ...larkfieldIds.slice(0, 40)]) {
+        const res = await send(r, tokens.otherAdmin!, id);
+        if (res.status < 400 || res.status >= 500) failures.push(`${r.method} ${fill(r.path, id)} → ${res.status}`);
+        if (JSON.stringify(res.body).includes(larkfieldOrg)) failures.push(`${r.method} ${r.path} leaked Larkfield's organisation id`);
+      }
+    }
+    expect(failures).toEqual([]);
+    for (const r of routes.filter((x) => x.method === 'get' && !x.path.includes(':') && !x.isPublic && x.roles!.includes('admin'))) {
+      const res = await t.http.get(r.path === '/api/sync/pull' ? `${r.path}?checkpoint=0&deviceId=matrix-oakmere` : r.path).set('authorization', `Bearer ${tokens.otherAdmin}`);
+      expect(JSON.stringify(res.body)).not.toContain(larkfieldOrg);
+      for (const id of larkfieldIds.slice(0, 200)) expect(JSON.stringify(res.body)).not.toContain(id);
+    }
+  });
+});
