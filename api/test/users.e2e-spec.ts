@@ -58,6 +58,13 @@ describe('users: roles and administration', () => {
     expect(bad.body.message.join(' ')).toMatch(/role must be one of/);
   });
 
+  it('gives office staff a directory of names and roles, without e-mails', async () => {
+    const res = await t.http.get('/api/users/directory').set(auth(office)).expect(200);
+    expect(res.body.map((u: { name: string }) => u.name)).toEqual(expect.arrayContaining(['Sam Brannigan', 'Aled Pryce']));
+    expect(JSON.stringify(res.body)).not.toContain('@');
+    await t.http.get('/api/users/directory').set(auth(tech)).expect(403);
+  });
+
   it('lets the admin create a user who can then sign in', async () => {
     const created = await t.http.post('/api/users').set(auth(admin))
       .send({ email: 'Tech3@Larkfield.example', name: 'Mina Corr', role: 'technician', password: 'a-long-password' }).expect(201);

@@ -14,6 +14,13 @@ import { UsersService } from './users.service.js';
 export class UsersController {
   constructor(private readonly users: UsersService) {}
 
+  /** Names and roles of everyone in the organisation, for the office's schedule and conflicts; no e-mail or status. */
+  @Roles('admin', 'office')
+  @Get('directory')
+  directory(@CurrentUser() caller: AuthUser) {
+    return this.users.directory(caller.organisationId);
+  }
+
   @Get()
   list(@CurrentUser() caller: AuthUser, @Query() query: ListUsersQueryDto) {
     return this.users.list(caller.organisationId, query);

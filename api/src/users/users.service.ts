@@ -40,6 +40,11 @@ export class UsersService {
     return { items: rows.map(toPublicUser), total, page: q.page, pageSize: q.pageSize };
   }
 
+  async directory(organisationId: string): Promise<Array<{ id: string; name: string; role: string; active: boolean }>> {
+    const rows = await this.users.find({ where: { organisationId }, order: { name: 'ASC' }, select: { id: true, name: true, role: true, active: true } });
+    return rows.map(({ id, name, role, active }) => ({ id, name, role, active }));
+  }
+
   /** 404 for a row of another organisation: its existence is not ours to reveal. */
   async findOne(organisationId: string, id: string): Promise<PublicUser> {
     const user = await this.users.findOneBy({ id, organisationId });
