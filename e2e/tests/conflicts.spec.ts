@@ -1,0 +1,41 @@
+import type { APIRequestContext } from '@playwright/test';
+import { DESK, expect, test } from '../fixtures.js';
+import { DEMO_PASSWORD } from '../pages/sign-in-page.js';
+
+test.use({ viewport: DESK });
+
+async function tokenFor(request: APIRequestContext, email: string): Promise<string> {
+  const res = await request.post('/api/auth/sign-in', { data: { email, password: DEMO_PASSWORD } });
+  return ((await res.json()) as { accessToken: string }).accessToken;
+}
+
+test('the office settles two offline edits of the same circuit, side by side', async ({ page, request, signInPage }) => {
+  const stamp = Date.now().toString(36);
+  // Both technicians are on tomorrow's practice visit, so both may record its circuits.
+  const [tech1, tech2] = [await tokenFor(request, 'tech1@larkfield.example'), await tokenFor(request, 'tech2@larkfield.example')];
+  const pulled = await (await request.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=conflict-e2e-probe', { headers: { authorization: `Bearer ${tech1}` } })).json();
+  const circuit = pulled.changes.find((c: { entity: string; row: { description?: string } }) => c.entity === 'circuit' && c.row.description === 'Comms cabinet').row;
+  const push = (token: string, device: string, at: string, description: string) =>
+    request.post('/api/sync/push', {
+      headers: { authorization: `Bearer ${token}` },
+      data: { deviceId: device, mutations: [{ mutationId: `${device}-${stamp}`, entity: 'circuit', id: circuit.id, baseVersion: circuit.version, set: { description }, hlc: `${at}-0000-${device}` }] },
+    });
+  expect((await push(tech1, 'phonea', '2026-12-02T10:00:00.000Z', `Comms cabinet, 16 A radial (${stamp})`)).ok()).toBe(true);
+  expect((await push(tech2, 'phoneb', '2026-12-02T10:03:00.000Z', `Server cupboard (${stamp})`)).ok()).toBe(true);
+
+  await signInPage.goto();
+  await signInPage.signIn('office@larkfield.example');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Conflicts' }).click();
+  const card = page.getByRole('article', { name: 'Circuit · Description' }).filter({ hasText: stamp });
+  await expect(card).toContainText('Changed on two devices before either had synced');
+  await expect(card).toContainText(`Server cupboard (${stamp})`);
+  await expect(card).toContainText(`Comms cabinet, 16 A radial (${stamp})`);
+  await expect(card).toContainText('Aled Pryce');
+  await expect(card).toContainText('Sam Brannigan');
+  await page.screenshot({ path: 'test-results/conflicts-inbox.png' });
+  await card.getByRole('button', { name: 'Use the other value' }).click();
+  await expect(card).toHaveCount(0);
+
+  const after = await (await request.get(`/api/circuits/${circuit.id}`, { headers: { authorization: `Bearer ${await tokenFor(request, 'office@larkfield.example')}` } })).json();
+  expect(after.description).toBe(`Comms cabinet, 16 A radial (${stamp})`);
+});

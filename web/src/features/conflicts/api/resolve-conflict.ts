@@ -1,0 +1,17 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { Conflict } from './get-conflicts';
+
+export type Resolution = { choice: 'kept' } | { choice: 'discarded' } | { choice: 'value'; value: unknown };
+
+export function resolveConflict(id: string, resolution: Resolution): Promise<Conflict> {
+  return api.post<Conflict>(`/conflicts/${id}/resolve`, resolution as Record<string, unknown>);
+}
+
+export function useResolveConflict() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, resolution }: { id: string; resolution: Resolution }) => resolveConflict(id, resolution),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['conflicts'] }),
+  });
+}
