@@ -1,0 +1,39 @@
+import { DESK, expect, test } from '../fixtures.js';
+import { DEMO_PASSWORD } from '../pages/sign-in-page.js';
+
+test.use({ viewport: DESK });
+
+test('the office books a visit for a technician and their phone receives it', async ({ page, request, signInPage }) => {
+  await signInPage.goto();
+  await signInPage.signIn('office@larkfield.example');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Schedule' }).click();
+  const grid = page.getByRole('grid', { name: 'Visits this week' });
+  await expect(grid.getByRole('row', { name: 'Sam Brannigan' })).toContainText('LED-0041');
+
+  await page.getByRole('button', { name: 'Book a visit' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Book a visit' });
+  await dialog.getByLabel('Job').click();
+  await page.getByRole('option', { name: /LED-0044/ }).click();
+  await dialog.getByLabel('Start').fill('16:30');
+  await dialog.getByLabel('Finish').fill('15:00');
+  await dialog.getByRole('button', { name: 'Book visit' }).click();
+  await expect(dialog.getByText('The finish time must be after the start time.')).toBeVisible();
+  await dialog.getByLabel('Finish').fill('17:45');
+  await dialog.getByLabel('Aled Pryce').check();
+  await dialog.getByRole('button', { name: 'Book visit' }).click();
+  await expect(dialog).toHaveCount(0);
+  await expect(grid.getByRole('row', { name: 'Aled Pryce' })).toContainText('16:30–17:45');
+  await page.screenshot({ path: 'test-results/schedule-week.png' });
+
+  // Aled's phone gets it on its next pull.
+  const signIn = await request.post('/api/auth/sign-in', { data: { email: 'tech2@larkfield.example', password: DEMO_PASSWORD } });
+  const { accessToken, user } = await signIn.json();
+  const pulled = await (await request.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=schedule-e2e', { headers: { authorization: `Bearer ${accessToken}` } })).json();
+  const booked = pulled.changes.filter((c: { entity: string; row: { plannedEnd?: string; technicianIds?: string[] } | null }) => c.entity === 'visit' && c.row?.plannedEnd?.endsWith('T17:45:00.000Z') && c.row.technicianIds?.includes(user.id));
+  expect(booked).toHaveLength(1);
+
+  // Cancelling shows it struck through, and the phone learns that too.
+  await grid.getByRole('row', { name: 'Aled Pryce' }).getByRole('button', { name: /16:30–17:45/ }).click();
+  await page.getByRole('dialog', { name: 'Change visit' }).getByRole('button', { name: 'Cancel this visit' }).click();
+  await expect(grid.getByRole('row', { name: 'Aled Pryce' })).toContainText('16:30–17:45 · cancelled');
+});

@@ -1,0 +1,68 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+
+export interface Visit {
+  id: string;
+  jobId: string;
+  siteId: string;
+  technicianIds: string[] | null;
+  plannedStart: string | null;
+  plannedEnd: string | null;
+  status: 'planned' | 'on-site' | 'finished' | 'cancelled' | null;
+}
+
+export interface Job {
+  id: string;
+  siteId: string;
+  reference: string | null;
+  title: string;
+  status: string | null;
+}
+
+export interface Person {
+  id: string;
+  name: string;
+  role: string;
+  active: boolean;
+}
+
+interface Page<T> {
+  items: T[];
+  total: number;
+}
+
+export const weekVisitsQueryOptions = (from: string, to: string) =>
+  queryOptions({
+    queryKey: ['visits', { from, to }],
+    queryFn: ({ signal }) => api.get<Page<Visit>>(`/visits?pageSize=200&from=${encodeURIComponent(from)}&to=${encodeURIComponent(to)}`, signal),
+  });
+
+export const jobsQueryOptions = () =>
+  queryOptions({ queryKey: ['jobs', { all: true }], queryFn: ({ signal }) => api.get<Page<Job>>('/jobs?pageSize=200', signal) });
+
+export const directoryQueryOptions = () =>
+  queryOptions({ queryKey: ['users', 'directory'], queryFn: ({ signal }) => api.get<Person[]>('/users/directory', signal), staleTime: 5 * 60_000 });
+
+export function useWeekVisits(from: string, to: string) {
+  return useQuery(weekVisitsQueryOptions(from, to));
+}
+
+export function useJobs() {
+  return useQuery(jobsQueryOptions());
+}
+
+export function useDirectory() {
+  return useQuery(directoryQueryOptions());
+}
+
+export type VisitChanges = Partial<Pick<Visit, 'technicianIds' | 'plannedStart' | 'plannedEnd' | 'status'>>;
+
+/** Books a visit or changes one; technicians' phones receive it on their next sync. */
+export function useSaveVisit() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, changes, jobId, siteId }: { id?: string; changes: VisitChanges; jobId?: string; siteId?: string }) =>
+      id ? api.patch<Visit>(`/visits/${id}`, changes) : api.post<Visit>('/visits', { jobId, siteId, status: 'planned', ...changes }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['visits'] }),
+  });
+}

@@ -1,0 +1,136 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import Alert from '@mui/material/Alert';
+import Button from '@mui/material/Button';
+import Checkbox from '@mui/material/Checkbox';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogTitle from '@mui/material/DialogTitle';
+import FormControlLabel from '@mui/material/FormControlLabel';
+import FormGroup from '@mui/material/FormGroup';
+import FormHelperText from '@mui/material/FormHelperText';
+import FormLabel from '@mui/material/FormLabel';
+import MenuItem from '@mui/material/MenuItem';
+import Stack from '@mui/material/Stack';
+import TextField from '@mui/material/TextField';
+import { Controller, useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { type Job, type Person, type Visit, useSaveVisit } from '../api/schedule-data';
+import { dayKey, timeOf, toInstant } from './week';
+
+const schema = z
+  .object({
+    jobId: z.string().min(1, 'Choose the job this visit is for.'),
+    date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Enter the date of the visit.'),
+    start: z.string().regex(/^\d{2}:\d{2}$/, 'Enter a start time.'),
+    end: z.string().regex(/^\d{2}:\d{2}$/, 'Enter a finish time.'),
+    technicianIds: z.array(z.string()),
+  })
+  .refine((v) => v.end > v.start, { path: ['end'], message: 'The finish time must be after the start time.' });
+
+type Values = z.infer<typeof schema>;
+
+interface Props {
+  open: boolean;
+  onClose: () => void;
+  visit: Visit | null;
+  defaultDate: string;
+  jobs: Job[];
+  technicians: Person[];
+}
+
+/** Books a visit, or changes or cancels one; the assigned technicians' phones receive it on their next sync. */
+export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicians }: Props) {
+  const save = useSaveVisit();
+  const { control, register, handleSubmit, formState } = useForm<Values>({
+    resolver: zodResolver(schema),
+    values: {
+      jobId: visit?.jobId ?? '',
+      date: visit?.plannedStart ? dayKey(visit.plannedStart) : defaultDate,
+      start: timeOf(visit?.plannedStart ?? null) || '09:00',
+      end: timeOf(visit?.plannedEnd ?? null) || '12:00',
+      technicianIds: visit?.technicianIds ?? [],
+    },
+  });
+  const submit = handleSubmit((v) => {
+    const job = jobs.find((j) => j.id === v.jobId);
+    save.mutate(
+      {
+        id: visit?.id,
+        jobId: v.jobId,
+        siteId: job?.siteId,
+        changes: { plannedStart: toInstant(v.date, v.start), plannedEnd: toInstant(v.date, v.end), technicianIds: v.technicianIds },
+      },
+      { onSuccess: onClose },
+    );
+  });
+  const bookable = jobs.filter((j) => j.status !== 'done' && j.status !== 'cancelled');
+  return (
+    <Dialog open={open} onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="visit-dialog-title">
+      <DialogTitle id="visit-dialog-title">{visit ? 'Change visit' : 'Book a visit'}</DialogTitle>
+      <DialogContent>
+        <Stack component="form" id="visit-form" noValidate spacing={2.5} sx={{ pt: 1 }} onSubmit={submit}>
+          {save.isError && <Alert severity="error">{save.error.message}</Alert>}
+          <Controller
+            control={control}
+            name="jobId"
+            render={({ field }) => (
+              <TextField select label="Job" disabled={!!visit} {...field} error={!!formState.errors.jobId} helperText={formState.errors.jobId?.message}>
+                {(visit ? jobs : bookable).map((j) => (
+                  <MenuItem key={j.id} value={j.id}>
+                    {j.reference ? `${j.reference} · ` : ''}
+                    {j.title}
+                  </MenuItem>
+                ))}
+              </TextField>
+            )}
+          />
+          <Stack direction="row" spacing={2}>
+            <TextField label="Date" type="date" {...register('date')} error={!!formState.errors.date} helperText={formState.errors.date?.message} slotProps={{ inputLabel: { shrink: true } }} />
+            <TextField label="Start" type="time" {...register('start')} error={!!formState.errors.start} helperText={formState.errors.start?.message} slotProps={{ inputLabel: { shrink: true } }} />
+            <TextField label="Finish" type="time" {...register('end')} error={!!formState.errors.end} helperText={formState.errors.end?.message} slotProps={{ inputLabel: { shrink: true } }} />
+          </Stack>
+          <Controller
+            control={control}
+            name="technicianIds"
+            render={({ field }) => (
+              <div>
+                <FormLabel component="legend">Technicians</FormLabel>
+                <FormGroup row>
+                  {technicians.map((t) => (
+                    <FormControlLabel
+                      key={t.id}
+                      label={t.name}
+                      control={
+                        <Checkbox
+                          checked={field.value.includes(t.id)}
+                          onChange={(e) => field.onChange(e.target.checked ? [...field.value, t.id] : field.value.filter((id) => id !== t.id))}
+                        />
+                      }
+                    />
+                  ))}
+                </FormGroup>
+                {field.value.length === 0 && <FormHelperText>Nobody assigned yet: the visit shows under Unassigned.</FormHelperText>}
+              </div>
+            )}
+          />
+        </Stack>
+      </DialogContent>
+      <DialogActions sx={{ px: 3, pb: 2, justifyContent: 'space-between' }}>
+        {visit && visit.status !== 'cancelled' ? (
+          <Button color="error" disabled={save.isPending} onClick={() => save.mutate({ id: visit.id, changes: { status: 'cancelled' } }, { onSuccess: onClose })}>
+            Cancel this visit
+          </Button>
+        ) : (
+          <span />
+        )}
+        <Stack direction="row" spacing={1}>
+          <Button onClick={onClose}>Close</Button>
+          <Button type="submit" form="visit-form" variant="contained" disabled={save.isPending}>
+            {visit ? 'Save changes' : 'Book visit'}
+          </Button>
+        </Stack>
+      </DialogActions>
+    </Dialog>
+  );
+}
