@@ -6,6 +6,7 @@ import { ConfigService } from '@nestjs/config';
 import { rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
 import { BodyErrorFilter } from './common/filters/body-error.filter.js';
+import { PhotoUploads } from './photos/uploads/photo-uploads.js';
 
 function flatten(errors: ValidationError[], parent = ''): string[] {
   return errors.flatMap((e) => {
@@ -20,6 +21,8 @@ function flatten(errors: ValidationError[], parent = ''): string[] {
 /** Everything main.ts and the end-to-end tests share, so tests exercise the app as it runs. */
 export function configureApp(app: INestApplication): INestApplication {
   app.setGlobalPrefix('api');
+  // Resumable photo uploads come first: no body parser may read their bytes, and Nest's routes never see them.
+  app.use(app.get(PhotoUploads).handler());
   // A full push batch of field records is larger than Express's 100 kB default.
   (app as NestExpressApplication).useBodyParser('json', { limit: '5mb' });
   app.use(

@@ -1,5 +1,5 @@
 import { plainToInstance, Type } from 'class-transformer';
-import { IsEmail, IsIn, IsInt, IsOptional, IsString, Max, Min, MinLength, validateSync } from 'class-validator';
+import { IsEmail, IsIn, IsInt, IsOptional, IsString, IsUrl, Max, Min, MinLength, ValidateIf, validateSync } from 'class-validator';
 
 /** Every environment variable the API reads. Boot fails with a list of what is wrong. */
 export class EnvironmentVariables {
@@ -44,6 +44,28 @@ export class EnvironmentVariables {
 
   @IsOptional() @IsEmail({ require_tld: false })
   SUPPORT_EMAIL?: string;
+
+  @IsOptional() @IsIn(['local', 's3'], { message: 'PHOTO_STORAGE must be local or s3' })
+  PHOTO_STORAGE?: 'local' | 's3';
+
+  @IsOptional() @IsString()
+  PHOTO_STORAGE_DIR?: string;
+
+  @IsOptional() @IsUrl({ require_tld: false, require_protocol: true }, { message: 'S3_ENDPOINT must be a URL such as http://127.0.0.1:9000' })
+  S3_ENDPOINT?: string;
+
+  @ValidateIf((env: EnvironmentVariables) => env.PHOTO_STORAGE === 's3')
+  @IsString({ message: 'S3_BUCKET is required when PHOTO_STORAGE is s3' }) @MinLength(3, { message: 'S3_BUCKET is required when PHOTO_STORAGE is s3' })
+  S3_BUCKET?: string;
+
+  @IsOptional() @IsString()
+  S3_REGION?: string;
+
+  @IsOptional() @IsString()
+  S3_ACCESS_KEY_ID?: string;
+
+  @IsOptional() @IsString()
+  S3_SECRET_ACCESS_KEY?: string;
 }
 
 export function validateEnvironment(config: Record<string, unknown>): EnvironmentVariables {

@@ -1,17 +1,24 @@
 import { formatHlc, type Mutation, type SyncEntityName } from '@wiretrail/core';
 import { readFile } from 'node:fs/promises';
+import { resolve as resolvePath } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import type { DataSource } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import { hashPassword } from '../auth/password.js';
+import { photosConfig } from '../config/photos.config.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { createPhotoStorage, type PhotoStorage } from '../photos/storage/photo-storage.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { type Role, User } from '../users/entities/user.entity.js';
+import { type DemoImage, renderDemoImages, storeDemoImage } from './demo-photos.js';
 
 interface ScenarioRecord {
   entity: SyncEntityName;
   key: string;
   set: Record<string, unknown>;
+  /** Who recorded it, when not the admin: a technician's photos are theirs. */
+  by?: string;
 }
 
 interface Scenario {
@@ -29,12 +36,14 @@ interface Scenario {
 export const DEFAULT_SCENARIO = new URL('../../../seed/scenario.json', import.meta.url);
 
 /**
- * Values in the scenario may point at other records (`@site:orchard`), at users (`@user:tech1@…`) or at days
- * relative to today (`@day+1T08:30`, UTC), so the demo always has visits for today and the coming week.
+ * Values in the scenario may point at other records (`@site:orchard`), at users (`@user:tech1@…`), at days
+ * relative to today (`@day+1T08:30`, UTC), so the demo always has visits for today and the coming week, or at a
+ * drawn scene (`@image:back-box`, the sha256 of seed/scenes/back-box.svg rendered to a JPEG).
  */
-function resolve(value: unknown, ids: Map<string, string>, users: Map<string, string>, today: Date): unknown {
-  if (Array.isArray(value)) return value.map((v) => resolve(v, ids, users, today));
+function resolve(value: unknown, ids: Map<string, string>, users: Map<string, string>, today: Date, images: Map<string, DemoImage>): unknown {
+  if (Array.isArray(value)) return value.map((v) => resolve(v, ids, users, today, images));
   if (typeof value !== 'string' || !value.startsWith('@')) return value;
+  if (value.startsWith('@image:')) return images.get(value.slice(7))!.sha256;
   const day = /^@day([+-]\d+)T(\d{2}):(\d{2})$/.exec(value);
   if (day) {
     const d = new Date(today);
@@ -52,11 +61,24 @@ function resolve(value: unknown, ids: Map<string, string>, users: Map<string, st
   return id;
 }
 
-/** Loads the demo scenario into an empty database; returns false (and changes nothing) when data exists. */
-export async function seedDemoData(dataSource: DataSource, scenarioPath: string | URL = DEFAULT_SCENARIO, now = new Date()): Promise<boolean> {
+const imageName = (value: unknown) => (typeof value === 'string' && value.startsWith('@image:') ? value.slice(7) : null);
+
+/**
+ * Loads the demo scenario into an empty database; returns false (and changes nothing) when data exists.
+ * Demo photos go to the configured photo storage unless another is given.
+ */
+export async function seedDemoData(
+  dataSource: DataSource,
+  scenarioPath: string | URL = DEFAULT_SCENARIO,
+  now = new Date(),
+  photoStorage?: PhotoStorage,
+): Promise<boolean> {
   if ((await dataSource.getRepository(Organisation).count()) > 0) return false;
   const scenario = JSON.parse(await readFile(scenarioPath, 'utf8')) as Scenario;
   const passwordHash = await hashPassword(scenario.password);
+  const imageNames = scenario.organisations.flatMap((o) => (o.records ?? []).map((r) => imageName(r.set.sha256))).filter((n): n is string => !!n);
+  const images = imageNames.length ? await renderDemoImages(new URL('scenes/', typeof scenarioPath === 'string' ? pathToFileURL(resolvePath(scenarioPath)) : scenarioPath), imageNames) : new Map<string, DemoImage>();
+  const storage = imageNames.length ? (photoStorage ?? (await createPhotoStorage(photosConfig()))) : null;
   const engine = new SyncEngine(new ScopeService());
   const today = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
   await dataSource.transaction(async (em) => {
@@ -69,20 +91,30 @@ export async function seedDemoData(dataSource: DataSource, scenarioPath: string 
       }
       const admin = o.users.find((u) => u.role === 'admin');
       if (!o.records?.length || !admin) continue;
+      const used = new Set(o.records.map((r) => imageName(r.set.sha256)).filter((n): n is string => !!n));
+      for (const name of used) await storeDemoImage(em, storage!, org.id, images.get(name)!);
       // The demo records go through the same engine as every later change, so they sync like any other row.
       const ids = new Map(o.records.map((r) => [`${r.entity}:${r.key}`, uuidv7()]));
-      const mutations: Mutation[] = o.records.map((r, i) => ({
-        mutationId: uuidv7(),
-        entity: r.entity,
-        id: ids.get(`${r.entity}:${r.key}`)!,
-        baseVersion: 0,
-        set: Object.fromEntries(Object.entries(r.set).map(([k, v]) => [k, resolve(v, ids, users, today)])) as Mutation['set'],
-        hlc: formatHlc({ ms: now.getTime(), counter: i, deviceId: 'seed' }),
-      }));
-      const actor = { userId: users.get(admin.email)!, organisationId: org.id, role: 'admin' as const, deviceId: 'seed' };
-      const results = await engine.applyAll(em, actor, mutations);
-      const refused = results.filter((r) => r.status === 'rejected');
-      if (refused.length) throw new Error(`Demo data refused: ${refused.map((r) => r.error).join('; ')}`);
+      const mutations = o.records.map((r, i): { by: string; mutation: Mutation } => {
+        const set = Object.fromEntries(Object.entries(r.set).map(([k, v]) => [k, resolve(v, ids, users, today, images)]));
+        const image = images.get(imageName(r.set.sha256) ?? '');
+        // A demo photo's size is the drawing's, as the phone would have recorded it.
+        if (image) Object.assign(set, { sizeBytes: image.original.length, width: image.width, height: image.height, ...set });
+        return {
+          by: r.by ?? admin.email,
+          mutation: { mutationId: uuidv7(), entity: r.entity, id: ids.get(`${r.entity}:${r.key}`)!, baseVersion: 0, set: set as Mutation['set'], hlc: formatHlc({ ms: now.getTime(), counter: i, deviceId: 'seed' }) },
+        };
+      });
+      // The admin's records first, then each other user's, in scenario order: a technician's photos need their visit.
+      const authors = [admin.email, ...new Set(mutations.map((m) => m.by).filter((by) => by !== admin.email))];
+      for (const email of authors) {
+        const author = o.users.find((u) => u.email === email);
+        if (!author) throw new Error(`Scenario names an unknown author: ${email}`);
+        const actor = { userId: users.get(email)!, organisationId: org.id, role: author.role, deviceId: 'seed' };
+        const results = await engine.applyAll(em, actor, mutations.filter((m) => m.by === email).map((m) => m.mutation));
+        const refused = results.filter((r) => r.status === 'rejected');
+        if (refused.length) throw new Error(`Demo data refused: ${refused.map((r) => r.error).join('; ')}`);
+      }
     }
   });
   return true;

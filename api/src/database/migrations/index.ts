@@ -1,5 +1,6 @@
 import { Foundation1796208527258 } from './1796208527258-Foundation.js';
 import { DomainAndSync1796210074350 } from './1796210074350-DomainAndSync.js';
+import { PhotoStorage1796212407763 } from './1796212407763-PhotoStorage.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
-export const MIGRATIONS = [Foundation1796208527258, DomainAndSync1796210074350];
+export const MIGRATIONS = [Foundation1796208527258, DomainAndSync1796210074350, PhotoStorage1796212407763];

@@ -1,5 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsEmail, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { Transform } from 'class-transformer';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsEmail, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 
 export class UpdateOrganisationDto {
   @ApiPropertyOptional() @IsOptional() @IsString() @MinLength(1, { message: 'name must not be empty' }) @MaxLength(200)
@@ -13,4 +14,19 @@ export class UpdateOrganisationDto {
 
   @ApiPropertyOptional() @IsOptional() @IsEmail({ require_tld: false }, { message: 'email must be an e-mail address' })
   email?: string;
+
+  @ApiPropertyOptional({ type: [String], description: 'the office’s own photo tags, offered after the built-in ones', example: ['meter tails', 'fire stopping'] })
+  @IsOptional()
+  @Transform(({ value }) => (Array.isArray(value) ? value.map((t) => (typeof t === 'string' ? t.trim() : t)) : value))
+  @IsArray({ message: 'photoTags must be a list of tags' })
+  @ArrayMaxSize(30, { message: 'photoTags must hold at most 30 tags' })
+  @ArrayUnique({ message: 'photoTags must not name the same tag twice' })
+  @IsString({ each: true, message: 'photoTags must be a list of tags' })
+  @MinLength(1, { each: true, message: 'photoTags must not hold an empty tag' })
+  @MaxLength(40, { each: true, message: 'each of photoTags must be at most 40 characters' })
+  photoTags?: string[];
+
+  @ApiPropertyOptional({ description: 'keep location (GPS) metadata in the photo sizes the server makes; off by default' })
+  @IsOptional() @IsBoolean({ message: 'keepPhotoLocation must be true or false' })
+  keepPhotoLocation?: boolean;
 }

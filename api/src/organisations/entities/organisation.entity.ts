@@ -14,4 +14,12 @@ export class Organisation extends BaseRow {
 
   @Column({ type: 'varchar', length: 254, nullable: true })
   email: string | null;
+
+  /** The office's own photo tags, offered after the built-in ones (PHOTO_TAGS). */
+  @Column({ type: 'simple-json', default: '[]' })
+  photoTags: string[];
+
+  /** Whether the sizes the server makes of a photo keep its location (GPS) metadata; off unless the office wants it. */
+  @Column({ type: 'boolean', default: false })
+  keepPhotoLocation: boolean;
 }
