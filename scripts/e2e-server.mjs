@@ -6,6 +6,9 @@ import { join } from 'node:path';
 import { build, prepareDatabase, root, startChild } from './lib.mjs';
 
 const port = process.env.E2E_PORT ?? '3100';
+// Mail ports follow the web port, so two test runs on one machine do not collide.
+const smtpPort = String(Number(port) + 1000);
+const mailHttpPort = String(Number(port) + 1001);
 if (!existsSync(join(root, 'api/dist/main.js')) || !existsSync(join(root, 'web/dist/index.html'))) build();
 
 const dir = mkdtempSync(join(tmpdir(), 'wiretrail-e2e-'));
@@ -17,11 +20,11 @@ const env = {
   JWT_SECRET: 'e2e-secret-long-enough-for-signing-tokens-here',
   WEB_DIST: join(root, 'web/dist'),
   SIGN_IN_RATE_LIMIT: '500',
-  SMTP_PORT: '2525',
+  SMTP_PORT: smtpPort,
 };
 prepareDatabase(env);
 const children = [
-  startChild('Mail fake', 'node', ['scripts/mail-fake.mjs'], { SMTP_PORT: '2525', MAIL_FAKE_HTTP_PORT: '2580' }),
+  startChild('Mail fake', 'node', ['scripts/mail-fake.mjs'], { SMTP_PORT: smtpPort, MAIL_FAKE_HTTP_PORT: mailHttpPort }),
   startChild('API', 'node', ['api/dist/main.js'], env),
 ];
 const stop = () => {

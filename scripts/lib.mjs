@@ -41,12 +41,18 @@ export function prepareDatabase(env) {
   run('node', ['api/dist/database/seed-cli.js'], { env });
 }
 
+const children = new Set();
+
 export function startChild(name, cmd, args, env) {
   const child = spawn(cmd, args, { cwd: root, stdio: 'inherit', env: { ...process.env, ...env } });
+  children.add(child);
   child.on('exit', (code, signal) => {
+    children.delete(child);
     if (signal !== 'SIGTERM') {
+      // One part stopping stops the rest, so no half-started product is left running on its ports.
       console.error(`${name} stopped (${signal ?? `exit ${code}`}).`);
-      process.exit(code ?? 1);
+      for (const other of children) other.kill('SIGTERM');
+      process.exit(code || 1);
     }
   });
   return child;

@@ -10,6 +10,7 @@ async function tokenFor(request: APIRequestContext, email: string): Promise<stri
 }
 
 test('the office settles two offline edits of the same circuit, side by side', async ({ page, request, signInPage }) => {
+  test.setTimeout(60_000);
   const stamp = Date.now().toString(36);
   // Both technicians are on tomorrow's practice visit, so both may record its circuits.
   const [tech1, tech2] = [await tokenFor(request, 'tech1@larkfield.example'), await tokenFor(request, 'tech2@larkfield.example')];

@@ -4,6 +4,7 @@ import { DEMO_PASSWORD } from '../pages/sign-in-page.js';
 test.use({ viewport: DESK });
 
 test('the office books a visit for a technician and their phone receives it', async ({ page, request, signInPage }) => {
+  test.setTimeout(60_000);
   await signInPage.goto();
   await signInPage.signIn('office@larkfield.example');
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Schedule' }).click();
