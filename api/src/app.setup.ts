@@ -41,7 +41,7 @@ export function configureApp(app: INestApplication): INestApplication {
   const config = app.get(ConfigService);
   // Slows password guessing; counted per client address over a sliding window.
   app.use(
-    '/api/auth/sign-in',
+    ['/api/auth/sign-in', '/api/auth/password-reset'],
     rateLimit({
       windowMs: config.getOrThrow<number>('app.signInRateWindowMs'),
       limit: config.getOrThrow<number>('app.signInRateLimit'),

@@ -3,8 +3,10 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { AnyRole } from '../common/decorators/roles.decorator.js';
 import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Public } from '../common/decorators/public.decorator.js';
+import { PasswordResetService } from '../users/password-reset.service.js';
 import { UsersService } from '../users/users.service.js';
 import { AuthService } from './auth.service.js';
+import { CompletePasswordResetDto } from './dto/password-reset.dto.js';
 import { RefreshTokenDto } from './dto/refresh-token.dto.js';
 import { SignInDto } from './dto/sign-in.dto.js';
 
@@ -14,7 +16,16 @@ export class AuthController {
   constructor(
     private readonly auth: AuthService,
     private readonly users: UsersService,
+    private readonly resets: PasswordResetService,
   ) {}
+
+  /** Sets a new password from an e-mailed link; every session of that user ends. */
+  @Public()
+  @Post('password-reset')
+  @HttpCode(204)
+  async completePasswordReset(@Body() dto: CompletePasswordResetDto): Promise<void> {
+    await this.resets.complete(dto.token, dto.password);
+  }
 
   @Public()
   @Post('sign-in')

@@ -16,6 +16,8 @@ export const authConfig = registerAs('auth', () => ({
 }));
 
 export const mailConfig = registerAs('mail', () => ({
+  /** Where links in e-mails point: the address people open Wiretrail at. */
+  publicUrl: (process.env.PUBLIC_URL ?? `http://localhost:${process.env.PORT ?? 3000}`).replace(/\/$/, ''),
   host: process.env.SMTP_HOST ?? '127.0.0.1',
   port: Number(process.env.SMTP_PORT ?? 1025),
   from: process.env.MAIL_FROM ?? 'Wiretrail <no-reply@wiretrail.local>',

@@ -39,6 +39,9 @@ export class EnvironmentVariables {
   @Type(() => Number) @IsInt() @Min(1) @Max(65535)
   SMTP_PORT = 1025;
 
+  @IsOptional() @IsString()
+  PUBLIC_URL?: string;
+
   @IsString()
   MAIL_FROM = 'Wiretrail <no-reply@wiretrail.local>';
 

@@ -1,3 +1,4 @@
+import { PasswordReset } from '../auth/entities/password-reset.entity.js';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
@@ -6,4 +7,4 @@ import { ALL_SYNC_SCHEMAS } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
 
 /** For the migration CLI and scripts; the Nest app registers entities per feature module. */
-export const ALL_ENTITIES = [Organisation, User, RefreshToken, PhotoBlob, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS];
+export const ALL_ENTITIES = [Organisation, User, RefreshToken, PasswordReset, PhotoBlob, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS];

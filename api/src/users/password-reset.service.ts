@@ -1,0 +1,73 @@
+import { BadRequestException, ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+import { IsNull } from 'typeorm';
+import { PasswordReset } from '../auth/entities/password-reset.entity.js';
+import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
+import { hashPassword } from '../auth/password.js';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { WriteQueue } from '../common/write-queue.js';
+import { mailConfig } from '../config/app.config.js';
+import { MailService } from '../mail/mail.service.js';
+import { User } from './entities/user.entity.js';
+
+const LINK_LIFETIME_MS = 60 * 60 * 1000;
+const LINK_REFUSED = 'This password link is not valid any more. Ask your admin to send a new one.';
+const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
+
+@Injectable()
+export class PasswordResetService {
+  constructor(
+    private readonly queue: WriteQueue,
+    private readonly mail: MailService,
+    @Inject(mailConfig.KEY) private readonly config: ConfigType<typeof mailConfig>,
+  ) {}
+
+  /** An admin sends someone a one-hour link to set a new password; earlier unused links stop working. */
+  async send(caller: AuthUser, userId: string): Promise<{ sentTo: string; expiresAt: string }> {
+    const secret = randomBytes(32).toString('base64url');
+    const { user, reset } = await this.queue.run(async (em) => {
+      const user = await em.findOneBy(User, { id: userId, organisationId: caller.organisationId });
+      if (!user) throw new NotFoundException('No such user.');
+      if (!user.active) throw new ForbiddenException('That account is deactivated; reactivate it first.');
+      await em.update(PasswordReset, { userId, usedAt: IsNull() }, { usedAt: new Date() });
+      const reset = em.create(PasswordReset, {
+        organisationId: caller.organisationId,
+        userId,
+        tokenHash: sha256(secret),
+        expiresAt: new Date(Date.now() + LINK_LIFETIME_MS),
+        usedAt: null,
+        requestedById: caller.id,
+      });
+      await em.save(reset);
+      return { user, reset };
+    });
+    const link = `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(`${reset.id}.${secret}`)}`;
+    await this.mail.send({
+      to: user.email,
+      subject: 'Set a new Wiretrail password',
+      text: `Hello ${user.name},\n\n${caller.name} asked Wiretrail to let you set a new password. Open this link within an hour:\n\n${link}\n\nIf you did not expect this, ignore this e-mail; your password stays as it is.\n`,
+    });
+    return { sentTo: user.email, expiresAt: reset.expiresAt.toISOString() };
+  }
+
+  /** Sets the new password and ends every session of that user, so a lost phone is signed out too. */
+  async complete(token: string, password: string): Promise<void> {
+    const [id, secret] = token.split('.');
+    const passwordHash = await hashPassword(password);
+    const ok = await this.queue.run(async (em) => {
+      const reset = await em.findOneBy(PasswordReset, { id });
+      if (!reset || !secret || reset.usedAt || reset.expiresAt.getTime() <= Date.now()) return false;
+      const a = Buffer.from(reset.tokenHash, 'hex');
+      const b = Buffer.from(sha256(secret), 'hex');
+      if (a.length !== b.length || !timingSafeEqual(a, b)) return false;
+      const user = await em.findOneBy(User, { id: reset.userId, organisationId: reset.organisationId });
+      if (!user?.active) return false;
+      await em.update(User, { id: user.id }, { passwordHash });
+      await em.update(PasswordReset, { id: reset.id }, { usedAt: new Date() });
+      await em.update(RefreshToken, { userId: user.id, revokedAt: IsNull() }, { revokedAt: new Date() });
+      return true;
+    });
+    if (!ok) throw new BadRequestException(LINK_REFUSED);
+  }
+}
