@@ -5,13 +5,13 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useConflicts } from '../api/get-conflicts';
-import { usePeople } from '../api/get-people';
+import { useDirectory } from '@/lib/directory';
 import { ConflictCard } from './conflict-card';
 
 /** Every unsettled conflict, newest first; settling one sends the chosen value to every device. */
 export function ConflictsInbox() {
   const conflicts = useConflicts();
-  const people = usePeople();
+  const people = useDirectory();
   if (conflicts.isPending) return <LinearProgress aria-label="Loading conflicts" />;
   if (conflicts.isError) return <Alert severity="error">{conflicts.error.message}</Alert>;
   const names = new Map((people.data ?? []).map((p) => [p.id, p.name]));

@@ -19,12 +19,6 @@ export interface Job {
   status: string | null;
 }
 
-export interface Person {
-  id: string;
-  name: string;
-  role: string;
-  active: boolean;
-}
 
 interface Page<T> {
   items: T[];
@@ -40,8 +34,6 @@ export const weekVisitsQueryOptions = (from: string, to: string) =>
 export const jobsQueryOptions = () =>
   queryOptions({ queryKey: ['jobs', { all: true }], queryFn: ({ signal }) => api.get<Page<Job>>('/jobs?pageSize=200', signal) });
 
-export const directoryQueryOptions = () =>
-  queryOptions({ queryKey: ['users', 'directory'], queryFn: ({ signal }) => api.get<Person[]>('/users/directory', signal), staleTime: 5 * 60_000 });
 
 export function useWeekVisits(from: string, to: string) {
   return useQuery(weekVisitsQueryOptions(from, to));
@@ -51,9 +43,6 @@ export function useJobs() {
   return useQuery(jobsQueryOptions());
 }
 
-export function useDirectory() {
-  return useQuery(directoryQueryOptions());
-}
 
 export type VisitChanges = Partial<Pick<Visit, 'technicianIds' | 'plannedStart' | 'plannedEnd' | 'status'>>;
 

@@ -10,7 +10,8 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useMemo, useState } from 'react';
-import { type Visit, useDirectory, useJobs, useWeekVisits } from '../api/schedule-data';
+import { useDirectory } from '@/lib/directory';
+import { type Visit, useJobs, useWeekVisits } from '../api/schedule-data';
 import { VisitDialog } from './visit-dialog';
 import { addDays, dayKey, timeOf, weekStart } from './week';
 

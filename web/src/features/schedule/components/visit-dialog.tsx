@@ -15,7 +15,8 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { type Job, type Person, type Visit, useSaveVisit } from '../api/schedule-data';
+import type { Person } from '@/lib/directory';
+import { type Job, type Visit, useSaveVisit } from '../api/schedule-data';
 import { dayKey, timeOf, toInstant } from './week';
 
 const schema = z
