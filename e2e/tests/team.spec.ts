@@ -1,0 +1,64 @@
+import { DESK, expect, test } from '../fixtures.js';
+import { SignInPage } from '../pages/sign-in-page.js';
+
+test.use({ viewport: DESK });
+
+const MAIL = `http://127.0.0.1:${Number(process.env.E2E_PORT ?? 3100) + 1001}/messages`;
+
+test('the admin adds a technician, who sets their own password from the e-mailed link', async ({ page, request, signInPage, browser }) => {
+  test.setTimeout(60_000);
+  const stamp = Date.now().toString(36);
+  const email = `new.${stamp}@larkfield.example`;
+  await signInPage.goto();
+  await signInPage.signIn('admin@larkfield.example');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team' }).click();
+
+  await page.getByRole('button', { name: 'Add a person' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Add a person' });
+  await dialog.getByRole('button', { name: 'Add person' }).click();
+  await expect(dialog.getByText('Enter their name.')).toBeVisible();
+  await dialog.getByLabel('Name').fill(`Jo Newcombe ${stamp}`);
+  await dialog.getByLabel('E-mail').fill(email);
+  await dialog.getByLabel('First password').fill('temporary-password-1');
+  await dialog.getByRole('button', { name: 'Add person' }).click();
+  await expect(dialog).toHaveCount(0);
+  const row = page.getByRole('row', { name: new RegExp(`Jo Newcombe ${stamp}`) });
+  await expect(row).toContainText(email);
+  await expect(page.getByRole('switch', { name: 'Ruth Okafor can sign in' })).toBeDisabled();
+
+  await row.getByRole('button', { name: 'Send password link' }).click();
+  await expect(page.getByText(`A password link is on its way to ${email}`)).toBeVisible();
+  let link = '';
+  await expect
+    .poll(async () => {
+      const messages = (await (await request.get(MAIL)).json()) as Array<{ to: string[]; text: string }>;
+      link = /https?:\/\/\S+\/reset-password\?token=\S+/.exec(messages.filter((m) => m.to.includes(email)).at(-1)?.text ?? '')?.[0] ?? '';
+      return link;
+    })
+    .not.toBe('');
+
+  // The new technician opens the link on their own device.
+  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block' });
+  try {
+    const own = await phone.newPage();
+    await own.goto(new URL(link).pathname + new URL(link).search);
+    await own.getByLabel('New password', { exact: true }).fill('my-own-password-2');
+    await own.getByLabel('New password again').fill('my-own-password-3');
+    await own.getByRole('button', { name: 'Set password' }).click();
+    await expect(own.getByText('The two passwords are not the same.')).toBeVisible();
+    await own.getByLabel('New password again').fill('my-own-password-2');
+    await own.getByRole('button', { name: 'Set password' }).click();
+    await expect(own.getByText('Your password is set.')).toBeVisible();
+    await own.getByRole('link', { name: 'Sign in' }).click();
+    await new SignInPage(own).signIn(email, 'my-own-password-2');
+    await expect(own.getByRole('heading', { name: 'Today', level: 1 })).toBeVisible();
+  } finally {
+    await phone.close();
+  }
+
+  // Deactivated, they can no longer sign in.
+  await page.getByRole('switch', { name: `Jo Newcombe ${stamp} can sign in` }).click();
+  await expect(page.getByRole('switch', { name: `Jo Newcombe ${stamp} can sign in` })).not.toBeChecked();
+  const refused = await request.post('/api/auth/sign-in', { data: { email, password: 'my-own-password-2' } });
+  expect(refused.status()).toBe(401);
+});

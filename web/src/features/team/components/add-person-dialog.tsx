@@ -1,0 +1,64 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import Alert from '@mui/material/Alert';
+import Button from '@mui/material/Button';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogTitle from '@mui/material/DialogTitle';
+import MenuItem from '@mui/material/MenuItem';
+import Stack from '@mui/material/Stack';
+import TextField from '@mui/material/TextField';
+import { Controller, useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { useCreatePerson } from '../api/manage-users';
+
+const schema = z.object({
+  name: z.string().trim().min(1, 'Enter their name.'),
+  email: z.string().trim().min(1, 'Enter their e-mail address.').email('That is not an e-mail address.'),
+  role: z.enum(['admin', 'office', 'technician'], { message: 'Choose a role.' }),
+  password: z.string().min(10, 'The first password must be at least 10 characters; they can change it with a password link.'),
+});
+type Values = z.infer<typeof schema>;
+
+export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
+  const create = useCreatePerson();
+  const { register, control, handleSubmit, formState, reset } = useForm<Values>({
+    resolver: zodResolver(schema),
+    defaultValues: { name: '', email: '', role: 'technician', password: '' },
+  });
+  const close = () => {
+    reset();
+    create.reset();
+    onClose();
+  };
+  return (
+    <Dialog open={open} onClose={close} fullWidth maxWidth="xs" aria-labelledby="add-person-title">
+      <DialogTitle id="add-person-title">Add a person</DialogTitle>
+      <DialogContent>
+        <Stack component="form" id="add-person-form" noValidate spacing={2} sx={{ pt: 1 }} onSubmit={handleSubmit((v) => create.mutate(v, { onSuccess: close }))}>
+          {create.isError && <Alert severity="error">{create.error.message}</Alert>}
+          <TextField label="Name" {...register('name')} error={!!formState.errors.name} helperText={formState.errors.name?.message} />
+          <TextField label="E-mail" type="email" {...register('email')} error={!!formState.errors.email} helperText={formState.errors.email?.message} />
+          <Controller
+            control={control}
+            name="role"
+            render={({ field }) => (
+              <TextField select label="Role" {...field} error={!!formState.errors.role} helperText={formState.errors.role?.message}>
+                <MenuItem value="technician">Technician</MenuItem>
+                <MenuItem value="office">Office</MenuItem>
+                <MenuItem value="admin">Admin</MenuItem>
+              </TextField>
+            )}
+          />
+          <TextField label="First password" type="password" autoComplete="new-password" {...register('password')} error={!!formState.errors.password} helperText={formState.errors.password?.message} />
+        </Stack>
+      </DialogContent>
+      <DialogActions sx={{ px: 3, pb: 2 }}>
+        <Button onClick={close}>Cancel</Button>
+        <Button type="submit" form="add-person-form" variant="contained" disabled={create.isPending}>
+          Add person
+        </Button>
+      </DialogActions>
+    </Dialog>
+  );
+}
