@@ -13,6 +13,7 @@ const technicianScreens: RouteObject[] = [
 
 const officeScreens: RouteObject[] = [
   { path: paths.jobs.path, lazy: () => import('./routes/office/jobs') },
+  { path: paths.job.path, lazy: () => import('./routes/office/job') },
   { path: paths.schedule.path, lazy: () => import('./routes/office/schedule') },
   { path: paths.customers.path, lazy: () => import('./routes/office/customers') },
   { path: paths.site.path, lazy: () => import('./routes/office/site') },
@@ -32,6 +33,7 @@ export const routes: RouteObject[] = [
     errorElement: <RouteError />,
     children: [
       { path: paths.signIn.path, lazy: () => import('./routes/sign-in') },
+      { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password') },
       {
         element: <RequireSession />,
         children: [

@@ -20,8 +20,12 @@ export function syncChipLook(s: SyncStatus): ChipLook {
   const waiting = s.pending > 0 ? ` · ${s.pending} waiting` : '';
   if (!s.online) return { label: `No signal — saving on this phone${waiting}`, icon: <CloudOffOutlined />, color: 'warning' };
   if (s.failed > 0) return { label: `${s.failed} not sent — see Sync${waiting}`, icon: <ErrorOutlined />, color: 'error' };
-  if (s.syncing) return { label: s.pending > 0 ? 'Sending…' : 'Syncing…', icon: <CloudSyncOutlined />, color: 'info' };
+  if (s.syncing) return { label: s.pending > 0 || s.photosWaiting > 0 ? 'Sending…' : 'Syncing…', icon: <CloudSyncOutlined />, color: 'info' };
   if (s.pending > 0) return { label: `Saved on phone${waiting}`, icon: <CloudUploadOutlined />, color: 'warning' };
+  if (s.photosWaiting > 0) {
+    const photos = s.photosWaiting === 1 ? '1 photo' : `${s.photosWaiting} photos`;
+    return { label: `${photos} waiting to send`, icon: <CloudUploadOutlined />, color: 'warning' };
+  }
   if (!s.lastSyncAt) return { label: 'Not synced yet', icon: <CloudSyncOutlined />, color: 'default' };
   return { label: 'Up to date', icon: <CloudDoneOutlined />, color: 'success' };
 }

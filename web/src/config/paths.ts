@@ -3,12 +3,14 @@ import type { Role } from '@/lib/session';
 /** Every route of the app in one place; links are built from here, never typed inline. */
 export const paths = {
   signIn: { path: '/sign-in', href: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in') },
+  resetPassword: { path: '/reset-password' },
   home: { path: '/' },
   today: { path: '/today', label: 'Today' },
   visit: { path: '/visits/:visitId', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}` },
   sync: { path: '/sync', label: 'Sync' },
   me: { path: '/me', label: 'Me' },
   jobs: { path: '/jobs', label: 'Jobs' },
+  job: { path: '/jobs/:jobId', href: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}` },
   schedule: { path: '/schedule', label: 'Schedule' },
   customers: { path: '/customers', label: 'Customers & sites' },
   site: { path: '/sites/:siteId', href: (siteId: string) => `/sites/${encodeURIComponent(siteId)}` },

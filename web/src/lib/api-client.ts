@@ -58,46 +58,71 @@ async function send<T>(path: string, opts: RequestOptions, token?: string): Prom
   const headers: Record<string, string> = { accept: 'application/json' };
   if (opts.body !== undefined) headers['content-type'] = 'application/json';
   if (token) headers.authorization = `Bearer ${token}`;
-  let res: Response;
+  const res = await reach(`${env.apiBase}${path}`, {
+    method: opts.method ?? 'GET',
+    headers,
+    body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
+    signal: opts.signal,
+  });
+  if (res.status === 204) return undefined as T;
+  const text = await res.text();
+  if (!res.ok) throw errorFrom(res.status, text);
   try {
-    res = await fetch(`${env.apiBase}${path}`, {
-      method: opts.method ?? 'GET',
-      headers,
-      body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
-      signal: opts.signal,
-    });
+    return (text ? JSON.parse(text) : undefined) as T;
+  } catch {
+    return undefined as T;
+  }
+}
+
+async function reach(url: string, init: RequestInit): Promise<Response> {
+  try {
+    return await fetch(url, init);
   } catch (err) {
     if ((err as Error)?.name === 'AbortError') throw err;
     throw new OfflineError();
   }
-  if (res.status === 204) return undefined as T;
-  const text = await res.text();
+}
+
+/** The server's own message from an error body: Nest's `{ message }` JSON, or plain text. */
+export function errorFrom(status: number, text: string): ApiError {
   let data: unknown = undefined;
   try {
     data = text ? JSON.parse(text) : undefined;
   } catch {
     data = undefined;
   }
-  if (!res.ok) {
-    const message = (data as { message?: string | string[] } | undefined)?.message;
-    const messages = Array.isArray(message) ? message : [message ?? `The server answered ${res.status}.`];
-    throw new ApiError(res.status, messages);
-  }
-  return data as T;
+  const message = (data as { message?: string | string[] } | undefined)?.message;
+  // A short plain-text answer is the server's own words; an HTML error page is not worth showing.
+  const plain = data === undefined && text.trim() && text.length < 500 && !text.trimStart().startsWith('<') ? text.trim() : undefined;
+  const messages = Array.isArray(message) ? message : [message ?? plain ?? `The server answered ${status}.`];
+  return new ApiError(status, messages);
 }
 
 /** Calls the API as the signed-in user, refreshing the access token once if it has expired. */
 export async function apiRequest<T>(path: string, opts: RequestOptions = {}): Promise<T> {
   if (opts.anonymous) return send<T>(path, opts);
+  return withRefresh((token) => send<T>(path, opts, token));
+}
+
+async function withRefresh<T>(call: (token?: string) => Promise<T>): Promise<T> {
   const session = getSession();
   try {
-    return await send<T>(path, opts, session?.accessToken);
+    return await call(session?.accessToken);
   } catch (err) {
     if (!(err instanceof ApiError) || err.status !== 401 || !session) throw err;
     const renewed = await refreshSession();
     if (!renewed) throw err;
-    return send<T>(path, opts, renewed.accessToken);
+    return call(renewed.accessToken);
   }
+}
+
+/** Fetches a file (a photo) as the signed-in user. */
+export function apiBlob(path: string, signal?: AbortSignal): Promise<Blob> {
+  return withRefresh(async (token) => {
+    const res = await reach(`${env.apiBase}${path}`, { headers: token ? { authorization: `Bearer ${token}` } : {}, signal });
+    if (!res.ok) throw errorFrom(res.status, await res.text());
+    return res.blob();
+  });
 }
 
 export const api = {

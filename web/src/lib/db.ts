@@ -61,6 +61,22 @@ export interface CircuitRow extends LocalRow {
   description?: string | null;
   kind?: string | null;
 }
+export interface PhotoRow extends LocalRow {
+  visitId: string;
+  siteId: string;
+  areaId?: string | null;
+  subjectType?: string | null;
+  subjectId?: string | null;
+  caption?: string | null;
+  tags?: string[] | null;
+  takenAt?: string | null;
+  sha256?: string | null;
+  sizeBytes?: number | null;
+  width?: number | null;
+  height?: number | null;
+  /** 'waiting' until the server has the bytes and has made its sizes ('ready'), or 'refused'. */
+  uploadState?: string | null;
+}
 export interface NoteRow extends LocalRow {
   visitId: string;
   siteId: string;
@@ -93,6 +109,56 @@ export interface FailedEntry {
   error: string;
 }
 
+/**
+ * Where a photo's bytes stand on this phone: waiting to reach the server, confirmed there (still kept here),
+ * freed (confirmed, and the full-size bytes dropped to save space; the thumbnail stays), or refused by the server.
+ */
+export type PhotoBlobState = 'waiting' | 'confirmed' | 'freed' | 'refused';
+
+/** A photo's bytes as sent, keyed by their sha256. ArrayBuffer, never Blob: storing Blobs fails on some iPhones. */
+export interface PhotoBlobRow {
+  sha256: string;
+  mime: string;
+  /** null once freed. */
+  bytes: ArrayBuffer | null;
+  size: number;
+  createdAt: string;
+  /** Who took it: only they send it, as with the outbox. */
+  userId: string;
+  state: PhotoBlobState;
+  confirmedAt?: string | null;
+  freedAt?: string | null;
+  /** The server's reason, shown as it is. */
+  refusedReason?: string | null;
+  /** The last failed try that will be tried again (no signal, server busy). */
+  lastError?: string | null;
+}
+
+/**
+ * The small JPEG made on the phone for lists. Kept apart from the bytes because IndexedDB always reads whole
+ * records: a list of 300 thumbnails must not read 300 full-size photos.
+ */
+export interface PhotoThumbRow {
+  sha256: string;
+  mime: string;
+  bytes: ArrayBuffer;
+  width: number;
+  height: number;
+}
+
+/** Where an upload was left: the server's upload URL and how far it got, so a reload carries on from there. */
+export interface PhotoUploadRow {
+  key: string;
+  fingerprint: string;
+  uploadUrl: string | null;
+  parallelUploadUrls: string[] | null;
+  size: number | null;
+  metadata: Record<string, string>;
+  creationTime: string;
+  /** Bytes the server has acknowledged so far. */
+  offset?: number;
+}
+
 export interface MetaValues {
   deviceId: string;
   hlc: string;
@@ -102,6 +168,10 @@ export interface MetaValues {
   userId: string;
   persistAsked: boolean;
   persisted: boolean;
+  /** Days a full-size photo stays on the phone after the server confirmed it. */
+  keepOriginalsDays: number;
+  /** The organisation's own photo tags, kept for use offline. */
+  photoTags: string[];
 }
 export type MetaKey = keyof MetaValues;
 export interface MetaEntry<K extends MetaKey = MetaKey> {
@@ -135,7 +205,7 @@ export class WiretrailDb extends Dexie {
   declare circuit: Table<CircuitRow, string>;
   declare job: Table<JobRow, string>;
   declare visit: Table<VisitRow, string>;
-  declare photo: Table<LocalRow, string>;
+  declare photo: Table<PhotoRow, string>;
   declare note: Table<NoteRow, string>;
   declare cableRun: Table<LocalRow, string>;
   declare pointChange: Table<LocalRow, string>;
@@ -145,6 +215,9 @@ export class WiretrailDb extends Dexie {
   declare outbox: Table<OutboxEntry, number>;
   declare failed: Table<FailedEntry, number>;
   declare meta: Table<MetaEntry, MetaKey>;
+  declare photoBlobs: Table<PhotoBlobRow, string>;
+  declare photoThumbs: Table<PhotoThumbRow, string>;
+  declare photoUploads: Table<PhotoUploadRow, string>;
 
   constructor(name = 'wiretrail') {
     super(name);
@@ -153,6 +226,12 @@ export class WiretrailDb extends Dexie {
       outbox: '++seq, &mutationId, [entity+id], userId',
       failed: '++seq, mutationId, userId',
       meta: 'key',
+    });
+    // Photo bytes, their thumbnails and unfinished uploads, beside the synced photo rows.
+    this.version(2).stores({
+      photoBlobs: 'sha256, state, [state+createdAt]',
+      photoThumbs: 'sha256',
+      photoUploads: 'key, fingerprint',
     });
   }
 

@@ -1,15 +1,25 @@
 import { type FieldValue, fieldError, formatHlc, parseHlc, SYNC_ENTITIES, type SyncEntityName, tickHlc } from '@wiretrail/core';
-import type { Transaction } from 'dexie';
+import type { Table, Transaction } from 'dexie';
 import { v4 as uuidv4, v7 as uuidv7 } from 'uuid';
 import { db, type LocalRow, type OutboxEntry } from '@/lib/db';
 import { getSession } from '@/lib/session';
 
 /** A local write that could not be made; the message is fit to show as it is. */
 export class LocalWriteError extends Error {
-  constructor(message: string) {
+  constructor(
+    message: string,
+    /** 'quota': the phone's storage for the app is full. */
+    readonly reason?: 'quota',
+  ) {
     super(message);
     this.name = 'LocalWriteError';
   }
+}
+
+/** Writes that belong with new rows and must be kept or dropped with them (a photo's bytes with its row). */
+export interface Alongside {
+  tables: Table[];
+  write: () => Promise<void>;
 }
 
 export type Fields = Record<string, FieldValue>;
@@ -35,8 +45,13 @@ export async function createRecord(entity: SyncEntityName, fields: Fields): Prom
 
 /** Several new rows in one go (a board and its first circuit): all are kept, or none. */
 export async function createRecords(items: { entity: SyncEntityName; fields: Fields; id?: string }[]): Promise<string[]> {
+  return createRecordsWith(items);
+}
+
+/** New rows plus other local writes in the same transaction: everything is kept, or nothing. */
+export async function createRecordsWith(items: { entity: SyncEntityName; fields: Fields; id?: string }[], alongside?: Alongside): Promise<string[]> {
   const ops: Op[] = items.map(({ entity, fields, id }) => ({ kind: 'create', entity, id: id ?? uuidv7(), fields }));
-  await write(ops);
+  await write(ops, alongside);
   return ops.map((op) => op.id);
 }
 
@@ -79,7 +94,7 @@ async function nextHlc(tx: Transaction): Promise<string> {
   return hlc;
 }
 
-async function write(ops: Op[]): Promise<void> {
+async function write(ops: Op[], alongside?: Alongside): Promise<void> {
   const session = getSession();
   if (!session) throw new LocalWriteError('Sign in to record work on this phone.');
   for (const op of ops) validate(op, session.user.role);
@@ -87,7 +102,8 @@ async function write(ops: Op[]): Promise<void> {
   try {
     await withReopen(() =>
       // The row and its outbox entry are kept together or not at all.
-      db.transaction('rw', [...tables, db.outbox, db.meta], async (tx) => {
+      db.transaction('rw', [...tables, ...(alongside?.tables ?? []), db.outbox, db.meta], async (tx) => {
+        await alongside?.write();
         for (const op of ops) await apply(tx, op, session.user.id);
       }),
     );
@@ -167,7 +183,7 @@ async function withReopen<T>(run: () => Promise<T>): Promise<T> {
 function plainError(err: unknown): Error {
   if (err instanceof LocalWriteError) return err;
   if (isName(err, 'QuotaExceededError')) {
-    return new LocalWriteError('This phone has no space left for Wiretrail. Free some space, then save again; nothing saved before is lost.');
+    return new LocalWriteError('This phone has no space left for Wiretrail. Free some space, then save again; nothing saved before is lost.', 'quota');
   }
   return new LocalWriteError(`This could not be saved on the phone: ${(err as Error)?.message ?? 'unknown error'}.`);
 }

@@ -175,6 +175,34 @@ describe('sync engine: push', () => {
     expect(server.row('note', id)!.text).toBe('Ring final in kitchen extended by 4.5 m');
   });
 
+  it('sends photo bytes before the rows, and runs another round at once while photos remain', async () => {
+    await note('Back box fixed; photo taken');
+    const order: string[] = [];
+    const transport: SyncTransport = {
+      push: async (request) => {
+        order.push('push');
+        return server.push(request);
+      },
+      pull: async (params) => {
+        order.push('pull');
+        return server.pull(params);
+      },
+    };
+    let rounds = 0;
+    const engine = new SyncEngine({
+      db,
+      transport,
+      userId: USER.id,
+      timers: { set: (run, ms) => scheduled.push({ run, ms }), clear: () => undefined },
+      beforePush: async () => {
+        order.push('photos');
+        return ++rounds < 2;
+      },
+    });
+    await expect(engine.syncNow()).resolves.toBe('done');
+    expect(order).toEqual(['photos', 'push', 'pull', 'photos', 'pull']);
+  });
+
   it('sends a second change to the same row on the base of the first, and the server applies both in order', async () => {
     const id = await note('first');
     await saveRecord('note', id, { text: 'second' });

@@ -30,6 +30,11 @@ export interface SyncEngineOptions {
   /** Runs one sync at a time across tabs. */
   lock?: (run: () => Promise<void>) => Promise<void>;
   now?: () => number;
+  /**
+   * Runs before each push: sends photo bytes ahead of the rows that point at them. Resolves true when more remain,
+   * to run another round at once.
+   */
+  beforePush?: () => Promise<boolean>;
   /** Schedules the retry after a failure; tests run it by hand. */
   timers?: { set(run: () => void, ms: number): unknown; clear(handle: unknown): void };
 }
@@ -76,6 +81,7 @@ export class SyncEngine {
   private readonly userId: string;
   private readonly lock: (run: () => Promise<void>) => Promise<void>;
   private readonly now: () => number;
+  private readonly beforePush: () => Promise<boolean>;
   private running: Promise<SyncOutcome> | null = null;
   private again = false;
   private stopped = false;
@@ -89,6 +95,7 @@ export class SyncEngine {
     this.userId = options.userId;
     this.lock = options.lock ?? ((run) => run());
     this.now = options.now ?? Date.now;
+    this.beforePush = options.beforePush ?? (async () => false);
     this.timers = options.timers ?? { set: (run, ms) => setTimeout(run, ms), clear: (h) => clearTimeout(h as ReturnType<typeof setTimeout>) };
   }
 
@@ -133,6 +140,7 @@ export class SyncEngine {
     try {
       await this.prepareUser();
       const deviceId = await this.deviceId();
+      const more = await this.beforePush();
       await this.pushAll(deviceId);
       await this.pullAll(deviceId);
       await this.db.meta.bulkPut([
@@ -142,6 +150,7 @@ export class SyncEngine {
       this.failures = 0;
       this.clearRetry();
       setEngineState({ syncing: false, nextRetryAt: null });
+      if (more) this.again = true;
       return 'done';
     } catch (err) {
       if (err instanceof StoppedError) return 'stopped';

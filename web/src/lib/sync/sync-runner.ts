@@ -1,6 +1,10 @@
 import type { PullResponse, PushResponse } from '@wiretrail/core';
-import { api, apiRequest } from '@/lib/api-client';
+import { env } from '@/config/env';
+import { api, apiRequest, refreshSession } from '@/lib/api-client';
 import { db } from '@/lib/db';
+import { PhotoUploader } from '@/lib/photos/photo-uploader';
+import { resetUploadProgress } from '@/lib/photos/upload-progress';
+import { getSession } from '@/lib/session';
 import { subscribeLocalWrites } from './local-write';
 import { SyncEngine, type SyncOutcome, type SyncTransport } from './sync-engine';
 
@@ -50,7 +54,16 @@ export function syncNow(): Promise<SyncOutcome> {
  */
 export function startSync(userId: string): () => void {
   engine?.stop();
-  const current = new SyncEngine({ db, transport: httpTransport, userId, lock: acrossTabs });
+  const uploader = new PhotoUploader({
+    db,
+    userId,
+    missing: async (hashes) => (await api.post<{ missing: string[] }>('/blobs/missing', { hashes })).missing,
+    endpoint: new URL(`${env.apiBase}/uploads`, window.location.origin).href,
+    accessToken: () => getSession()?.accessToken,
+    refresh: async () => !!(await refreshSession()),
+  });
+  // Photo bytes first, then the rows that point at them, then what others changed.
+  const current = new SyncEngine({ db, transport: httpTransport, userId, lock: acrossTabs, beforePush: async () => (await uploader.run()).more });
   engine = current;
   let debounce: ReturnType<typeof setTimeout> | null = null;
 
@@ -75,6 +88,8 @@ export function startSync(userId: string): () => void {
 
   return () => {
     current.stop();
+    uploader.stop();
+    resetUploadProgress();
     if (engine === current) engine = null;
     if (debounce) clearTimeout(debounce);
     clearInterval(timer);

@@ -22,6 +22,8 @@ export interface SyncStatus {
   ready: boolean;
   pending: number;
   failed: number;
+  /** Photos whose bytes have not reached the server yet. */
+  photosWaiting: number;
   syncing: boolean;
   online: boolean;
   lastSyncAt: string | null;
@@ -39,14 +41,16 @@ export function useSyncStatus(): SyncStatus {
   const online = useOnline();
   const stored = useLiveQuery(
     async () => {
-      const [pending, failed, meta] = await Promise.all([
+      const [pending, failed, photosWaiting, meta] = await Promise.all([
         db.outbox.where('userId').equals(userId).count(),
         db.failed.where('userId').equals(userId).count(),
+        db.photoBlobs.where('state').equals('waiting').count(),
         db.meta.bulkGet(['lastSyncAt', 'lastError', 'persisted']),
       ]);
       return {
         pending,
         failed,
+        photosWaiting,
         lastSyncAt: (meta[0]?.value as string | undefined) ?? null,
         lastError: (meta[1]?.value as string | null | undefined) ?? null,
         persisted: (meta[2]?.value as boolean | undefined) ?? null,
@@ -58,6 +62,7 @@ export function useSyncStatus(): SyncStatus {
     ready: stored !== undefined,
     pending: stored?.pending ?? 0,
     failed: stored?.failed ?? 0,
+    photosWaiting: stored?.photosWaiting ?? 0,
     syncing: engine.syncing,
     online,
     lastSyncAt: stored?.lastSyncAt ?? null,

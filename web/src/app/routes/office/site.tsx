@@ -5,12 +5,16 @@ import Typography from '@mui/material/Typography';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
+import { CircuitPhotos } from '@/features/photos/components/circuit-photos';
 import { useSite } from '@/features/sites/api/get-sites';
 import { SiteCircuits } from '@/features/sites/components/site-circuits';
+import { useDirectory } from '@/lib/directory';
 
 export function Component() {
   const { siteId = '' } = useParams();
   const site = useSite(siteId);
+  const directory = useDirectory();
+  const personName = (userId: string) => directory.data?.find((u) => u.id === userId)?.name ?? null;
   if (site.isPending) return <LinearProgress aria-label="Loading the site" />;
   if (site.isError) return <Alert severity="error">{site.error.message}</Alert>;
   const s = site.data;
@@ -33,7 +37,7 @@ export function Component() {
       <Typography variant="h2" sx={{ mb: 1.5 }}>
         Circuits
       </Typography>
-      <SiteCircuits siteId={siteId} />
+      <SiteCircuits siteId={siteId} photos={(c, label) => <CircuitPhotos circuitId={c.id} circuitLabel={label} personName={personName} />} />
     </>
   );
 }

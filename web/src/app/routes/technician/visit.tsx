@@ -10,11 +10,13 @@ import { Link as RouterLink, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
+import { VisitTrail } from '@/features/photos/components/visit-trail';
 import { useVisit } from '@/features/visits/api/get-visit';
 import { siteAddress } from '@/features/visits/components/visit-card';
 import { VisitCircuits } from '@/features/visits/components/visit-circuits';
 import { VisitNotes } from '@/features/visits/components/visit-notes';
 import { dayLabel, timeWindow, visitStatusWords } from '@/features/visits/visit-format';
+import { useSession } from '@/lib/session';
 
 function BackToToday() {
   return (
@@ -27,6 +29,7 @@ function BackToToday() {
 export function Component() {
   const { visitId } = useParams();
   const summary = useVisit(visitId);
+  const userId = useSession()?.user.id ?? '';
   if (summary === undefined) return null;
   if (summary === null) {
     return (
@@ -70,6 +73,7 @@ export function Component() {
         </Typography>
       )}
       <Stack spacing={3} divider={<Divider flexItem />}>
+        <VisitTrail visit={visit} userId={userId} />
         <VisitNotes visitId={visit.id} siteId={visit.siteId} />
         <VisitCircuits siteId={visit.siteId} />
       </Stack>

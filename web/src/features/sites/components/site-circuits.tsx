@@ -7,7 +7,8 @@ import TableCell from '@mui/material/TableCell';
 import TableContainer from '@mui/material/TableContainer';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
-import { useSiteBoards, useSiteCircuits } from '../api/get-circuits';
+import type { ReactNode } from 'react';
+import { type Circuit, useSiteBoards, useSiteCircuits } from '../api/get-circuits';
 
 const KIND = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' } as Record<string, string>;
 
@@ -16,8 +17,11 @@ function device(c: { deviceType: string | null; deviceRatingA: number | null }):
   return /^[BCD]$/.test(c.deviceType) ? `Type ${c.deviceType} ${c.deviceRatingA ?? '?'} A` : `${c.deviceType} ${c.deviceRatingA ?? '?'} A`;
 }
 
-/** The site's circuits by board, including those a technician added on site once their phone has synced. */
-export function SiteCircuits({ siteId }: { siteId: string }) {
+/**
+ * The site's circuits by board, including those a technician added on site once their phone has synced.
+ * `photos` draws a circuit's photos in its row (given by the page, which knows about photos).
+ */
+export function SiteCircuits({ siteId, photos }: { siteId: string; photos?: (circuit: Circuit, label: string) => ReactNode }) {
   const boards = useSiteBoards(siteId);
   const circuits = useSiteCircuits(siteId);
   if (boards.isPending || circuits.isPending) return <LinearProgress aria-label="Loading circuits" />;
@@ -37,6 +41,7 @@ export function SiteCircuits({ siteId }: { siteId: string }) {
             <TableCell>Protective device</TableCell>
             <TableCell align="right">RCD (mA)</TableCell>
             <TableCell align="right">Live / cpc (mm²)</TableCell>
+            {photos && <TableCell>Photos</TableCell>}
           </TableRow>
         </TableHead>
         <TableBody>
@@ -49,6 +54,7 @@ export function SiteCircuits({ siteId }: { siteId: string }) {
               <TableCell>{device(c)}</TableCell>
               <TableCell align="right">{c.rcdRatingMa ?? '—'}</TableCell>
               <TableCell align="right">{c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2} / ${c.cpcCsaMm2}` : '—'}</TableCell>
+              {photos && <TableCell>{photos(c, `${boardName.get(c.boardId) ?? 'Board'}, circuit ${c.number}${c.description ? ` · ${c.description}` : ''}`)}</TableCell>}
             </TableRow>
           ))}
         </TableBody>

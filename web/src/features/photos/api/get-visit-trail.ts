@@ -1,0 +1,65 @@
+import { useLiveQuery } from 'dexie-react-hooks';
+import { type CircuitRow, db, type LocalRow, type NoteRow, type PhotoRow, type VisitRow } from '@/lib/db';
+
+export type TrailItem =
+  | { kind: 'photo'; id: string; at: string; photo: PhotoRow }
+  | { kind: 'note'; id: string; at: string; note: NoteRow }
+  | { kind: 'circuit'; id: string; at: string; circuit: CircuitRow }
+  | { kind: 'pointChange'; id: string; at: string; change: LocalRow };
+
+export interface VisitTrail {
+  items: TrailItem[];
+  areaNames: Map<string, string>;
+  subjectNames: Map<string, string>;
+}
+
+const DAY_MS = 86_400_000;
+const startOfDay = (iso: string) => {
+  const d = new Date(iso);
+  return new Date(d.getFullYear(), d.getMonth(), d.getDate()).getTime();
+};
+
+/**
+ * Circuits belong to the site, not the visit: those added on the visit's day(s) by its technicians (or on this
+ * phone, not yet back from the server) count as recorded on it.
+ */
+function visitWindow(visit: VisitRow): [number, number] | null {
+  const start = (visit.actualStart as string | null | undefined) ?? visit.plannedStart;
+  if (!start) return null;
+  const end = (visit.actualEnd as string | null | undefined) ?? visit.plannedEnd ?? start;
+  return [startOfDay(start), startOfDay(end) + DAY_MS];
+}
+
+/** Everything recorded on a visit, newest first: photos by when they were taken, the rest by when they were recorded. */
+export async function getVisitTrail(visit: VisitRow): Promise<VisitTrail> {
+  const [photos, notes, changes, circuits, areas] = await Promise.all([
+    db.photo.where('visitId').equals(visit.id).toArray(),
+    db.note.where('visitId').equals(visit.id).toArray(),
+    db.pointChange.where('visitId').equals(visit.id).toArray(),
+    db.circuit.where('siteId').equals(visit.siteId).toArray(),
+    db.area.where('siteId').equals(visit.siteId).toArray(),
+  ]);
+  const window = visitWindow(visit);
+  const items: TrailItem[] = [
+    ...photos.map((photo) => ({ kind: 'photo' as const, id: photo.id, at: photo.takenAt ?? photo.createdAt ?? '', photo })),
+    ...notes.map((note) => ({ kind: 'note' as const, id: note.id, at: note.createdAt ?? '', note })),
+    ...changes.map((change) => ({ kind: 'pointChange' as const, id: change.id, at: change.createdAt ?? '', change })),
+    ...circuits
+      .filter((c) => {
+        const t = c.createdAt ? Date.parse(c.createdAt) : NaN;
+        const by = c.createdById as string | null | undefined;
+        return window !== null && t >= window[0] && t < window[1] && (!by || (visit.technicianIds ?? []).includes(by));
+      })
+      .map((circuit) => ({ kind: 'circuit' as const, id: circuit.id, at: circuit.createdAt ?? '', circuit })),
+  ];
+  items.sort((a, b) => b.at.localeCompare(a.at) || b.id.localeCompare(a.id));
+  return {
+    items,
+    areaNames: new Map(areas.map((a) => [a.id, String(a.name ?? 'Area')])),
+    subjectNames: new Map(circuits.map((c) => [c.id, `Circuit ${c.number}`])),
+  };
+}
+
+export function useVisitTrail(visit: VisitRow): VisitTrail | undefined {
+  return useLiveQuery(() => getVisitTrail(visit), [visit]);
+}
