@@ -1,5 +1,5 @@
-import { type Page, test as base } from '@playwright/test';
-import { SignInPage } from './pages/sign-in-page.js';
+import { type APIRequestContext, type Browser, type BrowserContext, type Page, test as base } from '@playwright/test';
+import { DEMO_PASSWORD, SignInPage } from './pages/sign-in-page.js';
 
 export const PHONE = { width: 390, height: 844 };
 export const DESK = { width: 1440, height: 900 };
@@ -20,4 +20,21 @@ export async function waitForServiceWorker(page: Page): Promise<void> {
       await new Promise<void>((resolve) => navigator.serviceWorker.addEventListener('controllerchange', () => resolve(), { once: true }));
     }
   });
+}
+
+/** Signs in through the API, as a device would, and returns the session. */
+export async function apiSession(request: APIRequestContext, email: string, password = DEMO_PASSWORD): Promise<{ accessToken: string; user: { id: string } }> {
+  const res = await request.post('/api/auth/sign-in', { data: { email, password } });
+  if (!res.ok()) throw new Error(`sign-in as ${email} answered ${res.status()}`);
+  return res.json();
+}
+
+/** A second person at a desk-sized browser, signed in through the sign-in page; close the context when done. */
+export async function signedInAtDesk(browser: Browser, email: string): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext({ viewport: DESK, serviceWorkers: 'block' });
+  const page = await context.newPage();
+  const signIn = new SignInPage(page);
+  await signIn.goto();
+  await signIn.signIn(email);
+  return { context, page };
 }

@@ -1,13 +1,9 @@
 import type { APIRequestContext } from '@playwright/test';
-import { DESK, expect, test } from '../fixtures.js';
-import { DEMO_PASSWORD } from '../pages/sign-in-page.js';
+import { apiSession, DESK, expect, test } from '../fixtures.js';
 
 test.use({ viewport: DESK });
 
-async function tokenFor(request: APIRequestContext, email: string): Promise<string> {
-  const res = await request.post('/api/auth/sign-in', { data: { email, password: DEMO_PASSWORD } });
-  return ((await res.json()) as { accessToken: string }).accessToken;
-}
+const tokenFor = async (request: APIRequestContext, email: string) => (await apiSession(request, email)).accessToken;
 
 test('the office settles two offline edits of the same circuit, side by side', async ({ page, request, signInPage }) => {
   test.setTimeout(60_000);

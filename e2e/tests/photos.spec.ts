@@ -1,8 +1,7 @@
 import type { Locator, Page } from '@playwright/test';
 import { randomBytes } from 'node:crypto';
 import sharp from 'sharp';
-import { DESK, expect, PHONE, test, waitForServiceWorker } from '../fixtures.js';
-import { SignInPage } from '../pages/sign-in-page.js';
+import { expect, PHONE, signedInAtDesk, test, waitForServiceWorker } from '../fixtures.js';
 
 test.use({ viewport: PHONE });
 
@@ -118,12 +117,8 @@ test('a technician adds photos with no signal; they upload once online, and the 
   await page.screenshot({ path: testInfo.outputPath('phone-sync.png'), fullPage: true });
 
   // At the desk: the job's photo trail, in the order the photos were taken.
-  const desk = await browser.newContext({ viewport: DESK, serviceWorkers: 'block' });
+  const { context: desk, page: office } = await signedInAtDesk(browser, 'office@larkfield.example');
   try {
-    const office = await desk.newPage();
-    const officeSignIn = new SignInPage(office);
-    await officeSignIn.goto();
-    await officeSignIn.signIn('office@larkfield.example');
     await office.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
     await expect(office.getByRole('table', { name: 'Jobs' }).getByRole('row', { name: /LED-0041/ })).toContainText('Orchard Rise');
     await office.screenshot({ path: testInfo.outputPath('office-jobs.png') });

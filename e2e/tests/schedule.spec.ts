@@ -1,5 +1,4 @@
-import { DESK, expect, test } from '../fixtures.js';
-import { DEMO_PASSWORD } from '../pages/sign-in-page.js';
+import { apiSession, DESK, expect, test } from '../fixtures.js';
 
 test.use({ viewport: DESK });
 
@@ -27,8 +26,7 @@ test('the office books a visit for a technician and their phone receives it', as
   await page.screenshot({ path: 'test-results/schedule-week.png' });
 
   // Aled's phone gets it on its next pull.
-  const signIn = await request.post('/api/auth/sign-in', { data: { email: 'tech2@larkfield.example', password: DEMO_PASSWORD } });
-  const { accessToken, user } = await signIn.json();
+  const { accessToken, user } = await apiSession(request, 'tech2@larkfield.example');
   const pulled = await (await request.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=schedule-e2e', { headers: { authorization: `Bearer ${accessToken}` } })).json();
   const booked = pulled.changes.filter((c: { entity: string; row: { plannedEnd?: string; technicianIds?: string[] } | null }) => c.entity === 'visit' && c.row?.plannedEnd?.endsWith('T17:45:00.000Z') && c.row.technicianIds?.includes(user.id));
   expect(booked).toHaveLength(1);

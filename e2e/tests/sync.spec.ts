@@ -1,6 +1,5 @@
 import type { APIRequestContext } from '@playwright/test';
-import { DESK, expect, PHONE, test, waitForServiceWorker } from '../fixtures.js';
-import { DEMO_PASSWORD, SignInPage } from '../pages/sign-in-page.js';
+import { apiSession, expect, PHONE, signedInAtDesk, test, waitForServiceWorker } from '../fixtures.js';
 
 test.use({ viewport: PHONE });
 
@@ -13,9 +12,7 @@ interface PulledChange {
 
 /** Everything the office can see, read the way any device reads it: pull from the start until there is no more. */
 async function officeRows(request: APIRequestContext): Promise<PulledChange[]> {
-  const signIn = await request.post('/api/auth/sign-in', { data: { email: 'office@larkfield.example', password: DEMO_PASSWORD } });
-  expect(signIn.ok()).toBe(true);
-  const { accessToken } = (await signIn.json()) as { accessToken: string };
+  const { accessToken } = await apiSession(request, 'office@larkfield.example');
   const deviceId = `office-e2e-${Date.now()}`;
   const changes: PulledChange[] = [];
   let checkpoint = 0;
@@ -98,12 +95,8 @@ test('a technician records a note and a circuit with no signal, and the office g
   expect(added[0]!.row).toMatchObject({ description: circuitDescription, kind: 'radial', siteId: notes[0]!.row!.siteId });
 
   // And in the office's own screens, at the desk.
-  const desk = await browser.newContext({ viewport: DESK, serviceWorkers: 'block' });
+  const { context: desk, page: office } = await signedInAtDesk(browser, 'office@larkfield.example');
   try {
-    const office = await desk.newPage();
-    const officeSignIn = new SignInPage(office);
-    await officeSignIn.goto();
-    await officeSignIn.signIn('office@larkfield.example');
     await office.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Customers & sites' }).click();
     await office.getByRole('table', { name: 'Sites' }).getByRole('link', { name: 'Orchard Rise' }).click();
     const row = office.getByRole('table', { name: 'Circuits' }).getByRole('row', { name: new RegExp(circuitNumber) });
