@@ -1,6 +1,6 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { formatHlc, type Mutation, type MutationResult, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
-import { DataSource, type EntityManager, IsNull } from 'typeorm';
+import { type EntityManager, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
 import { type Actor, SyncEngine } from '../../sync/sync-engine.service.js';
@@ -58,7 +58,6 @@ export abstract class RecordsService<Q extends PageQueryDto> {
   protected abstract listing(query: Q): Listing;
 
   constructor(
-    protected readonly dataSource: DataSource,
     protected readonly queue: WriteQueue,
     protected readonly engine: SyncEngine,
   ) {}
