@@ -387,7 +387,7 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
       const visit = await create('/api/visits', { jobId: job.id, siteId: seed.orchard!.id, plannedStart: '2030-02-01T09:00:00Z', status: 'finished' });
       const issued = await push(office, {
         entity: 'document', id: uuidv7(), baseVersion: 0,
-        set: { jobId: job.id, siteId: seed.orchard!.id, kind: 'certificate', number: 'EIC-0001', issuedAt: new Date().toISOString() },
+        set: { jobId: job.id, siteId: seed.orchard!.id, kind: 'minor-works', number: 'EIC-0001', issuedAt: new Date().toISOString() },
       });
       expect(issued.body.results[0].status).toBe('applied');
 

@@ -59,8 +59,8 @@ describe('sync: push and pull', () => {
       mutation('photo', make('photo'), { visitId: ids.visit!, siteId: ids.site!, caption: 'Board before work', tags: ['before close-up'], sha256: 'a'.repeat(64), sizeBytes: 1234, width: 800, height: 600 }),
       mutation('cableRun', make('cableRun'), { siteId: ids.site!, label: 'G-01', medium: 'Cat6A', status: 'traced', traceMethod: 'tone-and-probe', wiremap: { near: [1, 2, 3, 4, 5, 6, 7, 8] } }),
       mutation('pointChange', make('pointChange'), { visitId: ids.visit!, siteId: ids.site!, circuitId: ids.circuit!, action: 'add', connection: 'radial', toDescription: 'Above the bench', toHeightMm: 1100 }),
-      mutation('testResult', make('testResult'), { visitId: ids.visit!, siteId: ids.site!, circuitId: ids.circuit!, readings: { r1r2: 0.41, zs: 0.69, irMohm: 200 }, instrument: 'MFT serial 0001' }),
-      mutation('document', make('document'), { jobId: ids.job!, siteId: ids.site!, kind: 'certificate', number: 'MW-0099' }),
+      mutation('testResult', make('testResult'), { visitId: ids.visit!, siteId: ids.site!, circuitId: ids.circuit!, r1r2Ohm: 0.41, zsOhm: 0.69, irLiveEarthMOhm: 200, irTestVoltageV: 500, polarity: 'correct', instrument: 'MFT serial 0001' }),
+      mutation('document', make('document'), { jobId: ids.job!, siteId: ids.site!, kind: 'minor-works', number: 'MW-0099' }),
     ];
     const results = await push(t, office, 'office-desk-1', batch);
     expect(results.map((r) => r.status)).toEqual(batch.map(() => 'applied'));
@@ -227,7 +227,7 @@ describe('sync: push and pull', () => {
     const earlier = officeView.one('visit', (r) => r.status === 'finished');
     const note = officeView.one('note', (r) => r.visitId === earlier.id);
     await push(t, office, 'office-desk-1', [
-      mutation('document', uuidv7(), { jobId: earlier.jobId as string, siteId: earlier.siteId as string, kind: 'certificate', number: 'MW-0033', issuedAt: '2026-11-27T16:00:00.000Z' }),
+      mutation('document', uuidv7(), { jobId: earlier.jobId as string, siteId: earlier.siteId as string, kind: 'minor-works', number: 'MW-0033', issuedAt: '2026-11-27T16:00:00.000Z' }),
     ]);
     const [edit] = await push(t, tech2, 'tech2-phone', [mutation('note', note.id, { text: 'Changed after signing' }, { baseVersion: note.version })]);
     expect(edit).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)] });
@@ -237,6 +237,30 @@ describe('sync: push and pull', () => {
     const res = await t.http.post(`/api/conflicts/${edit!.conflictIds![0]}/resolve`).set('authorization', `Bearer ${office.accessToken}`).send({ choice: 'discarded' });
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/issued document/);
+  });
+
+  it('locks a visit signed off on site: a technician’s later edits become conflicts, new records still arrive, the office may correct', async () => {
+    const visit = myVisitToday();
+    const testId = uuidv7();
+    const [created, finished] = await push(t, tech1, 'tech1-phone', [
+      mutation('testResult', testId, { visitId: visit.id, siteId: visit.siteId as string, r1r2Ohm: 0.31, zsOhm: 0.59 }, { deviceId: 'tech1-phone' }),
+      mutation('visit', visit.id, { status: 'finished', signedByName: 'Sam Brannigan', signedAt: new Date().toISOString(), signatureSvg: '<svg xmlns="http://www.w3.org/2000/svg"/>' }, { baseVersion: visit.version, deviceId: 'tech1-phone' }),
+    ]);
+    expect([created!.status, finished!.status]).toEqual(['applied', 'applied']);
+    // A second phone, offline until now, edits the reading after the visit was signed.
+    const [edit] = await push(t, tech1, 'tech1-tablet', [mutation('testResult', testId, { zsOhm: 0.95 }, { baseVersion: created!.version, deviceId: 'tech1-tablet' })]);
+    expect(edit).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)] });
+    const [reopen] = await push(t, tech1, 'tech1-tablet', [mutation('visit', visit.id, { status: 'on-site' }, { baseVersion: finished!.version, deviceId: 'tech1-tablet' })]);
+    expect(reopen).toMatchObject({ status: 'merged' });
+    const [late] = await push(t, tech1, 'tech1-tablet', [mutation('note', uuidv7(), { visitId: visit.id, siteId: visit.siteId as string, text: 'Customer asked for a spare fuse; left in the drawer.' }, { deviceId: 'tech1-tablet' })]);
+    expect(late!.status).toBe('applied');
+    await officeView.pullAll(t, office);
+    expect(officeView.rows.get(`testResult:${testId}`)!.zsOhm).toBe(0.59);
+    expect(officeView.rows.get(`visit:${visit.id}`)!.status).toBe('finished');
+    expect(officeView.one('conflict', (r) => r.id === edit!.conflictIds![0])).toMatchObject({ reason: 'locked-by-sign-off', field: 'zsOhm', keptValue: 0.59, discardedValue: 0.95 });
+    // The office is not held by the sign-off lock.
+    const [fix] = await push(t, office, 'office-desk-1', [mutation('testResult', testId, { instrument: 'Loop tester, serial 4471' }, { baseVersion: created!.version })]);
+    expect(fix!.status).toBe('applied');
   });
 
   it('lets the office settle a conflict; the chosen value reaches the phones', async () => {

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import {
   type EntitySpec,
   fieldError,
+  FINISHED_VISIT_STATUS,
   type FieldValue,
   isHlc,
   isSyncEntity,
@@ -132,7 +133,8 @@ export class SyncEngine {
       if (isDelete) return { mutationId, status: 'applied', version: 0, fieldVersions: {} };
       return this.create(em, actor, spec, m, set);
     }
-    if (await this.isLocked(em, spec, m.entity, existing, set)) return this.lockedToConflicts(em, actor, m, existing, set, isDelete);
+    const lock = await this.lockOf(em, actor, spec, m.entity, existing, set);
+    if (lock) return this.lockedToConflicts(em, actor, m, existing, set, isDelete, lock);
     if (isDelete) return this.remove(em, actor, m, existing);
     return this.update(em, actor, spec, m, existing, set);
   }
@@ -208,12 +210,12 @@ export class SyncEngine {
   }
 
   /** A signed certificate's records do not change under it: every attempted change goes to the office as a conflict. */
-  private async lockedToConflicts(em: EntityManager, actor: Actor, m: Mutation, row: SyncRecord, set: Record<string, FieldValue>, isDelete: boolean): Promise<MutationResult> {
+  private async lockedToConflicts(em: EntityManager, actor: Actor, m: Mutation, row: SyncRecord, set: Record<string, FieldValue>, isDelete: boolean, reason: LockReason): Promise<MutationResult> {
     const conflictIds: string[] = [];
     const entries: Array<[string, unknown]> = isDelete ? [['*', 'deleted']] : Object.entries(set).filter(([f, v]) => !sameValue(row[f], v));
     for (const [field, value] of entries) {
       const current = { value: field === '*' ? 'kept' : row[field], by: row.fieldMeta[field]?.by ?? null, hlc: row.fieldMeta[field]?.hlc ?? null, deviceId: null };
-      conflictIds.push(await this.writeConflict(em, actor, m.entity, row.id, field, 'locked-by-document', m.baseVersion, current, { value, by: actor.userId, hlc: m.hlc, deviceId: actor.deviceId }));
+      conflictIds.push(await this.writeConflict(em, actor, m.entity, row.id, field, reason, m.baseVersion, current, { value, by: actor.userId, hlc: m.hlc, deviceId: actor.deviceId }));
     }
     return { mutationId: m.mutationId, status: conflictIds.length ? 'merged' : 'applied', version: row.version, fieldVersions: versionsOf(row.fieldMeta), ...(conflictIds.length ? { conflictIds } : {}) };
   }
@@ -287,15 +289,25 @@ export class SyncEngine {
     }
   }
 
-  /** Records behind an issued certificate or report: the rows of that job's visits, and the issued document itself. */
-  private async isLocked(em: EntityManager, spec: EntitySpec, entity: SyncEntityName, row: SyncRecord, set: Record<string, FieldValue>): Promise<boolean> {
-    if (entity === 'document') return row.issuedAt != null && Object.keys(set).some((f) => f !== 'emailedAt');
-    if (!spec.visitField) return false;
+  /**
+   * Why a row may not change under this writer, or null:
+   * - `locked-by-document`: it is behind an issued certificate or report (the rows of that job's visits, and the
+   *   issued document itself), for everyone;
+   * - `locked-by-sign-off`: its visit was finished and signed on site, for technicians (the office may still put
+   *   things right, and reopening the visit unlocks it).
+   * New rows are never locked: a photo taken after signing still reaches the office.
+   */
+  private async lockOf(em: EntityManager, actor: Actor, spec: EntitySpec, entity: SyncEntityName, row: SyncRecord, set: Record<string, FieldValue>): Promise<LockReason | null> {
+    if (entity === 'document') return row.issuedAt != null && Object.keys(set).some((f) => !DOCUMENT_FIELDS_AFTER_ISSUE.has(f)) ? 'locked-by-document' : null;
+    if (!spec.visitField) return null;
     const visitId = (spec.visitField === 'id' ? row.id : row.visitId) as string | null;
-    if (!visitId) return false;
-    const visit = await em.getRepository<SyncRecord>('visit').findOne({ where: { id: visitId }, withDeleted: true });
-    if (!visit?.jobId) return false;
-    return (await em.getRepository<SyncRecord>('document').countBy({ jobId: visit.jobId as string, issuedAt: Not(IsNull()), deletedAt: IsNull() })) > 0;
+    if (!visitId) return null;
+    const visit = spec.visitField === 'id' ? row : await em.getRepository<SyncRecord>('visit').findOne({ where: { id: visitId }, withDeleted: true });
+    if (!visit?.jobId) return null;
+    const issued = await em.getRepository<SyncRecord>('document').countBy({ jobId: visit.jobId as string, issuedAt: Not(IsNull()), deletedAt: IsNull() });
+    if (issued > 0) return 'locked-by-document';
+    if (actor.role === 'technician' && visit.status === FINISHED_VISIT_STATUS) return 'locked-by-sign-off';
+    return null;
   }
 
   /** Changes a row the server owns (a conflict's resolution) and numbers the change so devices pull it. */
@@ -328,6 +340,11 @@ export class SyncEngine {
     await em.upsert(SyncChange, { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted }, ['entity', 'rowId']);
   }
 }
+
+type LockReason = 'locked-by-document' | 'locked-by-sign-off';
+
+/** An issued document's own fields that still change: how its e-mail is getting on. */
+const DOCUMENT_FIELDS_AFTER_ISSUE = new Set(['emailState', 'emailedTo', 'emailedAt', 'emailError']);
 
 interface Batch {
   applied: Map<string, AppliedMutation>;

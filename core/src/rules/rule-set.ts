@@ -137,6 +137,18 @@ export interface RuleSet {
     readonly protectionMethodsSource: string;
   };
 
+  readonly circuitTests: {
+    /** Which tests a certificate for an alteration must show results for, and where that is laid down. */
+    readonly requiredTestsSource: string;
+    readonly polaritySource: string;
+    readonly protectiveConductorSource: string;
+    /** At step 3 of the ring test the highest R1+R2 should be about (r1 + r2) / 4; this much either way passes (Ω). */
+    readonly ringR1R2Tolerance: SourcedLimit;
+    /** Lower insulation test voltage allowed between live conductors and earth where equipment may be damaged (V). */
+    readonly reducedInsulationTestV: SourcedLimit;
+    readonly rcdButtonSource: string;
+  };
+
   readonly cabling: {
     readonly lengthLimitsM: Readonly<Record<LinkKind, SourcedLimit>>;
     readonly pinAssignmentSource: string;

@@ -239,6 +239,21 @@ export const PERMANENT_LINK_MAX_LENGTH_M: SourcedLimit = {
   source: 'ANSI/TIA-568 and ISO/IEC 11801 (permanent link)',
 };
 
+// ─── Tests for a certificate ────────────────────────────────────────────────
+
+/** Step 3 of the ring test: the highest R1+R2 should sit close to (r1 + r2) / 4. */
+export const RING_R1R2_TOLERANCE_OHM: SourcedLimit = {
+  value: 0.05,
+  unit: 'Ω',
+  source: `common trade practice, with the ${GN3} step 3 expectation of (r1 + r2) / 4, no published tolerance`,
+};
+
+export const REDUCED_INSULATION_TEST_V: SourcedLimit = {
+  value: 250,
+  unit: 'V',
+  source: `${BS7671} Reg 643.3.3 (250 V DC between live conductors and earth where equipment may affect the result)`,
+};
+
 /** Exact SI value; 3 × 10⁸ would read about 0.07 % long. */
 export const SPEED_OF_LIGHT_M_PER_S: SourcedLimit = {
   value: 299_792_458,
@@ -312,6 +327,15 @@ export const UK_BS7671_2018_A2_2022: RuleSet = freezeRuleSet({
     rcdMaxMa: SAFE_ZONE_RCD_MAX_MA,
     metallicPartsSource: `${BS7671} Reg 522.6.203`,
     protectionMethodsSource: `${BS7671} Reg 522.6.204`,
+  },
+  circuitTests: {
+    // The model minor works certificate lists these tests for the altered circuit.
+    requiredTestsSource: `${BS7671} Appendix 6 (model minor electrical installation works certificate: test results of the altered circuit)`,
+    polaritySource: `${BS7671} Reg 643.6`,
+    protectiveConductorSource: `${BS7671} Reg 643.2.1`,
+    ringR1R2Tolerance: RING_R1R2_TOLERANCE_OHM,
+    reducedInsulationTestV: REDUCED_INSULATION_TEST_V,
+    rcdButtonSource: `${BS7671} Reg 643.8 and Appendix 6 (RCD test button operation)`,
   },
   cabling: {
     lengthLimitsM: { channel: CHANNEL_MAX_LENGTH_M, 'permanent-link': PERMANENT_LINK_MAX_LENGTH_M },

@@ -16,6 +16,24 @@ describe('synced entities', () => {
     expect(SYNC_ENTITIES.visit.fields.status?.technician).toBe(true);
   });
 
+  it('lets a technician record readings, sign-off and cable tests, each reading a field of its own', () => {
+    for (const f of ['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'irTestVoltageV', 'polarity', 'zsOhm', 'rcdTripMs', 'instrument']) {
+      expect(SYNC_ENTITIES.testResult.fields[f]?.technician, f).toBe(true);
+    }
+    for (const f of ['signatureSvg', 'signedAt', 'signedByName', 'observations', 'departures', 'cautionsReadAt']) {
+      expect(SYNC_ENTITIES.visit.fields[f]?.technician, f).toBe(true);
+    }
+    expect(SYNC_ENTITIES.cableRun.fields.tdrNs?.technician).toBe(true);
+    expect(SYNC_ENTITIES.document.fields.number?.technician).toBeFalsy();
+  });
+
+  it('refuses readings outside physical sense with a sentence that names the reading', () => {
+    expect(fieldError('testResult', 'zsOhm', -1)).toBe('testResult.zsOhm must be at least 0');
+    expect(fieldError('testResult', 'r1Ohm', 250)).toBe('testResult.r1Ohm must be at most 100');
+    expect(fieldError('testResult', 'irTestVoltageV', 499.5)).toBe('testResult.irTestVoltageV must be a whole number');
+    expect(fieldError('testResult', 'polarity', 'fine')).toMatch(/must be one of: correct, incorrect/);
+  });
+
   it('names the field and what is wrong with a value', () => {
     expect(fieldError('note', 'text', 'Back box fixed')).toBeNull();
     expect(fieldError('note', 'text', 42)).toBe('note.text must be text');

@@ -90,6 +90,15 @@ export const TRACE_METHODS = ['tone-and-probe', 'continuity', 'tdr', 'visual'] a
 export const POINT_ACTIONS = ['add', 'move', 'remove', 'replace'] as const;
 export const POINT_CONNECTIONS = ['ring-extension', 'unfused-spur', 'fused-spur', 'radial'] as const;
 export const PHOTO_SUBJECTS = ['cableRun', 'pointChange', 'circuit'] as const;
+export const DOCUMENT_KINDS = ['minor-works', 'cabling-report', 'photo-record'] as const;
+export const DOCUMENT_EMAIL_STATES = ['queued', 'sent', 'failed'] as const;
+export const LINK_KINDS = ['permanent-link', 'channel'] as const;
+export const POLARITY_RESULTS = ['correct', 'incorrect'] as const;
+export const RCD_BUTTON_RESULTS = ['operates', 'fails'] as const;
+/** Test voltages an insulation tester offers (V DC). */
+export const INSULATION_TEST_VOLTAGES = [250, 500, 1000] as const;
+/** A visit's records lock for technicians once it is finished (signed off on site). */
+export const FINISHED_VISIT_STATUS = 'finished';
 
 const ENTITY_LIST: readonly EntitySpec[] = [
   {
@@ -133,6 +142,11 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       jobId: office(ref('job'), true), siteId: office(ref('site'), true), technicianIds: office({ kind: 'refs', entity: 'user' }),
       plannedStart: office(when), plannedEnd: office(when),
       actualStart: seen(when), actualEnd: seen(when), status: seen(oneOf(...VISIT_STATUSES)),
+      // Shown once per visit before work on a circuit; kept as evidence that the cautions were read.
+      cautionsReadAt: seen(when),
+      // Sign-off on site: what was done, what was seen, where the work departs from the standard, and who signed.
+      workDescription: seen(text()), observations: seen(text()), departures: seen(text()),
+      signedByName: seen(str()), signedAt: seen(when), signatureSvg: seen({ kind: 'string', max: 60_000 }),
     },
   },
   {
@@ -155,6 +169,10 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       endBAreaId: seen(ref('area')), endBDescription: seen(str(300)), endBTermination: seen(str(100)),
       status: seen(oneOf(...CABLE_STATUSES)), traceMethod: seen(oneOf(...TRACE_METHODS)), lengthM: seen(num(0, 10_000)),
       nvp: seen(num(0.01, 1)), scheme: seen(oneOf('T568A', 'T568B')), wiremap: seen(json), verdict: seen(oneOf('pass', 'fail', 'check')),
+      // Round-trip time read off a TDR, from which lengthM was worked out with nvp.
+      tdrNs: seen(num(0, 100_000)), linkKind: seen(oneOf(...LINK_KINDS)), testedAt: seen(when),
+      // Cable runs belong to the site; this says on which visit it was last recorded, for that visit's trail.
+      lastVisitId: seen(ref('visit')),
     },
   },
   {
@@ -166,20 +184,34 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       toAreaId: seen(ref('area')), toDescription: seen(str(300)), toHeightMm: seen(num(0, 10_000)),
       connection: seen(oneOf(...POINT_CONNECTIONS)), liveCsaMm2: seen(num(0.5, 400)), cpcCsaMm2: seen(num(0.5, 400)),
       addedRouteM: seen(num(0, 1000)), fuseRatingA: seen(num(0, 100)), loadW: seen(num(0, 100_000)),
+      // The ring's end-to-end readings before it was broken into, for the predicted values after the extension.
+      beforeR1Ohm: seen(num(0, 100)), beforeRnOhm: seen(num(0, 100)), beforeR2Ohm: seen(num(0, 100)),
+      // A new concealed route drawn on the wall: the safe-zone check's input (wall, accessory, route, depth, RCD).
+      concealedRoute: seen(json),
     },
   },
   {
     name: 'testResult', table: 'test_result', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
     fields: {
       visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), circuitId: seen(ref('circuit')),
-      readings: seen(json), instrument: seen(str(200)), verdicts: seen(json),
+      // One field per reading, so two people filling in different readings never collide.
+      r1Ohm: seen(num(0, 100)), rnOhm: seen(num(0, 100)), r2Ohm: seen(num(0, 100)), r1r2Ohm: seen(num(0, 100)),
+      irLiveLiveMOhm: seen(num(0, 10_000)), irLiveEarthMOhm: seen(num(0, 10_000)), irTestVoltageV: seen(int(50, 5_000)),
+      polarity: seen(oneOf(...POLARITY_RESULTS)), zsOhm: seen(num(0, 2_000)),
+      rcdTripMs: seen(num(0, 10_000)), rcdTripMs5x: seen(num(0, 10_000)), rcdButton: seen(oneOf(...RCD_BUTTON_RESULTS)),
+      instrument: seen(str(200)), testedAt: seen(when),
+      // What the phone's checks said, with the rule set's id; the server works them out again before issuing.
+      verdicts: seen(json),
     },
   },
   {
     name: 'document', table: 'document', technicianWrite: 'none', technicianVisible: true, siteField: 'siteId', visitField: null,
     fields: {
-      jobId: office(ref('job'), true), siteId: office(ref('site'), true), kind: office(oneOf('certificate', 'cabling-report'), true),
-      number: office(str(40)), signerName: office(str()), pdfSha256: office(str(64)), issuedAt: office(when), emailedAt: office(when),
+      jobId: office(ref('job'), true), siteId: office(ref('site'), true), kind: office(oneOf(...DOCUMENT_KINDS), true),
+      visitId: office(ref('visit')), number: office(str(40)), title: office(str()), signerName: office(str()),
+      pdfSha256: office(str(64)), pdfBytes: office(int(0)), issuedAt: office(when), issuedById: office(ref('user')),
+      // Sending by e-mail: queued, then sent, or failed with the reason (retried until it gives up).
+      emailState: office(oneOf(...DOCUMENT_EMAIL_STATES)), emailedTo: office(str(254)), emailedAt: office(when), emailError: office(str(500)),
     },
   },
   {

@@ -1,5 +1,5 @@
 import { VISIT_STATUSES } from '@wiretrail/core';
-import { ChoiceField, DateTimeField, IdField, IdListField } from '../../common/records/record-fields.js';
+import { ChoiceField, DateTimeField, IdField, IdListField, TextField } from '../../common/records/record-fields.js';
 
 export class CreateVisitDto {
   @IdField('job', { required: true })
@@ -25,4 +25,25 @@ export class CreateVisitDto {
 
   @ChoiceField(VISIT_STATUSES)
   status?: (typeof VISIT_STATUSES)[number] | null;
+
+  @DateTimeField({ description: 'when the safety cautions were read on site' })
+  cautionsReadAt?: string | null;
+
+  @TextField(20_000, { description: 'description and extent of the work, as signed' })
+  workDescription?: string | null;
+
+  @TextField(20_000)
+  observations?: string | null;
+
+  @TextField(20_000, { description: 'departures from the standard, as signed' })
+  departures?: string | null;
+
+  @TextField(200)
+  signedByName?: string | null;
+
+  @DateTimeField()
+  signedAt?: string | null;
+
+  @TextField(60_000, { description: 'the signature drawn on site, as SVG' })
+  signatureSvg?: string | null;
 }

@@ -21,6 +21,7 @@ export const REASONS: Record<string, string> = {
   'office-owned': 'An office detail changed twice at once. The change by the more senior role (or, between equals, the later one) was kept.',
   'edit-beats-delete': 'Deleted on one device while edited on another. The record was kept.',
   'locked-by-document': 'Changed after a certificate or report was issued for this work. The issued record stays as it was.',
+  'locked-by-sign-off': 'Changed on a phone after the visit was finished and signed. The signed record stays as it was until you keep the change.',
 };
 
 export function showValue(value: unknown): string {
