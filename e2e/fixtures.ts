@@ -38,3 +38,53 @@ export async function signedInAtDesk(browser: Browser, email: string): Promise<{
   await signIn.signIn(email);
   return { context, page };
 }
+
+export interface PulledChange {
+  entity: string;
+  id: string;
+  deleted: boolean;
+  row: Record<string, unknown> | null;
+}
+
+/** Everything the office can see, read the way any device reads it: pull from the start until there is no more. */
+export async function officeRows(request: APIRequestContext): Promise<PulledChange[]> {
+  const { accessToken } = await apiSession(request, 'office@larkfield.example');
+  const deviceId = `office-e2e-${Date.now()}-${Math.random().toString(36).slice(2, 8)}`;
+  const changes: PulledChange[] = [];
+  let checkpoint = 0;
+  for (;;) {
+    const res = await request.get(`/api/sync/pull?checkpoint=${checkpoint}&limit=1000&deviceId=${deviceId}`, { headers: { authorization: `Bearer ${accessToken}` } });
+    if (!res.ok()) throw new Error(`pull answered ${res.status()}`);
+    const page = (await res.json()) as { changes: PulledChange[]; checkpoint: number; hasMore: boolean };
+    changes.push(...page.changes);
+    checkpoint = page.checkpoint;
+    if (!page.hasMore) return changes;
+  }
+}
+
+/** The office books a job and a visit for a technician through the API, so a test has a visit of its own. */
+export async function bookVisit(
+  request: APIRequestContext,
+  opts: { technicianEmail: string; siteName: string; title: string; startHour?: number; endHour?: number },
+): Promise<{ jobId: string; visitId: string }> {
+  const { accessToken } = await apiSession(request, 'office@larkfield.example');
+  const headers = { authorization: `Bearer ${accessToken}` };
+  const sites = (await (await request.get(`/api/sites?search=${encodeURIComponent(opts.siteName)}`, { headers })).json()) as { items: { id: string; customerId: string; name: string }[] };
+  const site = sites.items.find((s) => s.name === opts.siteName);
+  if (!site) throw new Error(`no site called ${opts.siteName}`);
+  const tech = await apiSession(request, opts.technicianEmail);
+  const job = await request.post('/api/jobs', { headers, data: { siteId: site.id, customerId: site.customerId, title: opts.title, status: 'booked' } });
+  if (!job.ok()) throw new Error(`booking the job answered ${job.status()}: ${await job.text()}`);
+  const jobId = ((await job.json()) as { id: string }).id;
+  const at = (h: number) => {
+    const d = new Date();
+    d.setHours(h, 0, 0, 0);
+    return d.toISOString();
+  };
+  const visit = await request.post('/api/visits', {
+    headers,
+    data: { jobId, siteId: site.id, technicianIds: [tech.user.id], plannedStart: at(opts.startHour ?? 13), plannedEnd: at(opts.endHour ?? 16), status: 'planned' },
+  });
+  if (!visit.ok()) throw new Error(`booking the visit answered ${visit.status()}: ${await visit.text()}`);
+  return { jobId, visitId: ((await visit.json()) as { id: string }).id };
+}

@@ -1,32 +1,6 @@
-import type { APIRequestContext } from '@playwright/test';
-import { apiSession, expect, PHONE, signedInAtDesk, test, waitForServiceWorker } from '../fixtures.js';
+import { bookVisit, expect, officeRows, PHONE, signedInAtDesk, test, waitForServiceWorker } from '../fixtures.js';
 
 test.use({ viewport: PHONE });
-
-interface PulledChange {
-  entity: string;
-  id: string;
-  deleted: boolean;
-  row: Record<string, unknown> | null;
-}
-
-/** Everything the office can see, read the way any device reads it: pull from the start until there is no more. */
-async function officeRows(request: APIRequestContext): Promise<PulledChange[]> {
-  const { accessToken } = await apiSession(request, 'office@larkfield.example');
-  const deviceId = `office-e2e-${Date.now()}`;
-  const changes: PulledChange[] = [];
-  let checkpoint = 0;
-  for (;;) {
-    const res = await request.get(`/api/sync/pull?checkpoint=${checkpoint}&limit=1000&deviceId=${deviceId}`, {
-      headers: { authorization: `Bearer ${accessToken}` },
-    });
-    expect(res.ok()).toBe(true);
-    const page = (await res.json()) as { changes: PulledChange[]; checkpoint: number; hasMore: boolean };
-    changes.push(...page.changes);
-    checkpoint = page.checkpoint;
-    if (!page.hasMore) return changes;
-  }
-}
 
 test('a technician records a note and a circuit with no signal, and the office gets them once the phone is back online', async ({
   page,
@@ -40,6 +14,9 @@ test('a technician records a note and a circuit with no signal, and the office g
   const noteText = `Lounge sockets moved; ring continuity checked before boxing in (${stamp})`;
   const circuitNumber = `E${stamp.slice(-6)}`;
   const circuitDescription = `Fused spur for the electric fire (${stamp})`;
+  // A visit of this test's own, so that reading the cautions on it happens once whatever else runs.
+  const title = `Sockets and a spur at Orchard Rise (${stamp})`;
+  await bookVisit(request, { technicianEmail: 'tech1@larkfield.example', siteName: 'Orchard Rise', title });
 
   await signInPage.goto();
   await signInPage.signIn('tech1@larkfield.example');
@@ -47,20 +24,24 @@ test('a technician records a note and a circuit with no signal, and the office g
   await waitForServiceWorker(page);
   // The first sync brings the technician's visits onto the phone.
   await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
-  const visit = page.getByRole('region', { name: 'My visits' }).getByRole('link', { name: /Move two lounge sockets/ });
+  const visit = page.getByRole('region', { name: 'My visits' }).getByRole('link', { name: new RegExp(title.replace(/[()]/g, '.')) });
   await visit.click();
   await expect(page).toHaveURL(/\/visits\/[0-9a-f-]{36}$/);
   const visitId = page.url().split('/').pop()!;
-  await expect(page.getByRole('heading', { level: 1, name: /Move two lounge sockets/ })).toBeVisible();
-  await expect(page.getByText(/prove dead/)).toBeVisible();
+  await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
 
   await context.setOffline(true);
   await expect(page.getByText('No signal — saving on this phone')).toBeVisible();
 
   await page.getByLabel('Note', { exact: true }).fill(noteText);
   await page.getByRole('button', { name: 'Add note' }).click();
-  await expect(page.getByRole('list', { name: 'Notes on this visit' }).getByText(noteText)).toBeVisible();
+  await expect(page.getByRole('list', { name: 'Trail of this visit' }).getByText(noteText)).toBeVisible();
 
+  // Circuit work starts with the safety cautions, once per visit.
+  await page.getByRole('tab', { name: 'Circuits & tests' }).click();
+  await expect(page.getByText(/Prove it dead at the point of work/)).toBeVisible();
+  await page.getByRole('button', { name: 'I have read these cautions' }).click();
+  await expect(page.getByText(/prove dead/)).toBeVisible();
   const circuitForm = page.getByRole('form', { name: 'Add a circuit' });
   await expect(circuitForm.getByLabel('Board', { exact: true })).toHaveValue(/[0-9a-f-]{36}/);
   await circuitForm.getByLabel('Circuit number', { exact: true }).fill(circuitNumber);
@@ -70,14 +51,15 @@ test('a technician records a note and a circuit with no signal, and the office g
   const circuits = page.getByRole('list', { name: 'Circuits on this site' });
   await expect(circuits.getByText(`${circuitNumber} · ${circuitDescription}`)).toBeVisible();
 
-  await expect(page.getByText('No signal — saving on this phone · 2 waiting')).toBeVisible();
+  await expect(page.getByText('No signal — saving on this phone · 3 waiting')).toBeVisible();
 
   // Reloaded with no network: the service worker serves the app, the records come from the phone.
   await page.reload();
-  await expect(page.getByRole('heading', { level: 1, name: /Move two lounge sockets/ })).toBeVisible();
-  await expect(page.getByText(noteText)).toBeVisible();
+  await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
   await expect(page.getByText(`${circuitNumber} · ${circuitDescription}`)).toBeVisible();
-  await expect(page.getByText('No signal — saving on this phone · 2 waiting')).toBeVisible();
+  await page.getByRole('tab', { name: 'Trail' }).click();
+  await expect(page.getByText(noteText)).toBeVisible();
+  await expect(page.getByText('No signal — saving on this phone · 3 waiting')).toBeVisible();
 
   await context.setOffline(false);
   await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });

@@ -4,9 +4,25 @@ import { OfficeLayout } from '@/components/layouts/office-layout';
 import { HomeRedirect, RequireRole, RequireSession } from '@/components/layouts/session-gate';
 import { paths } from '@/config/paths';
 
-const technicianScreens: RouteObject[] = [
+export const technicianScreens: RouteObject[] = [
   { path: paths.today.path, lazy: () => import('./routes/technician/today') },
-  { path: paths.visit.path, lazy: () => import('./routes/technician/visit') },
+  {
+    path: paths.visit.path,
+    lazy: () => import('./routes/technician/visit'),
+    // Each section loads on its own, so the camera is ready before the wiremap or the signature pad arrive.
+    children: [
+      { index: true, lazy: () => import('./routes/technician/visit/trail') },
+      { path: paths.visitCables.path, lazy: () => import('./routes/technician/visit/cables') },
+      { path: paths.visitCable.path, lazy: () => import('./routes/technician/visit/cable') },
+      { path: paths.visitPoints.path, lazy: () => import('./routes/technician/visit/points') },
+      { path: paths.visitPoint.path, lazy: () => import('./routes/technician/visit/point') },
+      { path: paths.visitTests.path, lazy: () => import('./routes/technician/visit/tests') },
+      { path: paths.visitCircuitTest.path, lazy: () => import('./routes/technician/visit/circuit-test') },
+      { path: paths.visitSignOff.path, lazy: () => import('./routes/technician/visit/sign-off') },
+    ],
+  },
+  { path: paths.cableLabels.path, lazy: () => import('./routes/technician/cable-labels') },
+  { path: paths.cable.path, lazy: () => import('./routes/technician/cable') },
   { path: paths.sync.path, lazy: () => import('./routes/technician/sync') },
   { path: paths.me.path, lazy: () => import('./routes/technician/me') },
 ];

@@ -33,6 +33,9 @@ export interface SiteRow extends LocalRow {
   address: string;
   postcode?: string | null;
   accessNotes?: string | null;
+  earthing?: string | null;
+  zeOhm?: number | null;
+  pfcKa?: number | null;
 }
 export interface JobRow extends LocalRow {
   siteId: string;
@@ -47,7 +50,21 @@ export interface VisitRow extends LocalRow {
   technicianIds?: string[] | null;
   plannedStart?: string | null;
   plannedEnd?: string | null;
+  actualStart?: string | null;
+  actualEnd?: string | null;
   status?: string | null;
+  cautionsReadAt?: string | null;
+  workDescription?: string | null;
+  observations?: string | null;
+  departures?: string | null;
+  signedByName?: string | null;
+  signedAt?: string | null;
+  signatureSvg?: string | null;
+}
+export interface AreaRow extends LocalRow {
+  siteId: string;
+  name: string;
+  level?: string | null;
 }
 export interface BoardRow extends LocalRow {
   siteId: string;
@@ -60,6 +77,78 @@ export interface CircuitRow extends LocalRow {
   number: string;
   description?: string | null;
   kind?: string | null;
+  deviceType?: string | null;
+  deviceRatingA?: number | null;
+  rcdRatingMa?: number | null;
+  rcdType?: string | null;
+  liveCsaMm2?: number | null;
+  cpcCsaMm2?: number | null;
+}
+export interface CableRunRow extends LocalRow {
+  siteId: string;
+  label: string;
+  medium?: string | null;
+  endAAreaId?: string | null;
+  endADescription?: string | null;
+  endATermination?: string | null;
+  endBAreaId?: string | null;
+  endBDescription?: string | null;
+  endBTermination?: string | null;
+  status?: string | null;
+  traceMethod?: string | null;
+  lengthM?: number | null;
+  tdrNs?: number | null;
+  nvp?: number | null;
+  linkKind?: string | null;
+  scheme?: 'T568A' | 'T568B' | null;
+  /** { nearEnd, farEnd, shorts, opens }: the colours seen at each end's pins (end A is the near end). */
+  wiremap?: unknown;
+  verdict?: string | null;
+  testedAt?: string | null;
+  lastVisitId?: string | null;
+}
+export interface PointChangeRow extends LocalRow {
+  visitId: string;
+  siteId: string;
+  circuitId?: string | null;
+  action: string;
+  accessoryKind?: string | null;
+  fromAreaId?: string | null;
+  fromDescription?: string | null;
+  fromHeightMm?: number | null;
+  toAreaId?: string | null;
+  toDescription?: string | null;
+  toHeightMm?: number | null;
+  connection?: string | null;
+  liveCsaMm2?: number | null;
+  cpcCsaMm2?: number | null;
+  addedRouteM?: number | null;
+  fuseRatingA?: number | null;
+  loadW?: number | null;
+  beforeR1Ohm?: number | null;
+  beforeRnOhm?: number | null;
+  beforeR2Ohm?: number | null;
+  concealedRoute?: unknown;
+}
+export interface TestResultRow extends LocalRow {
+  visitId: string;
+  siteId: string;
+  circuitId?: string | null;
+  r1Ohm?: number | null;
+  rnOhm?: number | null;
+  r2Ohm?: number | null;
+  r1r2Ohm?: number | null;
+  irLiveLiveMOhm?: number | null;
+  irLiveEarthMOhm?: number | null;
+  irTestVoltageV?: number | null;
+  polarity?: 'correct' | 'incorrect' | null;
+  zsOhm?: number | null;
+  rcdTripMs?: number | null;
+  rcdTripMs5x?: number | null;
+  rcdButton?: 'operates' | 'fails' | null;
+  instrument?: string | null;
+  testedAt?: string | null;
+  verdicts?: unknown;
 }
 export interface PhotoRow extends LocalRow {
   visitId: string;
@@ -200,16 +289,16 @@ const ENTITY_INDEXES: Record<SyncEntityName, string> = {
 export class WiretrailDb extends Dexie {
   declare customer: Table<CustomerRow, string>;
   declare site: Table<SiteRow, string>;
-  declare area: Table<LocalRow, string>;
+  declare area: Table<AreaRow, string>;
   declare board: Table<BoardRow, string>;
   declare circuit: Table<CircuitRow, string>;
   declare job: Table<JobRow, string>;
   declare visit: Table<VisitRow, string>;
   declare photo: Table<PhotoRow, string>;
   declare note: Table<NoteRow, string>;
-  declare cableRun: Table<LocalRow, string>;
-  declare pointChange: Table<LocalRow, string>;
-  declare testResult: Table<LocalRow, string>;
+  declare cableRun: Table<CableRunRow, string>;
+  declare pointChange: Table<PointChangeRow, string>;
+  declare testResult: Table<TestResultRow, string>;
   declare document: Table<LocalRow, string>;
   declare conflict: Table<LocalRow, string>;
   declare outbox: Table<OutboxEntry, number>;

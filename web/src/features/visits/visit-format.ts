@@ -25,7 +25,6 @@ export function whenRecorded(iso?: string | null, now = new Date()): string {
 const VISIT_STATUS_WORDS: Record<string, string> = { planned: 'Planned', 'on-site': 'On site', finished: 'Finished', cancelled: 'Cancelled' };
 export const visitStatusWords = (status?: string | null) => VISIT_STATUS_WORDS[status ?? 'planned'] ?? status ?? 'Planned';
 
-export const CIRCUIT_KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
 
 /** Today and the next seven days, from midnight. */
 export function upcomingRange(now = new Date(), days = 7): { from: Date; to: Date } {

@@ -1,35 +1,38 @@
 import ArrowBack from '@mui/icons-material/ArrowBack';
+import DirectionsOutlined from '@mui/icons-material/DirectionsOutlined';
 import EventBusyOutlined from '@mui/icons-material/EventBusyOutlined';
-import PlaceOutlined from '@mui/icons-material/PlaceOutlined';
+import LockOutlined from '@mui/icons-material/LockOutlined';
+import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Chip from '@mui/material/Chip';
-import Divider from '@mui/material/Divider';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { FINISHED_VISIT_STATUS } from '@wiretrail/core';
+import { Outlet, Link as RouterLink, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
-import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
-import { VisitTrail } from '@/features/photos/components/visit-trail';
 import { useVisit } from '@/features/visits/api/get-visit';
-import { siteAddress } from '@/features/visits/components/visit-card';
-import { VisitCircuits } from '@/features/visits/components/visit-circuits';
-import { VisitNotes } from '@/features/visits/components/visit-notes';
-import { dayLabel, timeWindow, visitStatusWords } from '@/features/visits/visit-format';
+import { directionsHref, siteAddress } from '@/features/visits/components/visit-card';
+import { useVisitSection, VisitSections } from '@/features/visits/components/visit-sections';
+import { dayLabel, timeWindow, visitStatusWords, whenRecorded } from '@/features/visits/visit-format';
 import { useSession } from '@/lib/session';
+import type { VisitContext } from './visit-context';
 
 function BackToToday() {
   return (
-    <Button component={RouterLink} to={paths.today.path} startIcon={<ArrowBack />} sx={{ ml: -1.5, mb: 1 }}>
+    <Button component={RouterLink} to={paths.today.path} startIcon={<ArrowBack />} sx={{ ml: -1.5, mb: 0.5 }}>
       Today
     </Button>
   );
 }
 
+/** One visit: who, where and when at the top, then its sections. */
 export function Component() {
   const { visitId } = useParams();
   const summary = useVisit(visitId);
-  const userId = useSession()?.user.id ?? '';
+  const session = useSession();
+  // Who, where and when are read on arrival; inside a section they would only push the work down the screen.
+  const full = useVisitSection(visitId ?? '') === 'trail';
   if (summary === undefined) return null;
   if (summary === null) {
     return (
@@ -41,42 +44,57 @@ export function Component() {
       </>
     );
   }
-  const { visit, job, customer } = summary;
+  const { visit, job, customer, site } = summary;
+  const locked = visit.status === FINISHED_VISIT_STATUS;
+  const context: VisitContext = { summary, userId: session?.user.id ?? '', userName: session?.user.name ?? '', locked };
   return (
     <>
       <BackToToday />
-      <PageHeader
-        title={job?.title ?? 'Visit'}
-        subtitle={
-          <Stack component="span" direction="row" sx={{ gap: 0.5, alignItems: 'flex-start' }}>
-            <PlaceOutlined fontSize="small" sx={{ mt: '2px' }} />
-            <span>{siteAddress(summary)}</span>
+      <Typography variant="h1" sx={{ fontSize: '1.45rem' }}>
+        {job?.title ?? 'Visit'}
+      </Typography>
+      {full && (
+        <>
+          <Stack direction="row" sx={{ gap: 1, alignItems: 'center', flexWrap: 'wrap', mt: 0.75 }}>
+            <Typography variant="body2" sx={{ fontWeight: 500 }}>
+              {visit.plannedStart ? `${dayLabel(visit.plannedStart)} · ` : ''}
+              {timeWindow(visit.plannedStart, visit.plannedEnd)}
+            </Typography>
+            <Chip size="small" label={visitStatusWords(visit.status)} color={visit.status === 'on-site' ? 'secondary' : 'default'} />
+            {customer && (
+              <Typography variant="body2" color="text.secondary">
+                {customer.name}
+                {customer.phone ? ` · ${customer.phone}` : ''}
+              </Typography>
+            )}
           </Stack>
-        }
-      />
-      <Stack direction="row" sx={{ gap: 1, alignItems: 'center', flexWrap: 'wrap', mt: -1.5, mb: 2 }}>
-        <Typography variant="body2" sx={{ fontWeight: 500 }}>
-          {visit.plannedStart ? `${dayLabel(visit.plannedStart)} · ` : ''}
-          {timeWindow(visit.plannedStart, visit.plannedEnd)}
-        </Typography>
-        <Chip size="small" label={visitStatusWords(visit.status)} />
-        {customer && (
-          <Typography variant="body2" color="text.secondary">
-            {customer.name}
-            {customer.phone ? ` · ${customer.phone}` : ''}
-          </Typography>
-        )}
-      </Stack>
-      {summary.site?.accessNotes && (
-        <Typography variant="body2" sx={{ mb: 2 }}>
-          <strong>Access:</strong> {summary.site.accessNotes}
-        </Typography>
+          <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between', gap: 1, mt: 0.5 }}>
+            <Typography variant="body2" color="text.secondary">
+              {siteAddress(summary)}
+            </Typography>
+            {site && (
+              <Button component="a" href={directionsHref(site)} target="_blank" rel="noopener" startIcon={<DirectionsOutlined />} sx={{ flexShrink: 0 }}>
+                Directions
+              </Button>
+            )}
+          </Stack>
+          {site?.accessNotes && (
+            <Typography variant="body2" sx={{ mt: 0.5 }}>
+              <strong>Access:</strong> {site.accessNotes}
+            </Typography>
+          )}
+        </>
       )}
-      <Stack spacing={3} divider={<Divider flexItem />}>
-        <VisitTrail visit={visit} userId={userId} />
-        <VisitNotes visitId={visit.id} siteId={visit.siteId} />
-        <VisitCircuits siteId={visit.siteId} />
+      {locked && (
+        <Alert icon={<LockOutlined />} severity="info" sx={{ mt: 1.5 }}>
+          Signed off {visit.signedAt ? whenRecorded(visit.signedAt) : ''}
+          {visit.signedByName ? ` by ${visit.signedByName}` : ''}. The records are locked; a change made now goes to the office for review.
+        </Alert>
+      )}
+      <Stack sx={{ mt: 1.5 }}>
+        <VisitSections visitId={visit.id} />
       </Stack>
+      <Outlet context={context} />
     </>
   );
 }

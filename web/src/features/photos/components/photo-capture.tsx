@@ -34,10 +34,12 @@ interface Props {
   visitId: string;
   siteId: string;
   userId: string;
+  /** What the photos are of, chosen beforehand (a point change's own page); still changeable in the form. */
+  preset?: { subject?: `${PhotoSubjectType}:${string}`; areaId?: string | null; label?: string };
 }
 
 /** The camera button on a visit: take photos (or pick them from the gallery), then say what they show. */
-export function PhotoCapture({ visitId, siteId, userId }: Props) {
+export function PhotoCapture({ visitId, siteId, userId, preset }: Props) {
   const [files, setFiles] = useState<File[]>([]);
   const [saved, setSaved] = useState<string>('');
 
@@ -61,7 +63,7 @@ export function PhotoCapture({ visitId, siteId, userId }: Props) {
         startIcon={<PhotoCameraOutlined sx={{ fontSize: '2rem !important' }} />}
         sx={{ minHeight: 72, fontSize: '1.2rem', borderRadius: 3 }}
       >
-        Take or add photos
+        {preset?.label ?? 'Take or add photos'}
         <input type="file" accept="image/*" capture="environment" multiple onChange={choose} style={hiddenInput} />
       </Button>
       {/* Android opens the camera straight away for the button above; this one opens the gallery. */}
@@ -78,6 +80,7 @@ export function PhotoCapture({ visitId, siteId, userId }: Props) {
           visitId={visitId}
           siteId={siteId}
           userId={userId}
+          preset={preset}
           onClose={(count) => {
             setFiles([]);
             if (count > 0) setSaved(count === 1 ? 'Photo saved on this phone.' : `${count} photos saved on this phone.`);
@@ -101,13 +104,13 @@ interface DialogProps extends Props {
 
 const NO_SUBJECT = '';
 
-function PhotoDetailsDialog({ files: chosen, visitId, siteId, userId, onClose }: DialogProps) {
+function PhotoDetailsDialog({ files: chosen, visitId, siteId, userId, preset, onClose }: DialogProps) {
   const choices = useCaptureChoices(visitId, siteId);
   const tags = usePhoneTags();
   const [files, setFiles] = useState(chosen);
   const [captions, setCaptions] = useState<string[]>(() => chosen.map(() => ''));
-  const [areaId, setAreaId] = useState('');
-  const [subject, setSubject] = useState(NO_SUBJECT);
+  const [areaId, setAreaId] = useState(preset?.areaId ?? '');
+  const [subject, setSubject] = useState<string>(preset?.subject ?? NO_SUBJECT);
   const [picked, setPicked] = useState<string[]>([]);
   const [saving, setSaving] = useState<number | null>(null);
   const [error, setError] = useState<string | null>(null);

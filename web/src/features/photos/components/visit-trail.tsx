@@ -1,5 +1,8 @@
 import CableOutlined from '@mui/icons-material/CableOutlined';
 import ElectricalServicesOutlined from '@mui/icons-material/ElectricalServicesOutlined';
+import EventNoteOutlined from '@mui/icons-material/EventNoteOutlined';
+import PowerOutlined from '@mui/icons-material/PowerOutlined';
+import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
 import StickyNote2Outlined from '@mui/icons-material/StickyNote2Outlined';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
@@ -13,7 +16,7 @@ import { useState } from 'react';
 import type { VisitRow } from '@/lib/db';
 import { type UploadProgress, useUploadProgress } from '@/lib/photos/upload-progress';
 import { type PhotoStates, usePhotoStates } from '../api/get-photo-states';
-import { type TrailItem, useVisitTrail } from '../api/get-visit-trail';
+import { type TrailItem, type VisitEvent, useVisitTrail } from '../api/get-visit-trail';
 import { tagList, trailTime } from '../trail-time';
 import { LocalPhotoThumb } from './local-photo-thumb';
 import { PhotoBadge, photoBadge } from './photo-badge';
@@ -21,10 +24,15 @@ import { PhotoCapture } from './photo-capture';
 
 /** A visit with hundreds of photos stays quick: the trail shows this many at a time. */
 const PAGE = 20;
-/** Long notes are cut in the trail; the Notes list below has them whole. */
-const NOTE_CHARS = 60;
 
 const POINT_ACTION_WORDS: Record<string, string> = { add: 'New point', move: 'Point moved', remove: 'Point removed', replace: 'Point replaced' };
+const EVENT_WORDS: Record<VisitEvent, string> = { arrived: 'Arrived on site', 'cautions-read': 'Safety cautions read', 'signed-off': 'Signed off and finished' };
+const VERDICT_WORDS: Record<string, string> = { pass: 'passes', fail: 'fails', check: 'to check' };
+const READINGS_WORDS: Record<string, string> = { pass: 'All readings pass', fail: 'A reading fails', check: 'Readings to look at' };
+const readingsWords = (v: unknown): string => {
+  const overall = (v as { verdict?: unknown } | null)?.verdict;
+  return (typeof overall === 'string' ? READINGS_WORDS[overall] : null) ?? 'Readings recorded';
+};
 
 function IconTile({ children }: { children: ReactNode }) {
   return (
@@ -34,14 +42,14 @@ function IconTile({ children }: { children: ReactNode }) {
   );
 }
 
-function Row({ tile, title, lines, badge }: { tile: ReactNode; title: string; lines: string[]; badge?: ReactNode }) {
+function Row({ tile, title, lines, badge, wrap }: { tile: ReactNode; title: string; lines: string[]; badge?: ReactNode; wrap?: boolean }) {
   return (
     <ListItem divider sx={{ gap: 1.5, alignItems: 'flex-start', py: 1.25 }}>
       {tile}
       <Stack spacing={0.5} sx={{ minWidth: 0, flex: 1 }}>
         <Typography sx={{ fontWeight: 500, overflowWrap: 'anywhere' }}>{title}</Typography>
         {lines.filter(Boolean).map((line) => (
-          <Typography key={line} variant="body2" color="text.secondary" sx={{ overflowWrap: 'anywhere' }}>
+          <Typography key={line} variant="body2" color="text.secondary" sx={{ overflowWrap: 'anywhere', whiteSpace: wrap ? 'pre-wrap' : undefined }}>
             {line}
           </Typography>
         ))}
@@ -76,10 +84,31 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
         />
       );
     }
-    case 'note': {
-      const text = item.note.text.replace(/\s+/g, ' ').trim();
-      return <Row tile={<IconTile><StickyNote2Outlined /></IconTile>} title={`Note · ${when}`} lines={[text.length > NOTE_CHARS ? `${text.slice(0, NOTE_CHARS - 1).trimEnd()}…` : text]} />;
+    case 'note':
+      return <Row tile={<IconTile><StickyNote2Outlined /></IconTile>} title={`Note · ${when}`} lines={[item.note.text.trim()]} wrap />;
+    case 'cableRun': {
+      const c = item.cable;
+      const verdict = c.verdict ? (VERDICT_WORDS[c.verdict] ?? null) : null;
+      return (
+        <Row
+          tile={<IconTile><CableOutlined /></IconTile>}
+          title={`Cable ${c.label} · ${when}`}
+          lines={[[c.medium, c.scheme, c.lengthM != null ? `${c.lengthM} m` : null, verdict ? `test ${verdict}` : null].filter(Boolean).join(' · ')]}
+        />
+      );
     }
+    case 'testResult': {
+      const circuit = item.result.circuitId ? subjectNames.get(item.result.circuitId) : null;
+      return (
+        <Row
+          tile={<IconTile><SpeedOutlined /></IconTile>}
+          title={`Test results${circuit ? `, ${circuit.toLowerCase()}` : ''} · ${when}`}
+          lines={[readingsWords(item.result.verdicts)]}
+        />
+      );
+    }
+    case 'event':
+      return <Row tile={<IconTile><EventNoteOutlined /></IconTile>} title={`${EVENT_WORDS[item.event]} · ${when}`} lines={[]} />;
     case 'circuit':
       return (
         <Row
@@ -92,9 +121,9 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
       const c = item.change;
       return (
         <Row
-          tile={<IconTile><CableOutlined /></IconTile>}
+          tile={<IconTile><PowerOutlined /></IconTile>}
           title={`${POINT_ACTION_WORDS[String(c.action)] ?? 'Point change'} · ${when}`}
-          lines={[String(c.accessoryKind ?? '')]}
+          lines={[String(c.accessoryKind ?? ''), c.toDescription ?? c.fromDescription ?? '']}
         />
       );
     }
@@ -102,7 +131,7 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
 }
 
 /** The top of a visit: the camera button, then everything recorded on the visit, newest first. */
-export function VisitTrail({ visit, userId }: { visit: VisitRow; userId: string }) {
+export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: string; extra?: ReactNode }) {
   const trail = useVisitTrail(visit);
   // Read once for the whole list, not once per photo.
   const states = usePhotoStates();
@@ -123,9 +152,10 @@ export function VisitTrail({ visit, userId }: { visit: VisitRow; userId: string 
         )}
       </Stack>
       <PhotoCapture visitId={visit.id} siteId={visit.siteId} userId={userId} />
+      {extra}
       {trail && items.length === 0 && (
         <Typography color="text.secondary" variant="body2">
-          Nothing recorded on this visit yet. Photos, notes and circuits appear here as you add them, newest first.
+          Nothing recorded on this visit yet. Photos, notes, cables, points and test results appear here as you add them, newest first.
         </Typography>
       )}
       {items.length > 0 && (

@@ -1,75 +1,37 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { createMemoryRouter, RouterProvider } from 'react-router-dom';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { Component as TodayScreen } from '@/app/routes/technician/today';
-import { Component as VisitScreen } from '@/app/routes/technician/visit';
 import { paths } from '@/config/paths';
-import { db, type LocalRow } from '@/lib/db';
-import { setSession } from '@/lib/session';
+import { db } from '@/lib/db';
+import { addRing, at, base, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
 
-const USER = { id: '01900000-0000-7000-8000-0000000000aa', email: 'tech1@larkfield.example', name: 'Sam Brannigan', role: 'technician' as const, organisationId: 'o1' };
-const ids = {
-  customer: '01900000-0000-7000-8000-000000000001',
-  site: '01900000-0000-7000-8000-000000000002',
-  job: '01900000-0000-7000-8000-000000000003',
-  visit: '01900000-0000-7000-8000-000000000004',
-  otherVisit: '01900000-0000-7000-8000-000000000005',
-  board: '01900000-0000-7000-8000-000000000006',
-};
-const base = { _base: { version: 1, fieldVersions: {}, values: {} } } satisfies Pick<LocalRow, '_base'>;
-
-function at(hours: number, dayOffset = 0): string {
-  const d = new Date();
-  d.setDate(d.getDate() + dayOffset);
-  d.setHours(hours, 0, 0, 0);
-  return d.toISOString();
-}
-
-function show(path: string) {
-  const router = createMemoryRouter(
-    [
-      { path: paths.today.path, element: <TodayScreen /> },
-      { path: paths.visit.path, element: <VisitScreen /> },
-    ],
-    { initialEntries: [path] },
-  );
-  render(<RouterProvider router={router} />);
-  return router;
-}
-
-beforeEach(async () => {
-  await db.open();
-  await Promise.all(db.tables.map((t) => t.clear()));
-  setSession({ accessToken: 'a', refreshToken: 'r', user: USER });
-  await db.customer.put({ id: ids.customer, name: 'Hannah Greaves', ...base });
-  await db.site.put({ id: ids.site, customerId: ids.customer, address: '14 Orchard Rise, Wendmouth', postcode: 'WM2 4HD', ...base });
-  await db.job.put({ id: ids.job, siteId: ids.site, customerId: ids.customer, title: 'Move two lounge sockets', ...base });
-  await db.visit.bulkPut([
-    { id: ids.visit, jobId: ids.job, siteId: ids.site, technicianIds: [USER.id], plannedStart: at(9), plannedEnd: at(12), status: 'planned', ...base },
-    // Someone else's visit, and one of mine too far ahead: neither belongs on Today.
-    { id: ids.otherVisit, jobId: ids.job, siteId: ids.site, technicianIds: ['someone-else'], plannedStart: at(9), status: 'planned', ...base },
-    { id: '01900000-0000-7000-8000-000000000007', jobId: ids.job, siteId: ids.site, technicianIds: [USER.id], plannedStart: at(9, 20), ...base },
-  ]);
-});
-
-afterEach(() => {
-  cleanup();
-  setSession(null);
-});
+beforeEach(resetPhone);
+afterEach(tidyUp);
 
 describe('Today', () => {
-  it('lists my visits with the job, customer and address, read from the phone', async () => {
+  it('lists my visits with the job, customer, address and access notes, read from the phone', async () => {
     show(paths.today.path);
     const visits = await screen.findByRole('region', { name: 'My visits' });
-    const links = await within(visits).findAllByRole('link');
-    expect(links).toHaveLength(1);
-    expect(links[0]!.getAttribute('href')).toBe(`/visits/${ids.visit}`);
-    expect(within(visits).getByText('Move two lounge sockets')).toBeTruthy();
-    expect(within(visits).getByText('Hannah Greaves')).toBeTruthy();
-    expect(within(visits).getByText('14 Orchard Rise, Wendmouth, WM2 4HD')).toBeTruthy();
-    expect(within(visits).getByText(/Today · 09:00–12:00/)).toBeTruthy();
+    const cards = await within(visits).findAllByRole('article');
+    expect(cards).toHaveLength(1);
+    const card = cards[0]!;
+    expect(within(card).getByRole('link', { name: /^Open Move two lounge sockets/ }).getAttribute('href')).toBe(`/visits/${ids.visit}`);
+    expect(within(card).getByText('Hannah Greaves')).toBeTruthy();
+    expect(within(card).getByText('14 Orchard Rise, Wendmouth, WM2 4HD')).toBeTruthy();
+    expect(within(card).getByText(/Today · 09:00–12:00/)).toBeTruthy();
+    expect(within(card).getByText(/Key safe by the back door/)).toBeTruthy();
+    expect(within(card).getByRole('link', { name: 'Directions' }).getAttribute('href')).toContain(encodeURIComponent('14 Orchard Rise, Wendmouth, WM2 4HD'));
+  });
+
+  it('records arrival with one tap, then offers sign-off', async () => {
+    show(paths.today.path);
+    fireEvent.click(await screen.findByRole('button', { name: 'I’m on site' }));
+    expect(await screen.findByRole('link', { name: 'Sign off and finish' })).toBeTruthy();
+    const visit = await db.visit.get(ids.visit);
+    expect(visit).toMatchObject({ status: 'on-site' });
+    expect(Date.parse(visit!.actualStart!)).toBeGreaterThan(Date.now() - 60_000);
+    expect((await db.outbox.toArray()).map((e) => e.set)).toEqual([expect.objectContaining({ status: 'on-site', actualStart: visit!.actualStart })]);
   });
 
   it('says so when nothing is booked', async () => {
@@ -80,47 +42,67 @@ describe('Today', () => {
 });
 
 describe('Visit', () => {
-  it('adds a note on the phone, newest first, waiting to send', async () => {
+  it('adds a quick note that shows whole on the trail, newest first', async () => {
     await db.note.put({ id: '01900000-0000-7000-8000-000000000010', visitId: ids.visit, siteId: ids.site, text: 'Earlier note', createdAt: at(8), ...base });
     show(paths.visit.href(ids.visit));
     expect(await screen.findByRole('heading', { level: 1, name: 'Move two lounge sockets' })).toBeTruthy();
 
-    fireEvent.click(screen.getByRole('button', { name: 'Add note' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Add note' }));
     expect(await screen.findByText('Write the note first.')).toBeTruthy();
 
-    fireEvent.change(screen.getByLabelText('Note'), { target: { value: 'Spaniel shut in the kitchen; isolated circuit 1 and proved dead' } });
+    const long = 'Spaniel shut in the kitchen; isolated circuit 1 at the board, locked off and proved dead at the lounge socket before opening it up';
+    fireEvent.change(screen.getByLabelText('Note'), { target: { value: long } });
     fireEvent.click(screen.getByRole('button', { name: 'Add note' }));
 
-    const list = await screen.findByRole('list', { name: 'Notes on this visit' });
-    await waitFor(() => expect(within(list).getAllByRole('listitem')).toHaveLength(2));
-    const [first, second] = within(list).getAllByRole('listitem');
-    expect(first!.textContent).toContain('Spaniel shut in the kitchen');
-    expect(first!.textContent).toContain('waiting to send');
+    const trail = await screen.findByRole('list', { name: 'Trail of this visit' });
+    await waitFor(() => expect(within(trail).getAllByRole('listitem')).toHaveLength(2));
+    const [first, second] = within(trail).getAllByRole('listitem');
+    expect(first!.textContent).toContain(long);
     expect(second!.textContent).toContain('Earlier note');
-    const outbox = await db.outbox.toArray();
-    expect(outbox).toHaveLength(1);
-    expect(outbox[0]).toMatchObject({ entity: 'note', set: { visitId: ids.visit, siteId: ids.site } });
+    expect((await db.outbox.toArray())[0]).toMatchObject({ entity: 'note', set: { visitId: ids.visit, siteId: ids.site, text: long } });
   });
 
-  it('adds a circuit, making the board first when the site has none, under a safety caution', async () => {
-    show(paths.visit.href(ids.visit));
-    expect(await screen.findByText(/prove dead/)).toBeTruthy();
+  it('shows the safety cautions once per visit before circuit work, and keeps when they were read', async () => {
+    show(paths.visitTests.href(ids.visit));
+    expect(await screen.findByRole('heading', { name: 'Before you work on a circuit' })).toBeTruthy();
+    expect(screen.getByText(/Prove it dead at the point of work with an approved voltage indicator/)).toBeTruthy();
+    expect(screen.queryByRole('form', { name: 'Add a circuit' })).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'I have read these cautions' }));
+    expect(await screen.findByRole('form', { name: 'Add a circuit' })).toBeTruthy();
     expect(screen.getByText(/regulations in force, local codes and licensed practice decide/)).toBeTruthy();
+    expect((await db.visit.get(ids.visit))!.cautionsReadAt).toBeTruthy();
+  });
 
+  it('adds a circuit found on site, making its board first, and refuses a rating that is not a number', async () => {
+    await db.visit.update(ids.visit, { cautionsReadAt: at(9) });
+    show(paths.visitTests.href(ids.visit));
     fireEvent.change(await screen.findByLabelText('Board name'), { target: { value: 'Consumer unit, hall' } });
     fireEvent.change(screen.getByLabelText('Circuit number'), { target: { value: '5' } });
     fireEvent.change(screen.getByLabelText('Description'), { target: { value: 'Electric fire, fused spur' } });
     fireEvent.change(screen.getByLabelText('Kind'), { target: { value: 'radial' } });
+    fireEvent.change(screen.getByLabelText('Rating (A)'), { target: { value: 'sixteen' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add circuit' }));
+    expect(await screen.findByText('The device rating must be a number, like 0.45.')).toBeTruthy();
+    fireEvent.change(screen.getByLabelText('Rating (A)'), { target: { value: '16' } });
+    fireEvent.change(screen.getByLabelText('Protective device'), { target: { value: 'B' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add circuit' }));
 
     const list = await screen.findByRole('list', { name: 'Circuits on this site' });
     expect(await within(list).findByText('5 · Electric fire, fused spur')).toBeTruthy();
     expect(within(list).getByText('Consumer unit, hall')).toBeTruthy();
-    expect(within(list).getByText('Radial · waiting to send')).toBeTruthy();
+    expect(within(list).getByText(/Radial · B16 · waiting to send/)).toBeTruthy();
     expect((await db.outbox.orderBy('seq').toArray()).map((e) => e.entity)).toEqual(['board', 'circuit']);
+    expect((await db.circuit.toArray())[0]).toMatchObject({ deviceType: 'B', deviceRatingA: 16, kind: 'radial' });
+    await waitFor(async () => expect((screen.getByLabelText('Board') as HTMLSelectElement).value).toBe((await db.board.toArray())[0]!.id));
+  });
 
-    // The new board is now chosen for the next circuit.
-    expect((screen.getByLabelText('Board') as HTMLSelectElement).value).toBe((await db.board.toArray())[0]!.id);
+  it('shows a finished visit as signed and locked', async () => {
+    await addRing();
+    await db.visit.update(ids.visit, { status: 'finished', signedAt: at(11), signedByName: 'Sam Brannigan', signatureSvg: '<svg xmlns="http://www.w3.org/2000/svg"/>', workDescription: 'Moved two sockets' });
+    show(paths.visitSignOff.href(ids.visit));
+    expect(await screen.findByText(/Signed off .* by Sam Brannigan/)).toBeTruthy();
+    expect(await screen.findByRole('img', { name: 'Signature of Sam Brannigan' })).toBeTruthy();
+    expect(screen.queryByRole('button', { name: 'Finish visit' })).toBeNull();
   });
 
   it('says so when the visit is not on this phone', async () => {

@@ -1,0 +1,67 @@
+import ArrowBack from '@mui/icons-material/ArrowBack';
+import PowerOutlined from '@mui/icons-material/PowerOutlined';
+import Button from '@mui/material/Button';
+import Divider from '@mui/material/Divider';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import { useLiveQuery } from 'dexie-react-hooks';
+import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
+import { EmptyState } from '@/components/empty-state';
+import { paths } from '@/config/paths';
+import { PhotoCapture } from '@/features/photos/components/photo-capture';
+import { useVisitPoints } from '@/features/points/api/get-visit-points';
+import { PointForm } from '@/features/points/components/point-form';
+import { CautionGate } from '@/features/visits/components/caution-gate';
+import { db } from '@/lib/db';
+import { useVisitContext } from '../visit-context';
+
+export function Component() {
+  const { summary, locked, userId } = useVisitContext();
+  const { visit } = summary;
+  const { pointId = 'new' } = useParams();
+  const navigate = useNavigate();
+  const isNew = pointId === 'new';
+  const data = useVisitPoints(visit.id, visit.siteId);
+  const point = useLiveQuery(async () => (isNew ? null : ((await db.pointChange.get(pointId)) ?? null)), [pointId, isNew]);
+  const back = paths.visitPoints.href(visit.id);
+  if (!data || point === undefined) return null;
+  return (
+    <CautionGate visit={visit} locked={locked}>
+      <Button component={RouterLink} to={back} startIcon={<ArrowBack />} sx={{ ml: -1.5, mb: 1 }}>
+        All point changes
+      </Button>
+      {!isNew && !point ? (
+        <EmptyState icon={<PowerOutlined />} title="This point change is not on this phone">
+          It may belong to another visit.
+        </EmptyState>
+      ) : (
+        <Stack spacing={2}>
+          <Typography variant="h2">{isNew ? 'Record a point change' : 'Point change'}</Typography>
+          <PointForm
+            key={point?.id ?? 'new'}
+            visitId={visit.id}
+            siteId={visit.siteId}
+            point={point}
+            circuits={data.circuits}
+            areas={data.areas}
+            ringBaselines={data.ringBaselines}
+            locked={locked}
+            onSaved={(id) => (isNew ? navigate(paths.visitPoint.href(visit.id, id), { replace: true, state: { saved: true } }) : navigate(back, { state: { saved: true } }))}
+          />
+          {point && (
+            <>
+              <Divider />
+              <Typography variant="h3">Photos of this point</Typography>
+              <PhotoCapture
+                visitId={visit.id}
+                siteId={visit.siteId}
+                userId={userId}
+                preset={{ subject: `pointChange:${point.id}`, areaId: point.toAreaId ?? point.fromAreaId ?? null, label: 'Photograph this point' }}
+              />
+            </>
+          )}
+        </Stack>
+      )}
+    </CautionGate>
+  );
+}

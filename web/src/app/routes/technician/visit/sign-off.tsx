@@ -1,0 +1,49 @@
+import Box from '@mui/material/Box';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import { useSignOff } from '@/features/sign-off/api/get-sign-off';
+import { SignOffForm } from '@/features/sign-off/components/sign-off-form';
+import { SignOffSummaryView } from '@/features/sign-off/components/sign-off-summary';
+import { whenRecorded } from '@/features/visits/visit-format';
+import { useVisitContext } from '../visit-context';
+
+export function Component() {
+  const { summary, userName, locked } = useVisitContext();
+  const { visit, job } = summary;
+  const signOff = useSignOff(visit);
+  if (!signOff) return null;
+  return (
+    <Stack spacing={2}>
+      <Typography variant="h2">Sign-off</Typography>
+      <SignOffSummaryView summary={signOff} signed={locked} />
+      {locked ? (
+        <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-label="Signed">
+          <Stack spacing={1}>
+            <Typography sx={{ fontWeight: 500 }}>
+              Signed by {visit.signedByName} {visit.signedAt ? `· ${whenRecorded(visit.signedAt)}` : ''}
+            </Typography>
+            {visit.signatureSvg && (
+              <Box component="img" alt={`Signature of ${visit.signedByName ?? 'the signer'}`} src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(visit.signatureSvg)}`} sx={{ maxWidth: '100%', bgcolor: '#fbfbf8', borderRadius: 1 }} />
+            )}
+            <Typography variant="body2">
+              <strong>Work:</strong> {visit.workDescription}
+            </Typography>
+            {visit.observations && (
+              <Typography variant="body2">
+                <strong>Observations:</strong> {visit.observations}
+              </Typography>
+            )}
+            {visit.departures && (
+              <Typography variant="body2">
+                <strong>Departures:</strong> {visit.departures}
+              </Typography>
+            )}
+          </Stack>
+        </Paper>
+      ) : (
+        <SignOffForm visit={visit} defaultDescription={job?.title ?? ''} signerName={userName} problemCount={signOff.problems.length} />
+      )}
+    </Stack>
+  );
+}

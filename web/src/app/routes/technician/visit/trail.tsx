@@ -1,0 +1,9 @@
+import { VisitTrail } from '@/features/photos/components/visit-trail';
+import { QuickNote } from '@/features/visits/components/quick-note';
+import { useVisitContext } from '../visit-context';
+
+export function Component() {
+  const { summary, userId } = useVisitContext();
+  const { visit } = summary;
+  return <VisitTrail visit={visit} userId={userId} extra={<QuickNote visitId={visit.id} siteId={visit.siteId} />} />;
+}

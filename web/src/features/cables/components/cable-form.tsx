@@ -1,0 +1,336 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import Alert from '@mui/material/Alert';
+import Box from '@mui/material/Box';
+import Button from '@mui/material/Button';
+import Divider from '@mui/material/Divider';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import TextField from '@mui/material/TextField';
+import ToggleButton from '@mui/material/ToggleButton';
+import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
+import Typography from '@mui/material/Typography';
+import {
+  assessCableRun,
+  CABLE_MEDIA,
+  CABLE_STATUSES,
+  type FieldValue,
+  isTwistedPair,
+  LINK_KINDS,
+  roundTo,
+  tdrLengthM,
+  TRACE_METHODS,
+} from '@wiretrail/core';
+import { useMemo, useState } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { v7 as uuidv7 } from 'uuid';
+import { z } from 'zod';
+import type { AreaRow, CableRunRow } from '@/lib/db';
+import { parseReading, readingField, readingText, usableReading } from '@/lib/readings';
+import { createRecords, type Fields, saveRecord } from '@/lib/sync/local-write';
+import { CABLE_STATUS_WORDS, LINK_KIND_WORDS, MEDIUM_WORDS, TERMINATIONS, TRACE_METHOD_WORDS } from '../cable-words';
+import { CableVerdicts } from './cable-verdicts';
+import { readWiremap, type Wiremap, WiremapEntry } from './wiremap-entry';
+
+export const NEW_AREA = '__new';
+
+/** NVP as a fraction of c; "69" or "69 %" is read as 0.69, the way datasheets often print it. */
+export function parseNvp(text: string): number | null {
+  const value = parseReading(text.replace('%', ''));
+  if (value === null || Number.isNaN(value) || value <= 1) return value;
+  // Real cables are 50–99 % of c; a figure like 1.5 is neither a fraction nor a percentage.
+  return value >= 10 && value <= 100 ? roundTo(value / 100, 4) : Number.NaN;
+}
+
+const max = (n: number, what: string) => z.string().max(n, `${what} must be at most ${n} characters.`);
+
+export const cableSchema = z
+  .object({
+    label: z.string().trim().min(1, 'Give the cable a label, for example RC-03.').max(100, 'The label must be at most 100 characters.'),
+    medium: z.enum(CABLE_MEDIA),
+    endAAreaId: z.string(),
+    endANewArea: max(200, "The new area's name for end A"),
+    endADescription: max(300, 'The description of end A'),
+    endATermination: max(100, 'The termination of end A'),
+    endBAreaId: z.string(),
+    endBNewArea: max(200, "The new area's name for end B"),
+    endBDescription: max(300, 'The description of end B'),
+    endBTermination: max(100, 'The termination of end B'),
+    traceMethod: z.enum(['', ...TRACE_METHODS]),
+    status: z.enum(CABLE_STATUSES),
+    scheme: z.enum(['T568A', 'T568B']),
+    lengthMode: z.enum(['typed', 'tdr']),
+    lengthM: readingField('cableRun', 'lengthM', 'The length', 'm'),
+    tdrNs: readingField('cableRun', 'tdrNs', 'The TDR time', 'ns'),
+    nvp: z.string(),
+    linkKind: z.enum(LINK_KINDS),
+  })
+  .superRefine((v, ctx) => {
+    for (const e of ['A', 'B'] as const) {
+      const area = (v as Record<string, string>)[`end${e}AreaId`];
+      if (area === NEW_AREA && !(v as Record<string, string>)[`end${e}NewArea`]!.trim()) {
+        ctx.addIssue({ code: 'custom', path: [`end${e}NewArea`], message: `Name the new area for end ${e}, for example "Loft".` });
+      }
+    }
+    if (v.lengthMode === 'tdr') {
+      const nvp = parseNvp(v.nvp);
+      if (nvp !== null && (Number.isNaN(nvp) || nvp <= 0.01 || nvp > 1)) {
+        ctx.addIssue({ code: 'custom', path: ['nvp'], message: 'The NVP must be a fraction of the speed of light, like 0.69 (or 69 %).' });
+      }
+      if ((v.tdrNs.trim() === '') !== (v.nvp.trim() === '')) {
+        ctx.addIssue({ code: 'custom', path: [v.tdrNs.trim() === '' ? 'tdrNs' : 'nvp'], message: 'Enter both the TDR time and the NVP to work out the length.' });
+      }
+    }
+  });
+
+export type CableValues = z.infer<typeof cableSchema>;
+
+function defaults(cable: CableRunRow | null): CableValues {
+  return {
+    label: cable?.label ?? '',
+    medium: (cable?.medium as CableValues['medium']) ?? 'Cat6',
+    endAAreaId: cable?.endAAreaId ?? '',
+    endANewArea: '',
+    endADescription: cable?.endADescription ?? '',
+    endATermination: cable?.endATermination ?? '',
+    endBAreaId: cable?.endBAreaId ?? '',
+    endBNewArea: '',
+    endBDescription: cable?.endBDescription ?? '',
+    endBTermination: cable?.endBTermination ?? '',
+    traceMethod: (cable?.traceMethod as CableValues['traceMethod']) ?? '',
+    status: (cable?.status as CableValues['status']) ?? 'unidentified',
+    scheme: cable?.scheme ?? 'T568B',
+    lengthMode: cable?.tdrNs != null ? 'tdr' : 'typed',
+    lengthM: readingText(cable?.lengthM),
+    tdrNs: readingText(cable?.tdrNs),
+    nvp: readingText(cable?.nvp),
+    linkKind: (cable?.linkKind as CableValues['linkKind']) ?? 'permanent-link',
+  };
+}
+
+/** The length the form stands for: typed, or worked out from the TDR's round trip and the cable's NVP. */
+export function lengthFrom(v: Pick<CableValues, 'lengthMode' | 'lengthM' | 'tdrNs' | 'nvp'>): number | null {
+  if (v.lengthMode === 'typed') return usableReading(v.lengthM);
+  const ns = usableReading(v.tdrNs);
+  const nvp = parseNvp(v.nvp);
+  if (ns === null || nvp === null || Number.isNaN(nvp) || nvp <= 0.01 || nvp > 1) return null;
+  return roundTo(tdrLengthM({ nanoseconds: ns, nvp }), 2);
+}
+
+interface Props {
+  siteId: string;
+  visitId: string;
+  cable: CableRunRow | null;
+  areas: AreaRow[];
+  locked: boolean;
+  onSaved: (id: string, label: string) => void;
+}
+
+/** Record a cable run: where each end is, how it was identified and terminated, its wiremap and length. */
+export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Props) {
+  const { register, control, handleSubmit, formState } = useForm<CableValues>({ resolver: zodResolver(cableSchema), defaultValues: defaults(cable) });
+  const [wiremap, setWiremap] = useState<Wiremap | null>(() => readWiremap(cable?.wiremap));
+  const [error, setError] = useState<string | null>(null);
+  const values = useWatch({ control }) as CableValues;
+  const twisted = isTwistedPair(values.medium);
+  const lengthM = lengthFrom(values);
+  const assessment = useMemo(
+    () => assessCableRun({ medium: values.medium, scheme: twisted ? values.scheme : null, wiremap: twisted ? wiremap : null, lengthM, linkKind: values.linkKind }),
+    [values.medium, values.scheme, values.linkKind, twisted, wiremap, lengthM],
+  );
+  const errors = formState.errors as Record<string, { message?: string } | undefined>;
+  const areaName = (e: 'A' | 'B') => {
+    const id = (values as Record<string, string>)[`end${e}AreaId`];
+    return areas.find((a) => a.id === id)?.name;
+  };
+  const endNames = { nearEnd: `End A${areaName('A') ? ` (${areaName('A')})` : ''}`, farEnd: `End B${areaName('B') ? ` (${areaName('B')})` : ''}` };
+
+  async function save(v: CableValues) {
+    setError(null);
+    const areaRows: { entity: 'area'; id: string; fields: Fields }[] = [];
+    const areaFor = (e: 'A' | 'B'): string | null => {
+      const id = (v as Record<string, string>)[`end${e}AreaId`]!;
+      if (id !== NEW_AREA) return id || null;
+      const newId = uuidv7();
+      areaRows.push({ entity: 'area', id: newId, fields: { siteId, name: (v as Record<string, string>)[`end${e}NewArea`]!.trim() } });
+      return newId;
+    };
+    const text = (s: string) => s.trim() || null;
+    const recorded = assessment.wiremap !== null || lengthM !== null;
+    const statusRank = CABLE_STATUSES.indexOf(v.status);
+    const fields: Record<string, FieldValue> = {
+      label: v.label.trim(),
+      medium: v.medium,
+      endAAreaId: areaFor('A'),
+      endADescription: text(v.endADescription),
+      endATermination: text(v.endATermination),
+      endBAreaId: areaFor('B'),
+      endBDescription: text(v.endBDescription),
+      endBTermination: text(v.endBTermination),
+      traceMethod: v.traceMethod || null,
+      // A wiremap taken means the cable was tested, whatever the status said before.
+      status: assessment.wiremap && assessment.wiremap.verdict !== 'check' && statusRank < CABLE_STATUSES.indexOf('tested') ? 'tested' : v.status,
+      scheme: twisted ? v.scheme : null,
+      wiremap: twisted && wiremap ? (wiremap as unknown as FieldValue) : null,
+      lengthM,
+      tdrNs: v.lengthMode === 'tdr' ? usableReading(v.tdrNs) : null,
+      nvp: v.lengthMode === 'tdr' ? parseNvp(v.nvp) : null,
+      linkKind: twisted ? v.linkKind : null,
+      verdict: recorded ? assessment.verdict : null,
+      lastVisitId: visitId,
+    };
+    const changedTest = !cable || JSON.stringify(cable.wiremap ?? null) !== JSON.stringify(fields.wiremap) || (cable.lengthM ?? null) !== lengthM;
+    if (recorded && changedTest) fields.testedAt = new Date().toISOString();
+    try {
+      if (cable) {
+        if (areaRows.length) await createRecords(areaRows);
+        await saveRecord('cableRun', cable.id, fields);
+        onSaved(cable.id, fields.label as string);
+      } else {
+        const id = uuidv7();
+        const created = Object.fromEntries(Object.entries({ siteId, ...fields }).filter(([, value]) => value !== null)) as Fields;
+        await createRecords([...areaRows, { entity: 'cableRun', id, fields: created }]);
+        onSaved(id, fields.label as string);
+      }
+    } catch (err) {
+      setError((err as Error).message);
+    }
+  }
+
+  const select = { select: { native: true }, inputLabel: { shrink: true } };
+  return (
+    <Box component="form" aria-label={cable ? `Cable ${cable.label}` : 'Record a cable'} noValidate onSubmit={handleSubmit(save)}>
+      <Box component="fieldset" disabled={locked} sx={{ border: 0, p: 0, m: 0, minWidth: 0 }}>
+        <Stack spacing={2}>
+          <TextField label="Label" {...register('label')} error={!!errors.label} helperText={errors.label?.message ?? 'As written on both ends, e.g. RC-03.'} slotProps={{ htmlInput: { autoCapitalize: 'characters' } }} />
+          <TextField select label="Medium" {...register('medium')} slotProps={select}>
+            {CABLE_MEDIA.map((m) => (
+              <option key={m} value={m}>
+                {MEDIUM_WORDS[m]}
+              </option>
+            ))}
+          </TextField>
+          {(['A', 'B'] as const).map((e) => (
+            <Paper key={e} variant="outlined" sx={{ p: 1.5 }} component="fieldset" aria-label={`End ${e}`}>
+              <Stack spacing={1.5}>
+                <Typography variant="h3" component="legend">
+                  End {e}
+                </Typography>
+                <TextField select label={`End ${e} area`} {...register(`end${e}AreaId`)} slotProps={select}>
+                  <option value="">Not given</option>
+                  {areas.map((a) => (
+                    <option key={a.id} value={a.id}>
+                      {a.name}
+                    </option>
+                  ))}
+                  <option value={NEW_AREA}>A new area…</option>
+                </TextField>
+                {(values as Record<string, string>)[`end${e}AreaId`] === NEW_AREA && (
+                  <TextField label={`New area for end ${e}`} {...register(`end${e}NewArea`)} error={!!errors[`end${e}NewArea`]} helperText={errors[`end${e}NewArea`]?.message ?? ' '} />
+                )}
+                <TextField
+                  label={`End ${e} description`}
+                  placeholder={e === 'A' ? 'Patch panel port 3' : 'Faceplate behind TV, port 1'}
+                  {...register(`end${e}Description`)}
+                  error={!!errors[`end${e}Description`]}
+                  helperText={errors[`end${e}Description`]?.message}
+                />
+                <TextField
+                  label={`End ${e} termination`}
+                  {...register(`end${e}Termination`)}
+                  error={!!errors[`end${e}Termination`]}
+                  helperText={errors[`end${e}Termination`]?.message}
+                  slotProps={{ htmlInput: { list: 'terminations' } }}
+                />
+              </Stack>
+            </Paper>
+          ))}
+          <datalist id="terminations">
+            {TERMINATIONS.map((t) => (
+              <option key={t} value={t} />
+            ))}
+          </datalist>
+          <Stack direction="row" spacing={1.5}>
+            <TextField select label="Identified by" {...register('traceMethod')} slotProps={select}>
+              <option value="">Not yet</option>
+              {TRACE_METHODS.map((m) => (
+                <option key={m} value={m}>
+                  {TRACE_METHOD_WORDS[m]}
+                </option>
+              ))}
+            </TextField>
+            <TextField select label="Status" {...register('status')} slotProps={select}>
+              {CABLE_STATUSES.map((s) => (
+                <option key={s} value={s}>
+                  {CABLE_STATUS_WORDS[s]}
+                </option>
+              ))}
+            </TextField>
+          </Stack>
+          {twisted && (
+            <>
+              <Divider />
+              <Typography variant="h3">Termination and wiremap</Typography>
+              <Controller
+                control={control}
+                name="scheme"
+                render={({ field }) => (
+                  <ToggleButtonGroup exclusive fullWidth value={field.value} onChange={(_, s) => s && field.onChange(s)} aria-label="Termination scheme">
+                    <ToggleButton value="T568A">T568A</ToggleButton>
+                    <ToggleButton value="T568B">T568B</ToggleButton>
+                  </ToggleButtonGroup>
+                )}
+              />
+              <WiremapEntry scheme={values.scheme} endNames={endNames} value={wiremap} onChange={setWiremap} disabled={locked} />
+            </>
+          )}
+          <Divider />
+          <Typography variant="h3">Length</Typography>
+          <Controller
+            control={control}
+            name="lengthMode"
+            render={({ field }) => (
+              <ToggleButtonGroup exclusive fullWidth value={field.value} onChange={(_, m) => m && field.onChange(m)} aria-label="How the length was found">
+                <ToggleButton value="typed">Measured length</ToggleButton>
+                <ToggleButton value="tdr">From a TDR reading</ToggleButton>
+              </ToggleButtonGroup>
+            )}
+          />
+          {values.lengthMode === 'typed' ? (
+            <TextField label="Length (m)" {...register('lengthM')} error={!!errors.lengthM} helperText={errors.lengthM?.message ?? ' '} slotProps={{ htmlInput: { inputMode: 'decimal' } }} />
+          ) : (
+            <Stack spacing={1}>
+              <Stack direction="row" spacing={1.5}>
+                <TextField label="Round trip (ns)" {...register('tdrNs')} error={!!errors.tdrNs} helperText={errors.tdrNs?.message ?? ' '} slotProps={{ htmlInput: { inputMode: 'decimal' } }} />
+                <TextField label="NVP" placeholder="0.69" {...register('nvp')} error={!!errors.nvp} helperText={errors.nvp?.message ?? 'From the cable’s datasheet.'} slotProps={{ htmlInput: { inputMode: 'decimal' } }} />
+              </Stack>
+              <Typography role="status" sx={{ fontWeight: 500 }}>
+                {lengthM !== null ? `Length ${lengthM} m (NVP × c × t ÷ 2)` : 'Enter the round trip time and the NVP.'}
+              </Typography>
+            </Stack>
+          )}
+          {twisted && (
+            <TextField select label="Measured as" {...register('linkKind')} slotProps={select}>
+              {LINK_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {LINK_KIND_WORDS[k]}
+                </option>
+              ))}
+            </TextField>
+          )}
+          <CableVerdicts assessment={assessment} />
+          {error && (
+            <Alert severity="error" role="alert">
+              {error}
+            </Alert>
+          )}
+          {!locked && (
+            <Button type="submit" variant="contained" size="large">
+              {cable ? 'Save cable' : 'Save new cable'}
+            </Button>
+          )}
+        </Stack>
+      </Box>
+    </Box>
+  );
+}
+

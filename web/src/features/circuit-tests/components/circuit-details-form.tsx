@@ -1,0 +1,71 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import Accordion from '@mui/material/Accordion';
+import AccordionDetails from '@mui/material/AccordionDetails';
+import AccordionSummary from '@mui/material/AccordionSummary';
+import Button from '@mui/material/Button';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import ExpandMore from '@mui/icons-material/ExpandMore';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import type { CircuitRow } from '@/lib/db';
+import { saveRecord } from '@/lib/sync/local-write';
+import { type CircuitDetails, CircuitDetailFields, circuitDetailFields, circuitDetailsOf, circuitDetailsSchema } from './circuit-fields';
+import { KIND_WORDS } from './circuit-fields';
+
+export function describeCircuit(c: CircuitRow): string {
+  return [
+    c.kind ? KIND_WORDS[c.kind] : null,
+    c.deviceType ? `${/^[BCD]$/.test(c.deviceType) ? `type ${c.deviceType}` : c.deviceType} ${c.deviceRatingA ?? '?'} A` : 'device not recorded',
+    c.rcdRatingMa ? `${c.rcdRatingMa} mA RCD${c.rcdType ? ` (${c.rcdType})` : ''}` : 'no RCD recorded',
+    c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2}/${c.cpcCsaMm2} mm²` : 'sizes not recorded',
+  ]
+    .filter(Boolean)
+    .join(' · ');
+}
+
+/** The circuit's details, folded away once known; the verdicts depend on them, so they can be put right here. */
+export function CircuitDetailsForm({ circuit, locked }: { circuit: CircuitRow; locked: boolean }) {
+  const incomplete = !circuit.deviceType || circuit.deviceRatingA == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null;
+  const [open, setOpen] = useState(incomplete);
+  const [note, setNote] = useState('');
+  const { register, handleSubmit, formState } = useForm<CircuitDetails>({ resolver: zodResolver(circuitDetailsSchema), defaultValues: circuitDetailsOf(circuit) });
+  async function save(v: CircuitDetails) {
+    try {
+      await saveRecord('circuit', circuit.id, circuitDetailFields(v));
+      setNote('Circuit details saved on this phone.');
+      setOpen(false);
+    } catch (err) {
+      setNote((err as Error).message);
+    }
+  }
+  return (
+    <Accordion expanded={open} onChange={(_, o) => setOpen(o)} variant="outlined" disableGutters>
+      <AccordionSummary expandIcon={<ExpandMore />} aria-controls="circuit-details" id="circuit-details-header">
+        <Stack>
+          <Typography sx={{ fontWeight: 500 }}>Circuit details</Typography>
+          <Typography variant="body2" color="text.secondary">
+            {describeCircuit(circuit)}
+          </Typography>
+        </Stack>
+      </AccordionSummary>
+      <AccordionDetails id="circuit-details">
+        <Stack component="form" aria-label="Circuit details" noValidate onSubmit={handleSubmit(save)} spacing={1.5}>
+          <fieldset disabled={locked} style={{ border: 0, padding: 0, margin: 0, minWidth: 0, display: 'grid', gap: 12 }}>
+            <CircuitDetailFields register={register} errors={formState.errors} />
+            {!locked && (
+              <Button type="submit" variant="outlined" size="large">
+                Save circuit details
+              </Button>
+            )}
+          </fieldset>
+        </Stack>
+      </AccordionDetails>
+      {note && (
+        <Typography variant="body2" role="status" sx={{ px: 2, pb: 1.5 }}>
+          {note}
+        </Typography>
+      )}
+    </Accordion>
+  );
+}

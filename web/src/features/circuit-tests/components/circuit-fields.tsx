@@ -1,0 +1,83 @@
+import Stack from '@mui/material/Stack';
+import TextField from '@mui/material/TextField';
+import { CIRCUIT_KINDS, type FieldValue, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import type { FieldErrors, UseFormRegister } from 'react-hook-form';
+import { z } from 'zod';
+import type { CircuitRow } from '@/lib/db';
+import { readingField, readingText, usableReading } from '@/lib/readings';
+
+export const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
+const DEVICE_WORDS: Record<string, string> = { B: 'Type B circuit-breaker', C: 'Type C circuit-breaker', D: 'Type D circuit-breaker' };
+
+/** The circuit's own details that its tests depend on. */
+export const circuitDetailsSchema = z.object({
+  kind: z.enum(CIRCUIT_KINDS),
+  deviceType: z.enum(['', ...PROTECTIVE_DEVICES]),
+  deviceRatingA: readingField('circuit', 'deviceRatingA', 'The device rating', 'A'),
+  rcdRatingMa: readingField('circuit', 'rcdRatingMa', 'The RCD rating', 'mA'),
+  rcdType: z.string().max(20, 'The RCD type must be at most 20 characters.'),
+  liveCsaMm2: readingField('circuit', 'liveCsaMm2', 'The live conductor size', 'mm²'),
+  cpcCsaMm2: readingField('circuit', 'cpcCsaMm2', 'The cpc size', 'mm²'),
+});
+export type CircuitDetails = z.infer<typeof circuitDetailsSchema>;
+
+/** What the form starts from: the circuit as recorded, or blanks for a new one (a guess would be recorded as fact). */
+export function circuitDetailsOf(c: CircuitRow | null): CircuitDetails {
+  return {
+    kind: (c?.kind as CircuitDetails['kind']) ?? 'ring',
+    deviceType: (c?.deviceType as CircuitDetails['deviceType']) ?? '',
+    deviceRatingA: readingText(c?.deviceRatingA),
+    rcdRatingMa: readingText(c?.rcdRatingMa),
+    rcdType: c?.rcdType ?? '',
+    liveCsaMm2: readingText(c?.liveCsaMm2),
+    cpcCsaMm2: readingText(c?.cpcCsaMm2),
+  };
+}
+
+export function circuitDetailFields(v: CircuitDetails): Record<string, FieldValue> {
+  return {
+    kind: v.kind,
+    deviceType: v.deviceType || null,
+    deviceRatingA: usableReading(v.deviceRatingA),
+    rcdRatingMa: usableReading(v.rcdRatingMa),
+    rcdType: v.rcdType.trim() || null,
+    liveCsaMm2: usableReading(v.liveCsaMm2),
+    cpcCsaMm2: usableReading(v.cpcCsaMm2),
+  };
+}
+
+/** Kind, protective device, RCD and cable sizes, for the add and edit forms alike. */
+export function CircuitDetailFields({ register, errors }: { register: UseFormRegister<CircuitDetails>; errors: FieldErrors<CircuitDetails> }) {
+  const select = { select: { native: true }, inputLabel: { shrink: true } };
+  const num = { htmlInput: { inputMode: 'decimal' as const } };
+  return (
+    <>
+      <TextField select label="Kind" {...register('kind')} slotProps={select}>
+        {CIRCUIT_KINDS.map((k) => (
+          <option key={k} value={k}>
+            {KIND_WORDS[k]}
+          </option>
+        ))}
+      </TextField>
+      <Stack direction="row" spacing={1.5}>
+        <TextField select label="Protective device" {...register('deviceType')} slotProps={select}>
+          <option value="">Not known</option>
+          {PROTECTIVE_DEVICES.map((d) => (
+            <option key={d} value={d}>
+              {DEVICE_WORDS[d] ?? `${d} fuse`}
+            </option>
+          ))}
+        </TextField>
+        <TextField label="Rating (A)" {...register('deviceRatingA')} error={!!errors.deviceRatingA} helperText={errors.deviceRatingA?.message ?? ' '} slotProps={num} sx={{ maxWidth: 130 }} />
+      </Stack>
+      <Stack direction="row" spacing={1.5}>
+        <TextField label="RCD (mA)" {...register('rcdRatingMa')} error={!!errors.rcdRatingMa} helperText={errors.rcdRatingMa?.message ?? 'Blank if none.'} slotProps={num} />
+        <TextField label="RCD type" placeholder="A" {...register('rcdType')} error={!!errors.rcdType} helperText={errors.rcdType?.message ?? 'A, AC, F, B; S if delayed.'} />
+      </Stack>
+      <Stack direction="row" spacing={1.5}>
+        <TextField label="Live size (mm²)" {...register('liveCsaMm2')} error={!!errors.liveCsaMm2} helperText={errors.liveCsaMm2?.message ?? ' '} slotProps={num} />
+        <TextField label="Cpc size (mm²)" {...register('cpcCsaMm2')} error={!!errors.cpcCsaMm2} helperText={errors.cpcCsaMm2?.message ?? ' '} slotProps={num} />
+      </Stack>
+    </>
+  );
+}

@@ -1,0 +1,117 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import Alert from '@mui/material/Alert';
+import Box from '@mui/material/Box';
+import Button from '@mui/material/Button';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogTitle from '@mui/material/DialogTitle';
+import Stack from '@mui/material/Stack';
+import TextField from '@mui/material/TextField';
+import Typography from '@mui/material/Typography';
+import { FINISHED_VISIT_STATUS } from '@wiretrail/core';
+import { useState } from 'react';
+import { Controller, useForm } from 'react-hook-form';
+import { z } from 'zod';
+import type { VisitRow } from '@/lib/db';
+import { saveRecord } from '@/lib/sync/local-write';
+import { SignatureBox } from './signature-pad';
+
+const text = (max: number, what: string) => z.string().max(max, `${what} must be at most ${max.toLocaleString('en-GB')} characters.`);
+
+export const signOffSchema = z.object({
+  workDescription: text(20_000, 'The description of the work').refine((s) => s.trim().length > 0, 'Describe the work done and its extent.'),
+  observations: text(20_000, 'The observations'),
+  departures: text(20_000, 'The departures'),
+  signedByName: z.string().trim().min(1, 'Give the name of the person signing.').max(200, 'The name must be at most 200 characters.'),
+  signatureSvg: z.string().nullable().refine((s) => !!s, 'Sign in the box to finish the visit.').refine((s) => !s || s.length <= 60_000, 'The signature is too long; clear it and sign again.'),
+});
+export type SignOffValues = z.infer<typeof signOffSchema>;
+
+interface Props {
+  visit: VisitRow;
+  defaultDescription: string;
+  signerName: string;
+  problemCount: number;
+}
+
+/** What was done, what was seen and where it departs from the standard, signed; finishing locks the visit's records. */
+export function SignOffForm({ visit, defaultDescription, signerName, problemCount }: Props) {
+  const { register, control, handleSubmit, formState, getValues } = useForm<SignOffValues>({
+    resolver: zodResolver(signOffSchema),
+    defaultValues: {
+      workDescription: visit.workDescription ?? defaultDescription,
+      observations: visit.observations ?? '',
+      departures: visit.departures ?? '',
+      signedByName: visit.signedByName ?? signerName,
+      signatureSvg: null,
+    },
+  });
+  const [confirming, setConfirming] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const errors = formState.errors;
+
+  async function finish(v: SignOffValues) {
+    setConfirming(false);
+    setError(null);
+    const now = new Date().toISOString();
+    try {
+      await saveRecord('visit', visit.id, {
+        status: FINISHED_VISIT_STATUS,
+        actualStart: visit.actualStart ?? now,
+        actualEnd: now,
+        signedAt: now,
+        signedByName: v.signedByName.trim(),
+        signatureSvg: v.signatureSvg,
+        workDescription: v.workDescription.trim(),
+        observations: v.observations.trim() || null,
+        departures: v.departures.trim() || null,
+      });
+    } catch (err) {
+      setError((err as Error).message);
+    }
+  }
+
+  // Problems with no departure written: finishing is allowed, but only after saying so plainly.
+  const submit = handleSubmit((v) => (problemCount > 0 && !v.departures.trim() ? setConfirming(true) : finish(v)));
+
+  return (
+    <Box component="form" aria-label="Sign off" noValidate onSubmit={submit}>
+      <Stack spacing={2}>
+        <TextField label="Work done and its extent" multiline minRows={3} {...register('workDescription')} error={!!errors.workDescription} helperText={errors.workDescription?.message ?? 'As it should read on the certificate.'} />
+        <TextField label="Observations" multiline minRows={2} {...register('observations')} error={!!errors.observations} helperText={errors.observations?.message ?? 'What you saw that the customer or the office should know.'} />
+        <TextField label="Departures" multiline minRows={2} {...register('departures')} error={!!errors.departures} helperText={errors.departures?.message ?? 'Where the work departs from the standard, and why. Needed for any fail or missing reading.'} />
+        <TextField label="Signed by" {...register('signedByName')} error={!!errors.signedByName} helperText={errors.signedByName?.message ?? ' '} autoComplete="name" />
+        <Controller control={control} name="signatureSvg" render={({ field }) => <SignatureBox onChange={field.onChange} error={errors.signatureSvg?.message} />} />
+        {error && (
+          <Alert severity="error" role="alert">
+            {error}
+          </Alert>
+        )}
+        <Button type="submit" variant="contained" color="secondary" size="large" sx={{ minHeight: 60, fontSize: '1.1rem' }}>
+          Finish visit
+        </Button>
+        <Typography variant="body2" color="text.secondary">
+          Finishing locks this visit’s readings, cables and point changes on every phone. A change after that goes to the office for review.
+        </Typography>
+      </Stack>
+      <Dialog open={confirming} onClose={() => setConfirming(false)} aria-labelledby="confirm-finish-title">
+        <DialogTitle id="confirm-finish-title">Finish with {problemCount === 1 ? 'a problem' : `${problemCount} problems`} listed?</DialogTitle>
+        <DialogContent>
+          <Typography>
+            The list above shows fails or missing readings, and no departure is written. The office cannot issue a certificate for them until they are put right or
+            recorded as departures.
+          </Typography>
+        </DialogContent>
+        <DialogActions>
+          <Button onClick={() => setConfirming(false)} size="large">
+            Go back
+          </Button>
+          <Button onClick={() => finish(getValues())} variant="contained" color="secondary" size="large">
+            Finish anyway
+          </Button>
+        </DialogActions>
+      </Dialog>
+    </Box>
+  );
+}
