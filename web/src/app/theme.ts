@@ -46,5 +46,28 @@ export const theme = createTheme({
     MuiBottomNavigationAction: { styleOverrides: { label: { fontSize: '0.875rem', '&.Mui-selected': { fontSize: '0.875rem' } } } },
     MuiListItemButton: { styleOverrides: { root: { minHeight: 48 } } },
     MuiTextField: { defaultProps: { fullWidth: true } },
+    // In sunlight a faint outline disappears: field borders and the chosen option of a toggle must stand out.
+    MuiOutlinedInput: {
+      styleOverrides: {
+        notchedOutline: ({ theme }) => ({ borderColor: '#7a8a8e', ...theme.applyStyles('dark', { borderColor: '#7f9296' }) }),
+      },
+    },
+    MuiToggleButton: {
+      styleOverrides: {
+        root: ({ theme }) => ({
+          minHeight: 48,
+          textTransform: 'none',
+          fontSize: '0.95rem',
+          color: theme.vars.palette.text.primary,
+          borderColor: '#7a8a8e',
+          '&.Mui-selected, &.Mui-selected:hover': {
+            backgroundColor: theme.vars.palette.primary.main,
+            color: theme.vars.palette.primary.contrastText,
+            fontWeight: 500,
+          },
+          ...theme.applyStyles('dark', { borderColor: '#7f9296' }),
+        }),
+      },
+    },
   },
 });

@@ -42,12 +42,16 @@ export function VerdictChip({
   what: string;
   result: Pick<CheckResult, 'verdict' | 'value' | 'limit' | 'unit' | 'source' | 'note'>;
   size?: 'small' | 'medium';
-  /** What the figure beside the verdict is: a limit, or the value a reading is expected to be close to. */
-  against?: 'limit' | 'expected';
+  /**
+   * What the figure beside the verdict is: a limit; the value a reading should be close to; the most two readings
+   * may differ by; or nothing worth showing on the chip (the sentence beside it says it better).
+   */
+  against?: 'limit' | 'expected' | 'within' | 'none';
 }) {
   const [open, setOpen] = useState(false);
   const words = VERDICT_WORDS[result.verdict];
-  const limit = result.limit !== null ? ` · ${against === 'limit' ? 'limit' : 'expect about'} ${figure(result.limit, result.unit)}` : '';
+  const prefix = { limit: 'limit ', expected: 'expect about ', within: 'within ±', none: '' }[against];
+  const limit = result.limit !== null && against !== 'none' ? ` · ${prefix}${figure(result.limit, result.unit)}` : '';
   return (
     <>
       <Chip
@@ -77,7 +81,7 @@ export function VerdictChip({
               </div>
               <div>
                 <Typography variant="caption" color="text.secondary">
-                  {against === 'limit' ? 'Limit' : 'Expected'}
+                  {against === 'expected' ? 'Expected' : against === 'within' ? 'Allowed difference' : 'Limit'}
                 </Typography>
                 <Typography sx={{ fontWeight: 500 }}>{figure(result.limit, result.unit)}</Typography>
               </div>

@@ -17,6 +17,13 @@ export function timeWindow(start?: string | null, end?: string | null): string {
   return end ? `${time.format(new Date(start))}–${time.format(new Date(end))}` : `from ${time.format(new Date(start))}`;
 }
 
+const dated = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
+
+/** "2 Dec 2026, 14:11": for records that stand as signed, where "today" would go stale. */
+export function whenSigned(iso: string): string {
+  return dated.format(new Date(iso));
+}
+
 export function whenRecorded(iso?: string | null, now = new Date()): string {
   if (!iso) return '';
   return `${dayLabel(iso, now)}, ${time.format(new Date(iso))}`;

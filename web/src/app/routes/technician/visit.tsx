@@ -14,7 +14,7 @@ import { paths } from '@/config/paths';
 import { useVisit } from '@/features/visits/api/get-visit';
 import { directionsHref, siteAddress } from '@/features/visits/components/visit-card';
 import { useVisitSection, VisitSections } from '@/features/visits/components/visit-sections';
-import { dayLabel, timeWindow, visitStatusWords, whenRecorded } from '@/features/visits/visit-format';
+import { dayLabel, timeWindow, visitStatusWords, whenSigned } from '@/features/visits/visit-format';
 import { useSession } from '@/lib/session';
 import type { VisitContext } from './visit-context';
 
@@ -87,7 +87,7 @@ export function Component() {
       )}
       {locked && (
         <Alert icon={<LockOutlined />} severity="info" sx={{ mt: 1.5 }}>
-          Signed off {visit.signedAt ? whenRecorded(visit.signedAt) : ''}
+          Signed off {visit.signedAt ? whenSigned(visit.signedAt) : ''}
           {visit.signedByName ? ` by ${visit.signedByName}` : ''}. The records are locked; a change made now goes to the office for review.
         </Alert>
       )}

@@ -10,7 +10,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { assessCableRun, type Verdict } from '@wiretrail/core';
 import { Link as RouterLink } from 'react-router-dom';
-import { VERDICT_WORDS } from '@/components/verdicts/verdict-chip';
+import { AidLine, VERDICT_WORDS } from '@/components/verdicts/verdict-chip';
 import { paths } from '@/config/paths';
 import type { CableRunRow } from '@/lib/db';
 import { useSiteCables } from '../api/get-site-cables';
@@ -70,6 +70,7 @@ export function CableList({ siteId, visitId, locked }: { siteId: string; visitId
           </List>
         </Paper>
       )}
+      {data.cables.length > 0 && <AidLine />}
       {data.cables.length > 0 && (
         <Button component={RouterLink} to={paths.cableLabels.href(visitId)} startIcon={<QrCode2Outlined />} variant="outlined" size="large">
           Print labels with QR codes

@@ -18,7 +18,9 @@ export function ConductorSwatch({ colour, size = 28 }: { colour: ConductorColour
         height: size,
         borderRadius: '50%',
         flexShrink: 0,
+        // A light ring in the dark theme, so brown and blue do not vanish into the background.
         border: '1px solid rgba(0,0,0,0.35)',
+        '[data-wt-scheme="dark"] &': { border: '1px solid #c9d4d6' },
         background: striped ? `repeating-linear-gradient(135deg, #f6f6f2 0 5px, ${hue} 5px 9px)` : hue,
       }}
     />

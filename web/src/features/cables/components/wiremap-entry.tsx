@@ -64,11 +64,14 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
           Both ends as {scheme}
         </Button>
         {value && (
-          <Button onClick={() => onChange(null)} disabled={disabled}>
+          <Button variant="outlined" onClick={() => onChange(null)} disabled={disabled}>
             Clear wiremap
           </Button>
         )}
       </Stack>
+      <Typography variant="body2" color="text.secondary">
+        Tap a pin to record the colour seen there. A pin that differs from {scheme} is outlined in red with ✕.
+      </Typography>
       <ToggleButtonGroup exclusive fullWidth value={end} onChange={(_, v) => v && setEnd(v)} aria-label="Which end">
         <ToggleButton value="nearEnd">{endNames.nearEnd}</ToggleButton>
         <ToggleButton value="farEnd">{endNames.farEnd}</ToggleButton>
@@ -96,15 +99,16 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
                 </td>
                 <td>
                   <Button
-                    variant={differs ? 'contained' : 'outlined'}
-                    color={differs ? 'warning' : 'primary'}
+                    variant="outlined"
+                    color={differs ? 'error' : 'primary'}
                     onClick={() => setPicking(pin)}
                     disabled={disabled}
                     aria-label={`${endName} pin ${pin}: ${value ? colourWords(seen) : 'not recorded'}`}
                     startIcon={value ? <ConductorSwatch colour={seen} size={22} /> : undefined}
-                    sx={{ justifyContent: 'flex-start', width: '100%', textTransform: 'none', px: 1.5 }}
+                    sx={{ justifyContent: 'flex-start', width: '100%', textTransform: 'none', px: 1.5, ...(differs ? { borderWidth: 2, fontWeight: 700 } : {}) }}
                   >
                     {value ? colourWords(seen) : 'Tap to record'}
+                    {differs ? ' ✕' : ''}
                   </Button>
                 </td>
               </tr>
@@ -120,7 +124,7 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
           {map.shorts.map(([a, b]) => (
             <Chip key={`${a}-${b}`} label={`Pins ${a} and ${b}`} onDelete={disabled ? undefined : () => set({ shorts: map.shorts.filter(([x, y]) => x !== a || y !== b) })} />
           ))}
-          <Button size="small" onClick={() => setAddingShort(true)} disabled={disabled || !value}>
+          <Button variant="outlined" onClick={() => setAddingShort(true)} disabled={disabled || !value}>
             Mark a short
           </Button>
         </Stack>
@@ -129,7 +133,7 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
         <Typography variant="body2" sx={{ fontWeight: 500 }} id="opens-label">
           No continuity end to end (a break along the cable)
         </Typography>
-        <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 1 }} role="group" aria-labelledby="opens-label">
+        <Box sx={{ display: 'grid', gridTemplateColumns: 'repeat(4, 1fr)', gap: 1 }} role="group" aria-labelledby="opens-label">
           {PINS.map((pin) => {
             const on = map.opens.includes(pin);
             return (
@@ -143,11 +147,11 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
                 variant={on ? 'filled' : 'outlined'}
                 disabled={disabled || !value}
                 onClick={() => set({ opens: on ? map.opens.filter((p) => p !== pin) : [...map.opens, pin].sort((x, y) => x - y) })}
-                sx={{ minWidth: 44, minHeight: 40 }}
+                sx={{ minHeight: 48, fontSize: '1rem', borderWidth: 1.5 }}
               />
             );
           })}
-        </Stack>
+        </Box>
       </Stack>
       {picking !== null && (
         <ColourPicker

@@ -16,9 +16,9 @@ import { KIND_WORDS } from './circuit-fields';
 export function describeCircuit(c: CircuitRow): string {
   return [
     c.kind ? KIND_WORDS[c.kind] : null,
-    c.deviceType ? `${/^[BCD]$/.test(c.deviceType) ? `type ${c.deviceType}` : c.deviceType} ${c.deviceRatingA ?? '?'} A` : 'device not recorded',
+    c.deviceType ? `${/^[BCD]$/.test(c.deviceType) ? `type ${c.deviceType}` : c.deviceType} ${c.deviceRatingA ?? '?'}\u00a0A` : 'device not recorded',
     c.rcdRatingMa ? `${c.rcdRatingMa} mA RCD${c.rcdType ? ` (${c.rcdType})` : ''}` : 'no RCD recorded',
-    c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2}/${c.cpcCsaMm2} mm²` : 'sizes not recorded',
+    c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2}/${c.cpcCsaMm2}\u00a0mm²` : 'sizes not recorded',
   ]
     .filter(Boolean)
     .join(' · ');

@@ -60,6 +60,9 @@ interface Props {
   onSaved: () => void;
 }
 
+/** The ring's own checks compare readings with each other; R1+R2 is compared with what the ring should give. */
+const AGAINST: Partial<Record<CircuitTestKey, 'expected' | 'within'>> = { 'ring-r1-rn': 'within', 'ring-r2': 'within', r1r2: 'expected' };
+
 const ohms = (v: number) => `${roundTo(v, 2).toFixed(2)} Ω`;
 
 /** What this visit's ring extension(s) should have made the end-to-end readings, from the point change's own figures. */
@@ -87,7 +90,7 @@ function Verdicts({ assessment, keys }: { assessment: CircuitTestAssessment; key
             <Typography variant="body2" sx={{ fontWeight: 500 }}>
               {l.label}
             </Typography>
-            <VerdictChip what={l.label} result={l.result} size="small" against={l.key === 'r1r2' ? 'expected' : 'limit'} />
+            <VerdictChip what={l.label} result={l.result} size="small" against={AGAINST[l.key] ?? 'limit'} />
           </Stack>
           {l.result.verdict !== 'pass' && (
             <Typography variant="body2" color={l.result.verdict === 'fail' ? 'error' : 'text.secondary'}>

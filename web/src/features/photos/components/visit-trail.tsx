@@ -13,6 +13,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
 import { useState } from 'react';
+import { AidLine } from '@/components/verdicts/verdict-chip';
 import type { VisitRow } from '@/lib/db';
 import { type UploadProgress, useUploadProgress } from '@/lib/photos/upload-progress';
 import { type PhotoStates, usePhotoStates } from '../api/get-photo-states';
@@ -36,7 +37,7 @@ const readingsWords = (v: unknown): string => {
 
 function IconTile({ children }: { children: ReactNode }) {
   return (
-    <Box sx={{ width: 88, height: 88, flexShrink: 0, borderRadius: 1.5, display: 'grid', placeItems: 'center', bgcolor: 'action.hover', color: 'primary.main', '& svg': { fontSize: 36 } }}>
+    <Box sx={{ width: 48, height: 48, flexShrink: 0, borderRadius: 1.5, display: 'grid', placeItems: 'center', bgcolor: 'action.hover', color: 'primary.main', '& svg': { fontSize: 28 } }}>
       {children}
     </Box>
   );
@@ -174,6 +175,7 @@ export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: 
           </List>
         </Paper>
       )}
+      {items.some((i) => i.kind === 'cableRun' || i.kind === 'testResult') && <AidLine />}
       {items.length > shown && (
         <Button variant="outlined" size="large" onClick={() => setShown((n) => n + PAGE)}>
           Show {Math.min(PAGE, items.length - shown)} more of {items.length - shown}

@@ -303,7 +303,7 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
                   <Stack spacing={0.75} role="status" aria-label="Fuse to fit">
                     <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
                       <Typography sx={{ fontWeight: 500 }}>{fuse.fuseRatingA ? `Fit a ${fuse.fuseRatingA} A fuse` : 'No plug-top fuse will do'}</Typography>
-                      <VerdictChip what="Fuse" result={fuse} />
+                      <VerdictChip what="Fuse" result={fuse} against="none" />
                     </Stack>
                     <Typography variant="body2" color="text.secondary">
                       {fuse.note}

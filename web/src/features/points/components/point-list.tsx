@@ -50,7 +50,7 @@ export function PointList({ visitId, siteId, locked }: { visitId: string; siteId
                     primary={`${ACTION_WORDS[p.action] ?? p.action}: ${p.accessoryKind ?? 'point'}`}
                     secondary={[
                       from && to ? `${from} → ${to}` : from || to,
-                      [p.circuitId ? circuitNames.get(p.circuitId) : null, p.connection ? CONNECTION_WORDS[p.connection] : null, p.fuseRatingA ? `${p.fuseRatingA} A fuse` : null]
+                      [p.circuitId ? circuitNames.get(p.circuitId) : null, p.connection ? CONNECTION_WORDS[p.connection] : null, p.fuseRatingA ? `${p.fuseRatingA}\u00a0A fuse` : null]
                         .filter(Boolean)
                         .join(' · '),
                     ]

@@ -11,7 +11,7 @@ import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { FINISHED_VISIT_STATUS } from '@wiretrail/core';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import type { VisitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
@@ -50,6 +50,9 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const errors = formState.errors;
+  const departures = useWatch({ control, name: 'departures' });
+  // A fail or a gap with no departure written cannot go on a certificate: say so at the field.
+  const departureWanted = problemCount > 0 && !departures?.trim();
 
   async function finish(v: SignOffValues) {
     setConfirming(false);
@@ -80,7 +83,21 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
       <Stack spacing={2}>
         <TextField label="Work done and its extent" multiline minRows={3} {...register('workDescription')} error={!!errors.workDescription} helperText={errors.workDescription?.message ?? 'As it should read on the certificate.'} />
         <TextField label="Observations" multiline minRows={2} {...register('observations')} error={!!errors.observations} helperText={errors.observations?.message ?? 'What you saw that the customer or the office should know.'} />
-        <TextField label="Departures" multiline minRows={2} {...register('departures')} error={!!errors.departures} helperText={errors.departures?.message ?? 'Where the work departs from the standard, and why. Needed for any fail or missing reading.'} />
+        <TextField
+          label="Departures"
+          multiline
+          minRows={2}
+          {...register('departures')}
+          error={!!errors.departures}
+          color={departureWanted ? 'warning' : undefined}
+          focused={departureWanted ? true : undefined}
+          helperText={
+            errors.departures?.message ??
+            (departureWanted
+              ? `${problemCount === 1 ? 'One problem is' : `${problemCount} problems are`} listed above: write where the work departs from the standard and why, or put it right first.`
+              : 'Where the work departs from the standard, and why. Needed for any fail or missing reading.')
+          }
+        />
         <TextField label="Signed by" {...register('signedByName')} error={!!errors.signedByName} helperText={errors.signedByName?.message ?? ' '} autoComplete="name" />
         <Controller control={control} name="signatureSvg" render={({ field }) => <SignatureBox onChange={field.onChange} error={errors.signatureSvg?.message} />} />
         {error && (

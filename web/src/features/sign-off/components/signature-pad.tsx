@@ -73,6 +73,7 @@ export function SignatureBox({ onChange, disabled, error }: { onChange: (svg: st
           {error ?? (drawable ? 'Sign above the line.' : 'This browser cannot draw a signature; open the visit in the phone’s own browser.')}
         </Typography>
         <Button
+          variant="outlined"
           onClick={() => {
             pad.current?.clear();
             report.current(null);

@@ -27,7 +27,7 @@ describe('Today', () => {
   it('records arrival with one tap, then offers sign-off', async () => {
     show(paths.today.path);
     fireEvent.click(await screen.findByRole('button', { name: 'I’m on site' }));
-    expect(await screen.findByRole('link', { name: 'Sign off and finish' })).toBeTruthy();
+    expect(await screen.findByRole('link', { name: 'Sign off' })).toBeTruthy();
     const visit = await db.visit.get(ids.visit);
     expect(visit).toMatchObject({ status: 'on-site' });
     expect(Date.parse(visit!.actualStart!)).toBeGreaterThan(Date.now() - 60_000);

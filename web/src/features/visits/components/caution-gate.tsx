@@ -5,9 +5,10 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { type ReactNode, useState } from 'react';
-import { SafetyCaution } from '@/components/safety-caution';
 import type { VisitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
+
+const readAt = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit' });
 
 const CAUTIONS = [
   'Isolate the circuit at its protective device and lock it off; keep the key or tag on you.',
@@ -23,10 +24,31 @@ const CAUTIONS = [
  */
 export function CautionGate({ visit, locked, children }: { visit: VisitRow; locked: boolean; children: ReactNode }) {
   const [error, setError] = useState<string | null>(null);
+  const [expanded, setExpanded] = useState(false);
   if (visit.cautionsReadAt || locked) {
+    // Once read, a short reminder stays in view; the whole list is one tap away.
     return (
       <>
-        <SafetyCaution />
+        <Alert
+          severity="warning"
+          variant="outlined"
+          sx={{ mb: 2, '& .MuiAlert-message': { width: '100%' } }}
+          action={
+            <Button color="inherit" onClick={() => setExpanded((e) => !e)} aria-expanded={expanded}>
+              {expanded ? 'Less' : 'All'}
+            </Button>
+          }
+        >
+          Isolate and lock off, prove dead with an approved voltage indicator and work within your competence; the regulations in force, local codes and licensed practice decide.
+          {visit.cautionsReadAt ? ` Read at ${readAt.format(new Date(visit.cautionsReadAt))}.` : ''}
+          {expanded && (
+            <Stack component="ul" spacing={0.75} sx={{ pl: 2.5, mb: 0, mt: 1 }}>
+              {CAUTIONS.map((c) => (
+                <li key={c}>{c}</li>
+              ))}
+            </Stack>
+          )}
+        </Alert>
         {children}
       </>
     );

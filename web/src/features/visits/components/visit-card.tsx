@@ -82,7 +82,7 @@ export function VisitCard({ summary }: { summary: VisitSummary }) {
         )}
         {status === 'on-site' && (
           <Button variant="contained" color="secondary" component={RouterLink} to={paths.visitSignOff.href(visit.id)} sx={{ flex: 1 }}>
-            Sign off and finish
+            Sign off
           </Button>
         )}
       </CardActions>

@@ -27,9 +27,22 @@ export function VisitSections({ visitId }: { visitId: string }) {
     <Tabs
       value={current}
       variant="scrollable"
-      scrollButtons={false}
+      scrollButtons="auto"
       aria-label="Parts of this visit"
-      sx={{ mx: -2, px: 1, mb: 2, borderBottom: 1, borderColor: 'divider', position: 'sticky', top: 56, zIndex: 2, bgcolor: 'background.default', '& .MuiTab-root': { minHeight: 52, fontSize: '1rem' } }}
+      allowScrollButtonsMobile
+      sx={{
+        mx: -2,
+        mb: 2,
+        borderBottom: 1,
+        borderColor: 'divider',
+        position: 'sticky',
+        top: 56,
+        zIndex: 2,
+        bgcolor: 'background.default',
+        // Five sections fit across a 390 px phone; narrower screens scroll, with arrows to say so.
+        '& .MuiTab-root': { minHeight: 52, minWidth: 0, px: 1.1, fontSize: '0.95rem' },
+        '& .MuiTabs-scrollButtons.Mui-disabled': { opacity: 0.3 },
+      }}
     >
       {SECTIONS.map((s) => (
         <Tab key={s.key} value={s.key} label={s.label} component={RouterLink} to={s.href(visitId)} />

@@ -5,7 +5,7 @@ import Typography from '@mui/material/Typography';
 import { useSignOff } from '@/features/sign-off/api/get-sign-off';
 import { SignOffForm } from '@/features/sign-off/components/sign-off-form';
 import { SignOffSummaryView } from '@/features/sign-off/components/sign-off-summary';
-import { whenRecorded } from '@/features/visits/visit-format';
+import { whenSigned } from '@/features/visits/visit-format';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {
@@ -21,7 +21,7 @@ export function Component() {
         <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-label="Signed">
           <Stack spacing={1}>
             <Typography sx={{ fontWeight: 500 }}>
-              Signed by {visit.signedByName} {visit.signedAt ? `· ${whenRecorded(visit.signedAt)}` : ''}
+              Signed by {visit.signedByName} {visit.signedAt ? `· ${whenSigned(visit.signedAt)}` : ''}
             </Typography>
             {visit.signatureSvg && (
               <Box component="img" alt={`Signature of ${visit.signedByName ?? 'the signer'}`} src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(visit.signatureSvg)}`} sx={{ maxWidth: '100%', bgcolor: '#fbfbf8', borderRadius: 1 }} />
