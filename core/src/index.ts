@@ -19,3 +19,4 @@ export * from './sync/photos.js';
 export * from './electrical/protective-conductor.js';
 export * from './certification/circuit-test.js';
 export * from './cabling/cable-test.js';
+export * from './money/vat.js';
