@@ -233,6 +233,14 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   const problems = page.getByRole('list', { name: 'Fails and missing readings' });
   await expect(problems).toContainText('Fail: Circuit 1 (Sockets, ground floor): Earth fault loop impedance Zs');
   await expect(problems).toContainText(`Fail: Cable ${splitCable}`);
+  // The parts used, from the price list the phone holds.
+  const addPart = page.getByRole('form', { name: 'Add a part' });
+  await addPart.getByLabel('Part').selectOption({ label: '2.5 mm² twin and earth cable' });
+  await addPart.getByLabel(/Quantity/).fill('6');
+  await addPart.getByRole('button', { name: 'Add part' }).click();
+  await addPart.getByLabel('Part').selectOption({ label: 'Switched fused connection unit, white' });
+  await addPart.getByRole('button', { name: 'Add part' }).click();
+  await expect(page.getByRole('list', { name: 'Parts used on this visit' }).getByRole('listitem')).toHaveCount(2);
   await page.getByLabel('Observations').fill('Zs high at the new socket; the ring will be checked at the board on the return visit.');
   await sign(page);
   await shot(page, testInfo, 'sign-off');
@@ -268,6 +276,12 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   const [result] = live('testResult', (r) => r.visitId === visitId);
   expect(result).toMatchObject({ r1Ohm: 0.56, rnOhm: 0.56, r2Ohm: 0.92, r1r2Ohm: 0.37, zsOhm: 1.25, polarity: 'correct', rcdTripMs: 24, irTestVoltageV: 500 });
   expect(result!.verdicts).toMatchObject({ ruleSetId: 'uk-bs7671-2018-a2-2022', verdict: 'fail', lines: { zs: 'fail', 'ring-r1-rn': 'pass' } });
+  const parts = live('materialLine', (r) => r.visitId === visitId);
+  expect(parts.map((p) => [p.description, p.quantity, p.unit]).sort()).toEqual([
+    ['2.5 mm² twin and earth cable', 6, 'm'],
+    ['Switched fused connection unit, white', 1, 'each'],
+  ]);
+  expect(Date.parse(String(visit.actualEnd))).toBeGreaterThanOrEqual(Date.parse(String(visit.actualStart)));
   const photos = live('photo', (r) => r.visitId === visitId);
   expect(photos).toHaveLength(2);
   expect(photos.find((p) => String(p.caption).startsWith('Moved socket'))).toMatchObject({ subjectType: 'pointChange', uploadState: 'ready' });

@@ -73,7 +73,9 @@ export class SyncService {
         .take(take);
       if (scope) {
         const visible = Object.values(SYNC_ENTITIES).filter((s) => s.technicianVisible && s.siteField).map((s) => s.name);
-        qb.andWhere('((c.entity IN (:...visible) AND c.siteId IN (:...sites)) OR (c.entity = :customer AND c.rowId IN (:...customers)))', {
+        const everyone = Object.values(SYNC_ENTITIES).filter((s) => s.technicianVisible && s.organisationWide).map((s) => s.name);
+        qb.andWhere('((c.entity IN (:...visible) AND c.siteId IN (:...sites)) OR (c.entity = :customer AND c.rowId IN (:...customers)) OR c.entity IN (:...everyone))', {
+          everyone: everyone.length ? everyone : [''],
           visible,
           sites: sitesNow!.length ? sitesNow : [''],
           customer: 'customer',

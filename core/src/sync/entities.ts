@@ -5,6 +5,7 @@
 
 export const SYNC_ENTITY_NAMES = [
   'customer', 'site', 'area', 'board', 'circuit', 'job', 'visit', 'photo', 'note', 'cableRun', 'pointChange', 'testResult', 'document', 'conflict',
+  'priceItem', 'materialLine',
 ] as const;
 export type SyncEntityName = (typeof SYNC_ENTITY_NAMES)[number];
 /** Rows a field may point at: synced entities, and users (technicians on a visit). */
@@ -65,6 +66,8 @@ export interface EntitySpec {
   readonly visitField: 'visitId' | 'id' | null;
   /** Only the server creates these rows (conflicts). */
   readonly serverOnly?: boolean;
+  /** Belongs to the whole organisation, not a site: every technician receives it (the price list, to pick parts offline). */
+  readonly organisationWide?: boolean;
 }
 
 const str = (max = 200): FieldType => ({ kind: 'string', max });
@@ -212,6 +215,22 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       pdfSha256: office(str(64)), pdfBytes: office(int(0)), issuedAt: office(when), issuedById: office(ref('user')),
       // Sending by e-mail: queued, then sent, or failed with the reason (retried until it gives up).
       emailState: office(oneOf(...DOCUMENT_EMAIL_STATES)), emailedTo: office(str(254)), emailedAt: office(when), emailError: office(str(500)),
+    },
+  },
+  {
+    // The organisation's price list: the office keeps it; phones get it to pick parts with no signal.
+    name: 'priceItem', table: 'price_item', technicianWrite: 'none', technicianVisible: true, siteField: null, visitField: null, organisationWide: true,
+    fields: {
+      name: office(str(), true), unit: office(str(20), true), category: office(str(60)), code: office(str(40)),
+      costMinor: office(int(0, 100_000_000)), sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office({ kind: 'boolean' }),
+    },
+  },
+  {
+    // A part used on a visit: picked from the price list or typed; prices are the office's, on the invoice.
+    name: 'materialLine', table: 'material_line', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
+    fields: {
+      visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), priceItemId: seen(ref('priceItem')),
+      description: seen(str(), true), quantity: seen(num(0.001, 100_000), true), unit: seen(str(20)),
     },
   },
   {

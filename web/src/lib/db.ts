@@ -172,6 +172,22 @@ export interface NoteRow extends LocalRow {
   text: string;
 }
 
+export interface PriceItemRow extends LocalRow {
+  name: string;
+  unit: string;
+  category?: string | null;
+  code?: string | null;
+  active?: boolean | null;
+}
+export interface MaterialLineRow extends LocalRow {
+  visitId: string;
+  siteId: string;
+  priceItemId?: string | null;
+  description: string;
+  quantity: number;
+  unit?: string | null;
+}
+
 /** A change made on this phone and not yet acknowledged by the server, in the order it was made. */
 export interface OutboxEntry extends Mutation {
   seq?: number;
@@ -268,8 +284,8 @@ export interface MetaEntry<K extends MetaKey = MetaKey> {
   value: MetaValues[K];
 }
 
-/** Indexed fields only: the rest of each row is stored but not indexed. */
-const ENTITY_INDEXES: Record<SyncEntityName, string> = {
+/** Indexed fields only: the rest of each row is stored but not indexed. Tables as first shipped (version 1). */
+const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine'>, string> = {
   customer: 'id',
   site: 'id, customerId',
   area: 'id, siteId',
@@ -301,6 +317,8 @@ export class WiretrailDb extends Dexie {
   declare testResult: Table<TestResultRow, string>;
   declare document: Table<LocalRow, string>;
   declare conflict: Table<LocalRow, string>;
+  declare priceItem: Table<PriceItemRow, string>;
+  declare materialLine: Table<MaterialLineRow, string>;
   declare outbox: Table<OutboxEntry, number>;
   declare failed: Table<FailedEntry, number>;
   declare meta: Table<MetaEntry, MetaKey>;
@@ -321,6 +339,11 @@ export class WiretrailDb extends Dexie {
       photoBlobs: 'sha256, state, [state+createdAt]',
       photoThumbs: 'sha256',
       photoUploads: 'key, fingerprint',
+    });
+    // The price list, and the parts used on visits.
+    this.version(3).stores({
+      priceItem: 'id, category',
+      materialLine: 'id, visitId, siteId',
     });
   }
 

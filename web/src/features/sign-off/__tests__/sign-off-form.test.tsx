@@ -42,8 +42,40 @@ describe('sign-off', () => {
   it('keeps the signature as a small SVG of its strokes', () => {
     const svg = strokesToSvg([{ points: [{ x: 10.4, y: 20.6, pressure: 0.5, time: 0 }, { x: 30, y: 40, pressure: 0.5, time: 1 }], dotSize: 0, minWidth: 1, maxWidth: 3, penColor: '#000', velocityFilterWeight: 0.7, compositeOperation: 'source-over' }], 320, 180);
     expect(svg).toBe('<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 320 180" width="320" height="180"><g fill="none" stroke="#14262b" stroke-width="2.5" stroke-linecap="round" stroke-linejoin="round"><path d="M10 21L30 40"/></g></svg>');
-    const ok = signOffSchema.safeParse({ workDescription: 'Moved a socket', observations: '', departures: '', signedByName: 'Sam', signatureSvg: svg });
-    expect(ok.success).toBe(true);
-    expect(signOffSchema.safeParse({ workDescription: 'x', observations: '', departures: '', signedByName: 'Sam', signatureSvg: 'x'.repeat(60_001) }).success).toBe(false);
+    const base = { arrivedAt: '09:05', leftAt: '12:30', workDescription: 'Moved a socket', observations: '', departures: '', signedByName: 'Sam' };
+    expect(signOffSchema.safeParse({ ...base, signatureSvg: svg }).success).toBe(true);
+    expect(signOffSchema.safeParse({ ...base, signatureSvg: 'x'.repeat(60_001) }).success).toBe(false);
+    const backwards = signOffSchema.safeParse({ ...base, leftAt: '08:00', signatureSvg: svg });
+    expect(backwards.error?.issues[0]).toMatchObject({ path: ['leftAt'], message: 'The time you left must be after the time you arrived.' });
+  });
+});
+
+describe('parts used', () => {
+  it('picks parts from the price list on the phone, or takes a typed line, with a quantity that makes sense', async () => {
+    await db.priceItem.bulkPut([
+      { id: '01900000-0000-7000-8000-000000000040', name: '2.5 mm² twin and earth cable', unit: 'm', category: 'Cable', active: true, ...base },
+      { id: '01900000-0000-7000-8000-000000000041', name: 'Twin switched socket-outlet', unit: 'each', category: 'Accessories', active: true, ...base },
+    ]);
+    show(paths.visitSignOff.href(ids.visit));
+    const form = await screen.findByRole('form', { name: 'Add a part' });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
+    expect(await within(form).findByText('Pick the part from the price list, or choose “Something else”.')).toBeTruthy();
+    fireEvent.change(within(form).getByLabelText('Part'), { target: { value: '01900000-0000-7000-8000-000000000040' } });
+    fireEvent.change(within(form).getByLabelText(/Quantity/), { target: { value: '-2' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
+    expect(await within(form).findByText('The quantity must be at least 0.001.')).toBeTruthy();
+    fireEvent.change(within(form).getByLabelText(/Quantity/), { target: { value: '12.5' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
+    const list = await screen.findByRole('list', { name: 'Parts used on this visit' });
+    expect(await within(list).findByText('12.5 m')).toBeTruthy();
+    fireEvent.change(within(form).getByLabelText('Part'), { target: { value: 'typed' } });
+    fireEvent.change(await within(form).findByLabelText('What it is'), { target: { value: 'Grommet strip, 1 m' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
+    expect(await within(list).findByText('Grommet strip, 1 m')).toBeTruthy();
+    const lines = await db.materialLine.toArray();
+    expect(lines.map((l) => [l.description, l.quantity, l.unit ?? null])).toEqual([
+      ['2.5 mm² twin and earth cable', 12.5, 'm'],
+      ['Grommet strip, 1 m', 1, null],
+    ]);
   });
 });

@@ -19,14 +19,28 @@ import { SignatureBox } from './signature-pad';
 
 const text = (max: number, what: string) => z.string().max(max, `${what} must be at most ${max.toLocaleString('en-GB')} characters.`);
 
+const CLOCK = /^([01]\d|2[0-3]):[0-5]\d$/;
+
 export const signOffSchema = z.object({
+  arrivedAt: z.string().regex(CLOCK, 'Give the time you arrived, like 09:05.'),
+  leftAt: z.string().regex(CLOCK, 'Give the time you are leaving, like 12:30.'),
   workDescription: text(20_000, 'The description of the work').refine((s) => s.trim().length > 0, 'Describe the work done and its extent.'),
   observations: text(20_000, 'The observations'),
   departures: text(20_000, 'The departures'),
   signedByName: z.string().trim().min(1, 'Give the name of the person signing.').max(200, 'The name must be at most 200 characters.'),
   signatureSvg: z.string().nullable().refine((s) => !!s, 'Sign in the box to finish the visit.').refine((s) => !s || s.length <= 60_000, 'The signature is too long; clear it and sign again.'),
-});
+}).refine((v) => !CLOCK.test(v.arrivedAt) || !CLOCK.test(v.leftAt) || v.leftAt >= v.arrivedAt, { path: ['leftAt'], message: 'The time you left must be after the time you arrived.' });
 export type SignOffValues = z.infer<typeof signOffSchema>;
+
+const clock = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
+
+/** The time of day on the visit's own day: time on site is billed from these. */
+export function onDay(dayIso: string, hhmm: string): string {
+  const d = new Date(dayIso);
+  const [h, m] = hhmm.split(':').map(Number);
+  d.setHours(h!, m!, 0, 0);
+  return d.toISOString();
+}
 
 interface Props {
   visit: VisitRow;
@@ -40,6 +54,8 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
   const { register, control, handleSubmit, formState, getValues } = useForm<SignOffValues>({
     resolver: zodResolver(signOffSchema),
     defaultValues: {
+      arrivedAt: clock(new Date(visit.actualStart ?? visit.plannedStart ?? Date.now())),
+      leftAt: clock(new Date()),
       workDescription: visit.workDescription ?? defaultDescription,
       observations: visit.observations ?? '',
       departures: visit.departures ?? '',
@@ -58,11 +74,12 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
     setConfirming(false);
     setError(null);
     const now = new Date().toISOString();
+    const day = visit.actualStart ?? visit.plannedStart ?? now;
     try {
       await saveRecord('visit', visit.id, {
         status: FINISHED_VISIT_STATUS,
-        actualStart: visit.actualStart ?? now,
-        actualEnd: now,
+        actualStart: onDay(day, v.arrivedAt),
+        actualEnd: onDay(day, v.leftAt),
         signedAt: now,
         signedByName: v.signedByName.trim(),
         signatureSvg: v.signatureSvg,
@@ -81,6 +98,10 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
   return (
     <Box component="form" aria-label="Sign off" noValidate onSubmit={submit}>
       <Stack spacing={2}>
+        <Stack direction="row" spacing={1.5}>
+          <TextField label="Arrived" type="time" {...register('arrivedAt')} error={!!errors.arrivedAt} helperText={errors.arrivedAt?.message ?? 'Time on site starts here.'} slotProps={{ inputLabel: { shrink: true } }} />
+          <TextField label="Left" type="time" {...register('leftAt')} error={!!errors.leftAt} helperText={errors.leftAt?.message ?? ' '} slotProps={{ inputLabel: { shrink: true } }} />
+        </Stack>
         <TextField label="Work done and its extent" multiline minRows={3} {...register('workDescription')} error={!!errors.workDescription} helperText={errors.workDescription?.message ?? 'As it should read on the certificate.'} />
         <TextField label="Observations" multiline minRows={2} {...register('observations')} error={!!errors.observations} helperText={errors.observations?.message ?? 'What you saw that the customer or the office should know.'} />
         <TextField

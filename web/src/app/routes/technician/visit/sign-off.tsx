@@ -2,6 +2,7 @@ import Box from '@mui/material/Box';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
+import { PartsUsed } from '@/features/parts/components/parts-used';
 import { useSignOff } from '@/features/sign-off/api/get-sign-off';
 import { SignOffForm } from '@/features/sign-off/components/sign-off-form';
 import { SignOffSummaryView } from '@/features/sign-off/components/sign-off-summary';
@@ -17,6 +18,7 @@ export function Component() {
     <Stack spacing={2}>
       <Typography variant="h2">Sign-off</Typography>
       <SignOffSummaryView summary={signOff} signed={locked} />
+      <PartsUsed visitId={visit.id} siteId={visit.siteId} locked={locked} />
       {locked ? (
         <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-label="Signed">
           <Stack spacing={1}>

@@ -1,0 +1,134 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import DeleteOutlined from '@mui/icons-material/DeleteOutlined';
+import Button from '@mui/material/Button';
+import IconButton from '@mui/material/IconButton';
+import List from '@mui/material/List';
+import ListItem from '@mui/material/ListItem';
+import ListItemText from '@mui/material/ListItemText';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import TextField from '@mui/material/TextField';
+import Typography from '@mui/material/Typography';
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { z } from 'zod';
+import { readingField, usableReading } from '@/lib/readings';
+import { createRecord, deleteRecord } from '@/lib/sync/local-write';
+import { useVisitParts } from '../api/get-parts';
+
+const TYPED = 'typed';
+
+export const partSchema = z
+  .object({
+    priceItemId: z.string(),
+    description: z.string().max(200, 'The description must be at most 200 characters.'),
+    quantity: readingField('materialLine', 'quantity', 'The quantity', '', true),
+    unit: z.string().max(20, 'The unit must be at most 20 characters.'),
+  })
+  .superRefine((v, ctx) => {
+    if (!v.priceItemId) ctx.addIssue({ code: 'custom', path: ['priceItemId'], message: 'Pick the part from the price list, or choose “Something else”.' });
+    if (v.priceItemId === TYPED && !v.description.trim()) ctx.addIssue({ code: 'custom', path: ['description'], message: 'Say what the part is.' });
+  });
+type PartValues = z.infer<typeof partSchema>;
+
+const quantityWords = (q: number, unit?: string | null) => `${Number.isInteger(q) ? q : q.toFixed(3).replace(/0+$/, '')}${unit && unit !== 'each' ? `\u00a0${unit}` : ''}`;
+
+/** A quick parts list: pick from the organisation's price list (on the phone, so it works with no signal) or type a line. */
+export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId: string; locked: boolean }) {
+  const parts = useVisitParts(visitId);
+  const { register, handleSubmit, formState, reset, control } = useForm<PartValues>({ resolver: zodResolver(partSchema), defaultValues: { priceItemId: '', description: '', quantity: '1', unit: '' } });
+  const [error, setError] = useState<string | null>(null);
+  const chosen = useWatch({ control, name: 'priceItemId' });
+  const item = parts?.items.get(chosen);
+  const errors = formState.errors;
+
+  async function add(v: PartValues) {
+    setError(null);
+    const picked = parts?.items.get(v.priceItemId);
+    try {
+      await createRecord('materialLine', {
+        visitId,
+        siteId,
+        ...(picked ? { priceItemId: picked.id, description: picked.name, unit: picked.unit } : { description: v.description.trim(), ...(v.unit.trim() ? { unit: v.unit.trim() } : {}) }),
+        quantity: usableReading(v.quantity)!,
+      });
+      reset({ priceItemId: '', description: '', quantity: '1', unit: '' });
+    } catch (err) {
+      setError((err as Error).message);
+    }
+  }
+
+  if (!parts) return null;
+  return (
+    <Paper variant="outlined" sx={{ p: 1.5 }} component="section" aria-labelledby="parts-heading">
+      <Stack spacing={1.5}>
+        <Typography variant="h3" id="parts-heading">
+          Parts used
+        </Typography>
+        {parts.lines.length === 0 ? (
+          <Typography variant="body2" color="text.secondary">
+            None recorded yet. The office prices them on the invoice.
+          </Typography>
+        ) : (
+          <List dense disablePadding aria-label="Parts used on this visit">
+            {parts.lines.map((l) => (
+              <ListItem
+                key={l.id}
+                divider
+                secondaryAction={
+                  !locked && (
+                    <IconButton edge="end" aria-label={`Remove ${l.description}`} onClick={() => deleteRecord('materialLine', l.id).catch((err: Error) => setError(err.message))}>
+                      <DeleteOutlined />
+                    </IconButton>
+                  )
+                }
+              >
+                <ListItemText primary={l.description} secondary={quantityWords(l.quantity, l.unit)} />
+              </ListItem>
+            ))}
+          </List>
+        )}
+        {!locked && (
+          <Stack component="form" aria-label="Add a part" noValidate onSubmit={handleSubmit(add)} spacing={1.5}>
+            <TextField select label="Part" {...register('priceItemId')} error={!!errors.priceItemId} helperText={errors.priceItemId?.message} slotProps={{ select: { native: true }, inputLabel: { shrink: true } }}>
+              <option value="">Choose…</option>
+              {parts.catalogue.map((g) => (
+                <optgroup key={g.category} label={g.category}>
+                  {g.items.map((i) => (
+                    <option key={i.id} value={i.id}>
+                      {i.name}
+                    </option>
+                  ))}
+                </optgroup>
+              ))}
+              <option value={TYPED}>Something else…</option>
+            </TextField>
+            {chosen === TYPED && (
+              <Stack direction="row" spacing={1.5}>
+                <TextField label="What it is" {...register('description')} error={!!errors.description} helperText={errors.description?.message ?? ' '} />
+                <TextField label="Unit" placeholder="each" {...register('unit')} error={!!errors.unit} helperText={errors.unit?.message ?? ' '} sx={{ maxWidth: 110 }} />
+              </Stack>
+            )}
+            <Stack direction="row" spacing={1.5} sx={{ alignItems: 'flex-start' }}>
+              <TextField
+                label={`Quantity${item && item.unit !== 'each' ? ` (${item.unit})` : ''}`}
+                {...register('quantity')}
+                error={!!errors.quantity}
+                helperText={errors.quantity?.message ?? ' '}
+                slotProps={{ htmlInput: { inputMode: 'decimal' } }}
+              />
+              <Button type="submit" variant="outlined" size="large" sx={{ minHeight: 56, flexShrink: 0 }}>
+                Add part
+              </Button>
+            </Stack>
+            {error && (
+              <Typography color="error" role="alert">
+                {error}
+              </Typography>
+            )}
+          </Stack>
+        )}
+      </Stack>
+    </Paper>
+  );
+}
