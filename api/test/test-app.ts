@@ -57,3 +57,10 @@ export async function signIn(t: TestApp, email: string, password = DEMO_PASSWORD
 export function expectErrorBody(body: unknown, statusCode: number): void {
   expect(body).toEqual(expect.objectContaining({ statusCode, message: expect.anything() }));
 }
+
+/** Waits for something the server does in the background (an e-mail, a retry), for up to `ms`. */
+export async function until(done: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
+  const deadline = Date.now() + ms;
+  while (!(await done()) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
+  expect(await done()).toBe(true);
+}

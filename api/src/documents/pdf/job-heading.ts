@@ -1,0 +1,47 @@
+import type { JobFile } from '../document-content.js';
+import { type DocumentLayout, INK } from './document-layout.js';
+import { dateWords, joined } from './document-words.js';
+
+/** What every document is about: who did the work and for whom, where. */
+export function jobHeading(layout: DocumentLayout, file: JobFile): void {
+  const { organisation: org, job, site, customer } = file;
+  layout.sideBySide([
+    {
+      title: 'Contractor',
+      pairs: [
+        ['Name', org.name],
+        ['Address', org.address ?? ''],
+        ['Telephone and e-mail', joined([org.phone, org.email], ' · ')],
+        ['Registration number', org.registrationNumber ?? 'Not recorded'],
+      ],
+    },
+    {
+      title: 'Customer and site',
+      pairs: [
+        ['Customer', joined([customer?.name])],
+        ['Site', joined([site.name, site.address, site.postcode])],
+        ['Job', joined([job.reference, job.title], ' · ')],
+        ['Customer’s address', joined([customer?.address])],
+      ],
+    },
+  ]);
+}
+
+export interface Issue {
+  number: string;
+  issuedAt: Date;
+  issuedBy: string;
+}
+
+export const issuedWords = (issue: Issue, file: JobFile) => `Issued ${dateWords(issue.issuedAt, file.organisation.timeZone)}`;
+
+/** The closing line: who issued it and when, for the contractor. */
+export function issuedBy(layout: DocumentLayout, issue: Issue, file: JobFile): void {
+  layout.paragraph(
+    `Issued by ${issue.issuedBy} for ${file.organisation.name} on ${dateWords(issue.issuedAt, file.organisation.timeZone)}. ` +
+      `The PDF's SHA-256 fingerprint is kept with the job, so any copy can be checked against the one issued.`,
+    'regular',
+    INK.muted,
+    8,
+  );
+}
