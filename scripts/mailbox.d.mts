@@ -20,7 +20,8 @@ export interface ReceivedMail {
 export interface Mailbox {
   port: number;
   messages: ReceivedMail[];
-  readonly deliveries: number;
+  /** When each message was offered, delivered or turned away (ms since the epoch). */
+  offeredAt: number[];
   /** Turns every message away with this SMTP reply until accept(). */
   refuse(code: number, message: string): void;
   accept(): void;

@@ -7,13 +7,13 @@ import { SMTPServer } from 'smtp-server';
 export async function startMailbox({ port = 0, host = '127.0.0.1', keep = 500 } = {}) {
   const messages = [];
   let refusal = null;
-  let deliveries = 0;
+  const offeredAt = [];
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ['STARTTLS'],
     logger: false,
     onData(stream, session, callback) {
-      deliveries++;
+      offeredAt.push(Date.now());
       if (refusal) {
         // Read the message to its end first, as a real server does before it answers.
         const { code, message } = refusal;
@@ -46,10 +46,8 @@ export async function startMailbox({ port = 0, host = '127.0.0.1', keep = 500 } 
   return {
     port: server.server.address().port,
     messages,
-    /** Every message offered, delivered or turned away. */
-    get deliveries() {
-      return deliveries;
-    },
+    /** When each message was offered, delivered or turned away (ms since the epoch). */
+    offeredAt,
     refuse(code, message) {
       refusal = { code, message };
     },
