@@ -73,11 +73,11 @@ export async function cablingReportPdf({ issue, file, cables, rules }: CablingRe
   layout.table(
     [
       { header: 'Label', width: 0.7 },
-      { header: 'End A', width: 2.2 },
-      { header: 'End B', width: 2.2 },
+      { header: 'End A', width: 2.1 },
+      { header: 'End B', width: 2.1 },
       { header: 'Medium', width: 0.7 },
       { header: 'Scheme', width: 0.7 },
-      { header: 'Length', width: 1.1 },
+      { header: 'Length', width: 1.3 },
       { header: 'Link', width: 1 },
       { header: 'Wiremap', width: 1.8 },
       { header: 'Verdict', width: 0.7 },

@@ -1,7 +1,9 @@
 import PDFDocument from 'pdfkit';
 import { readFile } from 'node:fs/promises';
-import { createRequire } from 'node:module';
 import sharp from 'sharp';
+import { type FontWeight, roboto } from './roboto.js';
+
+export type { FontWeight };
 
 /** Wiretrail's palette on paper: deep slate-teal with a copper accent, and verdict colours that print dark enough to read. */
 export const INK = {
@@ -18,16 +20,6 @@ export const INK = {
   check: '#8a5200',
 } as const;
 
-export type FontWeight = 'regular' | 'medium' | 'bold' | 'italic';
-
-const require = createRequire(import.meta.url);
-/** The full Roboto (not a latin subset): certificates need Ω, ≤, ≥ and ². */
-const FONT_FILES: Record<FontWeight, string> = {
-  regular: require.resolve('roboto-fontface/fonts/roboto/Roboto-Regular.woff'),
-  medium: require.resolve('roboto-fontface/fonts/roboto/Roboto-Medium.woff'),
-  bold: require.resolve('roboto-fontface/fonts/roboto/Roboto-Bold.woff'),
-  italic: require.resolve('roboto-fontface/fonts/roboto/Roboto-RegularItalic.woff'),
-};
 
 const LOGO = new URL('../../../../web/public/logo.svg', import.meta.url);
 let logoPng: Promise<Buffer | null> | null = null;
@@ -101,7 +93,7 @@ export class DocumentLayout {
       bufferPages: true,
       info: { Title: `${o.number} ${o.title}`, Author: o.contractor, Subject: o.subject, Creator: 'Wiretrail', Producer: 'Wiretrail' },
     });
-    for (const [weight, file] of Object.entries(FONT_FILES)) this.doc.registerFont(weight, file);
+    for (const [weight, font] of Object.entries(roboto())) this.doc.registerFont(weight, font);
     this.doc.on('data', (c: Buffer) => this.chunks.push(c));
     this.ended = new Promise((resolve, reject) => {
       this.doc.on('end', () => resolve());

@@ -82,7 +82,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   const days = [...new Set(visits.map((v) => dateWords(v.actualEnd ?? v.signedAt ?? v.plannedStart, tz)).filter(Boolean))];
   layout.fields([
     ['Carried out on', days.join(', ')],
-    ['Standard it was done to', `${rules.edition} (Wiretrail rule set ${rules.id})`],
+    ['Standard it was done to', rules.edition],
   ]);
 
   layout.heading('Supply and earthing at the site');
@@ -177,7 +177,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   layout.y = Math.max(below, top + 92);
   doc.x = layout.left;
 
-  layout.notice('About the verdicts on this certificate', `${VERDICT_DISCLAIMER} Limits are those of ${rules.name}.`);
+  layout.notice('About the verdicts on this certificate', `${VERDICT_DISCLAIMER} Limits are those of ${rules.name} (Wiretrail rule set ${rules.id}).`);
   issuedBy(layout, issue, file);
   return layout.finish();
 }
