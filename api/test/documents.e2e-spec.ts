@@ -274,4 +274,22 @@ describe('issuing documents', () => {
     // Newest first.
     expect(list.map((d) => d.issuedAt)).toEqual([...list.map((d) => d.issuedAt)].sort().reverse());
   });
+
+  it('prints the registration number and local dates the admin sets for the organisation', async () => {
+    const admin = await signIn(t, 'admin@larkfield.example');
+    const org = admin.user.organisationId;
+    const bad = await t.http.patch(`/api/organisations/${org}`).set(bearer(admin)).send({ registrationNumber: '', timeZone: 'Mars/Olympus' }).expect(400);
+    expect(bad.body.message).toEqual(expect.arrayContaining(['registrationNumber must not be empty', 'timeZone must be a time zone such as Europe/London']));
+    await t.http.patch(`/api/organisations/${org}`).set(bearer(office)).send({ registrationNumber: 'LKD-99999' }).expect(403);
+    const changed = (await t.http.patch(`/api/organisations/${org}`).set(bearer(admin)).send({ registrationNumber: ' LKD-20417/B ', timeZone: 'Pacific/Auckland' }).expect(200)).body;
+    expect(changed).toMatchObject({ registrationNumber: 'LKD-20417/B', timeZone: 'Pacific/Auckland' });
+
+    const res = await issue(office, orchard.id, 'minor-works').expect(201);
+    const text = await pdfText((await downloadPdf(t, office, res.body.id)).bytes);
+    expect(text).toContain('REGISTRATION NUMBER LKD-20417/B');
+    // Signed at 10:48 UTC on the visit's day: the same moment as the contractor's clock in Auckland shows it.
+    const visit = officeView.one('visit', (v) => v.jobId === orchard.id);
+    const signed = new Intl.DateTimeFormat('en-GB', { timeZone: 'Pacific/Auckland', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' }).format(new Date(visit.signedAt as string));
+    expect(text).toContain(`SIGNED ON SITE ${signed}`);
+  });
 });
