@@ -1,8 +1,7 @@
 import { isTwistedPair, type RuleSet, VERDICT_DISCLAIMER, type WiremapFault } from '@wiretrail/core';
 import type { JobFile, ScheduledCable } from '../document-content.js';
-import { DocumentLayout } from './document-layout.js';
 import { figure, joined, shortDateWords, VERDICT_INK, VERDICT_WORDS } from './document-words.js';
-import { type Issue, issuedBy, issuedWords, jobHeading } from './job-heading.js';
+import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
 
 export interface CablingReportPdf {
   issue: Issue;
@@ -54,16 +53,7 @@ const MEDIUM_WORDS: Record<string, string> = { coax: 'Coax', speaker: 'Speaker',
 /** The site's cable schedule with each run's test judged, in landscape so one run fits one line. */
 export async function cablingReportPdf({ issue, file, cables, rules }: CablingReportPdf): Promise<Buffer> {
   const tz = file.organisation.timeZone;
-  const layout = await DocumentLayout.start({
-    title: CABLING_REPORT_TITLE,
-    subtitle: 'The site’s cable schedule: where each cable runs, how it is terminated and how it tested',
-    number: issue.number,
-    issued: issuedWords(issue, file),
-    contractor: file.organisation.name,
-    subject: `${file.job.reference ?? ''} ${file.job.title}`.trim(),
-    landscape: true,
-  });
-  jobHeading(layout, file);
+  const layout = await startJobDocument({ title: CABLING_REPORT_TITLE, subtitle: 'The site’s cable schedule: where each cable runs, how it is terminated and how it tested', issue, file, landscape: true });
 
   const count = (v: string) => cables.filter((c) => c.assessment.verdict === v).length;
   layout.heading('Cable schedule');

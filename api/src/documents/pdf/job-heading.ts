@@ -1,5 +1,5 @@
 import type { JobFile } from '../document-content.js';
-import { type DocumentLayout, INK } from './document-layout.js';
+import { DocumentLayout, INK } from './document-layout.js';
 import { dateWords, joined } from './document-words.js';
 
 /** What every document is about: who did the work and for whom, where. */
@@ -33,7 +33,21 @@ export interface Issue {
   issuedBy: string;
 }
 
-export const issuedWords = (issue: Issue, file: JobFile) => `Issued ${dateWords(issue.issuedAt, file.organisation.timeZone)}`;
+/** A new document for the job: its band (kind, number, date issued), then who did the work and for whom. */
+export async function startJobDocument(o: { title: string; subtitle: string; issue: Issue; file: JobFile; landscape?: boolean }): Promise<DocumentLayout> {
+  const { issue, file } = o;
+  const layout = await DocumentLayout.start({
+    title: o.title,
+    subtitle: o.subtitle,
+    number: issue.number,
+    issued: `Issued ${dateWords(issue.issuedAt, file.organisation.timeZone)}`,
+    contractor: file.organisation.name,
+    subject: `${file.job.reference ?? ''} ${file.job.title}`.trim(),
+    landscape: o.landscape,
+  });
+  jobHeading(layout, file);
+  return layout;
+}
 
 /** The closing line: who issued it and when, for the contractor. */
 export function issuedBy(layout: DocumentLayout, issue: Issue, file: JobFile): void {

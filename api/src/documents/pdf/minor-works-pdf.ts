@@ -1,9 +1,9 @@
 import { type CircuitTestLine, type ReadingField, type RuleSet, VERDICT_DISCLAIMER } from '@wiretrail/core';
 import type { JobFile, MinorWorksContent } from '../document-content.js';
 import { circuitName, type CertifiedCircuit } from '../minor-works-check.js';
-import { DocumentLayout, INK, type Row } from './document-layout.js';
+import { INK, type Row } from './document-layout.js';
 import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from './document-words.js';
-import { type Issue, issuedBy, issuedWords, jobHeading } from './job-heading.js';
+import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
 
 export interface MinorWorksPdf {
   issue: Issue;
@@ -65,15 +65,7 @@ function testRows(c: CertifiedCircuit): Row[] {
 /** A certificate for an alteration or addition to an existing circuit, in Wiretrail's own layout. */
 export async function minorWorksPdf({ issue, file, content, rules, signature }: MinorWorksPdf): Promise<Buffer> {
   const tz = file.organisation.timeZone;
-  const layout = await DocumentLayout.start({
-    title: MINOR_WORKS_TITLE,
-    subtitle: 'An alteration or addition to an existing circuit, inspected and tested',
-    number: issue.number,
-    issued: issuedWords(issue, file),
-    contractor: file.organisation.name,
-    subject: `${file.job.reference ?? ''} ${file.job.title}`.trim(),
-  });
-  jobHeading(layout, file);
+  const layout = await startJobDocument({ title: MINOR_WORKS_TITLE, subtitle: 'An alteration or addition to an existing circuit, inspected and tested', issue, file });
 
   const { visits, circuits } = content;
   const described = visits.map((v) => (typeof v.workDescription === 'string' ? v.workDescription.trim() : '')).filter(Boolean);

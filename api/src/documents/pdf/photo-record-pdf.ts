@@ -1,7 +1,7 @@
 import type { JobFile, PhotoRecordContent } from '../document-content.js';
-import { DocumentLayout, INK } from './document-layout.js';
+import { INK } from './document-layout.js';
 import { dateTimeWords, joined } from './document-words.js';
-import { type Issue, issuedBy, issuedWords, jobHeading } from './job-heading.js';
+import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
 
 export interface PhotoRecordPdf {
   issue: Issue;
@@ -19,15 +19,7 @@ const IMAGE_RATIO = 3 / 4;
 /** The job's photos, two to a row, each with its caption, area, time and who took it. */
 export async function photoRecordPdf({ issue, file, content, images }: PhotoRecordPdf): Promise<Buffer> {
   const tz = file.organisation.timeZone;
-  const layout = await DocumentLayout.start({
-    title: PHOTO_RECORD_TITLE,
-    subtitle: 'The work as it was recorded on site, before it was covered up',
-    number: issue.number,
-    issued: issuedWords(issue, file),
-    contractor: file.organisation.name,
-    subject: `${file.job.reference ?? ''} ${file.job.title}`.trim(),
-  });
-  jobHeading(layout, file);
+  const layout = await startJobDocument({ title: PHOTO_RECORD_TITLE, subtitle: 'The work as it was recorded on site, before it was covered up', issue, file });
   const { photos } = content;
   layout.heading('Photos');
   layout.paragraph(
