@@ -24,7 +24,7 @@ export function EmailStateChip({ doc }: { doc: JobDocument }) {
   return (
     <Stack spacing={0.5} sx={{ alignItems: 'flex-start' }} aria-label={`E-mail: ${doc.emailState}`}>
       {chip}
-      <Typography variant="caption" color={doc.emailState === 'failed' ? 'error' : 'text.secondary'} sx={{ maxWidth: 340, overflowWrap: 'anywhere' }}>
+      <Typography variant="caption" color={doc.emailState === 'failed' ? 'error' : 'text.secondary'} sx={{ maxWidth: 300, overflowWrap: 'anywhere' }}>
         {detail}
       </Typography>
     </Stack>

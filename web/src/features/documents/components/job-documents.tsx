@@ -137,7 +137,7 @@ export function JobDocuments({ jobId }: { jobId: string }) {
                   <TableCell>
                     <EmailStateChip doc={d} />
                   </TableCell>
-                  <TableCell align="right">
+                  <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
                     <Stack direction="row" spacing={1} sx={{ justifyContent: 'flex-end' }}>
                       <Button startIcon={<DownloadOutlined />} onClick={() => download.mutate(d)} aria-label={`Download ${d.number}`}>
                         PDF
