@@ -16,13 +16,16 @@ import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
 import { appConfig, authConfig, mailConfig } from './config/app.config.js';
 import { databaseConfig } from './config/database.config.js';
+import { documentsConfig } from './config/documents.config.js';
 import { photosConfig } from './config/photos.config.js';
 import { validateEnvironment } from './config/env.validation.js';
 import { sqliteOptions } from './database/typeorm-options.js';
 import { ConflictsModule } from './conflicts/conflicts.module.js';
+import { DocumentsModule } from './documents/documents.module.js';
 import { HealthModule } from './health/health.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { PhotosModule } from './photos/photos.module.js';
+import { ShareLinksModule } from './share-links/share-links.module.js';
 import { SyncModule } from './sync/sync.module.js';
 import { UsersModule } from './users/users.module.js';
 
@@ -53,7 +56,7 @@ function webAppModules(): DynamicModule[] {
       cache: true,
       ignoreEnvFile: process.env.NODE_ENV === 'test',
       validate: validateEnvironment,
-      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig],
+      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig, documentsConfig],
     }),
     TypeOrmModule.forRootAsync({
       inject: [databaseConfig.KEY],
@@ -77,6 +80,8 @@ function webAppModules(): DynamicModule[] {
     JobsModule,
     VisitsModule,
     PhotosModule,
+    DocumentsModule,
+    ShareLinksModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

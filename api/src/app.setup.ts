@@ -50,6 +50,17 @@ export function configureApp(app: INestApplication): INestApplication {
       message: { statusCode: 429, message: 'Too many sign-in attempts. Wait a minute and try again.', error: 'Too Many Requests' },
     }),
   );
+  // Customers' share pages need no account; a token cannot be guessed, but the pages should not be hammered either.
+  app.use(
+    '/api/shared',
+    rateLimit({
+      windowMs: config.getOrThrow<number>('app.shareRateWindowMs'),
+      limit: config.getOrThrow<number>('app.shareRateLimit'),
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      message: { statusCode: 429, message: 'Too many requests for this page. Wait a minute and try again.', error: 'Too Many Requests' },
+    }),
+  );
   app.useGlobalFilters(new BodyErrorFilter());
   app.useGlobalPipes(
     new ValidationPipe({

@@ -81,12 +81,36 @@ describe('authorisation matrix: every route × every role × own and other organ
 
   it('finds the routes of every feature', () => {
     const paths = routes.map((r) => `${r.method} ${r.path}`);
-    for (const expected of ['post /api/auth/sign-in', 'get /api/users', 'post /api/sync/push', 'get /api/sync/pull', 'get /api/conflicts', 'get /api/circuits', 'patch /api/visits/:id']) {
+    for (const expected of [
+      'post /api/auth/sign-in', 'get /api/users', 'post /api/sync/push', 'get /api/sync/pull', 'get /api/conflicts', 'get /api/circuits', 'patch /api/visits/:id',
+      'post /api/jobs/:id/documents', 'get /api/jobs/:id/documents', 'get /api/documents/:id', 'get /api/documents/:id/pdf', 'post /api/documents/:id/send',
+      'post /api/jobs/:id/share-links', 'get /api/jobs/:id/share-links', 'post /api/share-links/:id/revoke',
+      'get /api/shared/:token', 'get /api/shared/:token/photos/:photoId/thumb', 'get /api/shared/:token/photos/:photoId/display', 'get /api/shared/:token/documents/:documentId/pdf',
+    ]) {
       expect(paths).toContain(expected);
     }
     expect(routes.length).toBeGreaterThan(35);
     // Deny by default: every route names its roles or is public.
     expect(routes.filter((r) => !r.isPublic && !r.roles)).toEqual([]);
+    // Documents and share links are the office's; technicians see document rows through sync only.
+    for (const r of routes.filter((x) => /\/(documents|share-links)\b/.test(x.path) && !x.isPublic)) expect(r.roles).toEqual(['office', 'admin']);
+    expect(routes.filter((r) => r.isPublic && r.path.startsWith('/api/shared')).map((r) => r.method)).toEqual(['get', 'get', 'get', 'get']);
+  });
+
+  it("answers a customer's share route with a made-up token with 404 and no data, signed in or not", async () => {
+    const failures: string[] = [];
+    for (const r of routes.filter((x) => x.isPublic && x.path.startsWith('/api/shared'))) {
+      for (const token of [null, tokens.admin!, tokens.otherAdmin!]) {
+        // A link-shaped token and one of another shape; photo and document ids are well-formed ids of nothing.
+        for (const made of ['A'.repeat(43), 'not-a-link']) {
+          const req = t.http.get(fill(r.path.replace(':token', made), '01890000-0000-7000-8000-000000000000'));
+          const res = await (token ? req.set('authorization', `Bearer ${token}`) : req);
+          if (res.status !== 404) failures.push(`${r.method} ${r.path} with ${made} → ${res.status}`);
+          if (JSON.stringify(res.body).includes(larkfieldOrg)) failures.push(`${r.path} leaked Larkfield's organisation id`);
+        }
+      }
+    }
+    expect(failures).toEqual([]);
   });
 
   it('gives each role exactly the routes it is allowed, and never a 5xx', async () => {

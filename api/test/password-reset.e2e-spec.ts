@@ -1,44 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import { simpleParser } from 'mailparser';
-import type { AddressInfo } from 'node:net';
-import { SMTPServer } from 'smtp-server';
-import { createTestApp, DEMO_PASSWORD, signIn, type TestApp } from './test-app.js';
-
-interface Received {
-  to: string[];
-  subject: string;
-  text: string;
-}
-
-/** An SMTP server in the test, standing in for the mail provider: the API really sends, the test reads what arrived. */
-async function startMailbox(): Promise<{ port: number; messages: Received[]; close: () => Promise<void> }> {
-  const messages: Received[] = [];
-  const server = new SMTPServer({
-    authOptional: true,
-    disabledCommands: ['STARTTLS'],
-    logger: false,
-    onData(stream, session, callback) {
-      simpleParser(stream)
-        .then((mail) => {
-          messages.push({ to: session.envelope.rcptTo.map((r) => r.address), subject: mail.subject ?? '', text: mail.text ?? '' });
-          callback();
-        })
-        .catch(callback);
-    },
-  });
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', () => resolve()));
-  const { port } = server.server.address() as AddressInfo;
-  return { port, messages, close: () => new Promise((resolve) => server.close(() => resolve())) };
-}
-
-async function until(done: () => boolean): Promise<void> {
-  for (let i = 0; i < 100 && !done(); i++) await new Promise((r) => setTimeout(r, 50));
-  expect(done()).toBe(true);
-}
+import { type Mailbox, startMailbox } from '../../scripts/mailbox.mjs';
+import { createTestApp, DEMO_PASSWORD, signIn, type TestApp, until } from './test-app.js';
 
 describe('password reset by e-mailed link', () => {
   let t: TestApp;
-  let mailbox: Awaited<ReturnType<typeof startMailbox>>;
+  let mailbox: Mailbox;
   let admin: Awaited<ReturnType<typeof signIn>>;
 
   beforeAll(async () => {

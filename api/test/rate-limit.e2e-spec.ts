@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './test-app.js';
 
-// Its own file: the environment is read once per module graph, and this app needs a low limit.
-describe('sign-in rate limit', () => {
+// Its own file: the environment is read once per module graph, and this app needs low limits.
+describe('rate limits', () => {
   let t: TestApp;
   beforeAll(async () => {
-    t = await createTestApp({ SIGN_IN_RATE_LIMIT: '3' });
+    t = await createTestApp({ SIGN_IN_RATE_LIMIT: '3', SHARE_RATE_LIMIT: '5' });
   });
   afterAll(() => t.close());
 
@@ -16,6 +16,13 @@ describe('sign-in rate limit', () => {
     const res = await t.http.post('/api/auth/sign-in').send({ email: 'office@larkfield.example', password: DEMO_PASSWORD }).expect(429);
     expect(res.body.message).toMatch(/Too many sign-in attempts/);
     // Other routes are not limited by it.
+    await t.http.get('/api/health').expect(200);
+  });
+
+  it("answers 429 to a client that asks for customers' share pages too often", async () => {
+    for (let i = 0; i < 5; i++) await t.http.get(`/api/shared/${'x'.repeat(43)}`).expect(404);
+    const res = await t.http.get(`/api/shared/${'y'.repeat(43)}`).expect(429);
+    expect(res.body.message).toMatch(/Too many requests for this page/);
     await t.http.get('/api/health').expect(200);
   });
 });

@@ -12,15 +12,17 @@ export interface TestApp {
   app: INestApplication;
   http: ReturnType<typeof request>;
   dataSource: DataSource;
-  close: () => Promise<void>;
+  /** Where its database and files are; another app given it starts on the same data, as after a restart. */
+  directory: string;
+  close: (options?: { keepFiles?: boolean }) => Promise<void>;
 }
 
 /**
  * Boots the real AppModule on a fresh SQLite file, runs the real migrations and loads the demo scenario.
  * The environment is set before AppModule is imported because ConfigModule validates it at import.
  */
-export async function createTestApp(env: Record<string, string> = {}): Promise<TestApp> {
-  const dir = mkdtempSync(join(tmpdir(), 'wiretrail-api-'));
+export async function createTestApp(env: Record<string, string> = {}, options: { directory?: string } = {}): Promise<TestApp> {
+  const dir = options.directory ?? mkdtempSync(join(tmpdir(), 'wiretrail-api-'));
   Object.assign(process.env, {
     NODE_ENV: 'test',
     DATABASE_PATH: join(dir, 'test.sqlite'),
@@ -41,9 +43,10 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
     app,
     http: request(app.getHttpServer()),
     dataSource,
-    close: async () => {
+    directory: dir,
+    close: async ({ keepFiles = false } = {}) => {
       await app.close();
-      rmSync(dir, { recursive: true, force: true });
+      if (!keepFiles) rmSync(dir, { recursive: true, force: true });
     },
   };
 }
@@ -56,4 +59,11 @@ export async function signIn(t: TestApp, email: string, password = DEMO_PASSWORD
 /** Nest's error body, pinned here once: every error the API gives has this shape. */
 export function expectErrorBody(body: unknown, statusCode: number): void {
   expect(body).toEqual(expect.objectContaining({ statusCode, message: expect.anything() }));
+}
+
+/** Waits for something the server does in the background (an e-mail, a retry), for up to `ms`. */
+export async function until(done: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
+  const deadline = Date.now() + ms;
+  while (!(await done()) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
+  expect(await done()).toBe(true);
 }

@@ -7,6 +7,9 @@ export const appConfig = registerAs('app', () => ({
   webDist: process.env.WEB_DIST || undefined,
   signInRateLimit: Number(process.env.SIGN_IN_RATE_LIMIT ?? 10),
   signInRateWindowMs: Number(process.env.SIGN_IN_RATE_WINDOW_MS ?? 60_000),
+  /** Requests per client address per window to the customers' share pages (a page of photos is one request a photo). */
+  shareRateLimit: Number(process.env.SHARE_RATE_LIMIT ?? 300),
+  shareRateWindowMs: Number(process.env.SHARE_RATE_WINDOW_MS ?? 60_000),
 }));
 
 export const authConfig = registerAs('auth', () => ({
@@ -20,5 +23,15 @@ export const mailConfig = registerAs('mail', () => ({
   publicUrl: (process.env.PUBLIC_URL ?? `http://localhost:${process.env.PORT ?? 3000}`).replace(/\/$/, ''),
   host: process.env.SMTP_HOST ?? '127.0.0.1',
   port: Number(process.env.SMTP_PORT ?? 1025),
+  /** TLS from the first byte (port 465); otherwise STARTTLS is used whenever the server offers it. */
+  secure: process.env.SMTP_SECURE === 'true',
+  /** Refuse to send unless STARTTLS succeeds: for a provider on port 587. */
+  requireTls: process.env.SMTP_REQUIRE_TLS === 'true',
+  user: process.env.SMTP_USER || undefined,
+  password: process.env.SMTP_PASSWORD || undefined,
   from: process.env.MAIL_FROM ?? 'Wiretrail <no-reply@wiretrail.local>',
+  /** The outbox: how often it looks for mail due, the first wait after a failed attempt (it grows fourfold), and when it gives up. */
+  outboxPollMs: Number(process.env.MAIL_OUTBOX_POLL_MS ?? 5_000),
+  retryBaseMs: Number(process.env.MAIL_RETRY_BASE_MS ?? 30_000),
+  maxAttempts: Number(process.env.MAIL_MAX_ATTEMPTS ?? 6),
 }));

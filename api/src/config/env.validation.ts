@@ -39,6 +39,33 @@ export class EnvironmentVariables {
   @Type(() => Number) @IsInt() @Min(1) @Max(65535)
   SMTP_PORT = 1025;
 
+  @IsOptional() @IsIn(['true', 'false'], { message: 'SMTP_SECURE must be true or false' })
+  SMTP_SECURE?: string;
+
+  @IsOptional() @IsIn(['true', 'false'], { message: 'SMTP_REQUIRE_TLS must be true or false' })
+  SMTP_REQUIRE_TLS?: string;
+
+  @IsOptional() @IsString()
+  SMTP_USER?: string;
+
+  @IsOptional() @IsString()
+  SMTP_PASSWORD?: string;
+
+  @Type(() => Number) @IsInt() @Min(50)
+  MAIL_OUTBOX_POLL_MS = 5_000;
+
+  @Type(() => Number) @IsInt() @Min(10)
+  MAIL_RETRY_BASE_MS = 30_000;
+
+  @Type(() => Number) @IsInt() @Min(1) @Max(20)
+  MAIL_MAX_ATTEMPTS = 6;
+
+  @Type(() => Number) @IsInt() @Min(1)
+  SHARE_RATE_LIMIT = 300;
+
+  @Type(() => Number) @IsInt() @Min(1000)
+  SHARE_RATE_WINDOW_MS = 60_000;
+
   @IsOptional() @IsString()
   PUBLIC_URL?: string;
 
@@ -53,6 +80,9 @@ export class EnvironmentVariables {
 
   @IsOptional() @IsString()
   PHOTO_STORAGE_DIR?: string;
+
+  @IsOptional() @IsString()
+  DOCUMENT_STORAGE_DIR?: string;
 
   @IsOptional() @IsUrl({ require_tld: false, require_protocol: true }, { message: 'S3_ENDPOINT must be a URL such as http://127.0.0.1:9000' })
   S3_ENDPOINT?: string;

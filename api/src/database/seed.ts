@@ -8,6 +8,7 @@ import { hashPassword } from '../auth/password.js';
 import { photosConfig } from '../config/photos.config.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { createPhotoStorage, type PhotoStorage } from '../photos/storage/photo-storage.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { type Role, User } from '../users/entities/user.entity.js';
@@ -21,6 +22,9 @@ interface ScenarioRecord {
   by?: string;
 }
 
+/** A record whose key came earlier in the scenario changes that row, as a later edit by its author (a sign-off). */
+const isUpdate = (records: ScenarioRecord[], i: number) => records.slice(0, i).some((r) => r.entity === records[i]!.entity && r.key === records[i]!.key);
+
 interface Scenario {
   password: string;
   organisations: Array<{
@@ -28,6 +32,8 @@ interface Scenario {
     address?: string;
     phone?: string;
     email?: string;
+    registrationNumber?: string;
+    timeZone?: string;
     users: Array<{ email: string; name: string; role: Role }>;
     records?: ScenarioRecord[];
   }>;
@@ -83,7 +89,12 @@ export async function seedDemoData(
   const today = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
   await dataSource.transaction(async (em) => {
     for (const o of scenario.organisations) {
-      const org = await em.save(em.create(Organisation, { name: o.name, address: o.address ?? null, phone: o.phone ?? null, email: o.email ?? null }));
+      const org = await em.save(
+        em.create(Organisation, {
+          name: o.name, address: o.address ?? null, phone: o.phone ?? null, email: o.email ?? null,
+          registrationNumber: o.registrationNumber ?? null, ...(o.timeZone ? { timeZone: o.timeZone } : {}),
+        }),
+      );
       const users = new Map<string, string>();
       for (const u of o.users) {
         const user = await em.save(em.create(User, { organisationId: org.id, email: u.email, name: u.name, role: u.role, passwordHash, active: true, lastSignInAt: null }));
@@ -95,13 +106,14 @@ export async function seedDemoData(
       for (const name of used) await storeDemoImage(em, storage!, org.id, images.get(name)!);
       // The demo records go through the same engine as every later change, so they sync like any other row.
       const ids = new Map(o.records.map((r) => [`${r.entity}:${r.key}`, uuidv7()]));
-      const mutations = o.records.map((r, i): { by: string; mutation: Mutation } => {
+      const mutations = o.records.map((r, i): { by: string; update: boolean; mutation: Mutation } => {
         const set = Object.fromEntries(Object.entries(r.set).map(([k, v]) => [k, resolve(v, ids, users, today, images)]));
         const image = images.get(imageName(r.set.sha256) ?? '');
         // A demo photo's size is the drawing's, as the phone would have recorded it.
         if (image) Object.assign(set, { sizeBytes: image.original.length, width: image.width, height: image.height, ...set });
         return {
           by: r.by ?? admin.email,
+          update: isUpdate(o.records!, i),
           mutation: { mutationId: uuidv7(), entity: r.entity, id: ids.get(`${r.entity}:${r.key}`)!, baseVersion: 0, set: set as Mutation['set'], hlc: formatHlc({ ms: now.getTime(), counter: i, deviceId: 'seed' }) },
         };
       });
@@ -111,7 +123,14 @@ export async function seedDemoData(
         const author = o.users.find((u) => u.email === email);
         if (!author) throw new Error(`Scenario names an unknown author: ${email}`);
         const actor = { userId: users.get(email)!, organisationId: org.id, role: author.role, deviceId: 'seed' };
-        const results = await engine.applyAll(em, actor, mutations.filter((m) => m.by === email).map((m) => m.mutation));
+        const own = mutations.filter((m) => m.by === email);
+        // An edit is based on the row as an earlier author left it, so it applies without a conflict.
+        for (const m of own.filter((x) => x.update)) {
+          const row = await em.getRepository<SyncRecord>(m.mutation.entity).findOneBy({ id: m.mutation.id });
+          if (!row) throw new Error(`Scenario edits ${m.mutation.entity} ${m.mutation.id} before an earlier author made it`);
+          m.mutation.baseVersion = row.version;
+        }
+        const results = await engine.applyAll(em, actor, own.map((m) => m.mutation));
         const refused = results.filter((r) => r.status === 'rejected');
         if (refused.length) throw new Error(`Demo data refused: ${refused.map((r) => r.error).join('; ')}`);
       }

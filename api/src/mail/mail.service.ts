@@ -3,21 +3,41 @@ import type { ConfigType } from '@nestjs/config';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { mailConfig } from '../config/app.config.js';
 
+export interface MailAttachment {
+  filename: string;
+  content: Buffer;
+  contentType: string;
+}
+
 export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
   html?: string;
+  attachments?: MailAttachment[];
 }
 
-/** Sends mail over SMTP: the local fake in development and tests, the organisation's provider in production. */
+/**
+ * Sends mail over SMTP: the local fake in development and tests, the organisation's provider in production.
+ * Which one is configuration only (host, port, TLS, sign-in; see api/.env.example).
+ */
 @Injectable()
 export class MailService {
   private readonly transport: Transporter;
   private readonly logger = new Logger('Mail');
 
   constructor(@Inject(mailConfig.KEY) private readonly config: ConfigType<typeof mailConfig>) {
-    this.transport = nodemailer.createTransport({ host: config.host, port: config.port, secure: false, ignoreTLS: true });
+    this.transport = nodemailer.createTransport({
+      host: config.host,
+      port: config.port,
+      secure: config.secure,
+      requireTLS: config.requireTls,
+      auth: config.user ? { user: config.user, pass: config.password ?? '' } : undefined,
+      // A provider that does not answer is a failed attempt the outbox retries, not a request left hanging.
+      connectionTimeout: 15_000,
+      greetingTimeout: 15_000,
+      socketTimeout: 60_000,
+    });
   }
 
   async send(mail: OutgoingMail): Promise<void> {

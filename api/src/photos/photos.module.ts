@@ -34,6 +34,6 @@ import { PhotoUploads } from './uploads/photo-uploads.js';
     PhotosService,
     PhotoUploads,
   ],
-  exports: [PhotoUploads, PHOTO_STORAGE],
+  exports: [PhotoUploads, PhotosService, PHOTO_STORAGE],
 })
 export class PhotosModule {}

@@ -194,9 +194,31 @@ export class PhotosService implements OnModuleInit {
       const blob = typeof row.sha256 === 'string' ? await em.findOneBy(PhotoBlob, { organisationId: user.organisationId, sha256: row.sha256 }) : null;
       return { row, blob };
     });
+    return this.describe(row, blob, user.organisationId, variant);
+  }
+
+  /**
+   * One size of a photo taken on a visit of the given job: what a customer's share link may show. Any other photo,
+   * of this organisation or another, is not found.
+   */
+  async fileOnJob(organisationId: string, jobId: string, id: string, variant: Exclude<StoredVariant, 'original'>): Promise<PhotoFile> {
+    const { row, blob } = await this.queue.read(async (em) => {
+      const row = await em
+        .getRepository<SyncRecord>('photo')
+        .createQueryBuilder('p')
+        .where('p.id = :id AND p.organisationId = :org AND p.deletedAt IS NULL', { id, org: organisationId })
+        .andWhere('p.visitId IN (SELECT v.id FROM "visit" AS v WHERE v.organisationId = :org AND v.jobId = :jobId AND v.deletedAt IS NULL)', { jobId })
+        .getOne();
+      const blob = row && typeof row.sha256 === 'string' ? await em.findOneBy(PhotoBlob, { organisationId, sha256: row.sha256 }) : null;
+      return { row, blob };
+    });
+    return this.describe(row, blob, organisationId, variant);
+  }
+
+  private describe(row: SyncRecord | null, blob: PhotoBlob | null, organisationId: string, variant: StoredVariant): PhotoFile {
     if (!row) throw new NotFoundException('No such photo.');
     if (!blob) throw new NotFoundException('This photo has not reached the server yet. It appears once the phone that took it has sent it.');
-    const key = photoKey(user.organisationId, blob.sha256, variant);
+    const key = photoKey(organisationId, blob.sha256, variant);
     const etag = `"${blob.sha256}-${variant}"`;
     if (variant !== 'original') return { key, etag, contentType: 'image/webp' };
     return { key, etag, contentType: blob.mime, bytes: blob.bytes, filename: `wiretrail-photo-${row.id}.${EXTENSIONS[blob.mime] ?? 'img'}` };

@@ -50,6 +50,7 @@ export const routes: RouteObject[] = [
     children: [
       { path: paths.signIn.path, lazy: () => import('./routes/sign-in') },
       { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password') },
+      { path: paths.shared.path, lazy: () => import('./routes/shared') },
       {
         element: <RequireSession />,
         children: [

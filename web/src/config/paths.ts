@@ -27,6 +27,8 @@ export const paths = {
   conflicts: { path: '/conflicts', label: 'Conflicts' },
   team: { path: '/team', label: 'Team' },
   account: { path: '/account', label: 'My account' },
+  /** A customer's read-only view of one job, opened from a share link; no account. */
+  shared: { path: '/shared/:token', href: (token: string) => `/shared/${encodeURIComponent(token)}` },
 } as const;
 
 /** Where each role lands after signing in. */

@@ -42,6 +42,23 @@ export interface SameSiteRef {
   entity: OfficeRecord;
 }
 
+/** The office writing through the sync engine from a desk: its own device id, so its edits are numbered like a push. */
+export function officeActor(user: AuthUser, deviceId = 'office'): Actor {
+  return { userId: user.id, organisationId: user.organisationId, role: user.role, deviceId };
+}
+
+/** One change the office makes, as a mutation the engine applies like any device's. */
+export function officeMutation(entity: Mutation['entity'], id: string, baseVersion: number, set: Record<string, unknown>, deviceId = 'office'): Mutation {
+  return {
+    mutationId: uuidv7(),
+    entity,
+    id,
+    baseVersion,
+    set: set as Mutation['set'],
+    hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId }),
+  };
+}
+
 const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
 const sortKey = (sort: string) => (/^\w+$/.test(sort) ? `r.${sort}` : sort);
 
@@ -156,18 +173,11 @@ export abstract class RecordsService<Q extends PageQueryDto> {
   }
 
   private actor(user: AuthUser): Actor {
-    return { userId: user.id, organisationId: user.organisationId, role: user.role, deviceId: 'office' };
+    return officeActor(user);
   }
 
   private mutation(id: string, baseVersion: number, set: Record<string, unknown>): Mutation {
-    return {
-      mutationId: uuidv7(),
-      entity: this.entity,
-      id,
-      baseVersion,
-      set: set as Mutation['set'],
-      hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId: 'office' }),
-    };
+    return officeMutation(this.entity, id, baseVersion, set);
   }
 
   /** Thrown after the transaction, so that conflicts the engine recorded are kept. */

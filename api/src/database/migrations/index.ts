@@ -3,7 +3,16 @@ import { DomainAndSync1796210074350 } from './1796210074350-DomainAndSync.js';
 import { PhotoStorage1796212407763 } from './1796212407763-PhotoStorage.js';
 import { PasswordResets1796213463019 } from './1796213463019-PasswordResets.js';
 import { VisitRecords1796218834250 } from './1796218834250-VisitRecords.js';
+import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
-export const MIGRATIONS = [Foundation1796208527258, DomainAndSync1796210074350, PhotoStorage1796212407763, PasswordResets1796213463019, VisitRecords1796218834250, PartsAndPrices1796221754005];
+export const MIGRATIONS = [
+  Foundation1796208527258,
+  DomainAndSync1796210074350,
+  PhotoStorage1796212407763,
+  PasswordResets1796213463019,
+  VisitRecords1796218834250,
+  Documents1796219621037,
+  PartsAndPrices1796221754005,
+];

@@ -1,6 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsEmail, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsEmail, IsOptional, IsString, IsTimeZone, MaxLength, MinLength } from 'class-validator';
 
 export class UpdateOrganisationDto {
   @ApiPropertyOptional() @IsOptional() @IsString() @MinLength(1, { message: 'name must not be empty' }) @MaxLength(200)
@@ -14,6 +14,18 @@ export class UpdateOrganisationDto {
 
   @ApiPropertyOptional() @IsOptional() @IsEmail({ require_tld: false }, { message: 'email must be an e-mail address' })
   email?: string;
+
+  @ApiPropertyOptional({ description: 'the registration number printed on certificates', example: 'LK-20417' })
+  @IsOptional()
+  @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
+  @IsString({ message: 'registrationNumber must be text' })
+  @MinLength(1, { message: 'registrationNumber must not be empty' })
+  @MaxLength(60, { message: 'registrationNumber must be at most 60 characters' })
+  registrationNumber?: string;
+
+  @ApiPropertyOptional({ description: 'the IANA time zone dates on documents are given in', example: 'Europe/London' })
+  @IsOptional() @IsTimeZone({ message: 'timeZone must be a time zone such as Europe/London' })
+  timeZone?: string;
 
   @ApiPropertyOptional({ type: [String], description: 'the office’s own photo tags, offered after the built-in ones', example: ['meter tails', 'fire stopping'] })
   @IsOptional()

@@ -15,6 +15,14 @@ export class Organisation extends BaseRow {
   @Column({ type: 'varchar', length: 254, nullable: true })
   email: string | null;
 
+  /** The contractor's registration with its competent-person scheme, printed on every certificate. */
+  @Column({ type: 'varchar', length: 60, nullable: true })
+  registrationNumber: string | null;
+
+  /** Where dates and times on documents are given: a certificate states the local date the work was signed off. */
+  @Column({ type: 'varchar', length: 60, default: 'Europe/London' })
+  timeZone: string;
+
   /** The office's own photo tags, offered after the built-in ones (PHOTO_TAGS). */
   @Column({ type: 'simple-json', default: '[]' })
   photoTags: string[];

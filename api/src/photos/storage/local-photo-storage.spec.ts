@@ -32,7 +32,7 @@ describe('LocalPhotoStorage', () => {
   });
 
   it('refuses keys it did not make', async () => {
-    await expect(storage.put(`${ORG}/../../escape`, Buffer.from('x'), 'text/plain')).rejects.toThrow('Not a photo key');
-    await expect(storage.get('../etc/passwd')).rejects.toThrow('Not a photo key');
+    await expect(storage.put(`${ORG}/../../escape`, Buffer.from('x'), 'text/plain')).rejects.toThrow('Not a key this store keeps');
+    await expect(storage.get('../etc/passwd')).rejects.toThrow('Not a key this store keeps');
   });
 });

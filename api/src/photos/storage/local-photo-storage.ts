@@ -3,14 +3,17 @@ import { access, mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import type { Readable } from 'node:stream';
 import { v7 as uuidv7 } from 'uuid';
-import { PHOTO_KEY, PhotoObjectMissing, type PhotoStorage } from './photo-storage.js';
+import { type FileStorage, type KeySpace, PHOTO_KEYS, PhotoObjectMissing } from './photo-storage.js';
 
-/** Photos as files under one directory (by default `photos/` beside the database). */
-export class LocalPhotoStorage implements PhotoStorage {
-  constructor(readonly directory: string) {}
+/** Files under one directory (by default `photos/` or `documents/` beside the database). */
+export class LocalPhotoStorage implements FileStorage {
+  constructor(
+    readonly directory: string,
+    private readonly keys: KeySpace = PHOTO_KEYS,
+  ) {}
 
   private path(key: string): string {
-    if (!PHOTO_KEY.test(key)) throw new Error(`Not a photo key: ${key}`);
+    if (!this.keys.pattern.test(key)) throw new Error(`Not a key this store keeps: ${key}`);
     return join(this.directory, ...key.split('/'));
   }
 

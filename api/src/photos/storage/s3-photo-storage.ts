@@ -1,14 +1,17 @@
 import { GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
 import type { Readable } from 'node:stream';
 import type { PhotosConfig } from '../../config/photos.config.js';
-import { PHOTO_KEY, PhotoObjectMissing, type PhotoStorage } from './photo-storage.js';
+import { type FileStorage, type KeySpace, PHOTO_KEYS, PhotoObjectMissing } from './photo-storage.js';
 
-/** Photos as objects in an S3-compatible bucket (AWS, MinIO, Garage, R2 and the like). */
-export class S3PhotoStorage implements PhotoStorage {
+/** Files as objects in an S3-compatible bucket (AWS, MinIO, Garage, R2 and the like). */
+export class S3PhotoStorage implements FileStorage {
   private readonly client: S3Client;
   private readonly bucket: string;
 
-  constructor(options: PhotosConfig['s3']) {
+  constructor(
+    options: PhotosConfig['s3'],
+    private readonly keys: KeySpace = PHOTO_KEYS,
+  ) {
     this.bucket = options.bucket;
     this.client = new S3Client({
       endpoint: options.endpoint,
@@ -23,8 +26,8 @@ export class S3PhotoStorage implements PhotoStorage {
   }
 
   private check(key: string): string {
-    if (!PHOTO_KEY.test(key)) throw new Error(`Not a photo key: ${key}`);
-    return key;
+    if (!this.keys.pattern.test(key)) throw new Error(`Not a key this store keeps: ${key}`);
+    return `${this.keys.prefix}${key}`;
   }
 
   async put(key: string, body: Buffer, contentType: string): Promise<void> {

@@ -1,0 +1,110 @@
+import { NotFoundException } from '@nestjs/common';
+import { assessCableRun, type CableRunAssessment, type RuleSet } from '@wiretrail/core';
+import { type EntityManager, In, IsNull } from 'typeorm';
+import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { User } from '../users/entities/user.entity.js';
+import { judgeMinorWorks, type MinorWorksJudgement } from './minor-works-check.js';
+
+/** Everything about a job that every document prints at its head. */
+export interface JobFile {
+  organisation: Organisation;
+  job: SyncRecord;
+  site: SyncRecord;
+  customer: SyncRecord | null;
+  /** Area names of the site, by id. */
+  areas: Map<string, string>;
+}
+
+const live = (organisationId: string) => ({ organisationId, deletedAt: IsNull() });
+
+function rows(em: EntityManager, entity: string, where: Record<string, unknown>): Promise<SyncRecord[]> {
+  return em.getRepository<SyncRecord>(entity).find({ where: where as never });
+}
+
+/** The job with its site, customer and contractor; another organisation's job is simply not found. */
+export async function loadJobFile(em: EntityManager, organisationId: string, jobId: string): Promise<JobFile> {
+  const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, ...live(organisationId) });
+  if (!job) throw new NotFoundException('No such job.');
+  const [organisation, site, customer, areas] = await Promise.all([
+    em.findOneByOrFail(Organisation, { id: organisationId }),
+    em.getRepository<SyncRecord>('site').findOneOrFail({ where: { id: job.siteId as string, organisationId }, withDeleted: true }),
+    em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId }, withDeleted: true }),
+    rows(em, 'area', { siteId: job.siteId, organisationId }),
+  ]);
+  return { organisation, job, site, customer, areas: new Map(areas.map((a) => [a.id, a.name as string])) };
+}
+
+export function jobVisits(em: EntityManager, file: JobFile): Promise<SyncRecord[]> {
+  return rows(em, 'visit', { jobId: file.job.id, ...live(file.organisation.id) });
+}
+
+export interface MinorWorksContent extends MinorWorksJudgement {
+  boards: Map<string, string>;
+}
+
+/** The records behind a minor works certificate, judged; see judgeMinorWorks for when it may be issued. */
+export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: RuleSet): Promise<MinorWorksContent> {
+  const org = file.organisation.id;
+  const visits = await jobVisits(em, file);
+  const visitIds = visits.map((v) => v.id);
+  const [tests, pointChanges, circuits, boards] = await Promise.all([
+    visitIds.length ? rows(em, 'testResult', { visitId: In(visitIds), ...live(org) }) : [],
+    visitIds.length ? rows(em, 'pointChange', { visitId: In(visitIds), ...live(org) }) : [],
+    rows(em, 'circuit', { siteId: file.site.id, ...live(org) }),
+    rows(em, 'board', { siteId: file.site.id, organisationId: org }),
+  ]);
+  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: (file.site.earthing as string) ?? null }, rules);
+  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])) };
+}
+
+export interface ScheduledCable {
+  run: SyncRecord;
+  assessment: CableRunAssessment;
+}
+
+/** The site's cable schedule, every run judged again from its recorded wiremap and length, by label. */
+export async function loadCableSchedule(em: EntityManager, file: JobFile, rules: RuleSet): Promise<ScheduledCable[]> {
+  const runs = await rows(em, 'cableRun', { siteId: file.site.id, ...live(file.organisation.id) });
+  return runs
+    .sort((a, b) => String(a.label).localeCompare(String(b.label), 'en-GB', { numeric: true }))
+    .map((run) => ({
+      run,
+      assessment: assessCableRun(
+        { medium: run.medium as string, scheme: run.scheme as never, wiremap: run.wiremap as never, lengthM: run.lengthM as number, linkKind: run.linkKind as never },
+        rules,
+      ),
+    }));
+}
+
+export interface RecordedPhoto {
+  photo: SyncRecord;
+  takenBy: string;
+}
+
+export interface PhotoRecordContent {
+  photos: RecordedPhoto[];
+  /** Photos whose bytes have not reached the server yet: they cannot be printed. */
+  waiting: number;
+  visits: number;
+}
+
+/** The job's photos that have reached the server, in the order they were taken. */
+export async function loadPhotoRecord(em: EntityManager, file: JobFile): Promise<PhotoRecordContent> {
+  const org = file.organisation.id;
+  const visits = await jobVisits(em, file);
+  const all = visits.length ? await rows(em, 'photo', { visitId: In(visits.map((v) => v.id)), ...live(org) }) : [];
+  const hashes = [...new Set(all.map((p) => p.sha256).filter((h): h is string => typeof h === 'string'))];
+  const held = hashes.length ? await em.find(PhotoBlob, { where: { organisationId: org, sha256: In(hashes) }, select: { sha256: true } }) : [];
+  const have = new Set(held.map((b) => b.sha256));
+  const ready = all.filter((p) => have.has(p.sha256 as string));
+  const people = await em.find(User, { where: { organisationId: org, id: In([...new Set(ready.map((p) => p.createdById).filter((id): id is string => !!id))]) }, select: { id: true, name: true } });
+  const names = new Map(people.map((u) => [u.id, u.name]));
+  const order = (p: SyncRecord) => String(p.takenAt ?? p.createdAt?.toISOString() ?? '');
+  return {
+    photos: ready.sort((a, b) => order(a).localeCompare(order(b)) || a.id.localeCompare(b.id)).map((photo) => ({ photo, takenBy: names.get(photo.createdById ?? '') ?? '' })),
+    waiting: all.length - ready.length,
+    visits: new Set(ready.map((p) => p.visitId)).size,
+  };
+}

@@ -1,0 +1,52 @@
+import { Body, Controller, Get, HttpCode, Inject, Param, ParseUUIDPipe, Post, Req, Res } from '@nestjs/common';
+import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Request, Response } from 'express';
+import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
+import type { FileStorage } from '../photos/storage/photo-storage.js';
+import { DocumentsService } from './documents.service.js';
+import { IssueDocumentDto } from './dto/issue-document.dto.js';
+import { SendDocumentDto } from './dto/send-document.dto.js';
+import { sendIssuedPdf } from './storage/document-files.js';
+import { DOCUMENT_STORAGE } from './storage/document-storage.js';
+
+/** The office's certificates and reports; technicians get document rows (and their e-mail state) through sync. */
+@ApiTags('documents')
+@ApiBearerAuth()
+@Roles('office', 'admin')
+@Controller()
+export class DocumentsController {
+  constructor(
+    private readonly documents: DocumentsService,
+    @Inject(DOCUMENT_STORAGE) private readonly storage: FileStorage,
+  ) {}
+
+  /** Refused with 422 and every reason (naming the circuit and reading) when the records cannot support it yet. */
+  @Post('jobs/:id/documents')
+  issue(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) jobId: string, @Body() dto: IssueDocumentDto) {
+    return this.documents.issue(user, jobId, dto.kind);
+  }
+
+  @Get('jobs/:id/documents')
+  list(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) jobId: string) {
+    return this.documents.list(user, jobId);
+  }
+
+  @Get('documents/:id')
+  findOne(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string) {
+    return this.documents.findOne(user, id);
+  }
+
+  @ApiProduces('application/pdf')
+  @Get('documents/:id/pdf')
+  async pdf(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string, @Req() req: Request, @Res() res: Response) {
+    await sendIssuedPdf(this.storage, await this.documents.row(user, id), req, res);
+  }
+
+  /** Accepted for sending: the outbox delivers it and the document's emailState follows. */
+  @Post('documents/:id/send')
+  @HttpCode(202)
+  send(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string, @Body() dto: SendDocumentDto) {
+    return this.documents.send(user, id, dto);
+  }
+}

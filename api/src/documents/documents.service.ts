@@ -1,0 +1,274 @@
+import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit, UnprocessableEntityException } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { DEFAULT_RULE_SET, type SyncedRow } from '@wiretrail/core';
+import { createHash } from 'node:crypto';
+import { type EntityManager, IsNull } from 'typeorm';
+import { v7 as uuidv7 } from 'uuid';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { officeActor, officeMutation } from '../common/records/records.service.js';
+import { WriteQueue } from '../common/write-queue.js';
+import { mailConfig } from '../config/app.config.js';
+import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
+import { MailOutbox } from '../mail/mail-outbox.service.js';
+import { PHOTO_STORAGE, PhotoObjectMissing, type PhotoStorage, photoKey } from '../photos/storage/photo-storage.js';
+import { ShareLinksService } from '../share-links/share-links.service.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { SyncEngine } from '../sync/sync-engine.service.js';
+import { toSyncedRow } from '../sync/sync.service.js';
+import { User } from '../users/entities/user.entity.js';
+import { type JobFile, loadCableSchedule, loadJobFile, loadMinorWorks, loadPhotoRecord } from './document-content.js';
+import type { DocumentKind } from './dto/issue-document.dto.js';
+import type { SendDocumentDto } from './dto/send-document.dto.js';
+import { DocumentCounter } from './entities/document-counter.entity.js';
+import { CABLING_REPORT_TITLE, cablingReportPdf } from './pdf/cabling-report-pdf.js';
+import { dateWords } from './pdf/document-words.js';
+import type { Issue } from './pdf/job-heading.js';
+import { MINOR_WORKS_TITLE, minorWorksPdf } from './pdf/minor-works-pdf.js';
+import { PHOTO_RECORD_TITLE, photoRecordPdf } from './pdf/photo-record-pdf.js';
+import { pdfFilename } from './storage/document-files.js';
+import { DOCUMENT_STORAGE, documentKey } from './storage/document-storage.js';
+import { signatureImage } from './signature-image.js';
+import sharp from 'sharp';
+
+const KINDS: Record<DocumentKind, { prefix: string; title: string }> = {
+  'minor-works': { prefix: 'MW', title: MINOR_WORKS_TITLE },
+  'cabling-report': { prefix: 'CR', title: CABLING_REPORT_TITLE },
+  'photo-record': { prefix: 'PR', title: PHOTO_RECORD_TITLE },
+};
+
+export const DOCUMENT_MAIL = 'document';
+
+const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+
+/** What a document kind puts into the PDF, rendered inside the issuing transaction. */
+interface Rendered {
+  pdf: Buffer;
+  visitId: string | null;
+  signerName: string;
+}
+
+/**
+ * Issues the office's documents: numbered per organisation without gaps, rendered to PDF from the records as
+ * they stand (every verdict worked out again here), stored, and recorded as a synced row whose `issuedAt` locks
+ * the records behind it. Nothing changes an issued PDF; sending it by e-mail goes through the mail outbox.
+ */
+@Injectable()
+export class DocumentsService implements OnModuleInit {
+  private readonly logger = new Logger('Documents');
+
+  constructor(
+    private readonly queue: WriteQueue,
+    private readonly engine: SyncEngine,
+    private readonly outbox: MailOutbox,
+    private readonly shareLinks: ShareLinksService,
+    @Inject(DOCUMENT_STORAGE) private readonly storage: PhotoStorage,
+    @Inject(PHOTO_STORAGE) private readonly photoStorage: PhotoStorage,
+    @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
+  ) {}
+
+  onModuleInit(): void {
+    this.outbox.register(DOCUMENT_MAIL, {
+      attachments: (message) => this.attachment(message),
+      settled: (em, message) => this.recordMailState(em, message),
+    });
+  }
+
+  async issue(user: AuthUser, jobId: string, kind: DocumentKind): Promise<SyncedRow> {
+    // Photos are made print-ready before the transaction: their bytes never change, and the write queue should not wait on them.
+    const images = kind === 'photo-record' ? await this.printablePhotos(user.organisationId, jobId) : new Map<string, Buffer>();
+    const row = await this.queue.run(async (em) => {
+      const file = await loadJobFile(em, user.organisationId, jobId);
+      const issuedAt = new Date();
+      const id = uuidv7();
+      // Numbered last, after every refusal, and in this transaction: a refused issue uses no number.
+      const render = await this.prepare(em, kind, file, images);
+      const number = await this.nextNumber(em, user.organisationId, kind);
+      const rendered = await render({ number, issuedAt, issuedBy: user.name });
+      await this.storage.put(documentKey(user.organisationId, id), rendered.pdf, 'application/pdf');
+      const set = {
+        jobId: file.job.id,
+        siteId: file.site.id,
+        kind,
+        visitId: rendered.visitId,
+        number,
+        title: `${KINDS[kind].title}: ${file.job.title as string}`.slice(0, 200),
+        signerName: rendered.signerName,
+        pdfSha256: sha256(rendered.pdf),
+        pdfBytes: rendered.pdf.length,
+        issuedAt: issuedAt.toISOString(),
+        issuedById: user.id,
+      };
+      const [result] = await this.engine.applyAll(em, officeActor(user), [officeMutation('document', id, 0, set)]);
+      if (result?.status !== 'applied') throw new Error(`The document row was not written: ${result?.error ?? result?.status}`);
+      return em.getRepository<SyncRecord>('document').findOneByOrFail({ id });
+    });
+    this.logger.log(`Issued ${row.number as string} for job ${jobId}`);
+    return toSyncedRow(row);
+  }
+
+  /** Loads and checks what the document needs (refusing with every reason at once), and returns how to render it. */
+  private async prepare(em: EntityManager, kind: DocumentKind, file: JobFile, images: Map<string, Buffer>): Promise<(issue: Issue) => Promise<Rendered>> {
+    const rules = DEFAULT_RULE_SET;
+    switch (kind) {
+      case 'minor-works': {
+        const content = await loadMinorWorks(em, file, rules);
+        if (content.problems.length) throw new UnprocessableEntityException(content.problems);
+        const signer = content.visits[content.visits.length - 1]!;
+        const signature = await signatureImage(signer.signatureSvg as string);
+        return async (issue) => ({
+          pdf: await minorWorksPdf({ issue, file, content, rules, signature }),
+          visitId: signer.id,
+          signerName: signer.signedByName as string,
+        });
+      }
+      case 'cabling-report': {
+        const cables = await loadCableSchedule(em, file, rules);
+        if (!cables.length) throw new UnprocessableEntityException(['This site has no cable runs recorded, so there is no cable schedule to report.']);
+        return async (issue) => ({ pdf: await cablingReportPdf({ issue, file, cables, rules }), visitId: null, signerName: issue.issuedBy });
+      }
+      case 'photo-record': {
+        const content = await loadPhotoRecord(em, file);
+        if (!content.photos.length) {
+          throw new UnprocessableEntityException([
+            content.waiting
+              ? 'None of this job’s photos has reached the office yet. Issue the photo record once the phones have sent them.'
+              : 'This job has no photos to put in a photo record.',
+          ]);
+        }
+        for (const { photo } of content.photos) {
+          const sha = photo.sha256 as string;
+          if (!images.has(sha)) images.set(sha, await this.printable(file.organisation.id, sha));
+        }
+        return async (issue) => ({ pdf: await photoRecordPdf({ issue, file, content, images }), visitId: null, signerName: issue.issuedBy });
+      }
+    }
+  }
+
+  private async nextNumber(em: EntityManager, organisationId: string, kind: DocumentKind): Promise<string> {
+    const where = { organisationId, kind };
+    const moved = await em.update(DocumentCounter, where, { value: () => 'value + 1' });
+    if (!moved.affected) await em.insert(DocumentCounter, { ...where, value: 1 });
+    const { value } = await em.findOneByOrFail(DocumentCounter, where);
+    return `${KINDS[kind].prefix}-${String(value).padStart(4, '0')}`;
+  }
+
+  private async printablePhotos(organisationId: string, jobId: string): Promise<Map<string, Buffer>> {
+    const hashes = await this.queue.read(async (em) => (await loadPhotoRecord(em, await loadJobFile(em, organisationId, jobId))).photos.map((p) => p.photo.sha256 as string));
+    const images = new Map<string, Buffer>();
+    for (const sha of new Set(hashes)) images.set(sha, await this.printable(organisationId, sha));
+    return images;
+  }
+
+  /** The server-made display size, as a JPEG (PDFs carry JPEG and PNG, not WebP), small enough for a page of six. */
+  private async printable(organisationId: string, sha: string): Promise<Buffer> {
+    try {
+      const display = await this.photoStorage.get(photoKey(organisationId, sha, 'display'));
+      return await sharp(display).resize({ width: 1100, height: 1100, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 78, mozjpeg: true }).toBuffer();
+    } catch (err) {
+      if (err instanceof PhotoObjectMissing) throw new ConflictException('A photo of this job is missing from storage; it cannot be printed.');
+      throw err;
+    }
+  }
+
+  async list(user: AuthUser, jobId: string): Promise<{ items: SyncedRow[] }> {
+    const rows = await this.queue.read(async (em) => {
+      const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
+      if (!job) throw new NotFoundException('No such job.');
+      return em.getRepository<SyncRecord>('document').find({
+        where: { jobId, organisationId: user.organisationId, deletedAt: IsNull() },
+        order: { issuedAt: 'DESC', id: 'DESC' },
+      });
+    });
+    return { items: rows.map(toSyncedRow) };
+  }
+
+  async findOne(user: AuthUser, id: string): Promise<SyncedRow> {
+    return toSyncedRow(await this.queue.read((em) => this.documentOf(em, user.organisationId, id)));
+  }
+
+  /** The stored row, for the PDF download. */
+  row(user: AuthUser, id: string): Promise<SyncRecord> {
+    return this.queue.read((em) => this.documentOf(em, user.organisationId, id));
+  }
+
+  /**
+   * Queues the document to be e-mailed with a new share link to the job's record, and marks it queued; the outbox
+   * sends it and writes sent or failed (with the reason) back to the document, so every device sees how it went.
+   */
+  async send(user: AuthUser, id: string, dto: SendDocumentDto): Promise<{ document: SyncedRow; shareLink: { id: string; expiresAt: string } }> {
+    const { row, link } = await this.queue.run(async (em) => {
+      const doc = await this.documentOf(em, user.organisationId, id);
+      if (!doc.issuedAt || !doc.pdfSha256) throw new ConflictException('Only an issued document can be e-mailed.');
+      const file = await loadJobFile(em, user.organisationId, doc.jobId as string);
+      const link = await this.shareLinks.createIn(em, user, file.job.id, { days: dto.linkDays, label: `E-mailed with ${doc.number as string} to ${dto.to}` });
+      await this.outbox.enqueue(em, {
+        organisationId: user.organisationId,
+        purpose: DOCUMENT_MAIL,
+        subjectId: doc.id,
+        to: dto.to,
+        createdById: user.id,
+        ...this.letter(file, doc, dto.to, link.url, link.expiresAt),
+      });
+      const [result] = await this.engine.applyAll(em, officeActor(user), [
+        officeMutation('document', doc.id, doc.version, { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null }),
+      ]);
+      if (result?.status !== 'applied') throw new Error(`The document's e-mail state was not written: ${result?.error ?? result?.status}`);
+      return { row: await em.getRepository<SyncRecord>('document').findOneByOrFail({ id }), link };
+    });
+    return { document: toSyncedRow(row), shareLink: { id: link.id, expiresAt: link.expiresAt } };
+  }
+
+  private letter(file: JobFile, doc: SyncRecord, to: string, url: string, expiresAt: string): { subject: string; text: string } {
+    const { organisation: org, job, site, customer } = file;
+    const kind = KINDS[doc.kind as DocumentKind].title;
+    const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name as string},` : 'Hello,';
+    const where = [site.address, site.postcode].filter(Boolean).join(', ');
+    const text = [
+      greeting,
+      '',
+      `Attached is ${kind.toLowerCase()} ${doc.number as string} for the work at ${where}${job.reference ? ` (our job ${job.reference as string}, “${job.title as string}”)` : ''}.`,
+      '',
+      `You can also see the job's record, with its photos and documents, at this link until ${dateWords(expiresAt, org.timeZone)}:`,
+      url,
+      '',
+      'Kind regards,',
+      org.name,
+      ...[org.address, [org.phone, org.email].filter(Boolean).join(' · ')].filter((l): l is string => !!l),
+    ].join('\n');
+    return { subject: `${kind} ${doc.number as string} from ${org.name}`, text };
+  }
+
+  private async attachment(message: OutboxMessage) {
+    const doc = await this.queue.read((em) => em.getRepository<SyncRecord>('document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId }));
+    if (!doc?.pdfSha256) throw new Error('The document is no longer on the server.');
+    const bytes = await this.storage.get(documentKey(message.organisationId, doc.id));
+    // What goes to the customer must be exactly what was issued.
+    if (sha256(bytes) !== doc.pdfSha256) throw new Error('The stored PDF does not match the fingerprint recorded when it was issued, so it was not sent.');
+    return [{ filename: pdfFilename(doc), content: bytes, contentType: 'application/pdf' }];
+  }
+
+  /** Writes the outbox's news to the document row through the engine, so it is numbered and every device pulls it. */
+  private async recordMailState(em: EntityManager, message: OutboxMessage): Promise<void> {
+    const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId });
+    if (!doc) return;
+    // A later send of the same document speaks for it now.
+    const latest = await em.findOne(OutboxMessage, { where: { purpose: DOCUMENT_MAIL, subjectId: doc.id }, order: { id: 'DESC' } });
+    if (latest?.id !== message.id) return;
+    const set =
+      message.state === 'sent'
+        ? { emailState: 'sent', emailedTo: message.toAddress, emailedAt: (message.sentAt ?? new Date()).toISOString(), emailError: null }
+        : message.state === 'failed'
+          ? { emailState: 'failed', emailError: `Not sent after ${message.attempts} ${message.attempts === 1 ? 'attempt' : 'attempts'}: ${message.lastError ?? 'no reason given'}`.slice(0, 500) }
+          : { emailState: 'queued', emailError: `Attempt ${message.attempts} of ${this.mail.maxAttempts} failed, trying again: ${message.lastError ?? ''}`.slice(0, 500) };
+    const sender = await em.findOneBy(User, { id: message.createdById, organisationId: message.organisationId });
+    const actor = { id: message.createdById, organisationId: message.organisationId, role: sender?.role ?? 'office', email: sender?.email ?? '', name: sender?.name ?? '' };
+    const [result] = await this.engine.applyAll(em, officeActor(actor, 'mail-outbox'), [officeMutation('document', doc.id, doc.version, set, 'mail-outbox')]);
+    if (result?.status !== 'applied') this.logger.warn(`The e-mail state of ${doc.number as string} was not written: ${result?.error ?? result?.status}`);
+  }
+
+  private async documentOf(em: EntityManager, organisationId: string, id: string): Promise<SyncRecord> {
+    const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id, organisationId, deletedAt: IsNull() });
+    if (!doc) throw new NotFoundException('No such document.');
+    return doc;
+  }
+}

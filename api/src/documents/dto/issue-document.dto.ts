@@ -1,0 +1,9 @@
+import { DOCUMENT_KINDS } from '@wiretrail/core';
+import { ChoiceField } from '../../common/records/record-fields.js';
+
+export type DocumentKind = (typeof DOCUMENT_KINDS)[number];
+
+export class IssueDocumentDto {
+  @ChoiceField(DOCUMENT_KINDS, { required: true, description: 'which document to issue for the job' })
+  kind: DocumentKind;
+}

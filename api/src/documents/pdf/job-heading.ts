@@ -1,0 +1,61 @@
+import type { JobFile } from '../document-content.js';
+import { DocumentLayout, INK } from './document-layout.js';
+import { dateWords, joined } from './document-words.js';
+
+/** What every document is about: who did the work and for whom, where. */
+export function jobHeading(layout: DocumentLayout, file: JobFile): void {
+  const { organisation: org, job, site, customer } = file;
+  layout.sideBySide([
+    {
+      title: 'Contractor',
+      pairs: [
+        ['Name', org.name],
+        ['Address', org.address ?? ''],
+        ['Telephone and e-mail', joined([org.phone, org.email], ' · ')],
+        ['Registration number', org.registrationNumber ?? 'Not recorded'],
+      ],
+    },
+    {
+      title: 'Customer and site',
+      pairs: [
+        ['Customer', joined([customer?.name])],
+        ['Site', joined([site.name, site.address, site.postcode])],
+        ['Job', joined([job.reference, job.title], ' · ')],
+        ['Customer’s address', joined([customer?.address])],
+      ],
+    },
+  ]);
+}
+
+export interface Issue {
+  number: string;
+  issuedAt: Date;
+  issuedBy: string;
+}
+
+/** A new document for the job: its band (kind, number, date issued), then who did the work and for whom. */
+export async function startJobDocument(o: { title: string; subtitle: string; issue: Issue; file: JobFile; landscape?: boolean }): Promise<DocumentLayout> {
+  const { issue, file } = o;
+  const layout = await DocumentLayout.start({
+    title: o.title,
+    subtitle: o.subtitle,
+    number: issue.number,
+    issued: `Issued ${dateWords(issue.issuedAt, file.organisation.timeZone)}`,
+    contractor: file.organisation.name,
+    subject: `${file.job.reference ?? ''} ${file.job.title}`.trim(),
+    landscape: o.landscape,
+  });
+  jobHeading(layout, file);
+  return layout;
+}
+
+/** The closing line: who issued it and when, for the contractor. */
+export function issuedBy(layout: DocumentLayout, issue: Issue, file: JobFile): void {
+  layout.paragraph(
+    `Issued by ${issue.issuedBy} for ${file.organisation.name} on ${dateWords(issue.issuedAt, file.organisation.timeZone)}. ` +
+      `The PDF's SHA-256 fingerprint is kept with the job, so any copy can be checked against the one issued.`,
+    'regular',
+    INK.muted,
+    8,
+  );
+}

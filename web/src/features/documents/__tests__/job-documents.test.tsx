@@ -1,0 +1,95 @@
+// @vitest-environment happy-dom
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { fakeApi, type FakeAnswer, type FakeCall } from '@/lib/fake-api';
+import { setSession } from '@/lib/session';
+import type { JobDocument } from '../api/get-job-documents';
+import { JobDocuments } from '../components/job-documents';
+
+const JOB = '01900000-0000-7000-8000-000000000010';
+const doc = (n: number, extra: Partial<JobDocument>): JobDocument => ({
+  id: `01900000-0000-7000-8000-00000000002${n}`, jobId: JOB, kind: 'photo-record', number: `PR-000${n}`, title: null, signerName: 'Dan Whitlow',
+  pdfSha256: 'a'.repeat(64), pdfBytes: 1000, issuedAt: '2026-03-14T11:00:00.000Z', issuedById: null, emailState: null, emailedTo: null, emailedAt: null, emailError: null,
+  ...extra,
+});
+
+function show(answer: (c: FakeCall) => FakeAnswer) {
+  const api = fakeApi((c) => {
+    if (c.path === `/api/jobs/${JOB}`) return { status: 200, body: { id: JOB, customerId: 'c1' } };
+    if (c.path === '/api/customers/c1') return { status: 200, body: { name: 'Hannah Greaves', email: 'hannah.greaves@example.com' } };
+    return answer(c);
+  });
+  vi.stubGlobal('fetch', api.fetch);
+  render(
+    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+      <JobDocuments jobId={JOB} />
+    </QueryClientProvider>,
+  );
+  return api.calls;
+}
+
+describe('JobDocuments', () => {
+  beforeEach(() => setSession({ accessToken: 'a', refreshToken: 'r', user: { id: 'u', email: 'office@larkfield.example', name: 'Dan Whitlow', role: 'office', organisationId: 'o' } }));
+  afterEach(() => {
+    cleanup();
+    vi.unstubAllGlobals();
+    setSession(null);
+  });
+
+  it('lists what was issued with how each e-mail is getting on', async () => {
+    show(() => ({
+      status: 200,
+      body: {
+        items: [
+          doc(3, { emailState: 'failed', emailedTo: 'x@example.com', emailError: 'Not sent after 6 attempts: 550 5.1.1 No such mailbox' }),
+          doc(2, { emailState: 'queued', emailedTo: 'hannah.greaves@example.com', emailError: 'Attempt 1 of 6 failed, trying again: 451 busy' }),
+          doc(1, { kind: 'minor-works', number: 'MW-0001', signerName: 'Aled Pryce', emailState: 'sent', emailedTo: 'hannah.greaves@example.com', emailedAt: '2026-03-14T11:05:00.000Z' }),
+        ],
+      },
+    }));
+    const table = await screen.findByRole('table', { name: 'Issued documents' });
+    const rows = within(table).getAllByRole('row').slice(1);
+    expect(rows.map((r) => within(r).getAllByRole('cell')[0]!.textContent)).toEqual(['PR-0003', 'PR-0002', 'MW-0001']);
+    expect(within(rows[0]!).getByText('Failed')).toBeTruthy();
+    expect(within(rows[0]!).getByText('Not sent after 6 attempts: 550 5.1.1 No such mailbox')).toBeTruthy();
+    expect(within(rows[1]!).getByText('Retrying')).toBeTruthy();
+    expect(within(rows[2]!).getByText('Sent')).toBeTruthy();
+    expect(within(rows[2]!).getByText('Signed by Aled Pryce')).toBeTruthy();
+  });
+
+  it("asks before issuing, then shows the server's refusal plainly, every reason of it", async () => {
+    const calls = show((c) =>
+      c.method === 'POST'
+        ? {
+            status: 422,
+            body: {
+              statusCode: 422,
+              error: 'Unprocessable Entity',
+              message: [
+                'Circuit 1 (Sockets, ground floor): Earth fault loop impedance Zs fails. Zs 1.52 Ω is above 1.10 Ω.',
+                'Circuit 1 (Sockets, ground floor): RCD operating time at 30 mA has no reading (RCD operating time).',
+              ],
+            },
+          }
+        : { status: 200, body: { items: [] } },
+    );
+    expect(await screen.findByText('No documents issued for this job yet.')).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Issue minor works certificate' }));
+    const confirm = screen.getByRole('dialog', { name: 'Issue the minor works certificate?' });
+    expect(calls.some((c) => c.method === 'POST')).toBe(false);
+    fireEvent.click(within(confirm).getByRole('button', { name: 'Issue' }));
+    const alert = await screen.findByRole('alert');
+    expect(within(alert).getByText('The minor works certificate was not issued')).toBeTruthy();
+    expect(within(alert).getByText(/Zs 1\.52 Ω is above 1\.10 Ω/)).toBeTruthy();
+    expect(within(alert).getByText(/RCD operating time at 30 mA has no reading/)).toBeTruthy();
+    expect(calls.filter((c) => c.method === 'POST')).toEqual([{ method: 'POST', path: `/api/jobs/${JOB}/documents`, body: { kind: 'minor-works' } }]);
+  });
+
+  it("opens the e-mail form with the customer's address filled in", async () => {
+    show(() => ({ status: 200, body: { items: [doc(1, {})] } }));
+    fireEvent.click(await screen.findByRole('button', { name: 'E-mail PR-0001 to the customer' }));
+    const dialog = await screen.findByRole('dialog', { name: 'E-mail photo record PR-0001 to the customer' });
+    await vi.waitFor(() => expect((within(dialog).getByLabelText('To') as HTMLInputElement).value).toBe('hannah.greaves@example.com'));
+  });
+});

@@ -1,0 +1,37 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+
+export type DocumentKind = 'minor-works' | 'cabling-report' | 'photo-record';
+export type EmailState = 'queued' | 'sent' | 'failed';
+
+/** A document row as the API gives it. */
+export interface JobDocument {
+  id: string;
+  jobId: string;
+  kind: DocumentKind;
+  number: string;
+  title: string | null;
+  signerName: string | null;
+  pdfSha256: string;
+  pdfBytes: number;
+  issuedAt: string;
+  issuedById: string | null;
+  emailState: EmailState | null;
+  emailedTo: string | null;
+  emailedAt: string | null;
+  emailError: string | null;
+}
+
+/** While an e-mail is on its way, the list asks again every few seconds so the state moves on by itself. */
+const WHILE_SENDING_MS = 3000;
+
+export const jobDocumentsQueryOptions = (jobId: string) =>
+  queryOptions({
+    queryKey: ['documents', { jobId }],
+    queryFn: ({ signal }) => api.get<{ items: JobDocument[] }>(`/jobs/${encodeURIComponent(jobId)}/documents`, signal),
+    refetchInterval: (query) => (query.state.data?.items.some((d) => d.emailState === 'queued') ? WHILE_SENDING_MS : false),
+  });
+
+export function useJobDocuments(jobId: string) {
+  return useQuery(jobDocumentsQueryOptions(jobId));
+}

@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { jobShareLinksQueryOptions, type ShareLink } from './get-job-share-links';
+
+/** The answer is the only time the link's address is known: the server keeps just a fingerprint of it. */
+export type NewShareLink = ShareLink & { url: string };
+
+export function useCreateShareLink(jobId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { days: number; label?: string }) => api.post<NewShareLink>(`/jobs/${encodeURIComponent(jobId)}/share-links`, body),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobShareLinksQueryOptions(jobId).queryKey }),
+  });
+}
