@@ -140,6 +140,17 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
   });
 
   describe('sites', () => {
+    it("gives each site its customer's name and each customer their sites, and finds a site by its customer", async () => {
+      const harbour = (await list(office, '/api/sites?search=harbour')).items[0]!;
+      expect(harbour.customerName).toBe('Brightwater Dental Practice');
+      expect(names(await list(office, '/api/sites?search=okonjo'))).toEqual(['Fernhill Close']);
+      const okonjo = (await list(office, '/api/customers?search=okonjo')).items[0]!;
+      expect(okonjo.sites).toEqual([{ id: expect.any(String), name: 'Fernhill Close' }]);
+      // A save answers with the row as the next read gives it.
+      const saved = (await t.http.patch(`/api/sites/${harbour.id}`).set(as(office)).send({ postcode: 'WM1 6QP' }).expect(200)).body;
+      expect(saved.customerName).toBe('Brightwater Dental Practice');
+    });
+
     it('filters by customer and searches name, address and postcode', async () => {
       expect(names(await list(office, `/api/sites?customerId=${seed.brightwater!.id}`))).toEqual(['Brightwater Dental, Harbour Yard']);
       expect(names(await list(office, '/api/sites?search=br2 8nt'))).toEqual(['Fernhill Close']);

@@ -162,18 +162,18 @@ export abstract class RecordsService<Q extends PageQueryDto> {
     return this.queue.read(async (em) => (await this.annotate(em, user, [await this.current(em, user, id)]))[0]!);
   }
 
-  async create(user: AuthUser, dto: object): Promise<SyncedRow> {
+  async create(user: AuthUser, dto: object): Promise<OfficeRow> {
     const set = definedFields(dto) as Record<string, unknown>;
     const id = uuidv7();
     const { result, row } = await this.queue.run(async (em) => {
       await this.checkSameSite(em, user, set, set);
       const [result] = await this.engine.applyAll(em, this.actor(user), [this.mutation(id, 0, set)]);
-      return { result: result!, row: await em.getRepository<SyncRecord>(this.entity).findOneBy({ id }) };
+      return { result: result!, row: await this.saved(em, user, id) };
     });
     return this.answer(result, row);
   }
 
-  async update(user: AuthUser, id: string, dto: object): Promise<SyncedRow> {
+  async update(user: AuthUser, id: string, dto: object): Promise<OfficeRow> {
     const set = definedFields(dto) as Record<string, unknown>;
     if (Object.keys(set).length === 0) throw new BadRequestException('Nothing to change: send at least one field.');
     const { result, row } = await this.queue.run(async (em) => {
@@ -181,9 +181,15 @@ export abstract class RecordsService<Q extends PageQueryDto> {
       await this.checkSameSite(em, user, { ...existing, ...set }, set);
       // The base is the version just read, inside the same transaction: the office's edit is the latest word.
       const [result] = await this.engine.applyAll(em, this.actor(user), [this.mutation(id, existing.version, set)]);
-      return { result: result!, row: await em.getRepository<SyncRecord>(this.entity).findOneBy({ id }) };
+      return { result: result!, row: await this.saved(em, user, id) };
     });
     return this.answer(result, row);
+  }
+
+  /** The row as written, answered as the office reads it, so a save's answer equals the next read. */
+  private async saved(em: EntityManager, user: AuthUser, id: string): Promise<OfficeRow | null> {
+    const row = await em.getRepository<SyncRecord>(this.entity).findOneBy({ id });
+    return row ? (await this.annotate(em, user, [row]))[0]! : null;
   }
 
   private async current(em: EntityManager, user: AuthUser, id: string): Promise<SyncRecord> {
@@ -226,7 +232,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
   }
 
   /** Thrown after the transaction, so that conflicts the engine recorded are kept. */
-  private answer(result: MutationResult, row: SyncRecord | null): SyncedRow {
+  private answer(result: MutationResult, row: OfficeRow | null): OfficeRow {
     if (result.status === 'rejected') {
       const error = result.error ?? `The ${this.entity} was not saved.`;
       throw /^No \w+ with that id/.test(error) ? new NotFoundException(`No such ${this.entity}.`) : new BadRequestException(error);
@@ -239,6 +245,6 @@ export abstract class RecordsService<Q extends PageQueryDto> {
         conflictIds: result.conflictIds ?? [],
       });
     }
-    return toSyncedRow(row!);
+    return row!;
   }
 }
