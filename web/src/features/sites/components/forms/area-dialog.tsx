@@ -1,0 +1,33 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { FormTextInput } from '@/components/forms/form-inputs';
+import { RecordDialog } from '@/components/forms/record-dialog';
+import { asText, fieldsToSend, optionalText, requiredText } from '@/lib/record-schema';
+import type { Area } from '../../api/get-areas';
+import { useSaveArea } from '../../api/save-record';
+
+export const areaSchema = z.object({
+  name: requiredText('area', 'name', 'Area name'),
+  level: optionalText('area', 'level', 'Floor or level'),
+});
+
+/** Adds a room or place on the site, or renames one. */
+export function AreaDialog({ siteId, area, onClose }: { siteId: string; area?: Area; onClose: () => void }) {
+  const save = useSaveArea();
+  const form = useForm<z.input<typeof areaSchema>, unknown, z.output<typeof areaSchema>>({
+    resolver: zodResolver(areaSchema),
+    defaultValues: { name: asText(area?.name), level: asText(area?.level) },
+  });
+  const submit = form.handleSubmit((values) => {
+    const changes = fieldsToSend(values, form.formState.dirtyFields, !area);
+    if (area && Object.keys(changes).length === 0) return onClose();
+    save.mutate({ id: area?.id, values: area ? changes : { siteId, ...changes } }, { onSuccess: onClose });
+  });
+  return (
+    <RecordDialog open maxWidth="xs" title={area ? `Change ${area.name}` : 'Add an area'} submitLabel={area ? 'Save changes' : 'Add area'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>
+      <FormTextInput form={form} name="name" label="Area name" hint="A room or place, such as “Cupboard under stairs”." autoFocus />
+      <FormTextInput form={form} name="level" label="Floor or level" hint="Optional, such as “Ground” or “First”." />
+    </RecordDialog>
+  );
+}

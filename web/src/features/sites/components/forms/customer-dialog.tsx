@@ -1,0 +1,45 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { FormTextInput } from '@/components/forms/form-inputs';
+import { RecordDialog } from '@/components/forms/record-dialog';
+import { asText, fieldsToSend, optionalEmail, optionalText, requiredText } from '@/lib/record-schema';
+import type { Customer } from '../../api/get-customers';
+import { useSaveCustomer } from '../../api/save-record';
+
+export const customerSchema = z.object({
+  name: requiredText('customer', 'name', 'Name'),
+  email: optionalEmail('customer', 'email', 'E-mail'),
+  phone: optionalText('customer', 'phone', 'Phone'),
+  address: optionalText('customer', 'address', 'Billing address'),
+  notes: optionalText('customer', 'notes', 'Notes'),
+});
+
+/** Adds a customer, or changes one's details; `onSaved`, when given, takes over from closing. */
+export function CustomerDialog({ customer, onClose, onSaved }: { customer?: Customer; onClose: () => void; onSaved?: (c: Customer) => void }) {
+  const save = useSaveCustomer();
+  const form = useForm<z.input<typeof customerSchema>, unknown, z.output<typeof customerSchema>>({
+    resolver: zodResolver(customerSchema),
+    defaultValues: {
+      name: asText(customer?.name),
+      email: asText(customer?.email),
+      phone: asText(customer?.phone),
+      address: asText(customer?.address),
+      notes: asText(customer?.notes),
+    },
+  });
+  const submit = form.handleSubmit((values) => {
+    const changes = fieldsToSend(values, form.formState.dirtyFields, !customer);
+    if (customer && Object.keys(changes).length === 0) return onClose();
+    save.mutate({ id: customer?.id, values: changes }, { onSuccess: (saved) => (onSaved ? onSaved(saved) : onClose()) });
+  });
+  return (
+    <RecordDialog open title={customer ? `Change ${customer.name}` : 'Add a customer'} submitLabel={customer ? 'Save changes' : 'Add customer'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>
+      <FormTextInput form={form} name="name" label="Name" autoFocus />
+      <FormTextInput form={form} name="email" label="E-mail" type="email" />
+      <FormTextInput form={form} name="phone" label="Phone" type="tel" />
+      <FormTextInput form={form} name="address" label="Billing address" multiline minRows={2} />
+      <FormTextInput form={form} name="notes" label="Notes" hint="For the office: billing, preferences." multiline minRows={2} />
+    </RecordDialog>
+  );
+}
