@@ -10,11 +10,11 @@ export const paths = {
   sync: { path: '/sync', label: 'Sync' },
   me: { path: '/me', label: 'Me' },
   jobs: { path: '/jobs', label: 'Jobs' },
-  job: { path: '/jobs/:jobId', href: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}` },
+  job: { path: '/jobs/:jobId', href: (jobId: string, tab?: string) => `/jobs/${encodeURIComponent(jobId)}${tab ? `?tab=${encodeURIComponent(tab)}` : ''}` },
   schedule: { path: '/schedule', label: 'Schedule' },
   customers: { path: '/customers', label: 'Customers & sites' },
   site: { path: '/sites/:siteId', href: (siteId: string) => `/sites/${encodeURIComponent(siteId)}` },
-  conflicts: { path: '/conflicts', label: 'Conflicts' },
+  conflicts: { path: '/conflicts', label: 'Conflicts', href: (jobId?: string) => (jobId ? `/conflicts?jobId=${encodeURIComponent(jobId)}` : '/conflicts') },
   team: { path: '/team', label: 'Team' },
   account: { path: '/account', label: 'My account' },
 } as const;
