@@ -29,8 +29,10 @@ export function CorrectCableRunDialog({ run, onClose }: { run: CableRun; onClose
       endBTermination: asText(run.endBTermination),
     },
   });
+  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
+  const { dirtyFields } = form.formState;
   const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, form.formState.dirtyFields, false);
+    const changes = fieldsToSend(values, dirtyFields, false);
     if (Object.keys(changes).length === 0) return onClose();
     save.mutate({ id: run.id, changes: changes as Record<string, string | null> }, { onSuccess: onClose });
   });

@@ -142,7 +142,7 @@ function Column({ status, filters, count, personName, onShowAll }: { status: Job
           <Typography variant="h3" component="h2">
             {jobStatusWords(status)}
           </Typography>
-          <Typography color="text.secondary" aria-label={`${total} jobs`}>
+          <Typography color="text.secondary" aria-label={`${total} ${total === 1 ? 'job' : 'jobs'}`}>
             {total}
           </Typography>
         </Stack>

@@ -19,8 +19,10 @@ export function AreaDialog({ siteId, area, onClose }: { siteId: string; area?: A
     resolver: zodResolver(areaSchema),
     defaultValues: { name: asText(area?.name), level: asText(area?.level) },
   });
+  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
+  const { dirtyFields } = form.formState;
   const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, form.formState.dirtyFields, !area);
+    const changes = fieldsToSend(values, dirtyFields, !area);
     if (area && Object.keys(changes).length === 0) return onClose();
     save.mutate({ id: area?.id, values: area ? changes : { siteId, ...changes } }, { onSuccess: onClose });
   });

@@ -21,8 +21,10 @@ export function BoardDialog({ siteId, board, areas, onClose }: { siteId: string;
     resolver: zodResolver(boardSchema),
     defaultValues: { name: asText(board?.name), areaId: asText(board?.areaId), description: asText(board?.description) },
   });
+  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
+  const { dirtyFields } = form.formState;
   const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, form.formState.dirtyFields, !board);
+    const changes = fieldsToSend(values, dirtyFields, !board);
     if (board && Object.keys(changes).length === 0) return onClose();
     save.mutate({ id: board?.id, values: board ? changes : { siteId, ...changes } }, { onSuccess: onClose });
   });

@@ -44,8 +44,10 @@ export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: st
       cpcCsaMm2: asText(circuit?.cpcCsaMm2),
     },
   });
+  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
+  const { dirtyFields } = form.formState;
   const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, form.formState.dirtyFields, !circuit);
+    const changes = fieldsToSend(values, dirtyFields, !circuit);
     if (circuit && Object.keys(changes).length === 0) return onClose();
     save.mutate({ id: circuit?.id, values: circuit ? changes : { siteId, ...changes } }, { onSuccess: onClose });
   });

@@ -28,8 +28,10 @@ export function CustomerDialog({ customer, onClose, onSaved }: { customer?: Cust
       notes: asText(customer?.notes),
     },
   });
+  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
+  const { dirtyFields } = form.formState;
   const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, form.formState.dirtyFields, !customer);
+    const changes = fieldsToSend(values, dirtyFields, !customer);
     if (customer && Object.keys(changes).length === 0) return onClose();
     save.mutate({ id: customer?.id, values: changes }, { onSuccess: (saved) => (onSaved ? onSaved(saved) : onClose()) });
   });

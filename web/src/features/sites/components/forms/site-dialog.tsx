@@ -38,8 +38,10 @@ export function SiteDialog({ site, customerId, customers, onClose }: { site?: Si
       accessNotes: asText(site?.accessNotes),
     },
   });
+  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
+  const { dirtyFields } = form.formState;
   const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, form.formState.dirtyFields, !site);
+    const changes = fieldsToSend(values, dirtyFields, !site);
     if (site && Object.keys(changes).length === 0) return onClose();
     save.mutate({ id: site?.id, values: changes }, { onSuccess: onClose });
   });
