@@ -27,7 +27,14 @@ function Verdict({ run }: { run: CableRun }) {
   const why = [...a.missing.map((m) => `Still to record: ${m}.`), ...a.problems, ...a.notes, a.length ? `Length ${a.length.note} (${a.length.source})` : null].filter(Boolean).join(' ');
   return (
     <Tooltip title={why || 'Wiremap and length within the limits.'}>
-      <Chip size="small" variant="outlined" color={VERDICT_COLOUR[a.verdict]} label={VERDICT_WORDS[a.verdict]} />
+      <Stack spacing={0.25} sx={{ alignItems: 'flex-start' }}>
+        <Chip size="small" variant="outlined" color={VERDICT_COLOUR[a.verdict]} label={VERDICT_WORDS[a.verdict]} />
+        {a.length?.verdict === 'fail' && (
+          <Typography variant="caption" color="error">
+            over {a.length.limit} {a.length.unit}
+          </Typography>
+        )}
+      </Stack>
     </Tooltip>
   );
 }
@@ -54,18 +61,25 @@ export function CableSchedule({ siteId, jobId, reference, siteName }: Props) {
     {
       field: 'label',
       headerName: 'Label',
-      width: 112,
+      width: 136,
       renderCell: ({ row }) => (
-        <div>
-          <Typography sx={{ fontWeight: 500 }}>{row.label}</Typography>
-          <Typography variant="body2" color="text.secondary">
-            {cableStatusWords(row.status)}
-          </Typography>
-        </div>
+        <Stack direction="row" sx={{ alignItems: 'center', width: '100%' }}>
+          <div style={{ flex: 1, minWidth: 0 }}>
+            <Typography sx={{ fontWeight: 500, overflowWrap: 'anywhere' }}>{row.label}</Typography>
+            <Typography variant="body2" color="text.secondary">
+              {cableStatusWords(row.status)}
+            </Typography>
+          </div>
+          <Tooltip title="Correct the label or ends">
+            <IconButton size="small" aria-label={`Correct ${row.label}`} onClick={() => setCorrecting(row)} sx={{ minWidth: 40, minHeight: 40 }}>
+              <EditOutlined fontSize="small" />
+            </IconButton>
+          </Tooltip>
+        </Stack>
       ),
     },
-    { field: 'from', headerName: 'From', flex: 1, minWidth: 150, valueGetter: (_v, row) => endWords(row.endAAreaName, row.endADescription, row.endATermination) },
-    { field: 'to', headerName: 'To', flex: 1, minWidth: 150, valueGetter: (_v, row) => endWords(row.endBAreaName, row.endBDescription, row.endBTermination) },
+    { field: 'from', headerName: 'From', flex: 1, minWidth: 140, valueGetter: (_v, row) => endWords(row.endAAreaName, row.endADescription, row.endATermination) },
+    { field: 'to', headerName: 'To', flex: 1, minWidth: 140, valueGetter: (_v, row) => endWords(row.endBAreaName, row.endBDescription, row.endBTermination) },
     {
       field: 'medium',
       headerName: 'Medium',
@@ -81,9 +95,9 @@ export function CableSchedule({ siteId, jobId, reference, siteName }: Props) {
         </div>
       ),
     },
-    { field: 'lengthM', headerName: 'Length (m)', width: 96, type: 'number', valueFormatter: (v: number | null) => (v == null ? '—' : String(v)) },
+    { field: 'lengthM', headerName: 'Length', width: 88, type: 'number', valueFormatter: (v: number | null) => (v == null ? '—' : `${v} m`) },
     { field: 'wiremap', headerName: 'Wiremap', flex: 1.2, minWidth: 180, sortable: false, valueGetter: (_v, row) => wiremapWords(row) },
-    { field: 'verdict', headerName: 'Verdict', width: 86, valueGetter: (_v, row) => row.assessment.verdict, renderCell: ({ row }) => <Verdict run={row} /> },
+    { field: 'verdict', headerName: 'Verdict', width: 80, valueGetter: (_v, row) => row.assessment.verdict, renderCell: ({ row }) => <Verdict run={row} /> },
     {
       field: 'testedAt',
       headerName: 'Last tested',
@@ -99,19 +113,6 @@ export function CableSchedule({ siteId, jobId, reference, siteName }: Props) {
         ) : (
           '—'
         ),
-    },
-    {
-      field: 'actions',
-      headerName: '',
-      width: 56,
-      sortable: false,
-      renderCell: ({ row }) => (
-        <Tooltip title="Correct the label or ends">
-          <IconButton aria-label={`Correct ${row.label}`} onClick={() => setCorrecting(row)}>
-            <EditOutlined />
-          </IconButton>
-        </Tooltip>
-      ),
     },
   ];
 

@@ -24,27 +24,42 @@ interface Props {
 export function JobsTable({ state, change, personName }: Props) {
   const jobs = useJobs(tableQueryOf(state));
   const columns: GridColDef<Job>[] = [
-    { field: 'reference', headerName: 'Reference', width: 120, valueGetter: (v: string | null) => v ?? '—' },
+    { field: 'reference', headerName: 'Reference', width: 110, valueGetter: (v: string | null) => v ?? '—' },
     {
       field: 'title',
       headerName: 'Job',
       flex: 2,
-      minWidth: 260,
+      minWidth: 220,
       renderCell: ({ row }) => (
         <Link component={RouterLink} to={paths.job.href(row.id)} underline="hover" sx={{ fontWeight: 500 }}>
           {row.title}
         </Link>
       ),
     },
-    { field: 'status', headerName: 'Status', width: 130, renderCell: ({ row }) => <Chip size="small" variant="outlined" label={jobStatusWords(row.status)} /> },
-    { field: 'customerName', headerName: 'Customer', flex: 1, minWidth: 170, valueGetter: (v: string | null) => v ?? '—' },
-    { field: 'siteName', headerName: 'Site', flex: 1, minWidth: 170, sortable: false, valueGetter: (v: string | null) => v ?? '—' },
-    { field: 'nextVisitStart', headerName: 'Next visit', width: 170, valueGetter: (v: string | null) => visitWhen(v) },
+    { field: 'status', headerName: 'Status', width: 118, renderCell: ({ row }) => <Chip size="small" variant="outlined" label={jobStatusWords(row.status)} /> },
+    {
+      // Sorted by the customer's name; the site is said below it.
+      field: 'customerName',
+      headerName: 'Customer and site',
+      flex: 1.3,
+      minWidth: 180,
+      renderCell: ({ row }) => (
+        <div>
+          <Typography variant="body2" sx={{ fontWeight: 500 }}>
+            {row.customerName ?? '—'}
+          </Typography>
+          <Typography variant="body2" color="text.secondary">
+            {row.siteName ?? '—'}
+          </Typography>
+        </div>
+      ),
+    },
+    { field: 'nextVisitStart', headerName: 'Next visit', width: 150, valueGetter: (v: string | null) => visitWhen(v) },
     {
       field: 'technicianIds',
       headerName: 'Technicians',
       flex: 1,
-      minWidth: 160,
+      minWidth: 140,
       sortable: false,
       renderCell: ({ row }) => <Typography variant="body2">{row.technicianIds?.length ? row.technicianIds.map(personName).join(', ') : '—'}</Typography>,
     },

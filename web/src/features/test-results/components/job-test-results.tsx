@@ -8,13 +8,13 @@ import { EmptyState } from '@/components/empty-state';
 import { RecordGrid } from '@/components/record-grid';
 import { type TestResult, useJobTestResults } from '../api/get-test-results';
 import { overallResult } from '../overall-result';
-import { VerdictChip } from './verdict-chip';
+import { VERDICT_WORDS, VerdictChip } from './verdict-chip';
 
 /** The readings a line shows beside its verdict, with their units. */
 const UNITS: Partial<Record<keyof CircuitReadings, string>> = {
   r1Ohm: 'Ω', rnOhm: 'Ω', r2Ohm: 'Ω', r1r2Ohm: 'Ω', irLiveLiveMOhm: 'MΩ', irLiveEarthMOhm: 'MΩ', zsOhm: 'Ω', rcdTripMs: 'ms', rcdTripMs5x: 'ms',
 };
-const SHORT: Record<string, string> = { 'ring-r1-rn': 'r1, rn', 'ring-r2': 'r2', 'ir-live-live': 'L–L', 'ir-live-earth': 'L–E', 'rcd-1x': '1×', 'rcd-5x': '5×', 'rcd-button': 'Test' };
+const SHORT: Record<string, string> = { 'ring-r1-rn': 'r1, rn', 'ring-r2': 'r2', 'ir-live-live': 'L–L', 'ir-live-earth': 'L–E', 'rcd-1x': '1×', 'rcd-5x': '5×', 'rcd-button': 'Button' };
 
 /** The ring's r2 line also judges r1, which the line above it shows already. */
 const SHOWN: Partial<Record<string, (keyof CircuitReadings)[]>> = { 'ring-r2': ['r2Ohm'] };
@@ -56,8 +56,6 @@ function Lines({ result, keys }: { result: TestResult; keys: string[] }) {
   );
 }
 
-const VERDICT_RANK = { fail: 0, check: 1, pass: 2 } as const;
-
 /**
  * The test results taken on the job's visits, one row per result, with the server's verdicts worked out from the
  * circuit as recorded and the site's earthing.
@@ -76,32 +74,24 @@ export function JobTestResults({ jobId }: { jobId: string }) {
       field: 'circuit',
       headerName: 'Circuit',
       flex: 1,
-      minWidth: 170,
+      minWidth: 160,
       valueGetter: (_v, row) => row.circuit?.label ?? 'No circuit given',
       renderCell: ({ row }) => (
-        <div>
+        <Stack spacing={0.5} sx={{ alignItems: 'flex-start' }}>
           <Typography sx={{ fontWeight: 500 }}>{row.circuit?.label ?? 'No circuit given'}</Typography>
           <Typography variant="body2" color="text.secondary">
             {[row.testedAt ? new Date(row.testedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' }) : null, row.instrument].filter(Boolean).join(' · ') || 'Time not recorded'}
           </Typography>
-        </div>
+          <VerdictChip title={`${row.circuit?.label ?? 'Circuit'}: all tests`} result={overallResult(row.assessment)} label={`Overall: ${VERDICT_WORDS[row.assessment.verdict]}`} />
+        </Stack>
       ),
     },
-    {
-      field: 'verdict',
-      headerName: 'Overall',
-      width: 92,
-      valueGetter: (_v, row) => VERDICT_RANK[row.assessment.verdict],
-      renderCell: ({ row }) => (
-        <VerdictChip title={`${row.circuit?.label ?? 'Circuit'}: all tests`} result={overallResult(row.assessment)} />
-      ),
-    },
-    group('Ring', ['ring-r1-rn', 'ring-r2'], 170),
-    group('R1+R2', ['r1r2'], 115),
-    group('Insulation', ['ir-live-live', 'ir-live-earth'], 165),
-    group('Polarity', ['polarity'], 125),
-    group('Zs', ['zs'], 115),
-    group('RCD', ['rcd-1x', 'rcd-5x', 'rcd-button'], 175),
+    group('Ring', ['ring-r1-rn', 'ring-r2'], 165),
+    group('R1+R2', ['r1r2'], 112),
+    group('Insulation', ['ir-live-live', 'ir-live-earth'], 162),
+    group('Polarity', ['polarity'], 122),
+    group('Zs', ['zs'], 112),
+    group('RCD', ['rcd-1x', 'rcd-5x', 'rcd-button'], 168),
   ];
   if (results.isError) return <Alert severity="error">{results.error.message}</Alert>;
   if (results.isSuccess && results.data.items.length === 0) {
