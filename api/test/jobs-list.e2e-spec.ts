@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import type { Session } from './sync-helpers.js';
-import { createTestApp, expectErrorBody, signIn, type TestApp } from './test-app.js';
+import { bearer, createTestApp, expectErrorBody, messagesOf, signInAll, type TestApp } from './test-app.js';
 
 type Job = { id: string; reference: string; status: string; customerName: string; siteName: string; nextVisitStart: string | null; technicianIds: string[]; visitCount: number };
 type Page = { items: Job[]; total: number; page: number; pageSize: number };
@@ -22,16 +22,14 @@ describe('the jobs list for the table and the board', () => {
   let today: string;
   const customers: Record<string, string> = {};
 
-  const as = (s: Session) => ({ authorization: `Bearer ${s.accessToken}` });
+  const as = bearer;
   const list = async (query: string, s = office): Promise<Page> => (await t.http.get(`/api/jobs?${query}`).set(as(s)).expect(200)).body;
   const refs = async (query: string) => (await list(query)).items.map((j) => j.reference);
   const day = (offset: number) => new Date(Date.parse(`${today}T00:00:00Z`) + offset * DAY).toISOString();
 
   beforeAll(async () => {
     t = await createTestApp();
-    [office, tech1, tech2, oakmere] = await Promise.all(
-      ['office@larkfield.example', 'tech1@larkfield.example', 'tech2@larkfield.example', 'admin@oakmere.example'].map((e) => signIn(t, e)),
-    );
+    [office, tech1, tech2, oakmere] = await signInAll(t, 'office@larkfield.example', 'tech1@larkfield.example', 'tech2@larkfield.example', 'admin@oakmere.example');
     const sockets = (await list('search=LED-0041')).items[0]!;
     today = (sockets.nextVisitStart as string).slice(0, 10);
     for (const c of (await t.http.get('/api/customers').set(as(office)).expect(200)).body.items) customers[c.name] = c.id;
@@ -110,7 +108,7 @@ describe('the jobs list for the table and the board', () => {
     const pulled = (await t.http.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=jobs-list-tech2').set(as(tech2)).expect(200)).body;
     expect(pulled.changes.find((c: { entity: string; id: string }) => c.entity === 'job' && c.id === job.id).row.status).toBe('on-site');
     const wrong = await t.http.patch(`/api/jobs/${job.id}`).set(as(office)).send({ status: 'finished' }).expect(400);
-    expect([wrong.body.message].flat().join(' ')).toMatch(/status must be one of: enquiry, booked, on-site, paperwork, done, cancelled/);
+    expect(messagesOf(wrong.body)).toMatch(/status must be one of: enquiry, booked, on-site, paperwork, done, cancelled/);
     await t.http.patch(`/api/jobs/${job.id}`).set(as(office)).send({ status: 'booked' }).expect(200);
   });
 
@@ -125,7 +123,7 @@ describe('the jobs list for the table and the board', () => {
   ])('%s answers 400 naming the field', async (path, expected) => {
     const res = await t.http.get(path).set(as(office)).expect(400);
     expectErrorBody(res.body, 400);
-    expect([res.body.message].flat().join(' ')).toMatch(expected);
+    expect(messagesOf(res.body)).toMatch(expected);
   });
 
   it("is for the office only and shows no other organisation's jobs", async () => {

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { T568A, T568B } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
 import { hlcAt, mutation, push, type Session } from './sync-helpers.js';
-import { createTestApp, expectErrorBody, signIn, type TestApp } from './test-app.js';
+import { bearer, createTestApp, expectErrorBody, messagesOf, signInAll, type TestApp } from './test-app.js';
 
 type Row = { id: string; version: number; [field: string]: unknown };
 type Page<T = Row> = { items: T[]; total: number; page: number; pageSize: number };
@@ -29,9 +29,9 @@ describe('cable runs, point changes and test results for the office', () => {
   let oakmere: Session;
   const ids: Record<string, string> = {};
 
-  const as = (s: Session) => ({ authorization: `Bearer ${s.accessToken}` });
+  const as = bearer;
+  const messages = messagesOf;
   const get = async <T = Page>(s: Session, path: string, status = 200): Promise<T> => (await t.http.get(path).set(as(s)).expect(status)).body as T;
-  const messages = (body: { message: string | string[] }) => [body.message].flat().join(' | ');
   const find = async (path: string, field: string, value: string) => {
     const row = (await get(office, `${path}?pageSize=200`)).items.find((r) => r[field] === value);
     if (!row) throw new Error(`seed has no ${path} with ${field} ${value}`);
@@ -41,9 +41,7 @@ describe('cable runs, point changes and test results for the office', () => {
 
   beforeAll(async () => {
     t = await createTestApp();
-    [office, admin, tech1, tech2, oakmere] = await Promise.all(
-      ['office@larkfield.example', 'admin@larkfield.example', 'tech1@larkfield.example', 'tech2@larkfield.example', 'admin@oakmere.example'].map((e) => signIn(t, e)),
-    );
+    [office, admin, tech1, tech2, oakmere] = await signInAll(t, 'office@larkfield.example', 'admin@larkfield.example', 'tech1@larkfield.example', 'tech2@larkfield.example', 'admin@oakmere.example');
     ids.orchard = (await find('/api/sites', 'name', 'Orchard Rise')).id;
     ids.harbour = (await find('/api/sites', 'name', 'Brightwater Dental, Harbour Yard')).id;
     ids.fernhill = (await find('/api/sites', 'name', 'Fernhill Close')).id;

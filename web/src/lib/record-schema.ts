@@ -99,7 +99,13 @@ export function optionalId() {
 }
 
 /** A stored value as the text a form input holds. */
-export const asText = (v: string | number | null | undefined): string => (v === null || v === undefined ? '' : String(v));
+export const asText = (v: unknown): string => (v === null || v === undefined ? '' : String(v));
+
+/** What a form's inputs hold when it opens: every field of its schema, from the record being changed, or empty. */
+export function startingTexts<K extends string>(schema: { shape: Record<K, unknown> }, record?: object | null): Record<K, string> {
+  const values = (record ?? {}) as Record<string, unknown>;
+  return Object.fromEntries(Object.keys(schema.shape).map((k) => [k, asText(values[k])])) as Record<K, string>;
+}
 
 /**
  * The fields to send: all of them for a new record, and for an existing one only those the user changed, so that

@@ -1,17 +1,4 @@
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
-import { IdField } from '../../common/records/record-fields.js';
+import { VisitRecordsQueryDto } from '../../common/records/visit-records-query.dto.js';
 
 /** search matches the instrument. */
-export class ListTestResultsQueryDto extends PageQueryDto {
-  @IdField('job', { description: 'test results taken on this job’s visits' })
-  jobId?: string;
-
-  @IdField('visit')
-  visitId?: string;
-
-  @IdField('site')
-  siteId?: string;
-
-  @IdField('circuit')
-  circuitId?: string;
-}
+export class ListTestResultsQueryDto extends VisitRecordsQueryDto {}

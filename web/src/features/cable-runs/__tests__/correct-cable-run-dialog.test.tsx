@@ -1,9 +1,9 @@
 // @vitest-environment happy-dom
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { assessCableRun } from '@wiretrail/core';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { setSession } from '@/lib/session';
+import { describe, expect, it, vi } from 'vitest';
+import { officeApiForEachTest, sentBy } from '@/testing/office-api';
 import type { CableRun } from '../api/get-cable-runs';
 import { CorrectCableRunDialog } from '../components/correct-cable-run-dialog';
 
@@ -14,17 +14,7 @@ const run = {
   endBAreaName: 'Surgery 1', assessment: assessCableRun({ medium: 'Cat6' }),
 } satisfies CableRun;
 
-let fetchMock: ReturnType<typeof vi.fn>;
-beforeEach(() => {
-  fetchMock = vi.fn(async (_url: string, init: RequestInit) => new Response(JSON.stringify({ ...run, ...JSON.parse(String(init.body)) }), { status: 200 }));
-  vi.stubGlobal('fetch', fetchMock);
-  setSession({ accessToken: 'a', refreshToken: 'r', user: { id: 'u1', email: 'office@larkfield.example', name: 'Dan Whitlow', role: 'office', organisationId: 'o1' } });
-});
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-  setSession(null);
-});
+const api = officeApiForEachTest(async (_url, init) => new Response(JSON.stringify({ ...run, ...JSON.parse(String(init?.body)) }), { status: 200 }));
 
 function show(onClose = vi.fn()) {
   render(
@@ -44,7 +34,7 @@ describe('correcting a cable run', () => {
     fireEvent.input(dialog.getByLabelText('Label'), { target: { value: 'R'.repeat(101) } });
     fireEvent.click(dialog.getByRole('button', { name: 'Save correction' }));
     expect(await dialog.findByText('Label must be at most 100 characters.')).toBeTruthy();
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(api.fetch).not.toHaveBeenCalled();
   });
 
   it('sends only what was corrected', async () => {
@@ -53,7 +43,6 @@ describe('correcting a cable run', () => {
     fireEvent.input(dialog.getByLabelText('To position'), { target: { value: 'X-ray unit, wall plate' } });
     fireEvent.click(dialog.getByRole('button', { name: 'Save correction' }));
     await waitFor(() => expect(onClose).toHaveBeenCalled());
-    const [url, init] = fetchMock.mock.calls[0] as [string, RequestInit];
-    expect([url, init.method, JSON.parse(String(init.body))]).toEqual([`/api/cable-runs/${run.id}`, 'PATCH', { label: 'RC-02A', endBDescription: 'X-ray unit, wall plate' }]);
+    expect(sentBy(api.fetch)).toEqual({ url: `/api/cable-runs/${run.id}`, method: 'PATCH', body: { label: 'RC-02A', endBDescription: 'X-ray unit, wall plate' } });
   });
 });

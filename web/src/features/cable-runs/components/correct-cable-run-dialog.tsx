@@ -1,10 +1,9 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import Stack from '@mui/material/Stack';
-import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
-import { asText, fieldsToSend, optionalText, requiredText } from '@/lib/record-schema';
+import { useRecordForm } from '@/components/forms/use-record-form';
+import { optionalText, requiredText, startingTexts } from '@/lib/record-schema';
 import type { CableRun } from '../api/get-cable-runs';
 import { useCorrectCableRun } from '../api/update-cable-run';
 
@@ -19,22 +18,10 @@ export const cableCorrectionSchema = z.object({
 /** Corrects the words of a cable run: its label and where each end is. Measurements stay as they were taken on site. */
 export function CorrectCableRunDialog({ run, onClose }: { run: CableRun; onClose: () => void }) {
   const save = useCorrectCableRun();
-  const form = useForm<z.input<typeof cableCorrectionSchema>, unknown, z.output<typeof cableCorrectionSchema>>({
-    resolver: zodResolver(cableCorrectionSchema),
-    defaultValues: {
-      label: run.label,
-      endADescription: asText(run.endADescription),
-      endATermination: asText(run.endATermination),
-      endBDescription: asText(run.endBDescription),
-      endBTermination: asText(run.endBTermination),
-    },
-  });
-  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
-  const { dirtyFields } = form.formState;
-  const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, dirtyFields, false);
-    if (Object.keys(changes).length === 0) return onClose();
-    save.mutate({ id: run.id, changes: changes as Record<string, string | null> }, { onSuccess: onClose });
+  const { form, submit } = useRecordForm(cableCorrectionSchema, startingTexts(cableCorrectionSchema, run), {
+    isNew: false,
+    onUnchanged: onClose,
+    onChanges: (changes) => save.mutate({ id: run.id, changes: changes as Record<string, string | null> }, { onSuccess: onClose }),
   });
   return (
     <RecordDialog open title={`Correct cable ${run.label}`} submitLabel="Save correction" onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>

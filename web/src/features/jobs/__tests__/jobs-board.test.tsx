@@ -1,9 +1,9 @@
 // @vitest-environment happy-dom
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { MemoryRouter } from 'react-router-dom';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { setSession } from '@/lib/session';
+import { describe, expect, it, vi } from 'vitest';
+import { officeApiForEachTest, sentBy } from '@/testing/office-api';
 import type { Job } from '../api/get-jobs';
 import { JobsBoard } from '../components/jobs-board';
 
@@ -13,22 +13,11 @@ const job = (reference: string, status: string, title: string): Job => ({
 });
 const JOBS = [job('LED-0041', 'booked', 'Move two lounge sockets'), job('LED-0045', 'enquiry', 'Outside socket')];
 
-let fetchMock: ReturnType<typeof vi.fn>;
-
-beforeEach(() => {
-  setSession({ accessToken: 'a', refreshToken: 'r', user: { id: 'u1', email: 'office@larkfield.example', name: 'Dan Whitlow', role: 'office', organisationId: 'o1' } });
-  fetchMock = vi.fn(async (url: string, init?: RequestInit) => {
-    if (init?.method === 'PATCH') return new Response(JSON.stringify({ ...JOBS[0], ...JSON.parse(String(init.body)) }), { status: 200 });
-    const status = new URL(url, 'http://x').searchParams.get('status');
-    const items = JOBS.filter((j) => j.status === status);
-    return new Response(JSON.stringify({ items, total: items.length, page: 1, pageSize: 30 }), { status: 200 });
-  });
-  vi.stubGlobal('fetch', fetchMock);
-});
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-  setSession(null);
+const api = officeApiForEachTest(async (url, init) => {
+  if (init?.method === 'PATCH') return new Response(JSON.stringify({ ...JOBS[0], ...JSON.parse(String(init.body)) }), { status: 200 });
+  const status = new URL(url, 'http://x').searchParams.get('status');
+  const items = JOBS.filter((j) => j.status === status);
+  return new Response(JSON.stringify({ items, total: items.length, page: 1, pageSize: 30 }), { status: 200 });
 });
 
 function show() {
@@ -51,7 +40,7 @@ describe('the jobs board', () => {
     expect(within(booked).getByLabelText('1 job')).toBeTruthy();
     expect(within(screen.getByRole('region', { name: 'On site' })).getByText('No jobs here that match.')).toBeTruthy();
     expect(screen.queryByRole('region', { name: 'Done' })).toBeNull();
-    const asked = fetchMock.mock.calls.map(([url]) => new URL(url as string, 'http://x').searchParams);
+    const asked = api.fetch.mock.calls.map(([url]) => new URL(url, 'http://x').searchParams);
     expect(asked.map((p) => p.get('status')).sort()).toEqual(['booked', 'enquiry', 'on-site', 'paperwork']);
     expect(asked.every((p) => p.get('technicianId') === 't1' && p.get('sort') === 'nextVisit')).toBe(true);
   });
@@ -60,10 +49,9 @@ describe('the jobs board', () => {
     show();
     fireEvent.click(await screen.findByRole('button', { name: 'Move LED-0041' }));
     fireEvent.click(screen.getByRole('menuitem', { name: 'Paperwork' }));
-    await waitFor(() => expect(fetchMock.mock.calls.some(([, init]) => (init as RequestInit | undefined)?.method === 'PATCH')).toBe(true));
-    const [url, init] = fetchMock.mock.calls.find(([, i]) => (i as RequestInit | undefined)?.method === 'PATCH')! as [string, RequestInit];
-    expect(url).toBe(`/api/jobs/${JOBS[0]!.id}`);
-    expect(JSON.parse(String(init.body))).toEqual({ status: 'paperwork' });
+    await waitFor(() => expect(api.fetch.mock.calls.some(([, init]) => init?.method === 'PATCH')).toBe(true));
+    const patch = api.fetch.mock.calls.findIndex(([, init]) => init?.method === 'PATCH');
+    expect(sentBy(api.fetch, patch)).toEqual({ url: `/api/jobs/${JOBS[0]!.id}`, method: 'PATCH', body: { status: 'paperwork' } });
   });
 
   it('does not offer the status a job is already in', async () => {

@@ -82,26 +82,25 @@ export function JobFiltersBar({ state, change, technicians, customers, withStatu
           </MenuItem>
         ))}
       </TextField>
-      <TextField
-        {...small}
-        type="date"
-        label="Visits from"
-        value={state.fromDate}
-        onChange={(e) => change({ fromDate: e.target.value })}
-        sx={{ width: 155 }}
-        slotProps={{ inputLabel: { shrink: true } }}
-      />
-      <TextField
-        {...small}
-        type="date"
-        label="Visits to"
-        value={state.toDate}
-        onChange={(e) => change({ toDate: e.target.value })}
-        error={toBeforeFrom}
-        helperText={toBeforeFrom ? 'Visits to must not be before Visits from.' : undefined}
-        sx={{ width: 155 }}
-        slotProps={{ inputLabel: { shrink: true } }}
-      />
+      {(
+        [
+          ['fromDate', 'Visits from', false],
+          ['toDate', 'Visits to', toBeforeFrom],
+        ] as const
+      ).map(([key, label, wrong]) => (
+        <TextField
+          key={key}
+          {...small}
+          type="date"
+          label={label}
+          value={state[key]}
+          onChange={(e) => change({ [key]: e.target.value })}
+          error={wrong}
+          helperText={wrong ? 'Visits to must not be before Visits from.' : undefined}
+          sx={{ width: 155 }}
+          slotProps={{ inputLabel: { shrink: true } }}
+        />
+      ))}
       {filtered && (
         <Button
           startIcon={<ClearOutlined />}

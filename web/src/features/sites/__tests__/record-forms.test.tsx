@@ -2,8 +2,8 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { setSession } from '@/lib/session';
+import { describe, expect, it, vi } from 'vitest';
+import { officeApiForEachTest, sentBy } from '@/testing/office-api';
 import type { Area } from '../api/get-areas';
 import type { Board, Circuit } from '../api/get-circuits';
 import type { Customer } from '../api/get-customers';
@@ -30,12 +30,9 @@ const circuit: Circuit = {
   deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5,
 };
 
-let fetchMock: ReturnType<typeof vi.fn>;
-const answer = (status: number, body: unknown) => fetchMock.mockResolvedValueOnce(new Response(JSON.stringify(body), { status }));
-const sent = (n = 0) => {
-  const [url, init] = fetchMock.mock.calls[n] as [string, RequestInit];
-  return { url, method: init.method, body: JSON.parse(String(init.body)) as Record<string, unknown> };
-};
+const api = officeApiForEachTest();
+const answer = (status: number, body: unknown) => api.fetch.mockResolvedValueOnce(new Response(JSON.stringify(body), { status }));
+const sent = (n = 0) => sentBy(api.fetch, n);
 
 function show(ui: ReactNode) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
@@ -46,16 +43,6 @@ function show(ui: ReactNode) {
 const type = (dialog: ReturnType<typeof show>, label: string, value: string) => fireEvent.input(dialog.getByLabelText(label), { target: { value } });
 const save = (dialog: ReturnType<typeof show>, name: string) => fireEvent.click(dialog.getByRole('button', { name }));
 
-beforeEach(() => {
-  fetchMock = vi.fn();
-  vi.stubGlobal('fetch', fetchMock);
-  setSession({ accessToken: 'a', refreshToken: 'r', user: { id: 'u1', email: 'office@larkfield.example', name: 'Dan Whitlow', role: 'office', organisationId: 'o1' } });
-});
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-  setSession(null);
-});
 
 describe('the customer form', () => {
   it('names an empty name and a malformed e-mail instead of sending', async () => {
@@ -65,7 +52,7 @@ describe('the customer form', () => {
     save(dialog, 'Add customer');
     expect(await dialog.findByText('Name must not be empty.')).toBeTruthy();
     expect(dialog.getByText('E-mail must be an e-mail address, like name@example.com.')).toBeTruthy();
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(api.fetch).not.toHaveBeenCalled();
   });
 
   it('refuses a name longer than the registry allows (200 characters)', async () => {
@@ -108,7 +95,7 @@ describe('the site form', () => {
     type(dialog, 'Ze', 'abc');
     save(dialog, 'Save changes');
     expect(await dialog.findByText('Ze must be a number, like 0.35 Ω.')).toBeTruthy();
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(api.fetch).not.toHaveBeenCalled();
   });
 
   it('requires the address and the customer of a new site', async () => {
@@ -143,7 +130,7 @@ describe('the site form', () => {
     const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={onClose} />);
     save(dialog, 'Save changes');
     await waitFor(() => expect(onClose).toHaveBeenCalled());
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(api.fetch).not.toHaveBeenCalled();
   });
 });
 
@@ -159,7 +146,7 @@ describe('the circuit form', () => {
     expect(dialog.getByText('Choose the board.')).toBeTruthy();
     expect(dialog.getByText('RCD rating must be at most 3000 mA.')).toBeTruthy();
     expect(dialog.getByText('Live conductor size must be at least 0.5 mm².')).toBeTruthy();
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(api.fetch).not.toHaveBeenCalled();
   });
 
   it('adds a circuit to the only board with its figures as numbers', async () => {
@@ -201,7 +188,7 @@ describe('the area and board forms', () => {
     const board = show(<BoardDialog siteId={SITE_ID} areas={areas} onClose={vi.fn()} />);
     save(board, 'Add board');
     expect(await board.findByText('Board name must not be empty.')).toBeTruthy();
-    expect(fetchMock).not.toHaveBeenCalled();
+    expect(api.fetch).not.toHaveBeenCalled();
   });
 
   it('add an area on the site', async () => {

@@ -123,6 +123,21 @@ export function CustomersAndSites() {
   ];
 
   const shown = tab === 'sites' ? sites : customers;
+  /** What both lists share: paged on the server, in the server's order, and what to say when empty. */
+  const paged = (
+    q: { data?: { total: number }; isFetching: boolean },
+    model: GridPaginationModel,
+    onChange: (m: GridPaginationModel) => void,
+    noMatch: string,
+    none: string,
+  ) => ({
+    rowCount: q.data?.total ?? 0,
+    loading: q.isFetching,
+    paginationModel: model,
+    onPaginationModelChange: onChange,
+    disableColumnSorting: true,
+    localeText: { noRowsLabel: deferred ? noMatch : none },
+  });
   return (
     <>
       <Stack direction="row" sx={{ alignItems: 'center', gap: 2, mb: 2, flexWrap: 'wrap' }}>
@@ -153,29 +168,9 @@ export function CustomersAndSites() {
       {shown.isError ? (
         <Alert severity="error">{shown.error.message}</Alert>
       ) : tab === 'sites' ? (
-        <RecordGrid
-          label="Sites"
-          rows={sites.data?.items ?? []}
-          columns={siteColumns}
-          rowCount={sites.data?.total ?? 0}
-          loading={sites.isFetching}
-          paginationModel={sitePage}
-          onPaginationModelChange={setSitePage}
-          disableColumnSorting
-          localeText={{ noRowsLabel: deferred ? 'No site matches that.' : 'No sites yet: add a customer, then their site.' }}
-        />
+        <RecordGrid label="Sites" rows={sites.data?.items ?? []} columns={siteColumns} {...paged(sites, sitePage, setSitePage, 'No site matches that.', 'No sites yet: add a customer, then their site.')} />
       ) : (
-        <RecordGrid
-          label="Customers"
-          rows={customers.data?.items ?? []}
-          columns={customerColumns}
-          rowCount={customers.data?.total ?? 0}
-          loading={customers.isFetching}
-          paginationModel={customerPage}
-          onPaginationModelChange={setCustomerPage}
-          disableColumnSorting
-          localeText={{ noRowsLabel: deferred ? 'No customer matches that.' : 'No customers yet.' }}
-        />
+        <RecordGrid label="Customers" rows={customers.data?.items ?? []} columns={customerColumns} {...paged(customers, customerPage, setCustomerPage, 'No customer matches that.', 'No customers yet.')} />
       )}
       {editing?.kind === 'customer' && (
         <CustomerDialog

@@ -1,9 +1,8 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
-import { asText, fieldsToSend, optionalText, requiredText } from '@/lib/record-schema';
+import { useRecordForm } from '@/components/forms/use-record-form';
+import { optionalText, requiredText, startingTexts } from '@/lib/record-schema';
 import type { Area } from '../../api/get-areas';
 import { useSaveArea } from '../../api/save-record';
 
@@ -15,16 +14,10 @@ export const areaSchema = z.object({
 /** Adds a room or place on the site, or renames one. */
 export function AreaDialog({ siteId, area, onClose }: { siteId: string; area?: Area; onClose: () => void }) {
   const save = useSaveArea();
-  const form = useForm<z.input<typeof areaSchema>, unknown, z.output<typeof areaSchema>>({
-    resolver: zodResolver(areaSchema),
-    defaultValues: { name: asText(area?.name), level: asText(area?.level) },
-  });
-  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
-  const { dirtyFields } = form.formState;
-  const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, dirtyFields, !area);
-    if (area && Object.keys(changes).length === 0) return onClose();
-    save.mutate({ id: area?.id, values: area ? changes : { siteId, ...changes } }, { onSuccess: onClose });
+  const { form, submit } = useRecordForm(areaSchema, startingTexts(areaSchema, area), {
+    isNew: !area,
+    onUnchanged: onClose,
+    onChanges: (changes) => save.mutate({ id: area?.id, values: area ? changes : { siteId, ...changes } }, { onSuccess: onClose }),
   });
   return (
     <RecordDialog open maxWidth="xs" title={area ? `Change ${area.name}` : 'Add an area'} submitLabel={area ? 'Save changes' : 'Add area'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>

@@ -1,11 +1,10 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import Stack from '@mui/material/Stack';
 import { CIRCUIT_KINDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
-import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
-import { asText, fieldsToSend, optionalChoice, optionalNumber, optionalText, requiredId, requiredText } from '@/lib/record-schema';
+import { useRecordForm } from '@/components/forms/use-record-form';
+import { optionalChoice, optionalNumber, optionalText, requiredId, requiredText, startingTexts } from '@/lib/record-schema';
 import type { Board, Circuit } from '../../api/get-circuits';
 import { useSaveCircuit } from '../../api/save-record';
 import { CIRCUIT_KIND_WORDS, DEVICE_WORDS } from '../../circuit-words';
@@ -29,27 +28,10 @@ const DEVICES = PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d
 /** Adds a circuit to one of the site's boards, or changes one; the checks judge test results against what is recorded here. */
 export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: string; circuit?: Circuit; boards: Board[]; onClose: () => void }) {
   const save = useSaveCircuit();
-  const form = useForm<z.input<typeof circuitSchema>, unknown, z.output<typeof circuitSchema>>({
-    resolver: zodResolver(circuitSchema),
-    defaultValues: {
-      boardId: circuit?.boardId ?? (boards.length === 1 ? boards[0]!.id : ''),
-      number: asText(circuit?.number),
-      description: asText(circuit?.description),
-      kind: asText(circuit?.kind),
-      deviceType: asText(circuit?.deviceType),
-      deviceRatingA: asText(circuit?.deviceRatingA),
-      rcdRatingMa: asText(circuit?.rcdRatingMa),
-      rcdType: asText(circuit?.rcdType),
-      liveCsaMm2: asText(circuit?.liveCsaMm2),
-      cpcCsaMm2: asText(circuit?.cpcCsaMm2),
-    },
-  });
-  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
-  const { dirtyFields } = form.formState;
-  const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, dirtyFields, !circuit);
-    if (circuit && Object.keys(changes).length === 0) return onClose();
-    save.mutate({ id: circuit?.id, values: circuit ? changes : { siteId, ...changes } }, { onSuccess: onClose });
+  const { form, submit } = useRecordForm(circuitSchema, { ...startingTexts(circuitSchema, circuit), boardId: circuit?.boardId ?? (boards.length === 1 ? boards[0]!.id : '') }, {
+    isNew: !circuit,
+    onUnchanged: onClose,
+    onChanges: (changes) => save.mutate({ id: circuit?.id, values: circuit ? changes : { siteId, ...changes } }, { onSuccess: onClose }),
   });
   return (
     <RecordDialog open title={circuit ? `Change circuit ${circuit.number}` : 'Add a circuit'} submitLabel={circuit ? 'Save changes' : 'Add circuit'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>

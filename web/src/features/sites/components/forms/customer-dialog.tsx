@@ -1,9 +1,8 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
-import { asText, fieldsToSend, optionalEmail, optionalText, requiredText } from '@/lib/record-schema';
+import { useRecordForm } from '@/components/forms/use-record-form';
+import { optionalEmail, optionalText, requiredText, startingTexts } from '@/lib/record-schema';
 import type { Customer } from '../../api/get-customers';
 import { useSaveCustomer } from '../../api/save-record';
 
@@ -18,22 +17,10 @@ export const customerSchema = z.object({
 /** Adds a customer, or changes one's details; `onSaved`, when given, takes over from closing. */
 export function CustomerDialog({ customer, onClose, onSaved }: { customer?: Customer; onClose: () => void; onSaved?: (c: Customer) => void }) {
   const save = useSaveCustomer();
-  const form = useForm<z.input<typeof customerSchema>, unknown, z.output<typeof customerSchema>>({
-    resolver: zodResolver(customerSchema),
-    defaultValues: {
-      name: asText(customer?.name),
-      email: asText(customer?.email),
-      phone: asText(customer?.phone),
-      address: asText(customer?.address),
-      notes: asText(customer?.notes),
-    },
-  });
-  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
-  const { dirtyFields } = form.formState;
-  const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, dirtyFields, !customer);
-    if (customer && Object.keys(changes).length === 0) return onClose();
-    save.mutate({ id: customer?.id, values: changes }, { onSuccess: (saved) => (onSaved ? onSaved(saved) : onClose()) });
+  const { form, submit } = useRecordForm(customerSchema, startingTexts(customerSchema, customer), {
+    isNew: !customer,
+    onUnchanged: onClose,
+    onChanges: (changes) => save.mutate({ id: customer?.id, values: changes }, { onSuccess: (saved) => (onSaved ? onSaved(saved) : onClose()) }),
   });
   return (
     <RecordDialog open title={customer ? `Change ${customer.name}` : 'Add a customer'} submitLabel={customer ? 'Save changes' : 'Add customer'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>

@@ -1,10 +1,9 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import Stack from '@mui/material/Stack';
-import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
-import { asText, choicesOf, fieldsToSend, optionalChoice, optionalNumber, optionalText, requiredId, requiredText } from '@/lib/record-schema';
+import { useRecordForm } from '@/components/forms/use-record-form';
+import { choicesOf, optionalChoice, optionalNumber, optionalText, requiredId, requiredText, startingTexts } from '@/lib/record-schema';
 import type { Customer } from '../../api/get-customers';
 import type { Site } from '../../api/get-sites';
 import { useSaveSite } from '../../api/save-record';
@@ -25,25 +24,10 @@ const EARTHING = choicesOf('site', 'earthing').map((e) => ({ value: e, label: e 
 /** Adds a site for a customer, or changes a site's address, supply and access notes. */
 export function SiteDialog({ site, customerId, customers, onClose }: { site?: Site; customerId?: string; customers: Customer[]; onClose: () => void }) {
   const save = useSaveSite();
-  const form = useForm<z.input<typeof siteSchema>, unknown, z.output<typeof siteSchema>>({
-    resolver: zodResolver(siteSchema),
-    defaultValues: {
-      customerId: site?.customerId ?? customerId ?? '',
-      name: asText(site?.name),
-      address: asText(site?.address),
-      postcode: asText(site?.postcode),
-      earthing: asText(site?.earthing),
-      zeOhm: asText(site?.zeOhm),
-      pfcKa: asText(site?.pfcKa),
-      accessNotes: asText(site?.accessNotes),
-    },
-  });
-  // Read while rendering, so that react-hook-form keeps track of which fields were touched.
-  const { dirtyFields } = form.formState;
-  const submit = form.handleSubmit((values) => {
-    const changes = fieldsToSend(values, dirtyFields, !site);
-    if (site && Object.keys(changes).length === 0) return onClose();
-    save.mutate({ id: site?.id, values: changes }, { onSuccess: onClose });
+  const { form, submit } = useRecordForm(siteSchema, { ...startingTexts(siteSchema, site), customerId: site?.customerId ?? customerId ?? '' }, {
+    isNew: !site,
+    onUnchanged: onClose,
+    onChanges: (changes) => save.mutate({ id: site?.id, values: changes }, { onSuccess: onClose }),
   });
   return (
     <RecordDialog open title={site ? `Change ${site.name ?? site.address}` : 'Add a site'} submitLabel={site ? 'Save changes' : 'Add site'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>
