@@ -11,6 +11,9 @@ import { CustomersModule } from './customers/customers.module.js';
 import { JobsModule } from './jobs/jobs.module.js';
 import { SitesModule } from './sites/sites.module.js';
 import { VisitsModule } from './visits/visits.module.js';
+import { CableRunsModule } from './cable-runs/cable-runs.module.js';
+import { PointChangesModule } from './point-changes/point-changes.module.js';
+import { TestResultsModule } from './test-results/test-results.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
@@ -79,6 +82,9 @@ function webAppModules(): DynamicModule[] {
     CircuitsModule,
     JobsModule,
     VisitsModule,
+    CableRunsModule,
+    PointChangesModule,
+    TestResultsModule,
     PhotosModule,
     DocumentsModule,
     ShareLinksModule,

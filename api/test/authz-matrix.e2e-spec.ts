@@ -86,8 +86,14 @@ describe('authorisation matrix: every route × every role × own and other organ
       'post /api/jobs/:id/documents', 'get /api/jobs/:id/documents', 'get /api/documents/:id', 'get /api/documents/:id/pdf', 'post /api/documents/:id/send',
       'post /api/jobs/:id/share-links', 'get /api/jobs/:id/share-links', 'post /api/share-links/:id/revoke',
       'get /api/shared/:token', 'get /api/shared/:token/photos/:photoId/thumb', 'get /api/shared/:token/photos/:photoId/display', 'get /api/shared/:token/documents/:documentId/pdf',
+      'get /api/jobs/status-counts', 'get /api/cable-runs', 'get /api/cable-runs/:id', 'patch /api/cable-runs/:id',
+      'get /api/point-changes', 'get /api/point-changes/:id', 'get /api/test-results', 'get /api/test-results/:id',
     ]) {
       expect(paths).toContain(expected);
+    }
+    // The office's reads of site records are the office's and the admin's alone.
+    for (const r of routes.filter((x) => /^\/api\/(cable-runs|point-changes|test-results|jobs\/status-counts)/.test(x.path))) {
+      expect([r.method, r.path, [...r.roles!].sort()]).toEqual([r.method, r.path, ['admin', 'office']]);
     }
     expect(routes.length).toBeGreaterThan(35);
     // Deny by default: every route names its roles or is public.
@@ -165,5 +171,25 @@ describe('authorisation matrix: every route × every role × own and other organ
       expect(JSON.stringify(res.body)).not.toContain(larkfieldOrg);
       for (const id of larkfieldIds.slice(0, 200)) expect(JSON.stringify(res.body)).not.toContain(id);
     }
+  }, 120_000);
+
+  it("gives Oakmere nothing of Larkfield's when its lists are filtered by Larkfield's sites, jobs and visits", async () => {
+    const byEntity = (entity: string) => larkfieldChanges.filter((c) => c.entity === entity).map((c) => c.id);
+    const filters = [...byEntity('site').map((id) => `siteId=${id}`), ...byEntity('job').map((id) => `jobId=${id}`), ...byEntity('visit').map((id) => `visitId=${id}`)];
+    const failures: string[] = [];
+    let answered = 0;
+    for (const r of routes.filter((x) => x.method === 'get' && !x.path.includes(':') && !x.isPublic && x.roles!.includes('admin') && x.path !== '/api/sync/pull')) {
+      for (const filter of filters) {
+        const res = await t.http.get(`${r.path}?${filter}`).set('authorization', `Bearer ${tokens.otherAdmin}`);
+        // A list that has no such filter refuses it; one that has it must come back without Larkfield's rows.
+        if (res.status === 400) continue;
+        answered++;
+        if (res.status !== 200) failures.push(`${r.path}?${filter} → ${res.status}`);
+        const body = JSON.stringify(res.body);
+        if (body.includes(larkfieldOrg) || larkfieldIds.some((id) => !filter.endsWith(id) && body.includes(id))) failures.push(`${r.path}?${filter} showed a Larkfield row`);
+      }
+    }
+    expect(failures).toEqual([]);
+    expect(answered).toBeGreaterThan(20);
   }, 120_000);
 });

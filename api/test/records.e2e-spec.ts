@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { formatHlc } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
-import { createTestApp, expectErrorBody, signIn, type TestApp } from './test-app.js';
+import { bearer, createTestApp, expectErrorBody, messagesOf, signIn, signInAll, type TestApp } from './test-app.js';
 
 type Session = Awaited<ReturnType<typeof signIn>>;
 type Row = { id: string; version: number; fieldVersions: Record<string, number>; [field: string]: unknown };
@@ -30,11 +30,11 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
   /** One seeded Larkfield row of each resource, plus the named ones the tests use. */
   const seed: Record<string, Row> = {};
 
-  const as = (s: Session) => ({ authorization: `Bearer ${s.accessToken}` });
+  const as = bearer;
   const list = async (s: Session, path: string): Promise<Page> => (await t.http.get(path).set(as(s)).expect(200)).body;
   const names = (page: Page, field = 'name') => page.items.map((r) => r[field]);
   const create = async (path: string, body: object, s = office): Promise<Row> => (await t.http.post(path).set(as(s)).send(body).expect(201)).body;
-  const messages = (body: { message: string | string[] }) => [body.message].flat().join(' | ');
+  const messages = messagesOf;
   const push = (s: Session, mutation: object) =>
     t.http.post('/api/sync/push').set(as(s)).send({
       deviceId: 'testdevice2',
@@ -43,9 +43,7 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
 
   beforeAll(async () => {
     t = await createTestApp();
-    [office, admin, tech1, tech2, oakmere] = await Promise.all(
-      ['office@larkfield.example', 'admin@larkfield.example', 'tech1@larkfield.example', 'tech2@larkfield.example', 'admin@oakmere.example'].map((e) => signIn(t, e)),
-    );
+    [office, admin, tech1, tech2, oakmere] = await signInAll(t, 'office@larkfield.example', 'admin@larkfield.example', 'tech1@larkfield.example', 'tech2@larkfield.example', 'admin@oakmere.example');
     const find = async (path: string, field: string, value: string) => {
       const row = (await list(office, `${path}?pageSize=200`)).items.find((r) => r[field] === value);
       if (!row) throw new Error(`seed has no ${path} with ${field} ${value}`);
@@ -140,6 +138,17 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
   });
 
   describe('sites', () => {
+    it("gives each site its customer's name and each customer their sites, and finds a site by its customer", async () => {
+      const harbour = (await list(office, '/api/sites?search=harbour')).items[0]!;
+      expect(harbour.customerName).toBe('Brightwater Dental Practice');
+      expect(names(await list(office, '/api/sites?search=okonjo'))).toEqual(['Fernhill Close']);
+      const okonjo = (await list(office, '/api/customers?search=okonjo')).items[0]!;
+      expect(okonjo.sites).toEqual([{ id: expect.any(String), name: 'Fernhill Close' }]);
+      // A save answers with the row as the next read gives it.
+      const saved = (await t.http.patch(`/api/sites/${harbour.id}`).set(as(office)).send({ postcode: 'WM1 6QP' }).expect(200)).body;
+      expect(saved.customerName).toBe('Brightwater Dental Practice');
+    });
+
     it('filters by customer and searches name, address and postcode', async () => {
       expect(names(await list(office, `/api/sites?customerId=${seed.brightwater!.id}`))).toEqual(['Brightwater Dental, Harbour Yard']);
       expect(names(await list(office, '/api/sites?search=br2 8nt'))).toEqual(['Fernhill Close']);

@@ -56,6 +56,16 @@ export async function signIn(t: TestApp, email: string, password = DEMO_PASSWORD
   return res.body as { accessToken: string; refreshToken: string; user: { id: string; organisationId: string; role: string } };
 }
 
+/** Several people signed in at once, in the order named. */
+export function signInAll(t: TestApp, ...emails: string[]) {
+  return Promise.all(emails.map((e) => signIn(t, e)));
+}
+
+export const bearer = (s: { accessToken: string }) => ({ authorization: `Bearer ${s.accessToken}` });
+
+/** An error body's message as one line, whether Nest gave one message or a list. */
+export const messagesOf = (body: { message: string | string[] }) => [body.message].flat().join(' | ');
+
 /** Nest's error body, pinned here once: every error the API gives has this shape. */
 export function expectErrorBody(body: unknown, statusCode: number): void {
   expect(body).toEqual(expect.objectContaining({ statusCode, message: expect.anything() }));

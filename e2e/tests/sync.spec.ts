@@ -80,7 +80,7 @@ test('a technician records a note and a circuit with no signal, and the office g
   const { context: desk, page: office } = await signedInAtDesk(browser, 'office@larkfield.example');
   try {
     await office.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Customers & sites' }).click();
-    await office.getByRole('table', { name: 'Sites' }).getByRole('link', { name: 'Orchard Rise' }).click();
+    await office.getByRole('grid', { name: 'Sites' }).getByRole('link', { name: 'Orchard Rise' }).click();
     const row = office.getByRole('table', { name: 'Circuits' }).getByRole('row', { name: new RegExp(circuitNumber) });
     await expect(row).toContainText(circuitDescription);
     await expect(row).toContainText('Radial');

@@ -1,6 +1,6 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import { fieldError, formatHlc, isSyncEntity, SYNC_ENTITIES } from '@wiretrail/core';
-import { IsNull, Not } from 'typeorm';
+import { fieldError, formatHlc, isSyncEntity, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
+import { type EntityManager, In, IsNull, Not } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
@@ -18,14 +18,35 @@ export class ConflictsService {
   ) {}
 
   async list(user: AuthUser, q: ListConflictsQueryDto) {
-    const where = {
-      organisationId: user.organisationId,
-      resolvedAt: q.resolved ? Not(IsNull()) : IsNull(),
-      ...(q.entity ? { entity: q.entity } : {}),
-      ...(q.rowId ? { rowId: q.rowId } : {}),
-    };
-    const [rows, total] = await this.queue.read((em) => em.getRepository<SyncRecord>('conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize }));
+    const [rows, total] = await this.queue.read(async (em) => {
+      const rowIds = q.jobId ? await this.rowsOfJob(em, user.organisationId, q.jobId) : null;
+      const where = {
+        organisationId: user.organisationId,
+        resolvedAt: q.resolved ? Not(IsNull()) : IsNull(),
+        ...(q.entity ? { entity: q.entity } : {}),
+        ...(q.rowId ? { rowId: q.rowId } : {}),
+        ...(rowIds ? { rowId: In(q.rowId ? rowIds.filter((id) => id === q.rowId) : rowIds) } : {}),
+      };
+      return em.getRepository<SyncRecord>('conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
+    });
     return { items: rows.map(toSyncedRow), total, page: q.page, pageSize: q.pageSize };
+  }
+
+  /**
+   * The rows a job's conflicts can be about: the job, its visits, what was recorded on them, and the cable runs last
+   * recorded on them. Deleted rows count too, since a deletion can be what conflicted.
+   */
+  private async rowsOfJob(em: EntityManager, organisationId: string, jobId: string): Promise<string[]> {
+    const ids = async (entity: SyncEntityName, where: Record<string, unknown>) =>
+      (await em.getRepository<SyncRecord>(entity).find({ where: { organisationId, ...where }, select: { id: true }, withDeleted: true })).map((r) => r.id);
+    const visitIds = await ids('visit', { jobId });
+    const recorded = visitIds.length
+      ? await Promise.all([
+          ...(['photo', 'note', 'pointChange', 'testResult'] as const).map((e) => ids(e, { visitId: In(visitIds) })),
+          ids('cableRun', { lastVisitId: In(visitIds) }),
+        ])
+      : [];
+    return [jobId, ...visitIds, ...recorded.flat()];
   }
 
   async findOne(user: AuthUser, id: string) {

@@ -1,5 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService } from '../common/records/records.service.js';
+import { type EntityManager, In, IsNull } from 'typeorm';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { type Listing, type OfficeRow, RecordsService } from '../common/records/records.service.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListCustomersQueryDto } from './dto/list-customers-query.dto.js';
 
 @Injectable()
@@ -8,5 +12,20 @@ export class CustomersService extends RecordsService<ListCustomersQueryDto> {
 
   protected listing(): Listing {
     return { search: ['name', 'email', 'phone', 'address'], order: [['name', 'ASC']] };
+  }
+
+  /** Each customer with the sites the office works at for them, by name. */
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+    const sites = rows.length
+      ? await em.getRepository<SyncRecord>('site').find({
+          where: { customerId: In(rows.map((r) => r.id)), organisationId: user.organisationId, deletedAt: IsNull() },
+          select: { id: true, customerId: true, name: true, address: true },
+          order: { address: 'ASC' },
+        })
+      : [];
+    return rows.map((r) => ({
+      ...toSyncedRow(r),
+      sites: sites.filter((s) => s.customerId === r.id).map((s) => ({ id: s.id, name: (s.name as string | null) ?? (s.address as string) })),
+    }));
   }
 }

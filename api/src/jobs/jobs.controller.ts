@@ -3,7 +3,7 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { CreateJobDto } from './dto/create-job.dto.js';
-import { ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
+import { JobFiltersDto, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
 import { UpdateJobDto } from './dto/update-job.dto.js';
 import { JobsService } from './jobs.service.js';
 
@@ -18,6 +18,12 @@ export class JobsController {
   @Get()
   list(@CurrentUser() user: AuthUser, @Query() query: ListJobsQueryDto) {
     return this.jobs.list(user, query);
+  }
+
+  /** Declared before `:id`, which would otherwise take this path for an id. */
+  @Get('status-counts')
+  statusCounts(@CurrentUser() user: AuthUser, @Query() query: JobFiltersDto) {
+    return this.jobs.statusCounts(user, query);
   }
 
   @Get(':id')

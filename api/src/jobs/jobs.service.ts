@@ -1,17 +1,117 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService } from '../common/records/records.service.js';
-import type { ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
+import { JOB_STATUSES } from '@wiretrail/core';
+import { type EntityManager, In, IsNull } from 'typeorm';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { type Condition, type Listing, type OfficeRow, RecordsService } from '../common/records/records.service.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { toSyncedRow } from '../sync/sync.service.js';
+import type { JobFiltersDto, JobSort, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
+
+/** Visits still to do: the next visit of a job is the earliest of these. */
+const OPEN_VISIT = `("v"."status" IS NULL OR "v"."status" NOT IN ('finished', 'cancelled'))`;
+
+const NEXT_VISIT = `(SELECT MIN("v"."plannedStart") FROM "visit" "v" WHERE "v"."jobId" = "r"."id" AND "v"."deletedAt" IS NULL AND ${OPEN_VISIT})`;
+
+/** The board's order of statuses, so sorting by status reads left to right as the board does. */
+const STATUS_ORDER = `CASE "r"."status" ${JOB_STATUSES.map((s, i) => `WHEN '${s}' THEN ${i}`).join(' ')} ELSE ${JOB_STATUSES.length} END`;
+
+const SORTS: Record<JobSort, string> = {
+  reference: 'reference',
+  title: 'title',
+  status: STATUS_ORDER,
+  customer: `(SELECT "c"."name" FROM "customer" "c" WHERE "c"."id" = "r"."customerId")`,
+  nextVisit: NEXT_VISIT,
+  created: 'createdAt',
+};
+
+export interface StatusCounts {
+  counts: Record<(typeof JOB_STATUSES)[number], number>;
+  total: number;
+}
 
 @Injectable()
 export class JobsService extends RecordsService<ListJobsQueryDto> {
   protected readonly entity = 'job';
 
   protected listing(q: ListJobsQueryDto): Listing {
+    const sort = q.sort ?? 'created';
+    const direction = (q.direction ?? (sort === 'created' ? 'desc' : 'asc')).toUpperCase() as 'ASC' | 'DESC';
     return {
       search: ['reference', 'title', 'description'],
+      searchThrough: [
+        { field: 'customerId', entity: 'customer', columns: ['name'] },
+        { field: 'siteId', entity: 'site', columns: ['name', 'address', 'postcode'] },
+      ],
       filters: { status: q.status, siteId: q.siteId, customerId: q.customerId },
-      // Newest first; ids are UUIDv7, so they break ties within the second createdAt keeps.
-      order: [['createdAt', 'DESC'], ['id', 'DESC']],
+      conditions: this.visitConditions(q),
+      // Jobs without a reference or a next visit come last whichever way the column is sorted.
+      // Ids are UUIDv7, so they break ties in creation order.
+      order: [[SORTS[sort], direction, 'NULLS LAST'], ['id', direction]],
     };
+  }
+
+  /** The number of jobs in each status under the same filters, for the board's columns. */
+  async statusCounts(user: AuthUser, q: JobFiltersDto): Promise<StatusCounts> {
+    const found = await this.countBy(user, { ...q, status: undefined } as ListJobsQueryDto, 'status');
+    const counts = Object.fromEntries(JOB_STATUSES.map((s) => [s, found.get(s) ?? 0])) as StatusCounts['counts'];
+    return { counts, total: [...found.values()].reduce((a, b) => a + b, 0) };
+  }
+
+  /**
+   * A job is chosen by its visits: one visit must match the technician and the date range together.
+   * The technician is looked for in the visit's stored JSON list of ids as text, which reads the same on SQLite and
+   * PostgreSQL; a quoted UUID cannot match part of another.
+   */
+  private visitConditions(q: JobFiltersDto): Condition[] {
+    const parts: string[] = [];
+    const params: Record<string, unknown> = {};
+    if (q.technicianId !== undefined) {
+      parts.push(`"v"."technicianIds" LIKE :visitTechnician`);
+      params.visitTechnician = `%"${q.technicianId}"%`;
+    }
+    if (q.from !== undefined) {
+      parts.push(`"v"."plannedStart" >= :visitFrom`);
+      params.visitFrom = q.from;
+    }
+    if (q.to !== undefined) {
+      parts.push(`"v"."plannedStart" < :visitTo`);
+      params.visitTo = q.to;
+    }
+    if (!parts.length) return [];
+    return [{
+      sql: `EXISTS (SELECT 1 FROM "visit" "v" WHERE "v"."jobId" = "r"."id" AND "v"."organisationId" = :org AND "v"."deletedAt" IS NULL AND ${parts.join(' AND ')})`,
+      params,
+    }];
+  }
+
+  /** Each job with its customer's and site's names, its next visit and who is booked on its visits. */
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+    if (!rows.length) return [];
+    const org = user.organisationId;
+    const ids = (field: string) => [...new Set(rows.map((r) => r[field] as string))];
+    const [customers, sites, visits] = await Promise.all([
+      em.getRepository<SyncRecord>('customer').find({ where: { id: In(ids('customerId')), organisationId: org }, select: { id: true, name: true } }),
+      em.getRepository<SyncRecord>('site').find({ where: { id: In(ids('siteId')), organisationId: org }, select: { id: true, name: true, address: true } }),
+      em.getRepository<SyncRecord>('visit').find({
+        where: { jobId: In(rows.map((r) => r.id)), organisationId: org, deletedAt: IsNull() },
+        select: { id: true, jobId: true, plannedStart: true, status: true, technicianIds: true },
+      }),
+    ]);
+    const customerName = new Map(customers.map((c) => [c.id, c.name as string]));
+    const siteName = new Map(sites.map((s) => [s.id, (s.name as string | null) ?? (s.address as string)]));
+    return rows.map((r) => {
+      const own = visits.filter((v) => v.jobId === r.id);
+      const open = own.filter((v) => v.status !== 'finished' && v.status !== 'cancelled' && typeof v.plannedStart === 'string');
+      const next = open.map((v) => v.plannedStart as string).sort()[0] ?? null;
+      const technicianIds = [...new Set(own.filter((v) => v.status !== 'cancelled').flatMap((v) => (v.technicianIds as string[] | null) ?? []))];
+      return {
+        ...toSyncedRow(r),
+        customerName: customerName.get(r.customerId as string) ?? null,
+        siteName: siteName.get(r.siteId as string) ?? null,
+        nextVisitStart: next,
+        visitCount: own.length,
+        technicianIds,
+      };
+    });
   }
 }

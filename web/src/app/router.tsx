@@ -22,7 +22,7 @@ export const technicianScreens: RouteObject[] = [
     ],
   },
   { path: paths.cableLabels.path, lazy: () => import('./routes/technician/cable-labels') },
-  { path: paths.cable.path, lazy: () => import('./routes/technician/cable') },
+  { path: paths.cableOnSite.path, lazy: () => import('./routes/technician/cable') },
   { path: paths.sync.path, lazy: () => import('./routes/technician/sync') },
   { path: paths.me.path, lazy: () => import('./routes/technician/me') },
 ];
@@ -30,6 +30,7 @@ export const technicianScreens: RouteObject[] = [
 const officeScreens: RouteObject[] = [
   { path: paths.jobs.path, lazy: () => import('./routes/office/jobs') },
   { path: paths.job.path, lazy: () => import('./routes/office/job') },
+  { path: paths.cableAtDesk.path, lazy: () => import('./routes/office/cable') },
   { path: paths.schedule.path, lazy: () => import('./routes/office/schedule') },
   { path: paths.customers.path, lazy: () => import('./routes/office/customers') },
   { path: paths.site.path, lazy: () => import('./routes/office/site') },
@@ -55,6 +56,8 @@ export const routes: RouteObject[] = [
         element: <RequireSession />,
         children: [
           { index: true, element: <HomeRedirect /> },
+          // A cable label's QR code: one address for every role, each sent on to its own screen.
+          { path: paths.cable.path, lazy: () => import('./routes/cable-link') },
           {
             element: <RequireRole roles={['technician']} />,
             // The technician's shell brings the local database and sync with it, so it loads on demand too.

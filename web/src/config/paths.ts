@@ -15,16 +15,18 @@ export const paths = {
   visitCircuitTest: { path: 'tests/:circuitId', href: (visitId: string, circuitId: string) => `/visits/${encodeURIComponent(visitId)}/tests/${encodeURIComponent(circuitId)}` },
   visitSignOff: { path: 'sign-off', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/sign-off` },
   cableLabels: { path: '/visits/:visitId/labels', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/labels` },
-  /** Where a cable label's QR code points: opens the cable's record on whichever phone scans it. */
+  /** Where a cable label's QR code points: sends a technician to the record on the phone, the office to the job's schedule. */
   cable: { path: '/cables/:cableId', href: (cableId: string) => `/cables/${encodeURIComponent(cableId)}` },
+  cableOnSite: { path: '/cables/:cableId/on-site', href: (cableId: string) => `/cables/${encodeURIComponent(cableId)}/on-site` },
+  cableAtDesk: { path: '/cables/:cableId/desk', href: (cableId: string) => `/cables/${encodeURIComponent(cableId)}/desk` },
   sync: { path: '/sync', label: 'Sync' },
   me: { path: '/me', label: 'Me' },
   jobs: { path: '/jobs', label: 'Jobs' },
-  job: { path: '/jobs/:jobId', href: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}` },
+  job: { path: '/jobs/:jobId', href: (jobId: string, tab?: string) => `/jobs/${encodeURIComponent(jobId)}${tab ? `?tab=${encodeURIComponent(tab)}` : ''}` },
   schedule: { path: '/schedule', label: 'Schedule' },
   customers: { path: '/customers', label: 'Customers & sites' },
   site: { path: '/sites/:siteId', href: (siteId: string) => `/sites/${encodeURIComponent(siteId)}` },
-  conflicts: { path: '/conflicts', label: 'Conflicts' },
+  conflicts: { path: '/conflicts', label: 'Conflicts', href: (jobId?: string) => (jobId ? `/conflicts?jobId=${encodeURIComponent(jobId)}` : '/conflicts') },
   team: { path: '/team', label: 'Team' },
   account: { path: '/account', label: 'My account' },
   /** A customer's read-only view of one job, opened from a share link; no account. */

@@ -12,12 +12,23 @@ import type { PageQueryDto } from './page-query.dto.js';
 
 /** The records the office reads and writes directly; the rest arrive from devices through sync. */
 export type OfficeRecord = 'customer' | 'site' | 'area' | 'board' | 'circuit' | 'job' | 'visit';
+/** Records the office also reads (and for cable runs, corrects) over REST, though devices make them. */
+export type SiteRecord = OfficeRecord | 'cableRun' | 'pointChange' | 'testResult';
+
+/** A row as the office reads it: the synced row, plus what a feature adds (names of what it points at, verdicts). */
+export type OfficeRow = SyncedRow & Record<string, unknown>;
 
 export interface RecordPage {
-  items: SyncedRow[];
+  items: OfficeRow[];
   total: number;
   page: number;
   pageSize: number;
+}
+
+/** A condition over the alias `r`, in portable SQL with quoted identifiers for any other table. */
+export interface Condition {
+  sql: string;
+  params?: Record<string, unknown>;
 }
 
 /** How one kind of record is listed. Columns are the record's field names. */
@@ -32,6 +43,8 @@ export interface Listing {
   listContains?: Record<string, string | undefined>;
   /** From inclusive, to exclusive. Works on times because they are stored as UTC ISO text. */
   range?: { field: string; from?: string; to?: string };
+  /** Further conditions a feature needs, such as rows of a job's visits. */
+  conditions?: Condition[];
   /** A field name, or an SQL expression over the alias `r`; the id is added last so pages never overlap. */
   order: Array<[sort: string, direction: 'ASC' | 'DESC', nulls?: 'NULLS FIRST' | 'NULLS LAST']>;
 }
@@ -59,6 +72,15 @@ export function officeMutation(entity: Mutation['entity'], id: string, baseVersi
   };
 }
 
+/** Rows whose visit belongs to the job: a job's photos, point changes and test results. */
+export function ofJobVisits(field: string, jobId: string | undefined): Condition[] {
+  if (jobId === undefined) return [];
+  return [{
+    sql: `r.${field} IN (SELECT "v"."id" FROM "visit" "v" WHERE "v"."organisationId" = :org AND "v"."jobId" = :ofJob AND "v"."deletedAt" IS NULL)`,
+    params: { ofJob: jobId },
+  }];
+}
+
 const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
 const sortKey = (sort: string) => (/^\w+$/.test(sort) ? `r.${sort}` : sort);
 
@@ -70,7 +92,7 @@ const sortKey = (sort: string) => (/^\w+$/.test(sort) ? `r.${sort}` : sort);
  */
 @Injectable()
 export abstract class RecordsService<Q extends PageQueryDto> {
-  protected abstract readonly entity: OfficeRecord;
+  protected abstract readonly entity: SiteRecord;
   protected readonly sameSite: SameSiteRef[] = [];
   protected abstract listing(query: Q): Listing;
 
@@ -81,6 +103,42 @@ export abstract class RecordsService<Q extends PageQueryDto> {
 
   async list(user: AuthUser, q: Q): Promise<RecordPage> {
     const l = this.listing(q);
+    const { where, params } = this.conditionsFor(user, l, q.search);
+    const { rows, total } = await this.queue.read(async (em) => {
+      const qb = em.getRepository<SyncRecord>(this.entity).createQueryBuilder('r').where(where.join(' AND '), params);
+      for (const [sort, direction, nulls] of l.order) qb.addOrderBy(sortKey(sort), direction, nulls);
+      if (!l.order.some(([sort]) => sort === 'id')) qb.addOrderBy('r.id', 'ASC');
+      const [found, total] = await qb.offset((q.page - 1) * q.pageSize).limit(q.pageSize).getManyAndCount();
+      return { rows: await this.annotate(em, user, found), total };
+    });
+    return { items: rows, total, page: q.page, pageSize: q.pageSize };
+  }
+
+  /** How many listed records hold each value of a field, under the same filters as the list (leave that field's own filter out). */
+  protected async countBy(user: AuthUser, q: Q, field: string): Promise<Map<string | null, number>> {
+    const { where, params } = this.conditionsFor(user, this.listing(q), q.search);
+    const rows = await this.queue.read((em) =>
+      em
+        .getRepository<SyncRecord>(this.entity)
+        .createQueryBuilder('r')
+        .select(`r.${field}`, 'value')
+        .addSelect('COUNT(*)', 'n')
+        .where(where.join(' AND '), params)
+        .groupBy(`r.${field}`)
+        .getRawMany<{ value: string | null; n: number | string }>(),
+    );
+    return new Map(rows.map((r) => [r.value, Number(r.n)]));
+  }
+
+  /**
+   * What a feature adds to its rows as the office reads them, inside the same read so that the additions match the rows.
+   * By default, nothing.
+   */
+  protected async annotate(_em: EntityManager, _user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+    return rows.map(toSyncedRow);
+  }
+
+  private conditionsFor(user: AuthUser, l: Listing, search: string | undefined): { where: string[]; params: Record<string, unknown> } {
     const params: Record<string, unknown> = { org: user.organisationId };
     const where = ['r.organisationId = :org', 'r.deletedAt IS NULL'];
     for (const [field, value] of Object.entries(l.filters ?? {})) {
@@ -101,41 +159,38 @@ export abstract class RecordsService<Q extends PageQueryDto> {
       where.push(`r.${l.range.field} < :rangeTo`);
       params.rangeTo = l.range.to;
     }
-    if (q.search && (l.search.length || l.searchThrough?.length)) {
-      params.like = `%${escapeLike(q.search)}%`;
+    for (const c of l.conditions ?? []) {
+      where.push(`(${c.sql})`);
+      Object.assign(params, c.params);
+    }
+    if (search && (l.search.length || l.searchThrough?.length)) {
+      params.like = `%${escapeLike(search)}%`;
       const matches = (columns: string[], alias: string) => columns.map((c) => `${alias}.${c} LIKE :like ESCAPE '\\'`);
       const through = (l.searchThrough ?? []).map(
         (s) => `r.${s.field} IN (SELECT t.id FROM "${SYNC_ENTITIES[s.entity].table}" AS t WHERE t.organisationId = :org AND (${matches(s.columns, 't').join(' OR ')}))`,
       );
       where.push(`(${[...matches(l.search, 'r'), ...through].join(' OR ')})`);
     }
-
-    const [rows, total] = await this.queue.read((em) => {
-      const qb = em.getRepository<SyncRecord>(this.entity).createQueryBuilder('r').where(where.join(' AND '), params);
-      for (const [sort, direction, nulls] of l.order) qb.addOrderBy(sortKey(sort), direction, nulls);
-      if (!l.order.some(([sort]) => sort === 'id')) qb.addOrderBy('r.id', 'ASC');
-      return qb.offset((q.page - 1) * q.pageSize).limit(q.pageSize).getManyAndCount();
-    });
-    return { items: rows.map(toSyncedRow), total, page: q.page, pageSize: q.pageSize };
+    return { where, params };
   }
 
   /** Another organisation's record answers exactly like a missing one: its existence is not ours to reveal. */
-  async findOne(user: AuthUser, id: string): Promise<SyncedRow> {
-    return toSyncedRow(await this.queue.read((em) => this.current(em, user, id)));
+  async findOne(user: AuthUser, id: string): Promise<OfficeRow> {
+    return this.queue.read(async (em) => (await this.annotate(em, user, [await this.current(em, user, id)]))[0]!);
   }
 
-  async create(user: AuthUser, dto: object): Promise<SyncedRow> {
+  async create(user: AuthUser, dto: object): Promise<OfficeRow> {
     const set = definedFields(dto) as Record<string, unknown>;
     const id = uuidv7();
     const { result, row } = await this.queue.run(async (em) => {
       await this.checkSameSite(em, user, set, set);
       const [result] = await this.engine.applyAll(em, this.actor(user), [this.mutation(id, 0, set)]);
-      return { result: result!, row: await em.getRepository<SyncRecord>(this.entity).findOneBy({ id }) };
+      return { result: result!, row: await this.saved(em, user, id) };
     });
     return this.answer(result, row);
   }
 
-  async update(user: AuthUser, id: string, dto: object): Promise<SyncedRow> {
+  async update(user: AuthUser, id: string, dto: object): Promise<OfficeRow> {
     const set = definedFields(dto) as Record<string, unknown>;
     if (Object.keys(set).length === 0) throw new BadRequestException('Nothing to change: send at least one field.');
     const { result, row } = await this.queue.run(async (em) => {
@@ -143,9 +198,15 @@ export abstract class RecordsService<Q extends PageQueryDto> {
       await this.checkSameSite(em, user, { ...existing, ...set }, set);
       // The base is the version just read, inside the same transaction: the office's edit is the latest word.
       const [result] = await this.engine.applyAll(em, this.actor(user), [this.mutation(id, existing.version, set)]);
-      return { result: result!, row: await em.getRepository<SyncRecord>(this.entity).findOneBy({ id }) };
+      return { result: result!, row: await this.saved(em, user, id) };
     });
     return this.answer(result, row);
+  }
+
+  /** The row as written, answered as the office reads it, so a save's answer equals the next read. */
+  private async saved(em: EntityManager, user: AuthUser, id: string): Promise<OfficeRow | null> {
+    const row = await em.getRepository<SyncRecord>(this.entity).findOneBy({ id });
+    return row ? (await this.annotate(em, user, [row]))[0]! : null;
   }
 
   private async current(em: EntityManager, user: AuthUser, id: string): Promise<SyncRecord> {
@@ -181,7 +242,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
   }
 
   /** Thrown after the transaction, so that conflicts the engine recorded are kept. */
-  private answer(result: MutationResult, row: SyncRecord | null): SyncedRow {
+  private answer(result: MutationResult, row: OfficeRow | null): OfficeRow {
     if (result.status === 'rejected') {
       const error = result.error ?? `The ${this.entity} was not saved.`;
       throw /^No \w+ with that id/.test(error) ? new NotFoundException(`No such ${this.entity}.`) : new BadRequestException(error);
@@ -194,6 +255,6 @@ export abstract class RecordsService<Q extends PageQueryDto> {
         conflictIds: result.conflictIds ?? [],
       });
     }
-    return toSyncedRow(row!);
+    return row!;
   }
 }

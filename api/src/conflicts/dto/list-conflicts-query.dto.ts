@@ -13,6 +13,10 @@ export class ListConflictsQueryDto {
   @ApiPropertyOptional() @IsOptional() @IsUUID('all', { message: 'rowId must be a UUID' })
   rowId?: string;
 
+  @ApiPropertyOptional({ description: "conflicts about the job, its visits and what was recorded on them" })
+  @IsOptional() @IsUUID('all', { message: 'jobId must be the id of a job' })
+  jobId?: string;
+
   @ApiPropertyOptional({ default: 1 }) @IsOptional() @Type(() => Number) @IsInt() @Min(1)
   page = 1;
 

@@ -1,4 +1,8 @@
-const JOB_STATUS_WORDS: Record<string, string> = {
+import { JOB_STATUSES } from '@wiretrail/core';
+
+export type JobStatus = (typeof JOB_STATUSES)[number];
+
+const JOB_STATUS_WORDS: Record<JobStatus, string> = {
   enquiry: 'Enquiry',
   booked: 'Booked',
   'on-site': 'On site',
@@ -7,4 +11,17 @@ const JOB_STATUS_WORDS: Record<string, string> = {
   cancelled: 'Cancelled',
 };
 
-export const jobStatusWords = (status: string | null | undefined) => (status ? (JOB_STATUS_WORDS[status] ?? status) : '—');
+/** What each column of the board holds, in a few words. */
+export const JOB_STATUS_HINTS: Record<JobStatus, string> = {
+  enquiry: 'Asked about, not booked yet',
+  booked: 'Visits booked',
+  'on-site': 'Work under way',
+  paperwork: 'Certificates and reports to issue',
+  done: 'Issued and invoiced',
+  cancelled: 'Not going ahead',
+};
+
+/** Done and cancelled jobs are closed: the board hides them unless asked. */
+export const OPEN_JOB_STATUSES: readonly JobStatus[] = JOB_STATUSES.filter((s) => s !== 'done' && s !== 'cancelled');
+
+export const jobStatusWords = (status: string | null | undefined) => (status ? (JOB_STATUS_WORDS[status as JobStatus] ?? status) : '—');

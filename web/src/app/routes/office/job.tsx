@@ -1,30 +1,59 @@
 import Alert from '@mui/material/Alert';
+import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import LinearProgress from '@mui/material/LinearProgress';
+import Stack from '@mui/material/Stack';
+import Tab from '@mui/material/Tab';
+import Tabs from '@mui/material/Tabs';
+import Typography from '@mui/material/Typography';
 import { useQuery } from '@tanstack/react-query';
+import { VERDICT_DISCLAIMER } from '@wiretrail/core';
 import { useCallback, useMemo } from 'react';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink, useParams, useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
+import { SafetyCaution } from '@/components/safety-caution';
 import { paths } from '@/config/paths';
+import { CableSchedule } from '@/features/cable-runs/components/cable-schedule';
+import { JobConflictsNotice } from '@/features/conflicts/components/job-conflicts-notice';
+import { JobDocuments } from '@/features/documents/components/job-documents';
 import { useJob } from '@/features/jobs/api/get-jobs';
 import { useJobVisits } from '@/features/jobs/api/get-job-visits';
-import { jobStatusWords } from '@/features/jobs/job-status';
+import { JobSummary } from '@/features/jobs/components/job-summary';
+import { JobVisits } from '@/features/jobs/components/job-visits';
 import { JobPhotoTrail } from '@/features/photos/components/job-photo-trail';
+import { JobPointChanges } from '@/features/point-changes/components/job-point-changes';
 import { siteAreasQueryOptions } from '@/features/sites/api/get-areas';
 import { siteCircuitsQueryOptions } from '@/features/sites/api/get-circuits';
 import { siteQueryOptions } from '@/features/sites/api/get-sites';
-import { useDirectory } from '@/lib/directory';
+import { JobShareLinks } from '@/features/share-links/components/job-share-links';
+import { CustomerAndSite } from '@/features/sites/components/customer-and-site';
+import { SiteCircuits } from '@/features/sites/components/site-circuits';
 import { usersQueryOptions } from '@/features/team/api/get-users';
+import { CircuitTestVerdict } from '@/features/test-results/components/circuit-test-verdict';
+import { JobTestResults } from '@/features/test-results/components/job-test-results';
+import { useDirectory } from '@/lib/directory';
 import { useSession } from '@/lib/session';
+
+const TABS = [
+  { value: 'overview', label: 'Overview' },
+  { value: 'photos', label: 'Photo trail' },
+  { value: 'cables', label: 'Cable schedule' },
+  { value: 'points', label: 'Points' },
+  { value: 'tests', label: 'Circuits & tests' },
+  { value: 'documents', label: 'Documents & links' },
+] as const;
+type TabValue = (typeof TABS)[number]['value'];
 
 export function Component() {
   const { jobId = '' } = useParams();
+  const [params, setParams] = useSearchParams();
+  const tab: TabValue = TABS.some((t) => t.value === params.get('tab')) ? (params.get('tab') as TabValue) : 'overview';
   const session = useSession();
   const job = useJob(jobId);
   const siteId = job.data?.siteId ?? '';
   const site = useQuery({ ...siteQueryOptions(siteId), enabled: !!siteId });
-  const areas = useQuery({ ...siteAreasQueryOptions(siteId), enabled: !!siteId });
-  const circuits = useQuery({ ...siteCircuitsQueryOptions(siteId), enabled: !!siteId });
+  const areas = useQuery({ ...siteAreasQueryOptions(siteId), enabled: !!siteId && tab === 'photos' });
+  const circuits = useQuery({ ...siteCircuitsQueryOptions(siteId), enabled: !!siteId && tab === 'photos' });
   const visits = useJobVisits(jobId);
   // Names of who took each photo: the organisation's directory, else the team list (admins only), else none.
   const directory = useDirectory();
@@ -46,19 +75,73 @@ export function Component() {
   if (job.isPending) return <LinearProgress aria-label="Loading the job" />;
   if (job.isError) return <Alert severity="error">{job.error.message}</Alert>;
   const j = job.data;
-  const place = site.data ? [site.data.name, site.data.address, site.data.postcode].filter(Boolean).join(', ') : '';
+  const siteName = site.data ? (site.data.name ?? site.data.address) : null;
   return (
     <>
       <PageHeader
         title={j.title}
-        subtitle={[j.reference, jobStatusWords(j.status), place].filter(Boolean).join(' · ')}
+        subtitle={[j.reference, j.customerName, siteName].filter(Boolean).join(' · ')}
         action={
           <Button component={RouterLink} to={paths.jobs.path}>
             All jobs
           </Button>
         }
       />
-      <JobPhotoTrail jobId={j.id} reference={j.reference} areas={areaChoices} subjects={subjects} visits={visits.data?.items ?? []} personName={personName} />
+      <Stack spacing={2}>
+        <JobSummary job={j} />
+        <JobConflictsNotice jobId={j.id} />
+        <Box sx={{ borderBottom: 1, borderColor: 'divider' }}>
+          <Tabs value={tab} onChange={(_, value: TabValue) => setParams(value === 'overview' ? {} : { tab: value }, { replace: true })} aria-label="Job record">
+            {TABS.map((t) => (
+              <Tab key={t.value} value={t.value} label={t.label} id={`job-tab-${t.value}`} aria-controls={`job-panel-${t.value}`} />
+            ))}
+          </Tabs>
+        </Box>
+        <Box role="tabpanel" id={`job-panel-${tab}`} aria-labelledby={`job-tab-${tab}`}>
+          {tab === 'overview' && (
+            <Stack spacing={2}>
+              <CustomerAndSite customerId={j.customerId} siteId={j.siteId} />
+              <JobVisits jobId={j.id} personName={(id) => personName(id) ?? 'Someone'} />
+            </Stack>
+          )}
+          {tab === 'photos' && (
+            <JobPhotoTrail jobId={j.id} reference={j.reference} areas={areaChoices} subjects={subjects} visits={visits.data?.items ?? []} personName={personName} />
+          )}
+          {tab === 'cables' && <CableSchedule siteId={j.siteId} jobId={j.id} reference={j.reference} siteName={siteName} />}
+          {tab === 'points' && (
+            <>
+              <SafetyCaution />
+              <JobPointChanges jobId={j.id} />
+            </>
+          )}
+          {tab === 'documents' && (
+            <Stack spacing={3}>
+              <JobDocuments jobId={j.id} />
+              <JobShareLinks jobId={j.id} />
+            </Stack>
+          )}
+          {tab === 'tests' && (
+            <Stack spacing={2}>
+              <SafetyCaution />
+              <SiteCircuits
+                siteId={j.siteId}
+                title="Circuits at the site"
+                extra={{ header: 'On this job', render: (c, label) => <CircuitTestVerdict jobId={j.id} circuitId={c.id} circuitLabel={label} /> }}
+              />
+              <section aria-labelledby="job-tests-heading">
+                <Typography variant="h2" id="job-tests-heading" sx={{ mb: 1.5 }}>
+                  Test results
+                </Typography>
+                <JobTestResults jobId={j.id} />
+              </section>
+              <Typography variant="body2" color="text.secondary">
+                Verdicts are worked out again by the server from the readings, the circuit as recorded now and the site's earthing. Open one to see
+                its limit and source. {VERDICT_DISCLAIMER}
+              </Typography>
+            </Stack>
+          )}
+        </Box>
+      </Stack>
     </>
   );
 }

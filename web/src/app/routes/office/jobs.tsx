@@ -1,32 +1,75 @@
+import TableRowsOutlined from '@mui/icons-material/TableRowsOutlined';
 import ViewKanbanOutlined from '@mui/icons-material/ViewKanbanOutlined';
-import Alert from '@mui/material/Alert';
+import FormControlLabel from '@mui/material/FormControlLabel';
+import Stack from '@mui/material/Stack';
+import Switch from '@mui/material/Switch';
+import ToggleButton from '@mui/material/ToggleButton';
+import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import LinearProgress from '@mui/material/LinearProgress';
-import { EmptyState } from '@/components/empty-state';
+import { lazy, Suspense, useCallback, useMemo } from 'react';
 import { PageHeader } from '@/components/page-header';
-import { useJobs } from '@/features/jobs/api/get-jobs';
-import { JobsTable } from '@/features/jobs/components/jobs-table';
-import { useSites } from '@/features/sites/api/get-sites';
+import { useJobStatusCounts } from '@/features/jobs/api/get-job-status-counts';
+import { JobFiltersBar } from '@/features/jobs/components/job-filters-bar';
+import { JobsBoard } from '@/features/jobs/components/jobs-board';
+import { filtersOf, useJobScreen } from '@/features/jobs/job-filters';
+import { useCustomers } from '@/features/sites/api/get-customers';
+import { useDirectory } from '@/lib/directory';
+
+// The table brings the data grid with it; the board, the first thing the office sees, does without.
+const JobsTable = lazy(() => import('@/features/jobs/components/jobs-table').then((m) => ({ default: m.JobsTable })));
 
 export function Component() {
-  const jobs = useJobs();
-  const sites = useSites();
-  const siteName = (siteId: string) => {
-    const site = sites.data?.items.find((s) => s.id === siteId);
-    return site ? (site.name ?? site.address) : '—';
-  };
+  const [state, change] = useJobScreen();
+  const filters = useMemo(() => filtersOf(state), [state]);
+  const counts = useJobStatusCounts(filters);
+  const directory = useDirectory();
+  const customers = useCustomers();
+  const technicians = useMemo(() => (directory.data ?? []).filter((p) => p.role === 'technician' && p.active).map((p) => ({ id: p.id, name: p.name })), [directory.data]);
+  const personName = useCallback((id: string) => directory.data?.find((p) => p.id === id)?.name ?? 'Someone', [directory.data]);
+  const total = counts.data?.total;
   return (
     <>
-      <PageHeader title="Jobs" subtitle="Every job, newest first. Open one to see its photo trail." />
-      {jobs.isPending ? (
-        <LinearProgress aria-label="Loading jobs" />
-      ) : jobs.isError ? (
-        <Alert severity="error">{jobs.error.message}</Alert>
-      ) : jobs.data.items.length === 0 ? (
-        <EmptyState icon={<ViewKanbanOutlined />} title="No jobs yet">
-          Jobs you book appear here, with each job's visits and photos.
-        </EmptyState>
+      <PageHeader
+        title="Jobs"
+        subtitle={
+          total === undefined
+            ? 'Every job, by where it stands.'
+            : `${total} ${total === 1 ? 'job' : 'jobs'}${Object.values(filters).some(Boolean) ? ' match' : ''}.${state.view === 'board' ? ' Drag a card, or use its menu, to move a job on.' : ''}`
+        }
+        action={
+          <Stack direction="row" sx={{ alignItems: 'center', gap: 2 }}>
+            {state.view === 'board' && (
+              <FormControlLabel
+                sx={{ whiteSpace: 'nowrap' }}
+                control={<Switch checked={state.showClosed} onChange={(e) => change({ showClosed: e.target.checked })} />}
+                label="Show done and cancelled"
+              />
+            )}
+            <ToggleButtonGroup exclusive size="small" value={state.view} onChange={(_, view) => view && change({ view, page: state.page })} aria-label="View">
+              <ToggleButton value="board" aria-label="Board">
+                <ViewKanbanOutlined sx={{ mr: 1 }} /> Board
+              </ToggleButton>
+              <ToggleButton value="table" aria-label="Table">
+                <TableRowsOutlined sx={{ mr: 1 }} /> Table
+              </ToggleButton>
+            </ToggleButtonGroup>
+          </Stack>
+        }
+      />
+      <JobFiltersBar
+        state={state}
+        change={change}
+        technicians={technicians}
+        customers={(customers.data?.items ?? []).map((c) => ({ id: c.id, name: c.name }))}
+        withStatus={state.view === 'table'}
+        counts={counts.data}
+      />
+      {state.view === 'board' ? (
+        <JobsBoard filters={filters} counts={counts.data} showClosed={state.showClosed} personName={personName} onShowAll={(status) => change({ view: 'table', status })} />
       ) : (
-        <JobsTable jobs={jobs.data.items} siteName={siteName} />
+        <Suspense fallback={<LinearProgress aria-label="Loading the table" />}>
+          <JobsTable state={state} change={change} personName={personName} />
+        </Suspense>
       )}
     </>
   );

@@ -25,12 +25,13 @@ export interface ConflictPage {
   pageSize: number;
 }
 
-export const conflictsQueryOptions = (page = 1) =>
+/** Unsettled conflicts, newest first; with a job, only those about the job, its visits and what was recorded on them. */
+export const conflictsQueryOptions = (page = 1, jobId?: string) =>
   queryOptions({
-    queryKey: ['conflicts', { page }],
-    queryFn: ({ signal }) => api.get<ConflictPage>(`/conflicts?page=${page}&pageSize=50`, signal),
+    queryKey: ['conflicts', { page, jobId }],
+    queryFn: ({ signal }) => api.get<ConflictPage>(`/conflicts?page=${page}&pageSize=50${jobId ? `&jobId=${encodeURIComponent(jobId)}` : ''}`, signal),
   });
 
-export function useConflicts(page = 1) {
-  return useQuery(conflictsQueryOptions(page));
+export function useConflicts(page = 1, jobId?: string) {
+  return useQuery(conflictsQueryOptions(page, jobId));
 }

@@ -8,9 +8,9 @@ import { useConflicts } from '../api/get-conflicts';
 import { useDirectory } from '@/lib/directory';
 import { ConflictCard } from './conflict-card';
 
-/** Every unsettled conflict, newest first; settling one sends the chosen value to every device. */
-export function ConflictsInbox() {
-  const conflicts = useConflicts();
+/** Every unsettled conflict (or one job's), newest first; settling one sends the chosen value to every device. */
+export function ConflictsInbox({ jobId }: { jobId?: string }) {
+  const conflicts = useConflicts(1, jobId);
   const people = useDirectory();
   if (conflicts.isPending) return <LinearProgress aria-label="Loading conflicts" />;
   if (conflicts.isError) return <Alert severity="error">{conflicts.error.message}</Alert>;
@@ -20,7 +20,7 @@ export function ConflictsInbox() {
     return (
       <Paper variant="outlined" sx={{ p: 3, textAlign: 'center' }}>
         <CheckCircleOutline color="success" sx={{ fontSize: 44 }} />
-        <Typography variant="h3">Nothing to settle</Typography>
+        <Typography variant="h3">{jobId ? 'Nothing to settle on this job' : 'Nothing to settle'}</Typography>
         <Typography color="text.secondary">When two people change the same detail before syncing, both values are kept and appear here.</Typography>
       </Paper>
     );

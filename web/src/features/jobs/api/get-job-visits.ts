@@ -8,6 +8,10 @@ export interface JobVisit {
   plannedStart: string | null;
   plannedEnd: string | null;
   status: string | null;
+  actualStart?: string | null;
+  actualEnd?: string | null;
+  signedByName?: string | null;
+  signedAt?: string | null;
 }
 
 export const jobVisitsQueryOptions = (jobId: string) =>

@@ -4,12 +4,15 @@ import type { RecordPage } from './get-customers';
 
 export interface Board {
   id: string;
+  siteId: string;
+  areaId: string | null;
   name: string;
   description: string | null;
 }
 
 export interface Circuit {
   id: string;
+  siteId: string;
   boardId: string;
   number: string;
   description: string | null;
@@ -17,6 +20,7 @@ export interface Circuit {
   deviceType: string | null;
   deviceRatingA: number | null;
   rcdRatingMa: number | null;
+  rcdType: string | null;
   liveCsaMm2: number | null;
   cpcCsaMm2: number | null;
 }

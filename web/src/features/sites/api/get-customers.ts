@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 
 export interface Customer {
@@ -7,6 +7,9 @@ export interface Customer {
   email: string | null;
   phone: string | null;
   address: string | null;
+  notes: string | null;
+  /** The customer's sites, by name. */
+  sites?: { id: string; name: string }[];
 }
 
 export interface RecordPage<T> {
@@ -16,12 +19,23 @@ export interface RecordPage<T> {
   pageSize: number;
 }
 
-export const customersQueryOptions = (search = '') =>
+export const customersQueryOptions = (search = '', page = 1, pageSize = 200) =>
   queryOptions({
-    queryKey: ['customers', { search }],
-    queryFn: ({ signal }) => api.get<RecordPage<Customer>>(`/customers?pageSize=200&search=${encodeURIComponent(search)}`, signal),
+    queryKey: ['customers', { search, page, pageSize }],
+    queryFn: ({ signal }) => api.get<RecordPage<Customer>>(`/customers?page=${page}&pageSize=${pageSize}&search=${encodeURIComponent(search)}`, signal),
+    placeholderData: keepPreviousData,
   });
 
-export function useCustomers(search = '') {
-  return useQuery(customersQueryOptions(search));
+export const customerQueryOptions = (id: string) =>
+  queryOptions({
+    queryKey: ['customers', id],
+    queryFn: ({ signal }) => api.get<Customer>(`/customers/${encodeURIComponent(id)}`, signal),
+  });
+
+export function useCustomers(search = '', page = 1, pageSize = 200) {
+  return useQuery(customersQueryOptions(search, page, pageSize));
+}
+
+export function useCustomer(id: string) {
+  return useQuery({ ...customerQueryOptions(id), enabled: !!id });
 }

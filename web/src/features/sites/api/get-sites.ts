@@ -1,4 +1,4 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import type { RecordPage } from './get-customers';
 
@@ -12,12 +12,23 @@ export interface Site {
   zeOhm: number | null;
   pfcKa: number | null;
   accessNotes: string | null;
+  customerName?: string | null;
 }
 
-export const sitesQueryOptions = () =>
+export interface SiteListQuery {
+  search?: string;
+  customerId?: string;
+  page?: number;
+  pageSize?: number;
+}
+
+const query = (q: SiteListQuery) => new URLSearchParams(Object.entries(q).filter(([, v]) => v !== undefined && v !== '').map(([k, v]) => [k, String(v)]));
+
+export const sitesQueryOptions = (q: SiteListQuery = { pageSize: 200 }) =>
   queryOptions({
-    queryKey: ['sites'],
-    queryFn: ({ signal }) => api.get<RecordPage<Site>>('/sites?pageSize=200', signal),
+    queryKey: ['sites', q],
+    queryFn: ({ signal }) => api.get<RecordPage<Site>>(`/sites?${query(q)}`, signal),
+    placeholderData: keepPreviousData,
   });
 
 export const siteQueryOptions = (id: string) =>
@@ -26,8 +37,8 @@ export const siteQueryOptions = (id: string) =>
     queryFn: ({ signal }) => api.get<Site>(`/sites/${id}`, signal),
   });
 
-export function useSites() {
-  return useQuery(sitesQueryOptions());
+export function useSites(q?: SiteListQuery) {
+  return useQuery(sitesQueryOptions(q));
 }
 
 export function useSite(id: string) {

@@ -1,0 +1,44 @@
+import { Injectable } from '@nestjs/common';
+import type { EntityManager } from 'typeorm';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { circuitLabel, nameOf, rowsById } from '../common/records/annotations.js';
+import { type Listing, type OfficeRow, ofJobVisits, RecordsService } from '../common/records/records.service.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { toSyncedRow } from '../sync/sync.service.js';
+import type { ListPointChangesQueryDto } from './dto/list-point-changes-query.dto.js';
+
+@Injectable()
+export class PointChangesService extends RecordsService<ListPointChangesQueryDto> {
+  protected readonly entity = 'pointChange';
+
+  protected listing(q: ListPointChangesQueryDto): Listing {
+    return {
+      search: ['accessoryKind', 'fromDescription', 'toDescription'],
+      filters: { visitId: q.visitId, siteId: q.siteId, circuitId: q.circuitId, action: q.action },
+      conditions: ofJobVisits('visitId', q.jobId),
+      // In the order they were recorded: ids are UUIDv7, made on the phone when the change was written down.
+      order: [['id', 'ASC']],
+    };
+  }
+
+  /** Each change with the names of its circuit and areas, and when its visit was planned. */
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+    const org = user.organisationId;
+    const [areas, circuits, visits] = await Promise.all([
+      rowsById(em, org, 'area', rows.flatMap((r) => [r.fromAreaId, r.toAreaId])),
+      rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
+      rowsById(em, org, 'visit', rows.map((r) => r.visitId)),
+    ]);
+    const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
+    return rows.map((r) => {
+      const circuit = circuits.get(r.circuitId as string);
+      return {
+        ...toSyncedRow(r),
+        fromAreaName: nameOf(areas.get(r.fromAreaId as string)),
+        toAreaName: nameOf(areas.get(r.toAreaId as string)),
+        circuitLabel: circuitLabel(circuit, boards.get(circuit?.boardId as string)),
+        visitPlannedStart: (visits.get(r.visitId as string)?.plannedStart as string | null | undefined) ?? null,
+      };
+    });
+  }
+}

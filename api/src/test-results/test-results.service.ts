@@ -1,0 +1,57 @@
+import { Injectable } from '@nestjs/common';
+import { assessCircuitTest, type CircuitReadings, type CircuitUnderTest, DEFAULT_RULE_SET } from '@wiretrail/core';
+import type { EntityManager } from 'typeorm';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { circuitLabel, rowsById } from '../common/records/annotations.js';
+import { type Listing, type OfficeRow, ofJobVisits, RecordsService } from '../common/records/records.service.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { toSyncedRow } from '../sync/sync.service.js';
+import type { ListTestResultsQueryDto } from './dto/list-test-results-query.dto.js';
+
+const READINGS = [
+  'r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'irTestVoltageV', 'polarity', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x', 'rcdButton',
+] as const satisfies readonly (keyof CircuitReadings)[];
+
+const CIRCUIT_FIELDS = [
+  'boardId', 'number', 'description', 'kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'liveCsaMm2', 'cpcCsaMm2',
+] as const;
+
+const pick = <K extends string>(row: SyncRecord, fields: readonly K[]) => Object.fromEntries(fields.map((f) => [f, row[f] ?? null])) as Record<K, unknown>;
+
+@Injectable()
+export class TestResultsService extends RecordsService<ListTestResultsQueryDto> {
+  protected readonly entity = 'testResult';
+
+  protected listing(q: ListTestResultsQueryDto): Listing {
+    return {
+      search: ['instrument'],
+      filters: { visitId: q.visitId, siteId: q.siteId, circuitId: q.circuitId },
+      conditions: ofJobVisits('visitId', q.jobId),
+      order: [['testedAt', 'ASC', 'NULLS LAST']],
+    };
+  }
+
+  /**
+   * Each result with its circuit and the server's own verdicts, worked out from the readings, the circuit as it is
+   * recorded now and the site's earthing. The phone's verdicts stay in `verdicts`; these are the ones documents use.
+   */
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+    const org = user.organisationId;
+    const [circuits, sites] = await Promise.all([
+      rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
+      rowsById(em, org, 'site', rows.map((r) => r.siteId)),
+    ]);
+    const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
+    return rows.map((r) => {
+      const c = circuits.get(r.circuitId as string);
+      const board = boards.get(c?.boardId as string);
+      const circuit = c ? { id: c.id, ...pick(c, CIRCUIT_FIELDS), boardName: (board?.name as string | undefined) ?? null, label: circuitLabel(c, board) } : null;
+      const earthing = (sites.get(r.siteId as string)?.earthing as string | null | undefined) ?? null;
+      const assessment = assessCircuitTest(
+        { circuit: (circuit ?? {}) as CircuitUnderTest, readings: pick(r, READINGS) as CircuitReadings, earthing },
+        DEFAULT_RULE_SET,
+      );
+      return { ...toSyncedRow(r), circuit, earthing, assessment };
+    });
+  }
+}

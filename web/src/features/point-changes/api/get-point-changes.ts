@@ -1,0 +1,39 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+
+/** A point added, moved, removed or replaced on a visit, with the names of its circuit and areas. */
+export interface PointChange {
+  id: string;
+  visitId: string;
+  siteId: string;
+  circuitId: string | null;
+  action: string;
+  accessoryKind: string | null;
+  fromAreaId: string | null;
+  fromDescription: string | null;
+  fromHeightMm: number | null;
+  toAreaId: string | null;
+  toDescription: string | null;
+  toHeightMm: number | null;
+  connection: string | null;
+  liveCsaMm2: number | null;
+  cpcCsaMm2: number | null;
+  addedRouteM: number | null;
+  fuseRatingA: number | null;
+  loadW: number | null;
+  concealedRoute: unknown;
+  fromAreaName: string | null;
+  toAreaName: string | null;
+  circuitLabel: string | null;
+  visitPlannedStart: string | null;
+}
+
+export const jobPointChangesQueryOptions = (jobId: string) =>
+  queryOptions({
+    queryKey: ['point-changes', { jobId }],
+    queryFn: ({ signal }) => api.get<{ items: PointChange[]; total: number }>(`/point-changes?jobId=${encodeURIComponent(jobId)}&pageSize=200`, signal),
+  });
+
+export function useJobPointChanges(jobId: string) {
+  return useQuery(jobPointChangesQueryOptions(jobId));
+}

@@ -1,0 +1,203 @@
+// @vitest-environment happy-dom
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import type { ReactNode } from 'react';
+import { describe, expect, it, vi } from 'vitest';
+import { officeApiForEachTest, sentBy } from '@/testing/office-api';
+import type { Area } from '../api/get-areas';
+import type { Board, Circuit } from '../api/get-circuits';
+import type { Customer } from '../api/get-customers';
+import type { Site } from '../api/get-sites';
+import { AreaDialog } from '../components/forms/area-dialog';
+import { BoardDialog } from '../components/forms/board-dialog';
+import { CircuitDialog } from '../components/forms/circuit-dialog';
+import { CustomerDialog } from '../components/forms/customer-dialog';
+import { SiteDialog } from '../components/forms/site-dialog';
+
+const SITE_ID = '01900000-0000-7000-8000-000000000002';
+const customer: Customer = { id: '01900000-0000-7000-8000-000000000001', name: 'Hannah Greaves', email: null, phone: null, address: null, notes: null };
+const site: Site = {
+  id: SITE_ID, customerId: customer.id, name: 'Orchard Rise', address: '14 Orchard Rise, Wendmouth', postcode: 'WM2 4HD',
+  earthing: 'TN-C-S', zeOhm: 0.28, pfcKa: 1.8, accessNotes: null,
+};
+const boards: Board[] = [
+  { id: '01900000-0000-7000-8000-000000000006', siteId: SITE_ID, areaId: null, name: 'Consumer unit', description: null },
+  { id: '01900000-0000-7000-8000-000000000007', siteId: SITE_ID, areaId: null, name: 'Garage sub-board', description: null },
+];
+const areas: Area[] = [{ id: '01900000-0000-7000-8000-000000000008', siteId: SITE_ID, name: 'Lounge', level: 'Ground' }];
+const circuit: Circuit = {
+  id: '01900000-0000-7000-8000-000000000009', siteId: SITE_ID, boardId: boards[0]!.id, number: '1', description: 'Sockets, ground floor', kind: 'ring',
+  deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5,
+};
+
+const api = officeApiForEachTest();
+const answer = (status: number, body: unknown) => api.fetch.mockResolvedValueOnce(new Response(JSON.stringify(body), { status }));
+const sent = (n = 0) => sentBy(api.fetch, n);
+
+function show(ui: ReactNode) {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  render(<QueryClientProvider client={client}>{ui}</QueryClientProvider>);
+  return within(screen.getByRole('dialog'));
+}
+
+const type = (dialog: ReturnType<typeof show>, label: string, value: string) => fireEvent.input(dialog.getByLabelText(label), { target: { value } });
+const save = (dialog: ReturnType<typeof show>, name: string) => fireEvent.click(dialog.getByRole('button', { name }));
+
+
+describe('the customer form', () => {
+  it('names an empty name and a malformed e-mail instead of sending', async () => {
+    const dialog = show(<CustomerDialog onClose={vi.fn()} />);
+    type(dialog, 'Name', '   ');
+    type(dialog, 'E-mail', 'hannah at example');
+    save(dialog, 'Add customer');
+    expect(await dialog.findByText('Name must not be empty.')).toBeTruthy();
+    expect(dialog.getByText('E-mail must be an e-mail address, like name@example.com.')).toBeTruthy();
+    expect(api.fetch).not.toHaveBeenCalled();
+  });
+
+  it('refuses a name longer than the registry allows (200 characters)', async () => {
+    const dialog = show(<CustomerDialog onClose={vi.fn()} />);
+    type(dialog, 'Name', 'x'.repeat(201));
+    save(dialog, 'Add customer');
+    expect(await dialog.findByText('Name must be at most 200 characters.')).toBeTruthy();
+  });
+
+  it('sends a new customer without the fields left empty, and closes', async () => {
+    const onClose = vi.fn();
+    answer(201, { ...customer, id: 'new', name: 'Ada Fenwick' });
+    const dialog = show(<CustomerDialog onClose={onClose} />);
+    type(dialog, 'Name', '  Ada Fenwick ');
+    type(dialog, 'Phone', '07700 900123');
+    save(dialog, 'Add customer');
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(sent()).toEqual({ url: '/api/customers', method: 'POST', body: { name: 'Ada Fenwick', phone: '07700 900123' } });
+  });
+
+  it("shows the server's refusal plainly and stays open", async () => {
+    const onClose = vi.fn();
+    answer(400, { statusCode: 400, message: ['customer.name must not be empty'], error: 'Bad Request' });
+    const dialog = show(<CustomerDialog customer={customer} onClose={onClose} />);
+    type(dialog, 'Phone', '07700 900412');
+    save(dialog, 'Save changes');
+    expect((await dialog.findByRole('alert')).textContent).toBe('The server did not save this: customer.name must not be empty');
+    expect(onClose).not.toHaveBeenCalled();
+  });
+});
+
+describe('the site form', () => {
+  it('names each bad figure: a negative Ze, a Ze that is not a number, a fault current above 100 kA', async () => {
+    const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={vi.fn()} />);
+    type(dialog, 'Ze', '-1');
+    type(dialog, 'Prospective fault current', '120');
+    save(dialog, 'Save changes');
+    expect(await dialog.findByText('Ze must be at least 0 Ω.')).toBeTruthy();
+    expect(dialog.getByText('Prospective fault current must be at most 100 kA.')).toBeTruthy();
+    type(dialog, 'Ze', 'abc');
+    save(dialog, 'Save changes');
+    expect(await dialog.findByText('Ze must be a number, like 0.35 Ω.')).toBeTruthy();
+    expect(api.fetch).not.toHaveBeenCalled();
+  });
+
+  it('requires the address and the customer of a new site', async () => {
+    const dialog = show(<SiteDialog customers={[customer]} onClose={vi.fn()} />);
+    save(dialog, 'Add site');
+    expect(await dialog.findByText('Address must not be empty.')).toBeTruthy();
+    expect(dialog.getByText('Choose the customer.')).toBeTruthy();
+  });
+
+  it('sends only the changed Ze, read with a decimal comma, as a number', async () => {
+    const onClose = vi.fn();
+    answer(200, { ...site, zeOhm: 0.35 });
+    const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={onClose} />);
+    type(dialog, 'Ze', '0,35');
+    save(dialog, 'Save changes');
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(sent()).toEqual({ url: `/api/sites/${SITE_ID}`, method: 'PATCH', body: { zeOhm: 0.35 } });
+  });
+
+  it('clears a figure left empty by sending null', async () => {
+    answer(200, { ...site, pfcKa: null });
+    const onClose = vi.fn();
+    const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={onClose} />);
+    type(dialog, 'Prospective fault current', '');
+    save(dialog, 'Save changes');
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(sent().body).toEqual({ pfcKa: null });
+  });
+
+  it('closes without asking the server when nothing changed', async () => {
+    const onClose = vi.fn();
+    const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={onClose} />);
+    save(dialog, 'Save changes');
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(api.fetch).not.toHaveBeenCalled();
+  });
+});
+
+describe('the circuit form', () => {
+  it('names a rating that is not a number, an empty way number, a board not chosen and an RCD above 3000 mA', async () => {
+    const dialog = show(<CircuitDialog siteId={SITE_ID} boards={boards} onClose={vi.fn()} />);
+    type(dialog, 'Rating', 'abc');
+    type(dialog, 'RCD rating', '5000');
+    type(dialog, 'Live conductor size', '0.2');
+    save(dialog, 'Add circuit');
+    expect(await dialog.findByText('Rating must be a number, like 32 A.')).toBeTruthy();
+    expect(dialog.getByText('Circuit number must not be empty.')).toBeTruthy();
+    expect(dialog.getByText('Choose the board.')).toBeTruthy();
+    expect(dialog.getByText('RCD rating must be at most 3000 mA.')).toBeTruthy();
+    expect(dialog.getByText('Live conductor size must be at least 0.5 mm².')).toBeTruthy();
+    expect(api.fetch).not.toHaveBeenCalled();
+  });
+
+  it('adds a circuit to the only board with its figures as numbers', async () => {
+    const onClose = vi.fn();
+    answer(201, { ...circuit, id: 'new', number: '5' });
+    const dialog = show(<CircuitDialog siteId={SITE_ID} boards={[boards[0]!]} onClose={onClose} />);
+    type(dialog, 'Circuit number', '5');
+    type(dialog, 'Description', 'Garden office');
+    type(dialog, 'Rating', '20');
+    type(dialog, 'RCD rating', '30');
+    type(dialog, 'Live conductor size', '2.5');
+    type(dialog, 'cpc size', '1.5');
+    save(dialog, 'Add circuit');
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(sent()).toEqual({
+      url: '/api/circuits',
+      method: 'POST',
+      body: { siteId: SITE_ID, boardId: boards[0]!.id, number: '5', description: 'Garden office', deviceRatingA: 20, rcdRatingMa: 30, liveCsaMm2: 2.5, cpcCsaMm2: 1.5 },
+    });
+  });
+
+  it('changes one figure of a recorded circuit', async () => {
+    const onClose = vi.fn();
+    answer(200, { ...circuit, deviceRatingA: 20 });
+    const dialog = show(<CircuitDialog siteId={SITE_ID} circuit={circuit} boards={boards} onClose={onClose} />);
+    type(dialog, 'Rating', '20');
+    save(dialog, 'Save changes');
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(sent()).toEqual({ url: `/api/circuits/${circuit.id}`, method: 'PATCH', body: { deviceRatingA: 20 } });
+  });
+});
+
+describe('the area and board forms', () => {
+  it('need a name', async () => {
+    const area = show(<AreaDialog siteId={SITE_ID} onClose={vi.fn()} />);
+    save(area, 'Add area');
+    expect(await area.findByText('Area name must not be empty.')).toBeTruthy();
+    cleanup();
+    const board = show(<BoardDialog siteId={SITE_ID} areas={areas} onClose={vi.fn()} />);
+    save(board, 'Add board');
+    expect(await board.findByText('Board name must not be empty.')).toBeTruthy();
+    expect(api.fetch).not.toHaveBeenCalled();
+  });
+
+  it('add an area on the site', async () => {
+    const onClose = vi.fn();
+    answer(201, { id: 'new', siteId: SITE_ID, name: 'Loft', level: null });
+    const dialog = show(<AreaDialog siteId={SITE_ID} onClose={onClose} />);
+    type(dialog, 'Area name', 'Loft');
+    save(dialog, 'Add area');
+    await waitFor(() => expect(onClose).toHaveBeenCalled());
+    expect(sent()).toEqual({ url: '/api/areas', method: 'POST', body: { siteId: SITE_ID, name: 'Loft' } });
+  });
+});

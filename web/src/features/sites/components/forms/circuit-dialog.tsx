@@ -1,0 +1,58 @@
+import Stack from '@mui/material/Stack';
+import { CIRCUIT_KINDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import { z } from 'zod';
+import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
+import { RecordDialog } from '@/components/forms/record-dialog';
+import { useRecordForm } from '@/components/forms/use-record-form';
+import { optionalChoice, optionalNumber, optionalText, requiredId, requiredText, startingTexts } from '@/lib/record-schema';
+import type { Board, Circuit } from '../../api/get-circuits';
+import { useSaveCircuit } from '../../api/save-record';
+import { CIRCUIT_KIND_WORDS, DEVICE_WORDS } from '../../circuit-words';
+
+export const circuitSchema = z.object({
+  boardId: requiredId('the board'),
+  number: requiredText('circuit', 'number', 'Circuit number'),
+  description: optionalText('circuit', 'description', 'Description'),
+  kind: optionalChoice('circuit', 'kind', 'Kind of circuit'),
+  deviceType: optionalChoice('circuit', 'deviceType', 'Protective device'),
+  deviceRatingA: optionalNumber('circuit', 'deviceRatingA', 'Rating', { unit: 'A', example: 32 }),
+  rcdRatingMa: optionalNumber('circuit', 'rcdRatingMa', 'RCD rating', { unit: 'mA', example: 30 }),
+  rcdType: optionalText('circuit', 'rcdType', 'RCD type'),
+  liveCsaMm2: optionalNumber('circuit', 'liveCsaMm2', 'Live conductor size', { unit: 'mm²', example: 2.5 }),
+  cpcCsaMm2: optionalNumber('circuit', 'cpcCsaMm2', 'cpc size', { unit: 'mm²', example: 1.5 }),
+});
+
+const KINDS = CIRCUIT_KINDS.map((k) => ({ value: k, label: CIRCUIT_KIND_WORDS[k] }));
+const DEVICES = PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d] }));
+
+/** Adds a circuit to one of the site's boards, or changes one; the checks judge test results against what is recorded here. */
+export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: string; circuit?: Circuit; boards: Board[]; onClose: () => void }) {
+  const save = useSaveCircuit();
+  const { form, submit } = useRecordForm(circuitSchema, { ...startingTexts(circuitSchema, circuit), boardId: circuit?.boardId ?? (boards.length === 1 ? boards[0]!.id : '') }, {
+    isNew: !circuit,
+    onUnchanged: onClose,
+    onChanges: (changes) => save.mutate({ id: circuit?.id, values: circuit ? changes : { siteId, ...changes } }, { onSuccess: onClose }),
+  });
+  return (
+    <RecordDialog open title={circuit ? `Change circuit ${circuit.number}` : 'Add a circuit'} submitLabel={circuit ? 'Save changes' : 'Add circuit'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>
+      <Stack direction="row" spacing={2}>
+        <FormSelectInput form={form} name="boardId" label="Board" options={boards.map((b) => ({ value: b.id, label: b.name }))} />
+        <FormTextInput form={form} name="number" label="Circuit number" hint="The way as marked, such as 4 or L1-3." sx={{ maxWidth: 220 }} />
+      </Stack>
+      <FormTextInput form={form} name="description" label="Description" hint="What it feeds, such as “Sockets, ground floor”." />
+      <FormSelectInput form={form} name="kind" label="Kind of circuit" options={KINDS} emptyLabel="Not recorded" />
+      <Stack direction="row" spacing={2}>
+        <FormSelectInput form={form} name="deviceType" label="Protective device" options={DEVICES} emptyLabel="Not recorded" />
+        <FormTextInput form={form} name="deviceRatingA" label="Rating" hint="A" inputMode="decimal" sx={{ maxWidth: 160 }} />
+      </Stack>
+      <Stack direction="row" spacing={2}>
+        <FormTextInput form={form} name="rcdRatingMa" label="RCD rating" hint="mA; empty if no RCD" inputMode="decimal" />
+        <FormTextInput form={form} name="rcdType" label="RCD type" hint="As marked: A, AC, F, B; S if time-delayed" />
+      </Stack>
+      <Stack direction="row" spacing={2}>
+        <FormTextInput form={form} name="liveCsaMm2" label="Live conductor size" hint="mm²" inputMode="decimal" />
+        <FormTextInput form={form} name="cpcCsaMm2" label="cpc size" hint="mm²" inputMode="decimal" />
+      </Stack>
+    </RecordDialog>
+  );
+}

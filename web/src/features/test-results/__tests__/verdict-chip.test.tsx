@@ -1,0 +1,35 @@
+// @vitest-environment happy-dom
+import { cleanup, fireEvent, render, screen } from '@testing-library/react';
+import { assessCircuitTest, VERDICT_DISCLAIMER } from '@wiretrail/core';
+import { afterEach, describe, expect, it } from 'vitest';
+import { overallResult } from '../overall-result';
+import { VerdictChip } from '../components/verdict-chip';
+
+afterEach(cleanup);
+
+// The demo's ground-floor ring, a 32 A type B with a 30 mA RCD. Zs 1.25 Ω is above 0.8 × 1.37 = 1.10 Ω
+// (BS 7671:2018+A2:2022 Table 41.3, B32; Appendix 3, 80 % rule for readings taken cold).
+const ring = assessCircuitTest({
+  circuit: { kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 },
+  readings: { zsOhm: 1.25 },
+});
+
+describe('a verdict chip', () => {
+  it('opens to the reading, the limit, its source and the disclaimer', () => {
+    const zs = ring.lines.find((l) => l.key === 'zs')!;
+    render(<VerdictChip title="Circuit 1: Zs" result={zs.result} />);
+    fireEvent.click(screen.getByRole('button', { name: 'Circuit 1: Zs: Fail. Show the limit and its source' }));
+    const dialog = screen.getByRole('dialog', { name: 'Circuit 1: Zs: Fail' });
+    expect(dialog.textContent).toContain('Measured1.25 Ω');
+    expect(dialog.textContent).toContain('Limit1.1 Ω');
+    expect(dialog.textContent).toMatch(/SourceBS 7671:2018\+A2:2022 Table 41\.3/);
+    expect(dialog.textContent).toContain(VERDICT_DISCLAIMER);
+  });
+
+  it('sums up a circuit: what fails and what is still to record', () => {
+    const overall = overallResult(ring);
+    expect(overall.verdict).toBe('fail');
+    expect(overall.note).toMatch(/^Failing: Earth fault loop impedance Zs\. Still to record: /);
+    expect(overall.note).toContain('Insulation resistance, live to earth');
+  });
+});
