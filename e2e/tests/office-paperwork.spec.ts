@@ -1,0 +1,115 @@
+import { v7 as uuidv7 } from 'uuid';
+import { apiSession, DESK, expect, PHONE, test } from '../fixtures.js';
+
+test.use({ viewport: DESK });
+
+/** The mail fake that the test server starts beside the API (scripts/e2e-server.mjs): its web inbox. */
+const MAIL_INBOX = `http://127.0.0.1:${Number(process.env.E2E_PORT ?? 3100) + 1001}/messages`;
+
+interface CaughtMail {
+  to: string[];
+  subject: string;
+  text: string;
+  attachments: { filename: string; contentType: string; size: number }[];
+}
+
+test('the office reviews a finished job, settles a conflict, issues the certificate, e-mails it, and the customer opens the link', async ({
+  page,
+  request,
+  browser,
+  signInPage,
+}) => {
+  test.setTimeout(150_000);
+  const stamp = Date.now().toString(36);
+  const shot = (name: string) => page.screenshot({ path: test.info().outputPath(`${name}.png`), fullPage: true });
+
+  // Aled's tablet, offline since the visit, edits a reading after the visit was signed: it waits for the office.
+  const aled = await apiSession(request, 'tech2@larkfield.example');
+  const pulled = (await (await request.get(`/api/sync/pull?checkpoint=0&limit=1000&deviceId=paperwork-${stamp}`, { headers: { authorization: `Bearer ${aled.accessToken}` } })).json()) as {
+    changes: { entity: string; row: Record<string, unknown> }[];
+  };
+  const signed = pulled.changes.find((c) => c.entity === 'visit' && c.row.status === 'finished' && c.row.signedByName)!.row;
+  const reading = pulled.changes.find((c) => c.entity === 'testResult' && c.row.visitId === signed.id)!.row;
+  const pushed = await request.post('/api/sync/push', {
+    headers: { authorization: `Bearer ${aled.accessToken}` },
+    data: {
+      deviceId: `tablet${stamp}`,
+      mutations: [{ mutationId: uuidv7(), entity: 'testResult', id: reading.id, baseVersion: reading.version, set: { instrument: `Borrowed tester (${stamp})` }, hlc: `${new Date().toISOString()}-0000-tablet${stamp}` }],
+    },
+  });
+  expect((await pushed.json()).results[0]).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)] });
+
+  await signInPage.goto();
+  await signInPage.signIn('office@larkfield.example');
+
+  // The job the technician finished waits in the paperwork column.
+  const card = page.getByRole('region', { name: 'Paperwork' }).getByRole('article', { name: /LED-0033/ });
+  await expect(card).toBeVisible();
+  await card.getByRole('link', { name: /Extra double socket in the front bedroom/ }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeVisible();
+  await shot('job-overview');
+
+  // Its photo trail and the site's cable schedule.
+  await page.getByRole('tab', { name: 'Photo trail' }).click();
+  const trail = page.getByRole('region', { name: 'Photo trail' });
+  await expect(trail.getByRole('img', { name: /Route chased down/ })).toBeVisible();
+  await shot('job-photo-trail');
+  await page.getByRole('tab', { name: 'Cable schedule' }).click();
+  const schedule = page.getByRole('grid', { name: 'Cable schedule' });
+  await expect(schedule.getByRole('row', { name: /OR-01/ })).toBeVisible();
+  await shot('job-cable-schedule');
+
+  // The reading changed after signing is a conflict on this job: the signed value stays.
+  await page.getByRole('link', { name: /^Settle/ }).click();
+  const conflict = page.getByRole('article').filter({ hasText: `Borrowed tester (${stamp})` });
+  await expect(conflict).toContainText(/after the visit was finished and signed|after a certificate or report was issued/);
+  await shot('job-conflict');
+  await conflict.getByRole('button', { name: 'Keep as it is' }).click();
+  await expect(conflict).toHaveCount(0);
+  await page.goBack();
+
+  // Issue the certificate: the server judges the readings again and numbers it.
+  await expect(page.getByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeVisible();
+  await page.getByRole('tab', { name: 'Documents & links' }).click();
+  await page.getByRole('button', { name: 'Issue minor works certificate' }).click();
+  await page.getByRole('dialog', { name: 'Issue the minor works certificate?' }).getByRole('button', { name: 'Issue' }).click();
+  const issued = page.getByRole('table', { name: 'Issued documents' });
+  const row = issued.getByRole('row').filter({ hasText: 'Minor works certificate' }).first();
+  await expect(row).toBeVisible({ timeout: 20_000 });
+  const number = (await row.getByRole('cell').first().innerText()).trim();
+  expect(number).toMatch(/^MW-\d{4}$/);
+  await shot('job-documents');
+
+  // E-mail it to the customer: the mail carries the PDF and a link to the job's record.
+  await issued.getByRole('button', { name: `E-mail ${number} to the customer` }).click();
+  const send = page.getByRole('dialog', { name: /E-mail/ });
+  await expect(send.getByLabel('To')).toHaveValue('hannah.greaves@example.com');
+  await send.getByRole('button', { name: 'Send' }).click();
+  await expect(issued.getByRole('row', { name: new RegExp(number) })).toContainText('Sent', { timeout: 30_000 });
+  await shot('job-documents-sent');
+  let mail: CaughtMail | undefined;
+  await expect
+    .poll(async () => {
+      const inbox = (await (await request.get(MAIL_INBOX)).json()) as CaughtMail[];
+      mail = inbox.find((m) => m.subject.includes(number));
+      return mail?.to;
+    })
+    .toEqual(['hannah.greaves@example.com']);
+  expect(mail!.attachments).toEqual([expect.objectContaining({ filename: `${number}.pdf`, contentType: 'application/pdf' })]);
+  expect(mail!.attachments[0]!.size).toBeGreaterThan(10_000);
+  const link = /https?:\/\/\S+\/shared\/\S+/.exec(mail!.text)?.[0];
+  expect(link).toBeTruthy();
+
+  // The customer opens the link on their phone, with no account.
+  const customer = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block' });
+  try {
+    const phone = await customer.newPage();
+    await phone.goto(new URL(link!).pathname);
+    await expect(phone.getByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeVisible();
+    await expect(phone.getByRole('link', { name: `Download ${number} (PDF)` })).toBeVisible();
+    await expect(phone.getByRole('list', { name: 'Photos' }).getByRole('img').first()).toBeVisible();
+    await phone.screenshot({ path: test.info().outputPath('customer-link.png'), fullPage: true });
+  } finally {
+    await customer.close();
+  }
+});
