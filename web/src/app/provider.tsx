@@ -3,20 +3,16 @@ import '@fontsource/roboto/latin-500.css';
 import '@fontsource/roboto/latin-700.css';
 import CssBaseline from '@mui/material/CssBaseline';
 import { ThemeProvider } from '@mui/material/styles';
-import { QueryClientProvider } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { UpdatePrompt } from '@/components/update-prompt';
-import { queryClient } from '@/lib/react-query';
 import { theme } from './theme';
 
 export function AppProvider({ children }: { children: ReactNode }) {
   return (
     <ThemeProvider theme={theme} defaultMode="system">
       <CssBaseline enableColorScheme />
-      <QueryClientProvider client={queryClient}>
-        {children}
-        <UpdatePrompt />
-      </QueryClientProvider>
+      {children}
+      <UpdatePrompt />
     </ThemeProvider>
   );
 }

@@ -1,30 +1,34 @@
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { RouteError } from '@/components/errors/route-error';
-import { OfficeLayout } from '@/components/layouts/office-layout';
 import { HomeRedirect, RequireRole, RequireSession } from '@/components/layouts/session-gate';
 import { paths } from '@/config/paths';
 
+/** Screens that read the API as well as the phone get TanStack Query's cache; Today reads only the phone. */
+const withServerState = (children: RouteObject[]): RouteObject => ({ lazy: () => import('@/components/query-scope'), children });
+
 export const technicianScreens: RouteObject[] = [
   { path: paths.today.path, lazy: () => import('./routes/technician/today') },
-  {
-    path: paths.visit.path,
-    lazy: () => import('./routes/technician/visit'),
-    // Each section loads on its own, so the camera is ready before the wiremap or the signature pad arrive.
-    children: [
-      { index: true, lazy: () => import('./routes/technician/visit/trail') },
-      { path: paths.visitCables.path, lazy: () => import('./routes/technician/visit/cables') },
-      { path: paths.visitCable.path, lazy: () => import('./routes/technician/visit/cable') },
-      { path: paths.visitPoints.path, lazy: () => import('./routes/technician/visit/points') },
-      { path: paths.visitPoint.path, lazy: () => import('./routes/technician/visit/point') },
-      { path: paths.visitTests.path, lazy: () => import('./routes/technician/visit/tests') },
-      { path: paths.visitCircuitTest.path, lazy: () => import('./routes/technician/visit/circuit-test') },
-      { path: paths.visitSignOff.path, lazy: () => import('./routes/technician/visit/sign-off') },
-    ],
-  },
-  { path: paths.cableLabels.path, lazy: () => import('./routes/technician/cable-labels') },
-  { path: paths.cableOnSite.path, lazy: () => import('./routes/technician/cable') },
-  { path: paths.sync.path, lazy: () => import('./routes/technician/sync') },
-  { path: paths.me.path, lazy: () => import('./routes/technician/me') },
+  withServerState([
+    {
+      path: paths.visit.path,
+      lazy: () => import('./routes/technician/visit'),
+      // Each section loads on its own, so the camera is ready before the wiremap or the signature pad arrive.
+      children: [
+        { index: true, lazy: () => import('./routes/technician/visit/trail') },
+        { path: paths.visitCables.path, lazy: () => import('./routes/technician/visit/cables') },
+        { path: paths.visitCable.path, lazy: () => import('./routes/technician/visit/cable') },
+        { path: paths.visitPoints.path, lazy: () => import('./routes/technician/visit/points') },
+        { path: paths.visitPoint.path, lazy: () => import('./routes/technician/visit/point') },
+        { path: paths.visitTests.path, lazy: () => import('./routes/technician/visit/tests') },
+        { path: paths.visitCircuitTest.path, lazy: () => import('./routes/technician/visit/circuit-test') },
+        { path: paths.visitSignOff.path, lazy: () => import('./routes/technician/visit/sign-off') },
+      ],
+    },
+    { path: paths.cableLabels.path, lazy: () => import('./routes/technician/cable-labels') },
+    { path: paths.cableOnSite.path, lazy: () => import('./routes/technician/cable') },
+    { path: paths.sync.path, lazy: () => import('./routes/technician/sync') },
+    { path: paths.me.path, lazy: () => import('./routes/technician/me') },
+  ]),
 ];
 
 const officeScreens: RouteObject[] = [
@@ -49,9 +53,11 @@ export const routes: RouteObject[] = [
     HydrateFallback: () => null,
     errorElement: <RouteError />,
     children: [
-      { path: paths.signIn.path, lazy: () => import('./routes/sign-in') },
-      { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password') },
-      { path: paths.shared.path, lazy: () => import('./routes/shared') },
+      withServerState([
+        { path: paths.signIn.path, lazy: () => import('./routes/sign-in') },
+        { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password') },
+        { path: paths.shared.path, lazy: () => import('./routes/shared') },
+      ]),
       {
         element: <RequireSession />,
         children: [
@@ -65,7 +71,8 @@ export const routes: RouteObject[] = [
           },
           {
             element: <RequireRole roles={['office', 'admin']} />,
-            children: [{ element: <OfficeLayout />, children: officeScreens }],
+            // The office's shell loads on demand too, so a phone never downloads the desk's navigation.
+            children: [withServerState([{ lazy: () => import('@/components/layouts/office-layout'), children: officeScreens }])],
           },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],

@@ -1,6 +1,8 @@
-import Button from '@mui/material/Button';
-import Snackbar from '@mui/material/Snackbar';
+import { lazy, Suspense } from 'react';
 import { useRegisterSW } from 'virtual:pwa-register/react';
+
+// The message itself loads only when there is a new version to offer.
+const UpdateMessage = lazy(() => import('./update-message'));
 
 /**
  * A new version waits until the user says so: swapping it in unasked could lose a half-filled form
@@ -16,21 +18,10 @@ export function UpdatePrompt() {
       if (registration) setInterval(() => void registration.update().catch(() => undefined), 60 * 60 * 1000);
     },
   });
+  if (!needRefresh) return null;
   return (
-    <Snackbar
-      open={needRefresh}
-      message="A new version of Wiretrail is ready."
-      anchorOrigin={{ vertical: 'top', horizontal: 'center' }}
-      action={
-        <>
-          <Button color="inherit" onClick={() => setNeedRefresh(false)}>
-            Later
-          </Button>
-          <Button color="secondary" variant="contained" onClick={() => void updateServiceWorker(true)}>
-            Use it now
-          </Button>
-        </>
-      }
-    />
+    <Suspense fallback={null}>
+      <UpdateMessage onLater={() => setNeedRefresh(false)} onUpdate={() => void updateServiceWorker(true)} />
+    </Suspense>
   );
 }

@@ -1,6 +1,6 @@
-import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
 import { isRouteErrorResponse, useRouteError } from 'react-router-dom';
 
 /** Shown when a screen fails to load or crashes; a failed chunk load usually means a newer version is out. */
@@ -14,7 +14,10 @@ export function RouteError() {
       : 'Something went wrong on this screen.';
   return (
     <Stack spacing={2} sx={{ p: 3, maxWidth: 560, mx: 'auto' }}>
-      <Alert severity="error">{message}</Alert>
+      {/* Plain text, not an Alert: this screen is in the first download, and must show even when nothing else loads. */}
+      <Typography role="alert" color="error" sx={{ border: 1, borderColor: 'error.main', borderRadius: 1, p: 2 }}>
+        {message}
+      </Typography>
       <Button variant="contained" onClick={() => window.location.reload()}>
         Reload
       </Button>

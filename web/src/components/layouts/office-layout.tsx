@@ -72,3 +72,5 @@ export function OfficeLayout() {
     </Box>
   );
 }
+
+export { OfficeLayout as Component };

@@ -2,7 +2,7 @@ import type { PullResponse, PushResponse } from '@wiretrail/core';
 import { env } from '@/config/env';
 import { api, apiRequest, refreshSession } from '@/lib/api-client';
 import { db } from '@/lib/db';
-import { PhotoUploader } from '@/lib/photos/photo-uploader';
+import type { PhotoUploader } from '@/lib/photos/photo-uploader';
 import { resetUploadProgress } from '@/lib/photos/upload-progress';
 import { getSession } from '@/lib/session';
 import { subscribeLocalWrites } from './local-write';
@@ -54,16 +54,27 @@ export function syncNow(): Promise<SyncOutcome> {
  */
 export function startSync(userId: string): () => void {
   engine?.stop();
-  const uploader = new PhotoUploader({
-    db,
-    userId,
-    missing: async (hashes) => (await api.post<{ missing: string[] }>('/blobs/missing', { hashes })).missing,
-    endpoint: new URL(`${env.apiBase}/uploads`, window.location.origin).href,
-    accessToken: () => getSession()?.accessToken,
-    refresh: async () => !!(await refreshSession()),
-  });
+  // The uploader (and tus with it) loads only once there is a photo to send, keeping the first screen small.
+  let uploader: PhotoUploader | null = null;
+  let stopped = false;
+  const sendPhotos = async (): Promise<boolean> => {
+    if (!uploader && (await db.photoBlobs.where('state').equals('waiting').count()) === 0) return false;
+    if (!uploader) {
+      const { PhotoUploader: Uploader } = await import('@/lib/photos/photo-uploader');
+      if (stopped) return false;
+      uploader = new Uploader({
+        db,
+        userId,
+        missing: async (hashes) => (await api.post<{ missing: string[] }>('/blobs/missing', { hashes })).missing,
+        endpoint: new URL(`${env.apiBase}/uploads`, window.location.origin).href,
+        accessToken: () => getSession()?.accessToken,
+        refresh: async () => !!(await refreshSession()),
+      });
+    }
+    return (await uploader.run()).more;
+  };
   // Photo bytes first, then the rows that point at them, then what others changed.
-  const current = new SyncEngine({ db, transport: httpTransport, userId, lock: acrossTabs, beforePush: async () => (await uploader.run()).more });
+  const current = new SyncEngine({ db, transport: httpTransport, userId, lock: acrossTabs, beforePush: sendPhotos });
   engine = current;
   let debounce: ReturnType<typeof setTimeout> | null = null;
 
@@ -88,7 +99,8 @@ export function startSync(userId: string): () => void {
 
   return () => {
     current.stop();
-    uploader.stop();
+    stopped = true;
+    uploader?.stop();
     resetUploadProgress();
     if (engine === current) engine = null;
     if (debounce) clearTimeout(debounce);
