@@ -9,6 +9,7 @@ import {
   isUuid,
   type Mutation,
   type MutationResult,
+  type RefTarget,
   SYNC_ENTITIES,
   type SyncEntityName,
 } from '@wiretrail/core';
@@ -17,7 +18,8 @@ import { v7 as uuidv7 } from 'uuid';
 import type { Role } from '../users/entities/user.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { AppliedMutation, SyncChange, SyncCounter } from './entities/sync-bookkeeping.entity.js';
-import type { FieldMeta, SyncRecord } from './entities/sync-schemas.js';
+import { type FieldMeta, SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
+import { insertMany, selectMany } from './bulk-write.js';
 import { decideField, sameDevice, sameValue } from './merge.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
 
@@ -62,12 +64,23 @@ export class SyncEngine {
     // One look-up for the whole batch's replays, one counter read and write, and remembered reference checks:
     // per-mutation round trips dominate the cost of a push.
     const ids = mutations.map((m) => m?.mutationId).filter((id): id is string => typeof id === 'string');
-    const applied = ids.length ? await em.find(AppliedMutation, { where: { mutationId: In(ids) } }) : [];
-    const batch: Batch = { applied: new Map(applied.map((a) => [a.mutationId, a])), known: new Set(), seq: null };
+    const applied = await selectMany(em, AppliedMutation, 'mutationId', ids);
+    const batch: Batch = {
+      applied: new Map(applied.map((a) => [a.mutationId, a])),
+      known: new Set(),
+      seq: null,
+      rows: new Map(),
+      inserts: new Map(),
+      pending: new Set(),
+      changes: new Map(),
+      appliedRows: [],
+    };
     this.batches.set(em, batch);
     try {
+      await this.preload(em, actor, batch, mutations);
       const results: MutationResult[] = [];
       for (const m of mutations) results.push(await this.applyOnce(em, actor, scope, m));
+      await this.flush(em, batch);
       if (batch.seq) await em.update(SyncCounter, { name: 'global' }, { value: batch.seq.value });
       return results;
     } finally {
@@ -76,6 +89,75 @@ export class SyncEngine {
   }
 
   private readonly batches = new WeakMap<EntityManager, Batch>();
+
+  /**
+   * Reads, in one query per entity, every row the batch names and every row its references point at, so that
+   * applying a mutation touches no table that the batch already knows.
+   */
+  private async preload(em: EntityManager, actor: Actor, batch: Batch, mutations: Mutation[]): Promise<void> {
+    const rowIds = new Map<SyncEntityName, Set<string>>();
+    const refIds = new Map<RefTarget, Set<string>>();
+    const add = <K>(map: Map<K, Set<string>>, key: K, id: unknown) => {
+      if (!isUuid(id)) return;
+      if (!map.has(key)) map.set(key, new Set());
+      map.get(key)!.add(id);
+    };
+    for (const m of mutations) {
+      if (!m || !isSyncEntity(m.entity) || SYNC_ENTITIES[m.entity].serverOnly) continue;
+      add(rowIds, m.entity, m.id);
+      const fields = SYNC_ENTITIES[m.entity].fields;
+      for (const [field, value] of Object.entries(m.set && typeof m.set === 'object' ? m.set : {})) {
+        const type = Object.hasOwn(fields, field) ? fields[field]!.type : undefined;
+        if (type?.kind === 'ref') add(refIds, type.entity, value);
+        if (type?.kind === 'refs' && Array.isArray(value)) for (const id of value) add(refIds, type.entity, id);
+      }
+    }
+    for (const [entity, ids] of rowIds) {
+      const found = await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', [...ids]);
+      for (const id of ids) batch.rows.set(`${entity}:${id}`, null);
+      for (const row of found) batch.rows.set(`${entity}:${row.id}`, row);
+    }
+    for (const [entity, ids] of refIds) {
+      const list = [...ids];
+      const found =
+        entity === 'user'
+          ? await selectMany(em, User, 'id', list, { organisationId: actor.organisationId })
+          : await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', list, { organisationId: actor.organisationId, deletedAt: null });
+      for (const row of found) batch.known.add(`${entity}:${row.id}`);
+    }
+  }
+
+  /** A row as the batch has it (read at its start, or written since), else as the database has it. */
+  private async rowOf(em: EntityManager, entity: SyncEntityName, id: string): Promise<SyncRecord | null> {
+    const batch = this.batches.get(em);
+    const key = `${entity}:${id}`;
+    if (batch?.rows.has(key)) return batch.rows.get(key)!;
+    const row = await em.getRepository<SyncRecord>(entity).findOne({ where: { id }, withDeleted: true });
+    batch?.rows.set(key, row);
+    return row;
+  }
+
+  /** Writes a row's changes: to the row itself while it waits to be inserted, else to the database at once. */
+  private async write(em: EntityManager, entity: SyncEntityName, row: SyncRecord, changes: Record<string, unknown>): Promise<void> {
+    const batch = this.batches.get(em);
+    if (!batch?.pending.has(`${entity}:${row.id}`)) await em.getRepository<SyncRecord>(entity).update({ id: row.id }, changes as never);
+    Object.assign(row, changes);
+  }
+
+  /** Inserts what the batch has kept back: new rows in the order they were made, then applied mutations and the change log. */
+  private async flush(em: EntityManager, batch: Batch): Promise<void> {
+    for (const [entity, rows] of batch.inserts) {
+      for (let i = 0; i < rows.length; i += INSERT_CHUNK) await insertMany(em, entity, rows.slice(i, i + INSERT_CHUNK));
+    }
+    batch.inserts.clear();
+    batch.pending.clear();
+    for (let i = 0; i < batch.appliedRows.length; i += INSERT_CHUNK) await insertMany(em, AppliedMutation, batch.appliedRows.slice(i, i + INSERT_CHUNK));
+    batch.appliedRows = [];
+    const changes = [...batch.changes.values()];
+    for (let i = 0; i < changes.length; i += INSERT_CHUNK) await insertMany(em, SyncChange, changes.slice(i, i + INSERT_CHUNK), { columns: ['entity', 'rowId'] });
+    batch.changes.clear();
+  }
+
 
   private async applyOnce(em: EntityManager, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
     const mutationId = typeof m?.mutationId === 'string' ? m.mutationId : '';
@@ -94,7 +176,8 @@ export class SyncEngine {
     }
     if (mutationId) {
       const record = { mutationId, organisationId: actor.organisationId, userId: actor.userId, deviceId: actor.deviceId, result: result as never };
-      await em.insert(AppliedMutation, record);
+      if (batch) batch.appliedRows.push(record);
+      else await em.insert(AppliedMutation, record);
       // The same id twice in one batch is a replay too.
       batch?.applied.set(mutationId, record as unknown as AppliedMutation);
     }
@@ -122,8 +205,7 @@ export class SyncEngine {
       if (problem) throw new MutationRefused(problem);
     }
 
-    const repo = em.getRepository<SyncRecord>(m.entity);
-    const existing = await repo.findOne({ where: { id: m.id }, withDeleted: true });
+    const existing = await this.rowOf(em, m.entity, m.id);
     if (existing && existing.organisationId !== actor.organisationId) throw new MutationRefused(`No ${m.entity} with that id.`);
 
     this.checkTechnician(actor, scope, spec, m, existing, set, isDelete);
@@ -145,10 +227,17 @@ export class SyncEngine {
     const seq = await this.nextSeq(em);
     const fieldMeta: Record<string, FieldMeta> = {};
     for (const field of Object.keys(set)) fieldMeta[field] = { v: seq, hlc: m.hlc, by: actor.userId, role: actor.role };
-    const row = { id: m.id, organisationId: actor.organisationId, version: seq, fieldMeta, deletedAt: null, createdById: actor.userId, updatedById: actor.userId, ...set };
-    await em.getRepository<SyncRecord>(m.entity).insert(row as never);
-    await this.recordChange(em, m.entity, row as unknown as SyncRecord, seq);
-    await this.createHooks.get(m.entity)?.(em, actor, row as unknown as SyncRecord);
+    const row = { id: m.id, organisationId: actor.organisationId, version: seq, fieldMeta, deletedAt: null, createdById: actor.userId, updatedById: actor.userId, ...set } as SyncRecord;
+    await this.insertRow(em, m.entity, row);
+    await this.recordChange(em, m.entity, row, seq);
+    const hook = this.createHooks.get(m.entity);
+    if (hook) {
+      // A feature's hook reads and writes the database: give it the row, and everything before it, written.
+      const batch = this.batches.get(em);
+      if (batch) await this.flush(em, batch);
+      await hook(em, actor, row);
+      batch?.rows.delete(`${m.entity}:${row.id}`);
+    }
     return { mutationId: m.mutationId, status: 'applied', version: seq, fieldVersions: versionsOf(fieldMeta) };
   }
 
@@ -178,8 +267,9 @@ export class SyncEngine {
     const fieldMeta = { ...row.fieldMeta };
     for (const field of Object.keys(changes)) fieldMeta[field] = { v: seq, hlc: m.hlc, by: actor.userId, role: actor.role };
     const next = { ...changes, fieldMeta, version: seq, updatedById: actor.userId, ...(revived ? { deletedAt: null } : {}) };
-    await em.getRepository<SyncRecord>(m.entity).update({ id: row.id }, next as never);
-    await this.recordChange(em, m.entity, { ...row, ...next } as SyncRecord, seq);
+    await this.write(em, m.entity, row, next);
+    if (revived) this.batches.get(em)?.known.add(`${m.entity}:${row.id}`);
+    await this.recordChange(em, m.entity, row, seq);
     return {
       mutationId: m.mutationId,
       status: lost.some((l) => !l.keptIncoming) ? 'merged' : 'applied',
@@ -198,12 +288,12 @@ export class SyncEngine {
       const id = await this.writeConflict(em, actor, m.entity, row.id, '*', 'edit-beats-delete', m.baseVersion,
         { value: 'kept', by: editedSince[0]![1].by, hlc: editedSince[0]![1].hlc, deviceId: null },
         { value: 'deleted', by: actor.userId, hlc: m.hlc, deviceId: actor.deviceId });
-      await em.getRepository<SyncRecord>(m.entity).update({ id: row.id }, { version: seq } as never);
+      await this.write(em, m.entity, row, { version: seq });
       await this.recordChange(em, m.entity, row, seq);
       return { mutationId: m.mutationId, status: 'merged', version: seq, fieldVersions: versionsOf(row.fieldMeta), conflictIds: [id] };
     }
     const seq = await this.nextSeq(em);
-    await em.getRepository<SyncRecord>(m.entity).update({ id: row.id }, { deletedAt: new Date(), version: seq, updatedById: actor.userId } as never);
+    await this.write(em, m.entity, row, { deletedAt: new Date(), version: seq, updatedById: actor.userId });
     this.batches.get(em)?.known.delete(`${m.entity}:${row.id}`);
     await this.recordChange(em, m.entity, row, seq, true);
     return { mutationId: m.mutationId, status: 'applied', version: seq, fieldVersions: versionsOf(row.fieldMeta) };
@@ -234,7 +324,7 @@ export class SyncEngine {
       discardedValue: discarded.value ?? null, discardedById: discarded.by, discardedHlc: discarded.hlc, discardedDeviceId: discarded.deviceId,
       resolvedAt: null, resolvedById: null, resolution: null,
     };
-    await em.getRepository<SyncRecord>('conflict').insert(row as never);
+    await this.insertRow(em, 'conflict', row as unknown as SyncRecord);
     await this.recordChange(em, 'conflict', row as unknown as SyncRecord, seq);
     return id;
   }
@@ -302,10 +392,13 @@ export class SyncEngine {
     if (!spec.visitField) return null;
     const visitId = (spec.visitField === 'id' ? row.id : row.visitId) as string | null;
     if (!visitId) return null;
-    const visit = spec.visitField === 'id' ? row : await em.getRepository<SyncRecord>('visit').findOne({ where: { id: visitId }, withDeleted: true });
+    const visit = spec.visitField === 'id' ? row : await this.rowOf(em, 'visit', visitId);
     if (!visit?.jobId) return null;
-    const issued = await em.getRepository<SyncRecord>('document').countBy({ jobId: visit.jobId as string, issuedAt: Not(IsNull()), deletedAt: IsNull() });
-    if (issued > 0) return 'locked-by-document';
+    const waiting = this.batches.get(em)?.inserts.get('document') ?? [];
+    const issued =
+      waiting.some((d) => d.jobId === visit.jobId && d.issuedAt != null && d.deletedAt == null) ||
+      (await em.getRepository<SyncRecord>('document').countBy({ jobId: visit.jobId as string, issuedAt: Not(IsNull()), deletedAt: IsNull() })) > 0;
+    if (issued) return 'locked-by-document';
     if (actor.role === 'technician' && visit.status === FINISHED_VISIT_STATUS) return 'locked-by-sign-off';
     return null;
   }
@@ -316,6 +409,7 @@ export class SyncEngine {
     const next = { ...changes, version: seq, updatedById: actor.userId };
     await em.getRepository<SyncRecord>(entity).update({ id: row.id }, next as never);
     await this.recordChange(em, entity, { ...row, ...next } as SyncRecord, seq);
+    this.batches.get(em)?.rows.delete(`${entity}:${row.id}`);
     return seq;
   }
 
@@ -337,7 +431,29 @@ export class SyncEngine {
   private async recordChange(em: EntityManager, entity: SyncEntityName, row: SyncRecord, seq: number, deleted = false): Promise<void> {
     const spec = SYNC_ENTITIES[entity];
     const siteId = spec.siteField === 'id' ? row.id : spec.siteField === 'siteId' ? ((row.siteId as string) ?? null) : null;
-    await em.upsert(SyncChange, { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted }, ['entity', 'rowId']);
+    const change = { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted };
+    const batch = this.batches.get(em);
+    // The change log keeps one entry per row, its latest; in a batch only the last one is written.
+    if (batch) batch.changes.set(`${entity}:${row.id}`, change);
+    else await em.upsert(SyncChange, change, ['entity', 'rowId']);
+  }
+
+  /** A new row: kept back in a batch (and visible to the rest of it), inserted at once outside one. */
+  private async insertRow(em: EntityManager, entity: SyncEntityName, row: SyncRecord): Promise<void> {
+    const batch = this.batches.get(em);
+    if (!batch) {
+      await em.getRepository<SyncRecord>(entity).insert(row as never);
+      return;
+    }
+    // Every row of one multi-row insert names the same columns, and gets its times here rather than from column defaults.
+    const now = new Date();
+    const full = { ...Object.fromEntries(Object.keys(SYNC_SCHEMAS[entity].options.columns).map((c) => [c, null])), ...row, createdAt: row.createdAt ?? now, updatedAt: row.updatedAt ?? now } as SyncRecord;
+    Object.assign(row, full);
+    if (!batch.inserts.has(entity)) batch.inserts.set(entity, []);
+    batch.inserts.get(entity)!.push(row);
+    batch.pending.add(`${entity}:${row.id}`);
+    batch.rows.set(`${entity}:${row.id}`, row);
+    batch.known.add(`${entity}:${row.id}`);
   }
 }
 
@@ -346,11 +462,23 @@ type LockReason = 'locked-by-document' | 'locked-by-sign-off';
 /** An issued document's own fields that still change: how its e-mail is getting on. */
 const DOCUMENT_FIELDS_AFTER_ISSUE = new Set(['emailState', 'emailedTo', 'emailedAt', 'emailError']);
 
+/** Rows per multi-row insert: well inside SQLite's and PostgreSQL's limits on bound parameters. */
+const INSERT_CHUNK = 100;
+
 interface Batch {
   applied: Map<string, AppliedMutation>;
   /** Referenced rows already found to exist in this batch. */
   known: Set<string>;
   seq: { value: number } | null;
+  /** Rows read or written by this batch, by `entity:id`; null when read and not there. */
+  rows: Map<string, SyncRecord | null>;
+  /** New rows not yet inserted, per entity, in the order they were made. */
+  inserts: Map<SyncEntityName, SyncRecord[]>;
+  /** `entity:id` of the rows in `inserts`. */
+  pending: Set<string>;
+  /** The change log's entry per `entity:rowId`, the latest. */
+  changes: Map<string, { entity: SyncEntityName; rowId: string; organisationId: string; seq: number; siteId: string | null; deleted: boolean }>;
+  appliedRows: Array<Pick<AppliedMutation, 'mutationId' | 'organisationId' | 'userId' | 'deviceId' | 'result'>>;
 }
 
 export function versionsOf(meta: Record<string, FieldMeta>): Record<string, number> {

@@ -1,0 +1,69 @@
+import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
+
+/**
+ * Many rows in one statement, with the values converted by the database driver exactly as TypeORM would convert
+ * them (JSON, dates, booleans), but without TypeORM's per-parameter query building, which costs more than the
+ * write itself for a batch of a hundred rows. Works on SQLite and PostgreSQL alike.
+ */
+export async function insertMany<T extends ObjectLiteral>(
+  em: EntityManager,
+  target: EntityTarget<T>,
+  rows: Record<string, unknown>[],
+  onConflict?: { columns: string[] },
+): Promise<void> {
+  if (!rows.length) return;
+  const meta = em.connection.getMetadata(target);
+  const driver = em.connection.driver;
+  const numbered = driver.options.type === 'postgres';
+  // A column no row gives a value for is left to its default; the others are written for every row.
+  const columns = meta.columns.filter((c) => c.isInsert && rows.some((r) => c.getEntityValue(r) !== undefined));
+  const params: unknown[] = [];
+  const tuples = rows.map((row) => {
+    const marks = columns.map((c) => {
+      let value = c.getEntityValue(row);
+      if (value === undefined) value = c.isCreateDate || c.isUpdateDate ? new Date() : null;
+      params.push(driver.preparePersistentValue(value, c));
+      return numbered ? `$${params.length}` : '?';
+    });
+    return `(${marks.join(', ')})`;
+  });
+  const names = columns.map((c) => driver.escape(c.databaseName));
+  let sql = `INSERT INTO ${driver.escape(meta.tableName)} (${names.join(', ')}) VALUES ${tuples.join(', ')}`;
+  if (onConflict) {
+    const keys = new Set(onConflict.columns);
+    const updates = columns.filter((c) => !keys.has(c.propertyName)).map((c) => `${driver.escape(c.databaseName)} = excluded.${driver.escape(c.databaseName)}`);
+    sql += ` ON CONFLICT (${onConflict.columns.map((k) => driver.escape(meta.findColumnWithPropertyName(k)!.databaseName)).join(', ')}) DO UPDATE SET ${updates.join(', ')}`;
+  }
+  await em.query(sql, params);
+}
+
+/**
+ * Rows whose `column` is one of `values`, read with one plain statement and hydrated by the driver as TypeORM
+ * would (JSON parsed, dates made Dates): the batch's look-ups, without the query builder's cost.
+ */
+export async function selectMany<T extends ObjectLiteral>(
+  em: EntityManager,
+  target: EntityTarget<T>,
+  column: string,
+  values: readonly unknown[],
+  where: Record<string, unknown> = {},
+): Promise<T[]> {
+  if (!values.length) return [];
+  const meta = em.connection.getMetadata(target);
+  const driver = em.connection.driver;
+  const numbered = driver.options.type === 'postgres';
+  const params: unknown[] = [];
+  const mark = (v: unknown) => {
+    params.push(v);
+    return numbered ? `$${params.length}` : '?';
+  };
+  const col = (name: string) => driver.escape(meta.findColumnWithPropertyName(name)!.databaseName);
+  const conditions = [`${col(column)} IN (${values.map(mark).join(', ')})`];
+  for (const [name, value] of Object.entries(where)) conditions.push(value === null ? `${col(name)} IS NULL` : `${col(name)} = ${mark(value)}`);
+  const raw = (await em.query(`SELECT * FROM ${driver.escape(meta.tableName)} WHERE ${conditions.join(' AND ')}`, params)) as Record<string, unknown>[];
+  return raw.map((r) => {
+    const row: Record<string, unknown> = {};
+    for (const c of meta.columns) row[c.propertyName] = driver.prepareHydratedValue(r[c.databaseName], c);
+    return row as T;
+  });
+}
