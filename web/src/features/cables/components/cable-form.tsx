@@ -1,7 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
-import Button from '@mui/material/Button';
 import Divider from '@mui/material/Divider';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
@@ -24,6 +22,7 @@ import { useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { v7 as uuidv7 } from 'uuid';
 import { z } from 'zod';
+import { choicesOf, NativeChoice, SaveBar } from '@/components/forms/phone-inputs';
 import type { AreaRow, CableRunRow } from '@/lib/db';
 import { parseReading, readingField, readingText, usableReading } from '@/lib/readings';
 import { createRecords, type Fields, saveRecord } from '@/lib/sync/local-write';
@@ -202,13 +201,7 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
       <Box component="fieldset" disabled={locked} sx={{ border: 0, p: 0, m: 0, minWidth: 0 }}>
         <Stack spacing={2}>
           <TextField label="Label" {...register('label')} error={!!errors.label} helperText={errors.label?.message ?? 'As written on both ends, e.g. RC-03.'} slotProps={{ htmlInput: { autoCapitalize: 'characters' } }} />
-          <TextField select label="Medium" {...register('medium')} slotProps={select}>
-            {CABLE_MEDIA.map((m) => (
-              <option key={m} value={m}>
-                {MEDIUM_WORDS[m]}
-              </option>
-            ))}
-          </TextField>
+          <NativeChoice label="Medium" {...register('medium')} options={choicesOf(CABLE_MEDIA, MEDIUM_WORDS)} />
           {(['A', 'B'] as const).map((e) => (
             <Paper key={e} variant="outlined" sx={{ p: 1.5 }} component="fieldset" aria-label={`End ${e}`}>
               <Stack spacing={1.5}>
@@ -250,21 +243,8 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
             ))}
           </datalist>
           <Stack direction="row" spacing={1.5}>
-            <TextField select label="Identified by" {...register('traceMethod')} slotProps={select}>
-              <option value="">Not yet</option>
-              {TRACE_METHODS.map((m) => (
-                <option key={m} value={m}>
-                  {TRACE_METHOD_WORDS[m]}
-                </option>
-              ))}
-            </TextField>
-            <TextField select label="Status" {...register('status')} slotProps={select}>
-              {CABLE_STATUSES.map((s) => (
-                <option key={s} value={s}>
-                  {CABLE_STATUS_WORDS[s]}
-                </option>
-              ))}
-            </TextField>
+            <NativeChoice label="Identified by" {...register('traceMethod')} emptyLabel="Not yet" options={choicesOf(TRACE_METHODS, TRACE_METHOD_WORDS)} />
+            <NativeChoice label="Status" {...register('status')} options={choicesOf(CABLE_STATUSES, CABLE_STATUS_WORDS)} />
           </Stack>
           {twisted && (
             <>
@@ -309,25 +289,10 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
             </Stack>
           )}
           {twisted && (
-            <TextField select label="Measured as" {...register('linkKind')} slotProps={select}>
-              {LINK_KINDS.map((k) => (
-                <option key={k} value={k}>
-                  {LINK_KIND_WORDS[k]}
-                </option>
-              ))}
-            </TextField>
+            <NativeChoice label="Measured as" {...register('linkKind')} options={choicesOf(LINK_KINDS, LINK_KIND_WORDS)} />
           )}
           <CableVerdicts assessment={assessment} />
-          {error && (
-            <Alert severity="error" role="alert">
-              {error}
-            </Alert>
-          )}
-          {!locked && (
-            <Button type="submit" variant="contained" size="large">
-              {cable ? 'Save cable' : 'Save new cable'}
-            </Button>
-          )}
+          <SaveBar error={error} locked={locked} label={cable ? 'Save cable' : 'Save new cable'} />
         </Stack>
       </Box>
     </Box>

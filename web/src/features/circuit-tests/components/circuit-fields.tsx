@@ -4,6 +4,7 @@ import { CIRCUIT_KINDS, type FieldValue, PROTECTIVE_DEVICES } from '@wiretrail/c
 import type { FieldErrors, UseFormRegister } from 'react-hook-form';
 import { z } from 'zod';
 import type { CircuitRow } from '@/lib/db';
+import { choicesOf, NativeChoice } from '@/components/forms/phone-inputs';
 import { readingField, readingText, usableReading } from '@/lib/readings';
 
 export const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
@@ -48,26 +49,12 @@ export function circuitDetailFields(v: CircuitDetails): Record<string, FieldValu
 
 /** Kind, protective device, RCD and cable sizes, for the add and edit forms alike. */
 export function CircuitDetailFields({ register, errors }: { register: UseFormRegister<CircuitDetails>; errors: FieldErrors<CircuitDetails> }) {
-  const select = { select: { native: true }, inputLabel: { shrink: true } };
   const num = { htmlInput: { inputMode: 'decimal' as const } };
   return (
     <>
-      <TextField select label="Kind" {...register('kind')} slotProps={select}>
-        {CIRCUIT_KINDS.map((k) => (
-          <option key={k} value={k}>
-            {KIND_WORDS[k]}
-          </option>
-        ))}
-      </TextField>
+      <NativeChoice label="Kind" {...register('kind')} options={choicesOf(CIRCUIT_KINDS, KIND_WORDS)} />
       <Stack direction="row" spacing={1.5}>
-        <TextField select label="Protective device" {...register('deviceType')} slotProps={select}>
-          <option value="">Not known</option>
-          {PROTECTIVE_DEVICES.map((d) => (
-            <option key={d} value={d}>
-              {DEVICE_WORDS[d] ?? `${d} fuse`}
-            </option>
-          ))}
-        </TextField>
+        <NativeChoice label="Protective device" {...register('deviceType')} emptyLabel="Not known" options={PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d] ?? `${d} fuse` }))} />
         <TextField label="Rating (A)" {...register('deviceRatingA')} error={!!errors.deviceRatingA} helperText={errors.deviceRatingA?.message ?? ' '} slotProps={num} sx={{ maxWidth: 130 }} />
       </Stack>
       <Stack direction="row" spacing={1.5}>

@@ -1,7 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
-import Button from '@mui/material/Button';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
@@ -12,6 +10,7 @@ import { type CircuitTestAssessment, type CircuitTestKey, extendRing, type Field
 import { type ReactNode, useMemo, useState } from 'react';
 import { Controller, type FieldPath, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { SaveBar } from '@/components/forms/phone-inputs';
 import { AidLine, VerdictChip, VERDICT_WORDS } from '@/components/verdicts/verdict-chip';
 import type { CircuitRow, PointChangeRow, TestResultRow } from '@/lib/db';
 import { readingField, readingText, usableReading } from '@/lib/readings';
@@ -259,16 +258,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
             )}
             <AidLine />
           </Paper>
-          {error && (
-            <Alert severity="error" role="alert">
-              {error}
-            </Alert>
-          )}
-          {!locked && (
-            <Button type="submit" variant="contained" size="large">
-              Save readings
-            </Button>
-          )}
+          <SaveBar error={error} locked={locked} label="Save readings" />
         </Stack>
       </Box>
     </Box>

@@ -1,7 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
-import Button from '@mui/material/Button';
 import Divider from '@mui/material/Divider';
 import FormControlLabel from '@mui/material/FormControlLabel';
 import Paper from '@mui/material/Paper';
@@ -15,6 +13,7 @@ import { extendRing, type FieldValue, type RingExtension, fuseForLoad, InvalidIn
 import { useEffect, useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { choicesOf, NativeChoice, SaveBar } from '@/components/forms/phone-inputs';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import type { AreaRow, CircuitRow, PointChangeRow } from '@/lib/db';
 import { readingField, readingText, usableReading } from '@/lib/readings';
@@ -175,7 +174,6 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
     }
   }
 
-  const select = { select: { native: true }, inputLabel: { shrink: true } };
   const numberInput = { htmlInput: { inputMode: 'decimal' as const } };
   // Filled in from the circuit when it is picked: the label must already sit above the value.
   const filledIn = { ...numberInput, inputLabel: { shrink: true } };
@@ -185,14 +183,7 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
         <Typography variant="h3" component="legend">
           {title}
         </Typography>
-        <TextField select label={`${title}: area`} {...register(`${side}AreaId`)} slotProps={select}>
-          <option value="">Not given</option>
-          {areas.map((a) => (
-            <option key={a.id} value={a.id}>
-              {a.name}
-            </option>
-          ))}
-        </TextField>
+        <NativeChoice label={`${title}: area`} {...register(`${side}AreaId`)} emptyLabel="Not given" options={areas.map((a) => ({ value: a.id, label: a.name }))} />
         <TextField
           label={`${title}: where on the wall`}
           placeholder={side === 'to' ? 'Left of the chimney breast' : 'Behind the sofa'}
@@ -236,22 +227,15 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
           </datalist>
           {hasFrom(v.action) && place('from', 'Where it was')}
           {hasTo(v.action) && place('to', v.action === 'add' ? 'Where it is' : 'Where it is now')}
-          <TextField select label="Circuit" {...register('circuitId')} error={!!errors.circuitId} helperText={errors.circuitId?.message ?? ' '} slotProps={select}>
-            <option value="">Not given</option>
-            {circuits.map((c) => (
-              <option key={c.id} value={c.id}>
-                {c.number} · {c.description || 'No description'}
-              </option>
-            ))}
-          </TextField>
-          <TextField select label="How it joins the circuit" {...register('connection')} slotProps={select}>
-            <option value="">Not given</option>
-            {POINT_CONNECTIONS.map((c) => (
-              <option key={c} value={c}>
-                {CONNECTION_WORDS[c]}
-              </option>
-            ))}
-          </TextField>
+          <NativeChoice
+            label="Circuit"
+            {...register('circuitId')}
+            error={!!errors.circuitId}
+            helperText={errors.circuitId?.message ?? ' '}
+            emptyLabel="Not given"
+            options={circuits.map((c) => ({ value: c.id, label: `${c.number} · ${c.description || 'No description'}` }))}
+          />
+          <NativeChoice label="How it joins the circuit" {...register('connection')} emptyLabel="Not given" options={choicesOf(POINT_CONNECTIONS, CONNECTION_WORDS)} />
           <Stack direction="row" spacing={1.5}>
             <TextField label="Live size (mm²)" {...register('liveCsaMm2')} error={!!errors.liveCsaMm2} helperText={errors.liveCsaMm2?.message ?? ' '} slotProps={filledIn} />
             <TextField label="Cpc size (mm²)" {...register('cpcCsaMm2')} error={!!errors.cpcCsaMm2} helperText={errors.cpcCsaMm2?.message ?? ' '} slotProps={filledIn} />
@@ -324,16 +308,7 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
             label="Check a new concealed cable route"
           />
           {route && <WallDiagram value={route} onChange={setRoute} disabled={locked} />}
-          {error && (
-            <Alert severity="error" role="alert">
-              {error}
-            </Alert>
-          )}
-          {!locked && (
-            <Button type="submit" variant="contained" size="large">
-              {point ? 'Save point change' : 'Save new point change'}
-            </Button>
-          )}
+          <SaveBar error={error} locked={locked} label={point ? 'Save point change' : 'Save new point change'} />
         </Stack>
       </Box>
     </Box>
