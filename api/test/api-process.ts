@@ -68,7 +68,7 @@ export class ApiProcess {
     for (let i = 0; i < 200; i++) {
       if (child.exitCode !== null) break;
       try {
-        if ((await this.request('GET', '/health')).status === 200) return;
+        if ((await this.request('GET', '/api/health')).status === 200) return;
       } catch {
         // not listening yet
       }
@@ -78,7 +78,7 @@ export class ApiProcess {
   }
 
   /**
-   * One request on a connection of its own: a pooled connection to a killed process would fail the next request
+   * One request (to a path as given, `/api/…` for the API) on a connection of its own: a pooled connection to a killed process would fail the next request
    * after a restart. Rejects when the connection drops, as a phone's request does.
    */
   request(method: string, path: string, options: { headers?: Record<string, string>; body?: Buffer | string | object } = {}): Promise<Answer> {
@@ -86,7 +86,7 @@ export class ApiProcess {
     const body = json ? JSON.stringify(options.body) : (options.body as Buffer | string | undefined);
     const headers = { ...(json ? { 'content-type': 'application/json' } : {}), ...options.headers };
     return new Promise((resolve, reject) => {
-      const req = http.request({ host: '127.0.0.1', port: this.port, method, path: path.startsWith('/api') ? path : `/api${path}`, headers, agent: false }, (res) => {
+      const req = http.request({ host: '127.0.0.1', port: this.port, method, path, headers, agent: false }, (res) => {
         const chunks: Buffer[] = [];
         res.on('data', (c: Buffer) => chunks.push(c));
         res.on('error', reject);
@@ -129,7 +129,7 @@ export interface Answer {
 
 /** Signs in against a running process and returns the headers every later request carries. */
 export async function signInTo(api: ApiProcess, email: string): Promise<{ headers: Record<string, string>; userId: string }> {
-  const res = await api.request('POST', '/auth/sign-in', { body: { email, password: 'wiretrail-demo' } });
+  const res = await api.request('POST', '/api/auth/sign-in', { body: { email, password: 'wiretrail-demo' } });
   if (res.status !== 200) throw new Error(`sign-in answered ${res.status}`);
   return { headers: { authorization: `Bearer ${res.body.accessToken}` }, userId: res.body.user.id };
 }

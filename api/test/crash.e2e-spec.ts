@@ -38,7 +38,7 @@ describe('a killed server loses nothing and applies nothing twice', () => {
     api.prepare();
     await api.start();
     ({ headers } = await signInTo(api, 'tech1@larkfield.example'));
-    const pulled = (await api.request('GET', '/sync/pull?checkpoint=0&limit=1000&deviceId=crash-look', { headers })).body as PullResponse;
+    const pulled = (await api.request('GET', '/api/sync/pull?checkpoint=0&limit=1000&deviceId=crash-look', { headers })).body as PullResponse;
     const job = pulled.changes.find((c) => c.entity === 'job' && c.row!.title === 'Move two lounge sockets and add a fused spur for an electric fire')!;
     visit = pulled.changes.find((c) => c.entity === 'visit' && c.row!.jobId === job.id)!.row!;
   });
@@ -92,7 +92,7 @@ describe('a killed server loses nothing and applies nothing twice', () => {
         const b = unanswered ?? nextBatch();
         if (unanswered === b) figures.resent++;
         unanswered = b;
-        const res = await track('push', api.request('POST', '/sync/push', { headers, body: { deviceId: DEVICE, mutations: sent[b] } }));
+        const res = await track('push', api.request('POST', '/api/sync/push', { headers, body: { deviceId: DEVICE, mutations: sent[b] } }));
         expect(res.status).toBe(200);
         answers.set(b, (res.body as { results: MutationResult[] }).results);
         unanswered = null;
@@ -100,7 +100,7 @@ describe('a killed server loses nothing and applies nothing twice', () => {
     }
 
     const uploadHeaders = { ...headers, 'tus-resumable': '1.0.0' };
-    const missing = async (hash: string) => (await api.request('POST', '/blobs/missing', { headers, body: { hashes: [hash] } })).body.missing.length > 0;
+    const missing = async (hash: string) => (await api.request('POST', '/api/blobs/missing', { headers, body: { hashes: [hash] } })).body.missing.length > 0;
 
     /** One photo, the way the app sends it; resolves once the server says it holds the bytes. */
     async function sendPhoto(p: PhotoOnPhone): Promise<void> {
@@ -122,7 +122,7 @@ describe('a killed server loses nothing and applies nothing twice', () => {
           offset = Number(head.headers['upload-offset']);
           if (offset > 0) figures.resumed++;
         } else {
-          const created = await track('upload', api.request('POST', '/uploads', {
+          const created = await track('upload', api.request('POST', '/api/uploads', {
             headers: { ...uploadHeaders, 'upload-length': String(p.bytes.length), 'upload-metadata': `sha256 ${Buffer.from(p.sha256).toString('base64')},filetype ${Buffer.from('image/jpeg').toString('base64')}` },
           }));
           expect(created.status).toBe(201);
