@@ -253,6 +253,18 @@ describe('hostile requests', () => {
       expect(res.body.message).toEqual(['page must be at most 1000000']);
     });
 
+    it.each([
+      ['users', { role: null }, 'role cannot be emptied'],
+      ['users', { name: null, active: null }, 'name cannot be emptied'],
+      ['organisations', { name: null }, 'name cannot be emptied'],
+      ['organisations', { keepPhotoLocation: null }, 'keepPhotoLocation cannot be emptied'],
+    ])('refuses null for a field of %s that cannot be emptied (%j) with 400 and a message', async (what, body, message) => {
+      const id = what === 'users' ? tech1.user.id : admin.user.organisationId;
+      const res = await t.http.patch(`/api/${what}/${id}`).set(bearer(admin)).send(body);
+      refusedWithMessage(res, 400);
+      expect(res.body.message).toContain(message);
+    });
+
     it('queues a password link while the mail server is down, instead of failing the request', async () => {
       // This app has no mail server to reach.
       const res = await t.http.post(`/api/users/${tech1.user.id}/password-reset`).set(bearer(admin)).expect(202);
