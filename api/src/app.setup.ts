@@ -6,6 +6,7 @@ import { ConfigService } from '@nestjs/config';
 import { rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
 import { BodyErrorFilter } from './common/filters/body-error.filter.js';
+import { refuseDeepBodies } from './common/middleware/json-depth.js';
 import { PhotoUploads } from './photos/uploads/photo-uploads.js';
 
 function flatten(errors: ValidationError[], parent = ''): string[] {
@@ -25,6 +26,7 @@ export function configureApp(app: INestApplication): INestApplication {
   app.use(app.get(PhotoUploads).handler());
   // A full push batch of field records is larger than Express's 100 kB default.
   (app as NestExpressApplication).useBodyParser('json', { limit: '5mb' });
+  app.use(refuseDeepBodies);
   app.use(
     helmet({
       contentSecurityPolicy: {

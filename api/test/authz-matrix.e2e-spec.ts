@@ -1,54 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import { RequestMethod } from '@nestjs/common';
-import { METHOD_METADATA, PATH_METADATA } from '@nestjs/common/constants.js';
-import { ModulesContainer, Reflector } from '@nestjs/core';
 import { JwtService } from '@nestjs/jwt';
-import { IS_PUBLIC_KEY } from '../src/common/decorators/public.decorator.js';
-import { ROLES_KEY } from '../src/common/decorators/roles.decorator.js';
+import { fillPath, type Route, routesOf } from './app-routes.js';
 import { createTestApp, signIn, type TestApp } from './test-app.js';
-
-interface Route {
-  method: 'get' | 'post' | 'patch' | 'put' | 'delete';
-  path: string;
-  roles: string[] | null;
-  isPublic: boolean;
-}
-
-const VERBS: Partial<Record<RequestMethod, Route['method']>> = {
-  [RequestMethod.GET]: 'get',
-  [RequestMethod.POST]: 'post',
-  [RequestMethod.PATCH]: 'patch',
-  [RequestMethod.PUT]: 'put',
-  [RequestMethod.DELETE]: 'delete',
-};
-
-/** Every route the running app serves, read from its controllers, so a new route cannot be left out of the matrix. */
-function routesOf(t: TestApp): Route[] {
-  const reflector = t.app.get(Reflector);
-  const routes: Route[] = [];
-  for (const module of t.app.get(ModulesContainer).values()) {
-    for (const wrapper of module.controllers.values()) {
-      const ctrl = wrapper.metatype as (new (...args: never[]) => unknown) | null;
-      if (!ctrl) continue;
-      const base = String(Reflect.getMetadata(PATH_METADATA, ctrl) ?? '');
-      for (const name of Object.getOwnPropertyNames(ctrl.prototype)) {
-        const handler = ctrl.prototype[name as keyof typeof ctrl.prototype] as unknown;
-        if (typeof handler !== 'function' || name === 'constructor') continue;
-        const verb = Reflect.getMetadata(METHOD_METADATA, handler) as RequestMethod | undefined;
-        if (verb === undefined || !VERBS[verb]) continue;
-        const sub = String(Reflect.getMetadata(PATH_METADATA, handler) ?? '');
-        const path = `/api/${[base, sub].filter((p) => p && p !== '/').join('/')}`.replace(/\/+/g, '/');
-        routes.push({
-          method: VERBS[verb]!,
-          path,
-          roles: reflector.getAllAndOverride<string[] | undefined>(ROLES_KEY, [handler as () => void, ctrl]) ?? null,
-          isPublic: !!reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, [handler as () => void, ctrl]),
-        });
-      }
-    }
-  }
-  return routes;
-}
 
 describe('authorisation matrix: every route × every role × own and other organisation × bad tokens', () => {
   let t: TestApp;
@@ -72,9 +25,8 @@ describe('authorisation matrix: every route × every role × own and other organ
   });
   afterAll(() => t.close());
 
-  const fill = (path: string, id: string) => path.replace(/:[A-Za-z]+/g, id);
   const send = (r: Route, token: string | null, id = '01890000-0000-7000-8000-000000000000') => {
-    const req = t.http[r.method](fill(r.path, id));
+    const req = t.http[r.method](fillPath(r.path, id));
     if (token) req.set('authorization', `Bearer ${token}`);
     return r.method === 'get' || r.method === 'delete' ? req : req.send({});
   };
@@ -109,7 +61,7 @@ describe('authorisation matrix: every route × every role × own and other organ
       for (const token of [null, tokens.admin!, tokens.otherAdmin!]) {
         // A link-shaped token and one of another shape; photo and document ids are well-formed ids of nothing.
         for (const made of ['A'.repeat(43), 'not-a-link']) {
-          const req = t.http.get(fill(r.path.replace(':token', made), '01890000-0000-7000-8000-000000000000'));
+          const req = t.http.get(fillPath(r.path.replace(':token', made), '01890000-0000-7000-8000-000000000000'));
           const res = await (token ? req.set('authorization', `Bearer ${token}`) : req);
           if (res.status !== 404) failures.push(`${r.method} ${r.path} with ${made} → ${res.status}`);
           if (JSON.stringify(res.body).includes(larkfieldOrg)) failures.push(`${r.path} leaked Larkfield's organisation id`);
@@ -161,7 +113,7 @@ describe('authorisation matrix: every route × every role × own and other organ
       // The organisation and a sample of each kind of row stand for all of Larkfield's ids.
       for (const id of [larkfieldOrg, ...sampleIds]) {
         const res = await send(r, tokens.otherAdmin!, id);
-        if (res.status < 400 || res.status >= 500) failures.push(`${r.method} ${fill(r.path, id)} → ${res.status}`);
+        if (res.status < 400 || res.status >= 500) failures.push(`${r.method} ${fillPath(r.path, id)} → ${res.status}`);
         if (JSON.stringify(res.body).includes(larkfieldOrg)) failures.push(`${r.method} ${r.path} leaked Larkfield's organisation id`);
       }
     }

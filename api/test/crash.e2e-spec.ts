@@ -1,130 +1,228 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import { formatHlc, type Mutation, type MutationResult, type PullResponse } from '@wiretrail/core';
+import { formatHlc, type Mutation, type MutationResult, type PullResponse, type SyncedRow } from '@wiretrail/core';
 import Database from 'better-sqlite3';
-import { type ChildProcess, spawn, spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { v7 as uuidv7 } from 'uuid';
+import { ApiProcess, signInTo } from './api-process.js';
+import { auditPhotoStore } from './photo-store-audit.js';
+import { noisyJpeg, sha256 } from './photo-helpers.js';
+import { seededRandom } from './seeded-random.js';
 
 /**
- * The API process is killed (SIGKILL) while it applies pushes, then started again on the same database file.
- * The client resends whatever it had no answer for. No mutation may be lost or applied twice.
- * Runs the built server (dist/), as in production.
+ * The API process is killed (SIGKILL) at random moments while a phone pushes batches and uploads photos, then
+ * started again on the same database, photo and upload directories. The phone does what the app does: resends
+ * every batch it had no answer for, and carries each photo on from the offset the server reports (or starts it
+ * again when the server no longer knows the upload). Nothing may be lost, applied twice, or stored half.
+ * Runs the built server (dist/). `CRASH_KILLS` sets the number of kills (`npm run soak:crash -w api`),
+ * `CRASH_SEED` repeats a run.
  */
-const API_DIR = resolve(import.meta.dirname, '..');
-const PORT = 3400 + (process.pid % 500);
-const BASE = `http://127.0.0.1:${PORT}/api`;
+const KILLS = Number(process.env.CRASH_KILLS ?? 50);
+const DEVICE = 'crash-phone';
+const CHUNK = 64 * 1024;
+
+interface PhotoOnPhone {
+  bytes: Buffer;
+  sha256: string;
+  id: string;
+  location: string | null;
+}
 
 describe('a killed server loses nothing and applies nothing twice', () => {
-  const dir = mkdtempSync(join(tmpdir(), 'wiretrail-crash-'));
-  const env = {
-    ...process.env,
-    NODE_ENV: 'production',
-    PORT: String(PORT),
-    HOST: '127.0.0.1',
-    DATABASE_PATH: join(dir, 'crash.sqlite'),
-    JWT_SECRET: 'crash-test-secret-long-enough-for-signing-tokens',
-    SIGN_IN_RATE_LIMIT: '1000',
-  };
-  let server: ChildProcess | null = null;
-
-  async function start(): Promise<void> {
-    server = spawn(process.execPath, ['dist/main.js'], { cwd: API_DIR, env, stdio: 'ignore' });
-    for (let i = 0; i < 100; i++) {
-      try {
-        if ((await fetch(`${BASE}/health`)).ok) return;
-      } catch {
-        // not listening yet
-      }
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    throw new Error('the API did not start');
-  }
-
-  function kill(): Promise<void> {
-    const p = server!;
-    server = null;
-    return new Promise((r) => {
-      p.once('exit', () => r());
-      p.kill('SIGKILL');
-    });
-  }
+  const random = seededRandom('CRASH_SEED');
+  let api: ApiProcess;
+  let headers: Record<string, string>;
+  let visit: SyncedRow;
 
   beforeAll(async () => {
-    for (const script of ['dist/database/migrate-cli.js', 'dist/database/seed-cli.js']) {
-      const r = spawnSync(process.execPath, [script], { cwd: API_DIR, env, encoding: 'utf8' });
-      if (r.status !== 0) throw new Error(r.stderr);
-    }
-    await start();
+    api = await ApiProcess.create();
+    api.prepare();
+    await api.start();
+    ({ headers } = await signInTo(api, 'tech1@larkfield.example'));
+    const pulled = (await api.request('GET', '/api/sync/pull?checkpoint=0&limit=1000&deviceId=crash-look', { headers })).body as PullResponse;
+    const job = pulled.changes.find((c) => c.entity === 'job' && c.row!.title === 'Move two lounge sockets and add a fused spur for an electric fire')!;
+    visit = pulled.changes.find((c) => c.entity === 'visit' && c.row!.jobId === job.id)!.row!;
   });
 
-  afterAll(async () => {
-    if (server) await kill();
-    rmSync(dir, { recursive: true, force: true });
-  });
+  afterAll(() => api.remove());
 
-  it('survives three kills in the middle of pushes', async () => {
-    const signIn = await fetch(`${BASE}/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email: 'office@larkfield.example', password: 'wiretrail-demo' }),
-    });
-    const { accessToken } = (await signIn.json()) as { accessToken: string };
-    const auth = { authorization: `Bearer ${accessToken}`, 'content-type': 'application/json' };
-    const pulled = (await (await fetch(`${BASE}/sync/pull?checkpoint=0&limit=1000&deviceId=crash-office`, { headers: auth })).json()) as PullResponse;
-    const visit = pulled.changes.find((c) => c.entity === 'visit')!.row!;
-
-    // Every batch creates notes and moves one circuit's description on, so a batch applied twice would show.
-    let clock = 0;
-    const hlc = () => formatHlc({ ms: Date.parse('2026-12-02T12:00:00.000Z') + clock++, counter: 0, deviceId: 'crashphone' });
-    const batches: Mutation[][] = Array.from({ length: 30 }, (_, b) =>
-      Array.from({ length: 40 }, (_, i) => ({
-        mutationId: uuidv7(), entity: 'note' as const, id: uuidv7(), baseVersion: 0,
-        set: { visitId: visit.id, siteId: visit.siteId as string, text: `batch ${b} note ${i}` }, hlc: hlc(),
-      })),
+  it(`survives ${KILLS} kills at random moments of pushes and photo uploads`, async () => {
+    // Photos of different weights, so that kills land while bytes travel and while the server sizes them.
+    const photos: PhotoOnPhone[] = await Promise.all(
+      Array.from({ length: Math.ceil(KILLS * 0.6) + 2 }, async (_, i) => {
+        const bytes = await noisyJpeg(400 + (i % 5) * 300, 300 + (i % 4) * 250);
+        return { bytes, sha256: sha256(bytes), id: uuidv7(), location: null };
+      }),
     );
+    const figures = { kills: 0, duringPush: 0, duringUpload: 0, resent: 0, batches: 0, mutations: 0, resumed: 0, restarted: 0, keptAtRestart: 0 };
 
-    const answers: MutationResult[][] = [];
-    const kills = new Set([4, 13, 22]);
-    for (let b = 0; b < batches.length; b++) {
-      const send = () => fetch(`${BASE}/sync/push`, { method: 'POST', headers: auth, body: JSON.stringify({ deviceId: 'crashphone', mutations: batches[b] }) });
-      if (kills.has(b)) {
-        kills.delete(b);
-        const inFlight = send().catch(() => null);
-        await new Promise((r) => setTimeout(r, 3 + b));
-        await kill();
-        await inFlight; // Whatever the server did, the client has no answer it can trust.
-        await start();
-        b--; // resend the same batch
-        continue;
+    let clock = 0;
+    const hlc = () => formatHlc({ ms: Date.parse('2026-12-02T12:00:00.000Z') + clock++, counter: 0, deviceId: DEVICE });
+    const photoRow = (p: PhotoOnPhone): Mutation => ({
+      mutationId: uuidv7(), entity: 'photo', id: p.id, baseVersion: 0, hlc: hlc(),
+      set: { visitId: visit.id, siteId: visit.siteId as string, sha256: p.sha256, sizeBytes: p.bytes.length, uploadState: 'waiting', caption: 'Crash test photo', takenAt: '2026-12-02T12:00:00.000Z' },
+    });
+    // Photo rows go out with the next batch after the photo is taken: before, during or after its bytes.
+    const rowsToSend: Mutation[] = [];
+    const sent: Mutation[][] = [];
+    const answers = new Map<number, MutationResult[]>();
+    let unanswered: number | null = null;
+    const nextBatch = () => {
+      const b = sent.length;
+      const notes = Array.from({ length: random.int(5, 40) }, (_, i): Mutation => ({
+        mutationId: uuidv7(), entity: 'note', id: uuidv7(), baseVersion: 0, hlc: hlc(),
+        set: { visitId: visit.id, siteId: visit.siteId as string, text: `batch ${b} note ${i}` },
+      }));
+      sent.push([...rowsToSend.splice(0), ...notes]);
+      return b;
+    };
+
+    let inFlight = { push: 0, upload: 0 };
+    const track = async <T>(kind: 'push' | 'upload', request: Promise<T>): Promise<T> => {
+      inFlight[kind]++;
+      try {
+        return await request;
+      } finally {
+        inFlight[kind]--;
       }
-      const res = await send();
-      expect(res.status).toBe(200);
-      answers[b] = ((await res.json()) as { results: MutationResult[] }).results;
-    }
-    await kill();
+    };
 
-    const db = new Database(env.DATABASE_PATH, { readonly: true });
+    /** Pushes until the server dies or `until` says stop; a batch counts as sent only once its answer is read. */
+    async function pushing(until: () => boolean): Promise<void> {
+      while (!until()) {
+        const b = unanswered ?? nextBatch();
+        if (unanswered === b) figures.resent++;
+        unanswered = b;
+        const res = await track('push', api.request('POST', '/api/sync/push', { headers, body: { deviceId: DEVICE, mutations: sent[b] } }));
+        expect(res.status).toBe(200);
+        answers.set(b, (res.body as { results: MutationResult[] }).results);
+        unanswered = null;
+      }
+    }
+
+    const uploadHeaders = { ...headers, 'tus-resumable': '1.0.0' };
+    const missing = async (hash: string) => (await api.request('POST', '/api/blobs/missing', { headers, body: { hashes: [hash] } })).body.missing.length > 0;
+
+    /** One photo, the way the app sends it; resolves once the server says it holds the bytes. */
+    async function sendPhoto(p: PhotoOnPhone): Promise<void> {
+      for (;;) {
+        let offset = 0;
+        if (p.location) {
+          const head = await track('upload', api.request('HEAD', p.location, { headers: uploadHeaders }));
+          const gone = head.status === 404;
+          if (!gone) {
+            expect(head.status).toBe(200);
+            offset = Number(head.headers['upload-offset']);
+          }
+          // Gone (finished, refused or lost with the process), or all its bytes there (the reply to the last chunk
+          // was lost, and tus asks nothing more): the app asks the server about the bytes, and starts the photo again
+          // while they are missing.
+          if (gone || offset === p.bytes.length) {
+            p.location = null;
+            if (!(await missing(p.sha256))) {
+              figures.keptAtRestart++;
+              return;
+            }
+            figures.restarted++;
+            continue;
+          }
+          if (offset > 0) figures.resumed++;
+        } else {
+          const created = await track('upload', api.request('POST', '/api/uploads', {
+            headers: { ...uploadHeaders, 'upload-length': String(p.bytes.length), 'upload-metadata': `sha256 ${Buffer.from(p.sha256).toString('base64')},filetype ${Buffer.from('image/jpeg').toString('base64')}` },
+          }));
+          expect(created.status).toBe(201);
+          p.location = created.headers.location!;
+        }
+        while (offset < p.bytes.length) {
+          const res = await track('upload', api.request('PATCH', p.location, {
+            headers: { ...uploadHeaders, 'upload-offset': String(offset), 'content-type': 'application/offset+octet-stream' },
+            body: p.bytes.subarray(offset, offset + CHUNK),
+          }));
+          expect([res.status, res.text]).toEqual([204, '']);
+          offset = Number(res.headers['upload-offset']);
+        }
+        expect(await missing(p.sha256)).toBe(false);
+        p.location = null;
+        return;
+      }
+    }
+
+    let nextPhoto = 0;
+    let current: PhotoOnPhone | null = null;
+    async function uploading(until: () => boolean): Promise<void> {
+      while (!until()) {
+        if (!current) {
+          if (nextPhoto >= photos.length) return;
+          current = photos[nextPhoto++]!;
+          rowsToSend.push(photoRow(current));
+        }
+        await sendPhoto(current);
+        current = null;
+      }
+    }
+
+    for (let k = 0; k < KILLS; k++) {
+      const doPush = random.chance(0.75);
+      const doUpload = !doPush || random.chance(0.6);
+      let dead = false;
+      const work = [doPush ? pushing(() => dead) : null, doUpload ? uploading(() => dead) : null].filter(Boolean).map((w) => w!.catch((err: unknown) => (dead && !(err as { matcherResult?: unknown }).matcherResult ? null : Promise.reject(err))));
+      await new Promise((r) => setTimeout(r, random.int(5, 700)));
+      dead = true;
+      if (inFlight.push) figures.duringPush++;
+      if (inFlight.upload) figures.duringUpload++;
+      await api.kill();
+      figures.kills++;
+      // Whatever the server did, the phone has no answer it can trust for what was outstanding.
+      await Promise.all(work);
+      inFlight = { push: 0, upload: 0 };
+      await api.start();
+    }
+
+    // Signal steady again: the phone sends what it still holds.
+    await uploading(() => false);
+    await pushing(() => !rowsToSend.length && unanswered === null);
+    await api.kill();
+
+    const db = new Database(api.databasePath, { readonly: true });
     try {
       expect(db.pragma('integrity_check', { simple: true })).toBe('ok');
-      const all = batches.flat();
-      const applied = db.prepare(`SELECT COUNT(*) AS n FROM applied_mutation WHERE deviceId = 'crashphone'`).get() as { n: number };
+      const all = sent.flat();
+      figures.batches = sent.length;
+      figures.mutations = all.length;
+      const applied = db.prepare(`SELECT COUNT(*) AS n FROM applied_mutation WHERE deviceId = ?`).get(DEVICE) as { n: number };
       expect(applied.n).toBe(all.length);
+
       const notes = db.prepare(`SELECT id, version FROM note WHERE text LIKE 'batch %'`).all() as Array<{ id: string; version: number }>;
-      expect(notes).toHaveLength(all.length);
-      // Each note kept the version its answer reported: nothing ran again after it was acknowledged.
+      expect(notes).toHaveLength(all.filter((m) => m.entity === 'note').length);
+      // Each row kept the version its answer reported: nothing ran again after it was acknowledged.
       const versionOf = new Map(notes.map((n) => [n.id, n.version]));
-      for (const [b, results] of answers.entries()) {
+      for (const [b, results] of answers) {
         results.forEach((r, i) => {
           expect(r.status).toBe('applied');
-          expect(versionOf.get(batches[b]![i]!.id)).toBe(r.version);
+          if (sent[b]![i]!.entity === 'note') expect(versionOf.get(sent[b]![i]!.id)).toBe(r.version);
         });
       }
-      const seqs = db.prepare(`SELECT COUNT(DISTINCT seq) AS n, COUNT(*) AS total FROM sync_change WHERE entity = 'note'`).get() as { n: number; total: number };
+      const seqs = db.prepare(`SELECT COUNT(DISTINCT seq) AS n, COUNT(*) AS total FROM sync_change`).get() as { n: number; total: number };
       expect(seqs.n).toBe(seqs.total);
+
+      // Every photo the phone took is on the server once, ready, with the bytes it sent.
+      const rows = db.prepare(`SELECT id, sha256, uploadState, sizeBytes, width, height FROM photo WHERE caption = 'Crash test photo'`).all() as Array<{ id: string; sha256: string; uploadState: string; sizeBytes: number }>;
+      expect(rows).toHaveLength(photos.length);
+      const byId = new Map(rows.map((r) => [r.id, r]));
+      for (const p of photos) expect(byId.get(p.id)).toMatchObject({ sha256: p.sha256, uploadState: 'ready', sizeBytes: p.bytes.length });
+
+      const audit = await auditPhotoStore(db, join(api.directory, 'photos'), join(api.directory, 'uploads'));
+      expect(audit.problems).toEqual([]);
+      expect(audit.originals).toBeGreaterThanOrEqual(photos.length);
+      console.log(
+        `crash: seed ${random.seed}; ${figures.kills} kills (${figures.duringPush} with a push outstanding, ${figures.duringUpload} with an upload outstanding), ` +
+          `${figures.batches} batches (${figures.resent} resent), ${figures.mutations} mutations, ${photos.length} photos uploaded ` +
+          `(${figures.resumed} resumed from the server's offset, ${figures.restarted} started again, ${figures.keptAtRestart} found already kept after a restart), ` +
+          `${audit.originals} originals re-hashed, ${audit.readyRows} ready rows checked, ${audit.unfinishedUploads} abandoned uploads waiting to expire, ` +
+          `${audit.leftovers.length} files written aside; losses found: 0`,
+      );
     } finally {
       db.close();
     }
-  }, 120_000);
+  }, 60_000 + KILLS * 6_000);
 });

@@ -71,6 +71,17 @@ export function expectErrorBody(body: unknown, statusCode: number): void {
   expect(body).toEqual(expect.objectContaining({ statusCode, message: expect.anything() }));
 }
 
+/** What is wrong with an answer, or null when it is one the API may give. */
+export function badAnswer(res: { status: number; body: unknown; text: string }): string | null {
+  if (res.status >= 500) return `answered ${res.status}: ${res.text.slice(0, 300)}`;
+  if (res.status < 400) return null;
+  const b = res.body as { statusCode?: unknown; message?: unknown; error?: unknown } | undefined;
+  const messages = [b?.message].flat();
+  const hasMessage = messages.length > 0 && messages.every((m) => typeof m === 'string' && m.trim() !== '');
+  if (!b || b.statusCode !== res.status || typeof b.error !== 'string' || !hasMessage) return `answered ${res.status} without Nest's error body: ${res.text.slice(0, 300)}`;
+  return null;
+}
+
 /** Waits for something the server does in the background (an e-mail, a retry), for up to `ms`. */
 export async function until(done: () => boolean | Promise<boolean>, ms = 5000): Promise<void> {
   const deadline = Date.now() + ms;

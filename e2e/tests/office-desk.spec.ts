@@ -103,7 +103,8 @@ test('the office works the jobs board and table, reads a job’s cable schedule 
   await siteForm.getByLabel('Ze').fill(ze);
   await siteForm.getByRole('button', { name: 'Save changes' }).click();
   await expect(siteForm).toBeHidden();
-  await expect(page.getByRole('region', { name: 'Supply and access' })).toContainText(`${ze} Ω`);
+  // Shown as a number, so 37.0 reads 37.
+  await expect(page.getByRole('region', { name: 'Supply and access' })).toContainText(`${Number(ze)} Ω`);
 
   await page.getByRole('button', { name: 'Add circuit' }).click();
   const circuitForm = page.getByRole('dialog', { name: 'Add a circuit' });

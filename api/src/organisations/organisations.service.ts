@@ -1,7 +1,7 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { Repository } from 'typeorm';
-import { definedFields } from '../common/defined-fields.js';
+import { definedFields, refuseEmptied } from '../common/defined-fields.js';
 import { WriteQueue } from '../common/write-queue.js';
 import type { UpdateOrganisationDto } from './dto/update-organisation.dto.js';
 import { Organisation } from './entities/organisation.entity.js';
@@ -24,6 +24,7 @@ export class OrganisationsService {
     const org = await this.findOwn(callerOrganisationId, id);
     const changes = definedFields(dto);
     if (Object.keys(changes).length === 0) throw new BadRequestException('Nothing to change.');
+    refuseEmptied(changes, ['name', 'timeZone', 'photoTags', 'keepPhotoLocation']);
     Object.assign(org, changes);
     return this.queue.run((em) => em.save(org));
   }

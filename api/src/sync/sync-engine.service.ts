@@ -185,6 +185,8 @@ export class SyncEngine {
   }
 
   private async apply(em: EntityManager, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
+    // A batch is a list of anything until checked: null or a number in it is refused alone, like any bad mutation.
+    if (typeof m !== 'object' || m === null || Array.isArray(m)) throw new MutationRefused('A mutation must be an object: { mutationId, entity, id, baseVersion, set or delete, hlc }.');
     const { mutationId } = m;
     if (typeof mutationId !== 'string' || mutationId.length < 8 || mutationId.length > 64) throw new MutationRefused('mutationId must be a unique id of 8 to 64 characters.');
     if (!isSyncEntity(m.entity)) throw new MutationRefused(`entity must be one of the synced entities; got ${JSON.stringify(m.entity)}.`);

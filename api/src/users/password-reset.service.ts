@@ -1,4 +1,4 @@
-import { BadRequestException, ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, ForbiddenException, Inject, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
 import { IsNull } from 'typeorm';
@@ -8,20 +8,25 @@ import { hashPassword } from '../auth/password.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
-import { MailService } from '../mail/mail.service.js';
+import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { User } from './entities/user.entity.js';
 
 const LINK_LIFETIME_MS = 60 * 60 * 1000;
 const LINK_REFUSED = 'This password link is not valid any more. Ask your admin to send a new one.';
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
+const PASSWORD_RESET_MAIL = 'password-reset';
 
 @Injectable()
-export class PasswordResetService {
+export class PasswordResetService implements OnModuleInit {
   constructor(
     private readonly queue: WriteQueue,
-    private readonly mail: MailService,
+    private readonly outbox: MailOutbox,
     @Inject(mailConfig.KEY) private readonly config: ConfigType<typeof mailConfig>,
   ) {}
+
+  onModuleInit(): void {
+    this.outbox.register(PASSWORD_RESET_MAIL, { attachments: async () => [], settled: async () => undefined });
+  }
 
   /** An admin sends someone a one-hour link to set a new password; earlier unused links stop working. */
   async send(caller: AuthUser, userId: string): Promise<{ sentTo: string; expiresAt: string }> {
@@ -40,13 +45,19 @@ export class PasswordResetService {
         requestedById: caller.id,
       });
       await em.save(reset);
+      // Through the outbox, in this transaction: a mail server that is down delays the link instead of failing the
+      // request, and the outbox empties the text (it carries the link) once sent.
+      const link = `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(`${reset.id}.${secret}`)}`;
+      await this.outbox.enqueue(em, {
+        organisationId: caller.organisationId,
+        purpose: PASSWORD_RESET_MAIL,
+        subjectId: user.id,
+        to: user.email,
+        createdById: caller.id,
+        subject: 'Set a new Wiretrail password',
+        text: `Hello ${user.name},\n\n${caller.name} asked Wiretrail to let you set a new password. Open this link within an hour:\n\n${link}\n\nIf you did not expect this, ignore this e-mail; your password stays as it is.\n`,
+      });
       return { user, reset };
-    });
-    const link = `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(`${reset.id}.${secret}`)}`;
-    await this.mail.send({
-      to: user.email,
-      subject: 'Set a new Wiretrail password',
-      text: `Hello ${user.name},\n\n${caller.name} asked Wiretrail to let you set a new password. Open this link within an hour:\n\n${link}\n\nIf you did not expect this, ignore this e-mail; your password stays as it is.\n`,
     });
     return { sentTo: user.email, expiresAt: reset.expiresAt.toISOString() };
   }

@@ -3,7 +3,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { Brackets, IsNull, Repository } from 'typeorm';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
 import { hashPassword } from '../auth/password.js';
-import { definedFields } from '../common/defined-fields.js';
+import { definedFields, refuseEmptied } from '../common/defined-fields.js';
 import { WriteQueue } from '../common/write-queue.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
@@ -74,6 +74,7 @@ export class UsersService {
     if (!user) throw new NotFoundException('No such user.');
     const changes = definedFields(dto);
     if (Object.keys(changes).length === 0) throw new BadRequestException('Nothing to change: send name, role or active.');
+    refuseEmptied(changes, ['name', 'role', 'active']);
     if (id === caller.id && dto.role !== undefined && dto.role !== user.role) {
       throw new ForbiddenException('You cannot change your own role; ask another admin.');
     }

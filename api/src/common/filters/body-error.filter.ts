@@ -1,9 +1,30 @@
-import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, Logger } from '@nestjs/common';
 import type { Response } from 'express';
+import { STATUS_CODES } from 'node:http';
+
+/** What the body parser refuses, by its error's type, in words a person can act on. */
+const BODY_REFUSALS: Record<string, [number, string]> = {
+  'entity.parse.failed': [400, 'The request body is not valid JSON.'],
+  'entity.too.large': [413, 'The request body is too large.'],
+  'charset.unsupported': [415, 'The request body must be JSON in UTF-8.'],
+  'encoding.unsupported': [415, 'The request body is compressed in a way the server does not read. Send it plain, or as gzip, deflate or br.'],
+};
+const NOT_DECOMPRESSIBLE: [number, string] = [400, 'The request body is not the compressed data its Content-Encoding says.'];
+
+/** The body parser's refusal behind an error, whether Nest's Express adapter wrapped it in an HttpException or not. */
+function bodyRefusal(exception: unknown): [number, string] | null {
+  const err = (exception instanceof HttpException ? exception.cause : exception) as { type?: unknown; code?: unknown } | undefined;
+  if (typeof err?.type === 'string' && Object.prototype.hasOwnProperty.call(BODY_REFUSALS, err.type)) return BODY_REFUSALS[err.type]!;
+  if (typeof err?.code === 'string' && err.code.startsWith('Z_')) return NOT_DECOMPRESSIBLE;
+  return null;
+}
+
+const errorBody = (statusCode: number, message: string | string[]) => ({ statusCode, message, error: STATUS_CODES[statusCode] ?? 'Error' });
 
 /**
- * Keeps Nest's error body for HTTP errors, answers a request body that is not JSON with 400 instead of a bare page,
- * and logs anything unexpected before answering 500.
+ * Keeps Nest's `{ statusCode, message, error }` body for every HTTP error (also those Nest makes from a plain
+ * string), answers what the body parser refuses in our words instead of its own, and logs anything unexpected
+ * before answering 500.
  */
 @Catch()
 export class BodyErrorFilter implements ExceptionFilter {
@@ -11,19 +32,18 @@ export class BodyErrorFilter implements ExceptionFilter {
 
   catch(exception: unknown, host: ArgumentsHost): void {
     const res = host.switchToHttp().getResponse<Response>();
-    if (exception instanceof HttpException) {
-      const body = exception.getResponse();
-      res.status(exception.getStatus()).json(typeof body === 'string' ? { statusCode: exception.getStatus(), message: body } : body);
+    const refusal = bodyRefusal(exception);
+    if (refusal) {
+      res.status(refusal[0]).json(errorBody(...refusal));
       return;
     }
-    const err = exception as { type?: string; status?: number; message?: string };
-    if (err?.type === 'entity.parse.failed' || err?.type === 'entity.too.large' || err?.status === 400 || err?.status === 413) {
-      const status = err.status === 413 ? HttpStatus.PAYLOAD_TOO_LARGE : HttpStatus.BAD_REQUEST;
-      const message = status === 413 ? 'The request body is too large.' : 'The request body is not valid JSON.';
-      res.status(status).json({ statusCode: status, message, error: status === 413 ? 'Payload Too Large' : 'Bad Request' });
+    if (exception instanceof HttpException) {
+      const status = exception.getStatus();
+      const body = exception.getResponse();
+      res.status(status).json(typeof body === 'string' ? errorBody(status, body) : body);
       return;
     }
     this.logger.error(exception instanceof Error ? exception.stack : String(exception));
-    res.status(500).json({ statusCode: 500, message: 'Something went wrong on our side. Please try again.', error: 'Internal Server Error' });
+    res.status(500).json(errorBody(500, 'Something went wrong on our side. Please try again.'));
   }
 }

@@ -1,6 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
 import { IsBoolean, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min } from 'class-validator';
+import { MAX_PAGE } from '../../common/records/page-query.dto.js';
 
 export class ListConflictsQueryDto {
   @ApiPropertyOptional({ default: false, description: 'true lists settled conflicts instead' })
@@ -17,7 +18,7 @@ export class ListConflictsQueryDto {
   @IsOptional() @IsUUID('all', { message: 'jobId must be the id of a job' })
   jobId?: string;
 
-  @ApiPropertyOptional({ default: 1 }) @IsOptional() @Type(() => Number) @IsInt() @Min(1)
+  @ApiPropertyOptional({ default: 1 }) @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(MAX_PAGE, { message: `page must be at most ${MAX_PAGE}` })
   page = 1;
 
   @ApiPropertyOptional({ default: 50 }) @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(200)

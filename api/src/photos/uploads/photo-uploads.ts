@@ -42,6 +42,8 @@ const PLAIN_WORDS = new Map<unknown, string>([
   [ERRORS.FILE_NO_LONGER_EXISTS, NO_SUCH_UPLOAD],
 ]);
 
+const callerFrom = (user: User): AuthUser => ({ id: user.id, organisationId: user.organisationId, role: user.role, email: user.email, name: user.name });
+
 /**
  * Resumable photo uploads (the tus 1.0 protocol) under /api/uploads: create, ask the offset (HEAD), send the rest
  * (PATCH). Every request carries the access token; an upload belongs to the user who created it. Unfinished uploads
@@ -81,10 +83,33 @@ export class PhotoUploads implements OnApplicationBootstrap, OnModuleDestroy {
     this.tus.on(EVENTS.POST_FINISH, (_req: unknown, _res: unknown, upload: Upload) => void this.discard(upload.id));
   }
 
-  onApplicationBootstrap(): void {
+  async onApplicationBootstrap(): Promise<void> {
+    // Before the app listens, so that a phone asking about its photo after a restart gets the final word.
+    await this.keepReceived().catch((err) => this.logger.warn(`Could not keep uploads received before a restart: ${err}`));
     const sweep = () => this.store.deleteExpired().catch((err) => this.logger.warn(`Could not clear old uploads: ${err}`));
     void sweep();
     this.sweeper = setInterval(sweep, 6 * 60 * 60 * 1000).unref();
+  }
+
+  /**
+   * Keeps (or refuses) uploads whose bytes all arrived but that a previous process was stopped in the middle of
+   * checking. Left alone, the phone's tus client finds the upload complete and asks nothing more, while the server
+   * never held the photo.
+   */
+  private async keepReceived(): Promise<void> {
+    for (const id of (await this.store.configstore.list?.()) ?? []) {
+      const upload = await this.store.getUpload(id).catch(() => null);
+      if (!upload || upload.size === undefined || upload.offset !== upload.size) continue;
+      const { userId, organisationId, sha256 } = upload.metadata ?? {};
+      const user = userId && organisationId ? await this.users.findOneBy({ id: userId, organisationId }) : null;
+      try {
+        if (user?.active && isSha256(sha256)) await this.photos.acceptUpload(callerFrom(user), sha256, await readFile(join(this.config.uploadDirectory, id)));
+      } catch (err) {
+        // Refused, it goes as it would have; anything else leaves it for the next start (the phone sends it again meanwhile).
+        if (!(err instanceof PhotoRefused)) throw err;
+      }
+      await this.discard(id);
+    }
   }
 
   onModuleDestroy(): void {
@@ -124,7 +149,7 @@ export class PhotoUploads implements OnApplicationBootstrap, OnModuleDestroy {
     }
     const user = await this.users.findOneBy({ id: payload.sub, organisationId: payload.org });
     if (!user || !user.active) return SESSION_ENDED;
-    return { id: user.id, organisationId: user.organisationId, role: user.role, email: user.email, name: user.name };
+    return callerFrom(user);
   }
 
   private async ownerOf(id: string): Promise<string | null> {

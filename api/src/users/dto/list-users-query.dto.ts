@@ -2,6 +2,7 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 import { type Role, ROLES } from '../entities/user.entity.js';
+import { MAX_PAGE } from '../../common/records/page-query.dto.js';
 
 export class ListUsersQueryDto {
   @ApiPropertyOptional({ description: 'matches name or e-mail' })
@@ -13,7 +14,7 @@ export class ListUsersQueryDto {
   role?: Role;
 
   @ApiPropertyOptional({ default: 1 })
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1)
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(MAX_PAGE, { message: `page must be at most ${MAX_PAGE}` })
   page = 1;
 
   @ApiPropertyOptional({ default: 50 })

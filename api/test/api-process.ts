@@ -1,0 +1,135 @@
+import { type ChildProcess, spawn, spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import http from 'node:http';
+import { createServer, type AddressInfo } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+
+const API_DIR = resolve(import.meta.dirname, '..');
+
+/**
+ * The built API (dist/) as its own process on a throwaway directory, as in production: started, killed with
+ * SIGKILL and started again on the same database, photo and upload directories.
+ */
+export class ApiProcess {
+  readonly directory = mkdtempSync(join(tmpdir(), 'wiretrail-process-'));
+  readonly origin: string;
+  /** Where the API answers; uploads' addresses are relative to the origin. */
+  readonly base: string;
+  readonly env: NodeJS.ProcessEnv;
+  starts = 0;
+  private child: ChildProcess | null = null;
+
+  /** On a port the system says is free, kept across restarts so that a client's addresses stay good. */
+  static async create(env: Record<string, string> = {}): Promise<ApiProcess> {
+    const probe = createServer();
+    const port = await new Promise<number>((resolve) => probe.listen(0, '127.0.0.1', () => resolve((probe.address() as AddressInfo).port)));
+    await new Promise((resolve) => probe.close(resolve));
+    return new ApiProcess(port, env);
+  }
+
+  private constructor(readonly port: number, env: Record<string, string>) {
+    this.origin = `http://127.0.0.1:${port}`;
+    this.base = `${this.origin}/api`;
+    this.env = {
+      ...process.env,
+      NODE_ENV: 'production',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      DATABASE_PATH: join(this.directory, 'wiretrail.sqlite'),
+      JWT_SECRET: 'process-test-secret-long-enough-for-signing-tokens',
+      SIGN_IN_RATE_LIMIT: '1000',
+      ...env,
+    };
+  }
+
+  get databasePath(): string {
+    return this.env.DATABASE_PATH!;
+  }
+
+  get running(): boolean {
+    return this.child !== null;
+  }
+
+  /** Migrates and loads the demo data, as `npm start` does on an empty database. */
+  prepare(): void {
+    for (const script of ['dist/database/migrate-cli.js', 'dist/database/seed-cli.js']) {
+      const r = spawnSync(process.execPath, [script], { cwd: API_DIR, env: this.env, encoding: 'utf8' });
+      if (r.status !== 0) throw new Error(r.stderr);
+    }
+  }
+
+  async start(): Promise<void> {
+    const child = spawn(process.execPath, ['dist/main.js'], { cwd: API_DIR, env: this.env, stdio: ['ignore', 'ignore', 'pipe'] });
+    let stderr = '';
+    child.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
+    this.child = child;
+    this.starts++;
+    for (let i = 0; i < 200; i++) {
+      if (child.exitCode !== null) break;
+      try {
+        if ((await this.request('GET', '/api/health')).status === 200) return;
+      } catch {
+        // not listening yet
+      }
+      await new Promise((r) => setTimeout(r, 50));
+    }
+    throw new Error(`the API did not start: ${stderr}`);
+  }
+
+  /**
+   * One request (to a path as given, `/api/…` for the API) on a connection of its own: a pooled connection to a killed process would fail the next request
+   * after a restart. Rejects when the connection drops, as a phone's request does.
+   */
+  request(method: string, path: string, options: { headers?: Record<string, string>; body?: Buffer | string | object } = {}): Promise<Answer> {
+    const json = options.body !== undefined && !Buffer.isBuffer(options.body) && typeof options.body !== 'string';
+    const body = json ? JSON.stringify(options.body) : (options.body as Buffer | string | undefined);
+    const headers = { ...(json ? { 'content-type': 'application/json' } : {}), ...options.headers };
+    return new Promise((resolve, reject) => {
+      const req = http.request({ host: '127.0.0.1', port: this.port, method, path, headers, agent: false }, (res) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('error', reject);
+        res.on('aborted', () => reject(new Error('the answer was cut off')));
+        res.on('end', () => {
+          const text = Buffer.concat(chunks).toString('utf8');
+          const isJson = /json/.test(String(res.headers['content-type']));
+          resolve({ status: res.statusCode!, headers: res.headers, text, body: isJson && text ? JSON.parse(text) : undefined });
+        });
+      });
+      req.on('error', reject);
+      req.end(body);
+    });
+  }
+
+  /** SIGKILL: no shutdown hook runs, nothing is flushed, as when the machine loses power to the process. */
+  kill(): Promise<void> {
+    const child = this.child;
+    this.child = null;
+    if (!child || child.exitCode !== null) return Promise.resolve();
+    return new Promise((r) => {
+      child.once('exit', () => r());
+      child.kill('SIGKILL');
+    });
+  }
+
+  async remove(): Promise<void> {
+    await this.kill();
+    rmSync(this.directory, { recursive: true, force: true });
+  }
+}
+
+export interface Answer {
+  status: number;
+  headers: http.IncomingHttpHeaders;
+  text: string;
+  /** The parsed JSON body, when the answer was JSON. */
+  body: any;
+}
+
+/** Signs in against a running process and returns the headers every later request carries. */
+export async function signInTo(api: ApiProcess, email: string): Promise<{ headers: Record<string, string>; userId: string }> {
+  const res = await api.request('POST', '/api/auth/sign-in', { body: { email, password: 'wiretrail-demo' } });
+  if (res.status !== 200) throw new Error(`sign-in answered ${res.status}`);
+  return { headers: { authorization: `Bearer ${res.body.accessToken}` }, userId: res.body.user.id };
+}

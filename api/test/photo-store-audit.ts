@@ -1,0 +1,99 @@
+import { PHOTO_VARIANTS } from '@wiretrail/core';
+import type Database from 'better-sqlite3';
+import { createHash } from 'node:crypto';
+import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
+import { join, relative } from 'node:path';
+import sharp from 'sharp';
+
+export interface PhotoStoreAudit {
+  originals: number;
+  readyRows: number;
+  /** Files written aside by a process killed before it could rename them; never under a real name. */
+  leftovers: string[];
+  /** Uploads in progress, waiting for their owner to resume them. */
+  unfinishedUploads: number;
+  problems: string[];
+}
+
+function filesUnder(dir: string): string[] {
+  if (!existsSync(dir)) return [];
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? filesUnder(join(dir, e.name)) : [join(dir, e.name)]));
+}
+
+const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+
+/**
+ * Reads what the server stored, behind its back: every original re-hashes to its name, every blob row has its
+ * original and both sizes (decodable, no larger than they should be), every photo row marked ready has its bytes and
+ * its sizes, and no upload whose bytes all arrived was left without being kept or refused.
+ */
+export async function auditPhotoStore(db: Database.Database, photoDir: string, uploadDir: string): Promise<PhotoStoreAudit> {
+  const problems: string[] = [];
+  const leftovers: string[] = [];
+  let originals = 0;
+  for (const file of filesUnder(photoDir)) {
+    const name = relative(photoDir, file);
+    if (name.endsWith('.partial')) {
+      leftovers.push(name);
+      continue;
+    }
+    const [, hash, variant] = name.split('/');
+    if (variant !== 'original') continue;
+    originals++;
+    if (sha256(readFileSync(file)) !== hash) problems.push(`${name} does not hash to its name`);
+  }
+
+  const blobs = db.prepare('SELECT organisationId, sha256, bytes, width, height FROM photo_blob').all() as Array<{ organisationId: string; sha256: string; bytes: number; width: number; height: number }>;
+  for (const b of blobs) {
+    const folder = join(photoDir, b.organisationId, b.sha256);
+    if (!existsSync(join(folder, 'original'))) {
+      problems.push(`blob ${b.sha256} has no original`);
+      continue;
+    }
+    const original = readFileSync(join(folder, 'original'));
+    if (original.length !== b.bytes) problems.push(`blob ${b.sha256} records ${b.bytes} bytes, its original has ${original.length}`);
+    const meta = await sharp(original).metadata();
+    const upright = meta.autoOrient ?? { width: meta.width, height: meta.height };
+    if (upright.width !== b.width || upright.height !== b.height) problems.push(`blob ${b.sha256} records ${b.width}×${b.height}, its original is ${upright.width}×${upright.height}`);
+    for (const variant of ['thumb', 'display'] as const) {
+      const path = join(folder, `${variant}.webp`);
+      if (!existsSync(path)) {
+        problems.push(`blob ${b.sha256} has no ${variant}`);
+        continue;
+      }
+      try {
+        // Decoding every pixel, so that a file cut short shows.
+        const { info } = await sharp(path, { failOn: 'error' }).raw().toBuffer({ resolveWithObject: true });
+        if (Math.max(info.width, info.height) > PHOTO_VARIANTS[variant]) problems.push(`${variant} of ${b.sha256} is ${info.width}×${info.height}`);
+      } catch (err) {
+        problems.push(`${variant} of ${b.sha256} does not decode: ${(err as Error).message}`);
+      }
+    }
+  }
+  const held = new Set(blobs.map((b) => `${b.organisationId}/${b.sha256}`));
+
+  const ready = db
+    .prepare(`SELECT id, organisationId, sha256, sizeBytes, width, height FROM photo WHERE uploadState = 'ready' AND deletedAt IS NULL`)
+    .all() as Array<{ id: string; organisationId: string; sha256: string; sizeBytes: number | null; width: number | null; height: number | null }>;
+  for (const p of ready) {
+    if (!held.has(`${p.organisationId}/${p.sha256}`)) problems.push(`photo ${p.id} is marked ready without its bytes`);
+    if (p.sizeBytes == null || p.width == null || p.height == null) problems.push(`photo ${p.id} is marked ready without its sizes`);
+  }
+
+  let unfinishedUploads = 0;
+  for (const file of existsSync(uploadDir) ? readdirSync(uploadDir) : []) {
+    if (!file.endsWith('.json')) continue;
+    const id = file.slice(0, -'.json'.length);
+    let info: { size?: number } = {};
+    try {
+      info = JSON.parse(readFileSync(join(uploadDir, file), 'utf8')) as { size?: number };
+    } catch {
+      // Cut short while being created: the phone never got its address and started another.
+      continue;
+    }
+    const received = existsSync(join(uploadDir, id)) ? statSync(join(uploadDir, id)).size : 0;
+    if (info.size !== undefined && received >= info.size) problems.push(`upload ${id} holds all its ${info.size} bytes but was never kept or refused`);
+    else unfinishedUploads++;
+  }
+  return { originals, readyRows: ready.length, leftovers, unfinishedUploads, problems };
+}
