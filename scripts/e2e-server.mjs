@@ -3,12 +3,13 @@
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { build, prepareDatabase, root, startChild } from './lib.mjs';
+import { build, paymentsSettings, prepareDatabase, root, startChild } from './lib.mjs';
 
 const port = process.env.E2E_PORT ?? '3100';
-// Mail ports follow the web port, so two test runs on one machine do not collide.
+// Mail and payment ports follow the web port, so two test runs on one machine do not collide.
 const smtpPort = String(Number(port) + 1000);
 const mailHttpPort = String(Number(port) + 1001);
+const paymentsPort = Number(port) + 1002;
 if (!existsSync(join(root, 'api/dist/main.js')) || !existsSync(join(root, 'web/dist/index.html'))) build();
 
 const dir = mkdtempSync(join(tmpdir(), 'wiretrail-e2e-'));
@@ -21,10 +22,14 @@ const env = {
   WEB_DIST: join(root, 'web/dist'),
   SIGN_IN_RATE_LIMIT: '500',
   SMTP_PORT: smtpPort,
+  PUBLIC_URL: `http://127.0.0.1:${port}`,
 };
+const payments = paymentsSettings({ dataDir: dir, fakePort: paymentsPort, fakeOnly: true });
+Object.assign(env, payments.env);
 prepareDatabase(env);
 const children = [
   startChild('Mail fake', 'node', ['scripts/mail-fake.mjs'], { SMTP_PORT: smtpPort, MAIL_FAKE_HTTP_PORT: mailHttpPort }),
+  ...(payments.startFake ? [payments.startFake(`http://127.0.0.1:${port}`)] : []),
   startChild('API', 'node', ['api/dist/main.js'], env),
 ];
 const stop = () => {

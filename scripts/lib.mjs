@@ -27,13 +27,41 @@ export function build() {
   run('npm', ['run', 'build']);
 }
 
-/** A per-installation signing secret, made once and kept beside the database, never in the repository. */
-export function jwtSecret(dataDir) {
-  if (process.env.JWT_SECRET) return process.env.JWT_SECRET;
+/** A secret made once per installation and kept beside the database, never in the repository. */
+function installationSecret(dataDir, file, prefix = '') {
   mkdirSync(dataDir, { recursive: true });
-  const file = join(dataDir, 'jwt-secret');
-  if (!existsSync(file)) writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
-  return readFileSync(file, 'utf8').trim();
+  const path = join(dataDir, file);
+  if (!existsSync(path)) writeFileSync(path, prefix + randomBytes(48).toString('base64url'), { mode: 0o600 });
+  return readFileSync(path, 'utf8').trim();
+}
+
+/** The API's token-signing secret. */
+export function jwtSecret(dataDir) {
+  return process.env.JWT_SECRET || installationSecret(dataDir, 'jwt-secret');
+}
+
+/**
+ * Card payments: a real provider when PAYMENTS_API_KEY is set, otherwise the local fake on `fakePort`, with a
+ * webhook secret made once per installation (always the fake with fakeOnly, for tests). Returns the API's settings
+ * and, for the fake, how to start it.
+ */
+export function paymentsSettings({ dataDir, fakePort, fakeOnly = false }) {
+  if (process.env.PAYMENTS_API_KEY && !fakeOnly) {
+    return { env: Object.fromEntries(['PAYMENTS_API_KEY', 'PAYMENTS_WEBHOOK_SECRET', 'PAYMENTS_API_URL'].filter((k) => process.env[k]).map((k) => [k, process.env[k]])), fakeUrl: null };
+  }
+  const secret = installationSecret(dataDir, 'payments-webhook-secret', 'whsec_');
+  const fakeUrl = `http://127.0.0.1:${fakePort}`;
+  return {
+    // The fake takes any well-formed test key; this one opens nothing anywhere else.
+    env: { PAYMENTS_API_KEY: 'sk_test_wiretrail_local_fake', PAYMENTS_WEBHOOK_SECRET: secret, PAYMENTS_API_URL: fakeUrl },
+    fakeUrl,
+    startFake: (apiUrl) =>
+      startChild('Payments fake', 'node', ['scripts/payments-fake.mjs'], {
+        PAYMENTS_FAKE_PORT: String(fakePort),
+        PAYMENTS_WEBHOOK_URL: `${apiUrl}/api/payments/webhook`,
+        PAYMENTS_WEBHOOK_SECRET: secret,
+      }),
+  };
 }
 
 export function prepareDatabase(env) {

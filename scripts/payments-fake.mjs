@@ -202,6 +202,10 @@ export async function startPaymentsFake({ port = 0, host = '127.0.0.1', webhookU
     port: address.port,
     sessions,
     events,
+    /** Where events go: a test may learn the API's address only after the fake has started. */
+    setWebhookUrl: (url) => {
+      webhookUrl = url;
+    },
     /** Pays a session as the customer would on the page, for tests without a browser. */
     pay: async (sessionId, card = '4242424242424242') =>
       fetch(`${base}/checkout/${sessionId}/pay`, { method: 'POST', body: new URLSearchParams({ card }), redirect: 'manual' }),

@@ -1,14 +1,15 @@
 #!/usr/bin/env node
 // `npm start`: install if needed, build, migrate, load the demo data into an empty database,
-// start the mail fake and serve the product on one port.
+// start the mail and payments fakes and serve the product on one port.
 import { join, resolve } from 'node:path';
-import { build, DEMO_SIGN_INS, ensureDependencies, jwtSecret, prepareDatabase, root, startChild } from './lib.mjs';
+import { build, DEMO_SIGN_INS, ensureDependencies, jwtSecret, paymentsSettings, prepareDatabase, root, startChild } from './lib.mjs';
 
 const args = new Set(process.argv.slice(2));
 const port = Number(process.env.PORT ?? 3000);
 const databasePath = resolve(root, process.env.DATABASE_PATH ?? 'data/wiretrail.sqlite');
 const smtpPort = process.env.SMTP_PORT ?? '1025';
 const mailHttpPort = process.env.MAIL_FAKE_HTTP_PORT ?? '1080';
+const paymentsPort = Number(process.env.PAYMENTS_FAKE_PORT ?? 12111);
 
 ensureDependencies();
 if (!args.has('--no-build')) build();
@@ -23,17 +24,21 @@ const env = {
   SMTP_HOST: '127.0.0.1',
   SMTP_PORT: smtpPort,
 };
+const url = `http://localhost:${port}`;
+const payments = paymentsSettings({ dataDir: join(databasePath, '..'), fakePort: paymentsPort });
+Object.assign(env, payments.env);
 prepareDatabase(env);
 
 const children = [
   startChild('Mail fake', 'node', ['scripts/mail-fake.mjs'], { SMTP_PORT: smtpPort, MAIL_FAKE_HTTP_PORT: mailHttpPort }),
+  ...(payments.startFake ? [payments.startFake(`http://127.0.0.1:${port}`)] : []),
   startChild('API', 'node', ['api/dist/main.js'], env),
 ];
 
-const url = `http://localhost:${port}`;
 console.log(`
 Wiretrail is starting at ${url}   (API docs: ${url}/api/docs)
 Outgoing mail is caught at http://127.0.0.1:${mailHttpPort}/messages
+${payments.fakeUrl ? `Card payments go to a local stand-in for the provider at ${payments.fakeUrl} (any card pays; 4000 0000 0000 0002 is declined)` : 'Card payments go to the provider set by PAYMENTS_API_KEY'}
 Demo sign-ins, all with the password wiretrail-demo:
 ${DEMO_SIGN_INS.map(([role, email]) => `  ${email.padEnd(28)} ${role}`).join('\n')}
 Data: ${databasePath}   Stop with Ctrl+C.

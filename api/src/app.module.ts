@@ -15,19 +15,23 @@ import { CableRunsModule } from './cable-runs/cable-runs.module.js';
 import { PointChangesModule } from './point-changes/point-changes.module.js';
 import { TestResultsModule } from './test-results/test-results.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { CardPaymentsModule } from './card-payments/card-payments.module.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
 import { appConfig, authConfig, mailConfig } from './config/app.config.js';
 import { databaseConfig } from './config/database.config.js';
 import { documentsConfig } from './config/documents.config.js';
+import { paymentsConfig } from './config/payments.config.js';
 import { photosConfig } from './config/photos.config.js';
 import { validateEnvironment } from './config/env.validation.js';
 import { sqliteOptions } from './database/typeorm-options.js';
 import { ConflictsModule } from './conflicts/conflicts.module.js';
 import { DocumentsModule } from './documents/documents.module.js';
 import { HealthModule } from './health/health.module.js';
+import { InvoicesModule } from './invoices/invoices.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { PhotosModule } from './photos/photos.module.js';
+import { PricingModule } from './pricing/pricing.module.js';
 import { ShareLinksModule } from './share-links/share-links.module.js';
 import { SyncModule } from './sync/sync.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -59,7 +63,7 @@ function webAppModules(): DynamicModule[] {
       cache: true,
       ignoreEnvFile: process.env.NODE_ENV === 'test',
       validate: validateEnvironment,
-      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig, documentsConfig],
+      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig, documentsConfig, paymentsConfig],
     }),
     TypeOrmModule.forRootAsync({
       inject: [databaseConfig.KEY],
@@ -88,6 +92,9 @@ function webAppModules(): DynamicModule[] {
     PhotosModule,
     DocumentsModule,
     ShareLinksModule,
+    PricingModule,
+    InvoicesModule,
+    CardPaymentsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

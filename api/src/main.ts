@@ -6,7 +6,7 @@ import { AppModule } from './app.module.js';
 import { configureApp } from './app.setup.js';
 
 async function bootstrap(): Promise<void> {
-  const app = configureApp(await NestFactory.create(AppModule, { bufferLogs: false }));
+  const app = configureApp(await NestFactory.create(AppModule, { bufferLogs: false, rawBody: true }));
   app.enableShutdownHooks();
   const config = app.get(ConfigService);
   const port = config.getOrThrow<number>('app.port');

@@ -10,6 +10,8 @@ describe('authorisation matrix: every route × every role × own and other organ
   let larkfieldIds: string[];
   let larkfieldChanges: Array<{ entity: string; id: string }>;
   let larkfieldOrg: string;
+  /** Rows that do not sync (quotes, invoices, rates), read over REST: one of each kind. */
+  let larkfieldBilling: string[];
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -21,7 +23,12 @@ describe('authorisation matrix: every route × every role × own and other organ
     }
     const pulled = await t.http.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=matrix-office').set('authorization', `Bearer ${tokens.office}`);
     larkfieldChanges = pulled.body.changes as Array<{ entity: string; id: string }>;
-    larkfieldIds = larkfieldChanges.map((c) => c.id);
+    const office = { authorization: `Bearer ${tokens.office}` };
+    const invoices = (await t.http.get('/api/invoices').set(office)).body.items as Array<{ id: string; kind: string }>;
+    const [vat, labour] = await Promise.all(['/api/vat-rates', '/api/labour-rates'].map(async (path) => (await t.http.get(path).set(office)).body.items as Array<{ id: string }>));
+    larkfieldBilling = [...new Map(invoices.map((i) => [i.kind, i.id])).values(), vat![0]!.id, labour![0]!.id];
+    expect(larkfieldBilling).toHaveLength(4);
+    larkfieldIds = [...larkfieldChanges.map((c) => c.id), ...larkfieldBilling];
   });
   afterAll(() => t.close());
 
@@ -40,6 +47,14 @@ describe('authorisation matrix: every route × every role × own and other organ
       'get /api/shared/:token', 'get /api/shared/:token/photos/:photoId/thumb', 'get /api/shared/:token/photos/:photoId/display', 'get /api/shared/:token/documents/:documentId/pdf',
       'get /api/jobs/status-counts', 'get /api/cable-runs', 'get /api/cable-runs/:id', 'patch /api/cable-runs/:id',
       'get /api/point-changes', 'get /api/point-changes/:id', 'get /api/test-results', 'get /api/test-results/:id',
+      'get /api/price-items', 'get /api/price-items/:id', 'post /api/price-items', 'patch /api/price-items/:id',
+      'get /api/vat-rates', 'post /api/vat-rates', 'patch /api/vat-rates/:id', 'get /api/labour-rates', 'post /api/labour-rates', 'patch /api/labour-rates/:id',
+      'get /api/billing-terms', 'patch /api/billing-terms',
+      'get /api/jobs/:id/invoices', 'post /api/jobs/:id/invoices', 'get /api/invoices', 'get /api/invoices/aged-debt', 'get /api/invoices/:id', 'patch /api/invoices/:id',
+      'delete /api/invoices/:id', 'post /api/invoices/:id/issue', 'post /api/invoices/:id/credit-note', 'get /api/invoices/:id/pdf', 'post /api/invoices/:id/send',
+      'post /api/invoices/:id/payments',
+      'get /api/shared/:token/invoices', 'get /api/shared/:token/invoices/:invoiceId/pdf', 'post /api/shared/:token/invoices/:invoiceId/checkout',
+      'post /api/payments/webhook',
     ]) {
       expect(paths).toContain(expected);
     }
@@ -50,9 +65,32 @@ describe('authorisation matrix: every route × every role × own and other organ
     expect(routes.length).toBeGreaterThan(35);
     // Deny by default: every route names its roles or is public.
     expect(routes.filter((r) => !r.isPublic && !r.roles)).toEqual([]);
-    // Documents and share links are the office's; technicians see document rows through sync only.
-    for (const r of routes.filter((x) => /\/(documents|share-links)\b/.test(x.path) && !x.isPublic)) expect(r.roles).toEqual(['office', 'admin']);
-    expect(routes.filter((r) => r.isPublic && r.path.startsWith('/api/shared')).map((r) => r.method)).toEqual(['get', 'get', 'get', 'get']);
+    // Documents, share links and money are the office's; technicians see document rows and the price list through sync only.
+    for (const r of routes.filter((x) => /\/(documents|share-links|invoices|price-items|vat-rates|labour-rates|billing-terms)\b/.test(x.path) && !x.isPublic)) {
+      expect([`${r.method} ${r.path}`, r.roles]).toEqual([`${r.method} ${r.path}`, ['office', 'admin']]);
+    }
+    // What anyone may reach without an account: sign-in and health, a customer's link, and the payment provider's signed events.
+    expect(routes.filter((r) => r.isPublic && !r.path.startsWith('/api/auth') && r.path !== '/api/health').map((r) => `${r.method} ${r.path}`).sort()).toEqual([
+      'get /api/shared/:token',
+      'get /api/shared/:token/documents/:documentId/pdf',
+      'get /api/shared/:token/invoices',
+      'get /api/shared/:token/invoices/:invoiceId/pdf',
+      'get /api/shared/:token/photos/:photoId/display',
+      'get /api/shared/:token/photos/:photoId/thumb',
+      'post /api/payments/webhook',
+      'post /api/shared/:token/invoices/:invoiceId/checkout',
+    ]);
+  });
+
+  it('takes nothing unsigned at the payment webhook, and says nothing of any organisation', async () => {
+    for (const token of [null, tokens.admin!]) {
+      const req = t.http.post('/api/payments/webhook').set('stripe-signature', 't=1,v1=00');
+      const res = await (token ? req.set('authorization', `Bearer ${token}`) : req).send({ id: 'evt_made_up', type: 'checkout.session.completed' });
+      // Card payments are not set up in this app, so nothing can be verified: refused before anything is read.
+      expect(res.status).toBe(503);
+      expect(res.body).toMatchObject({ statusCode: 503, message: expect.stringContaining('not set up') });
+      expect(JSON.stringify(res.body)).not.toContain(larkfieldOrg);
+    }
   });
 
   it("answers a customer's share route with a made-up token with 404 and no data, signed in or not", async () => {
@@ -61,7 +99,7 @@ describe('authorisation matrix: every route × every role × own and other organ
       for (const token of [null, tokens.admin!, tokens.otherAdmin!]) {
         // A link-shaped token and one of another shape; photo and document ids are well-formed ids of nothing.
         for (const made of ['A'.repeat(43), 'not-a-link']) {
-          const req = t.http.get(fillPath(r.path.replace(':token', made), '01890000-0000-7000-8000-000000000000'));
+          const req = t.http[r.method](fillPath(r.path.replace(':token', made), '01890000-0000-7000-8000-000000000000'));
           const res = await (token ? req.set('authorization', `Bearer ${token}`) : req);
           if (res.status !== 404) failures.push(`${r.method} ${r.path} with ${made} → ${res.status}`);
           if (JSON.stringify(res.body).includes(larkfieldOrg)) failures.push(`${r.path} leaked Larkfield's organisation id`);
@@ -111,7 +149,7 @@ describe('authorisation matrix: every route × every role × own and other organ
     const sampleIds = [...new Map(larkfieldChanges.map((c) => [c.entity, c.id])).values()];
     for (const r of routes.filter((x) => !x.isPublic && x.path.includes(':') && x.roles!.includes('admin'))) {
       // The organisation and a sample of each kind of row stand for all of Larkfield's ids.
-      for (const id of [larkfieldOrg, ...sampleIds]) {
+      for (const id of [larkfieldOrg, ...sampleIds, ...larkfieldBilling]) {
         const res = await send(r, tokens.otherAdmin!, id);
         if (res.status < 400 || res.status >= 500) failures.push(`${r.method} ${fillPath(r.path, id)} → ${res.status}`);
         if (JSON.stringify(res.body).includes(larkfieldOrg)) failures.push(`${r.method} ${r.path} leaked Larkfield's organisation id`);
@@ -121,7 +159,7 @@ describe('authorisation matrix: every route × every role × own and other organ
     for (const r of routes.filter((x) => x.method === 'get' && !x.path.includes(':') && !x.isPublic && x.roles!.includes('admin'))) {
       const res = await t.http.get(r.path === '/api/sync/pull' ? `${r.path}?checkpoint=0&deviceId=matrix-oakmere` : r.path).set('authorization', `Bearer ${tokens.otherAdmin}`);
       expect(JSON.stringify(res.body)).not.toContain(larkfieldOrg);
-      for (const id of larkfieldIds.slice(0, 200)) expect(JSON.stringify(res.body)).not.toContain(id);
+      for (const id of [...larkfieldIds.slice(0, 200), ...larkfieldBilling]) expect(JSON.stringify(res.body)).not.toContain(id);
     }
   }, 120_000);
 

@@ -4,6 +4,7 @@ import { fillPath, type Route, routesOf } from './app-routes.js';
 import { anyBody, dtoObject, type IdPool, pathValue, queryString, syncPush } from './request-arbitraries.js';
 import { DeviceMirror } from './sync-helpers.js';
 import { badAnswer, createTestApp, signIn, type TestApp } from './test-app.js';
+import { type PaymentsFake, startPaymentsFake } from '../../scripts/payments-fake.mjs';
 
 /**
  * Property-based fuzzing of every route the app serves: bodies and query strings generated from each handler's own
@@ -18,6 +19,7 @@ describe('bad input: generated requests on every route never break the API', () 
   let t: TestApp;
   let routes: Route[];
   let pool: IdPool;
+  let fake: PaymentsFake;
   const tokens: Record<string, string> = {};
   let adminId: string;
   const foreign: string[] = [];
@@ -25,8 +27,10 @@ describe('bad input: generated requests on every route never break the API', () 
   const counts = { requests: 0, refused: 0, accepted: 0, mutations: 0 };
 
   beforeAll(async () => {
-    // Share links are rate-limited per address; every generated request here comes from one.
-    t = await createTestApp({ SHARE_RATE_LIMIT: '100000' });
+    // Share links are rate-limited per address; every generated request here comes from one. Card payments are
+    // set up against the local fake, so that the webhook and checkout routes reach their own checks.
+    fake = await startPaymentsFake({ webhookSecret: 'whsec_wiretrail_fuzz' });
+    t = await createTestApp({ SHARE_RATE_LIMIT: '100000', PAYMENTS_API_KEY: 'sk_test_wiretrail_fuzz', PAYMENTS_WEBHOOK_SECRET: 'whsec_wiretrail_fuzz', PAYMENTS_API_URL: fake.url });
     routes = routesOf(t);
     for (const [role, email] of [['admin', 'admin@larkfield.example'], ['office', 'office@larkfield.example'], ['technician', 'tech1@larkfield.example'], ['oakmere', 'admin@oakmere.example']] as const) {
       const s = await signIn(t, email);
@@ -52,6 +56,8 @@ describe('bad input: generated requests on every route never break the API', () 
   afterAll(async () => {
     console.log(`bad input: seed ${SEED}; ${counts.requests} generated requests (${counts.mutations} sync mutations), ${counts.refused} refused with a message, ${counts.accepted} accepted; 5xx found: 0`);
     await t.close();
+    await fake.close();
+    for (const key of ['PAYMENTS_API_KEY', 'PAYMENTS_WEBHOOK_SECRET', 'PAYMENTS_API_URL']) delete process.env[key];
   });
 
   /** The signed-in person who may use the route (so that requests reach validation and the service), or nobody. */

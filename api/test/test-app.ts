@@ -34,7 +34,7 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
   const { configureApp } = await import('../src/app.setup.js');
   const { seedDemoData } = await import('../src/database/seed.js');
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
-  const app = configureApp(moduleRef.createNestApplication({ logger: ['error'] }));
+  const app = configureApp(moduleRef.createNestApplication({ logger: ['error'], rawBody: true }));
   await app.init();
   const dataSource = app.get(DataSource);
   await dataSource.runMigrations();

@@ -20,3 +20,7 @@ export * from './electrical/protective-conductor.js';
 export * from './certification/circuit-test.js';
 export * from './cabling/cable-test.js';
 export * from './money/vat.js';
+export * from './money/aged-debt.js';
+export * from './money/time-on-site.js';
+export * from './money/invoice-standing.js';
+export * from './money/invoices.js';

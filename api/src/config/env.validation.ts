@@ -1,5 +1,5 @@
 import { plainToInstance, Type } from 'class-transformer';
-import { IsEmail, IsIn, IsInt, IsOptional, IsString, IsUrl, Max, Min, MinLength, ValidateIf, validateSync } from 'class-validator';
+import { IsEmail, IsIn, IsInt, IsOptional, IsString, IsUrl, Matches, Max, Min, MinLength, ValidateIf, validateSync } from 'class-validator';
 
 /** Every environment variable the API reads. Boot fails with a list of what is wrong. */
 export class EnvironmentVariables {
@@ -99,6 +99,17 @@ export class EnvironmentVariables {
 
   @IsOptional() @IsString()
   S3_SECRET_ACCESS_KEY?: string;
+
+  @IsOptional() @Matches(/^(sk|rk)_(test|live)_\w+$/, { message: 'PAYMENTS_API_KEY must be a secret API key such as sk_test_…' })
+  PAYMENTS_API_KEY?: string;
+
+  @ValidateIf((env: EnvironmentVariables) => !!env.PAYMENTS_API_KEY)
+  @IsString({ message: 'PAYMENTS_WEBHOOK_SECRET is required with PAYMENTS_API_KEY (the signing secret of the webhook endpoint, whsec_…)' })
+  @MinLength(8, { message: 'PAYMENTS_WEBHOOK_SECRET is required with PAYMENTS_API_KEY (the signing secret of the webhook endpoint, whsec_…)' })
+  PAYMENTS_WEBHOOK_SECRET?: string;
+
+  @IsOptional() @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] }, { message: 'PAYMENTS_API_URL must be a URL such as http://127.0.0.1:12111' })
+  PAYMENTS_API_URL?: string;
 }
 
 export function validateEnvironment(config: Record<string, unknown>): EnvironmentVariables {

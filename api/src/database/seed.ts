@@ -1,13 +1,24 @@
-import { formatHlc, type Mutation, type SyncEntityName } from '@wiretrail/core';
+import { formatHlc, localDate, type Mutation, type OfficePaymentMethod, type SyncEntityName, UK_VAT_RATES } from '@wiretrail/core';
 import { readFile } from 'node:fs/promises';
 import { resolve as resolvePath } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import { hashPassword } from '../auth/password.js';
+import { documentsConfig } from '../config/documents.config.js';
+import { paymentsConfig } from '../config/payments.config.js';
 import { photosConfig } from '../config/photos.config.js';
+import { loadJobFile } from '../documents/document-content.js';
+import { Payment } from '../invoices/entities/payment.entity.js';
+import { issueDraft, saveDraft } from '../invoices/invoice-issue.js';
+import { createInvoiceStorage } from '../invoices/invoice-storage.js';
+import type { LineDraft } from '../invoices/invoice-lines.js';
+import { linesFromJob } from '../invoices/job-billing.js';
+import { LabourRate } from '../pricing/entities/labour-rate.entity.js';
+import { VatRate } from '../pricing/entities/vat-rate.entity.js';
+import { loadRateBook } from '../pricing/rate-book.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
-import { createPhotoStorage, type PhotoStorage } from '../photos/storage/photo-storage.js';
+import { createPhotoStorage, type FileStorage, type PhotoStorage } from '../photos/storage/photo-storage.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
@@ -34,9 +45,28 @@ interface Scenario {
     email?: string;
     registrationNumber?: string;
     timeZone?: string;
+    vatNumber?: string;
+    paymentTermsDays?: number;
+    quoteValidDays?: number;
+    paymentTerms?: string;
+    paymentInstructions?: string;
+    labourRates?: Array<{ name: string; hourlyMinor: number; vatRateCode: string; isDefault?: boolean }>;
     users: Array<{ email: string; name: string; role: Role }>;
     records?: ScenarioRecord[];
+    invoices?: ScenarioInvoice[];
   }>;
+}
+
+/** A quote or invoice issued on a past day: the job's labour and parts if fromJob, its own lines, and payments received since. */
+interface ScenarioInvoice {
+  job: string;
+  kind: 'quote' | 'invoice';
+  fromJob?: boolean;
+  issuedAt: string;
+  by: string;
+  lines?: Array<Omit<LineDraft, 'unit'> & { unit?: string }>;
+  notes?: string;
+  payments?: Array<{ amountMinor: number; method: OfficePaymentMethod; receivedAt: string; reference?: string }>;
 }
 
 export const DEFAULT_SCENARIO = new URL('../../../seed/scenario.json', import.meta.url);
@@ -69,6 +99,40 @@ function resolve(value: unknown, ids: Map<string, string>, users: Map<string, st
 
 const imageName = (value: unknown) => (typeof value === 'string' && value.startsWith('@image:') ? value.slice(7) : null);
 
+interface Resolving {
+  ids: Map<string, string>;
+  users: Map<string, string>;
+  names: Map<string, string>;
+  today: Date;
+  images: Map<string, DemoImage>;
+  storage: FileStorage;
+}
+
+/** Issues a scenario invoice the way the office would have on its day: built from the job, priced, numbered, printed. */
+async function seedInvoice(em: EntityManager, organisationId: string, inv: ScenarioInvoice, r: Resolving): Promise<void> {
+  const at = (value: string) => new Date(resolve(value, r.ids, r.users, r.today, r.images) as string);
+  const jobId = r.ids.get(`job:${inv.job}`);
+  const issuerId = r.users.get(inv.by);
+  if (!jobId || !issuerId) throw new Error(`Scenario invoice names an unknown job or user: ${inv.job}, ${inv.by}`);
+  const file = await loadJobFile(em, organisationId, jobId);
+  const built = inv.fromJob ? await linesFromJob(em, file, await loadRateBook(em, organisationId)) : { lines: [], warnings: [] };
+  if (built.warnings.length) throw new Error(`Scenario invoice for ${inv.job} cannot be priced: ${built.warnings.join(' ')}`);
+  const invoice = await saveDraft(em, {
+    organisationId,
+    jobId,
+    kind: inv.kind,
+    createdById: issuerId,
+    drafts: [...built.lines, ...(inv.lines ?? []).map((l) => ({ ...l, unit: l.unit ?? null }))],
+    termDays: inv.kind === 'quote' ? file.organisation.quoteValidDays : file.organisation.paymentTermsDays,
+  });
+  invoice.notes = inv.notes ?? null;
+  await issueDraft(em, { invoice, issuer: { id: issuerId, name: r.names.get(inv.by)! }, now: at(inv.issuedAt), storage: r.storage, cardPayments: !!paymentsConfig().apiKey });
+  for (const p of inv.payments ?? []) {
+    const receivedOn = localDate(at(p.receivedAt), file.organisation.timeZone);
+    await em.save(em.create(Payment, { organisationId, invoiceId: invoice.id, amountMinor: p.amountMinor, method: p.method, receivedOn, reference: p.reference ?? null, note: null, recordedById: issuerId, checkoutSessionId: null }));
+  }
+}
+
 /**
  * Loads the demo scenario into an empty database; returns false (and changes nothing) when data exists.
  * Demo photos go to the configured photo storage unless another is given.
@@ -78,6 +142,7 @@ export async function seedDemoData(
   scenarioPath: string | URL = DEFAULT_SCENARIO,
   now = new Date(),
   photoStorage?: PhotoStorage,
+  invoiceStorage?: FileStorage,
 ): Promise<boolean> {
   if ((await dataSource.getRepository(Organisation).count()) > 0) return false;
   const scenario = JSON.parse(await readFile(scenarioPath, 'utf8')) as Scenario;
@@ -87,14 +152,20 @@ export async function seedDemoData(
   const storage = imageNames.length ? (photoStorage ?? (await createPhotoStorage(photosConfig()))) : null;
   const engine = new SyncEngine(new ScopeService());
   const today = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
+  let invoices = invoiceStorage;
   await dataSource.transaction(async (em) => {
     for (const o of scenario.organisations) {
       const org = await em.save(
         em.create(Organisation, {
           name: o.name, address: o.address ?? null, phone: o.phone ?? null, email: o.email ?? null,
           registrationNumber: o.registrationNumber ?? null, ...(o.timeZone ? { timeZone: o.timeZone } : {}),
+          vatNumber: o.vatNumber ?? null, paymentTermsDays: o.paymentTermsDays ?? 30, quoteValidDays: o.quoteValidDays ?? 30,
+          paymentTerms: o.paymentTerms ?? null, paymentInstructions: o.paymentInstructions ?? null,
         }),
       );
+      // Every organisation starts with the UK's VAT rates as its own data.
+      await em.save(UK_VAT_RATES.map((r) => em.create(VatRate, { organisationId: org.id, code: r.code, name: r.name, basisPoints: r.basisPoints, active: true })));
+      for (const l of o.labourRates ?? []) await em.save(em.create(LabourRate, { organisationId: org.id, ...l, isDefault: l.isDefault ?? false, active: true }));
       const users = new Map<string, string>();
       for (const u of o.users) {
         const user = await em.save(em.create(User, { organisationId: org.id, email: u.email, name: u.name, role: u.role, passwordHash, active: true, lastSignInAt: null }));
@@ -133,6 +204,9 @@ export async function seedDemoData(
         const results = await engine.applyAll(em, actor, own.map((m) => m.mutation));
         const refused = results.filter((r) => r.status === 'rejected');
         if (refused.length) throw new Error(`Demo data refused: ${refused.map((r) => r.error).join('; ')}`);
+      }
+      for (const inv of o.invoices ?? []) {
+        await seedInvoice(em, org.id, inv, { ids, users, names: new Map(o.users.map((u) => [u.email, u.name])), today, images, storage: invoices ??= await createInvoiceStorage(documentsConfig()) });
       }
     }
   });

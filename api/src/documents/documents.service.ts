@@ -10,6 +10,7 @@ import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
+import { isLatestMessage, mailState } from '../mail/mail-state.js';
 import { PHOTO_STORAGE, PhotoObjectMissing, type PhotoStorage, photoKey } from '../photos/storage/photo-storage.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
@@ -19,7 +20,7 @@ import { User } from '../users/entities/user.entity.js';
 import { type JobFile, loadCableSchedule, loadJobFile, loadMinorWorks, loadPhotoRecord } from './document-content.js';
 import type { DocumentKind } from './dto/issue-document.dto.js';
 import type { SendDocumentDto } from './dto/send-document.dto.js';
-import { DocumentCounter } from './entities/document-counter.entity.js';
+import { takeNextNumber } from './document-numbers.js';
 import { CABLING_REPORT_TITLE, cablingReportPdf } from './pdf/cabling-report-pdf.js';
 import { dateWords } from './pdf/document-words.js';
 import type { Issue } from './pdf/job-heading.js';
@@ -82,7 +83,7 @@ export class DocumentsService implements OnModuleInit {
       const id = uuidv7();
       // Numbered last, after every refusal, and in this transaction: a refused issue uses no number.
       const render = await this.prepare(em, kind, file, images);
-      const number = await this.nextNumber(em, user.organisationId, kind);
+      const number = await takeNextNumber(em, user.organisationId, kind, KINDS[kind].prefix);
       const rendered = await render({ number, issuedAt, issuedBy: user.name });
       await this.storage.put(documentKey(user.organisationId, id), rendered.pdf, 'application/pdf');
       const set = {
@@ -142,14 +143,6 @@ export class DocumentsService implements OnModuleInit {
         return async (issue) => ({ pdf: await photoRecordPdf({ issue, file, content, images }), visitId: null, signerName: issue.issuedBy });
       }
     }
-  }
-
-  private async nextNumber(em: EntityManager, organisationId: string, kind: DocumentKind): Promise<string> {
-    const where = { organisationId, kind };
-    const moved = await em.update(DocumentCounter, where, { value: () => 'value + 1' });
-    if (!moved.affected) await em.insert(DocumentCounter, { ...where, value: 1 });
-    const { value } = await em.findOneByOrFail(DocumentCounter, where);
-    return `${KINDS[kind].prefix}-${String(value).padStart(4, '0')}`;
   }
 
   private async printablePhotos(organisationId: string, jobId: string): Promise<Map<string, Buffer>> {
@@ -251,15 +244,9 @@ export class DocumentsService implements OnModuleInit {
   private async recordMailState(em: EntityManager, message: OutboxMessage): Promise<void> {
     const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId });
     if (!doc) return;
-    // A later send of the same document speaks for it now.
-    const latest = await em.findOne(OutboxMessage, { where: { purpose: DOCUMENT_MAIL, subjectId: doc.id }, order: { id: 'DESC' } });
-    if (latest?.id !== message.id) return;
-    const set =
-      message.state === 'sent'
-        ? { emailState: 'sent', emailedTo: message.toAddress, emailedAt: (message.sentAt ?? new Date()).toISOString(), emailError: null }
-        : message.state === 'failed'
-          ? { emailState: 'failed', emailError: `Not sent after ${message.attempts} ${message.attempts === 1 ? 'attempt' : 'attempts'}: ${message.lastError ?? 'no reason given'}`.slice(0, 500) }
-          : { emailState: 'queued', emailError: `Attempt ${message.attempts} of ${this.mail.maxAttempts} failed, trying again: ${message.lastError ?? ''}`.slice(0, 500) };
+    if (!(await isLatestMessage(em, message))) return;
+    const { emailedAt, ...state } = mailState(message, this.mail.maxAttempts);
+    const set = { ...state, ...(emailedAt ? { emailedAt: emailedAt.toISOString() } : {}) };
     const sender = await em.findOneBy(User, { id: message.createdById, organisationId: message.organisationId });
     const actor = { id: message.createdById, organisationId: message.organisationId, role: sender?.role ?? 'office', email: sender?.email ?? '', name: sender?.name ?? '' };
     const [result] = await this.engine.applyAll(em, officeActor(actor, 'mail-outbox'), [officeMutation('document', doc.id, doc.version, set, 'mail-outbox')]);

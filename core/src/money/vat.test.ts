@@ -48,6 +48,35 @@ describe('lineTotals', () => {
   });
 });
 
+describe('lineTotals at the edges of a penny', () => {
+  it('rounds the net of a part-unit quantity before the VAT is worked out (the rule in vat.ts)', () => {
+    // 0.005 × 100p = 0.5p → 1p net; 20 % of 1p = 0.2p → 0p VAT.
+    expect(lineTotals({ quantity: '0.005', unitPriceMinor: 100, vatBasisPoints: 2000 })).toEqual({ netMinor: 1, vatMinor: 0, grossMinor: 1 });
+    // 0.004 × 100p = 0.4p → 0p: a line can round to nothing.
+    expect(lineTotals({ quantity: '0.004', unitPriceMinor: 100, vatBasisPoints: 2000 })).toEqual({ netMinor: 0, vatMinor: 0, grossMinor: 0 });
+  });
+
+  it('rounds 2.5p of VAT up and 2.4p down (nearer 1p; VAT Notice 700 §17.5)', () => {
+    // 5 % of 50p = 2.5p → 3p; 5 % of 49p = 2.45p → 2p.
+    expect(lineTotals({ quantity: 1, unitPriceMinor: 50, vatBasisPoints: 500 }).vatMinor).toBe(3);
+    expect(lineTotals({ quantity: 1, unitPriceMinor: 49, vatBasisPoints: 500 }).vatMinor).toBe(2);
+    // 17.5 % (the standard rate until 4 January 2011; from memory) of 10p = 1.75p → 2p.
+    expect(lineTotals({ quantity: 1, unitPriceMinor: 10, vatBasisPoints: 1750 }).vatMinor).toBe(2);
+  });
+
+  it('stays exact for large invoices and refuses what it cannot hold', () => {
+    // £9,999,999.99 × 1000 at 20 %: BigInt arithmetic, no floating point.
+    expect(lineTotals({ quantity: 1000, unitPriceMinor: 999_999_999, vatBasisPoints: 2000 })).toEqual({
+      netMinor: 999_999_999_000, vatMinor: 199_999_999_800, grossMinor: 1_199_999_998_800,
+    });
+    expect(() => lineTotals({ quantity: 999_999_999, unitPriceMinor: 9_007_199_254_740, vatBasisPoints: 2000 })).toThrow(/too large/);
+  });
+
+  it('gives nothing for no lines', () => {
+    expect(documentTotals([])).toEqual({ lines: [], netMinor: 0, vatMinor: 0, grossMinor: 0, byRate: [] });
+  });
+});
+
 describe('documentTotals', () => {
   it('adds the lines’ rounded VAT, which may differ from VAT on the total by a penny (VAT Notice 700 §17.5: line-level rounding)', () => {
     // Two lines of £10.03: 201p VAT each, 402p in all; 20 % of the £20.06 total would be 401.2p.

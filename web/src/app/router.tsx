@@ -39,6 +39,9 @@ const officeScreens: RouteObject[] = [
   { path: paths.customers.path, lazy: () => import('./routes/office/customers') },
   { path: paths.site.path, lazy: () => import('./routes/office/site') },
   { path: paths.conflicts.path, lazy: () => import('./routes/office/conflicts') },
+  { path: paths.invoices.path, lazy: () => import('./routes/office/invoices') },
+  { path: paths.jobInvoices.path, lazy: () => import('./routes/office/job-invoices') },
+  { path: paths.priceList.path, lazy: () => import('./routes/office/price-list') },
   {
     element: <RequireRole roles={['admin']} />,
     children: [{ path: paths.team.path, lazy: () => import('./routes/office/team') }],

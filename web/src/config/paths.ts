@@ -27,6 +27,10 @@ export const paths = {
   customers: { path: '/customers', label: 'Customers & sites' },
   site: { path: '/sites/:siteId', href: (siteId: string) => `/sites/${encodeURIComponent(siteId)}` },
   conflicts: { path: '/conflicts', label: 'Conflicts', href: (jobId?: string) => (jobId ? `/conflicts?jobId=${encodeURIComponent(jobId)}` : '/conflicts') },
+  invoices: { path: '/invoices', label: 'Invoices' },
+  /** One job's quotes, invoices and credit notes, reached from the invoices screen. */
+  jobInvoices: { path: '/invoices/jobs/:jobId', href: (jobId: string) => `/invoices/jobs/${encodeURIComponent(jobId)}` },
+  priceList: { path: '/price-list', label: 'Price list' },
   team: { path: '/team', label: 'Team' },
   account: { path: '/account', label: 'My account' },
   /** A customer's read-only view of one job, opened from a share link; no account. */

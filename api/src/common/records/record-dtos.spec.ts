@@ -7,6 +7,7 @@ import { CreateBoardDto } from '../../boards/dto/create-board.dto.js';
 import { CreateCircuitDto } from '../../circuits/dto/create-circuit.dto.js';
 import { CreateCustomerDto } from '../../customers/dto/create-customer.dto.js';
 import { CreateJobDto } from '../../jobs/dto/create-job.dto.js';
+import { CreatePriceItemDto } from '../../pricing/dto/create-price-item.dto.js';
 import { CreateSiteDto } from '../../sites/dto/create-site.dto.js';
 import { CreateVisitDto } from '../../visits/dto/create-visit.dto.js';
 import type { OfficeRecord } from './records.service.js';
@@ -20,6 +21,7 @@ const DTOS: Record<OfficeRecord, new () => object> = {
   circuit: CreateCircuitDto,
   job: CreateJobDto,
   visit: CreateVisitDto,
+  priceItem: CreatePriceItemDto,
 };
 
 const ID = '01890000-0000-7000-8000-000000000000';
@@ -31,6 +33,10 @@ function samples(type: FieldType): { good: unknown[]; bad: unknown[] } {
       return { good: ['x', 'x'.repeat(type.max)], bad: ['x'.repeat(type.max + 1), 42] };
     case 'number':
       return { good: [type.min, type.max], bad: [type.min! - 0.01, type.max! + 0.01, '1'] };
+    case 'integer':
+      return { good: [type.min, type.max], bad: [type.min! - 1, type.max! + 1, 1.5, '1'] };
+    case 'boolean':
+      return { good: [true, false], bad: ['yes', 1] };
     case 'enum':
       return { good: [...type.values], bad: ['none of these'] };
     case 'ref':

@@ -4,8 +4,10 @@ import { Transform } from 'class-transformer';
 import {
   ArrayUnique,
   IsArray,
+  IsBoolean,
   IsDefined,
   IsIn,
+  IsInt,
   IsISO8601,
   IsNumber,
   IsOptional,
@@ -56,6 +58,20 @@ export function NumberField(min: number, max: number, o: FieldOptions = {}): Pro
     Min(min, { message: `$property must be at least ${min}` }),
     Max(max, { message: `$property must be at most ${max}` }),
   );
+}
+
+/** A whole number: pence, counts. */
+export function IntegerField(min: number, max: number, o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { type: Number, minimum: min, maximum: max }),
+    IsInt({ message: '$property must be a whole number' }),
+    Min(min, { message: `$property must be at least ${min}` }),
+    Max(max, { message: `$property must be at most ${max}` }),
+  );
+}
+
+export function BooleanField(o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(...presence(o, { type: Boolean }), IsBoolean({ message: '$property must be true or false' }));
 }
 
 export function ChoiceField(values: readonly string[], o: FieldOptions = {}): PropertyDecorator {

@@ -11,7 +11,7 @@ import { WriteQueue } from '../write-queue.js';
 import type { PageQueryDto } from './page-query.dto.js';
 
 /** The records the office reads and writes directly; the rest arrive from devices through sync. */
-export type OfficeRecord = 'customer' | 'site' | 'area' | 'board' | 'circuit' | 'job' | 'visit';
+export type OfficeRecord = 'customer' | 'site' | 'area' | 'board' | 'circuit' | 'job' | 'visit' | 'priceItem';
 /** Records the office also reads (and for cable runs, corrects) over REST, though devices make them. */
 export type SiteRecord = OfficeRecord | 'cableRun' | 'pointChange' | 'testResult';
 

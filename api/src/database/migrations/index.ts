@@ -5,6 +5,7 @@ import { PasswordResets1796213463019 } from './1796213463019-PasswordResets.js';
 import { VisitRecords1796218834250 } from './1796218834250-VisitRecords.js';
 import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
+import { Billing1796223023465 } from './1796223023465-Billing.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -15,4 +16,5 @@ export const MIGRATIONS = [
   VisitRecords1796218834250,
   Documents1796219621037,
   PartsAndPrices1796221754005,
+  Billing1796223023465,
 ];

@@ -195,6 +195,8 @@ export class DocumentLayout {
     this.font(weight, size, color);
     const h = this.doc.heightOfString(text, { width: this.width, lineGap: 1.5 });
     this.ensure(Math.min(h, 60));
+    // A new page's band leaves its own white type set: set ours again.
+    this.font(weight, size, color);
     this.doc.text(text, this.left, this.doc.y, { width: this.width, lineGap: 1.5 });
     this.doc.moveDown(0.3);
   }

@@ -3,7 +3,7 @@ import { DocumentLayout, INK } from './document-layout.js';
 import { dateWords, joined } from './document-words.js';
 
 /** What every document is about: who did the work and for whom, where. */
-export function jobHeading(layout: DocumentLayout, file: JobFile): void {
+export function jobHeading(layout: DocumentLayout, file: JobFile, contractor: Array<[string, string]> = [['Registration number', file.organisation.registrationNumber ?? 'Not recorded']]): void {
   const { organisation: org, job, site, customer } = file;
   layout.sideBySide([
     {
@@ -12,7 +12,7 @@ export function jobHeading(layout: DocumentLayout, file: JobFile): void {
         ['Name', org.name],
         ['Address', org.address ?? ''],
         ['Telephone and e-mail', joined([org.phone, org.email], ' · ')],
-        ['Registration number', org.registrationNumber ?? 'Not recorded'],
+        ...contractor,
       ],
     },
     {
@@ -34,7 +34,15 @@ export interface Issue {
 }
 
 /** A new document for the job: its band (kind, number, date issued), then who did the work and for whom. */
-export async function startJobDocument(o: { title: string; subtitle: string; issue: Issue; file: JobFile; landscape?: boolean }): Promise<DocumentLayout> {
+export async function startJobDocument(o: {
+  title: string;
+  subtitle: string;
+  issue: Issue;
+  file: JobFile;
+  landscape?: boolean;
+  /** The contractor's particulars this document needs after name, address and contact: by default the registration number. */
+  contractor?: Array<[string, string]>;
+}): Promise<DocumentLayout> {
   const { issue, file } = o;
   const layout = await DocumentLayout.start({
     title: o.title,
@@ -45,7 +53,7 @@ export async function startJobDocument(o: { title: string; subtitle: string; iss
     subject: `${file.job.reference ?? ''} ${file.job.title}`.trim(),
     landscape: o.landscape,
   });
-  jobHeading(layout, file);
+  jobHeading(layout, file, o.contractor);
   return layout;
 }
 

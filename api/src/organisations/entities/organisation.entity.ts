@@ -30,4 +30,24 @@ export class Organisation extends BaseRow {
   /** Whether the sizes the server makes of a photo keep its location (GPS) metadata; off unless the office wants it. */
   @Column({ type: 'boolean', default: false })
   keepPhotoLocation: boolean;
+
+  /** The contractor's VAT registration number, printed on invoices; a contractor without one charges no VAT. */
+  @Column({ type: 'varchar', length: 20, nullable: true })
+  vatNumber: string | null;
+
+  /** Days a customer has to pay an invoice, unless the invoice says otherwise. */
+  @Column({ type: 'integer', default: 30 })
+  paymentTermsDays: number;
+
+  /** Days a quote stands for. */
+  @Column({ type: 'integer', default: 30 })
+  quoteValidDays: number;
+
+  /** The terms printed under every invoice and quote. */
+  @Column({ type: 'varchar', length: 1000, nullable: true })
+  paymentTerms: string | null;
+
+  /** How to pay other than by card: the bank account, who cheques are payable to. */
+  @Column({ type: 'varchar', length: 1000, nullable: true })
+  paymentInstructions: string | null;
 }

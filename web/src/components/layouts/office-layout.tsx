@@ -2,6 +2,8 @@ import CalendarMonthOutlined from '@mui/icons-material/CalendarMonthOutlined';
 import CallSplitOutlined from '@mui/icons-material/CallSplitOutlined';
 import GroupsOutlined from '@mui/icons-material/GroupsOutlined';
 import HomeWorkOutlined from '@mui/icons-material/HomeWorkOutlined';
+import ReceiptLongOutlined from '@mui/icons-material/ReceiptLongOutlined';
+import SellOutlined from '@mui/icons-material/SellOutlined';
 import ViewKanbanOutlined from '@mui/icons-material/ViewKanbanOutlined';
 import AppBar from '@mui/material/AppBar';
 import Box from '@mui/material/Box';
@@ -27,6 +29,8 @@ const NAV = [
   { ...paths.schedule, icon: <CalendarMonthOutlined />, adminOnly: false },
   { ...paths.customers, icon: <HomeWorkOutlined />, adminOnly: false },
   { ...paths.conflicts, icon: <CallSplitOutlined />, adminOnly: false },
+  { ...paths.invoices, icon: <ReceiptLongOutlined />, adminOnly: false },
+  { ...paths.priceList, icon: <SellOutlined />, adminOnly: false },
   { ...paths.team, icon: <GroupsOutlined />, adminOnly: true },
 ];
 

@@ -16,6 +16,7 @@ import { paths } from '@/config/paths';
 import { CableSchedule } from '@/features/cable-runs/components/cable-schedule';
 import { JobConflictsNotice } from '@/features/conflicts/components/job-conflicts-notice';
 import { JobDocuments } from '@/features/documents/components/job-documents';
+import { JobInvoices } from '@/features/invoices/components/job-invoices';
 import { useJob } from '@/features/jobs/api/get-jobs';
 import { useJobVisits } from '@/features/jobs/api/get-job-visits';
 import { JobSummary } from '@/features/jobs/components/job-summary';
@@ -41,6 +42,7 @@ const TABS = [
   { value: 'points', label: 'Points' },
   { value: 'tests', label: 'Circuits & tests' },
   { value: 'documents', label: 'Documents & links' },
+  { value: 'invoices', label: 'Quotes & invoices' },
 ] as const;
 type TabValue = (typeof TABS)[number]['value'];
 
@@ -120,6 +122,7 @@ export function Component() {
               <JobShareLinks jobId={j.id} />
             </Stack>
           )}
+          {tab === 'invoices' && <JobInvoices jobId={j.id} />}
           {tab === 'tests' && (
             <Stack spacing={2}>
               <SafetyCaution />

@@ -204,7 +204,8 @@ export function PhotoViewer({ photos, index, onIndex, onClose }: Props) {
                 <Chip key={t} label={t} size="small" variant="outlined" sx={{ color: 'grey.200', borderColor: 'grey.600' }} />
               ))}
             </Stack>
-            <Button variant="contained" startIcon={<DownloadOutlined />} onClick={() => void download(photo)} disabled={downloading}>
+            {/* Not disabled while it works: a disabled button drops the focus out of the viewer, and Escape would no longer close it. */}
+            <Button variant="contained" startIcon={<DownloadOutlined />} onClick={() => !downloading && void download(photo)} aria-disabled={downloading}>
               {downloading ? 'Downloading…' : 'Download original'}
             </Button>
           </Stack>

@@ -19,6 +19,7 @@ import { useState } from 'react';
 import { Logo } from '@/components/logo';
 import { ApiError } from '@/lib/api-client';
 import { type SharedJob, useSharedJob } from '../api/get-shared-job';
+import { SharedInvoices } from './shared-invoices';
 
 const KIND_NAMES: Record<string, string> = {
   'minor-works': 'Minor works certificate',
@@ -150,8 +151,11 @@ function Photos({ photos }: { photos: SharedJob['photos'] }) {
   );
 }
 
-/** What a customer sees through a share link, on a phone or a desk: read-only, nothing to sign in to. */
-export function SharedJobPage({ token }: { token: string }) {
+/**
+ * What a customer sees through a share link, on a phone or a desk: nothing to sign in to, read-only but for paying
+ * an invoice by card. `paidInvoiceId` is the invoice the customer has just paid on the provider's page.
+ */
+export function SharedJobPage({ token, paidInvoiceId = null }: { token: string; paidInvoiceId?: string | null }) {
   const shared = useSharedJob(token);
   if (shared.isPending) {
     return (
@@ -199,6 +203,8 @@ export function SharedJobPage({ token }: { token: string }) {
             )}
           </Box>
         </Paper>
+
+        <SharedInvoices token={token} paidInvoiceId={paidInvoiceId} />
 
         <Box component="section" aria-labelledby="shared-documents">
           <Typography variant="h2" id="shared-documents" sx={{ mb: 1.5 }}>

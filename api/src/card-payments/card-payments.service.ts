@@ -1,0 +1,168 @@
+import { BadGatewayException, BadRequestException, ConflictException, Inject, Injectable, Logger, NotFoundException, ServiceUnavailableException } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { formatMoney, localDate } from '@wiretrail/core';
+import Stripe from 'stripe';
+import type { EntityManager } from 'typeorm';
+import { WriteQueue } from '../common/write-queue.js';
+import { mailConfig } from '../config/app.config.js';
+import { paymentsConfig } from '../config/payments.config.js';
+import { Invoice } from '../invoices/entities/invoice.entity.js';
+import { accountsOf, todayFor } from '../invoices/invoice-accounts.js';
+import { PaymentsService } from '../invoices/payments.service.js';
+import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { ShareLinksService } from '../share-links/share-links.service.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { CardCheckout } from './entities/card-checkout.entity.js';
+import { PaymentEvent } from './entities/payment-event.entity.js';
+import { PAYMENT_PROVIDER } from './payment-provider.js';
+
+const NOT_SET_UP = 'Card payments are not set up for this contractor. Please pay another way, as the invoice says.';
+const reasonOf = (err: unknown) => (err instanceof Error ? err.message : String(err)).replace(/\s+/g, ' ').slice(0, 300);
+
+interface Applied {
+  organisationId: string | null;
+  outcome: string;
+}
+
+/**
+ * Card payments through the provider's hosted checkout, reached only through its official SDK: a customer on a
+ * share link is sent to a checkout for what the invoice still owes, and the provider's signed webhook records the
+ * payment. An event is taken in once, by its id, however often it is delivered.
+ */
+@Injectable()
+export class CardPaymentsService {
+  private readonly logger = new Logger('CardPayments');
+  /** One checkout being started per invoice at a time, so two quick taps cannot open two. */
+  private readonly starting = new Map<string, Promise<unknown>>();
+
+  constructor(
+    private readonly queue: WriteQueue,
+    private readonly shareLinks: ShareLinksService,
+    private readonly payments: PaymentsService,
+    @Inject(PAYMENT_PROVIDER) private readonly provider: Stripe | null,
+    @Inject(paymentsConfig.KEY) private readonly config: ConfigType<typeof paymentsConfig>,
+    @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
+  ) {}
+
+  async checkout(token: string, invoiceId: string): Promise<{ url: string; amountMinor: number }> {
+    const link = await this.shareLinks.open(token);
+    if (!this.provider) throw new ServiceUnavailableException(NOT_SET_UP);
+    const previous = this.starting.get(invoiceId) ?? Promise.resolve();
+    const next = previous.catch(() => undefined).then(() => this.startCheckout(this.provider!, token, link.organisationId, link.jobId, link.id, invoiceId));
+    this.starting.set(invoiceId, next);
+    try {
+      return await next;
+    } finally {
+      if (this.starting.get(invoiceId) === next) this.starting.delete(invoiceId);
+    }
+  }
+
+  private async startCheckout(provider: Stripe, token: string, organisationId: string, jobId: string, shareLinkId: string, invoiceId: string) {
+    const { invoice, owed, open, organisation, email } = await this.queue.read(async (em) => {
+      const invoice = await em.findOneBy(Invoice, { id: invoiceId, organisationId, jobId, kind: 'invoice', status: 'issued' });
+      if (!invoice) throw new NotFoundException('No such invoice on this job.');
+      const account = (await accountsOf(em, [invoice], await todayFor(em, organisationId))).get(invoice.id)!;
+      const job = await em.getRepository<SyncRecord>('job').findOneByOrFail({ id: jobId });
+      const customer = await em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId }, withDeleted: true });
+      return {
+        invoice,
+        owed: account.owedMinor,
+        open: await em.find(CardCheckout, { where: { invoiceId, state: 'open' } }),
+        organisation: await em.findOneByOrFail(Organisation, { id: organisationId }),
+        email: typeof customer?.email === 'string' && customer.email ? customer.email : null,
+      };
+    });
+    if (owed <= 0) throw new ConflictException(`Nothing is owed on invoice ${invoice.number}.`);
+    try {
+      // An earlier checkout stays payable until it is closed: close it, unless it was paid and its news is on the way.
+      for (const c of open) {
+        const session = await provider.checkout.sessions.retrieve(c.sessionId);
+        if (session.status === 'complete') {
+          throw new ConflictException('A card payment for this invoice has just been made and is being confirmed. Refresh the page in a minute.');
+        }
+        if (session.status === 'open') await provider.checkout.sessions.expire(c.sessionId);
+        await this.queue.run((em) => em.update(CardCheckout, { id: c.id }, { state: 'expired' }));
+      }
+      const back = `${this.mail.publicUrl}/shared/${token}`;
+      const session = await provider.checkout.sessions.create({
+        mode: 'payment',
+        line_items: [
+          { quantity: 1, price_data: { currency: this.config.currency, unit_amount: owed, product_data: { name: `Invoice ${invoice.number} from ${organisation.name}` } } },
+        ],
+        // Back on the link, the page watches this invoice until the provider's event has marked it paid.
+        success_url: `${back}?paid=${invoice.id}`,
+        cancel_url: back,
+        client_reference_id: invoice.id,
+        metadata: { invoiceId: invoice.id, organisationId, invoiceNumber: invoice.number ?? '' },
+        ...(email ? { customer_email: email } : {}),
+      });
+      if (!session.url) throw new Error('the provider gave no checkout address');
+      await this.queue.run((em) => em.save(em.create(CardCheckout, { organisationId, invoiceId: invoice.id, sessionId: session.id, amountMinor: owed, state: 'open', shareLinkId })));
+      this.logger.log(`Checkout ${session.id} for ${formatMoney(owed)} on ${invoice.number}`);
+      return { url: session.url, amountMinor: owed };
+    } catch (err) {
+      if (!(err instanceof Stripe.errors.StripeError)) throw err;
+      this.logger.warn(`The payment provider refused or did not answer for ${invoice.number}: ${reasonOf(err)}`);
+      throw new BadGatewayException('The card payment service did not answer. Please try again in a minute.');
+    }
+  }
+
+  /**
+   * The provider's event, verified with the SDK against the raw body it signed. A bad signature is refused and
+   * logged; an event already taken in is acknowledged and changes nothing.
+   */
+  async takeEvent(rawBody: Buffer | undefined, signature: string | undefined): Promise<{ received: true; duplicate?: true }> {
+    const secret = this.config.webhookSecret;
+    if (!secret) throw new ServiceUnavailableException(NOT_SET_UP);
+    if (!rawBody?.length || !signature) {
+      this.logger.warn('Refused a payment event without a body or a stripe-signature header.');
+      throw new BadRequestException('A payment event needs its body and its stripe-signature header.');
+    }
+    let event: Stripe.Event;
+    try {
+      event = (this.provider?.webhooks ?? Stripe.webhooks).constructEvent(rawBody, signature, secret);
+    } catch (err) {
+      this.logger.warn(`Refused a payment event whose signature does not verify: ${reasonOf(err)}`);
+      throw new BadRequestException('The payment event’s signature does not verify.');
+    }
+    return this.queue.run(async (em) => {
+      if (await em.findOneBy(PaymentEvent, { eventId: event.id })) return { received: true, duplicate: true } as const;
+      const applied = await this.apply(em, event);
+      await em.insert(PaymentEvent, { eventId: event.id, type: event.type, organisationId: applied.organisationId, outcome: applied.outcome.slice(0, 300) });
+      this.logger.log(`Payment event ${event.id} (${event.type}): ${applied.outcome}`);
+      return { received: true } as const;
+    });
+  }
+
+  private async apply(em: EntityManager, event: Stripe.Event): Promise<Applied> {
+    if (event.type !== 'checkout.session.completed' && event.type !== 'checkout.session.async_payment_succeeded' && event.type !== 'checkout.session.expired') {
+      return { organisationId: null, outcome: 'not an event this server acts on' };
+    }
+    const session = event.data.object;
+    const checkout = await em.findOneBy(CardCheckout, { sessionId: session.id });
+    if (!checkout) return { organisationId: null, outcome: 'not a checkout this server started' };
+    const org = checkout.organisationId;
+    if (event.type === 'checkout.session.expired') {
+      if (checkout.state === 'open') await em.update(CardCheckout, { id: checkout.id }, { state: 'expired' });
+      return { organisationId: org, outcome: 'checkout expired' };
+    }
+    if (session.payment_status !== 'paid') return { organisationId: org, outcome: `payment ${session.payment_status}, not recorded yet` };
+    if (session.currency !== this.config.currency || typeof session.amount_total !== 'number') {
+      this.logger.warn(`Checkout ${session.id} was paid in ${session.currency ?? 'no currency'}; it was not recorded.`);
+      return { organisationId: org, outcome: `paid in ${session.currency ?? 'no currency'}: not recorded` };
+    }
+    const invoice = await em.findOneByOrFail(Invoice, { id: checkout.invoiceId, organisationId: org });
+    const { timeZone } = await em.findOneByOrFail(Organisation, { id: org });
+    const intent = session.payment_intent;
+    const payment = await this.payments.recordCard(em, {
+      organisationId: org,
+      invoiceId: invoice.id,
+      amountMinor: session.amount_total,
+      receivedOn: localDate(new Date(event.created * 1000), timeZone),
+      reference: (typeof intent === 'string' ? intent : intent?.id) ?? session.id,
+      checkoutSessionId: session.id,
+    });
+    await em.update(CardCheckout, { id: checkout.id }, { state: 'complete' });
+    return { organisationId: org, outcome: payment ? `recorded ${formatMoney(payment.amountMinor)} by card against ${invoice.number}` : `already recorded against ${invoice.number}` };
+  }
+}

@@ -1,0 +1,147 @@
+import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { formatMoney, type InvoiceDetail, INVOICE_NAMES } from '@wiretrail/core';
+import { createHash } from 'node:crypto';
+import { type EntityManager, IsNull, Not } from 'typeorm';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { WriteQueue } from '../common/write-queue.js';
+import { mailConfig } from '../config/app.config.js';
+import { paymentsConfig } from '../config/payments.config.js';
+import { type JobFile, loadJobFile } from '../documents/document-content.js';
+import type { SendDocumentDto } from '../documents/dto/send-document.dto.js';
+import { CABLING_REPORT_TITLE } from '../documents/pdf/cabling-report-pdf.js';
+import { dateWords } from '../documents/pdf/document-words.js';
+import { MINOR_WORKS_TITLE } from '../documents/pdf/minor-works-pdf.js';
+import { PHOTO_RECORD_TITLE } from '../documents/pdf/photo-record-pdf.js';
+import { type IssuedFile, pdfFilename } from '../documents/storage/document-files.js';
+import { DOCUMENT_STORAGE, documentKey } from '../documents/storage/document-storage.js';
+import type { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
+import { isLatestMessage, mailState } from '../mail/mail-state.js';
+import { MailOutbox } from '../mail/mail-outbox.service.js';
+import type { MailAttachment } from '../mail/mail.service.js';
+import type { FileStorage } from '../photos/storage/photo-storage.js';
+import { ShareLinksService } from '../share-links/share-links.service.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { Invoice } from './entities/invoice.entity.js';
+import { INVOICE_STORAGE } from './invoice-storage.js';
+import { detail, todayFor } from './invoice-accounts.js';
+
+export const INVOICE_MAIL = 'invoice';
+
+const DOCUMENT_TITLES: Record<string, string> = { 'minor-works': MINOR_WORKS_TITLE, 'cabling-report': CABLING_REPORT_TITLE, 'photo-record': PHOTO_RECORD_TITLE };
+const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+const day = (date: string | null, timeZone: string) => (date ? dateWords(`${date}T12:00:00Z`, timeZone) : '');
+
+/**
+ * E-mails an issued quote, invoice or credit note through the mail outbox, with a new share link to the job's
+ * record (where an invoice can be paid by card). An invoice goes with the job's issued certificates and reports
+ * attached. The outbox's news is written back to the invoice (queued, sent, or failed with the reason).
+ */
+@Injectable()
+export class InvoiceMailService implements OnModuleInit {
+  private readonly logger = new Logger('InvoiceMail');
+
+  constructor(
+    private readonly queue: WriteQueue,
+    private readonly outbox: MailOutbox,
+    private readonly shareLinks: ShareLinksService,
+    @Inject(DOCUMENT_STORAGE) private readonly documents: FileStorage,
+    @Inject(INVOICE_STORAGE) private readonly invoices: FileStorage,
+    @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
+    @Inject(paymentsConfig.KEY) private readonly payments: ConfigType<typeof paymentsConfig>,
+  ) {}
+
+  onModuleInit(): void {
+    this.outbox.register(INVOICE_MAIL, {
+      attachments: (message) => this.attachments(message),
+      settled: (em, message) => this.recordMailState(em, message),
+    });
+  }
+
+  async send(user: AuthUser, id: string, dto: SendDocumentDto): Promise<{ invoice: InvoiceDetail; shareLink: { id: string; expiresAt: string } }> {
+    return this.queue.run(async (em) => {
+      const invoice = await em.findOneBy(Invoice, { id, organisationId: user.organisationId });
+      if (!invoice) throw new NotFoundException('No such quote, invoice or credit note.');
+      if (invoice.status !== 'issued' || !invoice.pdfSha256) throw new ConflictException('Only an issued quote, invoice or credit note can be e-mailed.');
+      const file = await loadJobFile(em, user.organisationId, invoice.jobId);
+      const documents = invoice.kind === 'invoice' ? await this.jobDocuments(em, invoice) : [];
+      const link = await this.shareLinks.createIn(em, user, invoice.jobId, { days: dto.linkDays, label: `E-mailed with ${invoice.number} to ${dto.to}` });
+      await this.outbox.enqueue(em, {
+        organisationId: user.organisationId,
+        purpose: INVOICE_MAIL,
+        subjectId: invoice.id,
+        to: dto.to,
+        createdById: user.id,
+        ...this.letter(file, invoice, documents, dto.to, link.url, link.expiresAt),
+      });
+      Object.assign(invoice, { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null });
+      await em.save(invoice);
+      return { invoice: await detail(em, invoice, await todayFor(em, user.organisationId)), shareLink: { id: link.id, expiresAt: link.expiresAt } };
+    });
+  }
+
+  private jobDocuments(em: EntityManager, invoice: Invoice): Promise<SyncRecord[]> {
+    return em.getRepository<SyncRecord>('document').find({
+      where: { jobId: invoice.jobId, organisationId: invoice.organisationId, deletedAt: IsNull(), issuedAt: Not(IsNull()), pdfSha256: Not(IsNull()) },
+      order: { issuedAt: 'ASC' },
+    });
+  }
+
+  private letter(file: JobFile, invoice: Invoice, documents: SyncRecord[], to: string, url: string, expiresAt: string): { subject: string; text: string } {
+    const { organisation: org, job, site, customer } = file;
+    const tz = org.timeZone;
+    const title = INVOICE_NAMES[invoice.kind];
+    const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name as string},` : 'Hello,';
+    const where = [site.address, site.postcode].filter(Boolean).join(', ');
+    const ours = job.reference ? ` (our job ${job.reference as string}, “${job.title as string}”)` : '';
+    const opening =
+      invoice.kind === 'invoice'
+        ? `Attached is invoice ${invoice.number} for ${formatMoney(invoice.grossMinor)} for the work at ${where}${ours}. Please pay by ${day(invoice.dueDate, tz)}.`
+        : invoice.kind === 'quote'
+          ? `Attached is our quote ${invoice.number} for ${formatMoney(invoice.grossMinor)} for the work at ${where}${ours}. It stands until ${day(invoice.dueDate, tz)}.`
+          : `Attached is credit note ${invoice.number}, which takes ${formatMoney(-invoice.grossMinor)} off what is owed for the work at ${where}${ours}.`;
+    const card = invoice.kind === 'invoice' && this.payments.apiKey;
+    const text = [
+      greeting,
+      '',
+      opening,
+      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${DOCUMENT_TITLES[d.kind as string] ?? 'Document'} ${d.number as string}`).join(', ')}.`] : []),
+      '',
+      `You can see the job's record, with its photos and documents${card ? ', and pay by card' : ''}, at this link until ${dateWords(expiresAt, tz)}:`,
+      url,
+      ...(invoice.kind === 'invoice' && invoice.paymentInstructions ? ['', `To pay by bank transfer or cheque: ${invoice.paymentInstructions} Please give ${invoice.number} as the reference.`] : []),
+      '',
+      'Kind regards,',
+      org.name,
+      ...[org.address, [org.phone, org.email].filter(Boolean).join(' · ')].filter((l): l is string => !!l),
+    ].join('\n');
+    return { subject: `${title} ${invoice.number} from ${org.name}`, text };
+  }
+
+  /** The invoice's PDF and, with an invoice, the job's documents: each exactly as issued, checked by its fingerprint. */
+  private async attachments(message: OutboxMessage): Promise<MailAttachment[]> {
+    const { invoice, documents } = await this.queue.read(async (em) => {
+      const invoice = await em.findOneBy(Invoice, { id: message.subjectId ?? '', organisationId: message.organisationId });
+      return { invoice, documents: invoice?.kind === 'invoice' ? await this.jobDocuments(em, invoice) : [] };
+    });
+    if (!invoice?.pdfSha256) throw new Error('The invoice is no longer on the server.');
+    const attached: MailAttachment[] = [];
+    // The invoice from the invoices' store, the job's documents from theirs.
+    const files: Array<[FileStorage, IssuedFile]> = [[this.invoices, invoice], ...documents.map((d): [FileStorage, IssuedFile] => [this.documents, d])];
+    for (const [storage, f] of files) {
+      const bytes = await storage.get(documentKey(message.organisationId, f.id));
+      if (sha256(bytes) !== f.pdfSha256) throw new Error(`The stored PDF of ${f.number as string} does not match the fingerprint recorded when it was issued, so it was not sent.`);
+      attached.push({ filename: pdfFilename(f), content: bytes, contentType: 'application/pdf' });
+    }
+    return attached;
+  }
+
+  private async recordMailState(em: EntityManager, message: OutboxMessage): Promise<void> {
+    const invoice = await em.findOneBy(Invoice, { id: message.subjectId ?? '', organisationId: message.organisationId });
+    if (!invoice) return;
+    if (!(await isLatestMessage(em, message))) return;
+    const set = mailState(message, this.mail.maxAttempts);
+    await em.update(Invoice, { id: invoice.id }, set);
+    if (set.emailState === 'failed') this.logger.warn(`${invoice.number} was not e-mailed: ${set.emailError}`);
+  }
+}

@@ -1,0 +1,38 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { documentsConfig } from '../config/documents.config.js';
+import { DocumentCounter } from '../documents/entities/document-counter.entity.js';
+import { DocumentStorageModule } from '../documents/storage/document-storage.module.js';
+import { MailModule } from '../mail/mail.module.js';
+import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { LabourRate } from '../pricing/entities/labour-rate.entity.js';
+import { VatRate } from '../pricing/entities/vat-rate.entity.js';
+import { ShareLinksModule } from '../share-links/share-links.module.js';
+import { Invoice } from './entities/invoice.entity.js';
+import { InvoiceLine } from './entities/invoice-line.entity.js';
+import { Payment } from './entities/payment.entity.js';
+import { createInvoiceStorage, INVOICE_STORAGE } from './invoice-storage.js';
+import { InvoiceMailService } from './invoice-mail.service.js';
+import { InvoicesController } from './invoices.controller.js';
+import { InvoicesService } from './invoices.service.js';
+import { PaymentsService } from './payments.service.js';
+import { SharedInvoicesController } from './shared-invoices.controller.js';
+
+/** Quotes, invoices and credit notes per job, payments against them, the aged debt, and their place on share pages. */
+@Module({
+  imports: [
+    TypeOrmModule.forFeature([Invoice, InvoiceLine, Payment, DocumentCounter, Organisation, VatRate, LabourRate]),
+    MailModule,
+    ShareLinksModule,
+    DocumentStorageModule,
+  ],
+  controllers: [InvoicesController, SharedInvoicesController],
+  providers: [
+    InvoicesService,
+    PaymentsService,
+    InvoiceMailService,
+    { provide: INVOICE_STORAGE, inject: [documentsConfig.KEY], useFactory: createInvoiceStorage },
+  ],
+  exports: [InvoicesService, PaymentsService],
+})
+export class InvoicesModule {}

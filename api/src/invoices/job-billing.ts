@@ -1,0 +1,108 @@
+import { durationWords, timeOnSite } from '@wiretrail/core';
+import { type EntityManager, In, IsNull } from 'typeorm';
+import { type JobFile, jobVisits } from '../documents/document-content.js';
+import { shortDateWords } from '../documents/pdf/document-words.js';
+import type { RateBook } from '../pricing/rate-book.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import type { LineDraft } from './invoice-lines.js';
+import { quantityText } from './invoice-lines.js';
+
+/** What the job's visits add up to, with what could not be priced said in words for the office to see to. */
+export interface JobBill {
+  lines: LineDraft[];
+  warnings: string[];
+}
+
+const timeWords = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit' }).format(new Date(iso));
+
+/** The VAT rate a part or labour falls back to: the organisation's highest active rate (usually standard). */
+function fallbackVat(book: RateBook): string | null {
+  return [...book.vat.values()].filter((r) => r.active).sort((a, b) => b.basisPoints - a.basisPoints)[0]?.code ?? null;
+}
+
+/**
+ * Lines for a quote or invoice from the job as recorded: labour for each visit from its arrival and departure at
+ * the default labour rate, and the parts used on its visits priced from the price list (the same item on several
+ * visits becomes one line). Nothing here is final: the office edits the lines before issuing.
+ */
+export async function linesFromJob(em: EntityManager, file: JobFile, book: RateBook): Promise<JobBill> {
+  const tz = file.organisation.timeZone;
+  const org = file.organisation.id;
+  const visits = (await jobVisits(em, file))
+    .filter((v) => v.status !== 'cancelled')
+    .sort((a, b) => String(a.actualStart ?? a.plannedStart ?? '').localeCompare(String(b.actualStart ?? b.plannedStart ?? '')));
+  const lines: LineDraft[] = [];
+  const warnings: string[] = [];
+  const fallback = fallbackVat(book);
+
+  for (const visit of visits) {
+    const start = visit.actualStart as string | null;
+    const end = visit.actualEnd as string | null;
+    const day = shortDateWords(start ?? visit.plannedStart ?? visit.createdAt, tz) || 'an unscheduled day';
+    if (!start || !end) {
+      warnings.push(`The visit on ${day} has no ${start ? 'departure' : 'arrival'} time recorded, so its labour is not included.`);
+      continue;
+    }
+    const labour = book.defaultLabour;
+    if (!labour) {
+      warnings.push('There is no labour rate yet, so labour is not included: add one under Price list, then build again or add the labour as a line.');
+      break;
+    }
+    const people = Math.max(1, Array.isArray(visit.technicianIds) ? visit.technicianIds.length : 1);
+    try {
+      const t = timeOnSite(start, end, people);
+      lines.push({
+        kind: 'labour',
+        description: `Labour on ${day}: ${durationWords(t.minutes)} on site, ${timeWords(start, tz)}–${timeWords(end, tz)}${people > 1 ? `, ${people} people` : ''} (${labour.name})`,
+        quantity: t.quantity,
+        unit: 'h',
+        unitPriceMinor: labour.hourlyMinor,
+        vatRateCode: labour.vatRateCode,
+        visitId: visit.id,
+        labourRateId: labour.id,
+      });
+    } catch {
+      warnings.push(`The visit on ${day} has its departure before its arrival, so its labour is not included.`);
+    }
+  }
+
+  const parts = visits.length
+    ? await em.getRepository<SyncRecord>('materialLine').find({ where: { visitId: In(visits.map((v) => v.id)), organisationId: org, deletedAt: IsNull() }, order: { createdAt: 'ASC', id: 'ASC' } })
+    : [];
+  const itemIds = [...new Set(parts.map((p) => p.priceItemId).filter((id): id is string => typeof id === 'string'))];
+  const items = new Map(
+    (itemIds.length ? await em.getRepository<SyncRecord>('priceItem').find({ where: { id: In(itemIds), organisationId: org }, withDeleted: true }) : []).map((i) => [i.id, i]),
+  );
+  // The same part used on several visits is one line: quantities add up in thousandths, exactly.
+  const grouped = new Map<string, { draft: LineDraft; thousandths: bigint }>();
+  for (const p of parts) {
+    const item = typeof p.priceItemId === 'string' ? items.get(p.priceItemId) : undefined;
+    const unit = ((item?.unit ?? p.unit) as string | null) ?? null;
+    const key = item ? `item:${item.id}:${unit}` : `typed:${String(p.description).trim().toLowerCase()}:${unit}`;
+    const thousandths = BigInt(Math.round(Number(p.quantity) * 1000));
+    const seen = grouped.get(key);
+    if (seen) {
+      seen.thousandths += thousandths;
+      continue;
+    }
+    const vat = (item?.vatRateCode as string | null) ?? fallback ?? '';
+    grouped.set(key, {
+      thousandths,
+      draft: {
+        kind: 'material',
+        description: String(item?.name ?? p.description),
+        quantity: '0',
+        unit,
+        unitPriceMinor: typeof item?.sellMinor === 'number' ? item.sellMinor : 0,
+        vatRateCode: vat,
+        visitId: null,
+        priceItemId: item?.id ?? null,
+      },
+    });
+    if (!item) warnings.push(`“${String(p.description)}” was typed on site and is not on the price list: give it a price.`);
+    else if (typeof item.sellMinor !== 'number') warnings.push(`“${String(item.name)}” has no sell price on the price list: give it a price.`);
+  }
+  for (const { draft, thousandths } of grouped.values()) lines.push({ ...draft, quantity: quantityText(thousandths) });
+  if (!visits.length) warnings.push('This job has no visits yet, so there is no labour or parts to add: add fixed-price lines instead.');
+  return { lines, warnings };
+}

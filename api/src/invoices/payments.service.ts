@@ -1,0 +1,123 @@
+import { ConflictException, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
+import { AGED_DEBT_BUCKETS, type AgedDebtInvoice, type AgedDebtReport, agedDebtBucket, agedDebtTotals, formatMoney, type InvoiceDetail, isCalendarDate } from '@wiretrail/core';
+import type { EntityManager } from 'typeorm';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { WriteQueue } from '../common/write-queue.js';
+import type { RecordPaymentDto } from './dto/record-payment.dto.js';
+import { Invoice } from './entities/invoice.entity.js';
+import { Payment } from './entities/payment.entity.js';
+import { accountsOf, detail, summarise, todayFor } from './invoice-accounts.js';
+
+/** A card payment the provider reported, to record once. */
+export interface CardPaymentReport {
+  organisationId: string;
+  invoiceId: string;
+  amountMinor: number;
+  receivedOn: string;
+  reference: string | null;
+  checkoutSessionId: string;
+}
+
+/** Money in against invoices, and what is still owed, by whom and for how long. */
+@Injectable()
+export class PaymentsService {
+  constructor(private readonly queue: WriteQueue) {}
+
+  /** Money taken on site or paid into the bank, recorded by the office; never more than is still owed. */
+  record(user: AuthUser, invoiceId: string, dto: RecordPaymentDto): Promise<InvoiceDetail> {
+    return this.queue.run(async (em) => {
+      const invoice = await em.findOneBy(Invoice, { id: invoiceId, organisationId: user.organisationId });
+      if (!invoice) throw new NotFoundException('No such invoice.');
+      if (invoice.kind !== 'invoice' || invoice.status !== 'issued') throw new ConflictException('Payments are recorded against issued invoices only.');
+      const today = await todayFor(em, user.organisationId);
+      const problems: string[] = [];
+      if (!isCalendarDate(dto.receivedOn)) problems.push('receivedOn must be a date that exists, written YYYY-MM-DD.');
+      else if (dto.receivedOn > today) problems.push(`receivedOn must not be later than today (${today}).`);
+      const account = (await accountsOf(em, [invoice], today)).get(invoice.id)!;
+      if (account.owedMinor <= 0) problems.push(`Nothing is owed on ${invoice.number}.`);
+      else if (dto.amountMinor > account.owedMinor) problems.push(`amountMinor: ${formatMoney(dto.amountMinor)} is more than the ${formatMoney(account.owedMinor)} still owed on ${invoice.number}.`);
+      if (problems.length) throw new UnprocessableEntityException(problems);
+      await em.save(
+        em.create(Payment, {
+          organisationId: user.organisationId,
+          invoiceId: invoice.id,
+          amountMinor: dto.amountMinor,
+          method: dto.method,
+          receivedOn: dto.receivedOn,
+          reference: dto.reference ?? null,
+          note: dto.note ?? null,
+          recordedById: user.id,
+          checkoutSessionId: null,
+        }),
+      );
+      return detail(em, invoice, today);
+    });
+  }
+
+  /**
+   * A card payment, recorded inside the caller's transaction (the webhook's, with its event id). A checkout session
+   * settles at most one payment, however many times its completion is reported. Money already taken is never
+   * refused: if it is more than was owed by now, the invoice shows it overpaid.
+   */
+  async recordCard(em: EntityManager, report: CardPaymentReport): Promise<Payment | null> {
+    if (await em.findOneBy(Payment, { checkoutSessionId: report.checkoutSessionId })) return null;
+    return em.save(
+      em.create(Payment, {
+        organisationId: report.organisationId,
+        invoiceId: report.invoiceId,
+        amountMinor: report.amountMinor,
+        method: 'card',
+        receivedOn: report.receivedOn,
+        reference: report.reference,
+        note: null,
+        recordedById: null,
+        checkoutSessionId: report.checkoutSessionId,
+      }),
+    );
+  }
+
+  /** What is owed on each issued invoice with money outstanding, grouped by customer, in buckets of how late it is. */
+  agedDebt(user: AuthUser, asOf?: string): Promise<AgedDebtReport> {
+    if (asOf !== undefined && !isCalendarDate(asOf)) throw new UnprocessableEntityException(['asOf must be a date that exists, written YYYY-MM-DD.']);
+    return this.queue.read(async (em) => {
+      const day = asOf ?? (await todayFor(em, user.organisationId));
+      const invoices = await em.find(Invoice, { where: { organisationId: user.organisationId, kind: 'invoice', status: 'issued' } });
+      const owing = (await summarise(em, user.organisationId, invoices, day)).filter((i) => i.account && i.account.owedMinor > 0);
+      const byCustomer = new Map<string, { customerId: string | null; name: string; invoices: AgedDebtInvoice[] }>();
+      for (const i of owing) {
+        const key = i.customer?.id ?? 'none';
+        const entry = byCustomer.get(key) ?? { customerId: i.customer?.id ?? null, name: i.customer?.name ?? 'No customer', invoices: [] };
+        entry.invoices.push({
+          id: i.id,
+          number: i.number!,
+          jobId: i.jobId,
+          jobReference: i.job.reference,
+          issueDate: i.issueDate!,
+          dueDate: i.dueDate!,
+          grossMinor: i.grossMinor,
+          owedMinor: i.account!.owedMinor,
+          overdueDays: i.account!.overdueDays,
+          bucket: agedDebtBucket(i.dueDate!, day),
+          state: i.account!.state,
+        });
+        byCustomer.set(key, entry);
+      }
+      const debts = (list: AgedDebtInvoice[]) => list.map((i) => ({ owedMinor: i.owedMinor, dueDate: i.dueDate }));
+      const customers = [...byCustomer.values()]
+        .map((c) => ({
+          ...c,
+          invoices: c.invoices.sort((a, b) => a.dueDate.localeCompare(b.dueDate)),
+          totals: agedDebtTotals(debts(c.invoices), day),
+          oldestDays: Math.max(...c.invoices.map((i) => i.overdueDays)),
+        }))
+        // The longest owed first, then the most owed.
+        .sort((a, b) => b.oldestDays - a.oldestDays || b.totals.total - a.totals.total || a.name.localeCompare(b.name));
+      return {
+        asOf: day,
+        buckets: AGED_DEBT_BUCKETS.map((b) => ({ key: b.key, label: b.label })),
+        totals: agedDebtTotals(debts(customers.flatMap((c) => c.invoices)), day),
+        customers,
+      };
+    });
+  }
+}

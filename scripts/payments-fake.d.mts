@@ -1,0 +1,41 @@
+/** A checkout session as the fake keeps it, in the provider's documented shape (the fields Wiretrail reads). */
+export interface FakeCheckoutSession {
+  id: string;
+  object: 'checkout.session';
+  mode: string;
+  status: 'open' | 'complete' | 'expired';
+  payment_status: 'unpaid' | 'paid';
+  amount_total: number;
+  currency: string;
+  client_reference_id: string | null;
+  customer_email: string | null;
+  metadata: Record<string, string>;
+  success_url: string;
+  cancel_url: string | null;
+  payment_intent: string | null;
+  url: string;
+}
+
+export interface FakeEvent {
+  id: string;
+  type: string;
+  created: number;
+  data: { object: FakeCheckoutSession };
+  /** Each delivery attempt to the webhook: its HTTP status, or the error. */
+  deliveries: Array<{ at: string; status?: number; error?: string }>;
+}
+
+export interface PaymentsFake {
+  url: string;
+  port: number;
+  sessions: Map<string, FakeCheckoutSession>;
+  events: FakeEvent[];
+  setWebhookUrl(url: string): void;
+  /** Pays a session as the customer would on the fake's page; answers 303 when paid, 402 when the card is declined. */
+  pay(sessionId: string, card?: string): Promise<Response>;
+  close(): Promise<void>;
+}
+
+export const DECLINED_CARD: string;
+export function signPayload(payload: string, secret: string, timestamp?: number): string;
+export function startPaymentsFake(options?: { port?: number; host?: string; webhookUrl?: string; webhookSecret?: string; log?: (line: string) => void }): Promise<PaymentsFake>;

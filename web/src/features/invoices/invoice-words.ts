@@ -1,0 +1,40 @@
+import { formatMoney, INVOICE_NAMES } from '@wiretrail/core';
+import type { Account, InvoiceSummary, LineKind, PaymentMethod } from './api/get-invoice';
+
+export const LINE_KIND_NAMES: Record<LineKind, string> = { labour: 'Labour', material: 'Part', fixed: 'Fixed price' };
+export const METHOD_NAMES: Record<PaymentMethod, string> = { card: 'Card (online)', cash: 'Cash', 'bank-transfer': 'Bank transfer', cheque: 'Cheque' };
+
+const day = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+
+/** "14 Mar 2026" from a calendar date "2026-03-14". */
+export function dateWords(date: string | null | undefined): string {
+  return date && /^\d{4}-\d{2}-\d{2}$/.test(date) ? day.format(new Date(`${date}T12:00:00Z`)) : '';
+}
+
+/** "Invoice INV-0003", or "Draft invoice". */
+export function invoiceName(i: Pick<InvoiceSummary, 'kind' | 'number'>): string {
+  return i.number ? `${INVOICE_NAMES[i.kind]} ${i.number}` : `Draft ${INVOICE_NAMES[i.kind].toLowerCase()}`;
+}
+
+export type Standing = { label: string; color: 'default' | 'success' | 'warning' | 'error' | 'info'; detail?: string };
+
+/** Where an invoice stands, in words and a colour: paid, part paid, overdue by so many days, awaiting payment. */
+export function standingOf(i: Pick<InvoiceSummary, 'kind' | 'status' | 'lapsed'> & { account: Account | null }): Standing {
+  if (i.status === 'draft') return { label: 'Draft', color: 'default' };
+  if (i.kind === 'quote') return i.lapsed ? { label: 'Lapsed', color: 'default' } : { label: 'Issued', color: 'info' };
+  if (i.kind === 'credit-note') return { label: 'Issued', color: 'info' };
+  const a = i.account!;
+  const late = a.overdueDays > 0 ? `${a.overdueDays} ${a.overdueDays === 1 ? 'day' : 'days'} overdue` : undefined;
+  switch (a.state) {
+    case 'paid':
+      return { label: 'Paid', color: 'success' };
+    case 'credited':
+      return { label: 'Credited', color: 'default' };
+    case 'overpaid':
+      return { label: 'Overpaid', color: 'warning', detail: `${formatMoney(-a.owedMinor)} to refund` };
+    case 'part-paid':
+      return { label: late ? 'Part paid, overdue' : 'Part paid', color: late ? 'error' : 'warning', detail: [`${formatMoney(a.owedMinor)} owed`, late].filter(Boolean).join(' · ') };
+    case 'awaiting':
+      return { label: late ? 'Overdue' : 'Awaiting payment', color: late ? 'error' : 'info', detail: late };
+  }
+}
