@@ -1,5 +1,4 @@
 import Alert from '@mui/material/Alert';
-import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import LinearProgress from '@mui/material/LinearProgress';
 import Paper from '@mui/material/Paper';
@@ -23,6 +22,7 @@ import type { InvoiceKind } from '../api/get-invoice';
 import { type InvoiceFilter, useInvoices } from '../api/get-invoices';
 import { dateWords } from '../invoice-words';
 import { StandingChip } from './standing-chip';
+import { InvoiceNumberCell } from './invoice-number-cell';
 
 const FILTERS: Array<{ key: InvoiceFilter | 'all'; label: string }> = [
   { key: 'all', label: 'All' },
@@ -114,12 +114,7 @@ export function InvoicesTable({ jobLink }: { jobLink: (jobId: string) => string 
             <TableBody>
               {items.map((i) => (
                 <TableRow key={i.id} hover>
-                  <TableCell>
-                    <Box sx={{ fontWeight: 500, whiteSpace: 'nowrap' }}>{i.number ?? 'Draft'}</Box>
-                    <Typography variant="body2" color="text.secondary">
-                      {INVOICE_NAMES[i.kind]}
-                    </Typography>
-                  </TableCell>
+                  <InvoiceNumberCell number={i.number} kind={i.kind} />
                   <TableCell>
                     <div>{i.customer?.name ?? '—'}</div>
                     <Typography variant="body2" color="text.secondary">

@@ -1,7 +1,6 @@
 import NoteAddOutlined from '@mui/icons-material/NoteAddOutlined';
 import RequestQuoteOutlined from '@mui/icons-material/RequestQuoteOutlined';
 import Alert from '@mui/material/Alert';
-import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import LinearProgress from '@mui/material/LinearProgress';
 import Paper from '@mui/material/Paper';
@@ -14,7 +13,7 @@ import TableContainer from '@mui/material/TableContainer';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
-import { formatMoney, INVOICE_NAMES } from '@wiretrail/core';
+import { formatMoney } from '@wiretrail/core';
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { VisuallyHidden } from '@/components/visually-hidden';
@@ -24,6 +23,7 @@ import { useJobInvoices } from '../api/get-job-invoices';
 import { dateWords, invoiceName } from '../invoice-words';
 import { InvoiceDialog } from './invoice-dialog';
 import { MailChip, StandingChip } from './standing-chip';
+import { InvoiceNumberCell } from './invoice-number-cell';
 
 /**
  * A job's quotes, invoices and credit notes for the office: build one from the job (labour from the visits' times
@@ -99,13 +99,7 @@ export function JobInvoices({ jobId }: { jobId: string }) {
             <TableBody>
               {items.map((i) => (
                 <TableRow key={i.id} hover>
-                  <TableCell>
-                    <Box sx={{ fontWeight: 500, whiteSpace: 'nowrap' }}>{i.number ?? 'Draft'}</Box>
-                    <Typography variant="body2" color="text.secondary">
-                      {INVOICE_NAMES[i.kind]}
-                      {i.creditsNumber ? ` for ${i.creditsNumber}` : ''}
-                    </Typography>
-                  </TableCell>
+                  <InvoiceNumberCell number={i.number} kind={i.kind} creditsNumber={i.creditsNumber} />
                   <TableCell sx={{ whiteSpace: 'nowrap' }}>{i.issueDate ? dateWords(i.issueDate) : '—'}</TableCell>
                   <TableCell align="right" sx={{ whiteSpace: 'nowrap', fontVariantNumeric: 'tabular-nums' }}>
                     {formatMoney(i.grossMinor)}
