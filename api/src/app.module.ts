@@ -24,7 +24,7 @@ import { documentsConfig } from './config/documents.config.js';
 import { paymentsConfig } from './config/payments.config.js';
 import { photosConfig } from './config/photos.config.js';
 import { validateEnvironment } from './config/env.validation.js';
-import { sqliteOptions } from './database/typeorm-options.js';
+import { databaseOptions } from './database/typeorm-options.js';
 import { ConflictsModule } from './conflicts/conflicts.module.js';
 import { DocumentsModule } from './documents/documents.module.js';
 import { HealthModule } from './health/health.module.js';
@@ -68,7 +68,7 @@ function webAppModules(): DynamicModule[] {
     TypeOrmModule.forRootAsync({
       inject: [databaseConfig.KEY],
       useFactory: (db: ConfigType<typeof databaseConfig>) => ({
-        ...sqliteOptions(db.path),
+        ...databaseOptions(db),
         autoLoadEntities: true,
       }),
     }),

@@ -1,15 +1,16 @@
 import { BeforeInsert, Column, CreateDateColumn, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
+import { TIMESTAMP } from '../database/column-types.js';
 
 /** Ids are UUIDv7 so that devices can make them offline and they still sort by creation time. */
 export abstract class BaseRow {
   @PrimaryColumn({ type: 'varchar', length: 36 })
   id: string;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 
-  @UpdateDateColumn({ type: 'datetime' })
+  @UpdateDateColumn({ type: TIMESTAMP })
   updatedAt: Date;
 
   @BeforeInsert()

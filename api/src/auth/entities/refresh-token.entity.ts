@@ -1,5 +1,6 @@
 import { Column, Entity, Index } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
  * One refresh token. Tokens of one sign-in share a family: using a token that was
@@ -19,13 +20,13 @@ export class RefreshToken extends TenantRow {
   @Column({ type: 'varchar', length: 64 })
   tokenHash: string;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: TIMESTAMP })
   expiresAt: Date;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   rotatedAt: Date | null;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   revokedAt: Date | null;
 
   @Column({ type: 'varchar', length: 300, nullable: true })

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
  * Every provider event taken in, by the provider's own id: a replayed or redelivered event is recognised here and
@@ -19,6 +20,6 @@ export class PaymentEvent {
   @Column({ type: 'varchar', length: 300 })
   outcome: string;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   receivedAt: Date;
 }

@@ -1,6 +1,7 @@
 import type { InvoiceEmailState, InvoiceKind, InvoiceStatus } from '@wiretrail/core';
 import { Column, Entity, Index } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
  * A quote, an invoice or a credit note for a job: the same shape of priced lines and totals. A draft can be edited
@@ -49,7 +50,7 @@ export class Invoice extends TenantRow {
   @Column({ type: 'varchar', length: 10, nullable: true })
   dueDate: string | null;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   issuedAt: Date | null;
 
   @Column({ type: 'varchar', length: 36, nullable: true })
@@ -88,7 +89,7 @@ export class Invoice extends TenantRow {
   @Column({ type: 'varchar', length: 254, nullable: true })
   emailedTo: string | null;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   emailedAt: Date | null;
 
   @Column({ type: 'varchar', length: 500, nullable: true })

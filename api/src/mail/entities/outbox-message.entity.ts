@@ -1,5 +1,6 @@
 import { Column, Entity, Index } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 export type OutboxState = 'queued' | 'sent' | 'failed';
 
@@ -37,17 +38,17 @@ export class OutboxMessage extends TenantRow {
   @Column({ type: 'integer', default: 0 })
   attempts: number;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: TIMESTAMP })
   nextAttemptAt: Date;
 
   /** While one worker is sending it, others leave it alone; a worker that died lets go when this passes. */
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   claimedUntil: Date | null;
 
   @Column({ type: 'varchar', length: 500, nullable: true })
   lastError: string | null;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   sentAt: Date | null;
 
   @Column({ type: 'varchar', length: 36 })

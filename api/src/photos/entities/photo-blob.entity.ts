@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
  * The bytes of one photo as an organisation's storage holds them, named by their sha256, with the sizes made
@@ -27,6 +28,6 @@ export class PhotoBlob {
   @Column({ type: 'integer' })
   height: number;
 
-  @CreateDateColumn({ type: 'datetime' })
+  @CreateDateColumn({ type: TIMESTAMP })
   createdAt: Date;
 }

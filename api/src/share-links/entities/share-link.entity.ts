@@ -1,5 +1,6 @@
 import { Column, Entity, Index } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
  * A link the office gives a customer to read one job's record without an account. Only the sha256 of its random
@@ -19,10 +20,10 @@ export class ShareLink extends TenantRow {
   @Column({ type: 'varchar', length: 200, nullable: true })
   label: string | null;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: TIMESTAMP })
   expiresAt: Date;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   revokedAt: Date | null;
 
   @Column({ type: 'varchar', length: 36, nullable: true })
@@ -31,7 +32,7 @@ export class ShareLink extends TenantRow {
   @Column({ type: 'varchar', length: 36 })
   createdById: string;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   lastOpenedAt: Date | null;
 
   @Column({ type: 'integer', default: 0 })

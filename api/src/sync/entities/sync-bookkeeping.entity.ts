@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
+import { TIMESTAMP, NOW } from '../../database/column-types.js';
 
 /**
  * The latest change of every synced row, in server order. `seq` comes from one counter, so pulls page through
@@ -55,7 +56,7 @@ export class AppliedMutation {
   @Column({ type: 'simple-json' })
   result: Record<string, unknown>;
 
-  @Column({ type: 'datetime', default: () => "(datetime('now'))" })
+  @Column({ type: TIMESTAMP, default: NOW })
   appliedAt: Date;
 }
 
@@ -87,7 +88,7 @@ export class SyncDevice {
   @Column({ type: 'simple-json', nullable: true })
   previousScope: string[] | null;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   lastPullAt: Date | null;
 }
 

@@ -1,5 +1,6 @@
 import { type FieldType, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
 import { EntitySchema, type EntitySchemaColumnOptions } from 'typeorm';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
  * What the server keeps about each field of a synced row: the change sequence that last wrote it
@@ -55,11 +56,11 @@ const COMMON_COLUMNS: Record<string, EntitySchemaColumnOptions> = {
   organisationId: { type: 'varchar', length: 36 },
   version: { type: 'integer' },
   fieldMeta: { type: 'simple-json' },
-  deletedAt: { type: 'datetime', nullable: true },
+  deletedAt: { type: TIMESTAMP, nullable: true },
   createdById: { type: 'varchar', length: 36, nullable: true },
   updatedById: { type: 'varchar', length: 36, nullable: true },
-  createdAt: { type: 'datetime', createDate: true },
-  updatedAt: { type: 'datetime', updateDate: true },
+  createdAt: { type: TIMESTAMP, createDate: true },
+  updatedAt: { type: TIMESTAMP, updateDate: true },
 };
 
 /** Conflicts are made by the server only; they sync to office devices like any other row. */
@@ -76,7 +77,7 @@ const CONFLICT_COLUMNS: Record<string, EntitySchemaColumnOptions> = {
   discardedById: { type: 'varchar', length: 36, nullable: true },
   discardedHlc: { type: 'varchar', length: 120, nullable: true },
   discardedDeviceId: { type: 'varchar', length: 64, nullable: true },
-  resolvedAt: { type: 'datetime', nullable: true },
+  resolvedAt: { type: TIMESTAMP, nullable: true },
   resolvedById: { type: 'varchar', length: 36, nullable: true },
   resolution: { type: 'simple-json', nullable: true },
 };

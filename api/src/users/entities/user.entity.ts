@@ -1,6 +1,7 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, type Relation } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
 import { Organisation } from '../../organisations/entities/organisation.entity.js';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 export const ROLES = ['admin', 'office', 'technician'] as const;
 export type Role = (typeof ROLES)[number];
@@ -28,7 +29,7 @@ export class User extends TenantRow {
   @Column({ type: 'boolean', default: true })
   active: boolean;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: TIMESTAMP, nullable: true })
   lastSignInAt: Date | null;
 }
 
