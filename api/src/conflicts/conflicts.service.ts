@@ -40,13 +40,13 @@ export class ConflictsService {
     const ids = async (entity: SyncEntityName, where: Record<string, unknown>) =>
       (await em.getRepository<SyncRecord>(entity).find({ where: { organisationId, ...where }, select: { id: true }, withDeleted: true })).map((r) => r.id);
     const visitIds = await ids('visit', { jobId });
-    const recorded = visitIds.length
-      ? await Promise.all([
-          ...(['photo', 'note', 'pointChange', 'testResult'] as const).map((e) => ids(e, { visitId: In(visitIds) })),
-          ids('cableRun', { lastVisitId: In(visitIds) }),
-        ])
-      : [];
-    return [jobId, ...visitIds, ...recorded.flat()];
+    const recorded: string[] = [];
+    if (visitIds.length) {
+      // One query at a time: they share the transaction's connection.
+      for (const e of ['photo', 'note', 'pointChange', 'testResult'] as const) recorded.push(...(await ids(e, { visitId: In(visitIds) })));
+      recorded.push(...(await ids('cableRun', { lastVisitId: In(visitIds) })));
+    }
+    return [jobId, ...visitIds, ...recorded];
   }
 
   async findOne(user: AuthUser, id: string) {

@@ -6,6 +6,7 @@ import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
 import { judgeMinorWorks, type MinorWorksJudgement } from './minor-works-check.js';
+import { inTurn } from '../common/in-turn.js';
 
 /** Everything about a job that every document prints at its head. */
 export interface JobFile {
@@ -27,12 +28,12 @@ function rows(em: EntityManager, entity: string, where: Record<string, unknown>)
 export async function loadJobFile(em: EntityManager, organisationId: string, jobId: string): Promise<JobFile> {
   const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, ...live(organisationId) });
   if (!job) throw new NotFoundException('No such job.');
-  const [organisation, site, customer, areas] = await Promise.all([
-    em.findOneByOrFail(Organisation, { id: organisationId }),
-    em.getRepository<SyncRecord>('site').findOneOrFail({ where: { id: job.siteId as string, organisationId }, withDeleted: true }),
-    em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId }, withDeleted: true }),
-    rows(em, 'area', { siteId: job.siteId, organisationId }),
-  ]);
+  const [organisation, site, customer, areas] = await inTurn(
+    () => em.findOneByOrFail(Organisation, { id: organisationId }),
+    () => em.getRepository<SyncRecord>('site').findOneOrFail({ where: { id: job.siteId as string, organisationId }, withDeleted: true }),
+    () => em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId }, withDeleted: true }),
+    () => rows(em, 'area', { siteId: job.siteId, organisationId }),
+  );
   return { organisation, job, site, customer, areas: new Map(areas.map((a) => [a.id, a.name as string])) };
 }
 
@@ -49,12 +50,12 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
   const org = file.organisation.id;
   const visits = await jobVisits(em, file);
   const visitIds = visits.map((v) => v.id);
-  const [tests, pointChanges, circuits, boards] = await Promise.all([
-    visitIds.length ? rows(em, 'testResult', { visitId: In(visitIds), ...live(org) }) : [],
-    visitIds.length ? rows(em, 'pointChange', { visitId: In(visitIds), ...live(org) }) : [],
-    rows(em, 'circuit', { siteId: file.site.id, ...live(org) }),
-    rows(em, 'board', { siteId: file.site.id, organisationId: org }),
-  ]);
+  const [tests, pointChanges, circuits, boards] = await inTurn(
+    () => visitIds.length ? rows(em, 'testResult', { visitId: In(visitIds), ...live(org) }) : [],
+    () => visitIds.length ? rows(em, 'pointChange', { visitId: In(visitIds), ...live(org) }) : [],
+    () => rows(em, 'circuit', { siteId: file.site.id, ...live(org) }),
+    () => rows(em, 'board', { siteId: file.site.id, organisationId: org }),
+  );
   const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: (file.site.earthing as string) ?? null }, rules);
   return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])) };
 }

@@ -5,6 +5,7 @@ import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { InvoiceLine } from './entities/invoice-line.entity.js';
 import { Payment } from './entities/payment.entity.js';
+import { inTurn } from '../common/in-turn.js';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
@@ -19,10 +20,10 @@ export async function accountsOf(em: EntityManager, invoices: Invoice[], asOf: s
   const issued = invoices.filter((i) => i.kind === 'invoice' && i.status === 'issued');
   const ids = issued.map((i) => i.id);
   if (!ids.length) return new Map();
-  const [payments, credits] = await Promise.all([
-    em.find(Payment, { where: { invoiceId: In(ids) } }),
-    em.find(Invoice, { where: { creditsInvoiceId: In(ids), status: 'issued', kind: 'credit-note' } }),
-  ]);
+  const [payments, credits] = await inTurn(
+    () => em.find(Payment, { where: { invoiceId: In(ids) } }),
+    () => em.find(Invoice, { where: { creditsInvoiceId: In(ids), status: 'issued', kind: 'credit-note' } }),
+  );
   const sum = <T>(rows: T[], key: (r: T) => string, value: (r: T) => number) => {
     const m = new Map<string, number>();
     for (const r of rows) m.set(key(r), (m.get(key(r)) ?? 0) + value(r));
@@ -85,12 +86,12 @@ export async function summarise(em: EntityManager, organisationId: string, invoi
 }
 
 export async function detail(em: EntityManager, invoice: Invoice, asOf: string): Promise<InvoiceDetail> {
-  const [[summary], lines, payments, credits] = await Promise.all([
-    summarise(em, invoice.organisationId, [invoice], asOf),
-    em.find(InvoiceLine, { where: { invoiceId: invoice.id }, order: { position: 'ASC' } }),
-    em.find(Payment, { where: { invoiceId: invoice.id }, order: { receivedOn: 'ASC', createdAt: 'ASC' } }),
-    em.find(Invoice, { where: { creditsInvoiceId: invoice.id, kind: 'credit-note' }, order: { createdAt: 'ASC' } }),
-  ]);
+  const [[summary], lines, payments, credits] = await inTurn(
+    () => summarise(em, invoice.organisationId, [invoice], asOf),
+    () => em.find(InvoiceLine, { where: { invoiceId: invoice.id }, order: { position: 'ASC' } }),
+    () => em.find(Payment, { where: { invoiceId: invoice.id }, order: { receivedOn: 'ASC', createdAt: 'ASC' } }),
+    () => em.find(Invoice, { where: { creditsInvoiceId: invoice.id, kind: 'credit-note' }, order: { createdAt: 'ASC' } }),
+  );
   return {
     ...summary!,
     termDays: invoice.termDays,

@@ -6,6 +6,7 @@ import { type Condition, type Listing, type OfficeRow, RecordsService } from '..
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { JobFiltersDto, JobSort, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
+import { inTurn } from '../common/in-turn.js';
 
 /** Visits still to do: the next visit of a job is the earliest of these. */
 const OPEN_VISIT = `("v"."status" IS NULL OR "v"."status" NOT IN ('finished', 'cancelled'))`;
@@ -89,14 +90,14 @@ export class JobsService extends RecordsService<ListJobsQueryDto> {
     if (!rows.length) return [];
     const org = user.organisationId;
     const ids = (field: string) => [...new Set(rows.map((r) => r[field] as string))];
-    const [customers, sites, visits] = await Promise.all([
-      em.getRepository<SyncRecord>('customer').find({ where: { id: In(ids('customerId')), organisationId: org }, select: { id: true, name: true } }),
-      em.getRepository<SyncRecord>('site').find({ where: { id: In(ids('siteId')), organisationId: org }, select: { id: true, name: true, address: true } }),
-      em.getRepository<SyncRecord>('visit').find({
+    const [customers, sites, visits] = await inTurn(
+      () => em.getRepository<SyncRecord>('customer').find({ where: { id: In(ids('customerId')), organisationId: org }, select: { id: true, name: true } }),
+      () => em.getRepository<SyncRecord>('site').find({ where: { id: In(ids('siteId')), organisationId: org }, select: { id: true, name: true, address: true } }),
+      () => em.getRepository<SyncRecord>('visit').find({
         where: { jobId: In(rows.map((r) => r.id)), organisationId: org, deletedAt: IsNull() },
         select: { id: true, jobId: true, plannedStart: true, status: true, technicianIds: true },
       }),
-    ]);
+    );
     const customerName = new Map(customers.map((c) => [c.id, c.name as string]));
     const siteName = new Map(sites.map((s) => [s.id, (s.name as string | null) ?? (s.address as string)]));
     return rows.map((r) => {

@@ -6,6 +6,7 @@ import { type Listing, type OfficeRow, ofJobVisits, RecordsService } from '../co
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListPointChangesQueryDto } from './dto/list-point-changes-query.dto.js';
+import { inTurn } from '../common/in-turn.js';
 
 @Injectable()
 export class PointChangesService extends RecordsService<ListPointChangesQueryDto> {
@@ -24,11 +25,11 @@ export class PointChangesService extends RecordsService<ListPointChangesQueryDto
   /** Each change with the names of its circuit and areas, and when its visit was planned. */
   protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
     const org = user.organisationId;
-    const [areas, circuits, visits] = await Promise.all([
-      rowsById(em, org, 'area', rows.flatMap((r) => [r.fromAreaId, r.toAreaId])),
-      rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
-      rowsById(em, org, 'visit', rows.map((r) => r.visitId)),
-    ]);
+    const [areas, circuits, visits] = await inTurn(
+      () => rowsById(em, org, 'area', rows.flatMap((r) => [r.fromAreaId, r.toAreaId])),
+      () => rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
+      () => rowsById(em, org, 'visit', rows.map((r) => r.visitId)),
+    );
     const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
     return rows.map((r) => {
       const circuit = circuits.get(r.circuitId as string);

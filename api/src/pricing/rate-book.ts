@@ -3,6 +3,7 @@ import { formatRate } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import { LabourRate } from './entities/labour-rate.entity.js';
 import { VatRate } from './entities/vat-rate.entity.js';
+import { inTurn } from '../common/in-turn.js';
 
 /** The organisation's VAT and labour rates as they stand, read inside the caller's transaction. */
 export interface RateBook {
@@ -13,10 +14,10 @@ export interface RateBook {
 }
 
 export async function loadRateBook(em: EntityManager, organisationId: string): Promise<RateBook> {
-  const [vat, labour] = await Promise.all([
-    em.find(VatRate, { where: { organisationId }, order: { basisPoints: 'DESC', code: 'ASC' } }),
-    em.find(LabourRate, { where: { organisationId }, order: { name: 'ASC', id: 'ASC' } }),
-  ]);
+  const [vat, labour] = await inTurn(
+    () => em.find(VatRate, { where: { organisationId }, order: { basisPoints: 'DESC', code: 'ASC' } }),
+    () => em.find(LabourRate, { where: { organisationId }, order: { name: 'ASC', id: 'ASC' } }),
+  );
   const active = labour.filter((l) => l.active);
   return { vat: new Map(vat.map((r) => [r.code, r])), labour, defaultLabour: active.find((l) => l.isDefault) ?? active[0] ?? null };
 }

@@ -11,6 +11,7 @@ import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import type { CreateShareLinkDto } from './dto/create-share-link.dto.js';
 import { SHARE_LINK_DAYS } from './dto/create-share-link.dto.js';
 import { ShareLink } from './entities/share-link.entity.js';
+import { inTurn } from '../common/in-turn.js';
 
 export type ShareLinkState = 'active' | 'expired' | 'revoked';
 
@@ -135,16 +136,16 @@ export class ShareLinksService {
       const link = await this.linkFor(em, token);
       const org = link.organisationId;
       const job = await this.jobOf(em, org, link.jobId);
-      const [organisation, site, customer, visits, documents] = await Promise.all([
-        em.findOneByOrFail(Organisation, { id: org }),
-        em.getRepository<SyncRecord>('site').findOne({ where: { id: job.siteId as string, organisationId: org }, withDeleted: true }),
-        em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId: org }, withDeleted: true }),
-        em.getRepository<SyncRecord>('visit').find({ where: { jobId: job.id, organisationId: org, deletedAt: IsNull() }, select: { id: true } }),
-        em.getRepository<SyncRecord>('document').find({
+      const [organisation, site, customer, visits, documents] = await inTurn(
+        () => em.findOneByOrFail(Organisation, { id: org }),
+        () => em.getRepository<SyncRecord>('site').findOne({ where: { id: job.siteId as string, organisationId: org }, withDeleted: true }),
+        () => em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId: org }, withDeleted: true }),
+        () => em.getRepository<SyncRecord>('visit').find({ where: { jobId: job.id, organisationId: org, deletedAt: IsNull() }, select: { id: true } }),
+        () => em.getRepository<SyncRecord>('document').find({
           where: { jobId: job.id, organisationId: org, deletedAt: IsNull(), issuedAt: Not(IsNull()), pdfSha256: Not(IsNull()) },
           order: { issuedAt: 'ASC' },
         }),
-      ]);
+      );
       const photos = visits.length
         ? await em.getRepository<SyncRecord>('photo').find({ where: { visitId: In(visits.map((v) => v.id)), organisationId: org, deletedAt: IsNull() }, order: { takenAt: 'ASC', id: 'ASC' } })
         : [];

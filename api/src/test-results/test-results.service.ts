@@ -7,6 +7,7 @@ import { type Listing, type OfficeRow, ofJobVisits, RecordsService } from '../co
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListTestResultsQueryDto } from './dto/list-test-results-query.dto.js';
+import { inTurn } from '../common/in-turn.js';
 
 const READINGS = [
   'r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'irTestVoltageV', 'polarity', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x', 'rcdButton',
@@ -37,10 +38,10 @@ export class TestResultsService extends RecordsService<ListTestResultsQueryDto> 
    */
   protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
     const org = user.organisationId;
-    const [circuits, sites] = await Promise.all([
-      rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
-      rowsById(em, org, 'site', rows.map((r) => r.siteId)),
-    ]);
+    const [circuits, sites] = await inTurn(
+      () => rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
+      () => rowsById(em, org, 'site', rows.map((r) => r.siteId)),
+    );
     const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
     return rows.map((r) => {
       const c = circuits.get(r.circuitId as string);
