@@ -15,6 +15,7 @@ import type { ListPhotosQueryDto } from './dto/list-photos-query.dto.js';
 import { PhotoBlob } from './entities/photo-blob.entity.js';
 import { PhotoRefused, processPhoto } from './image-processing.js';
 import { PHOTO_STORAGE, PhotoObjectMissing, type PhotoStorage, photoKey, type StoredVariant } from './storage/photo-storage.js';
+import { jsonListHas, textLike } from '../database/sql.js';
 
 export interface PhotoPage {
   items: Array<SyncedRow & { visitPlannedStart: string | null; createdByName: string | null }>;
@@ -136,15 +137,15 @@ export class PhotosService implements OnModuleInit {
       params[field] = value;
     }
     if (q.jobId !== undefined) {
-      where.push('r.visitId IN (SELECT v.id FROM "visit" AS v WHERE v.organisationId = :org AND v.jobId = :jobId)');
+      where.push('r.visitId IN (SELECT "v"."id" FROM "visit" AS "v" WHERE "v"."organisationId" = :org AND "v"."jobId" = :jobId)');
       params.jobId = q.jobId;
     }
     if (q.tag !== undefined) {
-      where.push('EXISTS (SELECT 1 FROM json_each(r.tags) AS t WHERE t.value = :tag)');
+      where.push(jsonListHas('r.tags', 'tag'));
       params.tag = q.tag;
     }
     if (q.search) {
-      where.push(`r.caption LIKE :like ESCAPE '\\'`);
+      where.push(textLike('r.caption', 'like'));
       params.like = `%${escapeLike(q.search)}%`;
     }
     const { rows, total, visits, people } = await this.queue.read(async (em) => {
@@ -207,7 +208,7 @@ export class PhotosService implements OnModuleInit {
         .getRepository<SyncRecord>('photo')
         .createQueryBuilder('p')
         .where('p.id = :id AND p.organisationId = :org AND p.deletedAt IS NULL', { id, org: organisationId })
-        .andWhere('p.visitId IN (SELECT v.id FROM "visit" AS v WHERE v.organisationId = :org AND v.jobId = :jobId AND v.deletedAt IS NULL)', { jobId })
+        .andWhere('p.visitId IN (SELECT "v"."id" FROM "visit" AS "v" WHERE "v"."organisationId" = :org AND "v"."jobId" = :jobId AND "v"."deletedAt" IS NULL)', { jobId })
         .getOne();
       const blob = row && typeof row.sha256 === 'string' ? await em.findOneBy(PhotoBlob, { organisationId, sha256: row.sha256 }) : null;
       return { row, blob };

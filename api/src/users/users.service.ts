@@ -10,6 +10,7 @@ import type { CreateUserDto } from './dto/create-user.dto.js';
 import type { ListUsersQueryDto } from './dto/list-users-query.dto.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
 import { type PublicUser, toPublicUser, User } from './entities/user.entity.js';
+import { textLike } from '../database/sql.js';
 
 export interface Page<T> {
   items: T[];
@@ -30,7 +31,7 @@ export class UsersService {
     if (q.role) qb.andWhere('u.role = :role', { role: q.role });
     if (q.search) {
       const like = `%${q.search.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-      qb.andWhere(new Brackets((b) => b.where("u.name LIKE :like ESCAPE '\\'", { like }).orWhere("u.email LIKE :like ESCAPE '\\'", { like })));
+      qb.andWhere(new Brackets((b) => b.where(textLike('u.name', 'like'), { like }).orWhere(textLike('u.email', 'like'), { like })));
     }
     const [rows, total] = await qb
       .orderBy('u.name', 'ASC')

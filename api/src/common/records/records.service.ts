@@ -9,6 +9,7 @@ import type { AuthUser } from '../decorators/current-user.decorator.js';
 import { definedFields } from '../defined-fields.js';
 import { WriteQueue } from '../write-queue.js';
 import type { PageQueryDto } from './page-query.dto.js';
+import { jsonListHas, textLike } from '../../database/sql.js';
 
 /** The records the office reads and writes directly; the rest arrive from devices through sync. */
 export type OfficeRecord = 'customer' | 'site' | 'area' | 'board' | 'circuit' | 'job' | 'visit' | 'priceItem';
@@ -148,7 +149,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
     }
     for (const [field, value] of Object.entries(l.listContains ?? {})) {
       if (value === undefined) continue;
-      where.push(`EXISTS (SELECT 1 FROM json_each(r.${field}) AS item WHERE item.value = :in_${field})`);
+      where.push(jsonListHas(`r.${field}`, `in_${field}`));
       params[`in_${field}`] = value;
     }
     if (l.range?.from !== undefined) {
@@ -165,9 +166,9 @@ export abstract class RecordsService<Q extends PageQueryDto> {
     }
     if (search && (l.search.length || l.searchThrough?.length)) {
       params.like = `%${escapeLike(search)}%`;
-      const matches = (columns: string[], alias: string) => columns.map((c) => `${alias}.${c} LIKE :like ESCAPE '\\'`);
+      const matches = (columns: string[], alias: string) => columns.map((c) => textLike(`"${alias}"."${c}"`, 'like'));
       const through = (l.searchThrough ?? []).map(
-        (s) => `r.${s.field} IN (SELECT t.id FROM "${SYNC_ENTITIES[s.entity].table}" AS t WHERE t.organisationId = :org AND (${matches(s.columns, 't').join(' OR ')}))`,
+        (s) => `r.${s.field} IN (SELECT "t"."id" FROM "${SYNC_ENTITIES[s.entity].table}" AS "t" WHERE "t"."organisationId" = :org AND (${matches(s.columns, 't').join(' OR ')}))`,
       );
       where.push(`(${[...matches(l.search, 'r'), ...through].join(' OR ')})`);
     }
