@@ -7,6 +7,7 @@ import { rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
 import { BodyErrorFilter } from './common/filters/body-error.filter.js';
 import { refuseDeepBodies } from './common/middleware/json-depth.js';
+import { RefuseNulPipe } from './common/pipes/refuse-nul.pipe.js';
 import { PhotoUploads } from './photos/uploads/photo-uploads.js';
 
 function flatten(errors: ValidationError[], parent = ''): string[] {
@@ -65,6 +66,7 @@ export function configureApp(app: INestApplication): INestApplication {
   );
   app.useGlobalFilters(new BodyErrorFilter());
   app.useGlobalPipes(
+    new RefuseNulPipe(),
     new ValidationPipe({
       whitelist: true,
       forbidNonWhitelisted: true,

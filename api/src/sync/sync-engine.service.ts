@@ -63,7 +63,7 @@ export class SyncEngine {
     const scope = actor.role === 'technician' ? await this.scopes.technicianScope(em, actor.organisationId, actor.userId) : null;
     // One look-up for the whole batch's replays, one counter read and write, and remembered reference checks:
     // per-mutation round trips dominate the cost of a push.
-    const ids = mutations.map((m) => m?.mutationId).filter((id): id is string => typeof id === 'string');
+    const ids = mutations.map((m) => m?.mutationId).filter(isMutationId);
     const applied = await selectMany(em, AppliedMutation, 'mutationId', ids);
     const batch: Batch = {
       applied: new Map(applied.map((a) => [a.mutationId, a])),
@@ -160,7 +160,8 @@ export class SyncEngine {
 
 
   private async applyOnce(em: EntityManager, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
-    const mutationId = typeof m?.mutationId === 'string' ? m.mutationId : '';
+    // An id that could never be stored is refused without being looked up or kept.
+    const mutationId = isMutationId(m?.mutationId) ? m.mutationId : '';
     const batch = this.batches.get(em);
     const done = mutationId ? (batch ? batch.applied.get(mutationId) : await em.findOneBy(AppliedMutation, { mutationId })) : null;
     if (done) {
@@ -188,7 +189,7 @@ export class SyncEngine {
     // A batch is a list of anything until checked: null or a number in it is refused alone, like any bad mutation.
     if (typeof m !== 'object' || m === null || Array.isArray(m)) throw new MutationRefused('A mutation must be an object: { mutationId, entity, id, baseVersion, set or delete, hlc }.');
     const { mutationId } = m;
-    if (typeof mutationId !== 'string' || mutationId.length < 8 || mutationId.length > 64) throw new MutationRefused('mutationId must be a unique id of 8 to 64 characters.');
+    if (!isMutationId(mutationId)) throw new MutationRefused('mutationId must be a unique id of 8 to 64 characters, none of them control characters.');
     if (!isSyncEntity(m.entity)) throw new MutationRefused(`entity must be one of the synced entities; got ${JSON.stringify(m.entity)}.`);
     const spec = SYNC_ENTITIES[m.entity];
     if (spec.serverOnly) throw new MutationRefused(`${m.entity} rows are made by the server only.`);
@@ -460,6 +461,11 @@ export class SyncEngine {
 }
 
 type LockReason = 'locked-by-document' | 'locked-by-sign-off';
+
+/** What applied_mutation can keep: PostgreSQL holds varchar(64) to its length and refuses NUL in text. */
+function isMutationId(id: unknown): id is string {
+  return typeof id === 'string' && id.length >= 8 && id.length <= 64 && !/\p{Cc}/u.test(id);
+}
 
 /** An issued document's own fields that still change: how its e-mail is getting on. */
 const DOCUMENT_FIELDS_AFTER_ISSUE = new Set(['emailState', 'emailedTo', 'emailedAt', 'emailError']);

@@ -40,6 +40,9 @@ describe('synced entities', () => {
     expect(fieldError('note', 'text', null)).toBe('note.text must not be empty');
     expect(fieldError('note', 'colour', 'red')).toBe('note.colour is not a field we accept');
     expect(fieldError('note', 'constructor', 'x')).toBe('note.constructor is not a field we accept');
+    // PostgreSQL cannot keep U+0000 in text; the phone refuses it as the server does.
+    expect(fieldError('note', 'text', 'Back\u0000box')).toBe('note.text must not contain the NUL character (U+0000)');
+    expect(fieldError('visit', 'actualStart', '2026-12-04T09:00:00Z\u0000')).toBe('visit.actualStart must be an ISO-8601 date and time');
     expect(fieldError('circuit', 'kind', 'spiral')).toMatch(/must be one of: ring, radial/);
     expect(fieldError('circuit', 'deviceRatingA', Number.NaN)).toBe('circuit.deviceRatingA must be a number');
     expect(fieldError('circuit', 'boardId', 'board-1')).toBe('circuit.boardId must be the id of a board');

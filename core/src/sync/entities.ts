@@ -261,6 +261,8 @@ export function fieldError(entity: SyncEntityName, field: string, value: unknown
     case 'string':
       if (typeof value !== 'string') return `${name} must be text`;
       if (value.length > t.max) return `${name} must be at most ${t.max} characters`;
+      // No database keeps it faithfully (PostgreSQL refuses it in text), and nobody types it.
+      if (value.includes('\u0000')) return `${name} must not contain the NUL character (U+0000)`;
       if (spec.required && value.trim() === '') return `${name} must not be empty`;
       return null;
     case 'number':
@@ -273,7 +275,7 @@ export function fieldError(entity: SyncEntityName, field: string, value: unknown
     case 'boolean':
       return typeof value === 'boolean' ? null : `${name} must be true or false`;
     case 'datetime':
-      return typeof value === 'string' && !Number.isNaN(Date.parse(value)) && /^\d{4}-\d{2}-\d{2}T/.test(value)
+      return typeof value === 'string' && !Number.isNaN(Date.parse(value)) && /^\d{4}-\d{2}-\d{2}T[^\u0000]*$/.test(value)
         ? null
         : `${name} must be an ISO-8601 date and time`;
     case 'ref':

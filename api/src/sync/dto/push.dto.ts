@@ -1,6 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import type { Mutation } from '@wiretrail/core';
 import { IsArray, IsString, Matches } from 'class-validator';
+import { ChecksItsOwnStrings } from '../../common/pipes/refuse-nul.pipe.js';
 
 export const DEVICE_ID = /^[A-Za-z0-9_-]{4,64}$/;
 
@@ -17,5 +18,6 @@ export class PushDto {
     items: { type: 'object' },
   })
   @IsArray({ message: 'mutations must be a list' })
+  @ChecksItsOwnStrings()
   mutations: Mutation[];
 }
