@@ -6,5 +6,7 @@ export default {
   extensionsToTreatAsEsm: ['.ts'],
   moduleNameMapper: { '^(\\.{1,2}/.*)\\.js$': '$1' },
   transform: { '^.+\\.ts$': ['ts-jest', { useESM: true }] },
+  // Deployment shapes SQLite does not have (several API processes on one database) run only on PostgreSQL.
+  testPathIgnorePatterns: ['/node_modules/', ...(process.env.DB_TYPE === 'postgres' ? [] : ['/test/postgres/'])],
   testTimeout: 30000,
 };

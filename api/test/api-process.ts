@@ -5,6 +5,8 @@ import { createServer, type AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 
+import { databaseEnvFor, type DatabaseProbe, dropDatabaseFor, openProbe } from './test-database.js';
+
 const API_DIR = resolve(import.meta.dirname, '..');
 
 /**
@@ -12,7 +14,6 @@ const API_DIR = resolve(import.meta.dirname, '..');
  * SIGKILL and started again on the same database, photo and upload directories.
  */
 export class ApiProcess {
-  readonly directory = mkdtempSync(join(tmpdir(), 'wiretrail-process-'));
   readonly origin: string;
   /** Where the API answers; uploads' addresses are relative to the origin. */
   readonly base: string;
@@ -22,13 +23,15 @@ export class ApiProcess {
 
   /** On a port the system says is free, kept across restarts so that a client's addresses stay good. */
   static async create(env: Record<string, string> = {}): Promise<ApiProcess> {
+    // Given DATABASE_URL and DATABASE_PATH of another, a second process shares its database and files.
     const probe = createServer();
     const port = await new Promise<number>((resolve) => probe.listen(0, '127.0.0.1', () => resolve((probe.address() as AddressInfo).port)));
     await new Promise((resolve) => probe.close(resolve));
-    return new ApiProcess(port, env);
+    const directory = mkdtempSync(join(tmpdir(), 'wiretrail-process-'));
+    return new ApiProcess(directory, port, { ...(await databaseEnvFor(directory, 'wiretrail.sqlite')), ...env });
   }
 
-  private constructor(readonly port: number, env: Record<string, string>) {
+  private constructor(readonly directory: string, readonly port: number, env: Record<string, string>) {
     this.origin = `http://127.0.0.1:${port}`;
     this.base = `${this.origin}/api`;
     this.env = {
@@ -36,15 +39,15 @@ export class ApiProcess {
       NODE_ENV: 'production',
       PORT: String(port),
       HOST: '127.0.0.1',
-      DATABASE_PATH: join(this.directory, 'wiretrail.sqlite'),
       JWT_SECRET: 'process-test-secret-long-enough-for-signing-tokens',
       SIGN_IN_RATE_LIMIT: '1000',
       ...env,
     };
   }
 
-  get databasePath(): string {
-    return this.env.DATABASE_PATH!;
+  /** Its database, read behind its back. */
+  probe(): Promise<DatabaseProbe> {
+    return openProbe(this.env);
   }
 
   get running(): boolean {
@@ -115,6 +118,7 @@ export class ApiProcess {
 
   async remove(): Promise<void> {
     await this.kill();
+    await dropDatabaseFor(this.directory);
     rmSync(this.directory, { recursive: true, force: true });
   }
 }

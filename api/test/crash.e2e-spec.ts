@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { formatHlc, type Mutation, type MutationResult, type PullResponse, type SyncedRow } from '@wiretrail/core';
-import Database from 'better-sqlite3';
 import { join } from 'node:path';
 import { v7 as uuidv7 } from 'uuid';
 import { ApiProcess, signInTo } from './api-process.js';
@@ -183,16 +182,16 @@ describe('a killed server loses nothing and applies nothing twice', () => {
     await pushing(() => !rowsToSend.length && unanswered === null);
     await api.kill();
 
-    const db = new Database(api.databasePath, { readonly: true });
+    const db = await api.probe();
     try {
-      expect(db.pragma('integrity_check', { simple: true })).toBe('ok');
+      expect(await db.integrity()).toBe('ok');
       const all = sent.flat();
       figures.batches = sent.length;
       figures.mutations = all.length;
-      const applied = db.prepare(`SELECT COUNT(*) AS n FROM applied_mutation WHERE deviceId = ?`).get(DEVICE) as { n: number };
+      const applied = (await db.get<{ n: number }>(`SELECT CAST(COUNT(*) AS INTEGER) AS n FROM "applied_mutation" WHERE "deviceId" = ?`, [DEVICE]))!;
       expect(applied.n).toBe(all.length);
 
-      const notes = db.prepare(`SELECT id, version FROM note WHERE text LIKE 'batch %'`).all() as Array<{ id: string; version: number }>;
+      const notes = await db.all<{ id: string; version: number }>(`SELECT "id", "version" FROM "note" WHERE "text" LIKE 'batch %'`);
       expect(notes).toHaveLength(all.filter((m) => m.entity === 'note').length);
       // Each row kept the version its answer reported: nothing ran again after it was acknowledged.
       const versionOf = new Map(notes.map((n) => [n.id, n.version]));
@@ -202,11 +201,11 @@ describe('a killed server loses nothing and applies nothing twice', () => {
           if (sent[b]![i]!.entity === 'note') expect(versionOf.get(sent[b]![i]!.id)).toBe(r.version);
         });
       }
-      const seqs = db.prepare(`SELECT COUNT(DISTINCT seq) AS n, COUNT(*) AS total FROM sync_change`).get() as { n: number; total: number };
+      const seqs = (await db.get<{ n: number; total: number }>(`SELECT CAST(COUNT(DISTINCT "seq") AS INTEGER) AS n, CAST(COUNT(*) AS INTEGER) AS total FROM "sync_change"`))!;
       expect(seqs.n).toBe(seqs.total);
 
       // Every photo the phone took is on the server once, ready, with the bytes it sent.
-      const rows = db.prepare(`SELECT id, sha256, uploadState, sizeBytes, width, height FROM photo WHERE caption = 'Crash test photo'`).all() as Array<{ id: string; sha256: string; uploadState: string; sizeBytes: number }>;
+      const rows = await db.all<{ id: string; sha256: string; uploadState: string; sizeBytes: number }>(`SELECT "id", "sha256", "uploadState", "sizeBytes", "width", "height" FROM "photo" WHERE "caption" = 'Crash test photo'`);
       expect(rows).toHaveLength(photos.length);
       const byId = new Map(rows.map((r) => [r.id, r]));
       for (const p of photos) expect(byId.get(p.id)).toMatchObject({ sha256: p.sha256, uploadState: 'ready', sizeBytes: p.bytes.length });
@@ -222,7 +221,7 @@ describe('a killed server loses nothing and applies nothing twice', () => {
           `${audit.leftovers.length} files written aside; losses found: 0`,
       );
     } finally {
-      db.close();
+      await db.close();
     }
   }, 60_000 + KILLS * 6_000);
 });

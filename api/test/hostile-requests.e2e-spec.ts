@@ -152,6 +152,27 @@ describe('hostile requests', () => {
       refusedWithMessage(job, 400);
       expect(({} as { polluted?: boolean }).polluted).toBeUndefined();
     });
+
+    it('refuses the NUL character in a body, a query or a key with the field named, and in a mutation alone', async () => {
+      for (const [method, path, body] of [
+        ['POST', '/api/customers', '{"name":"Ada\\u0000Lovelace"}'],
+        ['POST', '/api/customers', '{"name":"Ada","\\u0000":"x"}'],
+        ['GET', '/api/customers?search=%00', undefined],
+        ['GET', '/api/jobs?search=a%00b', undefined],
+      ] as const) {
+        const res = await raw(method, path, { ...bearer(office), 'content-type': 'application/json' }, body);
+        refusedWithMessage(res, 400);
+        expect(JSON.stringify(res.body)).toContain('must not contain the NUL character');
+      }
+      const named = await raw('POST', '/api/customers', { ...bearer(office), 'content-type': 'application/json' }, '{"name":"Ada\\u0000Lovelace"}');
+      expect(named.body).toMatchObject({ message: ['name must not contain the NUL character (U+0000)'] });
+      // In a push, the mutation carrying it is refused and the one beside it still applies.
+      const good = mutation('customer', uuidv7(), { name: 'Orchard Rise lettings' });
+      const bad = mutation('customer', uuidv7(), { name: 'Null\u0000 Ltd' });
+      const results = await push(t, office, 'nul-phone', [bad, good, { ...mutation('customer', uuidv7(), { name: 'x' }), mutationId: 'nul\u0000-mutation-id' }]);
+      expect(results.map((r) => r.status)).toEqual(['rejected', 'applied', 'rejected']);
+      expect(results[0]!.error).toBe('customer.name must not contain the NUL character (U+0000)');
+    });
   });
 
   describe('path traversal', () => {
@@ -194,7 +215,9 @@ describe('hostile requests', () => {
     });
 
     it('never reads, changes or removes a file through an upload address', async () => {
+      // The addresses below aim at this file beside the upload area: the SQLite database, or a stand-in on PostgreSQL.
       const db = join(t.directory, 'test.sqlite');
+      if (!existsSync(db)) writeFileSync(db, 'a file outside the upload area');
       for (const evil of TRAVERSALS) {
         for (const method of ['HEAD', 'PATCH', 'DELETE', 'GET', 'POST']) {
           const res = await raw(method, `/api/uploads/${evil}`, { ...bearer(tech1), 'tus-resumable': '1.0.0', 'upload-offset': '0', 'content-type': 'application/offset+octet-stream', 'upload-length': '4' }, method === 'PATCH' ? 'evil' : undefined);

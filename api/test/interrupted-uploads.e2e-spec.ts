@@ -1,6 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import type { SyncedRow } from '@wiretrail/core';
-import Database from 'better-sqlite3';
 import { appendFileSync } from 'node:fs';
 import type { Server } from 'node:http';
 import { join } from 'node:path';
@@ -10,6 +9,7 @@ import { bearer, createUpload, cutPatch, noisyJpeg, patchUpload, settledOffset, 
 import { seededRandom } from './seeded-random.js';
 import { DeviceMirror, mutation, push, type Session } from './sync-helpers.js';
 import { createTestApp, signIn, type TestApp } from './test-app.js';
+import { openProbe } from './test-database.js';
 
 /**
  * Phones lose signal in the middle of a chunk. Each cut here drops the connection after a random number of the
@@ -95,7 +95,7 @@ describe('uploads cut off mid-chunk', () => {
       const original = await t.http.get(`/api/photos/${id}/original`).set(bearer(tech1)).buffer(true).expect(200);
       expect(sha256(original.body as Buffer)).toBe(sha256(bytes));
     }
-    const db = new Database(join(t.directory, 'test.sqlite'), { readonly: true });
+    const db = await openProbe(process.env);
     try {
       const audit = await auditPhotoStore(db, join(t.directory, 'photos'), join(t.directory, 'uploads'));
       expect(audit.problems).toEqual([]);
@@ -105,7 +105,7 @@ describe('uploads cut off mid-chunk', () => {
           `${figures.bytesResent} bytes sent again, ${audit.originals} originals re-hashed; losses found: 0`,
       );
     } finally {
-      db.close();
+      await db.close();
     }
   }, 60_000 + CUTS * 2_000);
 

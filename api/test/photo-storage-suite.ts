@@ -19,6 +19,7 @@ import {
 } from './photo-helpers.js';
 import { DeviceMirror, mutation, push, type Session } from './sync-helpers.js';
 import { createTestApp, expectErrorBody, signIn, type TestApp } from './test-app.js';
+import { PhotoBlob } from '../src/photos/entities/photo-blob.entity.js';
 
 /** The app and sign-ins a suite runs on, for tests that share them (filled in before the first test). */
 export interface PhotoSuiteContext {
@@ -264,7 +265,7 @@ export function describePhotoStorage(driver: string, under: StorageUnderTest, mo
 
     it('holds the original and two sizes of each photo it took, and nothing of what it refused', async () => {
       const org = office.user.organisationId;
-      const blobs = (await t.dataSource.query('SELECT sha256 FROM photo_blob WHERE organisationId = ?', [org])) as Array<{ sha256: string }>;
+      const blobs = await t.dataSource.getRepository(PhotoBlob).find({ where: { organisationId: org }, select: { sha256: true } });
       const expected = blobs.flatMap((b) => (['original', 'thumb', 'display'] as const).map((v) => photoKey(org, b.sha256, v)));
       expect((await under.listKeys(org)).sort()).toEqual(expected.sort());
       expect(await under.listKeys(oakmere.user.organisationId)).toEqual([]);

@@ -1,9 +1,9 @@
 import { PHOTO_VARIANTS } from '@wiretrail/core';
-import type Database from 'better-sqlite3';
 import { createHash } from 'node:crypto';
 import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import sharp from 'sharp';
+import type { DatabaseProbe } from './test-database.js';
 
 export interface PhotoStoreAudit {
   originals: number;
@@ -27,7 +27,7 @@ const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex
  * original and both sizes (decodable, no larger than they should be), every photo row marked ready has its bytes and
  * its sizes, and no upload whose bytes all arrived was left without being kept or refused.
  */
-export async function auditPhotoStore(db: Database.Database, photoDir: string, uploadDir: string): Promise<PhotoStoreAudit> {
+export async function auditPhotoStore(db: DatabaseProbe, photoDir: string, uploadDir: string): Promise<PhotoStoreAudit> {
   const problems: string[] = [];
   const leftovers: string[] = [];
   let originals = 0;
@@ -43,7 +43,7 @@ export async function auditPhotoStore(db: Database.Database, photoDir: string, u
     if (sha256(readFileSync(file)) !== hash) problems.push(`${name} does not hash to its name`);
   }
 
-  const blobs = db.prepare('SELECT organisationId, sha256, bytes, width, height FROM photo_blob').all() as Array<{ organisationId: string; sha256: string; bytes: number; width: number; height: number }>;
+  const blobs = await db.all<{ organisationId: string; sha256: string; bytes: number; width: number; height: number }>('SELECT "organisationId", "sha256", "bytes", "width", "height" FROM "photo_blob"');
   for (const b of blobs) {
     const folder = join(photoDir, b.organisationId, b.sha256);
     if (!existsSync(join(folder, 'original'))) {
@@ -72,9 +72,9 @@ export async function auditPhotoStore(db: Database.Database, photoDir: string, u
   }
   const held = new Set(blobs.map((b) => `${b.organisationId}/${b.sha256}`));
 
-  const ready = db
-    .prepare(`SELECT id, organisationId, sha256, sizeBytes, width, height FROM photo WHERE uploadState = 'ready' AND deletedAt IS NULL`)
-    .all() as Array<{ id: string; organisationId: string; sha256: string; sizeBytes: number | null; width: number | null; height: number | null }>;
+  const ready = await db.all<{ id: string; organisationId: string; sha256: string; sizeBytes: number | null; width: number | null; height: number | null }>(
+    `SELECT "id", "organisationId", "sha256", "sizeBytes", "width", "height" FROM "photo" WHERE "uploadState" = 'ready' AND "deletedAt" IS NULL`,
+  );
   for (const p of ready) {
     if (!held.has(`${p.organisationId}/${p.sha256}`)) problems.push(`photo ${p.id} is marked ready without its bytes`);
     if (p.sizeBytes == null || p.width == null || p.height == null) problems.push(`photo ${p.id} is marked ready without its sizes`);

@@ -5,6 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
+import { databaseEnvFor, dropDatabaseFor } from './test-database.js';
 
 export const DEMO_PASSWORD = 'wiretrail-demo';
 
@@ -18,14 +19,14 @@ export interface TestApp {
 }
 
 /**
- * Boots the real AppModule on a fresh SQLite file, runs the real migrations and loads the demo scenario.
+ * Boots the real AppModule on a fresh database (a SQLite file, or a PostgreSQL database: test-database.ts), runs the real migrations and loads the demo scenario.
  * The environment is set before AppModule is imported because ConfigModule validates it at import.
  */
 export async function createTestApp(env: Record<string, string> = {}, options: { directory?: string } = {}): Promise<TestApp> {
   const dir = options.directory ?? mkdtempSync(join(tmpdir(), 'wiretrail-api-'));
   Object.assign(process.env, {
     NODE_ENV: 'test',
-    DATABASE_PATH: join(dir, 'test.sqlite'),
+    ...(await databaseEnvFor(dir)),
     JWT_SECRET: 'test-secret-that-is-long-enough-for-hs256-signing',
     SIGN_IN_RATE_LIMIT: '1000',
     ...env,
@@ -46,7 +47,9 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
     directory: dir,
     close: async ({ keepFiles = false } = {}) => {
       await app.close();
-      if (!keepFiles) rmSync(dir, { recursive: true, force: true });
+      if (keepFiles) return;
+      await dropDatabaseFor(dir);
+      rmSync(dir, { recursive: true, force: true });
     },
   };
 }
