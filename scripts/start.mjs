@@ -25,6 +25,8 @@ const env = {
   SMTP_PORT: smtpPort,
 };
 const url = `http://localhost:${port}`;
+// With DB_TYPE=postgres the records live in DATABASE_URL's database (named here without its password).
+const where = process.env.DB_TYPE === 'postgres' ? `PostgreSQL ${String(process.env.DATABASE_URL).replace(/\/\/([^:/@]+):[^@]*@/, '//$1:…@')}; files in ${join(databasePath, '..')}` : databasePath;
 const payments = paymentsSettings({ dataDir: join(databasePath, '..'), fakePort: paymentsPort });
 Object.assign(env, payments.env);
 prepareDatabase(env);
@@ -41,7 +43,7 @@ Outgoing mail is caught at http://127.0.0.1:${mailHttpPort}/messages
 ${payments.fakeUrl ? `Card payments go to a local stand-in for the provider at ${payments.fakeUrl} (any card pays; 4000 0000 0000 0002 is declined)` : 'Card payments go to the provider set by PAYMENTS_API_KEY'}
 Demo sign-ins, all with the password wiretrail-demo:
 ${DEMO_SIGN_INS.map(([role, email]) => `  ${email.padEnd(28)} ${role}`).join('\n')}
-Data: ${databasePath}   Stop with Ctrl+C.
+Data: ${where}   Stop with Ctrl+C.
 `);
 
 const stop = () => {
