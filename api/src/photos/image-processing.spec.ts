@@ -29,6 +29,15 @@ describe('processPhoto', () => {
     expect(await sharp(photo.display).metadata()).toMatchObject({ format: 'webp', width: 900, height: 600 });
   });
 
+  it('keeps the colour and transparency of the photo in both sizes', async () => {
+    const png = await sharp({ create: { width: 2400, height: 1800, channels: 4, background: { r: 200, g: 10, b: 40, alpha: 0.5 } } }).png().toBuffer();
+    const photo = await processPhoto(png, { keepLocation: false });
+    for (const size of [photo.thumb, photo.display]) {
+      const means = (await sharp(size).stats()).channels.map((c) => c.mean);
+      [200, 10, 40, 128].forEach((expected, i) => expect(Math.abs(means[i]! - expected)).toBeLessThan(5));
+    }
+  });
+
   it('refuses drawings and animations it does not take as photos', async () => {
     const svg = Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><rect width="10" height="10"/></svg>');
     expect((await refusal(svg)).status).toBe(415);

@@ -1,5 +1,5 @@
 import { MAX_PHOTO_BYTES, MAX_PHOTO_PIXELS, PHOTO_VARIANTS } from '@wiretrail/core';
-import sharp, { type Metadata } from 'sharp';
+import sharp, { type Metadata, type Sharp } from 'sharp';
 
 /** A photo the server will not keep, with the status to answer and a sentence the phone can show as it is. */
 export class PhotoRefused extends Error {
@@ -65,15 +65,8 @@ export async function processPhoto(bytes: Buffer, options: { keepLocation: boole
   if (!meta.width || !meta.height) throw new PhotoRefused(422, REFUSALS.damaged);
   if (meta.width * meta.height > MAX_PHOTO_PIXELS) throw new PhotoRefused(413, REFUSALS.tooManyPixels(meta.width, meta.height));
 
-  // Every size decodes the whole image, so a truncated or corrupt file fails here; the pixel limit guards the
-  // decoder too, in case the header understated the size.
-  const source = sharp(bytes, { limitInputPixels: MAX_PHOTO_PIXELS, failOn: 'error' }).rotate();
-  const size = (edge: number, quality: number) => {
-    const resized = source.clone().resize(edge, edge, { fit: 'inside', withoutEnlargement: true });
-    return (options.keepLocation ? resized.keepExif() : resized).webp({ quality }).toBuffer();
-  };
   try {
-    const [thumb, display] = await Promise.all([size(PHOTO_VARIANTS.thumb, 72), size(PHOTO_VARIANTS.display, 82)]);
+    const { thumb, display } = await makeSizes(bytes, options.keepLocation);
     const upright = meta.autoOrient ?? { width: meta.width, height: meta.height };
     return { mime, width: upright.width, height: upright.height, thumb, display };
   } catch (err) {
@@ -81,4 +74,25 @@ export async function processPhoto(bytes: Buffer, options: { keepLocation: boole
     if (meta.format === 'heif') throw new PhotoRefused(415, REFUSALS.heic);
     throw new PhotoRefused(422, REFUSALS.damaged);
   }
+}
+
+const inside = (image: Sharp, edge: number) => image.resize(edge, edge, { fit: 'inside', withoutEnlargement: true });
+
+/**
+ * The two sizes, from a decode of the whole image, so a truncated or corrupt file fails here; the pixel limit guards
+ * the decoder too, in case the header understated the size.
+ */
+async function makeSizes(bytes: Buffer, keepLocation: boolean): Promise<{ thumb: Buffer; display: Buffer }> {
+  const source = sharp(bytes, { limitInputPixels: MAX_PHOTO_PIXELS, failOn: 'error' }).rotate();
+  if (keepLocation) {
+    // EXIF passes only from a decoded file to what is made from it, so each size decodes the photo itself.
+    const size = (edge: number, quality: number) => inside(source.clone(), edge).keepExif().webp({ quality }).toBuffer();
+    const [thumb, display] = await Promise.all([size(PHOTO_VARIANTS.thumb, 72), size(PHOTO_VARIANTS.display, 82)]);
+    return { thumb, display };
+  }
+  // Decoded once, at the display size; the thumbnail is made from those pixels instead of a second decode.
+  const { data, info } = await inside(source, PHOTO_VARIANTS.display).raw().toBuffer({ resolveWithObject: true });
+  const pixels = () => sharp(data, { raw: { width: info.width, height: info.height, channels: info.channels } });
+  const [thumb, display] = await Promise.all([inside(pixels(), PHOTO_VARIANTS.thumb).webp({ quality: 72 }).toBuffer(), pixels().webp({ quality: 82 }).toBuffer()]);
+  return { thumb, display };
 }
