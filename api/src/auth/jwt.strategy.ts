@@ -7,6 +7,7 @@ import { Repository } from 'typeorm';
 import { authConfig } from '../config/app.config.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { User } from '../users/entities/user.entity.js';
+import { signingKey } from './signing-key.js';
 
 export interface AccessTokenPayload {
   sub: string;
@@ -24,7 +25,8 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
       ignoreExpiration: false,
-      secretOrKey: config.jwtSecret,
+      // jsonwebtoken 9 verifies with a KeyObject; passport-jwt's types predate it and name only text and bytes.
+      secretOrKeyProvider: (_req, _token, done) => done(null, signingKey(config.jwtSecret) as unknown as Buffer),
       algorithms: ['HS256'],
     });
   }

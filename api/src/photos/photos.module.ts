@@ -2,7 +2,7 @@ import { Module } from '@nestjs/common';
 import { ConfigModule, type ConfigType } from '@nestjs/config';
 import { JwtModule } from '@nestjs/jwt';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { createSecretKey } from 'node:crypto';
+import { signingKey } from '../auth/signing-key.js';
 import { authConfig } from '../config/app.config.js';
 import { photosConfig } from '../config/photos.config.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
@@ -26,11 +26,7 @@ import { PhotoUploads } from './uploads/photo-uploads.js';
     JwtModule.registerAsync({
       imports: [ConfigModule.forFeature(authConfig)],
       inject: [authConfig.KEY],
-      useFactory: (config: ConfigType<typeof authConfig>) => {
-        // Made once: given the secret as text, jsonwebtoken tries it as a public key first on every request of every chunk.
-        const key = createSecretKey(Buffer.from(config.jwtSecret));
-        return { secretOrKeyProvider: () => key, verifyOptions: { algorithms: ['HS256'] } };
-      },
+      useFactory: (config: ConfigType<typeof authConfig>) => ({ secretOrKeyProvider: () => signingKey(config.jwtSecret), verifyOptions: { algorithms: ['HS256'] } }),
     }),
   ],
   controllers: [PhotosController, BlobsController],
