@@ -9,7 +9,13 @@ const THEME_COLOUR = '#1d4b55';
 
 export default defineConfig({
   define: { __APP_VERSION__: JSON.stringify(pkg.version) },
-  resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
+  resolve: {
+    alias: [
+      { find: '@', replacement: fileURLToPath(new URL('./src', import.meta.url)) },
+      // Dexie's own build for current browsers: its default one is transpiled to ES5, and larger for it.
+      { find: /^dexie$/, replacement: 'dexie/dist/modern/dexie.mjs' },
+    ],
+  },
   plugins: [
     react(),
     VitePWA({
@@ -48,5 +54,7 @@ export default defineConfig({
   test: {
     environment: 'node',
     include: ['src/**/*.test.{ts,tsx}'],
+    // Through Vite, so the hooks get the same Dexie build as the app (one Dexie, one set of live queries).
+    server: { deps: { inline: ['dexie-react-hooks'] } },
   },
 });
