@@ -3,6 +3,7 @@ import react from '@vitejs/plugin-react';
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
+import { firstScreenChunks, localDatabaseStaysOnThePhone } from './first-screen-chunks.ts';
 import pkg from './package.json' with { type: 'json' };
 
 const THEME_COLOUR = '#1d4b55';
@@ -18,6 +19,7 @@ export default defineConfig({
   },
   plugins: [
     react(),
+    localDatabaseStaysOnThePhone,
     VitePWA({
       // Never swap the app under someone mid-form: the page asks, the user chooses when.
       registerType: 'prompt',
@@ -50,7 +52,11 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': 'http://127.0.0.1:3000' },
   },
-  build: { sourcemap: true, chunkSizeWarningLimit: 700 },
+  build: {
+    sourcemap: true,
+    chunkSizeWarningLimit: 700,
+    rolldownOptions: { output: { codeSplitting: { groups: firstScreenChunks } } },
+  },
   test: {
     environment: 'node',
     include: ['src/**/*.test.{ts,tsx}'],
