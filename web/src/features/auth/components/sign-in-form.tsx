@@ -1,13 +1,13 @@
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
-import TextField from '@mui/material/TextField';
 import { type FormEvent, useRef, useState } from 'react';
 // Only zod's e-mail pattern: signing in is on the way to every first screen, and two checks need no form library.
 import { regexes } from 'zod/v4/core';
 import { ApiError, OfflineError } from '@/lib/api-client';
 import type { Session } from '@/lib/session';
 import { type SignInInput, useSignIn } from '../api/sign-in';
+import { AuthTextField } from './auth-text-field';
 
 type Problems = Partial<Record<keyof SignInInput, string>>;
 
@@ -52,12 +52,12 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (session: Session) => v
   return (
     <Stack component="form" noValidate spacing={2.5} onSubmit={send} aria-label="Sign in">
       {signIn.isError && <Alert severity="error">{explain(signIn.error)}</Alert>}
-      <TextField
+      <AuthTextField
         label="E-mail"
         type="email"
         name="email"
         autoComplete="username"
-        inputMode="email"
+        inputProps={{ inputMode: 'email' }}
         autoFocus
         inputRef={inputs.email}
         value={values.email}
@@ -65,7 +65,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (session: Session) => v
         error={!!problems?.email}
         helperText={problems?.email}
       />
-      <TextField
+      <AuthTextField
         label="Password"
         type="password"
         name="password"
