@@ -62,8 +62,8 @@ function makePlan(ctx: Context, anyId: string): Map<string, Place> {
   const entries = [...modules].filter((id) => ctx.getModuleInfo(id)?.isEntry);
   const lazy = new Set([...modules].flatMap((id) => ctx.getModuleInfo(id)?.dynamicallyImportedIds ?? []));
 
-  // What screens outside the technician's part load. A module loaded on demand (the photo uploader, the wiremap)
-  // belongs to the technician's part when only modules outside this set ask for it.
+  // What the screens outside the technician's part load. A module loaded on demand (the photo uploader, the
+  // wiremap) belongs to the technician's part when nothing in that set asks for it.
   const technicianRoots = new Set([...lazy].filter((id) => TECHNICIAN_PART.test(id)));
   let elsewhere = new Set<string>();
   for (let grew = true; grew; ) {
@@ -96,7 +96,8 @@ export const firstScreenChunks: Rolldown.CodeSplittingGroup[] = [
   { name: 'sync-fields', test: CORE_SYNC, priority: 3 },
   // With what they import, which Today needs as well (only what is not in a group above).
   { name: (id, ctx) => (placeOf(id, ctx) === 'common' ? 'common' : null), priority: 2 },
-  // Only the modules planned: what they import is in a group above, or is used by other screens too.
+  // Only the modules planned, not all they import: what is reached only through a large index was not planned, and
+  // may be used by other screens too. Rolldown places it as usual.
   { name: (id, ctx) => (placeOf(id, ctx) === 'phone' ? 'phone' : null), priority: 1, includeDependenciesRecursively: false },
 ];
 
