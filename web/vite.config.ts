@@ -3,15 +3,23 @@ import react from '@vitejs/plugin-react';
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
+import { firstScreenChunks, localDatabaseStaysOnThePhone } from './first-screen-chunks.ts';
 import pkg from './package.json' with { type: 'json' };
 
 const THEME_COLOUR = '#1d4b55';
 
 export default defineConfig({
   define: { __APP_VERSION__: JSON.stringify(pkg.version) },
-  resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
+  resolve: {
+    alias: [
+      { find: '@', replacement: fileURLToPath(new URL('./src', import.meta.url)) },
+      // Dexie's own build for current browsers: its default one is transpiled to ES5, and larger for it.
+      { find: /^dexie$/, replacement: 'dexie/dist/modern/dexie.mjs' },
+    ],
+  },
   plugins: [
     react(),
+    localDatabaseStaysOnThePhone,
     VitePWA({
       // Never swap the app under someone mid-form: the page asks, the user chooses when.
       registerType: 'prompt',
@@ -44,9 +52,15 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': 'http://127.0.0.1:3000' },
   },
-  build: { sourcemap: true, chunkSizeWarningLimit: 700 },
+  build: {
+    sourcemap: true,
+    chunkSizeWarningLimit: 700,
+    rolldownOptions: { output: { codeSplitting: { groups: firstScreenChunks } } },
+  },
   test: {
     environment: 'node',
     include: ['src/**/*.test.{ts,tsx}'],
+    // Through Vite, so the hooks get the same Dexie build as the app (one Dexie, one set of live queries).
+    server: { deps: { inline: ['dexie-react-hooks'] } },
   },
 });

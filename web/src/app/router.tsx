@@ -56,8 +56,8 @@ export const routes: RouteObject[] = [
     HydrateFallback: () => null,
     errorElement: <RouteError />,
     children: [
+      { path: paths.signIn.path, lazy: () => import('./routes/sign-in') },
       withServerState([
-        { path: paths.signIn.path, lazy: () => import('./routes/sign-in') },
         { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password') },
         { path: paths.shared.path, lazy: () => import('./routes/shared') },
       ]),

@@ -1,5 +1,6 @@
 import { QueryClient } from '@tanstack/react-query';
 import { ApiError, OfflineError } from './api-client';
+import { getSession, subscribe } from './session';
 
 export const queryClient = new QueryClient({
   defaultOptions: {
@@ -11,4 +12,15 @@ export const queryClient = new QueryClient({
     },
     mutations: { retry: false },
   },
+});
+
+// What one user fetched is never shown to the next: the cache empties when the signed-in user changes, by signing
+// in or out here or in another tab (a refreshed token for the same user keeps it).
+let cachedFor = getSession()?.user.id;
+subscribe(() => {
+  const userId = getSession()?.user.id;
+  if (userId !== cachedFor) {
+    cachedFor = userId;
+    queryClient.clear();
+  }
 });

@@ -1,17 +1,11 @@
 // @vitest-environment happy-dom
-import { QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { queryClient } from '@/lib/react-query';
 import { getSession, setSession } from '@/lib/session';
 import { SignInForm } from '../components/sign-in-form';
 
 function renderForm(onSignedIn = vi.fn()) {
-  render(
-    <QueryClientProvider client={queryClient}>
-      <SignInForm onSignedIn={onSignedIn} />
-    </QueryClientProvider>,
-  );
+  render(<SignInForm onSignedIn={onSignedIn} />);
   return onSignedIn;
 }
 
@@ -30,6 +24,23 @@ describe('SignInForm', () => {
     expect(await screen.findByText('Enter your e-mail address.')).toBeTruthy();
     expect(screen.getByText('Enter your password.')).toBeTruthy();
     expect(fetchMock).not.toHaveBeenCalled();
+  });
+
+  it('refuses an address that is not one, and sends a good one without its spaces', async () => {
+    const fetchMock = vi.fn(async () => new Response(JSON.stringify({ statusCode: 401, message: 'No.' }), { status: 401 }));
+    vi.stubGlobal('fetch', fetchMock);
+    renderForm();
+    fireEvent.input(screen.getByLabelText('E-mail'), { target: { value: 'office@' } });
+    fireEvent.input(screen.getByLabelText('Password'), { target: { value: 'wiretrail-demo' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    expect(await screen.findByText('That is not an e-mail address.')).toBeTruthy();
+    expect(fetchMock).not.toHaveBeenCalled();
+    fireEvent.input(screen.getByLabelText('E-mail'), { target: { value: ' office@larkfield.example ' } });
+    await waitFor(() => expect(screen.queryByText('That is not an e-mail address.')).toBeNull());
+    fireEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    await waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
+    const [, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
+    expect(JSON.parse(init.body as string)).toEqual({ email: 'office@larkfield.example', password: 'wiretrail-demo' });
   });
 
   it("shows the server's refusal in plain words", async () => {

@@ -1,7 +1,6 @@
-import { useMutation } from '@tanstack/react-query';
+import { useState } from 'react';
 import { apiRequest } from '@/lib/api-client';
 import { getSession, type Session, setSession } from '@/lib/session';
-import { queryClient } from '@/lib/react-query';
 
 export interface SignInInput {
   email: string;
@@ -12,22 +11,30 @@ export function signIn(input: SignInInput): Promise<Session> {
   return apiRequest<Session>('/auth/sign-in', { method: 'POST', body: { ...input }, anonymous: true });
 }
 
+/**
+ * Signing in, with its progress and its refusal. Plain state rather than the query client: the sign-in page is on
+ * the way to every first screen, and one request does not need a cache. The office's cache empties itself when the
+ * user changes (`lib/react-query.ts`).
+ */
 export function useSignIn(onSignedIn: (session: Session) => void) {
-  return useMutation({
-    mutationFn: signIn,
-    onSuccess: (session) => {
-      queryClient.clear();
+  const [state, setState] = useState<{ isPending: boolean; error: unknown }>({ isPending: false, error: null });
+  async function submit(input: SignInInput): Promise<void> {
+    setState({ isPending: true, error: null });
+    try {
+      const session = await signIn(input);
       setSession(session);
       onSignedIn(session);
-    },
-  });
+    } catch (error) {
+      setState({ isPending: false, error });
+    }
+  }
+  return { ...state, isError: state.error !== null, submit };
 }
 
 /** Ends the session on the server when it can be reached; the device forgets it either way. */
 export async function signOut(): Promise<void> {
   const session = getSession();
   setSession(null);
-  queryClient.clear();
   if (session) {
     await apiRequest('/auth/sign-out', { method: 'POST', body: { refreshToken: session.refreshToken }, anonymous: true }).catch(() => undefined);
   }

@@ -1,21 +1,25 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
-import TextField from '@mui/material/TextField';
-import { useForm } from 'react-hook-form';
-// The mini build: signing in is on the way to every first screen, and it needs two checks, not all of zod.
-import { z } from 'zod/mini';
+import { type FormEvent, useRef, useState } from 'react';
+// Only zod's e-mail pattern: signing in is on the way to every first screen, and two checks need no form library.
+import { regexes } from 'zod/v4/core';
 import { ApiError, OfflineError } from '@/lib/api-client';
 import type { Session } from '@/lib/session';
-import { useSignIn } from '../api/sign-in';
+import { type SignInInput, useSignIn } from '../api/sign-in';
+import { AuthTextField } from './auth-text-field';
 
-export const signInSchema = z.object({
-  email: z.string().check(z.trim(), z.minLength(1, 'Enter your e-mail address.'), z.email('That is not an e-mail address.')),
-  password: z.string().check(z.minLength(1, 'Enter your password.')),
-});
+type Problems = Partial<Record<keyof SignInInput, string>>;
 
-type SignInValues = z.infer<typeof signInSchema>;
+/** What is wrong with the form as typed; the e-mail address is checked (and sent) without surrounding spaces. */
+export function signInProblems({ email, password }: SignInInput): Problems {
+  const problems: Problems = {};
+  const address = email.trim();
+  if (!address) problems.email = 'Enter your e-mail address.';
+  else if (!regexes.email.test(address)) problems.email = 'That is not an e-mail address.';
+  if (!password) problems.password = 'Enter your password.';
+  return problems;
+}
 
 function explain(error: unknown): string {
   if (error instanceof OfflineError) return 'No connection. Signing in needs signal once; after that the app works without it.';
@@ -24,31 +28,53 @@ function explain(error: unknown): string {
 }
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (session: Session) => void }) {
-  const { register, handleSubmit, formState } = useForm<SignInValues>({
-    resolver: zodResolver(signInSchema),
-    defaultValues: { email: '', password: '' },
-  });
+  const [values, setValues] = useState<SignInInput>({ email: '', password: '' });
+  // Checked when sent, then again as the user corrects what was refused.
+  const [problems, setProblems] = useState<Problems | null>(null);
+  const inputs = { email: useRef<HTMLInputElement>(null), password: useRef<HTMLInputElement>(null) };
   const signIn = useSignIn(onSignedIn);
+
+  function change(field: keyof SignInInput, value: string) {
+    const next = { ...values, [field]: value };
+    setValues(next);
+    if (problems) setProblems(signInProblems(next));
+  }
+
+  function send(event: FormEvent) {
+    event.preventDefault();
+    const found = signInProblems(values);
+    setProblems(found);
+    const first = (['email', 'password'] as const).find((f) => found[f]);
+    if (first) inputs[first].current?.focus();
+    else void signIn.submit({ email: values.email.trim(), password: values.password });
+  }
+
   return (
-    <Stack component="form" noValidate spacing={2.5} onSubmit={handleSubmit((v) => signIn.mutate(v))} aria-label="Sign in">
+    <Stack component="form" noValidate spacing={2.5} onSubmit={send} aria-label="Sign in">
       {signIn.isError && <Alert severity="error">{explain(signIn.error)}</Alert>}
-      <TextField
+      <AuthTextField
         label="E-mail"
         type="email"
+        name="email"
         autoComplete="username"
-        inputMode="email"
+        inputProps={{ inputMode: 'email' }}
         autoFocus
-        {...register('email')}
-        error={!!formState.errors.email}
-        helperText={formState.errors.email?.message}
+        inputRef={inputs.email}
+        value={values.email}
+        onChange={(e) => change('email', e.target.value)}
+        error={!!problems?.email}
+        helperText={problems?.email}
       />
-      <TextField
+      <AuthTextField
         label="Password"
         type="password"
+        name="password"
         autoComplete="current-password"
-        {...register('password')}
-        error={!!formState.errors.password}
-        helperText={formState.errors.password?.message}
+        inputRef={inputs.password}
+        value={values.password}
+        onChange={(e) => change('password', e.target.value)}
+        error={!!problems?.password}
+        helperText={problems?.password}
       />
       <Button type="submit" variant="contained" size="large" disabled={signIn.isPending}>
         {signIn.isPending ? 'Signing in…' : 'Sign in'}

@@ -187,7 +187,7 @@ export function LineEditor({ invoice, warnings = [], onSaved }: Props) {
               key={f.id}
               role="group"
               aria-label={`Line ${i + 1}`}
-              sx={{ display: 'grid', gap: 1, gridTemplateColumns: '128px minmax(220px, 1fr) 96px 84px 112px 156px 96px 48px', alignItems: 'start' }}
+              sx={{ display: 'grid', gap: 1, gridTemplateColumns: '128px minmax(220px, 1fr) 96px 84px 112px 192px 96px 48px', alignItems: 'start' }}
             >
               <TextField select size="small" label="Kind" {...register(`lines.${i}.kind`)} {...mark('kind')} slotProps={{ ...mark('kind').slotProps, select: { native: true } }}>
                 {KINDS.map((k) => (

@@ -17,7 +17,7 @@ import { addPhoto, type PhotoSubjectType } from '@/lib/photos/add-photo';
 import { shrinkPhoto } from '@/lib/photos/shrink-photo';
 import { LocalWriteError } from '@/lib/sync/local-write';
 import { useCaptureChoices } from '../api/get-capture-choices';
-import { usePhoneTags } from '../api/get-photo-tags';
+import { usePhoneTags } from '../api/get-phone-photo-tags';
 
 /** Keeps the real file input reachable by its label (and by assistive technology) while the big button shows. */
 const hiddenInput: CSSProperties = {
