@@ -67,3 +67,33 @@ export async function selectMany<T extends ObjectLiteral>(
     return row as T;
   });
 }
+
+/**
+ * `UPDATE … SET … WHERE key = value` with the values converted by the driver, and the update-date column set to
+ * CURRENT_TIMESTAMP as TypeORM's update() does; one cached statement per set of columns.
+ */
+export async function updateWhere<T extends ObjectLiteral>(
+  em: EntityManager,
+  target: EntityTarget<T>,
+  key: Record<string, unknown>,
+  changes: Record<string, unknown>,
+): Promise<void> {
+  const meta = em.connection.getMetadata(target);
+  const driver = em.connection.driver;
+  const numbered = driver.options.type === 'postgres';
+  const params: unknown[] = [];
+  const mark = (v: unknown) => {
+    params.push(v);
+    return numbered ? `$${params.length}` : '?';
+  };
+  const column = (name: string) => meta.findColumnWithPropertyName(name)!;
+  // As TypeORM's update(), a property left undefined is not written.
+  const sets = Object.entries(changes).filter(([, value]) => value !== undefined).map(([name, value]) => {
+    const c = column(name);
+    return `${driver.escape(c.databaseName)} = ${mark(driver.preparePersistentValue(value, c))}`;
+  });
+  const updateDate = meta.updateDateColumn;
+  if (updateDate && changes[updateDate.propertyName] === undefined) sets.push(`${driver.escape(updateDate.databaseName)} = CURRENT_TIMESTAMP`);
+  const conditions = Object.entries(key).map(([name, value]) => `${driver.escape(column(name).databaseName)} = ${mark(driver.preparePersistentValue(value, column(name)))}`);
+  await em.query(`UPDATE ${driver.escape(meta.tableName)} SET ${sets.join(', ')} WHERE ${conditions.join(' AND ')}`, params);
+}
