@@ -18,11 +18,19 @@ export async function insertMany<T extends ObjectLiteral>(
   // A column no row gives a value for is left to its default; the others are written for every row.
   const columns = meta.columns.filter((c) => c.isInsert && rows.some((r) => c.getEntityValue(r) !== undefined));
   const params: unknown[] = [];
+  // Rows made together share their times: each column converts a Date once, not once per row.
+  const lastDate: unknown[] = [];
+  const lastConverted: unknown[] = [];
   const tuples = rows.map((row) => {
-    const marks = columns.map((c) => {
+    const marks = columns.map((c, i) => {
       let value = c.getEntityValue(row);
       if (value === undefined) value = c.isCreateDate || c.isUpdateDate ? new Date() : null;
-      params.push(driver.preparePersistentValue(value, c));
+      if (!(value instanceof Date)) params.push(driver.preparePersistentValue(value, c));
+      else if (value === lastDate[i]) params.push(lastConverted[i]);
+      else {
+        lastDate[i] = value;
+        params.push((lastConverted[i] = driver.preparePersistentValue(value, c)));
+      }
       return numbered ? `$${params.length}` : '?';
     });
     return `(${marks.join(', ')})`;

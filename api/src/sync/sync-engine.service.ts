@@ -75,6 +75,7 @@ export class SyncEngine {
       changes: new Map(),
       appliedRows: [],
       issuedJobs: new Map(),
+      now: new Date(),
     };
     this.batches.set(em, batch);
     try {
@@ -257,7 +258,7 @@ export class SyncEngine {
   }
 
   private async create(em: EntityManager, actor: Actor, spec: EntitySpec, m: Mutation, set: Record<string, FieldValue>): Promise<MutationResult> {
-    const missing = Object.entries(spec.fields).filter(([f, s]) => s.required && (set[f] === undefined || set[f] === null)).map(([f]) => `${m.entity}.${f}`);
+    const missing = requiredFields(m.entity).filter((f) => set[f] === undefined || set[f] === null).map((f) => `${m.entity}.${f}`);
     if (missing.length) throw new MutationRefused(`A new ${m.entity} needs ${missing.join(', ')}.`);
     const seq = await this.nextSeq(em);
     const fieldMeta: Record<string, FieldMeta> = {};
@@ -491,9 +492,9 @@ export class SyncEngine {
       return;
     }
     // Every row of one multi-row insert names the same columns, and gets its times here rather than from column defaults.
-    const now = new Date();
-    const full = { ...Object.fromEntries(Object.keys(SYNC_SCHEMAS[entity].options.columns).map((c) => [c, null])), ...row, createdAt: row.createdAt ?? now, updatedAt: row.updatedAt ?? now } as SyncRecord;
-    Object.assign(row, full);
+    for (const column of columnsOf(entity)) if (row[column] === undefined) row[column] = null;
+    row.createdAt ??= batch.now;
+    row.updatedAt ??= batch.now;
     if (!batch.inserts.has(entity)) batch.inserts.set(entity, []);
     batch.inserts.get(entity)!.push(row);
     batch.pending.add(`${entity}:${row.id}`);
@@ -521,11 +522,29 @@ interface Batch {
   inserts: Map<SyncEntityName, SyncRecord[]>;
   /** `entity:id` of the rows in `inserts`. */
   pending: Set<string>;
+  /** When the batch began: the creation time of the rows it makes. */
+  now: Date;
   /** Whether a job has an issued document, as read from the database in this batch; see lockOf. */
   issuedJobs: Map<string, boolean>;
   /** The change log's entry per `entity:rowId`, the latest. */
   changes: Map<string, { entity: SyncEntityName; rowId: string; organisationId: string; seq: number; siteId: string | null; deleted: boolean }>;
   appliedRows: Array<Pick<AppliedMutation, 'mutationId' | 'organisationId' | 'userId' | 'deviceId' | 'result'>>;
+}
+
+const COLUMNS = new Map<SyncEntityName, string[]>();
+/** Every column of an entity's table, read once from its schema. */
+function columnsOf(entity: SyncEntityName): string[] {
+  let columns = COLUMNS.get(entity);
+  if (!columns) COLUMNS.set(entity, (columns = Object.keys(SYNC_SCHEMAS[entity].options.columns)));
+  return columns;
+}
+
+const REQUIRED = new Map<SyncEntityName, string[]>();
+/** The fields a new row of an entity must have. */
+function requiredFields(entity: SyncEntityName): string[] {
+  let fields = REQUIRED.get(entity);
+  if (!fields) REQUIRED.set(entity, (fields = Object.entries(SYNC_ENTITIES[entity].fields).filter(([, f]) => f.required).map(([name]) => name)));
+  return fields;
 }
 
 export function versionsOf(meta: Record<string, FieldMeta>): Record<string, number> {
