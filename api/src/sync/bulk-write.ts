@@ -45,9 +45,13 @@ export async function insertMany<T extends ObjectLiteral>(
   await em.query(sql, params);
 }
 
+/** Values per `IN (…)` list: well inside SQLite's 32,766 and PostgreSQL's 65,535 bound parameters. */
+const IN_LIST_LIMIT = 1000;
+
 /**
- * Rows whose `column` is one of `values`, read with one plain statement and hydrated by the driver as TypeORM
- * would (JSON parsed, dates made Dates): the batch's look-ups, without the query builder's cost.
+ * Rows whose `column` is one of `values`, read with plain statements (one per thousand values) and hydrated by the
+ * driver as TypeORM would (JSON parsed, dates made Dates): the batch's look-ups and a pull's rows, without the query
+ * builder's cost.
  */
 export async function selectMany<T extends ObjectLiteral>(
   em: EntityManager,
@@ -60,20 +64,25 @@ export async function selectMany<T extends ObjectLiteral>(
   const meta = em.connection.getMetadata(target);
   const driver = em.connection.driver;
   const numbered = driver.options.type === 'postgres';
-  const params: unknown[] = [];
-  const mark = (v: unknown) => {
-    params.push(v);
-    return numbered ? `$${params.length}` : '?';
-  };
   const col = (name: string) => driver.escape(meta.findColumnWithPropertyName(name)!.databaseName);
-  const conditions = [`${col(column)} IN (${values.map(mark).join(', ')})`];
-  for (const [name, value] of Object.entries(where)) conditions.push(value === null ? `${col(name)} IS NULL` : `${col(name)} = ${mark(value)}`);
-  const raw = (await em.query(`SELECT * FROM ${driver.escape(meta.tableName)} WHERE ${conditions.join(' AND ')}`, params)) as Record<string, unknown>[];
-  return raw.map((r) => {
-    const row: Record<string, unknown> = {};
-    for (const c of meta.columns) row[c.propertyName] = driver.prepareHydratedValue(r[c.databaseName], c);
-    return row as T;
-  });
+  const columns = meta.columns.map((c) => ({ c, property: c.propertyName, name: c.databaseName }));
+  const out: T[] = [];
+  for (let start = 0; start < values.length; start += IN_LIST_LIMIT) {
+    const params: unknown[] = [];
+    const mark = (v: unknown) => {
+      params.push(v);
+      return numbered ? `$${params.length}` : '?';
+    };
+    const conditions = [`${col(column)} IN (${values.slice(start, start + IN_LIST_LIMIT).map(mark).join(', ')})`];
+    for (const [name, value] of Object.entries(where)) conditions.push(value === null ? `${col(name)} IS NULL` : `${col(name)} = ${mark(value)}`);
+    const raw = (await em.query(`SELECT * FROM ${driver.escape(meta.tableName)} WHERE ${conditions.join(' AND ')}`, params)) as Record<string, unknown>[];
+    for (const r of raw) {
+      const row: Record<string, unknown> = {};
+      for (const { c, property, name } of columns) row[property] = driver.prepareHydratedValue(r[name], c);
+      out.push(row as T);
+    }
+  }
+  return out;
 }
 
 /**
