@@ -124,6 +124,26 @@ describe('sync: push and pull', () => {
     expect(results[4]!.error).toMatch(/hlc/);
   });
 
+  it('refuses a mutation naming __proto__, constructor or prototype as a field, instead of applying it without them', async () => {
+    const v = myVisitToday();
+    const ids = [uuidv7(), uuidv7(), uuidv7()];
+    const body = JSON.stringify({
+      deviceId: 'tech1-phone',
+      mutations: ['__proto__', 'constructor', 'prototype'].map((key, i) => ({
+        mutationId: uuidv7(), entity: 'note', id: ids[i], baseVersion: 0, hlc: hlcAt(new Date().toISOString(), 'tech1-phone'),
+        set: JSON.parse(`{"visitId":"${v.id}","siteId":"${v.siteId as string}","text":"Typed with a stray key","${key}":{"polluted":true}}`),
+      })),
+    });
+    const res = await t.http.post('/api/sync/push').set('authorization', `Bearer ${tech1.accessToken}`).set('content-type', 'application/json').send(body);
+    expect(res.status).toBe(200);
+    expect(res.body.results.map((r: { status: string; error: string }) => [r.status, r.error])).toEqual([
+      ['rejected', 'note.__proto__ is not a field we accept'],
+      ['rejected', 'note.constructor is not a field we accept'],
+      ['rejected', 'note.prototype is not a field we accept'],
+    ]);
+    expect(({} as { polluted?: boolean }).polluted).toBeUndefined();
+  });
+
   it('keeps a technician to their own visits and sites', async () => {
     const fernhill = site('Fernhill Close');
     expect(tech1View.find('site', (r) => r.id === fernhill.id)).toHaveLength(0);
