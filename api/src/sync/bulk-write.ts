@@ -1,5 +1,18 @@
 import type { EntityManager, EntityTarget, ObjectLiteral } from 'typeorm';
 
+/** The bound values of one statement and their marks: `?` for SQLite, `$1`, `$2`, … for PostgreSQL. */
+function parameters(em: EntityManager): { values: unknown[]; mark: (value: unknown) => string } {
+  const numbered = em.connection.driver.options.type === 'postgres';
+  const values: unknown[] = [];
+  return {
+    values,
+    mark: (value) => {
+      values.push(value);
+      return numbered ? `$${values.length}` : '?';
+    },
+  };
+}
+
 /**
  * Many rows in one statement, with the values converted by the database driver exactly as TypeORM would convert
  * them (JSON, dates, booleans), but without TypeORM's per-parameter query building, which costs more than the
@@ -14,10 +27,9 @@ export async function insertMany<T extends ObjectLiteral>(
   if (!rows.length) return;
   const meta = em.connection.getMetadata(target);
   const driver = em.connection.driver;
-  const numbered = driver.options.type === 'postgres';
   // A column no row gives a value for is left to its default; the others are written for every row.
   const columns = meta.columns.filter((c) => c.isInsert && rows.some((r) => c.getEntityValue(r) !== undefined));
-  const params: unknown[] = [];
+  const params = parameters(em);
   // Rows made together share their times: each column converts a Date once, not once per row.
   const lastDate: unknown[] = [];
   const lastConverted: unknown[] = [];
@@ -25,13 +37,12 @@ export async function insertMany<T extends ObjectLiteral>(
     const marks = columns.map((c, i) => {
       let value = c.getEntityValue(row);
       if (value === undefined) value = c.isCreateDate || c.isUpdateDate ? new Date() : null;
-      if (!(value instanceof Date)) params.push(driver.preparePersistentValue(value, c));
-      else if (value === lastDate[i]) params.push(lastConverted[i]);
-      else {
+      if (!(value instanceof Date)) return params.mark(driver.preparePersistentValue(value, c));
+      if (value !== lastDate[i]) {
         lastDate[i] = value;
-        params.push((lastConverted[i] = driver.preparePersistentValue(value, c)));
+        lastConverted[i] = driver.preparePersistentValue(value, c);
       }
-      return numbered ? `$${params.length}` : '?';
+      return params.mark(lastConverted[i]);
     });
     return `(${marks.join(', ')})`;
   });
@@ -42,7 +53,7 @@ export async function insertMany<T extends ObjectLiteral>(
     const updates = columns.filter((c) => !keys.has(c.propertyName)).map((c) => `${driver.escape(c.databaseName)} = excluded.${driver.escape(c.databaseName)}`);
     sql += ` ON CONFLICT (${onConflict.columns.map((k) => driver.escape(meta.findColumnWithPropertyName(k)!.databaseName)).join(', ')}) DO UPDATE SET ${updates.join(', ')}`;
   }
-  await em.query(sql, params);
+  await em.query(sql, params.values);
 }
 
 /** Values per `IN (…)` list: well inside SQLite's 32,766 and PostgreSQL's 65,535 bound parameters. */
@@ -63,16 +74,11 @@ export async function selectMany<T extends ObjectLiteral>(
   if (!values.length) return [];
   const meta = em.connection.getMetadata(target);
   const driver = em.connection.driver;
-  const numbered = driver.options.type === 'postgres';
   const col = (name: string) => driver.escape(meta.findColumnWithPropertyName(name)!.databaseName);
   const columns = meta.columns.map((c) => ({ c, property: c.propertyName, name: c.databaseName }));
   const out: T[] = [];
   for (let start = 0; start < values.length; start += IN_LIST_LIMIT) {
-    const params: unknown[] = [];
-    const mark = (v: unknown) => {
-      params.push(v);
-      return numbered ? `$${params.length}` : '?';
-    };
+    const { values: params, mark } = parameters(em);
     const conditions = [`${col(column)} IN (${values.slice(start, start + IN_LIST_LIMIT).map(mark).join(', ')})`];
     for (const [name, value] of Object.entries(where)) conditions.push(value === null ? `${col(name)} IS NULL` : `${col(name)} = ${mark(value)}`);
     const raw = (await em.query(`SELECT * FROM ${driver.escape(meta.tableName)} WHERE ${conditions.join(' AND ')}`, params)) as Record<string, unknown>[];
@@ -97,12 +103,7 @@ export async function updateWhere<T extends ObjectLiteral>(
 ): Promise<void> {
   const meta = em.connection.getMetadata(target);
   const driver = em.connection.driver;
-  const numbered = driver.options.type === 'postgres';
-  const params: unknown[] = [];
-  const mark = (v: unknown) => {
-    params.push(v);
-    return numbered ? `$${params.length}` : '?';
-  };
+  const { values: params, mark } = parameters(em);
   const column = (name: string) => meta.findColumnWithPropertyName(name)!;
   // As TypeORM's update(), a property left undefined is not written.
   const sets = Object.entries(changes).filter(([, value]) => value !== undefined).map(([name, value]) => {
