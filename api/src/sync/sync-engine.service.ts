@@ -464,7 +464,7 @@ export class SyncEngine {
     if (batch?.seq) return ++batch.seq.value;
     if (batch) {
       // Read once per batch; applyAll writes the final value back before the transaction commits.
-      const current = await em.findOneBy(SyncCounter, { name: 'global' });
+      const [current] = await selectMany(em, SyncCounter, 'name', ['global']);
       if (!current) await em.insert(SyncCounter, { name: 'global', value: 0 });
       batch.seq = { value: (current?.value ?? 0) + 1 };
       return batch.seq.value;
