@@ -124,6 +124,26 @@ describe('sync: push and pull', () => {
     expect(results[4]!.error).toMatch(/hlc/);
   });
 
+  it('refuses a mutation naming __proto__, constructor or prototype as a field, instead of applying it without them', async () => {
+    const v = myVisitToday();
+    const ids = [uuidv7(), uuidv7(), uuidv7()];
+    const body = JSON.stringify({
+      deviceId: 'tech1-phone',
+      mutations: ['__proto__', 'constructor', 'prototype'].map((key, i) => ({
+        mutationId: uuidv7(), entity: 'note', id: ids[i], baseVersion: 0, hlc: hlcAt(new Date().toISOString(), 'tech1-phone'),
+        set: JSON.parse(`{"visitId":"${v.id}","siteId":"${v.siteId as string}","text":"Typed with a stray key","${key}":{"polluted":true}}`),
+      })),
+    });
+    const res = await t.http.post('/api/sync/push').set('authorization', `Bearer ${tech1.accessToken}`).set('content-type', 'application/json').send(body);
+    expect(res.status).toBe(200);
+    expect(res.body.results.map((r: { status: string; error: string }) => [r.status, r.error])).toEqual([
+      ['rejected', 'note.__proto__ is not a field we accept'],
+      ['rejected', 'note.constructor is not a field we accept'],
+      ['rejected', 'note.prototype is not a field we accept'],
+    ]);
+    expect(({} as { polluted?: boolean }).polluted).toBeUndefined();
+  });
+
   it('keeps a technician to their own visits and sites', async () => {
     const fernhill = site('Fernhill Close');
     expect(tech1View.find('site', (r) => r.id === fernhill.id)).toHaveLength(0);
@@ -237,6 +257,36 @@ describe('sync: push and pull', () => {
     const res = await t.http.post(`/api/conflicts/${edit!.conflictIds![0]}/resolve`).set('authorization', `Bearer ${office.accessToken}`).send({ choice: 'discarded' });
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/issued document/);
+  });
+
+  it('judges each edit against the documents as they stand at that point of its batch', async () => {
+    const orchard = site('Orchard Rise');
+    const [jobId, visitId, noteId, documentId] = [uuidv7(), uuidv7(), uuidv7(), uuidv7()];
+    const made = await push(t, office, 'office-desk-1', [
+      mutation('job', jobId, { siteId: orchard.id, customerId: orchard.customerId as string, title: 'Porch light', status: 'booked' }),
+      mutation('visit', visitId, { jobId, siteId: orchard.id, technicianIds: [tech2.user.id], plannedStart: '2026-12-10T09:00:00.000Z', status: 'planned' }),
+      mutation('note', noteId, { visitId, siteId: orchard.id, text: 'Porch light on the landing circuit.' }),
+      mutation('document', documentId, { jobId, siteId: orchard.id, kind: 'minor-works', number: 'MW-0101' }),
+    ]);
+    const [note, document] = [made[2]!, made[3]!];
+    // Issued in the middle of a batch: the edit before it goes through, the edit after it is held.
+    const issued = await push(t, office, 'office-desk-1', [
+      mutation('note', noteId, { text: 'Before issue' }, { baseVersion: note.version }),
+      mutation('document', documentId, { issuedAt: '2026-12-10T15:00:00.000Z' }, { baseVersion: document.version }),
+      mutation('note', noteId, { text: 'After issue' }, { baseVersion: note.version }),
+    ]);
+    expect(issued.map((r) => r.status)).toEqual(['applied', 'applied', 'merged']);
+    // Withdrawn in the middle of a batch: the edit after it goes through again.
+    const withdrawn = await push(t, office, 'office-desk-1', [
+      mutation('note', noteId, { text: 'Still held' }, { baseVersion: issued[0]!.version }),
+      mutation('document', documentId, 'delete', { baseVersion: issued[1]!.version }),
+      mutation('note', noteId, { text: 'After withdrawal' }, { baseVersion: issued[0]!.version }),
+    ]);
+    expect(withdrawn.map((r) => r.status)).toEqual(['merged', 'applied', 'applied']);
+    await officeView.pullAll(t, office);
+    expect(officeView.rows.get(`note:${noteId}`)!.text).toBe('After withdrawal');
+    const held = officeView.find('conflict', (r) => r.rowId === noteId).map((r) => [r.reason, r.discardedValue]);
+    expect(held).toEqual(expect.arrayContaining([['locked-by-document', 'After issue'], ['locked-by-document', 'Still held']]));
   });
 
   it('locks a visit signed off on site: a technician’s later edits become conflicts, new records still arrive, the office may correct', async () => {

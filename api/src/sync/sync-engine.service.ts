@@ -19,7 +19,7 @@ import type { Role } from '../users/entities/user.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { AppliedMutation, SyncChange, SyncCounter } from './entities/sync-bookkeeping.entity.js';
 import { type FieldMeta, SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
-import { insertMany, selectMany } from './bulk-write.js';
+import { insertMany, selectMany, updateWhere } from './bulk-write.js';
 import { decideField, sameDevice, sameValue } from './merge.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
 
@@ -74,6 +74,8 @@ export class SyncEngine {
       pending: new Set(),
       changes: new Map(),
       appliedRows: [],
+      issuedJobs: new Map(),
+      now: new Date(),
     };
     this.batches.set(em, batch);
     try {
@@ -81,7 +83,7 @@ export class SyncEngine {
       const results: MutationResult[] = [];
       for (const m of mutations) results.push(await this.applyOnce(em, actor, scope, m));
       await this.flush(em, batch);
-      if (batch.seq) await em.update(SyncCounter, { name: 'global' }, { value: batch.seq.value });
+      if (batch.seq) await updateWhere(em, SyncCounter, { name: 'global' }, { value: batch.seq.value });
       return results;
     } finally {
       this.batches.delete(em);
@@ -112,11 +114,16 @@ export class SyncEngine {
         if (type?.kind === 'refs' && Array.isArray(value)) for (const id of value) add(refIds, type.entity, id);
       }
     }
+    const existing: Array<[SyncEntityName, SyncRecord]> = [];
     for (const [entity, ids] of rowIds) {
       const found = await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', [...ids]);
       for (const id of ids) batch.rows.set(`${entity}:${id}`, null);
-      for (const row of found) batch.rows.set(`${entity}:${row.id}`, row);
+      for (const row of found) {
+        batch.rows.set(`${entity}:${row.id}`, row);
+        existing.push([entity, row]);
+      }
     }
+    await this.preloadLocks(em, batch, existing);
     for (const [entity, ids] of refIds) {
       const list = [...ids];
       const found =
@@ -125,6 +132,31 @@ export class SyncEngine {
           : await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', list, { organisationId: actor.organisationId, deletedAt: null });
       for (const row of found) batch.known.add(`${entity}:${row.id}`);
     }
+  }
+
+  /**
+   * The visits of the existing rows the batch names, and which of their jobs have an issued document: what lockOf
+   * asks about every change to a visit's records, read in two queries instead of two per mutation.
+   */
+  private async preloadLocks(em: EntityManager, batch: Batch, existing: Array<[SyncEntityName, SyncRecord]>): Promise<void> {
+    const visits: SyncRecord[] = [];
+    const visitIds = new Set<string>();
+    for (const [entity, row] of existing) {
+      if (entity === 'visit') visits.push(row);
+      else if (SYNC_ENTITIES[entity].visitField === 'visitId' && typeof row.visitId === 'string' && !batch.rows.has(`visit:${row.visitId}`)) visitIds.add(row.visitId);
+    }
+    if (visitIds.size) {
+      const found = await selectMany<SyncRecord>(em, SYNC_SCHEMAS.visit, 'id', [...visitIds]);
+      for (const id of visitIds) batch.rows.set(`visit:${id}`, null);
+      for (const row of found) batch.rows.set(`visit:${row.id}`, row);
+      visits.push(...found);
+    }
+    const jobIds = new Set<string>();
+    for (const visit of visits) if (typeof visit.jobId === 'string') jobIds.add(visit.jobId);
+    if (!jobIds.size) return;
+    const documents = await selectMany<SyncRecord>(em, SYNC_SCHEMAS.document, 'jobId', [...jobIds], { deletedAt: null });
+    for (const jobId of jobIds) batch.issuedJobs.set(jobId, false);
+    for (const d of documents) if (d.issuedAt != null) batch.issuedJobs.set(d.jobId as string, true);
   }
 
   /** A row as the batch has it (read at its start, or written since), else as the database has it. */
@@ -140,8 +172,9 @@ export class SyncEngine {
   /** Writes a row's changes: to the row itself while it waits to be inserted, else to the database at once. */
   private async write(em: EntityManager, entity: SyncEntityName, row: SyncRecord, changes: Record<string, unknown>): Promise<void> {
     const batch = this.batches.get(em);
-    if (!batch?.pending.has(`${entity}:${row.id}`)) await em.getRepository<SyncRecord>(entity).update({ id: row.id }, changes as never);
+    if (!batch?.pending.has(`${entity}:${row.id}`)) await updateWhere(em, SYNC_SCHEMAS[entity], { id: row.id }, changes);
     Object.assign(row, changes);
+    if (entity === 'document' && batch) batch.issuedJobs.clear();
   }
 
   /** Inserts what the batch has kept back: new rows in the order they were made, then applied mutations and the change log. */
@@ -151,6 +184,7 @@ export class SyncEngine {
     }
     batch.inserts.clear();
     batch.pending.clear();
+    batch.issuedJobs.clear();
     for (let i = 0; i < batch.appliedRows.length; i += INSERT_CHUNK) await insertMany(em, AppliedMutation, batch.appliedRows.slice(i, i + INSERT_CHUNK));
     batch.appliedRows = [];
     const changes = [...batch.changes.values()];
@@ -225,7 +259,7 @@ export class SyncEngine {
   }
 
   private async create(em: EntityManager, actor: Actor, spec: EntitySpec, m: Mutation, set: Record<string, FieldValue>): Promise<MutationResult> {
-    const missing = Object.entries(spec.fields).filter(([f, s]) => s.required && (set[f] === undefined || set[f] === null)).map(([f]) => `${m.entity}.${f}`);
+    const missing = requiredFields(m.entity).filter((f) => set[f] === undefined || set[f] === null).map((f) => `${m.entity}.${f}`);
     if (missing.length) throw new MutationRefused(`A new ${m.entity} needs ${missing.join(', ')}.`);
     const seq = await this.nextSeq(em);
     const fieldMeta: Record<string, FieldMeta> = {};
@@ -240,6 +274,7 @@ export class SyncEngine {
       if (batch) await this.flush(em, batch);
       await hook(em, actor, row);
       batch?.rows.delete(`${m.entity}:${row.id}`);
+      batch?.issuedJobs.clear();
     }
     return { mutationId: m.mutationId, status: 'applied', version: seq, fieldVersions: versionsOf(fieldMeta) };
   }
@@ -398,21 +433,30 @@ export class SyncEngine {
     const visit = spec.visitField === 'id' ? row : await this.rowOf(em, 'visit', visitId);
     if (!visit?.jobId) return null;
     const waiting = this.batches.get(em)?.inserts.get('document') ?? [];
-    const issued =
-      waiting.some((d) => d.jobId === visit.jobId && d.issuedAt != null && d.deletedAt == null) ||
-      (await em.getRepository<SyncRecord>('document').countBy({ jobId: visit.jobId as string, issuedAt: Not(IsNull()), deletedAt: IsNull() })) > 0;
+    const issued = waiting.some((d) => d.jobId === visit.jobId && d.issuedAt != null && d.deletedAt == null) || (await this.hasIssuedDocument(em, visit.jobId as string));
     if (issued) return 'locked-by-document';
     if (actor.role === 'technician' && visit.status === FINISHED_VISIT_STATUS) return 'locked-by-sign-off';
     return null;
+  }
+
+  /** Whether the database holds an issued, undeleted document of the job; remembered for the rest of a batch. */
+  private async hasIssuedDocument(em: EntityManager, jobId: string): Promise<boolean> {
+    const batch = this.batches.get(em);
+    const known = batch?.issuedJobs.get(jobId);
+    if (known !== undefined) return known;
+    const issued = (await em.getRepository<SyncRecord>('document').countBy({ jobId, issuedAt: Not(IsNull()), deletedAt: IsNull() })) > 0;
+    batch?.issuedJobs.set(jobId, issued);
+    return issued;
   }
 
   /** Changes a row the server owns (a conflict's resolution) and numbers the change so devices pull it. */
   async updateServerRow(em: EntityManager, entity: SyncEntityName, row: SyncRecord, changes: Record<string, unknown>, actor: Actor): Promise<number> {
     const seq = await this.nextSeq(em);
     const next = { ...changes, version: seq, updatedById: actor.userId };
-    await em.getRepository<SyncRecord>(entity).update({ id: row.id }, next as never);
+    await updateWhere(em, SYNC_SCHEMAS[entity], { id: row.id }, next);
     await this.recordChange(em, entity, { ...row, ...next } as SyncRecord, seq);
     this.batches.get(em)?.rows.delete(`${entity}:${row.id}`);
+    if (entity === 'document') this.batches.get(em)?.issuedJobs.clear();
     return seq;
   }
 
@@ -421,7 +465,7 @@ export class SyncEngine {
     if (batch?.seq) return ++batch.seq.value;
     if (batch) {
       // Read once per batch; applyAll writes the final value back before the transaction commits.
-      const current = await em.findOneBy(SyncCounter, { name: 'global' });
+      const [current] = await selectMany(em, SyncCounter, 'name', ['global']);
       if (!current) await em.insert(SyncCounter, { name: 'global', value: 0 });
       batch.seq = { value: (current?.value ?? 0) + 1 };
       return batch.seq.value;
@@ -449,9 +493,9 @@ export class SyncEngine {
       return;
     }
     // Every row of one multi-row insert names the same columns, and gets its times here rather than from column defaults.
-    const now = new Date();
-    const full = { ...Object.fromEntries(Object.keys(SYNC_SCHEMAS[entity].options.columns).map((c) => [c, null])), ...row, createdAt: row.createdAt ?? now, updatedAt: row.updatedAt ?? now } as SyncRecord;
-    Object.assign(row, full);
+    for (const column of columnsOf(entity)) if (row[column] === undefined) row[column] = null;
+    row.createdAt ??= batch.now;
+    row.updatedAt ??= batch.now;
     if (!batch.inserts.has(entity)) batch.inserts.set(entity, []);
     batch.inserts.get(entity)!.push(row);
     batch.pending.add(`${entity}:${row.id}`);
@@ -484,9 +528,29 @@ interface Batch {
   inserts: Map<SyncEntityName, SyncRecord[]>;
   /** `entity:id` of the rows in `inserts`. */
   pending: Set<string>;
+  /** When the batch began: the creation time of the rows it makes. */
+  now: Date;
+  /** Whether a job has an issued document, as read from the database in this batch; see lockOf. */
+  issuedJobs: Map<string, boolean>;
   /** The change log's entry per `entity:rowId`, the latest. */
   changes: Map<string, { entity: SyncEntityName; rowId: string; organisationId: string; seq: number; siteId: string | null; deleted: boolean }>;
   appliedRows: Array<Pick<AppliedMutation, 'mutationId' | 'organisationId' | 'userId' | 'deviceId' | 'result'>>;
+}
+
+const COLUMNS = new Map<SyncEntityName, string[]>();
+/** Every column of an entity's table, read once from its schema. */
+function columnsOf(entity: SyncEntityName): string[] {
+  let columns = COLUMNS.get(entity);
+  if (!columns) COLUMNS.set(entity, (columns = Object.keys(SYNC_SCHEMAS[entity].options.columns)));
+  return columns;
+}
+
+const REQUIRED = new Map<SyncEntityName, string[]>();
+/** The fields a new row of an entity must have. */
+function requiredFields(entity: SyncEntityName): string[] {
+  let fields = REQUIRED.get(entity);
+  if (!fields) REQUIRED.set(entity, (fields = Object.entries(SYNC_ENTITIES[entity].fields).filter(([, f]) => f.required).map(([name]) => name)));
+  return fields;
 }
 
 export function versionsOf(meta: Record<string, FieldMeta>): Record<string, number> {

@@ -1,9 +1,11 @@
 import { Body, Controller, Get, HttpCode, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { Mutation } from '@wiretrail/core';
 import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { AnyRole } from '../common/decorators/roles.decorator.js';
 import { PullQueryDto } from './dto/pull-query.dto.js';
 import { PushDto } from './dto/push.dto.js';
+import { PushedMutations } from './pushed-mutations.js';
 import { SyncService } from './sync.service.js';
 
 @ApiTags('sync')
@@ -15,8 +17,8 @@ export class SyncController {
 
   @Post('push')
   @HttpCode(200)
-  push(@CurrentUser() user: AuthUser, @Body() dto: PushDto) {
-    return this.sync.push(user, dto.deviceId, dto.mutations);
+  push(@CurrentUser() user: AuthUser, @Body() dto: PushDto, @PushedMutations() mutations: Mutation[]) {
+    return this.sync.push(user, dto.deviceId, mutations);
   }
 
   @Get('pull')

@@ -1,9 +1,10 @@
-import { Global, Module } from '@nestjs/common';
+import { Global, type MiddlewareConsumer, Module, type NestModule, RequestMethod } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { WriteQueue } from '../common/write-queue.js';
 import { User } from '../users/entities/user.entity.js';
 import { SYNC_BOOKKEEPING } from './entities/sync-bookkeeping.entity.js';
 import { ALL_SYNC_SCHEMAS } from './entities/sync-schemas.js';
+import { setMutationsAside } from './pushed-mutations.js';
 import { ScopeService } from './scope.service.js';
 import { SyncController } from './sync.controller.js';
 import { SyncEngine } from './sync-engine.service.js';
@@ -17,4 +18,8 @@ import { SyncService } from './sync.service.js';
   providers: [WriteQueue, SyncEngine, SyncService, ScopeService],
   exports: [WriteQueue, SyncEngine, SyncService, ScopeService],
 })
-export class SyncModule {}
+export class SyncModule implements NestModule {
+  configure(consumer: MiddlewareConsumer): void {
+    consumer.apply(setMutationsAside).forRoutes({ path: 'sync/push', method: RequestMethod.POST });
+  }
+}

@@ -14,7 +14,8 @@ import { type EntityManager, In } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { SyncChange, SyncDevice } from './entities/sync-bookkeeping.entity.js';
-import type { SyncRecord } from './entities/sync-schemas.js';
+import { SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
+import { insertMany, selectMany } from './bulk-write.js';
 import { ScopeService } from './scope.service.js';
 import { SyncEngine, versionsOf } from './sync-engine.service.js';
 
@@ -23,8 +24,15 @@ const HIDDEN = new Set(['organisationId', 'fieldMeta', 'deletedAt']);
 /** The row as a device sees it: its fields, version and per-field versions, none of the server's bookkeeping. */
 export function toSyncedRow(row: SyncRecord): SyncedRow {
   const out: Record<string, unknown> = {};
-  for (const [k, v] of Object.entries(row)) if (!HIDDEN.has(k)) out[k] = v instanceof Date ? v.toISOString() : v;
-  return { ...out, id: row.id, version: row.version, fieldVersions: versionsOf(row.fieldMeta ?? {}) } as SyncedRow;
+  for (const k in row) {
+    if (!Object.hasOwn(row, k) || HIDDEN.has(k)) continue;
+    const v = row[k];
+    out[k] = v instanceof Date ? v.toISOString() : v;
+  }
+  out.id = row.id;
+  out.version = row.version;
+  out.fieldVersions = versionsOf(row.fieldMeta ?? {});
+  return out as SyncedRow;
 }
 
 @Injectable()
@@ -112,11 +120,18 @@ export class SyncService {
   }
 
   private async materialise(em: EntityManager, entries: SyncChange[]): Promise<Change[]> {
-    const byEntity = new Map<string, string[]>();
-    for (const c of entries) if (!c.deleted) byEntity.set(c.entity, [...(byEntity.get(c.entity) ?? []), c.rowId]);
+    const byEntity = new Map<SyncEntityName, Set<string>>();
+    for (const c of entries) {
+      if (c.deleted) continue;
+      const entity = c.entity as SyncEntityName;
+      let ids = byEntity.get(entity);
+      if (!ids) byEntity.set(entity, (ids = new Set()));
+      ids.add(c.rowId);
+    }
     const rows = new Map<string, SyncRecord>();
+    // Plain statements hydrated by the driver: the query builder's handling of a thousand ids cost more than the read.
     for (const [entity, ids] of byEntity) {
-      for (const r of await em.getRepository<SyncRecord>(entity).find({ where: { id: In(ids) }, withDeleted: true })) rows.set(`${entity}:${r.id}`, r);
+      for (const r of await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', [...ids])) rows.set(`${entity}:${r.id}`, r);
     }
     const seen = new Set<string>();
     const out: Change[] = [];
@@ -136,7 +151,8 @@ export class SyncService {
     em: EntityManager, user: AuthUser, deviceId: string,
     checkpoint: number, sitesThen: string[] | null, next: number, sitesNow: string[] | null,
   ): Promise<void> {
-    await em.save(SyncDevice, {
+    // One upsert: save() read the row first to choose between INSERT and UPDATE.
+    await insertMany(em, SyncDevice, [{
       deviceId,
       organisationId: user.organisationId,
       userId: user.id,
@@ -145,6 +161,6 @@ export class SyncService {
       previousCheckpoint: checkpoint,
       previousScope: sitesThen,
       lastPullAt: new Date(),
-    });
+    }], { columns: ['deviceId'] });
   }
 }

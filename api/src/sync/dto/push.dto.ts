@@ -11,7 +11,10 @@ export class PushDto {
   @Matches(DEVICE_ID, { message: 'deviceId must be 4 to 64 letters, digits, _ or -' })
   deviceId: string;
 
-  /** Each mutation is checked on its own, so that one bad mutation is refused alone instead of failing the batch. */
+  /**
+   * Each mutation is checked on its own by the engine, so that one bad mutation is refused alone instead of failing
+   * the batch; the handler takes them from PushedMutations, and the pipe sees an empty list here (pushed-mutations.ts).
+   */
   @ApiProperty({
     description: 'In the order the device made them: { mutationId, entity, id, baseVersion, set?, delete?, hlc }',
     type: 'array',

@@ -311,6 +311,54 @@ describe('sync engine: pull', () => {
     expect(await db.getMeta('checkpoint')).toBe(server.seq);
   });
 
+  describe('a first sync, which does not read back rows that cannot be on the phone', () => {
+    const area = (i: number) => `01900000-0000-7000-8000-${String(i).padStart(12, '0')}`;
+    /** The server's pulls, with `between` run once just before the second page is asked for. */
+    const secondPage = (between: () => Promise<void>): SyncTransport => {
+      let pulls = 0;
+      return { push: (r) => server.push(r), pull: async (p) => (++pulls === 2 ? (await between(), server.pull(p)) : server.pull(p)) };
+    };
+    const newer = (i: number, name: string) => ({ id: area(i), siteId: SITE, name, _base: { version: 10_000, fieldVersions: {}, values: {} } });
+
+    beforeEach(() => {
+      for (let i = 0; i < 600; i++) server.edit('area', area(i), { siteId: SITE, name: `Room ${i}` });
+    });
+
+    it('still keeps a newer row that was on the phone before it began, and what is typed while it runs', async () => {
+      await db.area.put(newer(550, 'Already here, newer'));
+      let typed = '';
+      let made = '';
+      await makeEngine(secondPage(async () => {
+        // A room from the first page is renamed at the office and on the phone: it comes again in the second.
+        server.edit('area', area(10), { name: 'Renamed at the office' });
+        await saveRecord('area', area(10), { name: 'Renamed on the phone' });
+        typed = await note('Typed between two pages');
+        // A room from the first page leaves this user's scope.
+        server.evict('area', area(20));
+        // A room made on the phone after the first page, that the office knows too (another tab sent it).
+        made = await createRecord('area', { siteId: SITE, name: 'Made on the phone' });
+        server.edit('area', made, { siteId: SITE, name: 'Named at the office' });
+      })).syncNow();
+      expect(await db.area.count()).toBe(600);
+      expect(await db.area.get(area(20))).toBeUndefined();
+      expect((await db.area.get(area(550)))?.name).toBe('Already here, newer');
+      expect((await db.area.get(made))?.name).toBe('Made on the phone');
+      expect(await db.area.get(area(10))).toMatchObject({ name: 'Renamed on the phone', _base: { values: { name: 'Renamed at the office' } } });
+      expect((await db.note.get(typed))?.text).toBe('Typed between two pages');
+      expect(await db.outbox.count()).toBe(3);
+    });
+
+    it('reads every row again once something else has synced between its pages, as another tab would', async () => {
+      await makeEngine(secondPage(async () => {
+        // Another tab's sync stores a later version of a row this page is about to bring, and its checkpoint.
+        await db.area.put(newer(550, 'Stored by the other tab'));
+        await db.setMeta('checkpoint', 9_999);
+      })).syncNow();
+      expect((await db.area.get(area(550)))?.name).toBe('Stored by the other tab');
+      expect((await db.area.get(area(551)))?.name).toBe('Room 551');
+    });
+  });
+
   it('keeps the phone’s unsent value of a field and takes the server’s others; if the server keeps its own, the phone follows', async () => {
     await makeEngine().syncNow();
     // The office edits the circuit while the technician edits the same field on the phone.

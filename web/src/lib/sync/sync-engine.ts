@@ -11,6 +11,7 @@ import {
   SYNC_ENTITY_NAMES,
   type SyncEntityName,
 } from '@wiretrail/core';
+import type { Table } from 'dexie';
 import { v4 as uuidv4 } from 'uuid';
 import { ApiError, OfflineError } from '@/lib/api-client';
 import type { LocalRow, OutboxEntry, WiretrailDb } from '@/lib/db';
@@ -351,7 +352,10 @@ export class SyncEngine {
   // ---- pull ----
 
   private async pullAll(deviceId: string): Promise<void> {
-    let checkpoint = (await this.db.getMeta('checkpoint')) ?? 0;
+    const stored = await this.db.getMeta('checkpoint');
+    let checkpoint = stored ?? 0;
+    // From the start, nearly every row is new: keep track of what is on the phone instead of reading it back.
+    let onPhone = checkpoint === 0 ? new RowsOnPhone(stored) : null;
     let resets = 0;
     for (;;) {
       if (this.stopped) throw new StoppedError('Sync stopped.');
@@ -360,9 +364,10 @@ export class SyncEngine {
         if (++resets > 2) throw new Error('the office system asked this phone to start over again and again');
         await this.resetLocal();
         checkpoint = 0;
+        onPhone = new RowsOnPhone(0);
         continue;
       }
-      await this.applyPage(page);
+      await this.applyPage(page, onPhone);
       if (!page.hasMore) return;
       if (page.checkpoint <= checkpoint && page.changes.length === 0) throw new Error('the office system sent an empty page');
       checkpoint = page.checkpoint;
@@ -383,27 +388,25 @@ export class SyncEngine {
 
   /**
    * Applies a page in one transaction with one read and one write per table: row-by-row gets and puts made a
-   * first sync of a large site several times slower than the store itself.
+   * first sync of a large site several times slower than the store itself. With `onPhone`, only rows that can be
+   * on the phone are read back.
    */
-  private async applyPage(page: PullResponse): Promise<void> {
+  private async applyPage(page: PullResponse, onPhone: RowsOnPhone | null = null): Promise<void> {
     const { db } = this;
     await db.transaction('rw', [...db.syncedTables(), db.outbox, db.meta], async () => {
+      const narrow = onPhone?.stillTrue(await db.getMeta('checkpoint')) ? onPhone : null;
       const pending = new Map<string, OutboxEntry[]>();
-      for (const e of await db.outbox.orderBy('seq').toArray()) {
-        const key = `${e.entity}:${e.id}`;
-        pending.set(key, [...(pending.get(key) ?? []), e]);
-      }
+      for (const e of await db.outbox.orderBy('seq').toArray()) listIn(pending, `${e.entity}:${e.id}`).push(e);
       const restores: Array<[number, LocalRow]> = [];
       const byEntity = new Map<SyncEntityName, Change[]>();
-      for (const change of page.changes) {
-        if (!SYNCED.has(change.entity)) continue;
-        const entity = change.entity as SyncEntityName;
-        byEntity.set(entity, [...(byEntity.get(entity) ?? []), change]);
-      }
+      for (const change of page.changes) if (SYNCED.has(change.entity)) listIn(byEntity, change.entity as SyncEntityName).push(change);
       for (const [entity, changes] of byEntity) {
         const table = db.rows(entity);
-        const ids = [...new Set(changes.map((c) => c.id))];
-        const found = await table.bulkGet(ids);
+        let ids = [...new Set(changes.map((c) => c.id))];
+        const present = narrow ? await narrow.idsOf(entity, table) : null;
+        // A row neither on the phone nor waiting to be sent cannot be there: nothing to read back.
+        if (present) ids = ids.filter((id) => present.has(id) || pending.has(`${entity}:${id}`));
+        const found = ids.length ? await table.bulkGet(ids) : [];
         const state = new Map<string, LocalRow | undefined>(ids.map((id, i) => [id, found[i]]));
         const touched = new Set<string>();
         for (const change of changes) {
@@ -413,13 +416,18 @@ export class SyncEngine {
           touched.add(change.id);
         }
         const puts = [...touched].map((id) => state.get(id)).filter((r): r is LocalRow => !!r);
-        const deletes = [...touched].filter((id) => !state.get(id));
+        const deletes = [...touched].filter((id) => !state.get(id) && (!present || present.has(id)));
         if (puts.length) await table.bulkPut(puts);
         if (deletes.length) await table.bulkDelete(deletes);
+        if (present) {
+          for (const row of puts) present.add(row.id);
+          for (const id of deletes) present.delete(id);
+        }
       }
       for (const [seq, restore] of restores) await db.outbox.update(seq, { restore });
       await db.setMeta('checkpoint', page.checkpoint);
     });
+    onPhone?.wrote(page.checkpoint);
   }
 
   /**
@@ -448,6 +456,46 @@ export class SyncEngine {
     }
     return next;
   }
+}
+
+/**
+ * The ids of the rows on the phone during a pull from checkpoint 0 (a first sync, or one after a reset): each
+ * table's keys as the pull first finds them, kept up to date by the pages it applies. With the outbox they say
+ * which rows of a page can be on the phone at all, so a first sync of a large site does not read back thousands
+ * of rows that are not there. Only this pull may have written the checkpoint between its pages; when it finds
+ * another value (another tab synced meanwhile) the ids may be out of date, and every later page reads all its
+ * rows as before.
+ */
+class RowsOnPhone {
+  private readonly ids = new Map<SyncEntityName, Set<string>>();
+  private trusted = true;
+
+  constructor(private checkpoint: number | undefined) {}
+
+  /** Whether the ids still hold, given the checkpoint found at the start of a page's transaction. */
+  stillTrue(found: number | undefined): boolean {
+    if (found !== this.checkpoint) this.trusted = false;
+    return this.trusted;
+  }
+
+  /** The table's ids: read once, inside a page's transaction, then kept up to date by the caller. */
+  async idsOf(entity: SyncEntityName, table: Table<LocalRow, string>): Promise<Set<string>> {
+    let ids = this.ids.get(entity);
+    if (!ids) this.ids.set(entity, (ids = new Set(await table.toCollection().primaryKeys())));
+    return ids;
+  }
+
+  /** The checkpoint a page's transaction wrote, once it has committed. */
+  wrote(checkpoint: number): void {
+    this.checkpoint = checkpoint;
+  }
+}
+
+/** The list kept under `key`, made on first use: grouping without copying the list for every entry. */
+function listIn<K, V>(map: Map<K, V[]>, key: K): V[] {
+  let list = map.get(key);
+  if (!list) map.set(key, (list = []));
+  return list;
 }
 
 function pendingFields(entries: OutboxEntry[]): Set<string> {
