@@ -1,7 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import type { Mutation } from '@wiretrail/core';
 import { IsArray, IsString, Matches } from 'class-validator';
-import { ChecksItsOwnStrings } from '../../common/pipes/refuse-nul.pipe.js';
 
 export const DEVICE_ID = /^[A-Za-z0-9_-]{4,64}$/;
 
@@ -21,6 +20,5 @@ export class PushDto {
     items: { type: 'object' },
   })
   @IsArray({ message: 'mutations must be a list' })
-  @ChecksItsOwnStrings()
   mutations: Mutation[];
 }
