@@ -31,7 +31,9 @@ export async function startApi({ port }) {
     const r = spawnSync(process.execPath, [script], { cwd: root, env, encoding: 'utf8' });
     if (r.status !== 0) throw new Error(r.stderr);
   }
-  const child = spawn(process.execPath, ['api/dist/main.js'], { cwd: root, env, stdio: 'ignore' });
+  // BENCH_API_NODE_ARGS='--cpu-prof --cpu-prof-dir=data/prof' profiles the API while a benchmark runs.
+  const nodeArgs = (process.env.BENCH_API_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const child = spawn(process.execPath, [...nodeArgs, 'api/dist/main.js'], { cwd: root, env, stdio: 'ignore' });
   const base = `http://127.0.0.1:${port}`;
   for (let i = 0; i < 200; i++) {
     try {
