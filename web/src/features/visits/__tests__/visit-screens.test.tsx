@@ -7,6 +7,9 @@ import { db } from '@/lib/db';
 import { addRing, at, base, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
 
 beforeEach(resetPhone);
+
+// Before the note the test adds, whatever the time of day the tests run.
+const anHourAgo = () => new Date(Date.now() - 60 * 60_000).toISOString();
 afterEach(tidyUp);
 
 describe('Today', () => {
@@ -43,7 +46,7 @@ describe('Today', () => {
 
 describe('Visit', () => {
   it('adds a quick note that shows whole on the trail, newest first', async () => {
-    await db.note.put({ id: '01900000-0000-7000-8000-000000000010', visitId: ids.visit, siteId: ids.site, text: 'Earlier note', createdAt: at(8), ...base });
+    await db.note.put({ id: '01900000-0000-7000-8000-000000000010', visitId: ids.visit, siteId: ids.site, text: 'Earlier note', createdAt: anHourAgo(), ...base });
     show(paths.visit.href(ids.visit));
     expect(await screen.findByRole('heading', { level: 1, name: 'Move two lounge sockets' })).toBeTruthy();
 
