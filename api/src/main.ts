@@ -12,7 +12,8 @@ async function bootstrap(): Promise<void> {
   const port = config.getOrThrow<number>('app.port');
   const host = config.getOrThrow<string>('app.host');
   await app.listen(port, host);
-  new Logger('Wiretrail').log(`API listening on http://${host}:${port}/api`);
+  const bound = app.getHttpServer().address() as { port: number } | null;
+  new Logger('Wiretrail').log(`API listening on http://${host}:${bound?.port ?? port}/api`);
 }
 
 bootstrap().catch((err) => {

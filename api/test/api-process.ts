@@ -1,7 +1,6 @@
 import { type ChildProcess, spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import http from 'node:http';
-import { createServer, type AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 
@@ -14,30 +13,22 @@ const API_DIR = resolve(import.meta.dirname, '..');
  * SIGKILL and started again on the same database, photo and upload directories.
  */
 export class ApiProcess {
-  readonly origin: string;
-  /** Where the API answers; uploads' addresses are relative to the origin. */
-  readonly base: string;
   readonly env: NodeJS.ProcessEnv;
+  /** 0 until the first start, when the API takes a free port and names it; kept across restarts after that. */
+  port = 0;
   starts = 0;
   private child: ChildProcess | null = null;
 
-  /** On a port the system says is free, kept across restarts so that a client's addresses stay good. */
+  /** Given DATABASE_URL and DATABASE_PATH of another, a second process shares its database and files. */
   static async create(env: Record<string, string> = {}): Promise<ApiProcess> {
-    // Given DATABASE_URL and DATABASE_PATH of another, a second process shares its database and files.
-    const probe = createServer();
-    const port = await new Promise<number>((resolve) => probe.listen(0, '127.0.0.1', () => resolve((probe.address() as AddressInfo).port)));
-    await new Promise((resolve) => probe.close(resolve));
     const directory = mkdtempSync(join(tmpdir(), 'wiretrail-process-'));
-    return new ApiProcess(directory, port, { ...(await databaseEnvFor(directory, 'wiretrail.sqlite')), ...env });
+    return new ApiProcess(directory, { ...(await databaseEnvFor(directory, 'wiretrail.sqlite')), ...env });
   }
 
-  private constructor(readonly directory: string, readonly port: number, env: Record<string, string>) {
-    this.origin = `http://127.0.0.1:${port}`;
-    this.base = `${this.origin}/api`;
+  private constructor(readonly directory: string, env: Record<string, string>) {
     this.env = {
       ...process.env,
       NODE_ENV: 'production',
-      PORT: String(port),
       HOST: '127.0.0.1',
       JWT_SECRET: 'process-test-secret-long-enough-for-signing-tokens',
       SIGN_IN_RATE_LIMIT: '1000',
@@ -62,14 +53,40 @@ export class ApiProcess {
     }
   }
 
+  /** Where the API answers; uploads' addresses are relative to the origin. */
+  get origin(): string {
+    return `http://127.0.0.1:${this.port}`;
+  }
+
+  get base(): string {
+    return `${this.origin}/api`;
+  }
+
+  /**
+   * The first start takes a port the system gives the API itself, read from what it logs: a port probed free
+   * beforehand can be taken by another test's process before the API binds it, and a health check there would
+   * be answered by someone else. Restarts keep that port, so that a client's addresses stay good.
+   */
   async start(): Promise<void> {
-    const child = spawn(process.execPath, ['dist/main.js'], { cwd: API_DIR, env: this.env, stdio: ['ignore', 'ignore', 'pipe'] });
+    const child = spawn(process.execPath, ['dist/main.js'], { cwd: API_DIR, env: { ...this.env, PORT: String(this.port) }, stdio: ['ignore', 'pipe', 'pipe'] });
     let stderr = '';
+    let stdout = '';
     child.stderr!.on('data', (d: Buffer) => (stderr += d.toString()));
+    child.stdout!.on('data', (d: Buffer) => {
+      if (this.port === 0) stdout += d.toString();
+    });
     this.child = child;
     this.starts++;
     for (let i = 0; i < 200; i++) {
       if (child.exitCode !== null) break;
+      if (this.port === 0) {
+        const named = /API listening on http:\/\/127\.0\.0\.1:(\d+)\/api/.exec(stdout);
+        if (named) this.port = Number(named[1]);
+        else {
+          await new Promise((r) => setTimeout(r, 50));
+          continue;
+        }
+      }
       try {
         if ((await this.request('GET', '/api/health')).status === 200) return;
       } catch {

@@ -6,7 +6,8 @@ export class EnvironmentVariables {
   @IsIn(['development', 'production', 'test'])
   NODE_ENV: 'development' | 'production' | 'test' = 'development';
 
-  @Type(() => Number) @IsInt() @Min(1) @Max(65535)
+  /** 0 asks the system for a free port; the API names the one it got when it starts listening. */
+  @Type(() => Number) @IsInt() @Min(0) @Max(65535)
   PORT = 3000;
 
   @IsString()
