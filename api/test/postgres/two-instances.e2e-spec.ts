@@ -17,7 +17,7 @@ import { convergenceProperty, type SyncPort } from '../convergence-model.js';
  * process in turn. The writers of both processes take one lock (write-queue.ts), so changes are numbered in the
  * order they commit and no pull can step past a change still to come. TWO_INSTANCE_RUNS sets the cases.
  */
-const RUNS = Number(process.env.TWO_INSTANCE_RUNS ?? 40);
+const RUNS = Number(process.env.TWO_INSTANCE_RUNS ?? 100);
 
 describe('two API processes on one PostgreSQL database', () => {
   let apis: ApiProcess[];
