@@ -71,6 +71,12 @@ export async function signIn(base, email) {
   return res.json();
 }
 
+/** The middle of several samples: benchmarks on a shared machine compare medians, as single runs swing. */
+export const median = (values) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
+
+/** How many samples a benchmark that takes medians takes (BENCH_SAMPLES to change it). */
+export const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 5);
+
 export async function timed(fn) {
   const start = process.hrtime.bigint();
   const value = await fn();

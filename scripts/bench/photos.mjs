@@ -4,7 +4,7 @@
 // machine, and the medians are compared.
 import { createHash } from 'node:crypto';
 import sharp from 'sharp';
-import { signIn, startApi, timed } from './harness.mjs';
+import { median, signIn, startApi, timed } from './harness.mjs';
 
 const CHUNK = 1024 * 1024;
 const WARM_UPS = 2;
@@ -40,7 +40,6 @@ function numbered(jpeg, n) {
 
 const sha256 = (b) => createHash('sha256').update(b).digest('hex');
 const meta = (o) => Object.entries(o).map(([k, v]) => `${k} ${Buffer.from(v).toString('base64')}`).join(',');
-const median = (values) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
 async function uploadOne(base, token, bytes) {
   const headers = { authorization: `Bearer ${token}`, 'tus-resumable': '1.0.0' };

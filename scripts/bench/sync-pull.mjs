@@ -6,12 +6,9 @@ import { join } from 'node:path';
 import { v7 as uuidv7 } from 'uuid';
 import { root } from '../lib.mjs';
 import { launchChromium } from './browser.mjs';
-import { PASSWORD, signIn, startApi, timed } from './harness.mjs';
+import { median, PASSWORD, SAMPLES, signIn, startApi, timed } from './harness.mjs';
 
 const ROWS = 20_000;
-const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 5);
-
-const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 async function pullAll(base, token, deviceId) {
   const rows = [];

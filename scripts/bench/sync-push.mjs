@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import { MAX_PUSH_MUTATIONS } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
 import { root } from '../lib.mjs';
-import { signIn, startApi, timed } from './harness.mjs';
+import { median, SAMPLES, signIn, startApi, timed } from './harness.mjs';
 
 const DEVICES = 20;
 const TOTAL = 10_000;
@@ -20,11 +20,7 @@ function hlc(ms, counter, device) {
   return `${new Date(ms).toISOString()}-${counter.toString(16).padStart(4, '0')}-${device}`;
 }
 
-/** Samples per batch size, taken in turn; the rows compare medians, as single runs swing with the disk's fsyncs. */
-const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 5);
-
-const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-
+// SAMPLES runs per batch size, taken in turn: single runs swing with the disk's syncs.
 export async function benchSyncPush({ port = 3601 } = {}) {
   const runs = { app: [], small: [] };
   for (let i = 0; i < SAMPLES; i++) {

@@ -2,7 +2,7 @@
 // start to Today in headless Chromium (service worker in control, network off).
 import { gzipSync } from 'node:zlib';
 import { launchChromium } from './browser.mjs';
-import { PASSWORD, startApi, timed } from './harness.mjs';
+import { median, PASSWORD, startApi, timed } from './harness.mjs';
 
 const jsKb = (page) => {
   const scripts = new Map();
@@ -69,14 +69,13 @@ export async function benchWeb({ port = 3603 } = {}) {
       await cold.close();
     }
     await context.close();
-    starts.sort((a, b) => a - b);
-    const median = starts[Math.floor(starts.length / 2)];
+    const coldStart = median(starts);
     return [
       { name: "web: technician's first screen JS, signed in (gzip)", measuredMs: tech.signedIn, display: `${tech.signedIn.toFixed(0)} KB`, targetDisplay: '≤ 200 KB', ok: tech.signedIn <= 200 },
       { name: 'web: technician, sign-in page to Today (gzip)', measuredMs: tech.withSignIn, display: `${tech.withSignIn.toFixed(0)} KB` },
       { name: "web: office's first screen JS, signed in (gzip)", measuredMs: office.signedIn, display: `${office.signedIn.toFixed(0)} KB` },
       { name: 'web: office, sign-in page to Jobs (gzip)', measuredMs: office.withSignIn, display: `${office.withSignIn.toFixed(0)} KB` },
-      { name: 'web: offline cold start to Today (median of 5)', measuredMs: median, display: `${median.toFixed(0)} ms`, targetDisplay: '< 1000 ms', ok: median < 1000 },
+      { name: 'web: offline cold start to Today (median of 5)', measuredMs: coldStart, display: `${coldStart.toFixed(0)} ms`, targetDisplay: '< 1000 ms', ok: coldStart < 1000 },
     ];
   } finally {
     await browser.close();
