@@ -1,8 +1,11 @@
 import { expect } from '@jest/globals';
 import { formatHlc, type Hlc, type Mutation, type MutationResult, type PullResponse, type SyncedRow, tickHlc } from '@wiretrail/core';
 import fc from 'fast-check';
+import type { DataSource } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../src/common/decorators/current-user.decorator.js';
+import { Organisation } from '../src/organisations/entities/organisation.entity.js';
+import { User } from '../src/users/entities/user.entity.js';
 
 /**
  * The convergence property, shared by the in-process test (convergence.e2e-spec.ts) and the one with two API
@@ -15,6 +18,19 @@ import type { AuthUser } from '../src/common/decorators/current-user.decorator.j
  */
 
 /** How the test reaches a server: its sync calls, and a fresh organisation of an admin and two office users. */
+/** An organisation of its own for one case: an admin and two office users, written straight to the database. */
+export async function organisationOfThree(db: DataSource, name: string): Promise<AuthUser[]> {
+  const orgs = db.getRepository(Organisation);
+  const org = await orgs.save(orgs.create({ name, address: null, phone: null, email: null }));
+  const users: AuthUser[] = [];
+  for (const [i, role] of (['admin', 'office', 'office'] as const).entries()) {
+    const repo = db.getRepository(User);
+    const u = await repo.save(repo.create({ organisationId: org.id, email: `user-${i}-${uuidv7()}@convergence.example`, name: `User ${i}`, role, passwordHash: 'x', active: true, lastSignInAt: null }));
+    users.push({ id: u.id, organisationId: org.id, role, email: u.email, name: u.name });
+  }
+  return users;
+}
+
 export interface SyncPort {
   newOrganisation(n: number): Promise<AuthUser[]>;
   push(user: AuthUser, deviceId: string, mutations: Mutation[]): Promise<{ results: MutationResult[] }>;

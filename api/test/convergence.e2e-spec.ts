@@ -1,11 +1,7 @@
 import { afterAll, beforeAll, describe, it } from '@jest/globals';
 import fc from 'fast-check';
-import { v7 as uuidv7 } from 'uuid';
-import type { AuthUser } from '../src/common/decorators/current-user.decorator.js';
-import { Organisation } from '../src/organisations/entities/organisation.entity.js';
 import { SyncService } from '../src/sync/sync.service.js';
-import { User } from '../src/users/entities/user.entity.js';
-import { convergenceProperty, type SyncPort } from './convergence-model.js';
+import { convergenceProperty, organisationOfThree, type SyncPort } from './convergence-model.js';
 import { createTestApp, type TestApp } from './test-app.js';
 
 /**
@@ -24,17 +20,7 @@ describe('convergence under a faulty network', () => {
     port = {
       push: (user, deviceId, mutations) => sync.push(user, deviceId, mutations),
       pull: (user, deviceId, checkpoint, limit) => sync.pull(user, deviceId, checkpoint, limit),
-      newOrganisation: async (n) => {
-        const orgs = t.dataSource.getRepository(Organisation);
-        const org = await orgs.save(orgs.create({ name: `Convergence ${n}`, address: null, phone: null, email: null }));
-        const users: AuthUser[] = [];
-        for (const [i, role] of (['admin', 'office', 'office'] as const).entries()) {
-          const repo = t.dataSource.getRepository(User);
-          const u = await repo.save(repo.create({ organisationId: org.id, email: `c${n}-${i}-${uuidv7()}@convergence.example`, name: `User ${i}`, role, passwordHash: 'x', active: true, lastSignInAt: null }));
-          users.push({ id: u.id, organisationId: org.id, role, email: u.email, name: u.name });
-        }
-        return users;
-      },
+      newOrganisation: (n) => organisationOfThree(t.dataSource, `Convergence ${n}`),
     };
   });
   afterAll(() => t.close());

@@ -7,10 +7,8 @@ import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../../src/common/decorators/current-user.decorator.js';
 import { ALL_ENTITIES } from '../../src/database/entities.js';
 import { databaseOptions } from '../../src/database/typeorm-options.js';
-import { Organisation } from '../../src/organisations/entities/organisation.entity.js';
-import { User } from '../../src/users/entities/user.entity.js';
 import { ApiProcess, type Answer } from '../api-process.js';
-import { convergenceProperty, type SyncPort } from '../convergence-model.js';
+import { convergenceProperty, organisationOfThree, type SyncPort } from '../convergence-model.js';
 
 /**
  * Two API processes on one PostgreSQL database, as behind a load balancer: every request goes to the next
@@ -56,17 +54,7 @@ describe('two API processes on one PostgreSQL database', () => {
   const port: SyncPort = {
     push: async (user, deviceId, mutations) => (await send(user, 'POST', '/api/sync/push', { deviceId, mutations })).body as { results: MutationResult[] },
     pull: async (user, deviceId, checkpoint, limit) => (await send(user, 'GET', `/api/sync/pull?checkpoint=${checkpoint}&limit=${limit}&deviceId=${deviceId}`)).body as PullResponse,
-    newOrganisation: async (n) => {
-      const orgs = db.getRepository(Organisation);
-      const org = await orgs.save(orgs.create({ name: `Two instances ${n}`, address: null, phone: null, email: null }));
-      const users: AuthUser[] = [];
-      for (const [i, role] of (['admin', 'office', 'office'] as const).entries()) {
-        const repo = db.getRepository(User);
-        const u = await repo.save(repo.create({ organisationId: org.id, email: `t${n}-${i}-${uuidv7()}@two-instances.example`, name: `User ${i}`, role, passwordHash: 'x', active: true, lastSignInAt: null }));
-        users.push({ id: u.id, organisationId: org.id, role, email: u.email, name: u.name });
-      }
-      return users;
-    },
+    newOrganisation: (n) => organisationOfThree(db, `Two instances ${n}`),
   };
 
   it(`converges with nothing typed lost, devices syncing at once through both (${RUNS} cases)`, async () => {
