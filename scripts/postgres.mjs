@@ -1,7 +1,6 @@
 #!/usr/bin/env node
 // A throwaway PostgreSQL server from Debian's package, for running the API on PostgreSQL in tests and benchmarks.
 //   node scripts/postgres.mjs run -- <command…>   start one, run the command with DB_TYPE and DATABASE_URL set, stop it
-//   node scripts/postgres.mjs check               exit 0 when a server can be started on this machine
 import { spawn, spawnSync } from 'node:child_process';
 import { chmodSync, existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
@@ -73,9 +72,8 @@ export function canStartPostgres() {
 
 async function main() {
   const [verb, ...rest] = process.argv.slice(2);
-  if (verb === 'check') process.exit(canStartPostgres() ? 0 : 1);
   if (verb !== 'run' || rest[0] !== '--' || rest.length < 2) {
-    console.error('usage: node scripts/postgres.mjs run -- <command…> | check');
+    console.error('usage: node scripts/postgres.mjs run -- <command…>');
     process.exit(2);
   }
   const server = await startPostgres();

@@ -1,13 +1,14 @@
 import Database from 'better-sqlite3';
 import { basename, join } from 'node:path';
 import pg from 'pg';
+import { databaseType } from '../src/config/database.config.js';
 
 /**
  * The API's tests run on SQLite, or on PostgreSQL when DB_TYPE=postgres and DATABASE_URL name a server
  * (`npm run test:postgres` starts one). Each test app, and each API process, gets a database of its own,
  * named after its throwaway directory, so an app started again on the same directory finds the same data.
  */
-export const onPostgres = process.env.DB_TYPE === 'postgres';
+export const onPostgres = databaseType() === 'postgres';
 
 /** The server the run was given, read once: test apps then point DATABASE_URL at their own database. */
 const SERVER_URL = process.env.DATABASE_URL ?? '';
