@@ -2,8 +2,7 @@
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { assessCircuitTest, VERDICT_DISCLAIMER } from '@wiretrail/core';
 import { afterEach, describe, expect, it } from 'vitest';
-import { overallResult } from '../overall-result';
-import { VerdictChip } from '../components/verdict-chip';
+import { VerdictChip } from './verdict-chip';
 
 afterEach(cleanup);
 
@@ -13,23 +12,27 @@ const ring = assessCircuitTest({
   circuit: { kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 },
   readings: { zsOhm: 1.25 },
 });
+const zs = ring.lines.find((l) => l.key === 'zs')!;
 
 describe('a verdict chip', () => {
   it('opens to the reading, the limit, its source and the disclaimer', () => {
-    const zs = ring.lines.find((l) => l.key === 'zs')!;
-    render(<VerdictChip title="Circuit 1: Zs" result={zs.result} />);
-    fireEvent.click(screen.getByRole('button', { name: 'Circuit 1: Zs: Fail. Show the limit and its source' }));
+    render(<VerdictChip what="Circuit 1: Zs" result={zs.result} />);
+    fireEvent.click(screen.getByRole('button', { name: 'Circuit 1: Zs: Fail · limit 1.10 Ω. Show how it was judged' }));
     const dialog = screen.getByRole('dialog', { name: 'Circuit 1: Zs: Fail' });
-    expect(dialog.textContent).toContain('Measured1.25 Ω');
-    expect(dialog.textContent).toContain('Limit1.1 Ω');
+    expect(dialog.textContent).toContain('Reading1.25 Ω');
+    expect(dialog.textContent).toContain('Limit1.10 Ω');
     expect(dialog.textContent).toMatch(/SourceBS 7671:2018\+A2:2022 Table 41\.3/);
     expect(dialog.textContent).toContain(VERDICT_DISCLAIMER);
   });
 
-  it('sums up a circuit: what fails and what is still to record', () => {
-    const overall = overallResult(ring);
-    expect(overall.verdict).toBe('fail');
-    expect(overall.note).toMatch(/^Failing: Earth fault loop impedance Zs\. Still to record: /);
-    expect(overall.note).toContain('Insulation resistance, live to earth');
+  it('leaves the limit to the dialog where the reading stands beside it, and says what a row sums up', () => {
+    render(<VerdictChip what="Circuit 1: Zs" result={zs.result} size="small" against="none" prefix="Overall" />);
+    expect(screen.getByRole('button', { name: 'Circuit 1: Zs: Fail. Show how it was judged' }).textContent).toBe('Overall: Fail');
+  });
+
+  it('only says a verdict that has nothing to open', () => {
+    render(<VerdictChip verdict="check" prefix="Tests" />);
+    expect(screen.getByText('Tests: Check')).toBeTruthy();
+    expect(screen.queryByRole('button')).toBeNull();
   });
 });

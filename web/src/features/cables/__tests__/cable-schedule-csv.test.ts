@@ -2,7 +2,7 @@ import { assessCableRun, T568A, T568B } from '@wiretrail/core';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
 import type { CableRun } from '../api/get-cable-runs';
-import { CSV_COLUMNS, cableScheduleCsv, cableScheduleFileName } from '../cable-schedule-csv';
+import { CSV_COLUMNS, cableScheduleCsv, cableScheduleFileName } from '../desk/cable-schedule-csv';
 
 /** A run as the server answers it, with its assessment made by the same core function the server uses. */
 function run(label: string, fields: Partial<CableRun>): CableRun {

@@ -5,7 +5,7 @@ import { assessCableRun } from '@wiretrail/core';
 import { describe, expect, it, vi } from 'vitest';
 import { officeApiForEachTest, sentBy } from '@/testing/office-api';
 import type { CableRun } from '../api/get-cable-runs';
-import { CorrectCableRunDialog } from '../components/correct-cable-run-dialog';
+import { CorrectCableRunDialog } from '../desk/correct-cable-run-dialog';
 
 const run = {
   id: '01900000-0000-7000-8000-0000000000c1', version: 4, siteId: 's1', label: 'RC-02', medium: 'Cat6', endAAreaId: 'a1', endADescription: 'Patch panel port 2',

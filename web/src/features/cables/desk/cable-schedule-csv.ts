@@ -1,6 +1,8 @@
 import Papa from 'papaparse';
-import type { CableRun } from './api/get-cable-runs';
-import { cableStatusWords, VERDICT_WORDS, wiremapWords } from './cable-words';
+import { VERDICT_WORDS } from '@/components/verdicts/verdict-words';
+import type { CableRun } from '../api/get-cable-runs';
+import { cableStatusWords } from '../cable-words';
+import { wiremapWords } from './cable-schedule-words';
 
 /** The columns of the exported schedule, in order. */
 export const CSV_COLUMNS = [
@@ -13,7 +15,7 @@ const LINK_WORDS: Record<string, string> = { 'permanent-link': 'Permanent link',
 function lengthCheck(run: CableRun): string {
   const l = run.assessment.length;
   if (!l) return run.assessment.notes[0] ?? '';
-  return `${VERDICT_WORDS[l.verdict] ?? l.verdict}: limit ${l.limit} ${l.unit} (${l.source})`;
+  return `${VERDICT_WORDS[l.verdict]}: limit ${l.limit} ${l.unit} (${l.source})`;
 }
 
 /**
@@ -36,7 +38,7 @@ export function cableScheduleCsv(runs: readonly CableRun[]): string {
     r.linkKind ? (LINK_WORDS[r.linkKind] ?? r.linkKind) : '',
     wiremapWords(r),
     lengthCheck(r),
-    VERDICT_WORDS[r.assessment.verdict] ?? r.assessment.verdict,
+    VERDICT_WORDS[r.assessment.verdict],
     cableStatusWords(r.status),
     r.testedAt ?? '',
   ]);

@@ -1,23 +1,6 @@
-import type { WiremapFault } from '@wiretrail/core';
-import type { CableRun } from './api/get-cable-runs';
-
-const FAULT_WORDS: Record<WiremapFault['kind'], string> = {
-  open: 'Open',
-  short: 'Short',
-  reversed: 'Reversed pair',
-  crossed: 'Crossed pairs',
-  split: 'Split pair',
-  miswired: 'Miswired',
-};
-
-const STATUS_WORDS: Record<string, string> = { unidentified: 'Not identified yet', traced: 'Traced', terminated: 'Terminated', tested: 'Tested' };
-
-/** "Crossed pairs, pins 1, 2, 3, 6 (near end)". */
-export function faultWords(f: WiremapFault): string {
-  return `${FAULT_WORDS[f.kind] ?? f.kind}, pin${f.pins.length === 1 ? '' : 's'} ${f.pins.join(', ')}${f.end ? ` (${f.end} end)` : ''}`;
-}
-
-export const cableStatusWords = (status: string | null) => (status ? (STATUS_WORDS[status] ?? status) : '—');
+import { VERDICT_WORDS } from '@/components/verdicts/verdict-words';
+import type { CableRun } from '../api/get-cable-runs';
+import { faultWords } from '../cable-words';
 
 /** One end of a run: its area, where on it, and what it ends in. */
 export function endWords(area: string | null, description: string | null, termination: string | null): string {
@@ -27,13 +10,11 @@ export function endWords(area: string | null, description: string | null, termin
 /** What the wiremap says, in one line: its verdict and every fault named, or why there is none. */
 export function wiremapWords(run: Pick<CableRun, 'medium' | 'assessment'>): string {
   const w = run.assessment.wiremap;
-  if (w) return w.faults.length ? w.faults.map(faultWords).join('; ') : w.verdict === 'pass' ? 'Pass' : 'To check';
+  if (w) return w.faults.length ? w.faults.map(faultWords).join('; ') : VERDICT_WORDS[w.verdict];
   if (run.assessment.problems.length) return `Cannot read it: ${run.assessment.problems.join('; ')}`;
   if (!['Cat5e', 'Cat6', 'Cat6A'].includes(run.medium ?? '')) return 'No wiremap for this medium';
   return 'No wiremap recorded';
 }
-
-export const VERDICT_WORDS: Record<string, string> = { pass: 'Pass', fail: 'Fail', check: 'Check' };
 
 /** When a run was last tested, as the schedule shows it: "2 Dec 2026" and "14:10". */
 export const testedDay = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });

@@ -3,7 +3,6 @@ import EditOutlined from '@mui/icons-material/EditOutlined';
 import SettingsEthernetOutlined from '@mui/icons-material/SettingsEthernetOutlined';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
-import Chip from '@mui/material/Chip';
 import FormControlLabel from '@mui/material/FormControlLabel';
 import IconButton from '@mui/material/IconButton';
 import Stack from '@mui/material/Stack';
@@ -15,12 +14,12 @@ import { DEFAULT_RULE_SET, VERDICT_DISCLAIMER } from '@wiretrail/core';
 import { useState } from 'react';
 import { EmptyState } from '@/components/empty-state';
 import { RecordGrid } from '@/components/record-grid';
+import { VerdictChip } from '@/components/verdicts/verdict-chip';
 import { type CableRun, useCableSchedule } from '../api/get-cable-runs';
-import { cableScheduleCsv, cableScheduleFileName, downloadCsv } from '../cable-schedule-csv';
-import { cableStatusWords, endWords, testedDay, testedTime, VERDICT_WORDS, wiremapWords } from '../cable-words';
+import { cableScheduleCsv, cableScheduleFileName, downloadCsv } from './cable-schedule-csv';
+import { cableStatusWords } from '../cable-words';
+import { endWords, testedDay, testedTime, wiremapWords } from './cable-schedule-words';
 import { CorrectCableRunDialog } from './correct-cable-run-dialog';
-
-const VERDICT_COLOUR = { pass: 'success', fail: 'error', check: 'warning' } as const;
 
 function Verdict({ run }: { run: CableRun }) {
   const a = run.assessment;
@@ -28,7 +27,7 @@ function Verdict({ run }: { run: CableRun }) {
   return (
     <Tooltip title={why || 'Wiremap and length within the limits.'}>
       <Stack spacing={0.25} sx={{ alignItems: 'flex-start' }}>
-        <Chip size="small" variant="outlined" color={VERDICT_COLOUR[a.verdict]} label={VERDICT_WORDS[a.verdict]} />
+        <VerdictChip verdict={a.verdict} />
         {a.length?.verdict === 'fail' && (
           <Typography variant="caption" color="error">
             over {a.length.limit} {a.length.unit}

@@ -1,7 +1,6 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import QrCode2Outlined from '@mui/icons-material/QrCode2Outlined';
 import Button from '@mui/material/Button';
-import Chip from '@mui/material/Chip';
 import List from '@mui/material/List';
 import ListItemButton from '@mui/material/ListItemButton';
 import ListItemText from '@mui/material/ListItemText';
@@ -10,14 +9,12 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { assessCableRun, type Verdict } from '@wiretrail/core';
 import { Link as RouterLink } from 'react-router-dom';
-import { AidLine, VERDICT_WORDS } from '@/components/verdicts/verdict-chip';
+import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import { paths } from '@/config/paths';
 import type { CableRunRow } from '@/lib/db';
-import { useSiteCables } from '../api/get-site-cables';
+import { useSiteCables } from '../data/get-site-cables';
 import { CABLE_STATUS_WORDS, MEDIUM_WORDS } from '../cable-words';
 import { readWiremap } from './wiremap-entry';
-
-const CHIP = { pass: 'success', fail: 'error', check: 'default' } as const;
 
 export function endWords(cable: CableRunRow, e: 'A' | 'B', areaNames: Map<string, string>): string {
   const area = cable[`end${e}AreaId`] as string | null | undefined;
@@ -63,7 +60,7 @@ export function CableList({ siteId, visitId, locked }: { siteId: string; visitId
                     primary={`${c.label}${c.medium ? ` · ${MEDIUM_WORDS[c.medium] ?? c.medium}` : ''}`}
                     secondary={`A: ${endWords(c, 'A', data.areaNames)} → B: ${endWords(c, 'B', data.areaNames)} · ${CABLE_STATUS_WORDS[c.status ?? 'unidentified']}`}
                   />
-                  {verdict && <Chip size="small" color={CHIP[verdict]} label={VERDICT_WORDS[verdict]} sx={{ mt: 0.5 }} />}
+                  {verdict && <VerdictChip verdict={verdict} />}
                 </ListItemButton>
               );
             })}

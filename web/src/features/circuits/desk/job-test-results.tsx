@@ -8,7 +8,7 @@ import { EmptyState } from '@/components/empty-state';
 import { RecordGrid } from '@/components/record-grid';
 import { type TestResult, useJobTestResults } from '../api/get-test-results';
 import { overallResult } from '../overall-result';
-import { VERDICT_WORDS, VerdictChip } from './verdict-chip';
+import { VerdictChip } from '@/components/verdicts/verdict-chip';
 
 /** The readings a line shows beside its verdict, with their units. */
 const UNITS: Partial<Record<keyof CircuitReadings, string>> = {
@@ -49,7 +49,7 @@ function Lines({ result, keys }: { result: TestResult; keys: string[] }) {
           <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
             {readingsOf(l, result)}
           </Typography>
-          <VerdictChip title={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} />
+          <VerdictChip what={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} size="small" against="none" />
         </Stack>
       ))}
     </Stack>
@@ -82,7 +82,7 @@ export function JobTestResults({ jobId }: { jobId: string }) {
           <Typography variant="body2" color="text.secondary">
             {[row.testedAt ? new Date(row.testedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' }) : null, row.instrument].filter(Boolean).join(' · ') || 'Time not recorded'}
           </Typography>
-          <VerdictChip title={`${row.circuit?.label ?? 'Circuit'}: all tests`} result={overallResult(row.assessment)} label={`Overall: ${VERDICT_WORDS[row.assessment.verdict]}`} />
+          <VerdictChip what={`${row.circuit?.label ?? 'Circuit'}: all tests`} result={overallResult(row.assessment)} size="small" prefix="Overall" />
         </Stack>
       ),
     },

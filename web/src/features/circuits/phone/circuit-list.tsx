@@ -8,16 +8,14 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { Link as RouterLink } from 'react-router-dom';
-import { VERDICT_WORDS } from '@/components/verdicts/verdict-chip';
+import { VerdictChip } from '@/components/verdicts/verdict-chip';
 import { paths } from '@/config/paths';
 import type { CircuitRow } from '@/lib/db';
 import { usePendingIds } from '@/lib/sync/use-pending-ids';
-import { type CircuitTests, useCircuitTests } from '../api/get-circuit-tests';
+import { type CircuitTests, useCircuitTests } from '../data/get-circuit-tests';
 import { assess, fromStored } from '../circuit-readings';
 import { AddCircuitForm } from './add-circuit-form';
 import { KIND_WORDS } from './circuit-fields';
-
-const CHIP = { pass: 'success', fail: 'error', check: 'warning' } as const;
 
 function CircuitItem({ circuit, data, visitId, waiting }: { circuit: CircuitRow; data: CircuitTests; visitId: string; waiting: boolean }) {
   const result = data.results.get(circuit.id);
@@ -33,7 +31,7 @@ function CircuitItem({ circuit, data, visitId, waiting }: { circuit: CircuitRow;
           .join(' · ')}
       />
       {verdict ? (
-        <Chip size="small" color={CHIP[verdict]} label={`Tests: ${VERDICT_WORDS[verdict].toLowerCase()}`} />
+        <VerdictChip verdict={verdict} prefix="Tests" />
       ) : altered ? (
         <Chip size="small" color="warning" variant="outlined" label="Not tested" />
       ) : null}

@@ -5,7 +5,7 @@ import { useMemo, useState } from 'react';
 import { usePhotos } from '../api/get-photos';
 import { tagList, trailTime } from '../trail-time';
 import { PhotoViewer } from './photo-viewer';
-import { ServerPhotoImage } from './server-photo-image';
+import { ServerPhotoImage } from '../components/server-photo-image';
 
 /** Shown small, the rest are a tap away in the viewer. */
 const SHOWN = 3;

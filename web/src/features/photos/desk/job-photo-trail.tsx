@@ -14,7 +14,7 @@ import { type ServerPhoto, usePhotos } from '../api/get-photos';
 import { useOfficeTags } from '../api/get-photo-tags';
 import { dayAndTime, tagList, trailTime } from '../trail-time';
 import { PhotoViewer, type ViewerPhoto } from './photo-viewer';
-import { ServerPhotoImage } from './server-photo-image';
+import { ServerPhotoImage } from '../components/server-photo-image';
 
 /** Enough for a morning's work on one screen; the grid fetches thumbnails only as they scroll into view. */
 const PAGE_SIZE = 60;

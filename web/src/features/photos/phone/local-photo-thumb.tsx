@@ -4,7 +4,7 @@ import type { SxProps, Theme } from '@mui/material/styles';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { db, type PhotoRow } from '@/lib/db';
 import { useObjectUrl } from '@/lib/use-object-url';
-import { ServerPhotoImage } from './server-photo-image';
+import { ServerPhotoImage } from '../components/server-photo-image';
 
 /**
  * A photo's thumbnail on the phone: the one made when it was taken, or the server's when this phone never had

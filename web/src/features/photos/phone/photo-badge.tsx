@@ -1,7 +1,7 @@
 import Chip, { type ChipProps } from '@mui/material/Chip';
 import type { PhotoRow } from '@/lib/db';
 import type { UploadProgress } from '@/lib/photos/upload-progress';
-import type { PhotoStates } from '../api/get-photo-states';
+import type { PhotoStates } from '../data/get-photo-states';
 
 export interface BadgeLook {
   label: string;

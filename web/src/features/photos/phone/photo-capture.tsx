@@ -16,8 +16,8 @@ import { type ChangeEvent, type CSSProperties, type FormEvent, useEffect, useMem
 import { addPhoto, type PhotoSubjectType } from '@/lib/photos/add-photo';
 import { shrinkPhoto } from '@/lib/photos/shrink-photo';
 import { LocalWriteError } from '@/lib/sync/local-write';
-import { useCaptureChoices } from '../api/get-capture-choices';
-import { usePhoneTags } from '../api/get-phone-photo-tags';
+import { useCaptureChoices } from '../data/get-capture-choices';
+import { usePhoneTags } from '../data/get-phone-photo-tags';
 
 /** Keeps the real file input reachable by its label (and by assistive technology) while the big button shows. */
 const hiddenInput: CSSProperties = {

@@ -11,7 +11,7 @@ import { useState } from 'react';
 import { db } from '@/lib/db';
 import { DEFAULT_KEEP_ORIGINALS_DAYS, setKeepOriginalsDays } from '@/lib/photos/free-originals';
 import { useUploadProgress } from '@/lib/photos/upload-progress';
-import { usePhotoStorageSummary } from '../api/get-photo-states';
+import { usePhotoStorageSummary } from '../data/get-photo-states';
 import { megabytes } from '../trail-time';
 
 const KEEP_CHOICES = [

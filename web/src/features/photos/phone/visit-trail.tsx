@@ -14,10 +14,11 @@ import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
 import { useState } from 'react';
 import { AidLine } from '@/components/verdicts/verdict-chip';
+import { verdictWords } from '@/components/verdicts/verdict-words';
 import type { VisitRow } from '@/lib/db';
 import { type UploadProgress, useUploadProgress } from '@/lib/photos/upload-progress';
-import { type PhotoStates, usePhotoStates } from '../api/get-photo-states';
-import { type TrailItem, type VisitEvent, useVisitTrail } from '../api/get-visit-trail';
+import { type PhotoStates, usePhotoStates } from '../data/get-photo-states';
+import { type TrailItem, type VisitEvent, useVisitTrail } from '../data/get-visit-trail';
 import { tagList, trailTime } from '../trail-time';
 import { LocalPhotoThumb } from './local-photo-thumb';
 import { PhotoBadge, photoBadge } from './photo-badge';
@@ -28,7 +29,6 @@ const PAGE = 20;
 
 const POINT_ACTION_WORDS: Record<string, string> = { add: 'New point', move: 'Point moved', remove: 'Point removed', replace: 'Point replaced' };
 const EVENT_WORDS: Record<VisitEvent, string> = { arrived: 'Arrived on site', 'cautions-read': 'Safety cautions read', 'signed-off': 'Signed off and finished' };
-const VERDICT_WORDS: Record<string, string> = { pass: 'passes', fail: 'fails', check: 'to check' };
 const READINGS_WORDS: Record<string, string> = { pass: 'All readings pass', fail: 'A reading fails', check: 'Readings to look at' };
 const readingsWords = (v: unknown): string => {
   const overall = (v as { verdict?: unknown } | null)?.verdict;
@@ -89,12 +89,12 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
       return <Row tile={<IconTile><StickyNote2Outlined /></IconTile>} title={`Note · ${when}`} lines={[item.note.text.trim()]} wrap />;
     case 'cableRun': {
       const c = item.cable;
-      const verdict = c.verdict ? (VERDICT_WORDS[c.verdict] ?? null) : null;
+      const verdict = verdictWords(c.verdict);
       return (
         <Row
           tile={<IconTile><CableOutlined /></IconTile>}
           title={`Cable ${c.label} · ${when}`}
-          lines={[[c.medium, c.scheme, c.lengthM != null ? `${c.lengthM} m` : null, verdict ? `test ${verdict}` : null].filter(Boolean).join(' · ')]}
+          lines={[[c.medium, c.scheme, c.lengthM != null ? `${c.lengthM} m` : null, verdict ? `test: ${verdict}` : null].filter(Boolean).join(' · ')]}
         />
       );
     }

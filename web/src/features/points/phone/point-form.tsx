@@ -18,7 +18,7 @@ import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import type { AreaRow, CircuitRow, PointChangeRow } from '@/lib/db';
 import { readingField, readingText, usableReading } from '@/lib/readings';
 import { createRecord, type Fields, saveRecord } from '@/lib/sync/local-write';
-import type { RingBaseline } from '../api/get-visit-points';
+import type { RingBaseline } from '../data/get-visit-points';
 import { ACCESSORIES, ACTION_WORDS, CONNECTION_WORDS, hasFrom, hasTo, needsFuse } from '../point-words';
 import { type ConcealedRoute, newRoute, readRoute, WallDiagram } from './wall-diagram';
 

@@ -9,7 +9,7 @@ import Typography from '@mui/material/Typography';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { PointChangeRow } from '@/lib/db';
-import { useVisitPoints } from '../api/get-visit-points';
+import { useVisitPoints } from '../data/get-visit-points';
 import { ACTION_WORDS, CONNECTION_WORDS } from '../point-words';
 
 export function placeWords(p: PointChangeRow, side: 'from' | 'to', areaNames: Map<string, string>): string {

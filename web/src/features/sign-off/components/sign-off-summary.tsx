@@ -9,7 +9,7 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { AidLine } from '@/components/verdicts/verdict-chip';
-import type { SignOffSummary } from '../api/get-sign-off';
+import type { SignOffSummary } from '../data/get-sign-off';
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 

@@ -13,9 +13,8 @@ import Typography from '@mui/material/Typography';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useJobVisits } from '../api/get-job-visits';
-import { visitWhen } from './job-when';
+import { visitStatusWords, visitWhen } from '../visit-format';
 
-const VISIT_STATUS_WORDS: Record<string, string> = { planned: 'Planned', 'on-site': 'On site', finished: 'Finished', cancelled: 'Cancelled' };
 const time = (iso: string | null | undefined) => (iso ? new Date(iso).toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit' }) : null);
 
 /** The job's visits in time order: when, who, how far each got, and who signed it off. */
@@ -53,7 +52,7 @@ export function JobVisits({ jobId, personName }: { jobId: string; personName: (i
                 </TableCell>
                 <TableCell>{v.technicianIds?.length ? v.technicianIds.map(personName).join(', ') : 'Nobody yet'}</TableCell>
                 <TableCell>
-                  <Chip size="small" variant="outlined" label={v.status ? (VISIT_STATUS_WORDS[v.status] ?? v.status) : 'Planned'} />
+                  <Chip size="small" variant="outlined" label={visitStatusWords(v.status)} />
                 </TableCell>
                 <TableCell>{v.actualStart ? `${time(v.actualStart)}${v.actualEnd ? `–${time(v.actualEnd)}` : ''}` : '—'}</TableCell>
                 <TableCell>{v.signedAt ? `${v.signedByName ?? 'Signed'}, ${visitWhen(v.signedAt)}` : '—'}</TableCell>

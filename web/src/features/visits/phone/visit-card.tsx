@@ -13,7 +13,7 @@ import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { SiteRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
-import type { VisitSummary } from '../api/get-upcoming-visits';
+import type { VisitSummary } from '../data/get-upcoming-visits';
 import { dayLabel, timeWindow, visitStatusWords } from '../visit-format';
 
 export function siteAddress(s: VisitSummary): string {

@@ -8,10 +8,10 @@ import { useState } from 'react';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
 import { paths } from '@/config/paths';
-import { useCircuitTests } from '@/features/circuit-tests/api/get-circuit-tests';
-import { CircuitDetailsForm } from '@/features/circuit-tests/components/circuit-details-form';
-import { ReadingsForm } from '@/features/circuit-tests/components/readings-form';
-import { CautionGate } from '@/features/visits/components/caution-gate';
+import { useCircuitTests } from '@/features/circuits/data/get-circuit-tests';
+import { CircuitDetailsForm } from '@/features/circuits/phone/circuit-details-form';
+import { ReadingsForm } from '@/features/circuits/phone/readings-form';
+import { CautionGate } from '@/features/visits/phone/caution-gate';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {

@@ -1,5 +1,5 @@
-import { CircuitList } from '@/features/circuit-tests/components/circuit-list';
-import { CautionGate } from '@/features/visits/components/caution-gate';
+import { CircuitList } from '@/features/circuits/phone/circuit-list';
+import { CautionGate } from '@/features/visits/phone/caution-gate';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {

@@ -8,10 +8,10 @@ import { useLiveQuery } from 'dexie-react-hooks';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
 import { paths } from '@/config/paths';
-import { PhotoCapture } from '@/features/photos/components/photo-capture';
-import { useVisitPoints } from '@/features/points/api/get-visit-points';
-import { PointForm } from '@/features/points/components/point-form';
-import { CautionGate } from '@/features/visits/components/caution-gate';
+import { PhotoCapture } from '@/features/photos/phone/photo-capture';
+import { useVisitPoints } from '@/features/points/data/get-visit-points';
+import { PointForm } from '@/features/points/phone/point-form';
+import { CautionGate } from '@/features/visits/phone/caution-gate';
 import { db } from '@/lib/db';
 import { useVisitContext } from '../visit-context';
 
