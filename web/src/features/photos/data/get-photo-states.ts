@@ -1,5 +1,6 @@
 import { useLiveQuery } from 'dexie-react-hooks';
 import { db, type PhotoBlobState } from '@/lib/db';
+import { setKeepOriginalsDays } from '@/lib/photos/free-originals';
 
 export interface PhotoStates {
   /** Where each photo's bytes stand on this phone, by sha256. */
@@ -77,3 +78,6 @@ export async function getPhotoStorageSummary(userId: string): Promise<PhotoStora
 export function usePhotoStorageSummary(userId: string): PhotoStorageSummary | undefined {
   return useLiveQuery(() => getPhotoStorageSummary(userId), [userId]);
 }
+
+/** Keeps full-size photos that long after the office has them; answers how many were freed now. */
+export const keepOriginalsFor = (days: number): Promise<number> => setKeepOriginalsDays(db, days);

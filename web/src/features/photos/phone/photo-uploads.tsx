@@ -8,10 +8,9 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { useState } from 'react';
-import { db } from '@/lib/db';
-import { DEFAULT_KEEP_ORIGINALS_DAYS, setKeepOriginalsDays } from '@/lib/photos/free-originals';
+import { DEFAULT_KEEP_ORIGINALS_DAYS } from '@/lib/photos/free-originals';
 import { useUploadProgress } from '@/lib/photos/upload-progress';
-import { usePhotoStorageSummary } from '../data/get-photo-states';
+import { keepOriginalsFor, usePhotoStorageSummary } from '../data/get-photo-states';
 import { megabytes } from '../trail-time';
 
 const KEEP_CHOICES = [
@@ -88,7 +87,7 @@ export function PhotoUploads({ userId }: { userId: string }) {
             label="Keep full-size photos after they reach the office for"
             value={keep}
             onChange={async (e) => {
-              const n = await setKeepOriginalsDays(db, Number(e.target.value));
+              const n = await keepOriginalsFor(Number(e.target.value));
               setFreed(n > 0 ? `${photos(n)} freed.` : null);
             }}
             slotProps={{ select: { native: true } }}

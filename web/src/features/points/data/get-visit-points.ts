@@ -50,3 +50,8 @@ export async function getVisitPoints(visitId: string, siteId: string): Promise<V
 export function useVisitPoints(visitId: string, siteId: string): VisitPoints | undefined {
   return useLiveQuery(() => getVisitPoints(visitId, siteId), [visitId, siteId]);
 }
+
+/** undefined while reading, null for a new point or one not on this phone. */
+export function usePointChange(pointId: string | null): PointChangeRow | null | undefined {
+  return useLiveQuery(async () => (pointId ? ((await db.pointChange.get(pointId)) ?? null) : null), [pointId]);
+}
