@@ -18,7 +18,7 @@ const type = (el: HTMLElement, label: string, value: string) => fireEvent.change
 
 describe('readings for a circuit', () => {
   it('refuses readings outside physical sense with a plain message', async () => {
-    show(paths.visitCircuitTest.href(ids.visit, ids.circuit));
+    show(paths.visitCircuit.href(ids.visit, ids.circuit));
     const f = await form();
     type(f, 'Measured Zs (Ω)', '-1');
     expect(await within(f).findByText('Zs cannot be negative.')).toBeTruthy();
@@ -32,7 +32,7 @@ describe('readings for a circuit', () => {
   });
 
   it('shows each verdict with its limit as it is typed, and keeps the readings with what the phone judged', async () => {
-    show(paths.visitCircuitTest.href(ids.visit, ids.circuit));
+    show(paths.visitCircuit.href(ids.visit, ids.circuit));
     const f = await form();
     type(f, 'r1 (Ω)', '0.37');
     type(f, 'rn (Ω)', '0.37');
@@ -67,7 +67,7 @@ describe('readings for a circuit', () => {
   });
 
   it('lists what is still missing for the certificate', async () => {
-    show(paths.visitCircuitTest.href(ids.visit, ids.circuit));
+    show(paths.visitCircuit.href(ids.visit, ids.circuit));
     const f = await form();
     type(f, 'Measured Zs (Ω)', '0.5');
     const summary = within(f).getByRole('status', { name: 'Circuit summary' });

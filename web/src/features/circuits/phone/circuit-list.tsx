@@ -23,7 +23,7 @@ function CircuitItem({ circuit, data, visitId, waiting }: { circuit: CircuitRow;
   const verdict = result ? assess(circuit, fromStored(result), data.site?.earthing).verdict : null;
   const device = circuit.deviceType && circuit.deviceRatingA ? `${circuit.deviceType}${circuit.deviceRatingA}` : null;
   return (
-    <ListItemButton divider component={RouterLink} to={paths.visitCircuitTest.href(visitId, circuit.id)} sx={{ gap: 1 }}>
+    <ListItemButton divider component={RouterLink} to={paths.visitCircuit.href(visitId, circuit.id)} sx={{ gap: 1 }}>
       <ListItemText
         primary={`${circuit.number} · ${circuit.description || 'No description'}`}
         secondary={[circuit.kind ? KIND_WORDS[circuit.kind] : null, device, circuit.rcdRatingMa ? `${circuit.rcdRatingMa} mA RCD` : null, altered ? 'altered on this visit' : null, waiting ? 'waiting to send' : null]

@@ -7,7 +7,7 @@ const SECTIONS = [
   { key: 'trail', label: 'Trail', href: paths.visit.href },
   { key: 'cables', label: 'Cables', href: paths.visitCables.href },
   { key: 'points', label: 'Points', href: paths.visitPoints.href },
-  { key: 'tests', label: 'Circuits & tests', href: paths.visitTests.href },
+  { key: 'tests', label: 'Circuits & tests', href: paths.visitCircuits.href },
   { key: 'sign-off', label: 'Sign-off', href: paths.visitSignOff.href },
 ] as const;
 

@@ -22,7 +22,7 @@ export function Component() {
   const [saved, setSaved] = useState(false);
   if (!data) return null;
   const circuit = [...data.boards.flatMap((b) => b.circuits), ...data.loose].find((c) => c.id === circuitId);
-  const back = paths.visitTests.href(visit.id);
+  const back = paths.visitCircuits.href(visit.id);
   return (
     <CautionGate visit={visit} locked={locked}>
       <Button component={RouterLink} to={back} startIcon={<ArrowBack />} sx={{ ml: -1.5, mb: 1 }}>
