@@ -45,6 +45,8 @@ interface JudgedProps {
   against?: 'limit' | 'expected' | 'within' | 'none';
   /** Said before the verdict on the chip itself, where a row holds several: "Overall". */
   prefix?: string;
+  /** Without its icon, where a table holds a chip per reading and the columns are narrow. */
+  plain?: boolean;
 }
 
 interface SummaryProps {
@@ -74,7 +76,7 @@ export function VerdictChip(props: JudgedProps | SummaryProps) {
   return <JudgedChip {...props} />;
 }
 
-function JudgedChip({ what, result, size = 'medium', against = 'limit', prefix }: JudgedProps) {
+function JudgedChip({ what, result, size = 'medium', against = 'limit', prefix, plain = false }: JudgedProps) {
   const [open, setOpen] = useState(false);
   const words = VERDICT_WORDS[result.verdict];
   const said = { limit: 'limit ', expected: 'expect about ', within: 'within ±', none: '' }[against];
@@ -82,7 +84,7 @@ function JudgedChip({ what, result, size = 'medium', against = 'limit', prefix }
   return (
     <>
       <Chip
-        icon={ICONS[result.verdict]}
+        icon={plain ? undefined : ICONS[result.verdict]}
         label={`${prefix ? `${prefix}: ` : ''}${words}${limit}`}
         color={VERDICT_COLOURS[result.verdict]}
         variant={result.verdict === 'check' ? 'outlined' : 'filled'}

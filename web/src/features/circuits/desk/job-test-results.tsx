@@ -49,7 +49,7 @@ function Lines({ result, keys }: { result: TestResult; keys: string[] }) {
           <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
             {readingsOf(l, result)}
           </Typography>
-          <VerdictChip what={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} size="small" against="none" />
+          <VerdictChip what={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} size="small" against="none" plain />
         </Stack>
       ))}
     </Stack>
@@ -86,11 +86,11 @@ export function JobTestResults({ jobId }: { jobId: string }) {
         </Stack>
       ),
     },
-    group('Ring', ['ring-r1-rn', 'ring-r2'], 165),
-    group('R1+R2', ['r1r2'], 112),
-    group('Insulation', ['ir-live-live', 'ir-live-earth'], 162),
-    group('Polarity', ['polarity'], 122),
-    group('Zs', ['zs'], 112),
+    group('Ring', ['ring-r1-rn', 'ring-r2'], 190),
+    group('R1+R2', ['r1r2'], 120),
+    group('Insulation', ['ir-live-live', 'ir-live-earth'], 175),
+    group('Polarity', ['polarity'], 130),
+    group('Zs', ['zs'], 120),
     group('RCD', ['rcd-1x', 'rcd-5x', 'rcd-button'], 168),
   ];
   if (results.isError) return <Alert severity="error">{results.error.message}</Alert>;
