@@ -1,4 +1,4 @@
-import { formatHlc, localDate, type Mutation, type OfficePaymentMethod, type SyncEntityName, UK_VAT_RATES } from '@wiretrail/core';
+import { formatHlc, localDate, type Mutation, type OfficePaymentMethod, type Role, type SyncEntityName, UK_VAT_RATES } from '@wiretrail/core';
 import { readFile } from 'node:fs/promises';
 import { resolve as resolvePath } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -22,7 +22,7 @@ import { createPhotoStorage, type FileStorage, type PhotoStorage } from '../phot
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
-import { type Role, User } from '../users/entities/user.entity.js';
+import { User } from '../users/entities/user.entity.js';
 import { type DemoImage, renderDemoImages, storeDemoImage } from './demo-photos.js';
 
 interface ScenarioRecord {
