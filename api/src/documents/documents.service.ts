@@ -5,7 +5,7 @@ import { createHash } from 'node:crypto';
 import { type EntityManager, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { officeActor, officeMutation } from '../common/records/records.service.js';
+import { officeActor, officeMutation } from '../records/records.service.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
