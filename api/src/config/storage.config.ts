@@ -1,19 +1,24 @@
 import { registerAs } from '@nestjs/config';
 import { dirname, join, resolve } from 'node:path';
 
-export type PhotoStorageKind = 'local' | 's3';
+export type StorageDriver = 'local' | 's3';
 
 /**
- * Where photo bytes live. Local disk by default, beside the database; any S3-compatible object store otherwise.
- * Uploads in progress always wait on disk (UPLOAD_DIR) until they are complete and checked.
+ * Where stored files live: photo bytes and issued PDFs. Local disk by default, beside the database, each kind in a
+ * directory of its own; or one S3-compatible bucket for all, each kind under a prefix of its own (see file-stores.ts).
+ * The variables keep the names they had when photos were the only files (PHOTO_STORAGE chooses the driver for all).
  */
-export const photosConfig = registerAs('photos', () => {
+export const storageConfig = registerAs('storage', () => {
   const dataDir = dirname(resolve(process.env.DATABASE_PATH ?? 'data/wiretrail.sqlite'));
+  const documents = resolve(process.env.DOCUMENT_STORAGE_DIR || join(dataDir, 'documents'));
   return {
-    storage: (process.env.PHOTO_STORAGE ?? 'local') as PhotoStorageKind,
-    directory: resolve(process.env.PHOTO_STORAGE_DIR || join(dataDir, 'photos')),
-    // Several API instances share it (or the balancer keeps each upload's requests on one instance): see the README.
-    uploadDirectory: resolve(process.env.UPLOAD_DIR || join(dataDir, 'uploads')),
+    driver: (process.env.PHOTO_STORAGE ?? 'local') as StorageDriver,
+    directories: {
+      photos: resolve(process.env.PHOTO_STORAGE_DIR || join(dataDir, 'photos')),
+      documents,
+      // Quotes, invoices and credit notes sit beside the documents, wherever those were put.
+      invoices: join(dirname(documents), 'invoices'),
+    },
     s3: {
       endpoint: process.env.S3_ENDPOINT || undefined,
       bucket: process.env.S3_BUCKET ?? '',
@@ -24,4 +29,4 @@ export const photosConfig = registerAs('photos', () => {
   };
 });
 
-export type PhotosConfig = ReturnType<typeof photosConfig>;
+export type StorageConfig = ReturnType<typeof storageConfig>;

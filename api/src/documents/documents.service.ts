@@ -11,8 +11,9 @@ import { mailConfig } from '../config/app.config.js';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { isLatestMessage, mailState } from '../mail/mail-state.js';
-import { PHOTO_STORAGE, PhotoObjectMissing, type PhotoStorage, photoKey } from '../photos/storage/photo-storage.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
+import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
+import { DOCUMENT_STORAGE, documentKey, PHOTO_STORAGE, photoKey } from '../storage/file-stores.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
@@ -27,7 +28,6 @@ import type { Issue } from './pdf/job-heading.js';
 import { MINOR_WORKS_TITLE, minorWorksPdf } from './pdf/minor-works-pdf.js';
 import { PHOTO_RECORD_TITLE, photoRecordPdf } from './pdf/photo-record-pdf.js';
 import { pdfFilename } from './storage/document-files.js';
-import { DOCUMENT_STORAGE, documentKey } from './storage/document-storage.js';
 import { signatureImage } from './signature-image.js';
 import sharp from 'sharp';
 
@@ -62,8 +62,8 @@ export class DocumentsService implements OnModuleInit {
     private readonly engine: SyncEngine,
     private readonly outbox: MailOutbox,
     private readonly shareLinks: ShareLinksService,
-    @Inject(DOCUMENT_STORAGE) private readonly storage: PhotoStorage,
-    @Inject(PHOTO_STORAGE) private readonly photoStorage: PhotoStorage,
+    @Inject(DOCUMENT_STORAGE) private readonly storage: FileStorage,
+    @Inject(PHOTO_STORAGE) private readonly photoStorage: FileStorage,
     @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
   ) {}
 
@@ -158,7 +158,7 @@ export class DocumentsService implements OnModuleInit {
       const display = await this.photoStorage.get(photoKey(organisationId, sha, 'display'));
       return await sharp(display).resize({ width: 1100, height: 1100, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 78, mozjpeg: true }).toBuffer();
     } catch (err) {
-      if (err instanceof PhotoObjectMissing) throw new ConflictException('A photo of this job is missing from storage; it cannot be printed.');
+      if (err instanceof StoredFileMissing) throw new ConflictException('A photo of this job is missing from storage; it cannot be printed.');
       throw err;
     }
   }

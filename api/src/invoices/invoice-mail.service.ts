@@ -14,16 +14,15 @@ import { dateWords } from '../documents/pdf/document-words.js';
 import { MINOR_WORKS_TITLE } from '../documents/pdf/minor-works-pdf.js';
 import { PHOTO_RECORD_TITLE } from '../documents/pdf/photo-record-pdf.js';
 import { type IssuedFile, pdfFilename } from '../documents/storage/document-files.js';
-import { DOCUMENT_STORAGE, documentKey } from '../documents/storage/document-storage.js';
 import type { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { isLatestMessage, mailState } from '../mail/mail-state.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import type { MailAttachment } from '../mail/mail.service.js';
-import type { FileStorage } from '../photos/storage/photo-storage.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { DOCUMENT_STORAGE, documentKey, INVOICE_STORAGE } from '../storage/file-stores.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { Invoice } from './entities/invoice.entity.js';
-import { INVOICE_STORAGE } from './invoice-storage.js';
 import { detail, todayFor } from './invoice-accounts.js';
 
 export const INVOICE_MAIL = 'invoice';

@@ -5,8 +5,8 @@ import { type AuthUser, CurrentUser } from '../common/decorators/current-user.de
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { SendDocumentDto } from '../documents/dto/send-document.dto.js';
 import { sendIssuedPdf } from '../documents/storage/document-files.js';
-import type { FileStorage } from '../photos/storage/photo-storage.js';
-import { INVOICE_STORAGE } from './invoice-storage.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { INVOICE_STORAGE } from '../storage/file-stores.js';
 import { AgedDebtQueryDto } from './dto/aged-debt-query.dto.js';
 import { CreateInvoiceDto } from './dto/create-invoice.dto.js';
 import { ListInvoicesQueryDto } from './dto/list-invoices-query.dto.js';

@@ -1,9 +1,8 @@
 import { NotFoundException } from '@nestjs/common';
 import type { Request, Response } from 'express';
 import { sendStoredFile } from '../../common/stored-file-response.js';
-import type { FileStorage } from '../../photos/storage/photo-storage.js';
-import { PhotoObjectMissing } from '../../photos/storage/photo-storage.js';
-import { documentKey } from './document-storage.js';
+import { type FileStorage, StoredFileMissing } from '../../storage/file-storage.js';
+import { documentKey } from '../../storage/file-stores.js';
 
 /** An issued PDF never changes, so a browser may keep it; it is the caller's own, so not in shared caches. */
 const CACHE_ISSUED = 'private, max-age=31536000, immutable';
@@ -34,7 +33,7 @@ export async function sendIssuedPdf(storage: FileStorage, document: IssuedFile, 
       try {
         return await storage.stream(documentKey(document.organisationId, document.id));
       } catch (err) {
-        if (err instanceof PhotoObjectMissing) throw new NotFoundException('The PDF of this document is missing from storage.');
+        if (err instanceof StoredFileMissing) throw new NotFoundException('The PDF of this document is missing from storage.');
         throw err;
       }
     },
