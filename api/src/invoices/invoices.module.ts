@@ -1,8 +1,8 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { DocumentCounter } from '../documents/entities/document-counter.entity.js';
 import { MailModule } from '../mail/mail.module.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { PaperworkModule } from '../paperwork/paperwork.module.js';
 import { LabourRate } from '../pricing/entities/labour-rate.entity.js';
 import { VatRate } from '../pricing/entities/vat-rate.entity.js';
 import { ShareLinksModule } from '../share-links/share-links.module.js';
@@ -19,7 +19,8 @@ import { SharedInvoicesController } from './shared-invoices.controller.js';
 /** Quotes, invoices and credit notes per job, payments against them, the aged debt, and their place on share pages. */
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Invoice, InvoiceLine, Payment, DocumentCounter, Organisation, VatRate, LabourRate]),
+    TypeOrmModule.forFeature([Invoice, InvoiceLine, Payment, Organisation, VatRate, LabourRate]),
+    PaperworkModule,
     MailModule,
     ShareLinksModule,
     StorageModule,

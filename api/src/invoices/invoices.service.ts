@@ -5,7 +5,7 @@ import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { paymentsConfig } from '../config/payments.config.js';
-import { loadJobFile } from '../documents/document-content.js';
+import { loadJobFile } from '../paperwork/job-file.js';
 import type { FileStorage } from '../storage/file-storage.js';
 import { INVOICE_STORAGE } from '../storage/file-stores.js';
 import { loadRateBook } from '../pricing/rate-book.js';

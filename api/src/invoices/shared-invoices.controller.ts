@@ -2,7 +2,7 @@ import { Controller, Get, Inject, Param, ParseUUIDPipe, Req, Res } from '@nestjs
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/public.decorator.js';
-import { sendIssuedPdf } from '../documents/storage/document-files.js';
+import { sendIssuedPdf } from '../paperwork/issued-pdf.js';
 import type { FileStorage } from '../storage/file-storage.js';
 import { INVOICE_STORAGE } from '../storage/file-stores.js';
 import { InvoicesService } from './invoices.service.js';

@@ -3,7 +3,7 @@ import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/public.decorator.js';
 import { sendStoredFile } from '../common/stored-file-response.js';
-import { sendIssuedPdf } from '../documents/storage/document-files.js';
+import { sendIssuedPdf } from '../paperwork/issued-pdf.js';
 import { PhotosService } from '../photos/photos.service.js';
 import type { FileStorage } from '../storage/file-storage.js';
 import { DOCUMENT_STORAGE } from '../storage/file-stores.js';
