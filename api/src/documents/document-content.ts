@@ -1,11 +1,10 @@
 import { NotFoundException } from '@nestjs/common';
-import { assessCableRun, type CableRunAssessment, type RuleSet } from '@wiretrail/core';
+import { assessCableRun, type CableRunAssessment, judgeMinorWorks, type MinorWorksJudgement, type RuleSet } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
-import { judgeMinorWorks, type MinorWorksJudgement } from './minor-works-check.js';
 import { inTurn } from '../common/in-turn.js';
 
 /** Everything about a job that every document prints at its head. */
@@ -41,7 +40,7 @@ export function jobVisits(em: EntityManager, file: JobFile): Promise<SyncRecord[
   return rows(em, 'visit', { jobId: file.job.id, ...live(file.organisation.id) });
 }
 
-export interface MinorWorksContent extends MinorWorksJudgement {
+export interface MinorWorksContent extends MinorWorksJudgement<SyncRecord, SyncRecord, SyncRecord> {
   boards: Map<string, string>;
 }
 
@@ -56,7 +55,8 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
     () => rows(em, 'circuit', { siteId: file.site.id, ...live(org) }),
     () => rows(em, 'board', { siteId: file.site.id, organisationId: org }),
   );
-  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: (file.site.earthing as string) ?? null }, rules);
+  const earthing = typeof file.site.earthing === 'string' ? file.site.earthing : null;
+  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing }, rules);
   return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])) };
 }
 
