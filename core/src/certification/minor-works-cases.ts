@@ -6,17 +6,24 @@
  * Readings are those of the demo's ring (32 A type B circuit-breaker, 30 mA type A RCD, 2.5/1.5 mm² twin and
  * earth, TN-C-S), with each check value's published source beside it.
  */
+import type { FieldValue } from '../sync/protocol.js';
 import type { MinorWorksFindingKind } from './minor-works.js';
+
+/** A row as a push would send it: its id and its fields. */
+export interface CaseRow {
+  readonly id: string;
+  readonly [field: string]: FieldValue;
+}
 
 export interface MinorWorksCase {
   readonly name: string;
   readonly earthing: string;
   /** The site's circuits. */
-  readonly circuits: readonly { readonly id: string; readonly [field: string]: unknown }[];
+  readonly circuits: readonly CaseRow[];
   /** The visit's sign-off, as the phone writes it when the visit is finished. */
-  readonly visit: { readonly id: string; readonly [field: string]: unknown };
-  readonly tests: readonly { readonly id: string; readonly [field: string]: unknown }[];
-  readonly pointChanges: readonly { readonly id: string; readonly [field: string]: unknown }[];
+  readonly visit: CaseRow;
+  readonly tests: readonly CaseRow[];
+  readonly pointChanges: readonly CaseRow[];
   readonly expected: {
     readonly issuable: boolean;
     readonly findings: readonly { readonly kind: MinorWorksFindingKind; readonly what: string; readonly excused?: boolean }[];
@@ -26,7 +33,10 @@ export interface MinorWorksCase {
 /** Ids as the product makes them (UUID version 7), fixed and different in every case. */
 const idOf = (caseNo: number, n: number) => `01900000-0000-7000-8${String(caseNo).padStart(3, '0')}-${String(n).padStart(12, '0')}`;
 
-const SIGNED = { status: 'finished', signedByName: 'Aled Pryce', signedAt: '2026-03-14T11:00:00.000Z', signatureSvg: '<svg xmlns="http://www.w3.org/2000/svg"/>', departures: null };
+/** A signature as the phone's signature pad draws it: the certificate prints it, so it must be a real drawing. */
+const SIGNATURE =
+  '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 300 100"><path d="M10 80 C 40 10 60 10 80 70 S 140 20 290 40" fill="none" stroke="#111" stroke-width="3"/></svg>';
+const SIGNED = { status: 'finished', signedByName: 'Aled Pryce', signedAt: '2026-03-14T11:00:00.000Z', signatureSvg: SIGNATURE, departures: null };
 
 const RING = { number: '1', description: 'Sockets, ground floor', kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 };
 const COOKER = { number: '4', description: 'Cooker', kind: 'radial', deviceType: 'B', deviceRatingA: 32, liveCsaMm2: 6, cpcCsaMm2: 2.5 };
@@ -49,10 +59,10 @@ function visitCase(
   caseNo: number,
   name: string,
   rows: {
-    visit?: Record<string, unknown>;
-    circuits?: Record<string, unknown>[];
-    tests: ((circuitIds: string[]) => Record<string, unknown>)[];
-    pointChanges?: ((circuitIds: string[]) => Record<string, unknown>)[];
+    visit?: Record<string, FieldValue>;
+    circuits?: Record<string, FieldValue>[];
+    tests: ((circuitIds: string[]) => Record<string, FieldValue>)[];
+    pointChanges?: ((circuitIds: string[]) => Record<string, FieldValue>)[];
   },
   expected: MinorWorksCase['expected'],
 ): MinorWorksCase {
@@ -69,7 +79,7 @@ function visitCase(
   };
 }
 
-const tested = (at: string, readings: Record<string, unknown> = {}, which = 0) => (ids: string[]) => ({ circuitId: ids[which] ?? null, testedAt: at, ...SOUND, ...readings });
+const tested = (at: string, readings: Record<string, FieldValue> = {}, which = 0) => (ids: string[]): Record<string, FieldValue> => ({ circuitId: ids[which] ?? null, testedAt: at, ...SOUND, ...readings });
 
 export const MINOR_WORKS_CASES: readonly MinorWorksCase[] = [
   visitCase(1, 'a sound ring, tested once', { tests: [tested('2026-03-14T10:30:00.000Z')] }, { issuable: true, findings: [] }),
@@ -110,7 +120,7 @@ export const MINOR_WORKS_CASES: readonly MinorWorksCase[] = [
     {
       circuits: [RING, COOKER],
       tests: [tested('2026-03-14T10:30:00.000Z'), (ids) => ({ ...tested('2026-03-14T10:35:00.000Z')(ids), circuitId: null })],
-      pointChanges: [(ids) => ({ circuitId: ids[1], action: 'add' })],
+      pointChanges: [(ids) => ({ circuitId: ids[1] ?? null, action: 'add' })],
     },
     {
       issuable: false,
