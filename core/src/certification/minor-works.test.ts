@@ -1,19 +1,19 @@
 import { describe, expect, it } from 'vitest';
-import type { RecordRow } from './circuit-records.js';
+import type { LooseRowOf, TestResultRecord } from './circuit-records.js';
 import { MINOR_WORKS_CASES } from './minor-works-cases.js';
 import { judgeCircuitWork, judgeMinorWorks, type MinorWorksRecords } from './minor-works.js';
 
-const SIGNED: RecordRow = {
+const SIGNED: LooseRowOf<'visit'> = {
   id: 'v1', status: 'finished', signedByName: 'Aled Pryce', signedAt: '2026-03-14T10:48:00.000Z', signatureSvg: '<svg/>', departures: null,
 };
-const RING: RecordRow = { id: 'c2', number: '2', description: 'Sockets, first floor', kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 };
+const RING: LooseRowOf<'circuit'> = { id: 'c2', number: '2', description: 'Sockets, first floor', kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 };
 // A sound 2.5/1.5 mm² ring on a B32 with a 30 mA RCD:
 // r1 0.52 and rn 0.53 Ω within 0.05 Ω of each other (IET GN3 9th ed. 2022, ring step 1); r2 0.86 Ω within 3 % of
 //   1.633 × r1 (IEC 60228:2004 Table 1; 3 % common trade practice); R1+R2 0.35 Ω against (0.52 + 0.86) / 4 = 0.345 Ω (GN3 step 3, D);
 // insulation 299 and 250 MΩ at 500 V against 1.0 MΩ (BS 7671:2018+A2:2022 Table 64);
 // Zs 0.63 Ω against 0.8 × 1.37 = 1.10 Ω (BS 7671:2018+A2:2022 Table 41.3, B32; Appendix 3, trade practice);
 // RCD 22 ms against 300 ms at 30 mA (BS 7671:2018+A2:2022 Reg 643.8).
-const PASSING: RecordRow = {
+const PASSING: TestResultRecord = {
   id: 't1', visitId: 'v1', circuitId: 'c2', testedAt: '2026-03-14T10:30:00.000Z',
   r1Ohm: 0.52, rnOhm: 0.53, r2Ohm: 0.86, r1r2Ohm: 0.35, irLiveLiveMOhm: 299, irLiveEarthMOhm: 250, irTestVoltageV: 500,
   polarity: 'correct', zsOhm: 0.63, rcdTripMs: 22,

@@ -7,20 +7,23 @@ import { DEFAULT_RULE_SET } from '../rules/uk-bs7671-2018-a2-2022.js';
 import type { RuleSet } from '../rules/rule-set.js';
 import { FINISHED_VISIT_STATUS } from '../sync/entities.js';
 import { circuitReading } from './circuit-readings.js';
-import { circuitName, circuitTestInput, type RecordRow, textOf } from './circuit-records.js';
+import { circuitName, circuitTestInput, type LooseRowOf, type TestResultRecord, textOf } from './circuit-records.js';
 import { assessCircuitTest, type CircuitTestAssessment, type CircuitTestKey } from './circuit-test.js';
 
-export interface MinorWorksRecords<Visit extends RecordRow = RecordRow, Test extends RecordRow = RecordRow, Circuit extends RecordRow = RecordRow> {
+type VisitRecord = LooseRowOf<'visit'>;
+type CircuitRecord = LooseRowOf<'circuit'>;
+
+export interface MinorWorksRecords<Visit extends VisitRecord = VisitRecord, Test extends TestResultRecord = TestResultRecord, Circuit extends CircuitRecord = CircuitRecord> {
   readonly visits: readonly Visit[];
   readonly tests: readonly Test[];
-  readonly pointChanges: readonly RecordRow[];
+  readonly pointChanges: readonly LooseRowOf<'pointChange'>[];
   /** The site's circuits. */
   readonly circuits: readonly Circuit[];
   /** The site's earthing arrangement. */
   readonly earthing: string | null | undefined;
 }
 
-export interface CertifiedCircuit<Visit extends RecordRow = RecordRow, Test extends RecordRow = RecordRow, Circuit extends RecordRow = RecordRow> {
+export interface CertifiedCircuit<Visit extends VisitRecord = VisitRecord, Test extends TestResultRecord = TestResultRecord, Circuit extends CircuitRecord = CircuitRecord> {
   readonly circuit: Circuit;
   /** The latest test of the circuit on the visits judged. */
   readonly test: Test;
@@ -46,7 +49,7 @@ export interface MinorWorksFinding {
   readonly excused: boolean;
 }
 
-export interface MinorWorksJudgement<Visit extends RecordRow = RecordRow, Test extends RecordRow = RecordRow, Circuit extends RecordRow = RecordRow> {
+export interface MinorWorksJudgement<Visit extends VisitRecord = VisitRecord, Test extends TestResultRecord = TestResultRecord, Circuit extends CircuitRecord = CircuitRecord> {
   /** The visits judged, oldest signature first. */
   readonly visits: Visit[];
   /** Each circuit tested, with its latest test, by circuit number. */
@@ -62,13 +65,13 @@ const READINGS_ADVICE =
   'Record the missing readings, put right what fails and test again, or record the departure from the standard in the visit’s sign-off to issue the certificate with it.';
 
 /** When a test was taken, for putting tests in order; the row's creation stands in for a time never entered. */
-function takenAt(test: RecordRow): string {
+function takenAt(test: TestResultRecord): string {
   const created = test.createdAt instanceof Date ? test.createdAt.toISOString() : textOf(test.createdAt);
   return textOf(test.testedAt) || created;
 }
 
 /** Finished on site and signed: the technician's name, the time and the drawn signature are all there. */
-export function isSigned(visit: RecordRow): boolean {
+export function isSigned(visit: VisitRecord): boolean {
   return visit.status === FINISHED_VISIT_STATUS && !!textOf(visit.signedByName) && !!textOf(visit.signedAt) && !!textOf(visit.signatureSvg);
 }
 
@@ -76,7 +79,7 @@ function finding(kind: MinorWorksFindingKind, what: string, detail: string, sent
   return { kind, what, detail, sentence, circuitId: null, line: null, excused: false, ...more };
 }
 
-function concluded<V extends RecordRow, T extends RecordRow, C extends RecordRow>(
+function concluded<V extends VisitRecord, T extends TestResultRecord, C extends CircuitRecord>(
   visits: V[],
   circuits: CertifiedCircuit<V, T, C>[],
   findings: MinorWorksFinding[],
@@ -90,7 +93,7 @@ function concluded<V extends RecordRow, T extends RecordRow, C extends RecordRow
 /**
  * The certificate for a job: only its finished and signed visits count, and without one there is nothing to certify.
  */
-export function judgeMinorWorks<V extends RecordRow, T extends RecordRow, C extends RecordRow>(
+export function judgeMinorWorks<V extends VisitRecord, T extends TestResultRecord, C extends CircuitRecord>(
   records: MinorWorksRecords<V, T, C>,
   rules: RuleSet = DEFAULT_RULE_SET,
 ): MinorWorksJudgement<V, T, C> {
@@ -107,14 +110,14 @@ export function judgeMinorWorks<V extends RecordRow, T extends RecordRow, C exte
  * each circuit, every altered circuit without a test, every test that names no circuit, and each required reading
  * missing or failing. Missing and failing readings are excused where the visit's sign-off records a departure.
  */
-export function judgeCircuitWork<V extends RecordRow, T extends RecordRow, C extends RecordRow>(
+export function judgeCircuitWork<V extends VisitRecord, T extends TestResultRecord, C extends CircuitRecord>(
   records: MinorWorksRecords<V, T, C>,
   rules: RuleSet = DEFAULT_RULE_SET,
 ): MinorWorksJudgement<V, T, C> {
   const visits = [...records.visits].sort((a, b) => textOf(a.signedAt).localeCompare(textOf(b.signedAt)));
   const judged = new Map(visits.map((v) => [v.id, v]));
   const circuitsById = new Map(records.circuits.map((c) => [c.id, c]));
-  const visitOf = (row: RecordRow) => (typeof row.visitId === 'string' ? judged.get(row.visitId) : undefined);
+  const visitOf = (row: { readonly visitId?: unknown }) => (typeof row.visitId === 'string' ? judged.get(row.visitId) : undefined);
   const tests = records.tests.filter((t) => visitOf(t)).sort((a, b) => takenAt(a).localeCompare(takenAt(b)));
   const findings: MinorWorksFinding[] = [];
 
@@ -129,7 +132,7 @@ export function judgeCircuitWork<V extends RecordRow, T extends RecordRow, C ext
     latest.set(t.circuitId, t);
   }
 
-  const altered = new Set(records.pointChanges.filter((p) => visitOf(p) && typeof p.circuitId === 'string').map((p) => p.circuitId as string));
+  const altered = new Set(records.pointChanges.flatMap((p) => (visitOf(p) && typeof p.circuitId === 'string' ? [p.circuitId] : [])));
   for (const id of altered) {
     if (latest.has(id)) continue;
     const what = circuitName(circuitsById.get(id) ?? { id });
