@@ -64,11 +64,11 @@ export interface MinorWorksJudgement<Visit extends VisitRecord = VisitRecord, Te
 const READINGS_ADVICE =
   'Record the missing readings, put right what fails and test again, or record the departure from the standard in the visit’s sign-off to issue the certificate with it.';
 
+/** A time as ISO text, which sorts as time does; a database driver may hand it over as a Date. */
+const timeText = (v: unknown): string => (v instanceof Date ? v.toISOString() : textOf(v));
+
 /** When a test was taken, for putting tests in order; the row's creation stands in for a time never entered. */
-function takenAt(test: TestResultRecord): string {
-  const created = test.createdAt instanceof Date ? test.createdAt.toISOString() : textOf(test.createdAt);
-  return textOf(test.testedAt) || created;
-}
+const takenAt = (test: TestResultRecord): string => timeText(test.testedAt) || timeText(test.createdAt);
 
 /** Finished on site and signed: the technician's name, the time and the drawn signature are all there. */
 export function isSigned(visit: VisitRecord): boolean {
@@ -114,7 +114,7 @@ export function judgeCircuitWork<V extends VisitRecord, T extends TestResultReco
   records: MinorWorksRecords<V, T, C>,
   rules: RuleSet = DEFAULT_RULE_SET,
 ): MinorWorksJudgement<V, T, C> {
-  const visits = [...records.visits].sort((a, b) => textOf(a.signedAt).localeCompare(textOf(b.signedAt)));
+  const visits = [...records.visits].sort((a, b) => timeText(a.signedAt).localeCompare(timeText(b.signedAt)));
   const judged = new Map(visits.map((v) => [v.id, v]));
   const circuitsById = new Map(records.circuits.map((c) => [c.id, c]));
   const visitOf = (row: { readonly visitId?: unknown }) => (typeof row.visitId === 'string' ? judged.get(row.visitId) : undefined);
