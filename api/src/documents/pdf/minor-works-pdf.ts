@@ -1,9 +1,11 @@
 import { type CertifiedCircuit, circuitName, circuitReading, type CircuitTestLine, type RuleSet, VERDICT_DISCLAIMER } from '@wiretrail/core';
+import { MINOR_WORKS_TITLE } from '../../paperwork/document-titles.js';
+import type { JobFile } from '../../paperwork/job-file.js';
+import { INK, type Row } from '../../paperwork/pdf/document-layout.js';
+import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
+import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
-import type { JobFile, MinorWorksContent } from '../document-content.js';
-import { INK, type Row } from './document-layout.js';
-import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from './document-words.js';
-import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
+import type { MinorWorksContent } from '../document-content.js';
 
 export interface MinorWorksPdf {
   issue: Issue;
@@ -13,8 +15,6 @@ export interface MinorWorksPdf {
   /** The signer's drawing from the phone, already made a PNG. */
   signature: Buffer;
 }
-
-export const MINOR_WORKS_TITLE = 'Minor works certificate';
 
 type Certified = CertifiedCircuit<SyncRecord, SyncRecord, SyncRecord>;
 const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
