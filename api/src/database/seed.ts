@@ -22,7 +22,8 @@ import { createPhotoStorage, type FileStorage, type PhotoStorage } from '../phot
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
-import { type Role, User } from '../users/entities/user.entity.js';
+import type { Role } from '../common/roles.js';
+import { User } from '../users/entities/user.entity.js';
 import { type DemoImage, renderDemoImages, storeDemoImage } from './demo-photos.js';
 
 interface ScenarioRecord {

@@ -1,5 +1,5 @@
 import { SetMetadata } from '@nestjs/common';
-import type { Role } from '../../users/entities/user.entity.js';
+import type { Role } from '../roles.js';
 
 export const ROLES_KEY = 'roles';
 /** Which roles may call a route. A route without it (and not @Public) is refused to everyone. */

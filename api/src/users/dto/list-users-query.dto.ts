@@ -1,7 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
-import { type Role, ROLES } from '../entities/user.entity.js';
+import { type Role, ROLES } from '../../common/roles.js';
 import { MAX_PAGE } from '../../common/records/page-query.dto.js';
 
 export class ListUsersQueryDto {
