@@ -11,7 +11,7 @@ test('the office issues an invoice, the customer pays it by card from their link
   // A job of this test's own, so that no other test's invoices get in the way.
   const title = `Porch light and switch (billing test ${Date.now().toString(36)})`;
   const { jobId } = await bookVisit(request, { technicianEmail: 'tech2@larkfield.example', siteName: 'Fernhill Close', title });
-  const office = await signedInAtDesk(browser, 'office@larkfield.example');
+  const office = await signedInAtDesk(browser, 'office');
   const page = office.page;
   await expect(page).toHaveURL(/\/jobs$/);
 
