@@ -22,6 +22,12 @@ export function signedInState(role: Role): string {
   return fileURLToPath(new URL(`./.auth/${role}.json`, import.meta.url));
 }
 
+/**
+ * A browser of someone else's with nothing in it. Contexts a test makes take the test's options, its saved session
+ * included, so a customer's phone or a newcomer's device says it has none.
+ */
+export const SIGNED_OUT = { cookies: [], origins: [] };
+
 interface Fixtures {
   /** Opens every page of the test already signed in as this role; null (the default) starts signed out. */
   signedInAs: Role | null;

@@ -1,5 +1,5 @@
 import { v7 as uuidv7 } from 'uuid';
-import { apiSession, DESK, expect, PHONE, test } from '../fixtures.js';
+import { apiSession, DESK, expect, PHONE, SIGNED_OUT, test } from '../fixtures.js';
 
 test.use({ viewport: DESK, signedInAs: 'office' });
 
@@ -96,7 +96,7 @@ test('the office reviews a finished job, settles a conflict, issues the certific
   expect(link).toBeTruthy();
 
   // The customer opens the link on their phone, with no account.
-  const customer = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block' });
+  const customer = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block', storageState: SIGNED_OUT });
   try {
     const phone = await customer.newPage();
     await phone.goto(new URL(link!).pathname);

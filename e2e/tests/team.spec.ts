@@ -1,4 +1,4 @@
-import { DESK, expect, test } from '../fixtures.js';
+import { DESK, expect, SIGNED_OUT, test } from '../fixtures.js';
 import { SignInPage } from '../pages/sign-in-page.js';
 
 test.use({ viewport: DESK, signedInAs: 'admin' });
@@ -37,7 +37,7 @@ test('the admin adds a technician, who sets their own password from the e-mailed
     .not.toBe('');
 
   // The new technician opens the link on their own device.
-  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block' });
+  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block', storageState: SIGNED_OUT });
   try {
     const own = await phone.newPage();
     await own.goto(new URL(link).pathname + new URL(link).search);
