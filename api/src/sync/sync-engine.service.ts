@@ -15,7 +15,7 @@ import {
 } from '@wiretrail/core';
 import { type EntityManager, In, IsNull, Not } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
-import type { Role } from '../common/roles.js';
+import type { Role } from '@wiretrail/core';
 import { User } from '../users/entities/user.entity.js';
 import { AppliedMutation, SyncChange, SyncCounter } from './entities/sync-bookkeeping.entity.js';
 import { type FieldMeta, SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';

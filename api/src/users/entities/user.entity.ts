@@ -1,6 +1,6 @@
+import type { Role } from '@wiretrail/core';
 import { Column, Entity, Index, JoinColumn, ManyToOne, type Relation } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
-import type { Role } from '../../common/roles.js';
 import { Organisation } from '../../organisations/entities/organisation.entity.js';
 import { TIMESTAMP } from '../../database/column-types.js';
 
