@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import {
+  decideField,
   type EntitySpec,
   fieldError,
   FINISHED_VISIT_STATUS,
@@ -10,6 +11,8 @@ import {
   type Mutation,
   type MutationResult,
   type RefTarget,
+  sameDevice,
+  sameValue,
   SYNC_ENTITIES,
   type SyncEntityName,
 } from '@wiretrail/core';
@@ -20,7 +23,6 @@ import { User } from '../users/entities/user.entity.js';
 import { AppliedMutation, SyncChange, SyncCounter } from './entities/sync-bookkeeping.entity.js';
 import { type FieldMeta, SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
 import { insertMany, selectMany, updateWhere } from './bulk-write.js';
-import { decideField, sameDevice, sameValue } from './merge.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
 
 export interface Actor {
