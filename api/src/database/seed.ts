@@ -9,6 +9,7 @@ import { documentsConfig } from '../config/documents.config.js';
 import { paymentsConfig } from '../config/payments.config.js';
 import { photosConfig } from '../config/photos.config.js';
 import { loadJobFile } from '../documents/document-content.js';
+import { DOCUMENT_LOCK } from '../documents/document-lock.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
 import { issueDraft, saveDraft } from '../invoices/invoice-issue.js';
 import { createInvoiceStorage } from '../invoices/invoice-storage.js';
@@ -151,6 +152,7 @@ export async function seedDemoData(
   const images = imageNames.length ? await renderDemoImages(new URL('scenes/', typeof scenarioPath === 'string' ? pathToFileURL(resolvePath(scenarioPath)) : scenarioPath), imageNames) : new Map<string, DemoImage>();
   const storage = imageNames.length ? (photoStorage ?? (await createPhotoStorage(photosConfig()))) : null;
   const engine = new SyncEngine(new ScopeService());
+  engine.lockRule('document', DOCUMENT_LOCK);
   const today = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
   let invoices = invoiceStorage;
   await dataSource.transaction(async (em) => {

@@ -20,6 +20,7 @@ import { User } from '../users/entities/user.entity.js';
 import { type JobFile, loadCableSchedule, loadJobFile, loadMinorWorks, loadPhotoRecord } from './document-content.js';
 import type { DocumentKind } from './dto/issue-document.dto.js';
 import type { SendDocumentDto } from './dto/send-document.dto.js';
+import { DOCUMENT_LOCK } from './document-lock.js';
 import { takeNextNumber } from './document-numbers.js';
 import { CABLING_REPORT_TITLE, cablingReportPdf } from './pdf/cabling-report-pdf.js';
 import { dateWords } from './pdf/document-words.js';
@@ -68,6 +69,7 @@ export class DocumentsService implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
+    this.engine.lockRule('document', DOCUMENT_LOCK);
     this.outbox.register(DOCUMENT_MAIL, {
       attachments: (message) => this.attachment(message),
       settled: (em, message) => this.recordMailState(em, message),
