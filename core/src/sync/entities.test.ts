@@ -1,5 +1,5 @@
-import { describe, expect, it } from 'vitest';
-import { fieldError, isSyncEntity, SYNC_ENTITIES, SYNC_ENTITY_NAMES } from './entities.js';
+import { describe, expect, expectTypeOf, it } from 'vitest';
+import { type DraftRowOf, fieldError, isSyncEntity, type RowOf, SYNC_ENTITIES, SYNC_ENTITY_NAMES, SYNC_REGISTRY } from './entities.js';
 
 describe('synced entities', () => {
   it('covers the domain model, each with a table', () => {
@@ -48,5 +48,28 @@ describe('synced entities', () => {
     expect(fieldError('circuit', 'boardId', 'board-1')).toBe('circuit.boardId must be the id of a board');
     expect(fieldError('visit', 'plannedStart', '2026-12-02T09:00:00.000Z')).toBeNull();
     expect(fieldError('visit', 'plannedStart', 'Tuesday')).toMatch(/ISO-8601/);
+  });
+});
+
+describe('row types derived from the registry', () => {
+  it('keeps field names, kinds and enum values, with optional fields nullable', () => {
+    expectTypeOf<RowOf<'circuit'>['number']>().toEqualTypeOf<string>();
+    expectTypeOf<RowOf<'circuit'>['kind']>().toEqualTypeOf<'ring' | 'radial' | 'lighting' | 'other' | null>();
+    expectTypeOf<RowOf<'circuit'>['deviceRatingA']>().toEqualTypeOf<number | null>();
+    expectTypeOf<RowOf<'visit'>['technicianIds']>().toEqualTypeOf<string[] | null>();
+    expectTypeOf<RowOf<'cableRun'>['scheme']>().toEqualTypeOf<'T568A' | 'T568B' | null>();
+    expectTypeOf<RowOf<'priceItem'>['active']>().toEqualTypeOf<boolean | null>();
+    expectTypeOf<RowOf<'photo'>['tags']>().toEqualTypeOf<string[] | null>();
+    expectTypeOf<RowOf<'testResult'>['verdicts']>().toEqualTypeOf<unknown>();
+    expectTypeOf<RowOf<'materialLine'>['quantity']>().toEqualTypeOf<number>();
+    expectTypeOf<DraftRowOf<'note'>>().toEqualTypeOf<{ id: string; visitId: string; siteId: string; text: string }>();
+    expectTypeOf<DraftRowOf<'area'>['level']>().toEqualTypeOf<string | null | undefined>();
+    expectTypeOf<keyof RowOf<'conflict'>>().toEqualTypeOf<'id'>();
+  });
+
+  it('is the same registry the loose view reads', () => {
+    expect(SYNC_REGISTRY.circuit.fields.kind.type.values).toEqual(['ring', 'radial', 'lighting', 'other']);
+    expect(SYNC_ENTITIES.circuit).toBe(SYNC_REGISTRY.circuit);
+    expect(Object.isFrozen(SYNC_REGISTRY.circuit)).toBe(true);
   });
 });

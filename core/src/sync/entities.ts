@@ -20,7 +20,8 @@ export type FieldType =
   | { kind: 'ref'; entity: RefTarget }
   | { kind: 'refs'; entity: RefTarget }
   | { kind: 'enum'; values: readonly string[] }
-  | { kind: 'json' };
+  // `shape` is never set: it carries, for the type system only, what a JSON field holds.
+  | { kind: 'json'; readonly shape?: unknown };
 
 /**
  * How a field changed by two people at once is settled:
@@ -70,17 +71,35 @@ export interface EntitySpec {
   readonly organisationWide?: boolean;
 }
 
-const str = (max = 200): FieldType => ({ kind: 'string', max });
-const text = (): FieldType => ({ kind: 'string', max: 20_000 });
-const num = (min?: number, max?: number): FieldType => ({ kind: 'number', min, max });
-const int = (min?: number, max?: number): FieldType => ({ kind: 'integer', min, max });
-const ref = (entity: RefTarget): FieldType => ({ kind: 'ref', entity });
-const oneOf = (...values: string[]): FieldType => ({ kind: 'enum', values });
-const when: FieldType = { kind: 'datetime' };
-const json: FieldType = { kind: 'json' };
+// The helpers keep each field's kind, limits and enum values literal, so that row types can be derived below.
+const str = (max = 200) => ({ kind: 'string', max }) as const;
+const text = () => ({ kind: 'string', max: 20_000 }) as const;
+const num = (min?: number, max?: number) => ({ kind: 'number', min, max }) as const;
+const int = (min?: number, max?: number) => ({ kind: 'integer', min, max }) as const;
+const ref = <E extends RefTarget>(entity: E) => ({ kind: 'ref', entity }) as const;
+const refs = <E extends RefTarget>(entity: E) => ({ kind: 'refs', entity }) as const;
+const oneOf = <const V extends readonly string[]>(...values: V) => ({ kind: 'enum', values }) as const;
+const bool = { kind: 'boolean' } as const satisfies FieldType;
+const when = { kind: 'datetime' } as const satisfies FieldType;
+const json = { kind: 'json' } as const satisfies FieldType;
+/** A JSON field whose contents have a shape we can name. */
+const jsonOf = <T>(): { readonly kind: 'json'; readonly shape?: T } => ({ kind: 'json' });
 
-const office = (type: FieldType, required = false): FieldSpec => ({ type, policy: 'office', required });
-const seen = (type: FieldType, required = false): FieldSpec => ({ type, policy: 'observed', required, technician: true });
+interface TypedFieldSpec<T extends FieldType, P extends MergePolicy, R extends boolean> extends FieldSpec {
+  readonly type: T;
+  readonly policy: P;
+  readonly required: R;
+}
+function office<T extends FieldType>(type: T): TypedFieldSpec<T, 'office', false>;
+function office<T extends FieldType>(type: T, required: true): TypedFieldSpec<T, 'office', true>;
+function office(type: FieldType, required = false): FieldSpec {
+  return { type, policy: 'office', required };
+}
+function seen<T extends FieldType>(type: T): TypedFieldSpec<T, 'observed', false> & { readonly technician: true };
+function seen<T extends FieldType>(type: T, required: true): TypedFieldSpec<T, 'observed', true> & { readonly technician: true };
+function seen(type: FieldType, required = false): FieldSpec {
+  return { type, policy: 'observed', required, technician: true };
+}
 
 export const EARTHING_ARRANGEMENTS = ['TN-C-S', 'TN-S', 'TT'] as const;
 export const JOB_STATUSES = ['enquiry', 'booked', 'on-site', 'paperwork', 'done', 'cancelled'] as const;
@@ -103,12 +122,12 @@ export const INSULATION_TEST_VOLTAGES = [250, 500, 1000] as const;
 /** A visit's records lock for technicians once it is finished (signed off on site). */
 export const FINISHED_VISIT_STATUS = 'finished';
 
-const ENTITY_LIST: readonly EntitySpec[] = [
-  {
+const REGISTRY = {
+  customer: {
     name: 'customer', table: 'customer', technicianWrite: 'none', technicianVisible: true, siteField: null, visitField: null,
     fields: { name: office(str(), true), email: office(str(254)), phone: office(str(50)), address: office(str(500)), notes: office(text()) },
   },
-  {
+  site: {
     name: 'site', table: 'site', technicianWrite: 'site-row', technicianVisible: true, siteField: 'id', visitField: null,
     fields: {
       customerId: office(ref('customer'), true), name: office(str()), address: office(str(500), true), postcode: office(str(12)),
@@ -116,15 +135,15 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       earthing: seen(oneOf(...EARTHING_ARRANGEMENTS)), zeOhm: seen(num(0, 1000)), pfcKa: seen(num(0, 100)),
     },
   },
-  {
+  area: {
     name: 'area', table: 'area', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
     fields: { siteId: seen(ref('site'), true), name: seen(str(), true), level: seen(str(50)) },
   },
-  {
+  board: {
     name: 'board', table: 'board', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
     fields: { siteId: seen(ref('site'), true), areaId: seen(ref('area')), name: seen(str(), true), description: seen(str(500)) },
   },
-  {
+  circuit: {
     name: 'circuit', table: 'circuit', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
     fields: {
       siteId: seen(ref('site'), true), boardId: seen(ref('board'), true), number: seen(str(20), true), description: seen(str(500)),
@@ -132,39 +151,39 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       rcdRatingMa: seen(num(1, 3000)), rcdType: seen(str(20)), liveCsaMm2: seen(num(0.5, 400)), cpcCsaMm2: seen(num(0.5, 400)),
     },
   },
-  {
+  job: {
     name: 'job', table: 'job', technicianWrite: 'none', technicianVisible: true, siteField: 'siteId', visitField: null,
     fields: {
       siteId: office(ref('site'), true), customerId: office(ref('customer'), true), reference: office(str(40)),
       title: office(str(), true), status: office(oneOf(...JOB_STATUSES)), description: office(text()),
     },
   },
-  {
+  visit: {
     name: 'visit', table: 'visit', technicianWrite: 'assigned-visit', technicianVisible: true, siteField: 'siteId', visitField: 'id',
     fields: {
-      jobId: office(ref('job'), true), siteId: office(ref('site'), true), technicianIds: office({ kind: 'refs', entity: 'user' }),
+      jobId: office(ref('job'), true), siteId: office(ref('site'), true), technicianIds: office(refs('user')),
       plannedStart: office(when), plannedEnd: office(when),
       actualStart: seen(when), actualEnd: seen(when), status: seen(oneOf(...VISIT_STATUSES)),
       // Shown once per visit before work on a circuit; kept as evidence that the cautions were read.
       cautionsReadAt: seen(when),
       // Sign-off on site: what was done, what was seen, where the work departs from the standard, and who signed.
       workDescription: seen(text()), observations: seen(text()), departures: seen(text()),
-      signedByName: seen(str()), signedAt: seen(when), signatureSvg: seen({ kind: 'string', max: 60_000 }),
+      signedByName: seen(str()), signedAt: seen(when), signatureSvg: seen(str(60_000)),
     },
   },
-  {
+  photo: {
     name: 'photo', table: 'photo', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId', appendOnly: true,
     fields: {
       visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), areaId: seen(ref('area')),
-      subjectType: seen(oneOf(...PHOTO_SUBJECTS)), subjectId: seen({ kind: 'string', max: 36 }), caption: seen(str(500)), tags: seen(json),
+      subjectType: seen(oneOf(...PHOTO_SUBJECTS)), subjectId: seen(str(36)), caption: seen(str(500)), tags: seen(jsonOf<string[]>()),
       takenAt: seen(when), sha256: seen(str(64)), sizeBytes: seen(int(0)), width: seen(int(0)), height: seen(int(0)), uploadState: seen(str(20)),
     },
   },
-  {
+  note: {
     name: 'note', table: 'note', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId', appendOnly: true,
     fields: { visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), text: seen(text(), true) },
   },
-  {
+  cableRun: {
     name: 'cableRun', table: 'cable_run', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
     fields: {
       siteId: seen(ref('site'), true), label: seen(str(100), true), medium: seen(oneOf(...CABLE_MEDIA)),
@@ -178,7 +197,7 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       lastVisitId: seen(ref('visit')),
     },
   },
-  {
+  pointChange: {
     name: 'pointChange', table: 'point_change', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
     fields: {
       visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), circuitId: seen(ref('circuit')),
@@ -193,7 +212,7 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       concealedRoute: seen(json),
     },
   },
-  {
+  testResult: {
     name: 'testResult', table: 'test_result', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
     fields: {
       visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), circuitId: seen(ref('circuit')),
@@ -207,7 +226,7 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       verdicts: seen(json),
     },
   },
-  {
+  document: {
     name: 'document', table: 'document', technicianWrite: 'none', technicianVisible: true, siteField: 'siteId', visitField: null,
     fields: {
       jobId: office(ref('job'), true), siteId: office(ref('site'), true), kind: office(oneOf(...DOCUMENT_KINDS), true),
@@ -217,15 +236,15 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       emailState: office(oneOf(...DOCUMENT_EMAIL_STATES)), emailedTo: office(str(254)), emailedAt: office(when), emailError: office(str(500)),
     },
   },
-  {
+  priceItem: {
     // The organisation's price list: the office keeps it; phones get it to pick parts with no signal.
     name: 'priceItem', table: 'price_item', technicianWrite: 'none', technicianVisible: true, siteField: null, visitField: null, organisationWide: true,
     fields: {
       name: office(str(), true), unit: office(str(20), true), category: office(str(60)), code: office(str(40)),
-      costMinor: office(int(0, 100_000_000)), sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office({ kind: 'boolean' }),
+      costMinor: office(int(0, 100_000_000)), sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office(bool),
     },
   },
-  {
+  materialLine: {
     // A part used on a visit: picked from the price list or typed; prices are the office's, on the invoice.
     name: 'materialLine', table: 'material_line', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
     fields: {
@@ -233,15 +252,55 @@ const ENTITY_LIST: readonly EntitySpec[] = [
       description: seen(str(), true), quantity: seen(num(0.001, 100_000), true), unit: seen(str(20)),
     },
   },
-  {
+  conflict: {
     name: 'conflict', table: 'conflict', technicianWrite: 'none', technicianVisible: false, siteField: null, visitField: null, serverOnly: true,
     fields: {},
   },
-];
+} as const satisfies { readonly [E in SyncEntityName]: EntitySpec & { readonly name: E } };
 
-export const SYNC_ENTITIES: Readonly<Record<SyncEntityName, EntitySpec>> = Object.freeze(
-  Object.fromEntries(ENTITY_LIST.map((e) => [e.name, Object.freeze(e)])) as Record<SyncEntityName, EntitySpec>,
-);
+for (const spec of Object.values(REGISTRY)) Object.freeze(spec);
+
+/** The registry as written, with every field name, kind, enum value and `required` kept literal. */
+export type SyncRegistry = typeof REGISTRY;
+export const SYNC_REGISTRY: SyncRegistry = Object.freeze(REGISTRY);
+/** The same registry seen loosely, for code that walks any entity's fields by name (validation, merge, scope). */
+export const SYNC_ENTITIES: Readonly<Record<SyncEntityName, EntitySpec>> = SYNC_REGISTRY;
+
+/** The fields the registry lists for an entity. */
+export type EntityFields<E extends SyncEntityName> = SyncRegistry[E]['fields'];
+export type EntityFieldName<E extends SyncEntityName> = keyof EntityFields<E> & string;
+
+/** The value a field of this type holds (JSON fields: the shape named in the registry, else unknown). */
+export type FieldValueOf<T extends FieldType> = T extends { kind: 'string' | 'datetime' | 'ref' }
+  ? string
+  : T extends { kind: 'number' | 'integer' }
+    ? number
+    : T extends { kind: 'boolean' }
+      ? boolean
+      : T extends { kind: 'enum'; values: readonly (infer V)[] }
+        ? V
+        : T extends { kind: 'refs' }
+          ? string[]
+          : T extends { kind: 'json'; shape?: infer J }
+            ? J
+            : unknown;
+
+type RequiredFieldName<F> = { [K in keyof F]: F[K] extends { required: true } ? K : never }[keyof F];
+type Flat<T> = { -readonly [K in keyof T]: T[K] };
+
+/** The fields a row of the entity holds: required ones always, the rest nullable. */
+export type RowFieldsOf<E extends SyncEntityName, F = EntityFields<E>> = Flat<
+  { [K in RequiredFieldName<F>]: F[K] extends { type: infer T extends FieldType } ? FieldValueOf<T> : never } & {
+    [K in Exclude<keyof F, RequiredFieldName<F>>]: F[K] extends { type: infer T extends FieldType } ? FieldValueOf<T> | null : never;
+  }
+>;
+/** A row of a synced entity, as both sides hold it: its id and the registry's fields. */
+export type RowOf<E extends SyncEntityName> = Flat<{ id: string } & RowFieldsOf<E>>;
+/** A row that may not yet carry its optional fields (a row written on a phone, a draft). */
+export type DraftRowOf<E extends SyncEntityName> = Flat<
+  { id: string } & Pick<RowFieldsOf<E>, RequiredFieldName<EntityFields<E>> & keyof RowFieldsOf<E>> &
+    Partial<RowFieldsOf<E>>
+>;
 
 export function isSyncEntity(name: unknown): name is SyncEntityName {
   return typeof name === 'string' && Object.prototype.hasOwnProperty.call(SYNC_ENTITIES, name);

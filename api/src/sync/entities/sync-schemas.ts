@@ -1,5 +1,5 @@
-import { type FieldType, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
-import { EntitySchema, type EntitySchemaColumnOptions } from 'typeorm';
+import { type FieldType, type RowOf, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
+import { type EntityManager, EntitySchema, type EntitySchemaColumnOptions, type Repository } from 'typeorm';
 import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
@@ -13,8 +13,8 @@ export interface FieldMeta {
   role: string;
 }
 
-/** A synced row as stored: the entity's own fields plus the bookkeeping every synced row carries. */
-export interface SyncRecord {
+/** The bookkeeping every synced row carries beside its own fields. */
+export type SyncBookkeeping = {
   id: string;
   organisationId: string;
   version: number;
@@ -24,8 +24,15 @@ export interface SyncRecord {
   updatedById: string | null;
   createdAt: Date;
   updatedAt: Date;
-  [field: string]: unknown;
-}
+};
+
+/**
+ * A synced row as stored: the registry's fields of the entity plus the bookkeeping. Without an entity it is the
+ * loose row the sync engine walks field by field.
+ */
+export type SyncRecord<E extends SyncEntityName | undefined = undefined> = E extends SyncEntityName
+  ? SyncBookkeeping & RowOf<E>
+  : SyncBookkeeping & { [field: string]: unknown };
 
 function columnFor(type: FieldType, required: boolean): EntitySchemaColumnOptions {
   const nullable = !required;
@@ -96,8 +103,29 @@ function buildSchema(name: SyncEntityName): EntitySchema<SyncRecord> {
   });
 }
 
-export const SYNC_SCHEMAS: Record<SyncEntityName, EntitySchema<SyncRecord>> = Object.fromEntries(
-  SYNC_ENTITY_NAMES.map((n) => [n, buildSchema(n)]),
-) as Record<SyncEntityName, EntitySchema<SyncRecord>>;
+/** Each entity's schema, typed with its own row: `em.getRepository(SYNC_SCHEMAS.job)` reads `SyncRecord<'job'>`. */
+export const SYNC_SCHEMAS: { readonly [E in SyncEntityName]: EntitySchema<SyncRecord<E>> } = {
+  customer: buildSchema('customer'),
+  site: buildSchema('site'),
+  area: buildSchema('area'),
+  board: buildSchema('board'),
+  circuit: buildSchema('circuit'),
+  job: buildSchema('job'),
+  visit: buildSchema('visit'),
+  photo: buildSchema('photo'),
+  note: buildSchema('note'),
+  cableRun: buildSchema('cableRun'),
+  pointChange: buildSchema('pointChange'),
+  testResult: buildSchema('testResult'),
+  document: buildSchema('document'),
+  conflict: buildSchema('conflict'),
+  priceItem: buildSchema('priceItem'),
+  materialLine: buildSchema('materialLine'),
+};
 
-export const ALL_SYNC_SCHEMAS = Object.values(SYNC_SCHEMAS);
+export const ALL_SYNC_SCHEMAS = SYNC_ENTITY_NAMES.map((n) => SYNC_SCHEMAS[n]);
+
+/** The repository of one synced entity, with its rows typed from the registry. */
+export function syncRepository<E extends SyncEntityName>(em: EntityManager, entity: E): Repository<SyncRecord<E>> {
+  return em.getRepository(SYNC_SCHEMAS[entity]);
+}
