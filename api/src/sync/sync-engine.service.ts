@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import {
   decideField,
+  type FieldStamp,
   formatHlc,
   isSyncEntity,
   isUuid,
@@ -15,7 +16,7 @@ import type { EntityManager } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { Role } from '../users/entities/user.entity.js';
 import { AppliedMutation } from './entities/sync-bookkeeping.entity.js';
-import type { FieldMeta, SyncRecord } from './entities/sync-schemas.js';
+import type { SyncRecord } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';
 import { type CheckedMutation, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
 import { type LockRule, RecordLocks } from './record-locks.js';
@@ -191,7 +192,7 @@ export class SyncEngine {
     const { batch, locks } = run;
     checkNewRow(m.entity, set);
     const seq = await batch.nextSeq();
-    const fieldMeta: Record<string, FieldMeta> = {};
+    const fieldMeta: Record<string, FieldStamp> = {};
     for (const field of Object.keys(set)) fieldMeta[field] = { v: seq, hlc: m.hlc, by: actor.userId, role: actor.role };
     const row: SyncRecord = {
       id: m.id, organisationId: actor.organisationId, version: seq, fieldMeta, deletedAt: null, createdById: actor.userId, updatedById: actor.userId,
@@ -304,6 +305,6 @@ export class SyncEngine {
   }
 }
 
-export function versionsOf(meta: Record<string, FieldMeta>): Record<string, number> {
+export function versionsOf(meta: Record<string, FieldStamp>): Record<string, number> {
   return Object.fromEntries(Object.entries(meta).map(([f, m]) => [f, m.v]));
 }
