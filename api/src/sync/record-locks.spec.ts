@@ -1,6 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
 import { SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
-import { DOCUMENT_LOCK } from '../documents/document-lock.js';
 import type { SyncRecord } from './entities/sync-schemas.js';
 import { type LockReads, type LockRule, RecordLocks } from './record-locks.js';
 
@@ -40,10 +39,16 @@ function store(tables: Partial<Record<SyncEntityName, SyncRecord[]>>, waiting: P
   return { source, reads };
 }
 
-const documentRules = new Map<SyncEntityName, LockRule>([['document', DOCUMENT_LOCK]]);
+/** A rule as a feature registers one: issued documents hold themselves, but for their e-mail's progress, and their job. */
+const ISSUED: LockRule = {
+  reason: 'locked-by-document',
+  locksRow: (doc, fields) => doc.issuedAt != null && fields.some((f) => !f.startsWith('email')),
+  locksJob: (doc) => doc.issuedAt != null,
+};
+const documentRules = new Map<SyncEntityName, LockRule>([['document', ISSUED]]);
 
 describe('record locks', () => {
-  it('keeps an issued document as issued, but for how its e-mail is getting on; a draft and a delete are not held', async () => {
+  it('judges a row with a rule of its own by that rule alone; a delete changes no field and is not held', async () => {
     const { source } = store({});
     const locks = new RecordLocks(documentRules, source);
     const issued = row('doc-1', { jobId: 'job-1', issuedAt: '2026-03-14T10:00:00.000Z' });

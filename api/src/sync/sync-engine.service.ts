@@ -74,7 +74,7 @@ export class SyncEngine {
     this.createHooks.set(entity, hook);
   }
 
-  /** Lets a feature keep records from changing while its rows say so (documents: an issued certificate). */
+  /** Lets a feature keep records from changing while its rows say so (an issued certificate, say); see record-locks.ts. */
   lockRule(entity: SyncEntityName, rule: LockRule): void {
     this.lockRules.set(entity, rule);
   }
