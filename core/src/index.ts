@@ -1,4 +1,5 @@
 export * from './check.js';
+export * from './roles.js';
 export * from './rules/rule-set.js';
 export * from './rules/uk-bs7671-2018-a2-2022.js';
 export * from './electrical/conductor-resistance.js';

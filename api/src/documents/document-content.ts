@@ -1,45 +1,11 @@
-import { NotFoundException } from '@nestjs/common';
 import { assessCableRun, type CableRunAssessment, type RuleSet } from '@wiretrail/core';
-import { type EntityManager, In, IsNull } from 'typeorm';
-import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { type EntityManager, In } from 'typeorm';
+import { inTurn } from '../common/in-turn.js';
+import { type JobFile, jobVisits, live, rows } from '../paperwork/job-file.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
 import { judgeMinorWorks, type MinorWorksJudgement } from './minor-works-check.js';
-import { inTurn } from '../common/in-turn.js';
-
-/** Everything about a job that every document prints at its head. */
-export interface JobFile {
-  organisation: Organisation;
-  job: SyncRecord;
-  site: SyncRecord;
-  customer: SyncRecord | null;
-  /** Area names of the site, by id. */
-  areas: Map<string, string>;
-}
-
-const live = (organisationId: string) => ({ organisationId, deletedAt: IsNull() });
-
-function rows(em: EntityManager, entity: string, where: Record<string, unknown>): Promise<SyncRecord[]> {
-  return em.getRepository<SyncRecord>(entity).find({ where: where as never });
-}
-
-/** The job with its site, customer and contractor; another organisation's job is simply not found. */
-export async function loadJobFile(em: EntityManager, organisationId: string, jobId: string): Promise<JobFile> {
-  const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, ...live(organisationId) });
-  if (!job) throw new NotFoundException('No such job.');
-  const [organisation, site, customer, areas] = await inTurn(
-    () => em.findOneByOrFail(Organisation, { id: organisationId }),
-    () => em.getRepository<SyncRecord>('site').findOneOrFail({ where: { id: job.siteId as string, organisationId }, withDeleted: true }),
-    () => em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId }, withDeleted: true }),
-    () => rows(em, 'area', { siteId: job.siteId, organisationId }),
-  );
-  return { organisation, job, site, customer, areas: new Map(areas.map((a) => [a.id, a.name as string])) };
-}
-
-export function jobVisits(em: EntityManager, file: JobFile): Promise<SyncRecord[]> {
-  return rows(em, 'visit', { jobId: file.job.id, ...live(file.organisation.id) });
-}
 
 export interface MinorWorksContent extends MinorWorksJudgement {
   boards: Map<string, string>;

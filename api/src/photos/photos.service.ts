@@ -14,7 +14,8 @@ import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListPhotosQueryDto } from './dto/list-photos-query.dto.js';
 import { PhotoBlob } from './entities/photo-blob.entity.js';
 import { PhotoRefused, processPhoto } from './image-processing.js';
-import { PHOTO_STORAGE, PhotoObjectMissing, type PhotoStorage, photoKey, type StoredVariant } from './storage/photo-storage.js';
+import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
+import { PHOTO_STORAGE, photoKey, type StoredVariant } from '../storage/file-stores.js';
 import { jsonListHas, textLike } from '../database/sql.js';
 
 export interface PhotoPage {
@@ -44,7 +45,7 @@ export class PhotosService implements OnModuleInit {
     private readonly queue: WriteQueue,
     private readonly engine: SyncEngine,
     private readonly scopes: ScopeService,
-    @Inject(PHOTO_STORAGE) private readonly storage: PhotoStorage,
+    @Inject(PHOTO_STORAGE) private readonly storage: FileStorage,
   ) {}
 
   onModuleInit(): void {
@@ -226,7 +227,7 @@ export class PhotosService implements OnModuleInit {
     try {
       return await this.storage.stream(file.key);
     } catch (err) {
-      if (err instanceof PhotoObjectMissing) throw new NotFoundException('The file of this photo is missing from storage.');
+      if (err instanceof StoredFileMissing) throw new NotFoundException('The file of this photo is missing from storage.');
       throw err;
     }
   }

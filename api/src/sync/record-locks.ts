@@ -1,5 +1,4 @@
-import { type EntitySpec, FINISHED_VISIT_STATUS, type SyncEntityName } from '@wiretrail/core';
-import type { Role } from '../users/entities/user.entity.js';
+import { type EntitySpec, FINISHED_VISIT_STATUS, type Role, type SyncEntityName } from '@wiretrail/core';
 import type { SyncRecord } from './entities/sync-schemas.js';
 
 /**

@@ -7,6 +7,7 @@ import {
   isUuid,
   type Mutation,
   type MutationResult,
+  type Role,
   sameDevice,
   sameValue,
   SYNC_ENTITIES,
@@ -14,7 +15,6 @@ import {
 } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
-import type { Role } from '../users/entities/user.entity.js';
 import { AppliedMutation } from './entities/sync-bookkeeping.entity.js';
 import type { SyncRecord } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';

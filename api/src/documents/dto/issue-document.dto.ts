@@ -1,5 +1,5 @@
 import { DOCUMENT_KINDS } from '@wiretrail/core';
-import { ChoiceField } from '../../common/records/record-fields.js';
+import { ChoiceField } from '../../records/record-fields.js';
 
 export type DocumentKind = (typeof DOCUMENT_KINDS)[number];
 

@@ -1,9 +1,11 @@
 import { type CircuitTestLine, type ReadingField, type RuleSet, VERDICT_DISCLAIMER } from '@wiretrail/core';
-import type { JobFile, MinorWorksContent } from '../document-content.js';
+import { MINOR_WORKS_TITLE } from '../../paperwork/document-titles.js';
+import type { JobFile } from '../../paperwork/job-file.js';
+import { INK, type Row } from '../../paperwork/pdf/document-layout.js';
+import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
+import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
+import type { MinorWorksContent } from '../document-content.js';
 import { circuitName, type CertifiedCircuit } from '../minor-works-check.js';
-import { INK, type Row } from './document-layout.js';
-import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from './document-words.js';
-import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
 
 export interface MinorWorksPdf {
   issue: Issue;
@@ -13,8 +15,6 @@ export interface MinorWorksPdf {
   /** The signer's drawing from the phone, already made a PNG. */
   signature: Buffer;
 }
-
-export const MINOR_WORKS_TITLE = 'Minor works certificate';
 
 const UNITS: Partial<Record<ReadingField, string>> = {
   r1Ohm: 'Ω', rnOhm: 'Ω', r2Ohm: 'Ω', r1r2Ohm: 'Ω', irLiveLiveMOhm: 'MΩ', irLiveEarthMOhm: 'MΩ', zsOhm: 'Ω', rcdTripMs: 'ms', rcdTripMs5x: 'ms',

@@ -1,6 +1,6 @@
 import { JOB_STATUSES } from '@wiretrail/core';
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
-import { ChoiceField, DateTimeField, IdField } from '../../common/records/record-fields.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
+import { ChoiceField, DateTimeField, IdField } from '../../records/record-fields.js';
 
 export const JOB_SORTS = ['reference', 'title', 'status', 'customer', 'nextVisit', 'created'] as const;
 export type JobSort = (typeof JOB_SORTS)[number];

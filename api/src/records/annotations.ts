@@ -1,5 +1,5 @@
 import { type EntityManager, In } from 'typeorm';
-import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
+import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import type { OfficeRecord } from './records.service.js';
 
 /**
