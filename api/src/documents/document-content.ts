@@ -1,13 +1,12 @@
-import { assessCableRun, type CableRunAssessment, type RuleSet } from '@wiretrail/core';
+import { assessCableRun, type CableRunAssessment, judgeMinorWorks, type MinorWorksJudgement, type RuleSet } from '@wiretrail/core';
 import { type EntityManager, In } from 'typeorm';
 import { inTurn } from '../common/in-turn.js';
 import { type JobFile, jobVisits, live, rows } from '../paperwork/job-file.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
-import { judgeMinorWorks, type MinorWorksJudgement } from './minor-works-check.js';
 
-export interface MinorWorksContent extends MinorWorksJudgement {
+export interface MinorWorksContent extends MinorWorksJudgement<SyncRecord, SyncRecord, SyncRecord> {
   boards: Map<string, string>;
 }
 
@@ -22,7 +21,8 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
     () => rows(em, 'circuit', { siteId: file.site.id, ...live(org) }),
     () => rows(em, 'board', { siteId: file.site.id, organisationId: org }),
   );
-  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: (file.site.earthing as string) ?? null }, rules);
+  const earthing = typeof file.site.earthing === 'string' ? file.site.earthing : null;
+  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing }, rules);
   return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])) };
 }
 

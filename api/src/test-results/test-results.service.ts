@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { assessCircuitTest, type CircuitReadings, type CircuitUnderTest, DEFAULT_RULE_SET } from '@wiretrail/core';
+import { assessCircuitTest, circuitUnderTest, DEFAULT_RULE_SET, readingsOf } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { circuitLabel, rowsById } from '../records/annotations.js';
@@ -8,10 +8,6 @@ import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListTestResultsQueryDto } from './dto/list-test-results-query.dto.js';
 import { inTurn } from '../common/in-turn.js';
-
-const READINGS = [
-  'r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'irTestVoltageV', 'polarity', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x', 'rcdButton',
-] as const satisfies readonly (keyof CircuitReadings)[];
 
 const CIRCUIT_FIELDS = [
   'boardId', 'number', 'description', 'kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'liveCsaMm2', 'cpcCsaMm2',
@@ -48,10 +44,7 @@ export class TestResultsService extends RecordsService<ListTestResultsQueryDto> 
       const board = boards.get(c?.boardId as string);
       const circuit = c ? { id: c.id, ...pick(c, CIRCUIT_FIELDS), boardName: (board?.name as string | undefined) ?? null, label: circuitLabel(c, board) } : null;
       const earthing = (sites.get(r.siteId as string)?.earthing as string | null | undefined) ?? null;
-      const assessment = assessCircuitTest(
-        { circuit: (circuit ?? {}) as CircuitUnderTest, readings: pick(r, READINGS) as CircuitReadings, earthing },
-        DEFAULT_RULE_SET,
-      );
+      const assessment = assessCircuitTest({ circuit: c ? circuitUnderTest(c) : {}, readings: readingsOf(r), earthing }, DEFAULT_RULE_SET);
       return { ...toSyncedRow(r), circuit, earthing, assessment };
     });
   }
