@@ -42,6 +42,9 @@ function alongside(name, cmd, args, env = {}) {
 const started = Date.now();
 ensureDependencies();
 ensureChromium();
+// The boundaries between packages and features first: a few seconds, and it needs no build.
+console.log('\n▶ lint (import boundaries, typescript-eslint)');
+run('npx', ['eslint', '.']);
 build();
 
 // The API's end-to-end suite runs a second time on PostgreSQL, beside the SQLite run and the web tests: most of

@@ -17,6 +17,7 @@ export * from './sync/hlc.js';
 export * from './sync/entities.js';
 export * from './sync/protocol.js';
 export * from './sync/photos.js';
+export * from './sync/merge.js';
 export * from './electrical/protective-conductor.js';
 export * from './certification/circuit-test.js';
 export * from './certification/circuit-readings.js';

@@ -7,6 +7,7 @@ import { v7 as uuidv7 } from 'uuid';
 import { hashPassword } from '../auth/password.js';
 import { paymentsConfig } from '../config/payments.config.js';
 import { storageConfig } from '../config/storage.config.js';
+import { DOCUMENT_LOCK } from '../documents/document-lock.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
 import { issueDraft, saveDraft } from '../invoices/invoice-issue.js';
 import type { LineDraft } from '../invoices/invoice-lines.js';
@@ -150,6 +151,7 @@ export async function seedDemoData(
   const images = imageNames.length ? await renderDemoImages(new URL('scenes/', typeof scenarioPath === 'string' ? pathToFileURL(resolvePath(scenarioPath)) : scenarioPath), imageNames) : new Map<string, DemoImage>();
   const storage = imageNames.length ? (photoStorage ?? (await createPhotoStorage(storageConfig()))) : null;
   const engine = new SyncEngine(new ScopeService());
+  engine.lockRule('document', DOCUMENT_LOCK);
   const today = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
   let invoices = invoiceStorage;
   await dataSource.transaction(async (em) => {

@@ -27,6 +27,7 @@ import { toSyncedRow } from '../sync/sync.service.js';
 import { User } from '../users/entities/user.entity.js';
 import { loadCableSchedule, loadMinorWorks, loadPhotoRecord } from './document-content.js';
 import type { DocumentKind } from './dto/issue-document.dto.js';
+import { DOCUMENT_LOCK } from './document-lock.js';
 import { cablingReportPdf } from './pdf/cabling-report-pdf.js';
 import { minorWorksPdf } from './pdf/minor-works-pdf.js';
 import { photoRecordPdf } from './pdf/photo-record-pdf.js';
@@ -68,6 +69,7 @@ export class DocumentsService implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
+    this.engine.lockRule('document', DOCUMENT_LOCK);
     this.outbox.register(DOCUMENT_MAIL, {
       attachments: (message) => this.attachment(message),
       settled: (em, message) => this.recordMailState(em, message),

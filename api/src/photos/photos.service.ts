@@ -1,5 +1,5 @@
 import { Inject, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
-import { formatHlc, type SyncedRow } from '@wiretrail/core';
+import type { SyncedRow } from '@wiretrail/core';
 import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import { type EntityManager, In, IsNull } from 'typeorm';
@@ -113,18 +113,15 @@ export class PhotosService implements OnModuleInit {
    */
   private async markReady(em: EntityManager, actor: Actor, blob: PhotoBlob, rows?: SyncRecord[]): Promise<void> {
     const photos = rows ?? (await em.getRepository<SyncRecord>('photo').findBy({ organisationId: blob.organisationId, sha256: blob.sha256, deletedAt: IsNull() }));
+    const writes: Array<{ row: SyncRecord; changes: Record<string, unknown> }> = [];
     for (const row of photos) {
       const changes: Record<string, unknown> = {};
       if (row.uploadState !== 'ready') changes.uploadState = 'ready';
       if (row.width == null || row.height == null) Object.assign(changes, { width: blob.width, height: blob.height });
       if (row.sizeBytes == null) changes.sizeBytes = blob.bytes;
-      if (!Object.keys(changes).length) continue;
-      const seq = await this.engine.updateServerRow(em, 'photo', row, changes, actor);
-      const hlc = formatHlc({ ms: Date.now(), counter: 0, deviceId: 'server' });
-      const fieldMeta = { ...row.fieldMeta };
-      for (const field of Object.keys(changes)) fieldMeta[field] = { v: seq, hlc, by: actor.userId, role: actor.role };
-      await em.getRepository<SyncRecord>('photo').update({ id: row.id }, { fieldMeta } as never);
+      if (Object.keys(changes).length) writes.push({ row, changes });
     }
+    await this.engine.serverWrite(em, actor, 'photo', writes);
   }
 
   /** The office's view of photos, in the order they were taken, with their visit's planned start and who took them. */
