@@ -26,7 +26,7 @@ export function figure(value: number | null, unit: string): string {
 export function AidLine() {
   return (
     <Typography variant="caption" color="text.secondary" component="p" sx={{ m: 0 }}>
-      An aid only: the regulations in force, local codes and licensed practice decide.
+      An aid only: the regulations in force, local codes and a competent person decide.
     </Typography>
   );
 }

@@ -72,7 +72,7 @@ describe('Visit', () => {
     expect(screen.queryByRole('form', { name: 'Add a circuit' })).toBeNull();
     fireEvent.click(screen.getByRole('button', { name: 'I have read these cautions' }));
     expect(await screen.findByRole('form', { name: 'Add a circuit' })).toBeTruthy();
-    expect(screen.getByText(/regulations in force, local codes and licensed practice decide/)).toBeTruthy();
+    expect(screen.getByText(/regulations in force, local codes and a competent person decide/)).toBeTruthy();
     expect((await db.visit.get(ids.visit))!.cautionsReadAt).toBeTruthy();
   });
 

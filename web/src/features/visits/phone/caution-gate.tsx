@@ -15,7 +15,7 @@ const CAUTIONS = [
   'Prove it dead at the point of work with an approved voltage indicator, proved on a known live source or proving unit before and after.',
   'Treat every conductor as live until proven dead: look out for borrowed neutrals, shared neutrals and a second supply.',
   'Live tests (Zs, RCD operation) need the right instrument, leads and care; keep others away from exposed parts.',
-  'Work only within your competence. Wiretrail’s figures are an aid: the regulations in force (in the UK, BS 7671), local codes and licensed practice decide.',
+  'Work only within your competence. Wiretrail’s figures are an aid: the regulations in force (in the UK, BS 7671), local codes and a competent person decide.',
 ];
 
 /**
@@ -39,7 +39,7 @@ export function CautionGate({ visit, locked, children }: { visit: VisitRow; lock
             </Button>
           }
         >
-          Isolate and lock off, prove dead with an approved voltage indicator and work within your competence; the regulations in force, local codes and licensed practice decide.
+          Isolate and lock off, prove dead with an approved voltage indicator and work within your competence; the regulations in force, local codes and a competent person decide.
           {visit.cautionsReadAt ? ` Read at ${readAt.format(new Date(visit.cautionsReadAt))}.` : ''}
           {expanded && (
             <Stack component="ul" spacing={0.75} sx={{ pl: 2.5, mb: 0, mt: 1 }}>
