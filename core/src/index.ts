@@ -29,3 +29,4 @@ export * from './money/aged-debt.js';
 export * from './money/time-on-site.js';
 export * from './money/invoice-standing.js';
 export * from './money/invoices.js';
+export * from './certification/certificate-defaults.js';

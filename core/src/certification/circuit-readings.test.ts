@@ -11,8 +11,10 @@ const RING = { id: 'c1', kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRa
 // RCD ≤ 300 ms at IΔn (Reg 643.8) and ≤ 40 ms at 5 IΔn (BS EN 61008-1, from memory, M).
 const ALL = {
   id: 't1', r1Ohm: 0.37, rnOhm: 0.37, r2Ohm: 0.61, r1r2Ohm: 0.25, irLiveLiveMOhm: 200, irLiveEarthMOhm: 200, irTestVoltageV: 500,
-  polarity: 'correct', zsOhm: 0.52, rcdTripMs: 24, rcdTripMs5x: 12, rcdButton: 'operates',
+  polarity: 'correct', zsOhm: 0.52, rcdTripMs: 24, rcdTripMs5x: 12, rcdButton: 'operates', r2LeadOhm: 0.24, afddButton: 'operates',
 };
+// R2 by the long lead is judged only where R1+R2 was not taken.
+const BY_LEAD = { ...ALL, r1r2Ohm: null };
 
 describe('the catalogue of circuit readings', () => {
   it('lists every reading a test result records, once', () => {
@@ -23,8 +25,8 @@ describe('the catalogue of circuit readings', () => {
   });
 
   it('names, for each reading, lines the circuit test really judges it on, in the unit they judge it in', () => {
-    const { lines } = assessCircuitTest(circuitTestInput(RING, ALL, 'TN-C-S'));
     for (const spec of CIRCUIT_READINGS) {
+      const { lines } = assessCircuitTest(circuitTestInput(RING, spec.field === 'r2LeadOhm' ? BY_LEAD : ALL, 'TN-C-S'));
       for (const key of spec.judgedBy) {
         const line = lines.find((l) => l.key === key);
         expect(line, `${spec.field} on ${key}`).toBeDefined();

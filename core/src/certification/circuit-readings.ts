@@ -48,6 +48,11 @@ export const CIRCUIT_READINGS = [
     judgedBy: ['rcd-5x'], source: (r) => r.rcd.times.general[5].max.source,
   },
   { field: 'rcdButton', label: 'RCD test button', words: 'RCD test button', short: 'button', unit: '', judgedBy: ['rcd-button'], source: (r) => r.circuitTests.rcdButtonSource },
+  { field: 'r2LeadOhm', label: 'R2 (long lead)', words: 'R2', short: 'R2', unit: 'Ω', judgedBy: ['r1r2'], source: (r) => r.circuitTests.protectiveConductorSource },
+  {
+    field: 'afddButton', label: 'AFDD test button', words: 'AFDD test button', short: 'button', unit: '', judgedBy: ['afdd-button'],
+    source: (r) => `${r.edition} Appendix 6 (AFDD test button operation)`,
+  },
 ] as const satisfies readonly CircuitReadingSpec[];
 
 export const CIRCUIT_READING_FIELDS: readonly ReadingField[] = CIRCUIT_READINGS.map((r) => r.field);

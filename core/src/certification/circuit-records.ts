@@ -3,7 +3,7 @@
  * into what the circuit test judges. Fields of the wrong kind count as not recorded, as a blank would.
  */
 import type { PolarityResult } from '../electrical/protective-conductor.js';
-import { POLARITY_RESULTS, RCD_BUTTON_RESULTS, type RowOf, type SyncEntityName } from '../sync/entities.js';
+import { POLARITY_RESULTS, RCD_BUTTON_RESULTS, type RowOf, TEST_BUTTON_RESULTS, type SyncEntityName } from '../sync/entities.js';
 import { CIRCUIT_READING_FIELDS } from './circuit-readings.js';
 import type { CircuitReadings, CircuitTestInput, CircuitUnderTest } from './circuit-test.js';
 
@@ -38,6 +38,7 @@ export function readingsOf(test: LooseRowOf<'testResult'>): CircuitReadings {
     ...figures,
     polarity: oneOf<PolarityResult>(POLARITY_RESULTS, test.polarity),
     rcdButton: oneOf(RCD_BUTTON_RESULTS, test.rcdButton),
+    afddButton: oneOf(TEST_BUTTON_RESULTS, test.afddButton),
   };
 }
 

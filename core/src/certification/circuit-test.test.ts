@@ -93,6 +93,25 @@ describe('assessCircuitTest', () => {
     expect(result.failing.map((l) => l.key)).toEqual(['rcd-button']);
   });
 
+  it('takes R2 by the long lead where R1+R2 was not taken, and still needs one of them (BS 7671:2018+A2:2022 Reg 643.2.1)', () => {
+    const radial: CircuitUnderTest = { ...RING_B32, kind: 'radial' };
+    const { r1r2Ohm: _, ...withoutR1R2 } = PASSING;
+    const byLead = assessCircuitTest({ circuit: radial, readings: { ...withoutR1R2, r2LeadOhm: 0.41 } });
+    const line = byLead.lines.find((l) => l.key === 'r1r2')!;
+    expect(line.fields).toEqual(['r2LeadOhm']);
+    expect(line.result).toMatchObject({ verdict: 'pass', value: 0.41 });
+    expect(byLead.missing).toEqual([]);
+    expect(assessCircuitTest({ circuit: radial, readings: withoutR1R2 }).missing.map((l) => l.key)).toEqual(['r1r2']);
+    expect(assessCircuitTest({ circuit: radial, readings: { ...withoutR1R2, r2LeadOhm: 0 } }).lines.find((l) => l.key === 'r1r2')!.result.verdict).toBe('check');
+  });
+
+  it('fails an AFDD that does not trip from its own button, and judges no AFDD line when the button was not tried (BS 7671:2018+A2:2022 Appendix 6 schedule, from memory)', () => {
+    expect(assessCircuitTest({ circuit: RING_B32, readings: PASSING }).lines.some((l) => l.key === 'afdd-button')).toBe(false);
+    expect(assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, afddButton: 'operates' } }).verdict).toBe('pass');
+    const result = assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, afddButton: 'fails' } });
+    expect(result.failing.map((l) => l.key)).toEqual(['afdd-button']);
+  });
+
   it('says why it cannot judge Zs for a fuse with no sourced table, instead of guessing a limit', () => {
     const fused: CircuitUnderTest = { ...RING_B32, deviceType: 'BS 88-3', deviceRatingA: 30 };
     const zs = assessCircuitTest({ circuit: fused, readings: PASSING }).lines.find((l) => l.key === 'zs')!.result;

@@ -37,6 +37,9 @@ export interface CircuitReadings {
   readonly rcdTripMs?: Reading;
   readonly rcdTripMs5x?: Reading;
   readonly rcdButton?: 'operates' | 'fails' | null;
+  /** R2 by the long-lead method, where R1+R2 was not taken. */
+  readonly r2LeadOhm?: Reading;
+  readonly afddButton?: 'operates' | 'fails' | null;
 }
 
 export type ReadingField = keyof CircuitReadings;
@@ -51,7 +54,8 @@ export type CircuitTestKey =
   | 'zs'
   | 'rcd-1x'
   | 'rcd-5x'
-  | 'rcd-button';
+  | 'rcd-button'
+  | 'afdd-button';
 
 export interface CircuitTestLine {
   readonly key: CircuitTestKey;
@@ -127,8 +131,13 @@ export function assessCircuitTest(input: CircuitTestInput, rules: RuleSet = DEFA
     }
   }
 
-  add('r1r2', 'R1+R2 (protective conductor continuity)', ['r1r2Ohm'], true,
-    guarded(() => checkR1R2({ measured: r.r1r2Ohm, expectedForRing: ring?.expectedR1R2 ?? null }, rules), rules.circuitTests.protectiveConductorSource, 'Ω'));
+  // Either reading shows the protective conductor continuous; R1+R2 is judged when both were taken.
+  if (!given(r.r1r2Ohm) && given(r.r2LeadOhm)) {
+    add('r1r2', 'R2 (protective conductor continuity, long lead)', ['r2LeadOhm'], true, guarded(() => r2LeadLine(r.r2LeadOhm, rules), rules.circuitTests.protectiveConductorSource, 'Ω'));
+  } else {
+    add('r1r2', 'R1+R2 (protective conductor continuity)', ['r1r2Ohm'], true,
+      guarded(() => checkR1R2({ measured: r.r1r2Ohm, expectedForRing: ring?.expectedR1R2 ?? null }, rules), rules.circuitTests.protectiveConductorSource, 'Ω'));
+  }
 
   for (const [key, label, field] of [
     ['ir-live-live', 'Insulation resistance, live to live', 'irLiveLiveMOhm'],
@@ -164,6 +173,19 @@ export function assessCircuitTest(input: CircuitTestInput, rules: RuleSet = DEFA
     }
   }
 
+  // An AFDD is judged by its button when one is fitted and the button was tried.
+  if (given(r.afddButton)) {
+    const ok = r.afddButton === 'operates';
+    add('afdd-button', 'AFDD test button', ['afddButton'], false, {
+      verdict: ok ? 'pass' : 'fail',
+      value: null,
+      limit: null,
+      unit: '',
+      source: `${rules.edition} Appendix 6 (AFDD test button operation)`,
+      note: ok ? 'The AFDD trips from its own test button.' : 'The AFDD does not trip from its test button: replace it.',
+    });
+  }
+
   const counted = lines.filter((l) => l.required || l.fields.every((f) => given(r[f])));
   return {
     ruleSetId: rules.id,
@@ -173,6 +195,13 @@ export function assessCircuitTest(input: CircuitTestInput, rules: RuleSet = DEFA
     failing: counted.filter((l) => l.result.verdict === 'fail'),
     ring,
   };
+}
+
+function r2LeadLine(measured: Reading, rules: RuleSet): CheckResult {
+  const check = checkR1R2({ measured, expectedForRing: null }, rules);
+  if (check.value === null) return { ...check, note: 'Enter R2 to show the protective conductor is continuous.' };
+  if (check.value === 0) return { ...check, note: 'R2 of 0 Ω cannot be right; null the long lead and measure again.' };
+  return { ...check, note: `R2 of ${check.value} Ω by the long lead shows the protective conductor is continuous.` };
 }
 
 function insulationLine(megaohms: Reading, testV: number | null | undefined, liveToEarth: boolean, rules: RuleSet): CheckResult {

@@ -117,6 +117,12 @@ export const DOCUMENT_EMAIL_STATES = ['queued', 'sent', 'failed'] as const;
 export const LINK_KINDS = ['permanent-link', 'channel'] as const;
 export const POLARITY_RESULTS = ['correct', 'incorrect'] as const;
 export const RCD_BUTTON_RESULTS = ['operates', 'fails'] as const;
+/** What a test button does when pressed: the RCD's and the AFDD's alike. */
+export const TEST_BUTTON_RESULTS = RCD_BUTTON_RESULTS;
+/** The installation's earthing conductor as inspected. */
+export const EARTHING_CONDUCTOR_STATES = ['adequate', 'inadequate', 'absent'] as const;
+/** Main protective bonding to one service as inspected; `none` where the building has no such service. */
+export const BONDING_STATES = ['adequate', 'inadequate', 'absent', 'none'] as const;
 /** Test voltages an insulation tester offers (V DC). */
 export const INSULATION_TEST_VOLTAGES = [250, 500, 1000] as const;
 /** A visit's records lock for technicians once it is finished (signed off on site). */
@@ -133,6 +139,10 @@ const REGISTRY = {
       customerId: office(ref('customer'), true), name: office(str()), address: office(str(500), true), postcode: office(str(12)),
       accessNotes: office(text()),
       earthing: seen(oneOf(...EARTHING_ARRANGEMENTS)), zeOhm: seen(num(0, 1000)), pfcKa: seen(num(0, 100)),
+      // The installation's earthing and main bonding as last inspected, carried to every later certificate.
+      earthingConductor: seen(oneOf(...EARTHING_CONDUCTOR_STATES)),
+      bondingWater: seen(oneOf(...BONDING_STATES)), bondingGas: seen(oneOf(...BONDING_STATES)), bondingOil: seen(oneOf(...BONDING_STATES)),
+      bondingSteel: seen(oneOf(...BONDING_STATES)), bondingOther: seen(oneOf(...BONDING_STATES)), bondingOtherWhat: seen(str(100)),
     },
   },
   area: {
@@ -141,7 +151,11 @@ const REGISTRY = {
   },
   board: {
     name: 'board', table: 'board', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
-    fields: { siteId: seen(ref('site'), true), areaId: seen(ref('area')), name: seen(str(), true), description: seen(str(500)) },
+    fields: {
+      siteId: seen(ref('site'), true), areaId: seen(ref('area')), name: seen(str(), true), description: seen(str(500)),
+      // Earth fault loop impedance measured at the board (Zdb).
+      zdbOhm: seen(num(0, 1000)),
+    },
   },
   circuit: {
     name: 'circuit', table: 'circuit', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
@@ -149,6 +163,10 @@ const REGISTRY = {
       siteId: seen(ref('site'), true), boardId: seen(ref('board'), true), number: seen(str(20), true), description: seen(str(500)),
       kind: seen(oneOf(...CIRCUIT_KINDS)), deviceType: seen(oneOf(...PROTECTIVE_DEVICES)), deviceRatingA: seen(num(0.5, 1000)),
       rcdRatingMa: seen(num(1, 3000)), rcdType: seen(str(20)), liveCsaMm2: seen(num(0.5, 400)), cpcCsaMm2: seen(num(0.5, 400)),
+      // What a certificate states of the circuit beyond what its tests need: the devices' product standards, the
+      // RCD's rated current, an AFDD where one is fitted, how the cable is installed and what it serves.
+      deviceStandard: seen(str(40)), rcdStandard: seen(str(40)), rcdRatedCurrentA: seen(num(1, 1000)), afddStandard: seen(str(40)),
+      referenceMethod: seen(str(20)), pointsServed: seen(int(0, 1000)), maxDisconnectionS: seen(num(0.01, 10)),
     },
   },
   job: {
@@ -169,6 +187,9 @@ const REGISTRY = {
       // Sign-off on site: what was done, what was seen, where the work departs from the standard, and who signed.
       workDescription: seen(text()), observations: seen(text()), departures: seen(text()),
       signedByName: seen(str()), signedAt: seen(when), signatureSvg: seen(str(60_000)),
+      // The certificate's declaration names the signer's position; the existing installation is commented on,
+      // and a permitted exception (no fault protection where the regulations allow it) names its risk assessment.
+      signedByPosition: seen(str(100)), existingInstallationComments: seen(text()), permittedExceptions: seen(text()), riskAssessmentRef: seen(str(200)),
     },
   },
   photo: {
@@ -221,6 +242,8 @@ const REGISTRY = {
       irLiveLiveMOhm: seen(num(0, 10_000)), irLiveEarthMOhm: seen(num(0, 10_000)), irTestVoltageV: seen(int(50, 5_000)),
       polarity: seen(oneOf(...POLARITY_RESULTS)), zsOhm: seen(num(0, 2_000)),
       rcdTripMs: seen(num(0, 10_000)), rcdTripMs5x: seen(num(0, 10_000)), rcdButton: seen(oneOf(...RCD_BUTTON_RESULTS)),
+      // Protective conductor continuity by the long-lead method, recorded instead of R1+R2.
+      r2LeadOhm: seen(num(0, 100)), afddButton: seen(oneOf(...TEST_BUTTON_RESULTS)),
       instrument: seen(str(200)), testedAt: seen(when),
       // What the phone's checks said, with the rule set's id; the server works them out again before issuing.
       verdicts: seen(json),
