@@ -30,3 +30,4 @@ export * from './money/time-on-site.js';
 export * from './money/invoice-standing.js';
 export * from './money/invoices.js';
 export * from './certification/certificate-defaults.js';
+export * from './certification/minor-works-declaration.js';

@@ -7,7 +7,8 @@ import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
 
 export interface MinorWorksContent extends MinorWorksJudgement<SyncRecord, SyncRecord, SyncRecord> {
-  boards: Map<string, string>;
+  /** The site's boards by id: their names, and Zdb where it was measured. */
+  boards: Map<string, SyncRecord>;
 }
 
 /** The records behind a minor works certificate, judged; see judgeMinorWorks for when it may be issued. */
@@ -23,7 +24,7 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
   );
   const earthing = typeof file.site.earthing === 'string' ? file.site.earthing : null;
   const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing }, rules);
-  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])) };
+  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b])) };
 }
 
 export interface ScheduledCable {

@@ -1,4 +1,13 @@
-import { type CertifiedCircuit, circuitName, circuitReading, type CircuitTestLine, type RuleSet, VERDICT_DISCLAIMER } from '@wiretrail/core';
+import {
+  type CertifiedCircuit,
+  circuitName,
+  circuitReading,
+  type CircuitTestLine,
+  EXISTING_INSTALLATION_REG,
+  minorWorksDeclaration,
+  PERMITTED_EXCEPTIONS_REG,
+  type RuleSet,
+} from '@wiretrail/core';
 import { MINOR_WORKS_TITLE } from '../../paperwork/document-titles.js';
 import type { JobFile } from '../../paperwork/job-file.js';
 import { INK, type Row } from '../../paperwork/pdf/document-layout.js';
@@ -19,16 +28,41 @@ export interface MinorWorksPdf {
 type Certified = CertifiedCircuit<SyncRecord, SyncRecord, SyncRecord>;
 const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
 
+const text = (v: unknown): string => (typeof v === 'string' ? v.trim() : '');
+const number = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
+
 function deviceWords(c: Certified['circuit']): string {
-  const type = typeof c.deviceType === 'string' ? c.deviceType : '';
-  const rating = typeof c.deviceRatingA === 'number' ? `${c.deviceRatingA} A` : '';
-  if (!type) return rating;
-  return joined([/^[BCD]$/.test(type) ? `Type ${type} circuit-breaker` : `${type} fuse`, rating], ', ');
+  const type = text(c.deviceType);
+  const rating = number(c.deviceRatingA) === null ? '' : `${c.deviceRatingA} A`;
+  const kind = !type ? '' : /^[BCD]$/.test(type) ? `Type ${type} circuit-breaker` : `${type} fuse`;
+  return joined([kind, rating, text(c.deviceStandard)], ', ') || 'Not recorded';
 }
 
 function rcdWords(c: Certified['circuit']): string {
-  if (typeof c.rcdRatingMa !== 'number') return 'None';
-  return joined([`${c.rcdRatingMa} mA`, typeof c.rcdType === 'string' && c.rcdType ? `type ${c.rcdType}` : ''], ' ');
+  if (number(c.rcdRatingMa) === null) return 'None';
+  const rated = number(c.rcdRatedCurrentA);
+  return joined(
+    [joined([`${c.rcdRatingMa} mA`, text(c.rcdType) ? `type ${text(c.rcdType)}` : ''], ' '), rated === null ? '' : `rated ${rated} A`, text(c.rcdStandard)],
+    ', ',
+  );
+}
+
+/** Fault protection is by automatic disconnection wherever a protective device is recorded: every circuit Wiretrail certifies. */
+function faultProtectionWords(c: Certified['circuit']): string {
+  return text(c.deviceType) ? 'Automatic disconnection of supply' : 'Not recorded';
+}
+
+const BONDING_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present', none: 'No such service' };
+const EARTHING_CONDUCTOR_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present' };
+const stateWords = (words: Record<string, string>, v: unknown) => words[text(v)] ?? 'Not recorded';
+
+/** The test buttons' lines are printed even where nothing was tried, so the certificate says why there is no result. */
+function buttonRows(c: Certified): Row[] {
+  const rows: Row[] = [];
+  const keys = new Set(c.assessment.lines.map((l) => l.key));
+  if (!keys.has('rcd-button')) rows.push({ cells: [{ text: 'RCD test button', weight: 'medium' }, number(c.circuit.rcdRatingMa) === null ? 'No RCD' : 'Not tried', '', ''] });
+  if (!keys.has('afdd-button')) rows.push({ cells: [{ text: 'AFDD test button', weight: 'medium' }, text(c.circuit.afddStandard) ? 'Not tried' : 'No AFDD fitted', '', ''] });
+  return rows;
 }
 
 function conductorWords(c: Certified['circuit']): string {
@@ -75,38 +109,54 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     ['Standard it was done to', rules.edition],
   ]);
 
-  layout.heading('Supply and earthing at the site');
+  const texts = (field: string) => visits.map((v) => text(v[field])).filter(Boolean);
+
+  layout.heading('Supply, earthing and bonding at the site');
   const { site } = file;
+  const boardsOf = [...new Set(circuits.map((c) => c.circuit.boardId as string))].map((id) => content.boards.get(id)).filter((b) => !!b);
+  const zdb = boardsOf.map((b) => (number(b.zdbOhm) === null ? `${String(b.name)}: not recorded` : `${String(b.name)}: ${b.zdbOhm} Ω`));
   layout.fields(
     [
-      ['Earthing arrangement', typeof site.earthing === 'string' ? site.earthing : 'Not recorded'],
-      ['External earth fault loop impedance Ze', typeof site.zeOhm === 'number' ? `${site.zeOhm} Ω` : 'Not recorded'],
-      ['Prospective fault current', typeof site.pfcKa === 'number' ? `${site.pfcKa} kA` : 'Not recorded'],
+      ['Earthing arrangement', text(site.earthing) || 'Not recorded'],
+      ['External earth fault loop impedance Ze', number(site.zeOhm) === null ? 'Not recorded' : `${site.zeOhm} Ω`],
+      ['Prospective fault current', number(site.pfcKa) === null ? 'Not recorded' : `${site.pfcKa} kA`],
+      ['Earth fault loop impedance at the board Zdb', zdb.join('; ') || 'Not recorded'],
+      ['Earthing conductor', stateWords(EARTHING_CONDUCTOR_WORDS, site.earthingConductor)],
+      ['Main bonding to water', stateWords(BONDING_WORDS, site.bondingWater)],
+      ['Main bonding to gas', stateWords(BONDING_WORDS, site.bondingGas)],
+      ['Main bonding to oil', stateWords(BONDING_WORDS, site.bondingOil)],
+      ['Main bonding to structural steel', stateWords(BONDING_WORDS, site.bondingSteel)],
+      [
+        text(site.bondingOtherWhat) ? `Main bonding to other parts: ${text(site.bondingOtherWhat)}` : 'Main bonding to other parts',
+        stateWords(BONDING_WORDS, site.bondingOther),
+      ],
     ],
     3,
   );
 
-  layout.heading(circuits.length === 1 ? 'Circuit altered and tested' : 'Circuits altered and tested');
-  layout.table(
-    [
-      { header: 'Board and circuit', width: 1.3 },
-      { header: 'Description', width: 1.6 },
-      { header: 'Kind', width: 0.8 },
-      { header: 'Protective device', width: 1.5 },
-      { header: 'RCD', width: 0.9 },
-      { header: 'Live / cpc', width: 0.9 },
-    ],
-    circuits.map((c) => ({
-      cells: [
-        { text: joined([content.boards.get(c.circuit.boardId as string), `circuit ${c.circuit.number ?? '?'}`], ', '), weight: 'medium' },
-        joined([c.circuit.description]),
-        KIND_WORDS[c.circuit.kind as string] ?? '',
-        deviceWords(c.circuit),
-        rcdWords(c.circuit),
-        conductorWords(c.circuit),
+  layout.heading(`Comments on the existing installation (${EXISTING_INSTALLATION_REG})`);
+  layout.paragraph(texts('existingInstallationComments').join('\n\n') || 'None recorded.');
+
+  for (const c of circuits) {
+    const { circuit } = c;
+    layout.heading(`Circuit details: ${circuitName(circuit)}`);
+    const board = content.boards.get(circuit.boardId as string);
+    layout.fields(
+      [
+        ['Board and circuit', joined([board?.name, `circuit ${circuit.number ?? '?'}`], ', ')],
+        ['Kind', KIND_WORDS[circuit.kind as string] ?? 'Not recorded'],
+        ['Method of fault protection', faultProtectionWords(circuit)],
+        ['Protective device', deviceWords(circuit)],
+        ['RCD', rcdWords(circuit)],
+        ['AFDD', text(circuit.afddStandard) ? `Fitted, ${text(circuit.afddStandard)}` : 'None fitted'],
+        ['Live / cpc', conductorWords(circuit) || 'Not recorded'],
+        ['Reference method', text(circuit.referenceMethod) || 'Not recorded'],
+        ['Number of points served', number(circuit.pointsServed) === null ? 'Not recorded' : String(circuit.pointsServed)],
+        ['Maximum disconnection time allowed', number(circuit.maxDisconnectionS) === null ? 'Not recorded' : `${circuit.maxDisconnectionS} s`],
       ],
-    })),
-  );
+      3,
+    );
+  }
 
   for (const c of circuits) {
     layout.heading(`Test results: ${circuitName(c.circuit)}`);
@@ -132,24 +182,34 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
         { header: 'Limit', width: 2 },
         { header: 'Verdict', width: 0.7 },
       ],
-      testRows(c),
+      [...testRows(c), ...buttonRows(c)],
     );
   }
 
-  const texts = (field: string) => visits.map((v) => (typeof v[field] === 'string' ? (v[field] as string).trim() : '')).filter(Boolean);
   layout.heading('Observations');
   layout.paragraph(texts('observations').join('\n\n') || 'None recorded.');
   layout.heading('Departures from the standard');
   layout.paragraph(texts('departures').join('\n\n') || 'None recorded.');
+  layout.heading(`Permitted exceptions (${PERMITTED_EXCEPTIONS_REG})`);
+  const exceptions = texts('permittedExceptions');
+  layout.paragraph(exceptions.join('\n\n') || 'None.');
+  if (exceptions.length) {
+    const references = texts('riskAssessmentRef');
+    layout.fields([['Risk assessment', references.join('; ') || 'Not referenced']], 1);
+  }
 
   const signer = visits[visits.length - 1]!;
-  layout.heading('Sign-off');
+  // The declaration and the signature beneath it stay on one page.
+  layout.ensure(220);
+  layout.heading('Declaration');
+  layout.paragraph(minorWorksDeclaration(rules.edition), 'medium');
   layout.ensure(120);
   const top = layout.y;
   const half = layout.width / 2 - 10;
   layout.fields(
     [
       ['Work done and tested by', String(signer.signedByName)],
+      ['Position', text(signer.signedByPosition) || 'Not given'],
       ['Signed on site', dateTimeWords(signer.signedAt, tz)],
       ['For', file.organisation.name],
     ],
@@ -167,7 +227,8 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   layout.y = Math.max(below, top + 92);
   doc.x = layout.left;
 
-  layout.notice('About the verdicts on this certificate', `${VERDICT_DISCLAIMER} Limits are those of ${rules.name} (Wiretrail rule set ${rules.id}).`);
+  // The verdicts' caution belongs to the app's screens; a signed certificate is the signer's declaration.
+  layout.paragraph(`Limits applied are those of ${rules.name} (Wiretrail rule set ${rules.id}).`, 'regular', INK.muted, 7.5);
   issuedBy(layout, issue, file);
   return layout.finish();
 }

@@ -65,6 +65,7 @@ export function limitWords(line: CircuitTestLine): string {
       if (r.limit === null) return '';
       return r.minimumMs ? `${r.minimumMs}–${figure(r.limit, r.unit)}` : `≤ ${figure(r.limit, r.unit)}`;
     case 'rcd-button':
+    case 'afdd-button':
       return 'trips';
   }
 }
