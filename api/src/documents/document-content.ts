@@ -3,7 +3,7 @@ import { assessCableRun, type CableRunAssessment, type RuleSet } from '@wiretrai
 import { type EntityManager, In, IsNull } from 'typeorm';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
 import { judgeMinorWorks, type MinorWorksJudgement } from './minor-works-check.js';
 import { inTurn } from '../common/in-turn.js';
@@ -11,34 +11,30 @@ import { inTurn } from '../common/in-turn.js';
 /** Everything about a job that every document prints at its head. */
 export interface JobFile {
   organisation: Organisation;
-  job: SyncRecord;
-  site: SyncRecord;
-  customer: SyncRecord | null;
-  /** Area names of the site, by id. */
-  areas: Map<string, string>;
+  job: SyncRecord<'job'>;
+  site: SyncRecord<'site'>;
+  customer: SyncRecord<'customer'> | null;
+  /** Area names of the site, by id (looked up with a reference that may be empty). */
+  areas: ReadonlyMap<string | null, string>;
 }
 
 const live = (organisationId: string) => ({ organisationId, deletedAt: IsNull() });
 
-function rows(em: EntityManager, entity: string, where: Record<string, unknown>): Promise<SyncRecord[]> {
-  return em.getRepository<SyncRecord>(entity).find({ where: where as never });
-}
-
 /** The job with its site, customer and contractor; another organisation's job is simply not found. */
 export async function loadJobFile(em: EntityManager, organisationId: string, jobId: string): Promise<JobFile> {
-  const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, ...live(organisationId) });
+  const job = await syncRepository(em, 'job').findOneBy({ id: jobId, ...live(organisationId) });
   if (!job) throw new NotFoundException('No such job.');
   const [organisation, site, customer, areas] = await inTurn(
     () => em.findOneByOrFail(Organisation, { id: organisationId }),
-    () => em.getRepository<SyncRecord>('site').findOneOrFail({ where: { id: job.siteId as string, organisationId }, withDeleted: true }),
-    () => em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId }, withDeleted: true }),
-    () => rows(em, 'area', { siteId: job.siteId, organisationId }),
+    () => syncRepository(em, 'site').findOneOrFail({ where: { id: job.siteId, organisationId }, withDeleted: true }),
+    () => syncRepository(em, 'customer').findOne({ where: { id: job.customerId, organisationId }, withDeleted: true }),
+    () => syncRepository(em, 'area').find({ where: { siteId: job.siteId, organisationId } }),
   );
-  return { organisation, job, site, customer, areas: new Map(areas.map((a) => [a.id, a.name as string])) };
+  return { organisation, job, site, customer, areas: new Map<string | null, string>(areas.map((a) => [a.id, a.name])) };
 }
 
-export function jobVisits(em: EntityManager, file: JobFile): Promise<SyncRecord[]> {
-  return rows(em, 'visit', { jobId: file.job.id, ...live(file.organisation.id) });
+export function jobVisits(em: EntityManager, file: JobFile): Promise<SyncRecord<'visit'>[]> {
+  return syncRepository(em, 'visit').find({ where: { jobId: file.job.id, ...live(file.organisation.id) } });
 }
 
 export interface MinorWorksContent extends MinorWorksJudgement {
@@ -51,36 +47,36 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
   const visits = await jobVisits(em, file);
   const visitIds = visits.map((v) => v.id);
   const [tests, pointChanges, circuits, boards] = await inTurn(
-    () => visitIds.length ? rows(em, 'testResult', { visitId: In(visitIds), ...live(org) }) : [],
-    () => visitIds.length ? rows(em, 'pointChange', { visitId: In(visitIds), ...live(org) }) : [],
-    () => rows(em, 'circuit', { siteId: file.site.id, ...live(org) }),
-    () => rows(em, 'board', { siteId: file.site.id, organisationId: org }),
+    () => visitIds.length ? syncRepository(em, 'testResult').find({ where: { visitId: In(visitIds), ...live(org) } }) : [],
+    () => visitIds.length ? syncRepository(em, 'pointChange').find({ where: { visitId: In(visitIds), ...live(org) } }) : [],
+    () => syncRepository(em, 'circuit').find({ where: { siteId: file.site.id, ...live(org) } }),
+    () => syncRepository(em, 'board').find({ where: { siteId: file.site.id, organisationId: org } }),
   );
-  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: (file.site.earthing as string) ?? null }, rules);
-  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])) };
+  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: file.site.earthing ?? null }, rules);
+  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name])) };
 }
 
 export interface ScheduledCable {
-  run: SyncRecord;
+  run: SyncRecord<'cableRun'>;
   assessment: CableRunAssessment;
 }
 
 /** The site's cable schedule, every run judged again from its recorded wiremap and length, by label. */
 export async function loadCableSchedule(em: EntityManager, file: JobFile, rules: RuleSet): Promise<ScheduledCable[]> {
-  const runs = await rows(em, 'cableRun', { siteId: file.site.id, ...live(file.organisation.id) });
+  const runs = await syncRepository(em, 'cableRun').find({ where: { siteId: file.site.id, ...live(file.organisation.id) } });
   return runs
-    .sort((a, b) => String(a.label).localeCompare(String(b.label), 'en-GB', { numeric: true }))
+    .sort((a, b) => a.label.localeCompare(b.label, 'en-GB', { numeric: true }))
     .map((run) => ({
       run,
-      assessment: assessCableRun(
-        { medium: run.medium as string, scheme: run.scheme as never, wiremap: run.wiremap as never, lengthM: run.lengthM as number, linkKind: run.linkKind as never },
-        rules,
-      ),
+      assessment: assessCableRun({ medium: run.medium, scheme: run.scheme, wiremap: run.wiremap, lengthM: run.lengthM, linkKind: run.linkKind }, rules),
     }));
 }
 
+/** A photo whose bytes are on the server. */
+export type HeldPhoto = SyncRecord<'photo'> & { sha256: string };
+
 export interface RecordedPhoto {
-  photo: SyncRecord;
+  photo: HeldPhoto;
   takenBy: string;
 }
 
@@ -95,14 +91,14 @@ export interface PhotoRecordContent {
 export async function loadPhotoRecord(em: EntityManager, file: JobFile): Promise<PhotoRecordContent> {
   const org = file.organisation.id;
   const visits = await jobVisits(em, file);
-  const all = visits.length ? await rows(em, 'photo', { visitId: In(visits.map((v) => v.id)), ...live(org) }) : [];
+  const all = visits.length ? await syncRepository(em, 'photo').find({ where: { visitId: In(visits.map((v) => v.id)), ...live(org) } }) : [];
   const hashes = [...new Set(all.map((p) => p.sha256).filter((h): h is string => typeof h === 'string'))];
   const held = hashes.length ? await em.find(PhotoBlob, { where: { organisationId: org, sha256: In(hashes) }, select: { sha256: true } }) : [];
   const have = new Set(held.map((b) => b.sha256));
-  const ready = all.filter((p) => have.has(p.sha256 as string));
+  const ready = all.filter((p): p is HeldPhoto => p.sha256 !== null && have.has(p.sha256));
   const people = await em.find(User, { where: { organisationId: org, id: In([...new Set(ready.map((p) => p.createdById).filter((id): id is string => !!id))]) }, select: { id: true, name: true } });
   const names = new Map(people.map((u) => [u.id, u.name]));
-  const order = (p: SyncRecord) => String(p.takenAt ?? p.createdAt?.toISOString() ?? '');
+  const order = (p: SyncRecord<'photo'>) => String(p.takenAt ?? p.createdAt?.toISOString() ?? '');
   return {
     photos: ready.sort((a, b) => order(a).localeCompare(order(b)) || a.id.localeCompare(b.id)).map((photo) => ({ photo, takenBy: names.get(photo.createdById ?? '') ?? '' })),
     waiting: all.length - ready.length,

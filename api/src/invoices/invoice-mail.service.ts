@@ -21,7 +21,7 @@ import { MailOutbox } from '../mail/mail-outbox.service.js';
 import type { MailAttachment } from '../mail/mail.service.js';
 import type { FileStorage } from '../photos/storage/photo-storage.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { INVOICE_STORAGE } from './invoice-storage.js';
 import { detail, todayFor } from './invoice-accounts.js';
@@ -80,20 +80,20 @@ export class InvoiceMailService implements OnModuleInit {
     });
   }
 
-  private jobDocuments(em: EntityManager, invoice: Invoice): Promise<SyncRecord[]> {
-    return em.getRepository<SyncRecord>('document').find({
+  private jobDocuments(em: EntityManager, invoice: Invoice): Promise<SyncRecord<'document'>[]> {
+    return syncRepository(em, 'document').find({
       where: { jobId: invoice.jobId, organisationId: invoice.organisationId, deletedAt: IsNull(), issuedAt: Not(IsNull()), pdfSha256: Not(IsNull()) },
       order: { issuedAt: 'ASC' },
     });
   }
 
-  private letter(file: JobFile, invoice: Invoice, documents: SyncRecord[], to: string, url: string, expiresAt: string): { subject: string; text: string } {
+  private letter(file: JobFile, invoice: Invoice, documents: SyncRecord<'document'>[], to: string, url: string, expiresAt: string): { subject: string; text: string } {
     const { organisation: org, job, site, customer } = file;
     const tz = org.timeZone;
     const title = INVOICE_NAMES[invoice.kind];
-    const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name as string},` : 'Hello,';
+    const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name},` : 'Hello,';
     const where = [site.address, site.postcode].filter(Boolean).join(', ');
-    const ours = job.reference ? ` (our job ${job.reference as string}, “${job.title as string}”)` : '';
+    const ours = job.reference ? ` (our job ${job.reference}, “${job.title}”)` : '';
     const opening =
       invoice.kind === 'invoice'
         ? `Attached is invoice ${invoice.number} for ${formatMoney(invoice.grossMinor)} for the work at ${where}${ours}. Please pay by ${day(invoice.dueDate, tz)}.`
@@ -105,7 +105,7 @@ export class InvoiceMailService implements OnModuleInit {
       greeting,
       '',
       opening,
-      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${DOCUMENT_TITLES[d.kind as string] ?? 'Document'} ${d.number as string}`).join(', ')}.`] : []),
+      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${DOCUMENT_TITLES[d.kind] ?? 'Document'} ${d.number}`).join(', ')}.`] : []),
       '',
       `You can see the job's record, with its photos and documents${card ? ', and pay by card' : ''}, at this link until ${dateWords(expiresAt, tz)}:`,
       url,
@@ -130,7 +130,7 @@ export class InvoiceMailService implements OnModuleInit {
     const files: Array<[FileStorage, IssuedFile]> = [[this.invoices, invoice], ...documents.map((d): [FileStorage, IssuedFile] => [this.documents, d])];
     for (const [storage, f] of files) {
       const bytes = await storage.get(documentKey(message.organisationId, f.id));
-      if (sha256(bytes) !== f.pdfSha256) throw new Error(`The stored PDF of ${f.number as string} does not match the fingerprint recorded when it was issued, so it was not sent.`);
+      if (sha256(bytes) !== f.pdfSha256) throw new Error(`The stored PDF of ${f.number} does not match the fingerprint recorded when it was issued, so it was not sent.`);
       attached.push({ filename: pdfFilename(f), content: bytes, contentType: 'application/pdf' });
     }
     return attached;
