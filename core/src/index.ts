@@ -26,3 +26,5 @@ export * from './money/invoice-standing.js';
 export * from './money/invoices.js';
 export * from './contracts/conflicts.js';
 export * from './contracts/shared-job.js';
+export * from './contracts/records.js';
+export * from './contracts/jobs.js';

@@ -1,11 +1,11 @@
 import { Injectable } from '@nestjs/common';
-import { JOB_STATUSES } from '@wiretrail/core';
+import { JOB_STATUSES, type JobSort, type JobStatusCounts } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { type Condition, type Listing, type OfficeRow, RecordsService } from '../common/records/records.service.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
-import type { JobFiltersDto, JobSort, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
+import type { JobFiltersDto, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
 import { inTurn } from '../common/in-turn.js';
 
 /** Visits still to do: the next visit of a job is the earliest of these. */
@@ -24,11 +24,6 @@ const SORTS: Record<JobSort, string> = {
   nextVisit: NEXT_VISIT,
   created: 'createdAt',
 };
-
-export interface StatusCounts {
-  counts: Record<(typeof JOB_STATUSES)[number], number>;
-  total: number;
-}
 
 @Injectable()
 export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
@@ -52,9 +47,10 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
   }
 
   /** The number of jobs in each status under the same filters, for the board's columns. */
-  async statusCounts(user: AuthUser, q: JobFiltersDto): Promise<StatusCounts> {
+  async statusCounts(user: AuthUser, q: JobFiltersDto): Promise<JobStatusCounts> {
     const found = await this.countBy(user, { ...q, status: undefined } as ListJobsQueryDto, 'status');
-    const counts = Object.fromEntries(JOB_STATUSES.map((s) => [s, found.get(s) ?? 0])) as StatusCounts['counts'];
+    const counts: JobStatusCounts['counts'] = { enquiry: 0, booked: 0, 'on-site': 0, paperwork: 0, done: 0, cancelled: 0 };
+    for (const s of JOB_STATUSES) counts[s] = found.get(s) ?? 0;
     return { counts, total: [...found.values()].reduce((a, b) => a + b, 0) };
   }
 
