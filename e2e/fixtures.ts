@@ -1,26 +1,58 @@
+import { fileURLToPath } from 'node:url';
 import { type APIRequestContext, type Browser, type BrowserContext, type Page, test as base } from '@playwright/test';
+import { OfficeJobPage } from './pages/office-job-page.js';
 import { DEMO_PASSWORD, SignInPage } from './pages/sign-in-page.js';
+import { TechnicianVisitPage } from './pages/technician-visit-page.js';
+
+export { waitForServiceWorker } from './pages/technician-visit-page.js';
 
 export const PHONE = { width: 390, height: 844 };
 export const DESK = { width: 1440, height: 900 };
 
-export const test = base.extend<{ signInPage: SignInPage }>({
+/** The demo user who stands for each role; `tests/auth.setup.ts` signs each in once per run. */
+export const ROLE_USERS = {
+  admin: 'admin@larkfield.example',
+  office: 'office@larkfield.example',
+  technician: 'tech1@larkfield.example',
+} as const;
+export type Role = keyof typeof ROLE_USERS;
+
+/** Where the setup keeps a role's signed-in browser state (its session in localStorage). */
+export function signedInState(role: Role): string {
+  return fileURLToPath(new URL(`./.auth/${role}.json`, import.meta.url));
+}
+
+/**
+ * A browser of someone else's with nothing in it. Contexts a test makes take the test's options, its saved session
+ * included, so a customer's phone or a newcomer's device says it has none.
+ */
+export const SIGNED_OUT = { cookies: [], origins: [] };
+
+interface Fixtures {
+  /** Opens every page of the test already signed in as this role; null (the default) starts signed out. */
+  signedInAs: Role | null;
+  signInPage: SignInPage;
+  technicianVisit: TechnicianVisitPage;
+  officeJob: OfficeJobPage;
+}
+
+export const test = base.extend<Fixtures>({
+  signedInAs: [null, { option: true }],
+  storageState: async ({ signedInAs, storageState }, use) => {
+    await use(signedInAs ? signedInState(signedInAs) : storageState);
+  },
   signInPage: async ({ page }, use) => {
     await use(new SignInPage(page));
+  },
+  technicianVisit: async ({ page }, use) => {
+    await use(new TechnicianVisitPage(page));
+  },
+  officeJob: async ({ page }, use) => {
+    await use(new OfficeJobPage(page));
   },
 });
 
 export { expect } from '@playwright/test';
-
-/** Waits until the service worker controls the page, so that a reload offline is served by it alone. */
-export async function waitForServiceWorker(page: Page): Promise<void> {
-  await page.evaluate(async () => {
-    await navigator.serviceWorker.ready;
-    if (!navigator.serviceWorker.controller) {
-      await new Promise<void>((resolve) => navigator.serviceWorker.addEventListener('controllerchange', () => resolve(), { once: true }));
-    }
-  });
-}
 
 /** Signs in through the API, as a device would, and returns the session. */
 export async function apiSession(request: APIRequestContext, email: string, password = DEMO_PASSWORD): Promise<{ accessToken: string; user: { id: string } }> {
@@ -29,13 +61,11 @@ export async function apiSession(request: APIRequestContext, email: string, pass
   return res.json();
 }
 
-/** A second person at a desk-sized browser, signed in through the sign-in page; close the context when done. */
-export async function signedInAtDesk(browser: Browser, email: string): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext({ viewport: DESK, serviceWorkers: 'block' });
+/** A second person at a desk-sized browser, already signed in as the role, on their start screen; close the context when done. */
+export async function signedInAtDesk(browser: Browser, role: Role): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext({ viewport: DESK, serviceWorkers: 'block', storageState: signedInState(role) });
   const page = await context.newPage();
-  const signIn = new SignInPage(page);
-  await signIn.goto();
-  await signIn.signIn(email);
+  await page.goto('/');
   return { context, page };
 }
 

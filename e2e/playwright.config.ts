@@ -27,7 +27,11 @@ export default defineConfig({
     trace: 'retain-on-failure',
     screenshot: 'only-on-failure',
   },
-  projects: [{ name: 'chromium', use: { browserName: 'chromium' } }],
+  projects: [
+    // Signs each role in once and keeps its session; the specs open pages already signed in (fixtures.ts).
+    { name: 'setup', testMatch: /auth\.setup\.ts$/, use: { browserName: 'chromium' } },
+    { name: 'chromium', use: { browserName: 'chromium' }, dependencies: ['setup'] },
+  ],
   webServer: {
     command: 'node ../scripts/e2e-server.mjs',
     url: `${baseURL}/api/health`,

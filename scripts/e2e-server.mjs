@@ -21,6 +21,9 @@ const env = {
   JWT_SECRET: 'e2e-secret-long-enough-for-signing-tokens-here',
   WEB_DIST: join(root, 'web/dist'),
   SIGN_IN_RATE_LIMIT: '500',
+  // Tests side by side share each role's saved session: an access token that outlived the run's first quarter
+  // hour would be refreshed by one of them, and the others' copies of the rotated refresh token then read as reuse.
+  ACCESS_TOKEN_TTL_SECONDS: '7200',
   SMTP_PORT: smtpPort,
   PUBLIC_URL: `http://127.0.0.1:${port}`,
 };

@@ -2,6 +2,7 @@
 // `npm test`: every test, on a machine that may never have run the project.
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
+import { join } from 'node:path';
 import { build, ensureDependencies, root, run } from './lib.mjs';
 import { canStartPostgres } from './postgres.mjs';
 
@@ -42,6 +43,13 @@ function alongside(name, cmd, args, env = {}) {
 const started = Date.now();
 ensureDependencies();
 ensureChromium();
+// The boundaries between packages and features first: a few seconds, and it needs no build.
+console.log('\n▶ lint (import boundaries, typescript-eslint)');
+if (!existsSync(join(root, 'node_modules/.bin/eslint'))) {
+  console.error('ESLint is not installed here though package-lock.json lists it: run npm install (or npm ci) first.');
+  process.exit(1);
+}
+run('npm', ['run', 'lint']);
 build();
 
 // The API's end-to-end suite runs a second time on PostgreSQL, beside the SQLite run and the web tests: most of

@@ -20,9 +20,9 @@ import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
 import { appConfig, authConfig, mailConfig } from './config/app.config.js';
 import { databaseConfig } from './config/database.config.js';
-import { documentsConfig } from './config/documents.config.js';
 import { paymentsConfig } from './config/payments.config.js';
 import { photosConfig } from './config/photos.config.js';
+import { storageConfig } from './config/storage.config.js';
 import { validateEnvironment } from './config/env.validation.js';
 import { databaseOptions } from './database/typeorm-options.js';
 import { ConflictsModule } from './conflicts/conflicts.module.js';
@@ -63,7 +63,7 @@ function webAppModules(): DynamicModule[] {
       cache: true,
       ignoreEnvFile: process.env.NODE_ENV === 'test',
       validate: validateEnvironment,
-      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig, documentsConfig, paymentsConfig],
+      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig, storageConfig, paymentsConfig],
     }),
     TypeOrmModule.forRootAsync({
       inject: [databaseConfig.KEY],

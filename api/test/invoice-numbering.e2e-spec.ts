@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import { DocumentCounter } from '../src/documents/entities/document-counter.entity.js';
+import { DocumentCounter } from '../src/paperwork/entities/document-counter.entity.js';
 import { Invoice } from '../src/invoices/entities/invoice.entity.js';
 import { bearer, jobByReference } from './document-helpers.js';
 import { draft, fixedLine } from './invoice-helpers.js';

@@ -3,7 +3,8 @@ import { MAX_PHOTO_BYTES, type SyncedRow } from '@wiretrail/core';
 import type { Server } from 'node:http';
 import sharp from 'sharp';
 import { v7 as uuidv7 } from 'uuid';
-import { PHOTO_STORAGE, type PhotoStorage, photoKey } from '../src/photos/storage/photo-storage.js';
+import type { FileStorage } from '../src/storage/file-storage.js';
+import { PHOTO_STORAGE, photoKey } from '../src/storage/file-stores.js';
 import {
   bearer,
   createUpload,
@@ -51,7 +52,7 @@ export function describePhotoStorage(driver: string, under: StorageUnderTest, mo
     let tech1: Session;
     let tech2: Session;
     let oakmere: Session;
-    let storage: PhotoStorage;
+    let storage: FileStorage;
     let officeView: DeviceMirror;
     /** The demo visit of that job that the technician is booked on. */
     const visitOf = (title: string, s: Session) => {
@@ -84,7 +85,7 @@ export function describePhotoStorage(driver: string, under: StorageUnderTest, mo
       tech1 = await signIn(t, 'tech1@larkfield.example');
       tech2 = await signIn(t, 'tech2@larkfield.example');
       oakmere = await signIn(t, 'admin@oakmere.example');
-      storage = t.app.get<PhotoStorage>(PHOTO_STORAGE);
+      storage = t.app.get<FileStorage>(PHOTO_STORAGE);
       officeView = new DeviceMirror('office-photo-desk');
       await officeView.pullAll(t, office);
       Object.assign(ctx, { t, office, admin: await signIn(t, 'admin@larkfield.example'), tech1, tech2, oakmere, officeView });

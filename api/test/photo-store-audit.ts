@@ -84,7 +84,7 @@ export async function auditPhotoStore(db: DatabaseProbe, photoDir: string, uploa
   for (const file of existsSync(uploadDir) ? readdirSync(uploadDir) : []) {
     if (!file.endsWith('.json')) continue;
     const id = file.slice(0, -'.json'.length);
-    let info: { size?: number } = {};
+    let info: { size?: number };
     try {
       info = JSON.parse(readFileSync(join(uploadDir, file), 'utf8')) as { size?: number };
     } catch {

@@ -45,7 +45,6 @@ describe('sync: push and pull', () => {
   it('round-trips a row of every entity a device may write', async () => {
     const ids: Record<string, string> = {};
     const make = (entity: string) => (ids[entity] = uuidv7());
-    const orchard = site('Orchard Rise');
     const v = visitAt('Orchard Rise', (p) => p >= new Date().toISOString().slice(0, 10));
     const batch = [
       mutation('customer', make('customer'), { name: 'Round Trip Ltd', phone: '01632 960 999' }),

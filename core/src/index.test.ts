@@ -31,4 +31,8 @@ describe('@wiretrail/core public API', () => {
     expect(new core.InvalidInputError('lengthM', 'must not be negative')).toBeInstanceOf(Error);
     expect(core.VERDICT_DISCLAIMER.length).toBeGreaterThan(0);
   });
+
+  it('exports the role names the server and the app both decide by', () => {
+    expect(core.ROLES).toEqual(['admin', 'office', 'technician']);
+  });
 });

@@ -1,11 +1,11 @@
 import type { APIRequestContext } from '@playwright/test';
 import { apiSession, DESK, expect, test } from '../fixtures.js';
 
-test.use({ viewport: DESK });
+test.use({ viewport: DESK, signedInAs: 'office' });
 
 const tokenFor = async (request: APIRequestContext, email: string) => (await apiSession(request, email)).accessToken;
 
-test('the office settles two offline edits of the same circuit, side by side', async ({ page, request, signInPage }) => {
+test('the office settles two offline edits of the same circuit, side by side', async ({ page, request }) => {
   test.setTimeout(60_000);
   const stamp = Date.now().toString(36);
   // Both technicians are on tomorrow's practice visit, so both may record its circuits.
@@ -20,8 +20,7 @@ test('the office settles two offline edits of the same circuit, side by side', a
   expect((await push(tech1, 'phonea', '2026-12-02T10:00:00.000Z', `Comms cabinet, 16 A radial (${stamp})`)).ok()).toBe(true);
   expect((await push(tech2, 'phoneb', '2026-12-02T10:03:00.000Z', `Server cupboard (${stamp})`)).ok()).toBe(true);
 
-  await signInPage.goto();
-  await signInPage.signIn('office@larkfield.example');
+  await page.goto('/');
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Conflicts' }).click();
   const card = page.getByRole('article', { name: 'Circuit · Description' }).filter({ hasText: stamp });
   await expect(card).toContainText('Changed on two devices before either had synced');

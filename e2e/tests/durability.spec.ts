@@ -1,10 +1,10 @@
 import type { APIRequestContext, BrowserContext, Page, Route } from '@playwright/test';
 import { createHash } from 'node:crypto';
 import { noisyPhoto } from '../camera-photos.js';
-import { apiSession, bookVisit, expect, officeRows, PHONE, type PulledChange, test, waitForServiceWorker } from '../fixtures.js';
-import type { SignInPage } from '../pages/sign-in-page.js';
+import { apiSession, bookVisit, expect, officeRows, PHONE, ROLE_USERS, type PulledChange, test } from '../fixtures.js';
+import { TechnicianVisitPage } from '../pages/technician-visit-page.js';
 
-test.use({ viewport: PHONE });
+test.use({ viewport: PHONE, signedInAs: 'technician' });
 
 /**
  * The phone's tab is reloaded, then closed, while a sync is under way: each time a request is held open with
@@ -38,23 +38,17 @@ async function holdRequests(page: Page, url: string, method: string) {
   return state;
 }
 
-async function openOwnVisit(page: Page, signInPage: SignInPage, title: string): Promise<string> {
-  await signInPage.goto();
-  await signInPage.signIn('tech1@larkfield.example');
-  await expect(page.getByRole('heading', { name: 'Today', level: 1 })).toBeVisible();
-  await waitForServiceWorker(page);
-  await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
-  await page.getByRole('region', { name: 'My visits' }).getByRole('link', { name: new RegExp(title.replace(/[()]/g, '.')) }).click();
-  await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
-  return page.url().split('/').pop()!;
+async function openOwnVisit(visitPage: TechnicianVisitPage, title: string): Promise<string> {
+  await visitPage.openToday();
+  return visitPage.openFromToday(title);
 }
 
 /** The tab closed and the app opened again in a new one, on the same phone (the same browser profile). */
-async function reopen(context: BrowserContext, page: Page, visitId: string, title: string): Promise<Page> {
+async function reopen(context: BrowserContext, page: Page, visitId: string, title: string): Promise<TechnicianVisitPage> {
   await page.close();
-  const again = await context.newPage();
-  await again.goto(`/visits/${visitId}`);
-  await expect(again.getByRole('heading', { level: 1, name: title })).toBeVisible();
+  const again = new TechnicianVisitPage(await context.newPage());
+  await again.page.goto(`/visits/${visitId}`);
+  await again.expectVisit(title);
   return again;
 }
 
@@ -64,38 +58,32 @@ function writtenOnce(row: PulledChange): boolean {
   return versions.length > 0 && versions.every((v) => v === row.row!.version);
 }
 
-async function addNote(page: Page, text: string): Promise<void> {
-  await page.getByLabel('Note', { exact: true }).fill(text);
-  await page.getByRole('button', { name: 'Add note' }).click();
-  await expect(page.getByRole('list', { name: 'Trail of this visit' }).getByText(text)).toBeVisible();
-}
-
-test('notes typed while a push is in flight survive a reload and a closed tab, and reach the server once', async ({ page, context, request, signInPage }) => {
+test('notes typed while a push is in flight survive a reload and a closed tab, and reach the server once', async ({ page, context, request, technicianVisit: visitPage }) => {
   test.setTimeout(120_000);
   const stamp = Date.now().toString(36);
   const title = `Sockets moved in the hall (${stamp})`;
-  await bookVisit(request, { technicianEmail: 'tech1@larkfield.example', siteName: 'Orchard Rise', title });
-  const visitId = await openOwnVisit(page, signInPage, title);
+  await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title });
+  const visitId = await openOwnVisit(visitPage, title);
   const notes = [`Hall socket moved 300 mm left (${stamp})`, `Cable clipped in the safe zone (${stamp})`, `Old back box filled (${stamp})`];
 
   // First push: the server takes it and applies it, but its answer never reaches the phone; the page reloads.
   const pushes = await holdRequests(page, '**/api/sync/push', 'POST');
   pushes.next('forward');
-  await addNote(page, notes[0]!);
+  await visitPage.addNote(notes[0]!);
   await pushes.held;
-  await addNote(page, notes[1]!);
+  await visitPage.addNote(notes[1]!);
   await page.reload();
-  for (const text of notes.slice(0, 2)) await expect(page.getByRole('list', { name: 'Trail of this visit' }).getByText(text)).toBeVisible();
+  for (const text of notes.slice(0, 2)) await expect(visitPage.trail.getByText(text)).toBeVisible();
   await expect(page.getByText('Up to date')).toBeVisible({ timeout: 30_000 });
 
   // Second push: held before it reaches the server, and the tab is closed under it.
   pushes.next('hold');
-  await addNote(page, notes[2]!);
+  await visitPage.addNote(notes[2]!);
   await pushes.held;
   const reopened = await reopen(context, page, visitId, title);
 
-  for (const text of notes) await expect(reopened.getByRole('list', { name: 'Trail of this visit' }).getByText(text)).toBeVisible();
-  await expect(reopened.getByText('Up to date')).toBeVisible({ timeout: 30_000 });
+  for (const text of notes) await expect(reopened.trail.getByText(text)).toBeVisible();
+  await expect(reopened.page.getByText('Up to date')).toBeVisible({ timeout: 30_000 });
   const rows = (await officeRows(request)).filter((c) => c.entity === 'note' && !c.deleted && notes.includes(c.row?.text as string));
   expect(rows.map((r) => r.row!.text).sort()).toEqual([...notes].sort());
   for (const r of rows) {
@@ -114,14 +102,14 @@ async function photoOnServer(request: APIRequestContext, caption: string): Promi
   return { row: page.items[0]!, original: await original.body() };
 }
 
-test('a photo survives a reload and a closed tab while its chunks are in flight, resumes, and arrives once with its own hash', async ({ page, context, request, signInPage }) => {
+test('a photo survives a reload and a closed tab while its chunks are in flight, resumes, and arrives once with its own hash', async ({ page, context, request, technicianVisit: visitPage }) => {
   // A large photo is scaled in the browser on a small machine: give it time.
   test.setTimeout(180_000);
   const stamp = Date.now().toString(36);
   const title = `Photos of the consumer unit (${stamp})`;
   const caption = `Consumer unit before the new RCBO (${stamp})`;
-  await bookVisit(request, { technicianEmail: 'tech1@larkfield.example', siteName: 'Orchard Rise', title });
-  const visitId = await openOwnVisit(page, signInPage, title);
+  await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title });
+  const visitId = await openOwnVisit(visitPage, title);
 
   // The first chunk reaches the server; its answer does not reach the phone, and the page reloads under it.
   const chunks = await holdRequests(page, '**/api/uploads/**', 'PATCH');
@@ -135,14 +123,13 @@ test('a photo survives a reload and a closed tab while its chunks are in flight,
   // After the reload the upload carries on from the server's offset; that chunk is held and the tab closed.
   chunks.next('hold');
   await page.reload();
-  const trail = (p: Page) => p.getByRole('list', { name: 'Trail of this visit' }).getByRole('listitem').filter({ hasText: caption });
-  await expect(trail(page)).toContainText('Waiting');
+  await expect(visitPage.trailEntry(caption)).toContainText('Waiting');
   // Resumed, not started again: the first chunk is not sent twice.
   expect(await chunks.held).toBeGreaterThan(0);
   const reopened = await reopen(context, page, visitId, title);
 
-  await expect(trail(reopened)).toContainText('On server', { timeout: 60_000 });
-  await expect(reopened.getByText('Up to date')).toBeVisible({ timeout: 30_000 });
+  await expect(reopened.trailEntry(caption)).toContainText('On server', { timeout: 60_000 });
+  await expect(reopened.page.getByText('Up to date')).toBeVisible({ timeout: 30_000 });
   const { row, original } = await photoOnServer(request, caption);
   expect(row).toMatchObject({ visitId, uploadState: 'ready', caption });
   expect(createHash('sha256').update(original).digest('hex')).toBe(row.sha256);

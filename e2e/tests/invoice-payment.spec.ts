@@ -1,4 +1,4 @@
-import { bookVisit, DESK, expect, PHONE, signedInAtDesk, test } from '../fixtures.js';
+import { bookVisit, DESK, expect, PHONE, SIGNED_OUT, signedInAtDesk, test } from '../fixtures.js';
 
 const PORT = Number(process.env.E2E_PORT ?? 3100);
 /** scripts/e2e-server.mjs puts the mail fake's messages on the web port + 1001. */
@@ -11,7 +11,7 @@ test('the office issues an invoice, the customer pays it by card from their link
   // A job of this test's own, so that no other test's invoices get in the way.
   const title = `Porch light and switch (billing test ${Date.now().toString(36)})`;
   const { jobId } = await bookVisit(request, { technicianEmail: 'tech2@larkfield.example', siteName: 'Fernhill Close', title });
-  const office = await signedInAtDesk(browser, 'office@larkfield.example');
+  const office = await signedInAtDesk(browser, 'office');
   const page = office.page;
   await expect(page).toHaveURL(/\/jobs$/);
 
@@ -60,7 +60,7 @@ test('the office issues an invoice, the customer pays it by card from their link
   const link = new URL(/https?:\/\/\S+\/shared\/[A-Za-z0-9_-]{43}/.exec(text)![0]);
 
   // The customer, on a phone, with no account and nothing shared with the office's browser.
-  const customer = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block' });
+  const customer = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block', storageState: SIGNED_OUT });
   const phone = await customer.newPage();
   await phone.goto(link.pathname);
   await expect(phone.getByRole('heading', { level: 1, name: title })).toBeVisible();

@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import { apiSession, DESK, expect, test } from '../fixtures.js';
 
-test.use({ viewport: DESK });
+test.use({ viewport: DESK, signedInAs: 'office' });
 
 const T568A = ['white-green', 'green', 'white-orange', 'blue', 'white-blue', 'orange', 'white-brown', 'brown'];
 const T568B = ['white-orange', 'orange', 'white-green', 'blue', 'white-blue', 'green', 'white-brown', 'brown'];
@@ -12,7 +12,7 @@ function uuidv7(): string {
   return `${ms.slice(0, 8)}-${ms.slice(8)}-7${hex(3)}-${'89ab'[Math.floor(Math.random() * 4)]}${hex(3)}-${hex(12)}`;
 }
 
-test('the office works the jobs board and table, reads a job’s cable schedule as CSV, and edits a site', async ({ page, request, signInPage }) => {
+test('the office works the jobs board and table, reads a job’s cable schedule as CSV, and edits a site', async ({ page, request, officeJob }) => {
   test.setTimeout(90_000);
   // The server may be reused between runs: this run's records carry its own stamp.
   const stamp = Date.now().toString(36).slice(-5).toUpperCase();
@@ -39,14 +39,12 @@ test('the office works the jobs board and table, reads a job’s cable schedule 
   });
   expect((await pushed.json()).results.map((r: { status: string }) => r.status)).toEqual(['applied', 'applied']);
 
-  await signInPage.goto();
-  await signInPage.signIn('office@larkfield.example');
+  await page.goto('/');
 
   // The board: a column per open status, each job a card.
   await expect(page.getByRole('heading', { name: 'Jobs', level: 1 })).toBeVisible();
-  const booked = page.getByRole('region', { name: 'Booked' });
-  await expect(booked.getByRole('article', { name: /LED-0041/ })).toContainText('Orchard Rise');
-  await expect(page.getByRole('region', { name: 'On site' }).getByRole('article', { name: /LED-0042/ })).toBeVisible();
+  await expect(officeJob.boardCard('Booked', /LED-0041/)).toContainText('Orchard Rise');
+  await expect(officeJob.boardCard('On site', /LED-0042/)).toBeVisible();
   await page.screenshot({ path: test.info().outputPath('desk-board.png') });
 
   // The table: filtered by technician and sorted by reference, newest reference first, on the server.
@@ -69,18 +67,15 @@ test('the office works the jobs board and table, reads a job’s cable schedule 
 
   // The job, its cable schedule with the fault named, and the schedule as CSV.
   await grid.getByRole('link', { name: /Cat6 to reception/ }).click();
-  await expect(page.getByRole('heading', { level: 1, name: /Cat6 to reception/ })).toBeVisible();
-  await page.getByRole('tab', { name: 'Cable schedule' }).click();
-  const schedule = page.getByRole('grid', { name: 'Cable schedule' });
-  const crossed = schedule.getByRole('row', { name: new RegExp(`X${stamp}-1`) });
+  await officeJob.expectJob(/Cat6 to reception/);
+  await officeJob.tab('Cable schedule');
+  const crossed = officeJob.cableRow(`X${stamp}-1`);
   await expect(crossed).toContainText('Crossed pairs, pins 1, 2, 3, 6 (near end)');
   await expect(crossed).toContainText('Surgery 1 · Wall plate, by the chair');
   await expect(crossed).toContainText('Fail');
-  await expect(schedule.getByRole('row', { name: new RegExp(`X${stamp}-2`) })).toContainText('Pass');
+  await expect(officeJob.cableRow(`X${stamp}-2`)).toContainText('Pass');
   await page.screenshot({ path: test.info().outputPath('desk-cable-schedule.png') });
-  const download = page.waitForEvent('download');
-  await page.getByRole('button', { name: 'Export CSV' }).click();
-  const file = await download;
+  const file = await officeJob.exportCableSchedule();
   expect(file.suggestedFilename()).toMatch(/^LED-0042-brightwater-dental-harbour-yard-cable-schedule-\d{4}-\d{2}-\d{2}\.csv$/);
   const csv = (await readFile(await file.path())).toString('utf8').replace(/^\uFEFF/, '');
   const lines = csv.split('\r\n');

@@ -1,7 +1,7 @@
 import { v7 as uuidv7 } from 'uuid';
-import { apiSession, DESK, expect, PHONE, test } from '../fixtures.js';
+import { apiSession, DESK, expect, PHONE, SIGNED_OUT, test } from '../fixtures.js';
 
-test.use({ viewport: DESK });
+test.use({ viewport: DESK, signedInAs: 'office' });
 
 /** The mail fake that the test server starts beside the API (scripts/e2e-server.mjs): its web inbox. */
 const MAIL_INBOX = `http://127.0.0.1:${Number(process.env.E2E_PORT ?? 3100) + 1001}/messages`;
@@ -17,7 +17,7 @@ test('the office reviews a finished job, settles a conflict, issues the certific
   page,
   request,
   browser,
-  signInPage,
+  officeJob: job,
 }) => {
   test.setTimeout(150_000);
   const stamp = Date.now().toString(36);
@@ -39,28 +39,26 @@ test('the office reviews a finished job, settles a conflict, issues the certific
   });
   expect((await pushed.json()).results[0]).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)] });
 
-  await signInPage.goto();
-  await signInPage.signIn('office@larkfield.example');
+  await page.goto('/');
 
   // The job the technician finished waits in the paperwork column.
-  const card = page.getByRole('region', { name: 'Paperwork' }).getByRole('article', { name: /LED-0033/ });
+  const card = job.boardCard('Paperwork', /LED-0033/);
   await expect(card).toBeVisible();
-  await card.getByRole('link', { name: /Extra double socket in the front bedroom/ }).click();
-  await expect(page.getByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeVisible();
+  await job.openFromCard(card, /Extra double socket in the front bedroom/);
+  await job.expectJob('Extra double socket in the front bedroom');
   await shot('job-overview');
 
   // Its photo trail and the site's cable schedule.
-  await page.getByRole('tab', { name: 'Photo trail' }).click();
-  const trail = page.getByRole('region', { name: 'Photo trail' });
+  await job.tab('Photo trail');
+  const trail = job.photoTrail;
   await expect(trail.getByRole('img', { name: /Route chased down/ })).toBeVisible();
   await shot('job-photo-trail');
-  await page.getByRole('tab', { name: 'Cable schedule' }).click();
-  const schedule = page.getByRole('grid', { name: 'Cable schedule' });
-  await expect(schedule.getByRole('row', { name: /OR-01/ })).toBeVisible();
+  await job.tab('Cable schedule');
+  await expect(job.cableRow(/OR-01/)).toBeVisible();
   await shot('job-cable-schedule');
 
   // The reading changed after signing is a conflict on this job: the signed value stays.
-  await page.getByRole('link', { name: /^Settle/ }).click();
+  await job.openConflicts();
   const conflict = page.getByRole('article').filter({ hasText: `Borrowed tester (${stamp})` });
   await expect(conflict).toContainText(/after the visit was finished and signed|after a certificate or report was issued/);
   await shot('job-conflict');
@@ -69,20 +67,17 @@ test('the office reviews a finished job, settles a conflict, issues the certific
   await page.goBack();
 
   // Issue the certificate: the server judges the readings again and numbers it.
-  await expect(page.getByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeVisible();
-  await page.getByRole('tab', { name: 'Documents & links' }).click();
-  await page.getByRole('button', { name: 'Issue minor works certificate' }).click();
-  await page.getByRole('dialog', { name: 'Issue the minor works certificate?' }).getByRole('button', { name: 'Issue' }).click();
-  const issued = page.getByRole('table', { name: 'Issued documents' });
-  const row = issued.getByRole('row').filter({ hasText: 'Minor works certificate' }).first();
+  await job.expectJob('Extra double socket in the front bedroom');
+  await job.issueMinorWorksCertificate();
+  const issued = job.issuedDocuments;
+  const row = job.documentRow('Minor works certificate');
   await expect(row).toBeVisible({ timeout: 20_000 });
   const number = (await row.getByRole('cell').first().innerText()).trim();
   expect(number).toMatch(/^MW-\d{4}$/);
   await shot('job-documents');
 
   // E-mail it to the customer: the mail carries the PDF and a link to the job's record.
-  await issued.getByRole('button', { name: `E-mail ${number} to the customer` }).click();
-  const send = page.getByRole('dialog', { name: /E-mail/ });
+  const send = await job.openEmail(number);
   await expect(send.getByLabel('To')).toHaveValue('hannah.greaves@example.com');
   await send.getByRole('button', { name: 'Send' }).click();
   await expect(issued.getByRole('row', { name: new RegExp(number) })).toContainText('Sent', { timeout: 30_000 });
@@ -101,7 +96,7 @@ test('the office reviews a finished job, settles a conflict, issues the certific
   expect(link).toBeTruthy();
 
   // The customer opens the link on their phone, with no account.
-  const customer = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block' });
+  const customer = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block', storageState: SIGNED_OUT });
   try {
     const phone = await customer.newPage();
     await phone.goto(new URL(link!).pathname);

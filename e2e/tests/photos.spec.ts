@@ -1,8 +1,9 @@
-import type { Locator, Page } from '@playwright/test';
+import type { Locator } from '@playwright/test';
 import { cameraJpeg, exifToday } from '../camera-photos.js';
-import { expect, PHONE, signedInAtDesk, test, waitForServiceWorker } from '../fixtures.js';
+import { expect, PHONE, signedInAtDesk, test } from '../fixtures.js';
+import { OfficeJobPage } from '../pages/office-job-page.js';
 
-test.use({ viewport: PHONE });
+test.use({ viewport: PHONE, signedInAs: 'technician' });
 
 /** The image has been decoded and drawn (not a broken or empty picture). */
 async function expectDrawn(img: Locator): Promise<void> {
@@ -10,14 +11,10 @@ async function expectDrawn(img: Locator): Promise<void> {
   await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).complete && (el as HTMLImageElement).naturalWidth > 0)).toBe(true);
 }
 
-function trailPhoto(page: Page, caption: string): Locator {
-  return page.getByRole('list', { name: 'Trail of this visit' }).getByRole('listitem').filter({ hasText: caption });
-}
-
 test('a technician adds photos with no signal; they upload once online, and the office sees them in the job’s photo trail', async ({
   page,
   context,
-  signInPage,
+  technicianVisit: visitPage,
   browser,
 }, testInfo) => {
   // Three camera-sized photos are scaled in the browser on a small machine: give it time.
@@ -34,20 +31,14 @@ test('a technician adds photos with no signal; they upload once online, and the 
     photos.map(async (p, i) => ({ name: `IMG_20${i}.jpg`, mimeType: 'image/jpeg', buffer: await cameraJpeg(`Photo ${i + 1}`, p.wall, p.taken, p.orientation) })),
   );
 
-  await signInPage.goto();
-  await signInPage.signIn('tech1@larkfield.example');
-  await expect(page.getByRole('heading', { name: 'Today', level: 1 })).toBeVisible();
-  await waitForServiceWorker(page);
-  await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
-  await page.getByRole('region', { name: 'My visits' }).getByRole('link', { name: /Move two lounge sockets/ }).click();
-  await expect(page.getByRole('heading', { level: 1, name: /Move two lounge sockets/ })).toBeVisible();
+  await visitPage.openToday();
+  await visitPage.openFromToday(/Move two lounge sockets/);
   await expect(page.getByRole('heading', { level: 2, name: 'Trail' })).toBeVisible();
 
-  await context.setOffline(true);
-  await expect(page.getByText('No signal — saving on this phone')).toBeVisible();
+  await visitPage.goOffline(context);
 
   await page.getByLabel('Take or add photos').setInputFiles(files);
-  const form = page.getByRole('form', { name: 'Photo details' });
+  const form = visitPage.photoForm;
   await expect(form.getByRole('heading', { name: '3 photos' })).toBeVisible();
   for (const [i, p] of photos.entries()) await form.getByLabel(`Caption for photo ${i + 1}`).fill(p.caption);
   await form.getByLabel('Area').selectOption({ label: 'Lounge' });
@@ -61,43 +52,43 @@ test('a technician adds photos with no signal; they upload once online, and the 
   await expect(page.getByText('3 photos saved on this phone.')).toBeVisible();
 
   for (const p of photos) {
-    await expect(trailPhoto(page, p.caption)).toContainText('Waiting');
-    await expect(trailPhoto(page, p.caption)).toContainText('Lounge');
-    await expect(trailPhoto(page, p.caption)).toContainText('route');
-    await expectDrawn(trailPhoto(page, p.caption).getByRole('img', { name: p.caption }));
+    await expect(visitPage.trailEntry(p.caption)).toContainText('Waiting');
+    await expect(visitPage.trailEntry(p.caption)).toContainText('Lounge');
+    await expect(visitPage.trailEntry(p.caption)).toContainText('route');
+    await expectDrawn(visitPage.trailEntry(p.caption).getByRole('img', { name: p.caption }));
   }
   await expect(page.getByText('No signal — saving on this phone · 3 waiting')).toBeVisible();
 
   // Reloaded with no network: the photos, their thumbnails and their state come from the phone.
   await page.reload();
-  await expect(page.getByRole('heading', { level: 1, name: /Move two lounge sockets/ })).toBeVisible();
+  await visitPage.expectVisit(/Move two lounge sockets/);
   for (const p of photos) {
-    await expect(trailPhoto(page, p.caption)).toContainText('Waiting');
-    await expectDrawn(trailPhoto(page, p.caption).getByRole('img', { name: p.caption }));
+    await expect(visitPage.trailEntry(p.caption)).toContainText('Waiting');
+    await expectDrawn(visitPage.trailEntry(p.caption).getByRole('img', { name: p.caption }));
   }
   await page.screenshot({ path: testInfo.outputPath('phone-trail-offline.png'), fullPage: true });
 
   await context.setOffline(false);
-  for (const p of photos) await expect(trailPhoto(page, p.caption)).toContainText('On server', { timeout: 45_000 });
+  for (const p of photos) await expect(visitPage.trailEntry(p.caption)).toContainText('On server', { timeout: 45_000 });
   await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
   await page.screenshot({ path: testInfo.outputPath('phone-trail-online.png'), fullPage: true });
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Sync' }).click();
+  await visitPage.openSync();
   const photoPanel = page.getByRole('region', { name: 'Photos' });
   await expect(photoPanel.getByText('No photos waiting')).toBeVisible();
   await expect(photoPanel.getByText(/3 photos · [\d.]+ MB/)).toBeVisible();
   await page.screenshot({ path: testInfo.outputPath('phone-sync.png'), fullPage: true });
 
   // At the desk: the job's photo trail, in the order the photos were taken.
-  const { context: desk, page: office } = await signedInAtDesk(browser, 'office@larkfield.example');
+  const { context: desk, page: office } = await signedInAtDesk(browser, 'office');
   try {
-    await office.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
-    const card = office.getByRole('region', { name: 'Booked' }).getByRole('article', { name: /LED-0041/ });
+    const job = new OfficeJobPage(office);
+    await job.openBoard();
+    const card = job.boardCard('Booked', /LED-0041/);
     await expect(card).toContainText('Orchard Rise');
     await office.screenshot({ path: testInfo.outputPath('office-jobs.png') });
-    await card.getByRole('link', { name: /Move two lounge sockets/ }).click();
-    await expect(office.getByRole('heading', { level: 1, name: /Move two lounge sockets/ })).toBeVisible();
-    await office.getByRole('tab', { name: 'Photo trail' }).click();
-    const trail = office.getByRole('region', { name: 'Photo trail' });
+    await job.openFromCard(card, /Move two lounge sockets/);
+    await job.tab('Photo trail');
+    const trail = job.photoTrail;
     // Only this run's photos (the server may be reused between runs).
     const tiles = trail.getByRole('listitem').filter({ hasText: stamp });
     await expect(tiles).toHaveCount(3);

@@ -1,11 +1,10 @@
 import { apiSession, DESK, expect, test } from '../fixtures.js';
 
-test.use({ viewport: DESK });
+test.use({ viewport: DESK, signedInAs: 'office' });
 
-test('the office books a visit for a technician and their phone receives it', async ({ page, request, signInPage }) => {
+test('the office books a visit for a technician and their phone receives it', async ({ page, request }) => {
   test.setTimeout(60_000);
-  await signInPage.goto();
-  await signInPage.signIn('office@larkfield.example');
+  await page.goto('/');
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Schedule' }).click();
   const grid = page.getByRole('grid', { name: 'Visits this week' });
   await expect(grid.getByRole('row', { name: 'Sam Brannigan' })).toContainText('LED-0041');

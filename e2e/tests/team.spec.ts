@@ -1,16 +1,15 @@
-import { DESK, expect, test } from '../fixtures.js';
+import { DESK, expect, SIGNED_OUT, test } from '../fixtures.js';
 import { SignInPage } from '../pages/sign-in-page.js';
 
-test.use({ viewport: DESK });
+test.use({ viewport: DESK, signedInAs: 'admin' });
 
 const MAIL = `http://127.0.0.1:${Number(process.env.E2E_PORT ?? 3100) + 1001}/messages`;
 
-test('the admin adds a technician, who sets their own password from the e-mailed link', async ({ page, request, signInPage, browser }) => {
+test('the admin adds a technician, who sets their own password from the e-mailed link', async ({ page, request, browser }) => {
   test.setTimeout(60_000);
   const stamp = Date.now().toString(36);
   const email = `new.${stamp}@larkfield.example`;
-  await signInPage.goto();
-  await signInPage.signIn('admin@larkfield.example');
+  await page.goto('/');
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team' }).click();
 
   await page.getByRole('button', { name: 'Add a person' }).click();
@@ -38,7 +37,7 @@ test('the admin adds a technician, who sets their own password from the e-mailed
     .not.toBe('');
 
   // The new technician opens the link on their own device.
-  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block' });
+  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block', storageState: SIGNED_OUT });
   try {
     const own = await phone.newPage();
     await own.goto(new URL(link).pathname + new URL(link).search);

@@ -1,9 +1,9 @@
 import type { Page, TestInfo } from '@playwright/test';
 import sharp from 'sharp';
-import { bookVisit, expect, officeRows, PHONE, test, waitForServiceWorker } from '../fixtures.js';
+import { bookVisit, expect, officeRows, PHONE, ROLE_USERS, test } from '../fixtures.js';
 
 // SCREEN_SCHEME=dark runs it in the dark theme, for the screenshots of a dark cupboard.
-test.use({ viewport: PHONE, colorScheme: process.env.SCREEN_SCHEME === 'dark' ? 'dark' : 'light' });
+test.use({ viewport: PHONE, colorScheme: process.env.SCREEN_SCHEME === 'dark' ? 'dark' : 'light', signedInAs: 'technician' });
 
 /** A small photo of a wall with a back box, drawn here. */
 async function wallPhoto(colour: string): Promise<Buffer> {
@@ -17,57 +17,35 @@ async function shot(page: Page, testInfo: TestInfo, name: string): Promise<void>
   await page.screenshot({ path: testInfo.outputPath(`${name}.png`), fullPage: true });
 }
 
-async function pickColour(page: Page, end: string, pin: number, colour: string): Promise<void> {
-  const escaped = end.replace(/[()]/g, '\\$&');
-  await page.getByRole('button', { name: new RegExp(`^${escaped} pin ${pin}:`) }).click();
-  await page.getByRole('dialog', { name: new RegExp(`pin ${pin}: colour seen`) }).getByRole('button', { name: colour, exact: true }).click();
-}
-
-async function sign(page: Page): Promise<void> {
-  const canvas = page.getByLabel('Signature box: sign with your finger');
-  // Mid-screen, clear of the bottom navigation, as a thumb would have it.
-  await canvas.evaluate((el) => el.scrollIntoView({ block: 'center' }));
-  const box = (await canvas.boundingBox())!;
-  await page.mouse.move(box.x + 30, box.y + 120);
-  await page.mouse.down();
-  for (let i = 1; i <= 20; i++) await page.mouse.move(box.x + 30 + i * 12, box.y + 120 - Math.sin(i / 2) * 40, { steps: 2 });
-  await page.mouse.up();
-}
-
 test('a whole visit on a phone with no signal: cables, a moved socket, readings, a fused spur, photos and sign-off reach the office', async ({
   page,
   context,
   request,
-  signInPage,
+  technicianVisit: visitPage,
 }, testInfo) => {
   test.setTimeout(240_000);
   const stamp = Date.now().toString(36);
   const title = `Move a lounge socket, add a spur for a heater, and patch the TV (${stamp})`;
   const goodCable = `TV-${stamp.slice(-4)}A`;
   const splitCable = `TV-${stamp.slice(-4)}B`;
-  const { visitId } = await bookVisit(request, { technicianEmail: 'tech1@larkfield.example', siteName: 'Orchard Rise', title, startHour: 14, endHour: 17 });
+  const { visitId } = await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 14, endHour: 17 });
 
-  await signInPage.goto();
-  await signInPage.signIn('tech1@larkfield.example');
-  await expect(page.getByRole('heading', { name: 'Today', level: 1 })).toBeVisible();
-  await waitForServiceWorker(page);
-  await expect(page.getByText('Up to date')).toBeVisible({ timeout: 20_000 });
-  const card = page.getByRole('article', { name: title });
+  await visitPage.openToday();
+  const card = visitPage.visitCard(title);
   await expect(card).toBeVisible({ timeout: 20_000 });
 
   // No signal from here until the visit is signed.
-  await context.setOffline(true);
-  await expect(page.getByText('No signal — saving on this phone')).toBeVisible();
+  await visitPage.goOffline(context);
   await card.getByRole('button', { name: 'I’m on site' }).click();
   await expect(card.getByText('On site')).toBeVisible();
   await shot(page, testInfo, 'today');
   await card.getByRole('link', { name: /^Open / }).click();
-  await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
+  await visitPage.expectVisit(title);
 
   // A data cable terminated T568B at both ends: the wiremap passes.
-  await page.getByRole('tab', { name: 'Cables' }).click();
+  await visitPage.section('Cables');
   await page.getByRole('link', { name: 'Record a cable' }).click();
-  const cableForm = page.getByRole('form', { name: 'Record a cable' });
+  const cableForm = visitPage.cableForm;
   await cableForm.getByLabel('Label', { exact: true }).fill(goodCable);
   await cableForm.getByLabel('Medium').selectOption('Cat6');
   await cableForm.getByLabel('End A area').selectOption({ label: 'Lounge' });
@@ -96,8 +74,8 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await cableForm.getByRole('button', { name: 'Both ends as T568B' }).click();
   for (const end of ['End A (Lounge)', 'End B (Cupboard under stairs)']) {
     await cableForm.getByRole('button', { name: end, exact: true }).click();
-    await pickColour(page, end, 4, 'green');
-    await pickColour(page, end, 6, 'blue');
+    await visitPage.pickColour(end, 4, 'green');
+    await visitPage.pickColour(end, 6, 'blue');
   }
   await cableForm.getByRole('button', { name: 'From a TDR reading' }).click();
   await cableForm.getByLabel('Round trip (ns)').fill('180');
@@ -121,15 +99,15 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await page.goBack();
 
   // Points: the cautions come first, once.
-  await page.getByRole('tab', { name: 'Points' }).click();
+  await visitPage.section('Points');
   await expect(page.getByRole('heading', { name: 'Before you work on a circuit' })).toBeVisible();
   await shot(page, testInfo, 'cautions');
-  await page.getByRole('button', { name: 'I have read these cautions' }).click();
+  await visitPage.readCautions();
   await expect(page.getByText(/prove dead with an approved voltage indicator/)).toBeVisible();
 
   // The socket moved along the wall by extending the ring: the predicted readings show before the test.
   await page.getByRole('link', { name: 'Record a point change' }).click();
-  const pointForm = page.getByRole('form', { name: 'Record a point change' });
+  const pointForm = visitPage.pointForm;
   await pointForm.getByRole('button', { name: 'Moved', exact: true }).click();
   await pointForm.getByLabel('Accessory').fill('Twin socket-outlet');
   await pointForm.getByLabel('Where it was: area').selectOption({ label: 'Lounge' });
@@ -153,7 +131,7 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await pointForm.getByRole('button', { name: 'Save new point change' }).click();
   await expect(page.getByRole('heading', { name: 'Point change' })).toBeVisible();
   await page.getByLabel('Photograph this point').setInputFiles({ name: 'IMG_0101.jpg', mimeType: 'image/jpeg', buffer: await wallPhoto('#6d7f63') });
-  const photoForm = page.getByRole('form', { name: 'Photo details' });
+  const photoForm = visitPage.photoForm;
   await photoForm.getByLabel('Caption').fill(`Moved socket before plastering (${stamp})`);
   await expect(photoForm.getByLabel('Shows')).toHaveValue(/^pointChange:/);
   await photoForm.getByRole('button', { name: 'Save photo' }).click();
@@ -180,9 +158,8 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await shot(page, testInfo, 'points');
 
   // Readings for the ring: continuity passes, but Zs is above 80 % of the Table 41.3 maximum for a B32.
-  await page.getByRole('tab', { name: 'Circuits & tests' }).click();
-  await page.getByRole('list', { name: 'Circuits on this site' }).getByRole('link', { name: /^1 · Sockets, ground floor/ }).click();
-  const readings = page.getByRole('form', { name: 'Readings for circuit 1' });
+  await visitPage.section('Circuits & tests');
+  const readings = await visitPage.openReadings(/^1 · Sockets, ground floor/, 1);
   await expect(readings.getByText('Predicted after this visit’s extension: r1 0.56 Ω, rn 0.56 Ω, r2 0.92 Ω.')).toBeVisible();
   await readings.getByLabel('r1 (Ω)', { exact: true }).fill('0.56');
   await readings.getByLabel('rn (Ω)', { exact: true }).fill('0.56');
@@ -217,19 +194,19 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await expect(page.getByText('Readings saved on this phone.')).toBeVisible();
 
   // Photos on the trail, and everything recorded so far, newest first.
-  await page.getByRole('tab', { name: 'Trail' }).click();
+  await visitPage.section('Trail');
   await page.getByLabel('Take or add photos').setInputFiles({ name: 'IMG_0102.jpg', mimeType: 'image/jpeg', buffer: await wallPhoto('#7b6a55') });
-  await page.getByRole('form', { name: 'Photo details' }).getByLabel('Caption').fill(`Heater spur finished (${stamp})`);
-  await page.getByRole('form', { name: 'Photo details' }).getByRole('button', { name: 'Save photo' }).click();
+  await photoForm.getByLabel('Caption').fill(`Heater spur finished (${stamp})`);
+  await photoForm.getByRole('button', { name: 'Save photo' }).click();
   await expect(page.getByText('Photo saved on this phone.')).toBeVisible({ timeout: 30_000 });
-  const trail = page.getByRole('list', { name: 'Trail of this visit' });
+  const trail = visitPage.trail;
   for (const text of [`Cable ${goodCable}`, `Cable ${splitCable}`, 'Point moved', 'New point', 'Test results', 'Arrived on site', 'Safety cautions read', `Heater spur finished (${stamp})`]) {
     await expect(trail.getByText(text).first()).toBeVisible();
   }
   await shot(page, testInfo, 'trail');
 
   // Sign-off lists the fail, then the technician signs and finishes.
-  await page.getByRole('tab', { name: 'Sign-off' }).click();
+  await visitPage.section('Sign-off');
   const problems = page.getByRole('list', { name: 'Fails and missing readings' });
   await expect(problems).toContainText('Fail: Circuit 1 (Sockets, ground floor): Earth fault loop impedance Zs');
   await expect(problems).toContainText(`Fail: Cable ${splitCable}`);
@@ -242,7 +219,7 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await addPart.getByRole('button', { name: 'Add part' }).click();
   await expect(page.getByRole('list', { name: 'Parts used on this visit' }).getByRole('listitem')).toHaveCount(2);
   await page.getByLabel('Observations').fill('Zs high at the new socket; the ring will be checked at the board on the return visit.');
-  await sign(page);
+  await visitPage.sign();
   await shot(page, testInfo, 'sign-off');
   await page.getByRole('button', { name: 'Finish visit' }).click();
   await page.getByRole('dialog', { name: /Finish with 2 problems listed/ }).getByRole('button', { name: 'Finish anyway' }).click();
@@ -252,7 +229,7 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
 
   // Signal again: everything goes, photos too.
   await context.setOffline(false);
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Sync' }).click();
+  await visitPage.openSync();
   await expect(page.getByText('Nothing waiting')).toBeVisible({ timeout: 45_000 });
   await expect(page.getByText('No photos waiting')).toBeVisible({ timeout: 45_000 });
 

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService } from '../common/records/records.service.js';
+import { type Listing, RecordsService } from '../records/records.service.js';
 import type { ListAreasQueryDto } from './dto/list-areas-query.dto.js';
 
 @Injectable()

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService, type SameSiteRef } from '../common/records/records.service.js';
+import { type Listing, RecordsService, type SameSiteRef } from '../records/records.service.js';
 import type { ListCircuitsQueryDto } from './dto/list-circuits-query.dto.js';
 
 @Injectable()

@@ -90,11 +90,14 @@ export class ConflictsService {
         const [result] = await this.engine.applyAll(em, actor, [mutation]);
         if (result!.status === 'rejected') throw new ConflictException(result!.error);
       }
-      await this.engine.updateServerRow(em, 'conflict', conflict, {
-        resolvedAt: new Date(),
-        resolvedById: user.id,
-        resolution: { choice: dto.choice, ...(dto.choice === 'value' ? { value: dto.value } : {}) },
-      }, actor);
+      await this.engine.serverWrite(em, actor, 'conflict', [{
+        row: conflict,
+        changes: {
+          resolvedAt: new Date(),
+          resolvedById: user.id,
+          resolution: { choice: dto.choice, ...(dto.choice === 'value' ? { value: dto.value } : {}) },
+        },
+      }]);
       return toSyncedRow((await syncRepository(em, 'conflict').findOneByOrFail({ id }))!);
     });
   }

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { type Listing, type OfficeRow, RecordsService } from '../common/records/records.service.js';
+import { type Listing, type OfficeRow, RecordsService } from '../records/records.service.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListCustomersQueryDto } from './dto/list-customers-query.dto.js';

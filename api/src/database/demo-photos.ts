@@ -4,7 +4,8 @@ import sharp from 'sharp';
 import type { EntityManager } from 'typeorm';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import { processPhoto, type ProcessedPhoto } from '../photos/image-processing.js';
-import { type PhotoStorage, photoKey } from '../photos/storage/photo-storage.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { photoKey } from '../storage/file-stores.js';
 
 /** A demo photo: one of our own drawings (seed/scenes/<name>.svg) rendered to a JPEG, as a phone would send it. */
 export interface DemoImage extends ProcessedPhoto {
@@ -27,7 +28,7 @@ export async function renderDemoImages(scenesDir: URL, names: string[]): Promise
 }
 
 /** Stores a demo photo and its sizes for an organisation, exactly as a finished upload is stored. */
-export async function storeDemoImage(em: EntityManager, storage: PhotoStorage, organisationId: string, image: DemoImage): Promise<void> {
+export async function storeDemoImage(em: EntityManager, storage: FileStorage, organisationId: string, image: DemoImage): Promise<void> {
   await Promise.all([
     storage.put(photoKey(organisationId, image.sha256, 'original'), image.original, image.mime),
     storage.put(photoKey(organisationId, image.sha256, 'thumb'), image.thumb, 'image/webp'),

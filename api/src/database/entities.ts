@@ -5,7 +5,7 @@ import { InvoiceLine } from '../invoices/entities/invoice-line.entity.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
 import { PasswordReset } from '../auth/entities/password-reset.entity.js';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
-import { DocumentCounter } from '../documents/entities/document-counter.entity.js';
+import { DocumentCounter } from '../paperwork/entities/document-counter.entity.js';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { LabourRate } from '../pricing/entities/labour-rate.entity.js';

@@ -1,28 +1,28 @@
-import { formatHlc, localDate, type Mutation, type OfficePaymentMethod, type SyncEntityName, UK_VAT_RATES } from '@wiretrail/core';
+import { formatHlc, localDate, type Mutation, type OfficePaymentMethod, type Role, type SyncEntityName, UK_VAT_RATES } from '@wiretrail/core';
 import { readFile } from 'node:fs/promises';
 import { resolve as resolvePath } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { DataSource, EntityManager } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import { hashPassword } from '../auth/password.js';
-import { documentsConfig } from '../config/documents.config.js';
 import { paymentsConfig } from '../config/payments.config.js';
-import { photosConfig } from '../config/photos.config.js';
-import { loadJobFile } from '../documents/document-content.js';
+import { storageConfig } from '../config/storage.config.js';
+import { DOCUMENT_LOCK } from '../documents/document-lock.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
 import { issueDraft, saveDraft } from '../invoices/invoice-issue.js';
-import { createInvoiceStorage } from '../invoices/invoice-storage.js';
 import type { LineDraft } from '../invoices/invoice-lines.js';
 import { linesFromJob } from '../invoices/job-billing.js';
 import { LabourRate } from '../pricing/entities/labour-rate.entity.js';
 import { VatRate } from '../pricing/entities/vat-rate.entity.js';
 import { loadRateBook } from '../pricing/rate-book.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
-import { createPhotoStorage, type FileStorage, type PhotoStorage } from '../photos/storage/photo-storage.js';
+import { loadJobFile } from '../paperwork/job-file.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { createInvoiceStorage, createPhotoStorage } from '../storage/file-stores.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
-import { type Role, User } from '../users/entities/user.entity.js';
+import { User } from '../users/entities/user.entity.js';
 import { type DemoImage, renderDemoImages, storeDemoImage } from './demo-photos.js';
 
 interface ScenarioRecord {
@@ -141,7 +141,7 @@ export async function seedDemoData(
   dataSource: DataSource,
   scenarioPath: string | URL = DEFAULT_SCENARIO,
   now = new Date(),
-  photoStorage?: PhotoStorage,
+  photoStorage?: FileStorage,
   invoiceStorage?: FileStorage,
 ): Promise<boolean> {
   if ((await dataSource.getRepository(Organisation).count()) > 0) return false;
@@ -149,8 +149,9 @@ export async function seedDemoData(
   const passwordHash = await hashPassword(scenario.password);
   const imageNames = scenario.organisations.flatMap((o) => (o.records ?? []).map((r) => imageName(r.set.sha256))).filter((n): n is string => !!n);
   const images = imageNames.length ? await renderDemoImages(new URL('scenes/', typeof scenarioPath === 'string' ? pathToFileURL(resolvePath(scenarioPath)) : scenarioPath), imageNames) : new Map<string, DemoImage>();
-  const storage = imageNames.length ? (photoStorage ?? (await createPhotoStorage(photosConfig()))) : null;
+  const storage = imageNames.length ? (photoStorage ?? (await createPhotoStorage(storageConfig()))) : null;
   const engine = new SyncEngine(new ScopeService());
+  engine.lockRule('document', DOCUMENT_LOCK);
   const today = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate()));
   let invoices = invoiceStorage;
   await dataSource.transaction(async (em) => {
@@ -206,7 +207,7 @@ export async function seedDemoData(
         if (refused.length) throw new Error(`Demo data refused: ${refused.map((r) => r.error).join('; ')}`);
       }
       for (const inv of o.invoices ?? []) {
-        await seedInvoice(em, org.id, inv, { ids, users, names: new Map(o.users.map((u) => [u.email, u.name])), today, images, storage: invoices ??= await createInvoiceStorage(documentsConfig()) });
+        await seedInvoice(em, org.id, inv, { ids, users, names: new Map(o.users.map((u) => [u.email, u.name])), today, images, storage: invoices ??= await createInvoiceStorage(storageConfig()) });
       }
     }
   });

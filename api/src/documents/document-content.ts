@@ -1,43 +1,12 @@
-import { NotFoundException } from '@nestjs/common';
-import { assessCableRun, type CableRunAssessment, type RuleSet } from '@wiretrail/core';
-import { type EntityManager, In, IsNull } from 'typeorm';
-import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { assessCableRun, type CableRunAssessment, judgeMinorWorks, type MinorWorksJudgement, type RuleSet } from '@wiretrail/core';
+import { type EntityManager, In } from 'typeorm';
+import { inTurn } from '../common/in-turn.js';
+import { type JobFile, jobVisits, live } from '../paperwork/job-file.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { User } from '../users/entities/user.entity.js';
-import { judgeMinorWorks, type MinorWorksJudgement } from './minor-works-check.js';
-import { inTurn } from '../common/in-turn.js';
 
-/** Everything about a job that every document prints at its head. */
-export interface JobFile {
-  organisation: Organisation;
-  job: SyncRecord<'job'>;
-  site: SyncRecord<'site'>;
-  customer: SyncRecord<'customer'> | null;
-  /** Area names of the site, by id (looked up with a reference that may be empty). */
-  areas: ReadonlyMap<string | null, string>;
-}
-
-const live = (organisationId: string) => ({ organisationId, deletedAt: IsNull() });
-
-/** The job with its site, customer and contractor; another organisation's job is simply not found. */
-export async function loadJobFile(em: EntityManager, organisationId: string, jobId: string): Promise<JobFile> {
-  const job = await syncRepository(em, 'job').findOneBy({ id: jobId, ...live(organisationId) });
-  if (!job) throw new NotFoundException('No such job.');
-  const [organisation, site, customer, areas] = await inTurn(
-    () => em.findOneByOrFail(Organisation, { id: organisationId }),
-    () => syncRepository(em, 'site').findOneOrFail({ where: { id: job.siteId, organisationId }, withDeleted: true }),
-    () => syncRepository(em, 'customer').findOne({ where: { id: job.customerId, organisationId }, withDeleted: true }),
-    () => syncRepository(em, 'area').find({ where: { siteId: job.siteId, organisationId } }),
-  );
-  return { organisation, job, site, customer, areas: new Map<string | null, string>(areas.map((a) => [a.id, a.name])) };
-}
-
-export function jobVisits(em: EntityManager, file: JobFile): Promise<SyncRecord<'visit'>[]> {
-  return syncRepository(em, 'visit').find({ where: { jobId: file.job.id, ...live(file.organisation.id) } });
-}
-
-export interface MinorWorksContent extends MinorWorksJudgement {
+export interface MinorWorksContent extends MinorWorksJudgement<SyncRecord<'visit'>, SyncRecord<'testResult'>, SyncRecord<'circuit'>> {
   boards: Map<string, string>;
 }
 

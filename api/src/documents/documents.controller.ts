@@ -3,12 +3,12 @@ import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
-import type { FileStorage } from '../photos/storage/photo-storage.js';
+import { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
+import { sendIssuedPdf } from '../paperwork/issued-pdf.js';
 import { DocumentsService } from './documents.service.js';
 import { IssueDocumentDto } from './dto/issue-document.dto.js';
-import { SendDocumentDto } from './dto/send-document.dto.js';
-import { sendIssuedPdf } from './storage/document-files.js';
-import { DOCUMENT_STORAGE } from './storage/document-storage.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { DOCUMENT_STORAGE } from '../storage/file-stores.js';
 
 /** The office's certificates and reports; technicians get document rows (and their e-mail state) through sync. */
 @ApiTags('documents')

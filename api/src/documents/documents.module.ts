@@ -2,17 +2,17 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { MailModule } from '../mail/mail.module.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { PaperworkModule } from '../paperwork/paperwork.module.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import { PhotosModule } from '../photos/photos.module.js';
 import { ShareLinksModule } from '../share-links/share-links.module.js';
+import { StorageModule } from '../storage/storage.module.js';
 import { DocumentsController } from './documents.controller.js';
 import { DocumentsService } from './documents.service.js';
-import { DocumentCounter } from './entities/document-counter.entity.js';
-import { DocumentStorageModule } from './storage/document-storage.module.js';
 
 /** Issuing, keeping and e-mailing the office's documents. Document rows are synced rows (SyncModule). */
 @Module({
-  imports: [TypeOrmModule.forFeature([DocumentCounter, Organisation, PhotoBlob]), MailModule, PhotosModule, ShareLinksModule, DocumentStorageModule],
+  imports: [TypeOrmModule.forFeature([Organisation, PhotoBlob]), PaperworkModule, MailModule, PhotosModule, ShareLinksModule, StorageModule],
   controllers: [DocumentsController],
   providers: [DocumentsService],
 })

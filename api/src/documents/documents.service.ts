@@ -1,33 +1,36 @@
 import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit, UnprocessableEntityException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { DEFAULT_RULE_SET, type SyncedRow } from '@wiretrail/core';
-import { createHash } from 'node:crypto';
 import { type EntityManager, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { officeActor, officeMutation } from '../common/records/records.service.js';
+import { officeActor, officeMutation } from '../records/records.service.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
-import { isLatestMessage, mailState } from '../mail/mail-state.js';
-import { PHOTO_STORAGE, PhotoObjectMissing, type PhotoStorage, photoKey } from '../photos/storage/photo-storage.js';
+import { coveringLetter, theWork } from '../paperwork/covering-letter.js';
+import { CABLING_REPORT_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
+import { takeNextNumber } from '../paperwork/document-numbers.js';
+import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
+import { fingerprint, issuedPdfAttachment } from '../paperwork/issued-pdf.js';
+import { type JobFile, loadJobFile } from '../paperwork/job-file.js';
+import { isLatestMessage, mailState } from '../paperwork/mail-state.js';
+import { dateWords } from '../paperwork/pdf/document-words.js';
+import type { Issue } from '../paperwork/pdf/job-heading.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
+import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
+import { DOCUMENT_STORAGE, documentKey, PHOTO_STORAGE, photoKey } from '../storage/file-stores.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import { User } from '../users/entities/user.entity.js';
-import { type JobFile, loadCableSchedule, loadJobFile, loadMinorWorks, loadPhotoRecord } from './document-content.js';
+import { loadCableSchedule, loadMinorWorks, loadPhotoRecord } from './document-content.js';
 import type { DocumentKind } from './dto/issue-document.dto.js';
-import type { SendDocumentDto } from './dto/send-document.dto.js';
-import { takeNextNumber } from './document-numbers.js';
-import { CABLING_REPORT_TITLE, cablingReportPdf } from './pdf/cabling-report-pdf.js';
-import { dateWords } from './pdf/document-words.js';
-import type { Issue } from './pdf/job-heading.js';
-import { MINOR_WORKS_TITLE, minorWorksPdf } from './pdf/minor-works-pdf.js';
-import { PHOTO_RECORD_TITLE, photoRecordPdf } from './pdf/photo-record-pdf.js';
-import { pdfFilename } from './storage/document-files.js';
-import { DOCUMENT_STORAGE, documentKey } from './storage/document-storage.js';
+import { DOCUMENT_LOCK } from './document-lock.js';
+import { cablingReportPdf } from './pdf/cabling-report-pdf.js';
+import { minorWorksPdf } from './pdf/minor-works-pdf.js';
+import { photoRecordPdf } from './pdf/photo-record-pdf.js';
 import { signatureImage } from './signature-image.js';
 import sharp from 'sharp';
 
@@ -38,8 +41,6 @@ const KINDS: Record<DocumentKind, { prefix: string; title: string }> = {
 };
 
 export const DOCUMENT_MAIL = 'document';
-
-const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
 /** What a document kind puts into the PDF, rendered inside the issuing transaction. */
 interface Rendered {
@@ -62,12 +63,13 @@ export class DocumentsService implements OnModuleInit {
     private readonly engine: SyncEngine,
     private readonly outbox: MailOutbox,
     private readonly shareLinks: ShareLinksService,
-    @Inject(DOCUMENT_STORAGE) private readonly storage: PhotoStorage,
-    @Inject(PHOTO_STORAGE) private readonly photoStorage: PhotoStorage,
+    @Inject(DOCUMENT_STORAGE) private readonly storage: FileStorage,
+    @Inject(PHOTO_STORAGE) private readonly photoStorage: FileStorage,
     @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
   ) {}
 
   onModuleInit(): void {
+    this.engine.lockRule('document', DOCUMENT_LOCK);
     this.outbox.register(DOCUMENT_MAIL, {
       attachments: (message) => this.attachment(message),
       settled: (em, message) => this.recordMailState(em, message),
@@ -94,7 +96,7 @@ export class DocumentsService implements OnModuleInit {
         number,
         title: `${KINDS[kind].title}: ${file.job.title}`.slice(0, 200),
         signerName: rendered.signerName,
-        pdfSha256: sha256(rendered.pdf),
+        pdfSha256: fingerprint(rendered.pdf),
         pdfBytes: rendered.pdf.length,
         issuedAt: issuedAt.toISOString(),
         issuedById: user.id,
@@ -158,7 +160,7 @@ export class DocumentsService implements OnModuleInit {
       const display = await this.photoStorage.get(photoKey(organisationId, sha, 'display'));
       return await sharp(display).resize({ width: 1100, height: 1100, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 78, mozjpeg: true }).toBuffer();
     } catch (err) {
-      if (err instanceof PhotoObjectMissing) throw new ConflictException('A photo of this job is missing from storage; it cannot be printed.');
+      if (err instanceof StoredFileMissing) throw new ConflictException('A photo of this job is missing from storage; it cannot be printed.');
       throw err;
     }
   }
@@ -212,32 +214,21 @@ export class DocumentsService implements OnModuleInit {
   }
 
   private letter(file: JobFile, doc: SyncRecord<'document'>, to: string, url: string, expiresAt: string): { subject: string; text: string } {
-    const { organisation: org, job, site, customer } = file;
+    const org = file.organisation;
     const kind = KINDS[doc.kind].title;
-    const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name},` : 'Hello,';
-    const where = [site.address, site.postcode].filter(Boolean).join(', ');
-    const text = [
-      greeting,
-      '',
-      `Attached is ${kind.toLowerCase()} ${doc.number} for the work at ${where}${job.reference ? ` (our job ${job.reference}, “${job.title}”)` : ''}.`,
+    const text = coveringLetter(file, to, [
+      `Attached is ${kind.toLowerCase()} ${doc.number} for ${theWork(file)}.`,
       '',
       `You can also see the job's record, with its photos and documents, at this link until ${dateWords(expiresAt, org.timeZone)}:`,
       url,
-      '',
-      'Kind regards,',
-      org.name,
-      ...[org.address, [org.phone, org.email].filter(Boolean).join(' · ')].filter((l): l is string => !!l),
-    ].join('\n');
+    ]);
     return { subject: `${kind} ${doc.number} from ${org.name}`, text };
   }
 
   private async attachment(message: OutboxMessage) {
     const doc = await this.queue.read((em) => syncRepository(em, 'document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId }));
     if (!doc?.pdfSha256) throw new Error('The document is no longer on the server.');
-    const bytes = await this.storage.get(documentKey(message.organisationId, doc.id));
-    // What goes to the customer must be exactly what was issued.
-    if (sha256(bytes) !== doc.pdfSha256) throw new Error('The stored PDF does not match the fingerprint recorded when it was issued, so it was not sent.');
-    return [{ filename: pdfFilename(doc), content: bytes, contentType: 'application/pdf' }];
+    return [await issuedPdfAttachment(this.storage, doc)];
   }
 
   /** Writes the outbox's news to the document row through the engine, so it is numbered and every device pulls it. */

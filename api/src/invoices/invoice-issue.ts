@@ -1,21 +1,19 @@
 import { BadRequestException, UnprocessableEntityException } from '@nestjs/common';
 import { addDays, formatMoney, type InvoiceKind, localDate } from '@wiretrail/core';
-import { createHash } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { loadJobFile } from '../documents/document-content.js';
-import { takeNextNumber } from '../documents/document-numbers.js';
-import { documentKey } from '../documents/storage/document-storage.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
-import type { FileStorage } from '../photos/storage/photo-storage.js';
+import { takeNextNumber } from '../paperwork/document-numbers.js';
+import { fingerprint } from '../paperwork/issued-pdf.js';
+import { loadJobFile } from '../paperwork/job-file.js';
 import { loadRateBook } from '../pricing/rate-book.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { documentKey } from '../storage/file-stores.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { InvoiceLine } from './entities/invoice-line.entity.js';
 import { type LineDraft, type PricedLine, priceLines } from './invoice-lines.js';
 import { invoicePdf } from './pdf/invoice-pdf.js';
 
 const PREFIX: Record<InvoiceKind, string> = { quote: 'QU', invoice: 'INV', 'credit-note': 'CN' };
-
-const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
 /** Quotes and invoices ask for money; a credit note gives it back, so its quantities are negative. */
 export const signOf = (kind: InvoiceKind): 1 | -1 => (kind === 'credit-note' ? -1 : 1);
@@ -155,6 +153,6 @@ export async function issueDraft(em: EntityManager, { invoice, issuer, now, stor
     cardPayments,
   });
   await storage.put(documentKey(org.id, invoice.id), pdf, 'application/pdf');
-  Object.assign(invoice, { pdfSha256: sha256(pdf), pdfBytes: pdf.length });
+  Object.assign(invoice, { pdfSha256: fingerprint(pdf), pdfBytes: pdf.length });
   await em.save(invoice);
 }

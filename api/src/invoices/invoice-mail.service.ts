@@ -1,35 +1,30 @@
 import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { formatMoney, type InvoiceDetail, INVOICE_NAMES } from '@wiretrail/core';
-import { createHash } from 'node:crypto';
 import { type EntityManager, IsNull, Not } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { paymentsConfig } from '../config/payments.config.js';
-import { type JobFile, loadJobFile } from '../documents/document-content.js';
-import type { SendDocumentDto } from '../documents/dto/send-document.dto.js';
-import { CABLING_REPORT_TITLE } from '../documents/pdf/cabling-report-pdf.js';
-import { dateWords } from '../documents/pdf/document-words.js';
-import { MINOR_WORKS_TITLE } from '../documents/pdf/minor-works-pdf.js';
-import { PHOTO_RECORD_TITLE } from '../documents/pdf/photo-record-pdf.js';
-import { type IssuedFile, pdfFilename } from '../documents/storage/document-files.js';
-import { DOCUMENT_STORAGE, documentKey } from '../documents/storage/document-storage.js';
 import type { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
-import { isLatestMessage, mailState } from '../mail/mail-state.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import type { MailAttachment } from '../mail/mail.service.js';
-import type { FileStorage } from '../photos/storage/photo-storage.js';
+import { coveringLetter, theWork } from '../paperwork/covering-letter.js';
+import { documentTitle } from '../paperwork/document-titles.js';
+import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
+import { type IssuedFile, issuedPdfAttachment } from '../paperwork/issued-pdf.js';
+import { type JobFile, loadJobFile } from '../paperwork/job-file.js';
+import { isLatestMessage, mailState } from '../paperwork/mail-state.js';
+import { dateWords } from '../paperwork/pdf/document-words.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { DOCUMENT_STORAGE, INVOICE_STORAGE } from '../storage/file-stores.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { Invoice } from './entities/invoice.entity.js';
-import { INVOICE_STORAGE } from './invoice-storage.js';
 import { detail, todayFor } from './invoice-accounts.js';
 
 export const INVOICE_MAIL = 'invoice';
 
-const DOCUMENT_TITLES: Record<string, string> = { 'minor-works': MINOR_WORKS_TITLE, 'cabling-report': CABLING_REPORT_TITLE, 'photo-record': PHOTO_RECORD_TITLE };
-const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 const day = (date: string | null, timeZone: string) => (date ? dateWords(`${date}T12:00:00Z`, timeZone) : '');
 
 /**
@@ -88,33 +83,25 @@ export class InvoiceMailService implements OnModuleInit {
   }
 
   private letter(file: JobFile, invoice: Invoice, documents: SyncRecord<'document'>[], to: string, url: string, expiresAt: string): { subject: string; text: string } {
-    const { organisation: org, job, site, customer } = file;
+    const org = file.organisation;
     const tz = org.timeZone;
     const title = INVOICE_NAMES[invoice.kind];
-    const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name},` : 'Hello,';
-    const where = [site.address, site.postcode].filter(Boolean).join(', ');
-    const ours = job.reference ? ` (our job ${job.reference}, “${job.title}”)` : '';
+    const work = theWork(file);
     const opening =
       invoice.kind === 'invoice'
-        ? `Attached is invoice ${invoice.number} for ${formatMoney(invoice.grossMinor)} for the work at ${where}${ours}. Please pay by ${day(invoice.dueDate, tz)}.`
+        ? `Attached is invoice ${invoice.number} for ${formatMoney(invoice.grossMinor)} for ${work}. Please pay by ${day(invoice.dueDate, tz)}.`
         : invoice.kind === 'quote'
-          ? `Attached is our quote ${invoice.number} for ${formatMoney(invoice.grossMinor)} for the work at ${where}${ours}. It stands until ${day(invoice.dueDate, tz)}.`
-          : `Attached is credit note ${invoice.number}, which takes ${formatMoney(-invoice.grossMinor)} off what is owed for the work at ${where}${ours}.`;
+          ? `Attached is our quote ${invoice.number} for ${formatMoney(invoice.grossMinor)} for ${work}. It stands until ${day(invoice.dueDate, tz)}.`
+          : `Attached is credit note ${invoice.number}, which takes ${formatMoney(-invoice.grossMinor)} off what is owed for ${work}.`;
     const card = invoice.kind === 'invoice' && this.payments.apiKey;
-    const text = [
-      greeting,
-      '',
+    const text = coveringLetter(file, to, [
       opening,
-      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${DOCUMENT_TITLES[d.kind] ?? 'Document'} ${d.number}`).join(', ')}.`] : []),
+      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${documentTitle(d.kind)} ${d.number}`).join(', ')}.`] : []),
       '',
       `You can see the job's record, with its photos and documents${card ? ', and pay by card' : ''}, at this link until ${dateWords(expiresAt, tz)}:`,
       url,
       ...(invoice.kind === 'invoice' && invoice.paymentInstructions ? ['', `To pay by bank transfer or cheque: ${invoice.paymentInstructions} Please give ${invoice.number} as the reference.`] : []),
-      '',
-      'Kind regards,',
-      org.name,
-      ...[org.address, [org.phone, org.email].filter(Boolean).join(' · ')].filter((l): l is string => !!l),
-    ].join('\n');
+    ]);
     return { subject: `${title} ${invoice.number} from ${org.name}`, text };
   }
 
@@ -128,11 +115,7 @@ export class InvoiceMailService implements OnModuleInit {
     const attached: MailAttachment[] = [];
     // The invoice from the invoices' store, the job's documents from theirs.
     const files: Array<[FileStorage, IssuedFile]> = [[this.invoices, invoice], ...documents.map((d): [FileStorage, IssuedFile] => [this.documents, d])];
-    for (const [storage, f] of files) {
-      const bytes = await storage.get(documentKey(message.organisationId, f.id));
-      if (sha256(bytes) !== f.pdfSha256) throw new Error(`The stored PDF of ${f.number} does not match the fingerprint recorded when it was issued, so it was not sent.`);
-      attached.push({ filename: pdfFilename(f), content: bytes, contentType: 'application/pdf' });
-    }
+    for (const [storage, f] of files) attached.push(await issuedPdfAttachment(storage, f));
     return attached;
   }
 

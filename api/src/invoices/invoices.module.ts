@@ -1,17 +1,15 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { documentsConfig } from '../config/documents.config.js';
-import { DocumentCounter } from '../documents/entities/document-counter.entity.js';
-import { DocumentStorageModule } from '../documents/storage/document-storage.module.js';
 import { MailModule } from '../mail/mail.module.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { PaperworkModule } from '../paperwork/paperwork.module.js';
 import { LabourRate } from '../pricing/entities/labour-rate.entity.js';
 import { VatRate } from '../pricing/entities/vat-rate.entity.js';
 import { ShareLinksModule } from '../share-links/share-links.module.js';
+import { StorageModule } from '../storage/storage.module.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { InvoiceLine } from './entities/invoice-line.entity.js';
 import { Payment } from './entities/payment.entity.js';
-import { createInvoiceStorage, INVOICE_STORAGE } from './invoice-storage.js';
 import { InvoiceMailService } from './invoice-mail.service.js';
 import { InvoicesController } from './invoices.controller.js';
 import { InvoicesService } from './invoices.service.js';
@@ -21,18 +19,14 @@ import { SharedInvoicesController } from './shared-invoices.controller.js';
 /** Quotes, invoices and credit notes per job, payments against them, the aged debt, and their place on share pages. */
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Invoice, InvoiceLine, Payment, DocumentCounter, Organisation, VatRate, LabourRate]),
+    TypeOrmModule.forFeature([Invoice, InvoiceLine, Payment, Organisation, VatRate, LabourRate]),
+    PaperworkModule,
     MailModule,
     ShareLinksModule,
-    DocumentStorageModule,
+    StorageModule,
   ],
   controllers: [InvoicesController, SharedInvoicesController],
-  providers: [
-    InvoicesService,
-    PaymentsService,
-    InvoiceMailService,
-    { provide: INVOICE_STORAGE, inject: [documentsConfig.KEY], useFactory: createInvoiceStorage },
-  ],
+  providers: [InvoicesService, PaymentsService, InvoiceMailService],
   exports: [InvoicesService, PaymentsService],
 })
 export class InvoicesModule {}

@@ -1,7 +1,7 @@
 import { durationWords, timeOnSite } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
-import { type JobFile, jobVisits } from '../documents/document-content.js';
-import { shortDateWords } from '../documents/pdf/document-words.js';
+import { type JobFile, jobVisits } from '../paperwork/job-file.js';
+import { shortDateWords } from '../paperwork/pdf/document-words.js';
 import type { RateBook } from '../pricing/rate-book.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import type { LineDraft } from './invoice-lines.js';

@@ -2,9 +2,9 @@ import { Controller, Get, Inject, Param, ParseUUIDPipe, Req, Res } from '@nestjs
 import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/public.decorator.js';
-import { sendIssuedPdf } from '../documents/storage/document-files.js';
-import type { FileStorage } from '../photos/storage/photo-storage.js';
-import { INVOICE_STORAGE } from './invoice-storage.js';
+import { sendIssuedPdf } from '../paperwork/issued-pdf.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { INVOICE_STORAGE } from '../storage/file-stores.js';
 import { InvoicesService } from './invoices.service.js';
 
 /** The job's quotes, invoices and credit notes on the customer's share page; the link is the only key. */

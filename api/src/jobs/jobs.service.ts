@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { JOB_STATUSES, type JobSort, type JobStatusCounts } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { type Condition, type Listing, type OfficeRow, RecordsService } from '../common/records/records.service.js';
+import { type Condition, type Listing, type OfficeRow, RecordsService } from '../records/records.service.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { JobFiltersDto, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';

@@ -6,7 +6,7 @@ import { AnyRole, Roles } from '../common/decorators/roles.decorator.js';
 import { sendStoredFile } from '../common/stored-file-response.js';
 import { ListPhotosQueryDto } from './dto/list-photos-query.dto.js';
 import { type PhotoFile, PhotosService } from './photos.service.js';
-import type { StoredVariant } from './storage/photo-storage.js';
+import type { StoredVariant } from '../storage/file-stores.js';
 
 /** A photo's bytes never change under its name (its sha256), so browsers may keep them for good. */
 const CACHE_FOREVER = 'private, max-age=31536000, immutable';

@@ -6,12 +6,12 @@ import { signingKey } from '../auth/signing-key.js';
 import { authConfig } from '../config/app.config.js';
 import { photosConfig } from '../config/photos.config.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
+import { StorageModule } from '../storage/storage.module.js';
 import { User } from '../users/entities/user.entity.js';
 import { BlobsController } from './blobs.controller.js';
 import { PhotoBlob } from './entities/photo-blob.entity.js';
 import { PhotosController } from './photos.controller.js';
 import { PhotosService } from './photos.service.js';
-import { createPhotoStorage, PHOTO_STORAGE } from './storage/photo-storage.js';
 import { PhotoUploads } from './uploads/photo-uploads.js';
 
 /**
@@ -22,6 +22,7 @@ import { PhotoUploads } from './uploads/photo-uploads.js';
   imports: [
     ConfigModule.forFeature(photosConfig),
     TypeOrmModule.forFeature([PhotoBlob, Organisation, User]),
+    StorageModule,
     // Uploads check the access token themselves (they are not Nest routes), with the same secret as sign-in.
     JwtModule.registerAsync({
       imports: [ConfigModule.forFeature(authConfig)],
@@ -30,11 +31,7 @@ import { PhotoUploads } from './uploads/photo-uploads.js';
     }),
   ],
   controllers: [PhotosController, BlobsController],
-  providers: [
-    { provide: PHOTO_STORAGE, inject: [photosConfig.KEY], useFactory: createPhotoStorage },
-    PhotosService,
-    PhotoUploads,
-  ],
-  exports: [PhotoUploads, PhotosService, PHOTO_STORAGE],
+  providers: [PhotosService, PhotoUploads],
+  exports: [PhotoUploads, PhotosService],
 })
 export class PhotosModule {}

@@ -1,5 +1,5 @@
 import { Inject, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
-import { formatHlc, type SyncedRow } from '@wiretrail/core';
+import type { SyncedRow } from '@wiretrail/core';
 import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import { type EntityManager, In, IsNull } from 'typeorm';
@@ -14,7 +14,8 @@ import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListPhotosQueryDto } from './dto/list-photos-query.dto.js';
 import { PhotoBlob } from './entities/photo-blob.entity.js';
 import { PhotoRefused, processPhoto } from './image-processing.js';
-import { PHOTO_STORAGE, PhotoObjectMissing, type PhotoStorage, photoKey, type StoredVariant } from './storage/photo-storage.js';
+import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
+import { PHOTO_STORAGE, photoKey, type StoredVariant } from '../storage/file-stores.js';
 import { jsonListHas, textLike } from '../database/sql.js';
 
 export interface PhotoPage {
@@ -44,7 +45,7 @@ export class PhotosService implements OnModuleInit {
     private readonly queue: WriteQueue,
     private readonly engine: SyncEngine,
     private readonly scopes: ScopeService,
-    @Inject(PHOTO_STORAGE) private readonly storage: PhotoStorage,
+    @Inject(PHOTO_STORAGE) private readonly storage: FileStorage,
   ) {}
 
   onModuleInit(): void {
@@ -112,18 +113,15 @@ export class PhotosService implements OnModuleInit {
    */
   private async markReady(em: EntityManager, actor: Actor, blob: PhotoBlob, rows?: SyncRecord[]): Promise<void> {
     const photos = rows ?? (await syncRepository(em, 'photo').findBy({ organisationId: blob.organisationId, sha256: blob.sha256, deletedAt: IsNull() }));
+    const writes: Array<{ row: SyncRecord; changes: Record<string, unknown> }> = [];
     for (const row of photos) {
       const changes: Record<string, unknown> = {};
       if (row.uploadState !== 'ready') changes.uploadState = 'ready';
       if (row.width == null || row.height == null) Object.assign(changes, { width: blob.width, height: blob.height });
       if (row.sizeBytes == null) changes.sizeBytes = blob.bytes;
-      if (!Object.keys(changes).length) continue;
-      const seq = await this.engine.updateServerRow(em, 'photo', row, changes, actor);
-      const hlc = formatHlc({ ms: Date.now(), counter: 0, deviceId: 'server' });
-      const fieldMeta = { ...row.fieldMeta };
-      for (const field of Object.keys(changes)) fieldMeta[field] = { v: seq, hlc, by: actor.userId, role: actor.role };
-      await syncRepository(em, 'photo').update({ id: row.id }, { fieldMeta } as never);
+      if (Object.keys(changes).length) writes.push({ row, changes });
     }
+    await this.engine.serverWrite(em, actor, 'photo', writes);
   }
 
   /** The office's view of photos, in the order they were taken, with their visit's planned start and who took them. */
@@ -227,7 +225,7 @@ export class PhotosService implements OnModuleInit {
     try {
       return await this.storage.stream(file.key);
     } catch (err) {
-      if (err instanceof PhotoObjectMissing) throw new NotFoundException('The file of this photo is missing from storage.');
+      if (err instanceof StoredFileMissing) throw new NotFoundException('The file of this photo is missing from storage.');
       throw err;
     }
   }

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { type Listing, RecordsService } from '../common/records/records.service.js';
+import { type Listing, RecordsService } from '../records/records.service.js';
 import type { CreatePriceItemDto } from './dto/create-price-item.dto.js';
 import type { ListPriceItemsQueryDto } from './dto/list-price-items-query.dto.js';
 import type { UpdatePriceItemDto } from './dto/update-price-item.dto.js';

@@ -1,9 +1,9 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { DocumentStorageModule } from '../documents/storage/document-storage.module.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import { PhotosModule } from '../photos/photos.module.js';
+import { StorageModule } from '../storage/storage.module.js';
 import { ShareLink } from './entities/share-link.entity.js';
 import { SharedController } from './shared.controller.js';
 import { ShareLinksController } from './share-links.controller.js';
@@ -11,7 +11,7 @@ import { ShareLinksService } from './share-links.service.js';
 
 /** Customers' links to one job's record: made by the office, opened without an account. */
 @Module({
-  imports: [TypeOrmModule.forFeature([ShareLink, Organisation, PhotoBlob]), PhotosModule, DocumentStorageModule],
+  imports: [TypeOrmModule.forFeature([ShareLink, Organisation, PhotoBlob]), PhotosModule, StorageModule],
   controllers: [ShareLinksController, SharedController],
   providers: [ShareLinksService],
   exports: [ShareLinksService],

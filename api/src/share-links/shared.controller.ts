@@ -3,10 +3,10 @@ import { ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { Public } from '../common/decorators/public.decorator.js';
 import { sendStoredFile } from '../common/stored-file-response.js';
-import { sendIssuedPdf } from '../documents/storage/document-files.js';
-import { DOCUMENT_STORAGE } from '../documents/storage/document-storage.js';
+import { sendIssuedPdf } from '../paperwork/issued-pdf.js';
 import { PhotosService } from '../photos/photos.service.js';
-import type { FileStorage } from '../photos/storage/photo-storage.js';
+import type { FileStorage } from '../storage/file-storage.js';
+import { DOCUMENT_STORAGE } from '../storage/file-stores.js';
 import { ShareLinksService } from './share-links.service.js';
 
 /**

@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { nameOf, rowsById } from '../common/records/annotations.js';
-import { type Listing, type OfficeRow, RecordsService } from '../common/records/records.service.js';
+import { nameOf, rowsById } from '../records/annotations.js';
+import { type Listing, type OfficeRow, RecordsService } from '../records/records.service.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListSitesQueryDto } from './dto/list-sites-query.dto.js';

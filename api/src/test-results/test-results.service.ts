@@ -1,19 +1,13 @@
 import { Injectable } from '@nestjs/common';
-import { assessCircuitTest, type CircuitReadings, DEFAULT_RULE_SET } from '@wiretrail/core';
+import { assessCircuitTest, circuitUnderTest, DEFAULT_RULE_SET, readingsOf } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { circuitLabel, rowsById } from '../common/records/annotations.js';
-import { type Listing, type OfficeRow, ofJobVisits, RecordsService } from '../common/records/records.service.js';
+import { circuitLabel, rowsById } from '../records/annotations.js';
+import { type Listing, type OfficeRow, ofJobVisits, RecordsService } from '../records/records.service.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListTestResultsQueryDto } from './dto/list-test-results-query.dto.js';
 import { inTurn } from '../common/in-turn.js';
-
-/** The readings the server judges, taken from the row one field each. */
-const readingsOf = (r: SyncRecord<'testResult'>): Required<CircuitReadings> => ({
-  r1Ohm: r.r1Ohm, rnOhm: r.rnOhm, r2Ohm: r.r2Ohm, r1r2Ohm: r.r1r2Ohm, irLiveLiveMOhm: r.irLiveLiveMOhm, irLiveEarthMOhm: r.irLiveEarthMOhm,
-  irTestVoltageV: r.irTestVoltageV, polarity: r.polarity, zsOhm: r.zsOhm, rcdTripMs: r.rcdTripMs, rcdTripMs5x: r.rcdTripMs5x, rcdButton: r.rcdButton,
-});
 
 /** The circuit as recorded, as the office reads it beside a result. */
 const circuitOf = (c: SyncRecord<'circuit'>) => ({
@@ -50,7 +44,7 @@ export class TestResultsService extends RecordsService<ListTestResultsQueryDto, 
       const board = boards.get(c?.boardId);
       const circuit = c ? { id: c.id, ...circuitOf(c), boardName: board?.name ?? null, label: circuitLabel(c, board) } : null;
       const earthing = sites.get(r.siteId)?.earthing ?? null;
-      const assessment = assessCircuitTest({ circuit: circuit ?? {}, readings: readingsOf(r), earthing }, DEFAULT_RULE_SET);
+      const assessment = assessCircuitTest({ circuit: c ? circuitUnderTest(c) : {}, readings: readingsOf(r), earthing }, DEFAULT_RULE_SET);
       return { ...toSyncedRow(r), circuit, earthing, assessment };
     });
   }

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService, type SameSiteRef } from '../common/records/records.service.js';
+import { type Listing, RecordsService, type SameSiteRef } from '../records/records.service.js';
 import type { ListVisitsQueryDto } from './dto/list-visits-query.dto.js';
 
 @Injectable()

@@ -335,6 +335,7 @@ export function fieldError(entity: SyncEntityName, field: string, value: unknown
     case 'boolean':
       return typeof value === 'boolean' ? null : `${name} must be true or false`;
     case 'datetime':
+      // eslint-disable-next-line no-control-regex -- NUL is the one character PostgreSQL refuses, so a date must not carry it
       return typeof value === 'string' && !Number.isNaN(Date.parse(value)) && /^\d{4}-\d{2}-\d{2}T[^\u0000]*$/.test(value)
         ? null
         : `${name} must be an ISO-8601 date and time`;

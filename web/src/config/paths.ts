@@ -1,4 +1,4 @@
-import type { Role } from '@/lib/session';
+import type { Role } from '@wiretrail/core';
 
 /** Every route of the app in one place; links are built from here, never typed inline. */
 export const paths = {

@@ -85,7 +85,7 @@ async function reach(url: string, init: RequestInit): Promise<Response> {
 
 /** The server's own message from an error body: Nest's `{ message }` JSON, or plain text. */
 export function errorFrom(status: number, text: string): ApiError {
-  let data: unknown = undefined;
+  let data: unknown;
   try {
     data = text ? JSON.parse(text) : undefined;
   } catch {

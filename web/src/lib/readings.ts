@@ -1,4 +1,4 @@
-import { SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
+import { circuitReading, type ReadingField, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
 import { z } from 'zod';
 
 /** What a technician types: digits with a point or a comma; blank means not measured yet. */
@@ -39,6 +39,12 @@ export function readingField(entity: SyncEntityName, field: string, label: strin
     const problem = readingProblem(entity, field, text, label, unit);
     if (problem) ctx.addIssue({ code: 'custom', message: problem });
   });
+}
+
+/** A zod field for one circuit test reading, named and measured as core's catalogue of readings says. */
+export function circuitReadingField(field: ReadingField, required = false) {
+  const { label, unit } = circuitReading(field);
+  return readingField('testResult', field, label, unit, required);
 }
 
 /** Only figures that can be judged: blank and malformed readings count as not entered. */

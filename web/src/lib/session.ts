@@ -1,6 +1,5 @@
+import type { Role } from '@wiretrail/core';
 import { useSyncExternalStore } from 'react';
-
-export type Role = 'admin' | 'office' | 'technician';
 
 export interface SessionUser {
   id: string;

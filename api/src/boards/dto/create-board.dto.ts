@@ -1,4 +1,4 @@
-import { IdField, TextField } from '../../common/records/record-fields.js';
+import { IdField, TextField } from '../../records/record-fields.js';
 
 export class CreateBoardDto {
   @IdField('site', { required: true })

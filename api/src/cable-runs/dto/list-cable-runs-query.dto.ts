@@ -1,6 +1,6 @@
 import { CABLE_STATUSES } from '@wiretrail/core';
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
-import { ChoiceField, IdField } from '../../common/records/record-fields.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
+import { ChoiceField, IdField } from '../../records/record-fields.js';
 
 /** search matches the label or either end's description. */
 export class ListCableRunsQueryDto extends PageQueryDto {

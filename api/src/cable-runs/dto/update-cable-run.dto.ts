@@ -1,4 +1,4 @@
-import { TextField } from '../../common/records/record-fields.js';
+import { TextField } from '../../records/record-fields.js';
 
 /**
  * What the office may correct on a cable run from the cable schedule: its label and the words at each end.

@@ -1,5 +1,5 @@
 import { CIRCUIT_KINDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
-import { ChoiceField, IdField, NumberField, TextField } from '../../common/records/record-fields.js';
+import { ChoiceField, IdField, NumberField, TextField } from '../../records/record-fields.js';
 
 export class CreateCircuitDto {
   @IdField('site', { required: true })

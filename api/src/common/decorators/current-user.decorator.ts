@@ -1,6 +1,6 @@
 import { createParamDecorator, type ExecutionContext } from '@nestjs/common';
 import type { Request } from 'express';
-import type { Role } from '../../users/entities/user.entity.js';
+import type { Role } from '@wiretrail/core';
 
 /** The signed-in caller as the JWT strategy resolved it from the database. */
 export interface AuthUser {

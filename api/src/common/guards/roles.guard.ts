@@ -3,7 +3,7 @@ import { Reflector } from '@nestjs/core';
 import { IS_PUBLIC_KEY } from '../decorators/public.decorator.js';
 import { ROLES_KEY } from '../decorators/roles.decorator.js';
 import type { AuthUser } from '../decorators/current-user.decorator.js';
-import type { Role } from '../../users/entities/user.entity.js';
+import type { Role } from '@wiretrail/core';
 
 /** Deny by default: a route must name its roles (or be public) to be reachable at all. */
 @Injectable()

@@ -1,7 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform, Type } from 'class-transformer';
 import { IsBoolean, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min } from 'class-validator';
-import { MAX_PAGE } from '../../common/records/page-query.dto.js';
+import { MAX_PAGE } from '../../records/page-query.dto.js';
 
 export class ListConflictsQueryDto {
   @ApiPropertyOptional({ default: false, description: 'true lists settled conflicts instead' })

@@ -1,4 +1,4 @@
-import { TextField } from '../../common/records/record-fields.js';
+import { TextField } from '../../records/record-fields.js';
 
 export class CreateCustomerDto {
   @TextField(200, { required: true, example: 'Hannah Greaves' })

@@ -1,4 +1,4 @@
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
 
 /** search matches name, e-mail, phone or address. */
 export class ListCustomersQueryDto extends PageQueryDto {}

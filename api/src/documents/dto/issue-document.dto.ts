@@ -1,5 +1,5 @@
 import { DOCUMENT_KINDS, type DocumentKind } from '@wiretrail/core';
-import { ChoiceField } from '../../common/records/record-fields.js';
+import { ChoiceField } from '../../records/record-fields.js';
 
 export type { DocumentKind };
 

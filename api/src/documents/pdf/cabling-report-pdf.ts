@@ -1,7 +1,9 @@
 import { isTwistedPair, type RuleSet, VERDICT_DISCLAIMER, type WiremapFault } from '@wiretrail/core';
-import type { JobFile, ScheduledCable } from '../document-content.js';
-import { figure, joined, shortDateWords, VERDICT_INK, VERDICT_WORDS } from './document-words.js';
-import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
+import { CABLING_REPORT_TITLE } from '../../paperwork/document-titles.js';
+import type { JobFile } from '../../paperwork/job-file.js';
+import { figure, joined, shortDateWords, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
+import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
+import type { ScheduledCable } from '../document-content.js';
 
 export interface CablingReportPdf {
   issue: Issue;
@@ -9,8 +11,6 @@ export interface CablingReportPdf {
   cables: ScheduledCable[];
   rules: RuleSet;
 }
-
-export const CABLING_REPORT_TITLE = 'Cabling test report';
 
 const FAULT_WORDS: Record<WiremapFault['kind'], string> = {
   open: 'Open',

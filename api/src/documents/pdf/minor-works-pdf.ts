@@ -1,9 +1,11 @@
-import { type CircuitTestLine, type ReadingField, type RuleSet, VERDICT_DISCLAIMER } from '@wiretrail/core';
-import type { JobFile, MinorWorksContent } from '../document-content.js';
-import { circuitName, type CertifiedCircuit } from '../minor-works-check.js';
-import { INK, type Row } from './document-layout.js';
-import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from './document-words.js';
-import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
+import { type CertifiedCircuit, circuitName, circuitReading, type CircuitTestLine, type RuleSet, VERDICT_DISCLAIMER } from '@wiretrail/core';
+import { MINOR_WORKS_TITLE } from '../../paperwork/document-titles.js';
+import type { JobFile } from '../../paperwork/job-file.js';
+import { INK, type Row } from '../../paperwork/pdf/document-layout.js';
+import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
+import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
+import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
+import type { MinorWorksContent } from '../document-content.js';
 
 export interface MinorWorksPdf {
   issue: Issue;
@@ -14,43 +16,39 @@ export interface MinorWorksPdf {
   signature: Buffer;
 }
 
-export const MINOR_WORKS_TITLE = 'Minor works certificate';
-
-const UNITS: Partial<Record<ReadingField, string>> = {
-  r1Ohm: 'Ω', rnOhm: 'Ω', r2Ohm: 'Ω', r1r2Ohm: 'Ω', irLiveLiveMOhm: 'MΩ', irLiveEarthMOhm: 'MΩ', zsOhm: 'Ω', rcdTripMs: 'ms', rcdTripMs5x: 'ms',
-};
-const SHORT: Partial<Record<ReadingField, string>> = { r1Ohm: 'r1', rnOhm: 'rn', r2Ohm: 'r2' };
+type Certified = CertifiedCircuit<SyncRecord, SyncRecord, SyncRecord>;
 const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
 
-function deviceWords(c: CertifiedCircuit['circuit']): string {
+function deviceWords(c: Certified['circuit']): string {
   const type = typeof c.deviceType === 'string' ? c.deviceType : '';
   const rating = typeof c.deviceRatingA === 'number' ? `${c.deviceRatingA} A` : '';
   if (!type) return rating;
   return joined([/^[BCD]$/.test(type) ? `Type ${type} circuit-breaker` : `${type} fuse`, rating], ', ');
 }
 
-function rcdWords(c: CertifiedCircuit['circuit']): string {
+function rcdWords(c: Certified['circuit']): string {
   if (typeof c.rcdRatingMa !== 'number') return 'None';
   return joined([`${c.rcdRatingMa} mA`, typeof c.rcdType === 'string' && c.rcdType ? `type ${c.rcdType}` : ''], ' ');
 }
 
-function conductorWords(c: CertifiedCircuit['circuit']): string {
+function conductorWords(c: Certified['circuit']): string {
   const live = typeof c.liveCsaMm2 === 'number' ? c.liveCsaMm2 : null;
   const cpc = typeof c.cpcCsaMm2 === 'number' ? c.cpcCsaMm2 : null;
   return live === null && cpc === null ? '' : `${live ?? '?'} / ${cpc ?? '?'} mm²`;
 }
 
-function readingsOfLine(line: CircuitTestLine, test: CertifiedCircuit['test']): string {
+function readingsOfLine(line: CircuitTestLine, test: Certified['test']): string {
   const shown = line.fields.map((f) => {
-    const value = reading(test[f], UNITS[f] ?? '');
-    return value && line.fields.length > 1 ? `${SHORT[f] ?? f} ${value}` : value;
+    const spec = circuitReading(f);
+    const value = reading(test[f], spec.unit);
+    return value && line.fields.length > 1 ? `${spec.short} ${value}` : value;
   });
   const text = shown.filter(Boolean).join(' · ');
   if (text && line.key.startsWith('ir-') && typeof test.irTestVoltageV === 'number') return `${text} at ${test.irTestVoltageV} V`;
   return text;
 }
 
-function testRows(c: CertifiedCircuit): Row[] {
+function testRows(c: Certified): Row[] {
   return c.assessment.lines.map((line) => ({
     cells: [
       { text: line.label + (line.required ? '' : ' (optional)'), weight: 'medium' },
@@ -100,9 +98,9 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     ],
     circuits.map((c) => ({
       cells: [
-        { text: joined([content.boards.get(c.circuit.boardId as string), `circuit ${c.circuit.number ?? '?'}`], ', '), weight: 'medium' },
+        { text: joined([content.boards.get(c.circuit.boardId), `circuit ${c.circuit.number}`], ', '), weight: 'medium' },
         joined([c.circuit.description]),
-        KIND_WORDS[c.circuit.kind as string] ?? '',
+        (c.circuit.kind && KIND_WORDS[c.circuit.kind]) ?? '',
         deviceWords(c.circuit),
         rcdWords(c.circuit),
         conductorWords(c.circuit),
@@ -138,7 +136,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     );
   }
 
-  const texts = (field: string) => visits.map((v) => (typeof v[field] === 'string' ? (v[field] as string).trim() : '')).filter(Boolean);
+  const texts = (field: 'observations' | 'departures') => visits.map((v) => v[field]?.trim() ?? '').filter(Boolean);
   layout.heading('Observations');
   layout.paragraph(texts('observations').join('\n\n') || 'None recorded.');
   layout.heading('Departures from the standard');

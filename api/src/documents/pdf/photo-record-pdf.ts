@@ -1,7 +1,9 @@
-import type { JobFile, PhotoRecordContent } from '../document-content.js';
-import { INK } from './document-layout.js';
-import { dateTimeWords, joined } from './document-words.js';
-import { type Issue, issuedBy, startJobDocument } from './job-heading.js';
+import { PHOTO_RECORD_TITLE } from '../../paperwork/document-titles.js';
+import type { JobFile } from '../../paperwork/job-file.js';
+import { INK } from '../../paperwork/pdf/document-layout.js';
+import { dateTimeWords, joined } from '../../paperwork/pdf/document-words.js';
+import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
+import type { PhotoRecordContent } from '../document-content.js';
 
 export interface PhotoRecordPdf {
   issue: Issue;
@@ -10,8 +12,6 @@ export interface PhotoRecordPdf {
   /** Each photo's display size as a JPEG, by sha256. */
   images: Map<string, Buffer>;
 }
-
-export const PHOTO_RECORD_TITLE = 'Photo record';
 
 const COLUMNS = 2;
 const IMAGE_RATIO = 3 / 4;

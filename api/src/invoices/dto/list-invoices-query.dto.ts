@@ -1,6 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional } from 'class-validator';
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
 import { INVOICE_KINDS, type InvoiceKind } from '@wiretrail/core';
 
 export const INVOICE_FILTERS = ['draft', 'unpaid', 'overdue', 'paid'] as const;

@@ -1,8 +1,8 @@
 import { documentTotals, formatMoney, formatRate, INVOICE_NAMES, type InvoiceKind } from '@wiretrail/core';
-import type { JobFile } from '../../documents/document-content.js';
-import { INK } from '../../documents/pdf/document-layout.js';
-import { dateWords } from '../../documents/pdf/document-words.js';
-import { type Issue, issuedBy, startJobDocument } from '../../documents/pdf/job-heading.js';
+import type { JobFile } from '../../paperwork/job-file.js';
+import { INK } from '../../paperwork/pdf/document-layout.js';
+import { dateWords } from '../../paperwork/pdf/document-words.js';
+import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { Invoice } from '../entities/invoice.entity.js';
 import type { InvoiceLine } from '../entities/invoice-line.entity.js';
 

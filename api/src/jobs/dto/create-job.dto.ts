@@ -1,5 +1,5 @@
 import { JOB_STATUSES } from '@wiretrail/core';
-import { ChoiceField, IdField, TextField } from '../../common/records/record-fields.js';
+import { ChoiceField, IdField, TextField } from '../../records/record-fields.js';
 
 export class CreateJobDto {
   @IdField('site', { required: true })

@@ -1,6 +1,6 @@
 import { JOB_SORTS, JOB_STATUSES, type JobSort } from '@wiretrail/core';
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
-import { ChoiceField, DateTimeField, IdField } from '../../common/records/record-fields.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
+import { ChoiceField, DateTimeField, IdField } from '../../records/record-fields.js';
 
 export const SORT_DIRECTIONS = ['asc', 'desc'] as const;
 

@@ -1,6 +1,6 @@
 import { PHOTO_SUBJECTS } from '@wiretrail/core';
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
-import { ChoiceField, IdField, TextField } from '../../common/records/record-fields.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
+import { ChoiceField, IdField, TextField } from '../../records/record-fields.js';
 
 /** search matches the caption. */
 export class ListPhotosQueryDto extends PageQueryDto {

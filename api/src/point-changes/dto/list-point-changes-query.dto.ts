@@ -1,6 +1,6 @@
 import { POINT_ACTIONS } from '@wiretrail/core';
-import { ChoiceField } from '../../common/records/record-fields.js';
-import { VisitRecordsQueryDto } from '../../common/records/visit-records-query.dto.js';
+import { ChoiceField } from '../../records/record-fields.js';
+import { VisitRecordsQueryDto } from '../../records/visit-records-query.dto.js';
 
 /** search matches the accessory or either position's description. */
 export class ListPointChangesQueryDto extends VisitRecordsQueryDto {

@@ -1,4 +1,4 @@
-import { BooleanField, IntegerField, TextField } from '../../common/records/record-fields.js';
+import { BooleanField, IntegerField, TextField } from '../../records/record-fields.js';
 
 /** A line of the organisation's price list; every phone receives it to pick parts with no signal. Prices in pence. */
 export class CreatePriceItemDto {

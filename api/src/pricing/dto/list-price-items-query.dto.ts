@@ -1,6 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsOptional, IsString, MaxLength } from 'class-validator';
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
 
 /** search matches name, code or category. */
 export class ListPriceItemsQueryDto extends PageQueryDto {

@@ -1,5 +1,5 @@
 import { EARTHING_ARRANGEMENTS } from '@wiretrail/core';
-import { ChoiceField, IdField, NumberField, TextField } from '../../common/records/record-fields.js';
+import { ChoiceField, IdField, NumberField, TextField } from '../../records/record-fields.js';
 
 export class CreateSiteDto {
   @IdField('customer', { required: true })

@@ -1,24 +1,13 @@
-import { type ConflictFields, type FieldType, type RowOf, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
+import { type ConflictFields, type FieldStamp, type FieldType, type RowOf, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
 import { type EntityManager, EntitySchema, type EntitySchemaColumnOptions, type Repository } from 'typeorm';
 import { TIMESTAMP } from '../../database/column-types.js';
-
-/**
- * What the server keeps about each field of a synced row: the change sequence that last wrote it
- * (so a push knows whether it changed since the device's base version), the clock and the author.
- */
-export interface FieldMeta {
-  v: number;
-  hlc: string;
-  by: string;
-  role: string;
-}
 
 /** The bookkeeping every synced row carries beside its own fields. */
 export type SyncBookkeeping = {
   id: string;
   organisationId: string;
   version: number;
-  fieldMeta: Record<string, FieldMeta>;
+  fieldMeta: Record<string, FieldStamp>;
   deletedAt: Date | null;
   createdById: string | null;
   updatedById: string | null;

@@ -1,4 +1,4 @@
-import { VisitRecordsQueryDto } from '../../common/records/visit-records-query.dto.js';
+import { VisitRecordsQueryDto } from '../../records/visit-records-query.dto.js';
 
 /** search matches the instrument. */
 export class ListTestResultsQueryDto extends VisitRecordsQueryDto {}

@@ -1,7 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
-import { type Role, ROLES } from '../entities/user.entity.js';
+import { type Role, ROLES } from '@wiretrail/core';
 
 export class CreateUserDto {
   @ApiProperty({ example: 'tech3@larkfield.example' })

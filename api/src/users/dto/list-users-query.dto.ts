@@ -1,8 +1,8 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
-import { type Role, ROLES } from '../entities/user.entity.js';
-import { MAX_PAGE } from '../../common/records/page-query.dto.js';
+import { type Role, ROLES } from '@wiretrail/core';
+import { MAX_PAGE } from '../../records/page-query.dto.js';
 
 export class ListUsersQueryDto {
   @ApiPropertyOptional({ description: 'matches name or e-mail' })

@@ -1,10 +1,8 @@
+import type { Role } from '@wiretrail/core';
 import { Column, Entity, Index, JoinColumn, ManyToOne, type Relation } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
 import { Organisation } from '../../organisations/entities/organisation.entity.js';
 import { TIMESTAMP } from '../../database/column-types.js';
-
-export const ROLES = ['admin', 'office', 'technician'] as const;
-export type Role = (typeof ROLES)[number];
 
 @Entity('user')
 export class User extends TenantRow {

@@ -1,5 +1,5 @@
 import { VISIT_STATUSES } from '@wiretrail/core';
-import { ChoiceField, DateTimeField, IdField, IdListField, TextField } from '../../common/records/record-fields.js';
+import { ChoiceField, DateTimeField, IdField, IdListField, TextField } from '../../records/record-fields.js';
 
 export class CreateVisitDto {
   @IdField('job', { required: true })

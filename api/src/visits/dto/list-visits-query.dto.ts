@@ -1,5 +1,5 @@
-import { PageQueryDto } from '../../common/records/page-query.dto.js';
-import { DateTimeField, IdField } from '../../common/records/record-fields.js';
+import { PageQueryDto } from '../../records/page-query.dto.js';
+import { DateTimeField, IdField } from '../../records/record-fields.js';
 
 /** search matches the job's reference or title, or the site's name or address. */
 export class ListVisitsQueryDto extends PageQueryDto {

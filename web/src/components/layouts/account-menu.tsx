@@ -8,8 +8,8 @@ import { useColorScheme } from '@mui/material/styles';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
-import { signOut } from '@/features/auth/api/sign-in';
 import { useSession } from '@/lib/session';
+import { signOut } from '@/lib/sign-out';
 
 export function AccountMenu() {
   const session = useSession();

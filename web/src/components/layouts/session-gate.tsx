@@ -1,6 +1,7 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { homeFor, paths } from '@/config/paths';
-import { type Role, useSession } from '@/lib/session';
+import type { Role } from '@wiretrail/core';
+import { useSession } from '@/lib/session';
 import { NotForRole } from './not-for-role';
 
 /** Sends anyone without a session to sign-in, remembering where they were going. */

@@ -13,8 +13,8 @@ import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { env } from '@/config/env';
 import { paths } from '@/config/paths';
-import { signOut } from '@/features/auth/api/sign-in';
 import { useSession } from '@/lib/session';
+import { signOut } from '@/lib/sign-out';
 
 export function Component() {
   const session = useSession();

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { apiRequest } from '@/lib/api-client';
-import { getSession, type Session, setSession } from '@/lib/session';
+import { type Session, setSession } from '@/lib/session';
 
 export interface SignInInput {
   email: string;
@@ -29,13 +29,4 @@ export function useSignIn(onSignedIn: (session: Session) => void) {
     }
   }
   return { ...state, isError: state.error !== null, submit };
-}
-
-/** Ends the session on the server when it can be reached; the device forgets it either way. */
-export async function signOut(): Promise<void> {
-  const session = getSession();
-  setSession(null);
-  if (session) {
-    await apiRequest('/auth/sign-out', { method: 'POST', body: { refreshToken: session.refreshToken }, anonymous: true }).catch(() => undefined);
-  }
 }

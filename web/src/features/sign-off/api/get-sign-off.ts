@@ -1,23 +1,28 @@
-import { assessCableRun, assessCircuitTest, type CableRunAssessment, type CircuitTestAssessment } from '@wiretrail/core';
+import {
+  assessCableRun,
+  type CableRunAssessment,
+  judgeCircuitWork,
+  type MinorWorksFindingKind,
+  type MinorWorksJudgement,
+} from '@wiretrail/core';
 import { useLiveQuery } from 'dexie-react-hooks';
-import { type CableRunRow, type CircuitRow, db, type PointChangeRow, type VisitRow } from '@/lib/db';
+import { type CableRunRow, type CircuitRow, db, type PointChangeRow, type TestResultRow, type VisitRow } from '@/lib/db';
 
 /** One thing the office (or the certificate) will ask about. */
 export interface Problem {
-  kind: 'fail' | 'missing' | 'untested';
+  kind: Exclude<MinorWorksFindingKind, 'not-signed' | 'nothing-tested'>;
   what: string;
   detail: string;
 }
 
 export interface SignOffSummary {
   counts: { photos: number; notes: number; cables: number; points: number; circuits: number };
-  circuits: { circuit: CircuitRow; assessment: CircuitTestAssessment }[];
+  /** The visit's circuit work judged as the server will judge it before it issues a certificate. */
+  certificate: MinorWorksJudgement<VisitRow, TestResultRow, CircuitRow>;
   cables: { cable: CableRunRow; assessment: CableRunAssessment }[];
   points: PointChangeRow[];
   problems: Problem[];
 }
-
-const circuitName = (c: CircuitRow) => `Circuit ${c.number}${c.description ? ` (${c.description})` : ''}`;
 
 /** Everything recorded on the visit, judged again, with every fail and every missing reading in words. */
 export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
@@ -30,33 +35,11 @@ export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
     db.circuit.where('siteId').equals(visit.siteId).toArray(),
     db.site.get(visit.siteId),
   ]);
-  const byId = new Map(circuits.map((c) => [c.id, c]));
-  const problems: Problem[] = [];
-  const tested = results
-    .filter((r) => r.circuitId && byId.has(r.circuitId))
-    .map((r) => {
-      const circuit = byId.get(r.circuitId!)!;
-      const assessment = assessCircuitTest({
-        circuit,
-        readings: { ...r, irTestVoltageV: r.irTestVoltageV ?? null },
-        earthing: site?.earthing,
-      });
-      for (const line of assessment.failing) {
-        problems.push({ kind: 'fail', what: `${circuitName(circuit)}: ${line.label}`, detail: line.result.note });
-      }
-      for (const line of assessment.missing) {
-        problems.push({ kind: 'missing', what: `${circuitName(circuit)}: ${line.label}`, detail: 'Not recorded yet.' });
-      }
-      return { circuit, assessment };
-    })
-    .sort((a, b) => a.circuit.number.localeCompare(b.circuit.number, 'en-GB', { numeric: true }));
-  const testedIds = new Set(tested.map((t) => t.circuit.id));
-  for (const circuitId of new Set(points.map((p) => p.circuitId).filter((id): id is string => !!id))) {
-    const circuit = byId.get(circuitId);
-    if (circuit && !testedIds.has(circuitId)) {
-      problems.push({ kind: 'untested', what: circuitName(circuit), detail: 'Altered on this visit, but no test results are recorded for it.' });
-    }
-  }
+  const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing });
+  // A visit of data cabling alone has no circuit to certify: whether the job has one is the office's question.
+  const problems: Problem[] = certificate.findings.flatMap((f) =>
+    f.kind === 'not-signed' || f.kind === 'nothing-tested' ? [] : [{ kind: f.kind, what: f.what, detail: f.detail }],
+  );
   const mine = cables
     .filter((c) => c.lastVisitId === visit.id)
     .map((cable) => ({ cable, assessment: assessCableRun({ medium: cable.medium, scheme: cable.scheme, wiremap: cable.wiremap as never, lengthM: cable.lengthM, linkKind: cable.linkKind as never }) }))
@@ -69,8 +52,8 @@ export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
     if (assessment.missing.length > 0) problems.push({ kind: 'missing', what: `Cable ${cable.label}`, detail: `Still to record: ${assessment.missing.join(', ')}.` });
   }
   return {
-    counts: { photos, notes, cables: mine.length, points: points.length, circuits: tested.length },
-    circuits: tested,
+    counts: { photos, notes, cables: mine.length, points: points.length, circuits: certificate.circuits.length },
+    certificate,
     cables: mine,
     points,
     problems,

@@ -9,7 +9,9 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { AidLine } from '@/components/verdicts/verdict-chip';
-import type { SignOffSummary } from '../api/get-sign-off';
+import type { Problem, SignOffSummary } from '../api/get-sign-off';
+
+const KIND_WORDS: Record<Problem['kind'], string> = { fail: 'Fail', missing: 'Missing', untested: 'Not tested', 'no-circuit': 'No circuit', 'unknown-circuit': 'Unknown circuit' };
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
@@ -42,7 +44,7 @@ export function SignOffSummaryView({ summary, signed = false }: { summary: SignO
                 <ListItemIcon sx={{ minWidth: 36, mt: 0.5, color: p.kind === 'fail' ? 'error.main' : 'warning.main' }}>
                   {p.kind === 'fail' ? <ErrorOutlineOutlined /> : <HelpOutlineOutlined />}
                 </ListItemIcon>
-                <ListItemText primary={`${p.kind === 'fail' ? 'Fail' : p.kind === 'untested' ? 'Not tested' : 'Missing'}: ${p.what}`} secondary={p.detail} />
+                <ListItemText primary={`${KIND_WORDS[p.kind]}: ${p.what}`} secondary={p.detail} />
               </ListItem>
             ))}
           </List>

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Role } from '@/lib/session';
+import type { Role } from '@wiretrail/core';
 
 export interface TeamMember {
   id: string;

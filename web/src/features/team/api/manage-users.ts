@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Role } from '@/lib/session';
+import type { Role } from '@wiretrail/core';
 import type { TeamMember } from './get-users';
 
 export interface NewPerson {

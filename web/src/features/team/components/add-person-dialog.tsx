@@ -8,6 +8,7 @@ import DialogTitle from '@mui/material/DialogTitle';
 import MenuItem from '@mui/material/MenuItem';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
+import { ROLES } from '@wiretrail/core';
 import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { useCreatePerson } from '../api/manage-users';
@@ -15,7 +16,7 @@ import { useCreatePerson } from '../api/manage-users';
 const schema = z.object({
   name: z.string().trim().min(1, 'Enter their name.'),
   email: z.string().trim().min(1, 'Enter their e-mail address.').email('That is not an e-mail address.'),
-  role: z.enum(['admin', 'office', 'technician'], { message: 'Choose a role.' }),
+  role: z.enum(ROLES, { message: 'Choose a role.' }),
   password: z.string().min(10, 'The first password must be at least 10 characters; they can change it with a password link.'),
 });
 type Values = z.infer<typeof schema>;

@@ -15,7 +15,7 @@ import TableRow from '@mui/material/TableRow';
 import TextField from '@mui/material/TextField';
 import Tooltip from '@mui/material/Tooltip';
 import { useState } from 'react';
-import type { Role } from '@/lib/session';
+import type { Role } from '@wiretrail/core';
 import { useSession } from '@/lib/session';
 import { useUsers } from '../api/get-users';
 import { useSendPasswordLink, useUpdatePerson } from '../api/manage-users';

@@ -3,13 +3,13 @@ import { access, mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import type { Readable } from 'node:stream';
 import { v7 as uuidv7 } from 'uuid';
-import { type FileStorage, type KeySpace, PHOTO_KEYS, PhotoObjectMissing } from './photo-storage.js';
+import { type FileStorage, type KeySpace, StoredFileMissing } from './file-storage.js';
 
-/** Files under one directory (by default `photos/` or `documents/` beside the database). */
-export class LocalPhotoStorage implements FileStorage {
+/** Files under one directory (by default `photos/`, `documents/` or `invoices/` beside the database). */
+export class LocalFileStorage implements FileStorage {
   constructor(
     readonly directory: string,
-    private readonly keys: KeySpace = PHOTO_KEYS,
+    private readonly keys: KeySpace,
   ) {}
 
   private path(key: string): string {
@@ -17,7 +17,7 @@ export class LocalPhotoStorage implements FileStorage {
     return join(this.directory, ...key.split('/'));
   }
 
-  /** The type is not kept: files are served with the type recorded for the photo. */
+  /** The type is not kept: files are served with the type recorded for the photo or the PDF. */
   async put(key: string, body: Buffer, _contentType?: string): Promise<void> {
     const path = this.path(key);
     await mkdir(dirname(path), { recursive: true });
@@ -31,7 +31,7 @@ export class LocalPhotoStorage implements FileStorage {
     try {
       return await readFile(this.path(key));
     } catch (err) {
-      throw isMissing(err) ? new PhotoObjectMissing(key) : err;
+      throw isMissing(err) ? new StoredFileMissing(key) : err;
     }
   }
 
@@ -49,7 +49,7 @@ export class LocalPhotoStorage implements FileStorage {
     // Opening is asynchronous: wait for it, so that a missing file is an answer and not a broken response.
     await new Promise<void>((resolve, reject) => {
       stream.once('open', () => resolve());
-      stream.once('error', (err) => reject(isMissing(err) ? new PhotoObjectMissing(key) : err));
+      stream.once('error', (err) => reject(isMissing(err) ? new StoredFileMissing(key) : err));
     });
     return stream;
   }

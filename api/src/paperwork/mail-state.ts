@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { OutboxMessage } from './entities/outbox-message.entity.js';
+import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 
 /** What a feature shows of a message's progress: the same words for a document and for an invoice. */
 export interface MailState {

@@ -1,4 +1,4 @@
-import type { JobFile } from '../document-content.js';
+import type { JobFile } from '../job-file.js';
 import { DocumentLayout, INK } from './document-layout.js';
 import { dateWords, joined } from './document-words.js';
 

@@ -1,9 +1,20 @@
-import { compareHlc, type FieldSpec, parseHlc } from '@wiretrail/core';
-import type { FieldMeta } from './entities/sync-schemas.js';
+import type { FieldSpec } from './entities.js';
+import { compareHlc, parseHlc } from './hlc.js';
+
+/**
+ * What the server keeps about the last write of one field of a synced row: the change sequence that wrote it (so
+ * a push knows whether it changed since the device's base version), the clock, the author and the author's role.
+ */
+export interface FieldStamp {
+  v: number;
+  hlc: string;
+  by: string;
+  role: string;
+}
 
 const RANK: Record<string, number> = { technician: 1, office: 2, admin: 3 };
 
-export interface Incoming {
+export interface IncomingField {
   value: unknown;
   hlc: string;
   userId: string;
@@ -33,7 +44,7 @@ export function sameValue(a: unknown, b: unknown): boolean {
  *    outcome does not depend on which device reached the server first.
  * Whenever a different value is not kept, the caller stores it in a Conflict row.
  */
-export function decideField(spec: FieldSpec, current: unknown, meta: FieldMeta | undefined, incoming: Incoming): FieldOutcome {
+export function decideField(spec: Pick<FieldSpec, 'policy'>, current: unknown, meta: FieldStamp | undefined, incoming: IncomingField): FieldOutcome {
   if (!meta || meta.v <= incoming.baseVersion || sameDevice(meta.hlc, incoming.hlc)) return { apply: true };
   if (sameValue(current, incoming.value)) return { apply: true };
   if (spec.policy === 'observed') {

@@ -2,14 +2,14 @@ import { BadRequestException, ConflictException, Injectable, NotFoundException }
 import { formatHlc, type Mutation, type MutationResult, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
 import { type EntityManager, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
-import { type SyncRecord, syncRepository } from '../../sync/entities/sync-schemas.js';
-import { type Actor, SyncEngine } from '../../sync/sync-engine.service.js';
-import { toSyncedRow } from '../../sync/sync.service.js';
-import type { AuthUser } from '../decorators/current-user.decorator.js';
-import { sentFields } from '../defined-fields.js';
-import { WriteQueue } from '../write-queue.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
+import { type Actor, SyncEngine } from '../sync/sync-engine.service.js';
+import { toSyncedRow } from '../sync/sync.service.js';
+import type { AuthUser } from '../common/decorators/current-user.decorator.js';
+import { sentFields } from '../common/defined-fields.js';
+import { WriteQueue } from '../common/write-queue.js';
 import type { PageQueryDto } from './page-query.dto.js';
-import { jsonListHas, textLike } from '../../database/sql.js';
+import { jsonListHas, textLike } from '../database/sql.js';
 
 /** The records the office reads and writes directly; the rest arrive from devices through sync. */
 export type OfficeRecord = 'customer' | 'site' | 'area' | 'board' | 'circuit' | 'job' | 'visit' | 'priceItem';

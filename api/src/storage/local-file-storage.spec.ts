@@ -2,15 +2,16 @@ import { afterAll, describe, expect, it } from '@jest/globals';
 import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { LocalPhotoStorage } from './local-photo-storage.js';
-import { PhotoObjectMissing, photoKey } from './photo-storage.js';
+import { StoredFileMissing } from './file-storage.js';
+import { PHOTO_KEYS, photoKey } from './file-stores.js';
+import { LocalFileStorage } from './local-file-storage.js';
 
 const ORG = '01890000-0000-7000-8000-000000000001';
 const SHA = 'ab'.repeat(32);
 
-describe('LocalPhotoStorage', () => {
+describe('LocalFileStorage', () => {
   const dir = mkdtempSync(join(tmpdir(), 'wiretrail-photos-'));
-  const storage = new LocalPhotoStorage(dir);
+  const storage = new LocalFileStorage(dir, PHOTO_KEYS);
   afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
   it('keeps bytes under their key and hands them back whole', async () => {
@@ -27,8 +28,8 @@ describe('LocalPhotoStorage', () => {
   });
 
   it('says when nothing is stored under a key', async () => {
-    await expect(storage.get(photoKey(ORG, SHA, 'display'))).rejects.toBeInstanceOf(PhotoObjectMissing);
-    await expect(storage.stream(photoKey(ORG, SHA, 'original'))).rejects.toBeInstanceOf(PhotoObjectMissing);
+    await expect(storage.get(photoKey(ORG, SHA, 'display'))).rejects.toBeInstanceOf(StoredFileMissing);
+    await expect(storage.stream(photoKey(ORG, SHA, 'original'))).rejects.toBeInstanceOf(StoredFileMissing);
   });
 
   it('refuses keys it did not make', async () => {

@@ -1,16 +1,16 @@
 import { GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
 import type { Readable } from 'node:stream';
-import type { PhotosConfig } from '../../config/photos.config.js';
-import { type FileStorage, type KeySpace, PHOTO_KEYS, PhotoObjectMissing } from './photo-storage.js';
+import type { StorageConfig } from '../config/storage.config.js';
+import { type FileStorage, type KeySpace, StoredFileMissing } from './file-storage.js';
 
 /** Files as objects in an S3-compatible bucket (AWS, MinIO, Garage, R2 and the like). */
-export class S3PhotoStorage implements FileStorage {
+export class S3FileStorage implements FileStorage {
   private readonly client: S3Client;
   private readonly bucket: string;
 
   constructor(
-    options: PhotosConfig['s3'],
-    private readonly keys: KeySpace = PHOTO_KEYS,
+    options: StorageConfig['s3'],
+    private readonly keys: KeySpace,
   ) {
     this.bucket = options.bucket;
     this.client = new S3Client({
@@ -61,7 +61,7 @@ export class S3PhotoStorage implements FileStorage {
       // In Node.js the body is a readable stream.
       return res.Body as Readable;
     } catch (err) {
-      throw isMissing(err) ? new PhotoObjectMissing(key) : err;
+      throw isMissing(err) ? new StoredFileMissing(key) : err;
     }
   }
 }

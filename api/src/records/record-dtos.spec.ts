@@ -2,14 +2,14 @@ import { describe, expect, it } from '@jest/globals';
 import { type FieldType, SYNC_ENTITIES } from '@wiretrail/core';
 import { plainToInstance } from 'class-transformer';
 import { getMetadataStorage, validate } from 'class-validator';
-import { CreateAreaDto } from '../../areas/dto/create-area.dto.js';
-import { CreateBoardDto } from '../../boards/dto/create-board.dto.js';
-import { CreateCircuitDto } from '../../circuits/dto/create-circuit.dto.js';
-import { CreateCustomerDto } from '../../customers/dto/create-customer.dto.js';
-import { CreateJobDto } from '../../jobs/dto/create-job.dto.js';
-import { CreatePriceItemDto } from '../../pricing/dto/create-price-item.dto.js';
-import { CreateSiteDto } from '../../sites/dto/create-site.dto.js';
-import { CreateVisitDto } from '../../visits/dto/create-visit.dto.js';
+import { CreateAreaDto } from '../areas/dto/create-area.dto.js';
+import { CreateBoardDto } from '../boards/dto/create-board.dto.js';
+import { CreateCircuitDto } from '../circuits/dto/create-circuit.dto.js';
+import { CreateCustomerDto } from '../customers/dto/create-customer.dto.js';
+import { CreateJobDto } from '../jobs/dto/create-job.dto.js';
+import { CreatePriceItemDto } from '../pricing/dto/create-price-item.dto.js';
+import { CreateSiteDto } from '../sites/dto/create-site.dto.js';
+import { CreateVisitDto } from '../visits/dto/create-visit.dto.js';
 import type { OfficeRecord } from './records.service.js';
 
 /** The office's DTOs must accept exactly what the field registry accepts, or REST and sync would disagree. */

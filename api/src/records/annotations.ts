@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { type SyncRecord, syncRepository } from '../../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import type { OfficeRecord } from './records.service.js';
 
 /** Rows by id, looked up with a reference that may be empty (an unset area or circuit finds nothing). */

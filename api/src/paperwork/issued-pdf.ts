@@ -1,9 +1,13 @@
 import { NotFoundException } from '@nestjs/common';
 import type { Request, Response } from 'express';
-import { sendStoredFile } from '../../common/stored-file-response.js';
-import type { FileStorage } from '../../photos/storage/photo-storage.js';
-import { PhotoObjectMissing } from '../../photos/storage/photo-storage.js';
-import { documentKey } from './document-storage.js';
+import { createHash } from 'node:crypto';
+import { sendStoredFile } from '../common/stored-file-response.js';
+import type { MailAttachment } from '../mail/mail.service.js';
+import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
+import { documentKey } from '../storage/file-stores.js';
+
+/** The SHA-256 kept with an issued PDF, so that any copy can be checked against the one issued. */
+export const fingerprint = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
 /** An issued PDF never changes, so a browser may keep it; it is the caller's own, so not in shared caches. */
 const CACHE_ISSUED = 'private, max-age=31536000, immutable';
@@ -34,9 +38,18 @@ export async function sendIssuedPdf(storage: FileStorage, document: IssuedFile, 
       try {
         return await storage.stream(documentKey(document.organisationId, document.id));
       } catch (err) {
-        if (err instanceof PhotoObjectMissing) throw new NotFoundException('The PDF of this document is missing from storage.');
+        if (err instanceof StoredFileMissing) throw new NotFoundException('The PDF of this document is missing from storage.');
         throw err;
       }
     },
   });
+}
+
+/** An issued PDF to attach to an e-mail: exactly what was issued, or nothing (what goes to the customer is checked by its fingerprint). */
+export async function issuedPdfAttachment(storage: FileStorage, document: IssuedFile): Promise<MailAttachment> {
+  const bytes = await storage.get(documentKey(document.organisationId, document.id));
+  if (fingerprint(bytes) !== document.pdfSha256) {
+    throw new Error(`The stored PDF of ${String(document.number)} does not match the fingerprint recorded when it was issued, so it was not sent.`);
+  }
+  return { filename: pdfFilename(document), content: bytes, contentType: 'application/pdf' };
 }

@@ -1,0 +1,17 @@
+import type { DOCUMENT_KINDS } from '@wiretrail/core';
+
+export const MINOR_WORKS_TITLE = 'Minor works certificate';
+export const CABLING_REPORT_TITLE = 'Cabling test report';
+export const PHOTO_RECORD_TITLE = 'Photo record';
+
+/** What each kind of document is called: on its PDF, in the e-mail it goes with, and where an invoice lists it. */
+export const DOCUMENT_TITLES: Record<(typeof DOCUMENT_KINDS)[number], string> = {
+  'minor-works': MINOR_WORKS_TITLE,
+  'cabling-report': CABLING_REPORT_TITLE,
+  'photo-record': PHOTO_RECORD_TITLE,
+};
+
+/** The title of a stored document row's kind; a kind this version does not know reads as plain "Document". */
+export function documentTitle(kind: unknown): string {
+  return Object.entries(DOCUMENT_TITLES).find(([k]) => k === kind)?.[1] ?? 'Document';
+}

@@ -1,0 +1,113 @@
+import {
+  type EntitySpec,
+  fieldError,
+  type FieldValue,
+  isHlc,
+  isSyncEntity,
+  isUuid,
+  type Mutation,
+  SYNC_ENTITIES,
+  type SyncEntityName,
+} from '@wiretrail/core';
+import type { SyncRecord } from './entities/sync-schemas.js';
+import type { TechnicianScope } from './scope.service.js';
+
+/** A mutation that can never succeed; it is refused alone and the batch goes on. */
+export class MutationRefused extends Error {}
+
+/** What the server keeps on every synced row; no mutation may set it. */
+const BOOKKEEPING = new Set(['id', 'organisationId', 'version', 'fieldMeta', 'deletedAt', 'createdById', 'updatedById', 'createdAt', 'updatedAt']);
+
+/** A mutation whose shape and fields are known good: what the rest of the engine may trust. */
+export interface CheckedMutation {
+  mutation: Mutation;
+  spec: EntitySpec;
+  set: Record<string, FieldValue>;
+  isDelete: boolean;
+}
+
+/** What applied_mutation can keep: PostgreSQL holds varchar(64) to its length and refuses NUL in text. */
+export function isMutationId(id: unknown): id is string {
+  return typeof id === 'string' && id.length >= 8 && id.length <= 64 && !/\p{Cc}/u.test(id);
+}
+
+/**
+ * Judges one mutation of a push on its own: its shape, its entity, and every field it sets against the registry.
+ * A batch is a list of anything until checked, so null or a number in it is refused alone, like any bad mutation.
+ */
+export function checkMutation(mutation: Mutation): CheckedMutation {
+  if (typeof mutation !== 'object' || mutation === null || Array.isArray(mutation)) {
+    throw new MutationRefused('A mutation must be an object: { mutationId, entity, id, baseVersion, set or delete, hlc }.');
+  }
+  if (!isMutationId(mutation.mutationId)) throw new MutationRefused('mutationId must be a unique id of 8 to 64 characters, none of them control characters.');
+  if (!isSyncEntity(mutation.entity)) throw new MutationRefused(`entity must be one of the synced entities; got ${JSON.stringify(mutation.entity)}.`);
+  const spec = SYNC_ENTITIES[mutation.entity];
+  if (spec.serverOnly) throw new MutationRefused(`${mutation.entity} rows are made by the server only.`);
+  if (!isUuid(mutation.id)) throw new MutationRefused('id must be a UUID.');
+  if (!isHlc(mutation.hlc)) throw new MutationRefused('hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>.');
+  if (!Number.isInteger(mutation.baseVersion) || mutation.baseVersion < 0) throw new MutationRefused('baseVersion must be a whole number, 0 for a new row.');
+  const isDelete = mutation.delete === true;
+  const set = mutation.set ?? {};
+  if (!isDelete && (typeof set !== 'object' || Array.isArray(set) || Object.keys(set).length === 0)) {
+    throw new MutationRefused('A mutation needs set with at least one field, or delete: true.');
+  }
+  if (isDelete && mutation.set && Object.keys(mutation.set).length > 0) throw new MutationRefused('A mutation either sets fields or deletes, not both.');
+  for (const [field, value] of Object.entries(set)) {
+    if (BOOKKEEPING.has(field)) throw new MutationRefused(`${mutation.entity}.${field} is kept by the server and cannot be set.`);
+    const problem = fieldError(mutation.entity, field, value);
+    if (problem) throw new MutationRefused(problem);
+  }
+  return { mutation, spec, set, isDelete };
+}
+
+/** A new row must bring every field the registry calls required. */
+export function checkNewRow(entity: SyncEntityName, set: Record<string, FieldValue>): void {
+  const missing = requiredFields(entity).filter((f) => set[f] === undefined || set[f] === null).map((f) => `${entity}.${f}`);
+  if (missing.length) throw new MutationRefused(`A new ${entity} needs ${missing.join(', ')}.`);
+}
+
+/**
+ * What a technician may write: only technician fields, only rows of their assigned visits and those visits' sites,
+ * and never moved to another visit or site. The office (scope null) may write anything of its organisation.
+ */
+export function checkTechnicianWrite(scope: TechnicianScope | null, checked: CheckedMutation, existing: SyncRecord | null): void {
+  if (!scope) return;
+  const { mutation: m, spec, set, isDelete } = checked;
+  const refuse = (why: string) => {
+    throw new MutationRefused(why);
+  };
+  if (spec.technicianWrite === 'none') refuse(`A technician cannot change ${m.entity} records; the office can.`);
+  const officeFields = Object.keys(set).filter((f) => !spec.fields[f]?.technician);
+  if (officeFields.length) refuse(`${officeFields.map((f) => `${m.entity}.${f}`).join(', ')} can be changed by the office only.`);
+  if (isDelete && (spec.technicianWrite === 'assigned-visit' || spec.technicianWrite === 'site-row')) refuse(`A technician cannot delete a ${m.entity}.`);
+  switch (spec.technicianWrite) {
+    case 'assigned-visit':
+      if (!existing || !scope.visitIds.has(m.id)) refuse('That visit is not assigned to you.');
+      return;
+    case 'site-row':
+      if (!existing || !scope.siteIds.has(m.id)) refuse('That site is not one of your visits.');
+      return;
+    case 'visit': {
+      const visitId = (existing?.visitId ?? set.visitId) as string | undefined;
+      if (existing && set.visitId !== undefined && set.visitId !== existing.visitId) refuse(`A ${m.entity} cannot move to another visit.`);
+      if (!visitId || !scope.visitIds.has(visitId)) refuse('That visit is not assigned to you.');
+      const siteId = (set.siteId ?? existing?.siteId) as string | undefined;
+      if (siteId !== scope.visitSite.get(visitId!)) refuse(`${m.entity}.siteId must be the site of its visit.`);
+      return;
+    }
+    case 'site': {
+      const siteId = (existing?.siteId ?? set.siteId) as string | undefined;
+      if (existing && set.siteId !== undefined && set.siteId !== existing.siteId) refuse(`A ${m.entity} cannot move to another site.`);
+      if (!siteId || !scope.siteIds.has(siteId)) refuse('That site is not one of your visits.');
+      return;
+    }
+  }
+}
+
+const REQUIRED = new Map<SyncEntityName, string[]>();
+/** The fields a new row of an entity must have. */
+function requiredFields(entity: SyncEntityName): string[] {
+  let fields = REQUIRED.get(entity);
+  if (!fields) REQUIRED.set(entity, (fields = Object.entries(SYNC_ENTITIES[entity].fields).filter(([, f]) => f.required).map(([name]) => name)));
+  return fields;
+}

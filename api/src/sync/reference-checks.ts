@@ -1,0 +1,62 @@
+import { type EntitySpec, type FieldValue, isSyncEntity, isUuid, type Mutation, type RefTarget, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
+import { type EntityManager, In, IsNull } from 'typeorm';
+import { User } from '../users/entities/user.entity.js';
+import { SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
+import { selectMany } from './bulk-write.js';
+import { MutationRefused } from './mutation-checks.js';
+
+/** `entity:id` of the rows a batch has found to exist in the caller's organisation. */
+export type KnownRows = Set<string>;
+
+/** The ids a batch's mutations point at, per entity pointed at; anything that could not be an id is left out. */
+export function referencedIds(mutations: readonly Mutation[]): Map<RefTarget, Set<string>> {
+  const refIds = new Map<RefTarget, Set<string>>();
+  const add = (entity: RefTarget, id: unknown) => {
+    if (!isUuid(id)) return;
+    if (!refIds.has(entity)) refIds.set(entity, new Set());
+    refIds.get(entity)!.add(id);
+  };
+  for (const m of mutations) {
+    if (!m || !isSyncEntity(m.entity) || SYNC_ENTITIES[m.entity].serverOnly) continue;
+    const fields = SYNC_ENTITIES[m.entity].fields;
+    for (const [field, value] of Object.entries(m.set && typeof m.set === 'object' ? m.set : {})) {
+      const type = Object.hasOwn(fields, field) ? fields[field]!.type : undefined;
+      if (type?.kind === 'ref') add(type.entity, value);
+      if (type?.kind === 'refs' && Array.isArray(value)) for (const id of value) add(type.entity, id);
+    }
+  }
+  return refIds;
+}
+
+/** Finds, in one query per entity, which of a batch's references exist, so that checking each mutation asks nothing. */
+export async function preloadReferences(em: EntityManager, organisationId: string, refIds: Map<RefTarget, Set<string>>, known: KnownRows): Promise<void> {
+  for (const [entity, ids] of refIds) {
+    const list = [...ids];
+    const found =
+      entity === 'user'
+        ? await selectMany(em, User, 'id', list, { organisationId })
+        : await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', list, { organisationId, deletedAt: null });
+    for (const row of found) known.add(`${entity}:${row.id}`);
+  }
+}
+
+/**
+ * Every id a row points at must be a row of the same organisation. Only what the batch has not already found is
+ * looked up (a row made earlier in the batch, say), and what is found is remembered for the rest of it.
+ */
+export async function checkReferences(
+  em: EntityManager, organisationId: string, entity: SyncEntityName, spec: EntitySpec, set: Record<string, FieldValue>, known: KnownRows,
+): Promise<void> {
+  for (const [field, value] of Object.entries(set)) {
+    const type = spec.fields[field]!.type;
+    if (value === null || (type.kind !== 'ref' && type.kind !== 'refs')) continue;
+    const ids = (type.kind === 'ref' ? [value as string] : (value as string[])).filter((id) => !known.has(`${type.entity}:${id}`));
+    if (ids.length === 0) continue;
+    const found =
+      type.entity === 'user'
+        ? await em.countBy(User, { id: In(ids), organisationId })
+        : await em.getRepository<SyncRecord>(type.entity).countBy({ id: In(ids), organisationId, deletedAt: IsNull() });
+    if (found !== new Set(ids).size) throw new MutationRefused(`${entity}.${field} points at ${type.entity === 'area' ? 'an' : 'a'} ${type.entity} that does not exist.`);
+    for (const id of ids) known.add(`${type.entity}:${id}`);
+  }
+}

@@ -1,0 +1,73 @@
+import { type Download, expect, type Locator, type Page } from '@playwright/test';
+
+/** A job at the office's desk: reached from the Jobs board or table, with its tabs. */
+export class OfficeJobPage {
+  readonly photoTrail: Locator;
+  readonly cableSchedule: Locator;
+  readonly issuedDocuments: Locator;
+
+  constructor(readonly page: Page) {
+    this.photoTrail = page.getByRole('region', { name: 'Photo trail' });
+    this.cableSchedule = page.getByRole('grid', { name: 'Cable schedule' });
+    this.issuedDocuments = page.getByRole('table', { name: 'Issued documents' });
+  }
+
+  /** The Jobs board, from the side navigation. */
+  async openBoard(): Promise<void> {
+    await this.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
+  }
+
+  /** A job's card in one column of the board, by its reference. */
+  boardCard(column: string, reference: RegExp): Locator {
+    return this.page.getByRole('region', { name: column }).getByRole('article', { name: reference });
+  }
+
+  /** Opens the job from its card on the board. */
+  async openFromCard(card: Locator, title: RegExp): Promise<void> {
+    await card.getByRole('link', { name: title }).click();
+    await this.expectJob(title);
+  }
+
+  async expectJob(title: string | RegExp): Promise<void> {
+    await expect(this.page.getByRole('heading', { level: 1, name: title })).toBeVisible();
+  }
+
+  async tab(name: 'Photo trail' | 'Cable schedule' | 'Documents & links'): Promise<void> {
+    await this.page.getByRole('tab', { name }).click();
+  }
+
+  /** A cable's row in the job's cable schedule. */
+  cableRow(label: string | RegExp): Locator {
+    return this.cableSchedule.getByRole('row', { name: typeof label === 'string' ? new RegExp(label) : label });
+  }
+
+  /** Downloads the cable schedule as CSV. */
+  async exportCableSchedule(): Promise<Download> {
+    const download = this.page.waitForEvent('download');
+    await this.page.getByRole('button', { name: 'Export CSV' }).click();
+    return download;
+  }
+
+  /** Goes to the job's conflicts to settle them. */
+  async openConflicts(): Promise<void> {
+    await this.page.getByRole('link', { name: /^Settle/ }).click();
+  }
+
+  /** Issues the job's minor works certificate, confirming the question. */
+  async issueMinorWorksCertificate(): Promise<void> {
+    await this.tab('Documents & links');
+    await this.page.getByRole('button', { name: 'Issue minor works certificate' }).click();
+    await this.page.getByRole('dialog', { name: 'Issue the minor works certificate?' }).getByRole('button', { name: 'Issue' }).click();
+  }
+
+  /** An issued document's row, by the words it shows. */
+  documentRow(text: string): Locator {
+    return this.issuedDocuments.getByRole('row').filter({ hasText: text }).first();
+  }
+
+  /** Opens the form that e-mails an issued document to the customer. */
+  async openEmail(number: string): Promise<Locator> {
+    await this.issuedDocuments.getByRole('button', { name: `E-mail ${number} to the customer` }).click();
+    return this.page.getByRole('dialog', { name: /E-mail/ });
+  }
+}
