@@ -11,7 +11,7 @@ import { accountsOf, todayFor } from '../invoices/invoice-accounts.js';
 import { PaymentsService } from '../invoices/payments.service.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
-import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
+import { syncRepository } from '../sync/entities/sync-schemas.js';
 import { CardCheckout } from './entities/card-checkout.entity.js';
 import { PaymentEvent } from './entities/payment-event.entity.js';
 import { PAYMENT_PROVIDER } from './payment-provider.js';

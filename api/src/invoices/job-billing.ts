@@ -3,7 +3,7 @@ import { type EntityManager, In, IsNull } from 'typeorm';
 import { type JobFile, jobVisits } from '../paperwork/job-file.js';
 import { shortDateWords } from '../paperwork/pdf/document-words.js';
 import type { RateBook } from '../pricing/rate-book.js';
-import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
+import { syncRepository } from '../sync/entities/sync-schemas.js';
 import type { LineDraft } from './invoice-lines.js';
 import { quantityText } from './invoice-lines.js';
 
