@@ -101,14 +101,40 @@ export const firstScreenChunks: Rolldown.CodeSplittingGroup[] = [
   { name: (id, ctx) => (placeOf(id, ctx) === 'phone' ? 'phone' : null), priority: 1, includeDependenciesRecursively: false },
 ];
 
+const LOCAL_DATABASE = /[\\/]src[\\/]lib[\\/]db\.ts$/;
+/** Where the local database may be opened: shared plumbing (sync, photos) and a feature's `data/` folder. */
+const OPENS_LOCAL_DATABASE = /[\\/]src[\\/](lib[\\/]|features[\\/][^\\/]+[\\/]data[\\/])/;
+const LOCAL_READS = /[\\/]src[\\/]features[\\/][^\\/]+[\\/]data[\\/]/;
+/** The office's part: its routes, a feature's `desk/` screens and its REST fetchers. */
+const DESK = /[\\/]src[\\/](app[\\/]routes[\\/]office[\\/]|features[\\/][^\\/]+[\\/](desk|api)[\\/])/;
+
+const shortName = (id: string) => id.replace(/^.*[\\/]src[\\/]/, 'src/');
+
 /**
- * Fails the build when the phone's local database lands in a file every screen loads. It happens when a module
- * outside the technician's part imports `@/lib/db` (the plan then counts it as shared): the sign-in page, the office
- * and the customers' links would all download Dexie.
+ * Fails the build when the phone's local database could reach a screen that is not the technician's. Reads of it
+ * live in a feature's `data/` folder and nothing of the office's imports them, so the office never waits on a
+ * phone's database; and when a module outside the technician's part imports `@/lib/db` anyway, the plan counts it
+ * as shared and Dexie lands in a file every screen loads: the sign-in page, the office and the customers' links
+ * would all download it.
  */
 export const localDatabaseStaysOnThePhone: Plugin = {
   name: 'wiretrail:local-database-stays-on-the-phone',
   apply: 'build',
+  buildEnd(error) {
+    if (error) return;
+    for (const id of this.getModuleIds()) {
+      const importers = this.getModuleInfo(id)?.importers ?? [];
+      if (LOCAL_DATABASE.test(id)) {
+        for (const importer of importers.filter((i) => !OPENS_LOCAL_DATABASE.test(i))) {
+          this.error(`${shortName(importer)} opens the local database (src/lib/db.ts): read it through a feature's data/ folder.`);
+        }
+      } else if (LOCAL_READS.test(id)) {
+        for (const importer of importers.filter((i) => DESK.test(i))) {
+          this.error(`${shortName(importer)} is the office's and reads the phone's database through ${shortName(id)}.`);
+        }
+      }
+    }
+  },
   generateBundle(_options, bundle) {
     for (const chunk of Object.values(bundle)) {
       if (chunk.type === 'chunk' && (chunk.isEntry || chunk.name === 'common') && chunk.moduleIds.some((id) => /[\\/]node_modules[\\/]dexie[\\/]/.test(id))) {

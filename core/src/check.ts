@@ -24,7 +24,7 @@ export type Finding = CheckResult & { readonly name: string };
 /** Shown beside verdicts on every screen and document. */
 export const VERDICT_DISCLAIMER =
   'Wiretrail verdicts are an aid to checking figures, not a certificate of compliance: ' +
-  'the wiring regulations in force, local codes and the judgement of a competent, licensed person decide.';
+  'the wiring regulations in force, local codes and a competent person decide (a licensed electrician only where local law requires one).';
 
 /** Thrown for inputs that make no physical sense or that the rule set has no published value for. */
 export class InvalidInputError extends Error {

@@ -11,8 +11,8 @@ export const paths = {
   visitCable: { path: 'cables/:cableId', href: (visitId: string, cableId: string | 'new') => `/visits/${encodeURIComponent(visitId)}/cables/${encodeURIComponent(cableId)}` },
   visitPoints: { path: 'points', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/points` },
   visitPoint: { path: 'points/:pointId', href: (visitId: string, pointId: string | 'new') => `/visits/${encodeURIComponent(visitId)}/points/${encodeURIComponent(pointId)}` },
-  visitTests: { path: 'tests', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/tests` },
-  visitCircuitTest: { path: 'tests/:circuitId', href: (visitId: string, circuitId: string) => `/visits/${encodeURIComponent(visitId)}/tests/${encodeURIComponent(circuitId)}` },
+  visitCircuits: { path: 'tests', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/tests` },
+  visitCircuit: { path: 'tests/:circuitId', href: (visitId: string, circuitId: string) => `/visits/${encodeURIComponent(visitId)}/tests/${encodeURIComponent(circuitId)}` },
   visitSignOff: { path: 'sign-off', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/sign-off` },
   cableLabels: { path: '/visits/:visitId/labels', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/labels` },
   /** Where a cable label's QR code points: sends a technician to the record on the phone, the office to the job's schedule. */

@@ -11,9 +11,8 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { type CheckResult, roundTo, VERDICT_DISCLAIMER, type Verdict } from '@wiretrail/core';
 import { useState } from 'react';
+import { VERDICT_COLOURS, VERDICT_WORDS } from './verdict-words';
 
-export const VERDICT_WORDS: Record<Verdict, string> = { pass: 'Pass', fail: 'Fail', check: 'Check' };
-const COLOURS = { pass: 'success', fail: 'error', check: 'warning' } as const;
 const ICONS = { pass: <CheckCircleOutline />, fail: <ErrorOutline />, check: <HelpOutline /> };
 
 /** A figure as a meter shows it: whole numbers as they are, small ones to two places. */
@@ -27,37 +26,67 @@ export function figure(value: number | null, unit: string): string {
 export function AidLine() {
   return (
     <Typography variant="caption" color="text.secondary" component="p" sx={{ m: 0 }}>
-      An aid only: the regulations in force, local codes and licensed practice decide.
+      An aid only: the regulations in force, local codes and a competent person decide.
     </Typography>
   );
 }
 
-/** A verdict as a chip; a tap shows the figure, the limit and where the limit comes from. */
-export function VerdictChip({
-  what,
-  result,
-  size = 'medium',
-  against = 'limit',
-}: {
+type Judged = Pick<CheckResult, 'verdict' | 'value' | 'limit' | 'unit' | 'source' | 'note'>;
+
+interface JudgedProps {
+  /** What was judged, said before the verdict: "Earth fault loop impedance Zs". */
   what: string;
-  result: Pick<CheckResult, 'verdict' | 'value' | 'limit' | 'unit' | 'source' | 'note'>;
+  result: Judged;
   size?: 'small' | 'medium';
   /**
    * What the figure beside the verdict is: a limit; the value a reading should be close to; the most two readings
-   * may differ by; or nothing worth showing on the chip (the sentence beside it says it better).
+   * may differ by; or nothing worth showing on the chip (the sentence or the reading beside it says it better).
    */
   against?: 'limit' | 'expected' | 'within' | 'none';
-}) {
+  /** Said before the verdict on the chip itself, where a row holds several: "Overall". */
+  prefix?: string;
+  /** Without its icon, where a table holds a chip per reading and the columns are narrow. */
+  plain?: boolean;
+}
+
+interface SummaryProps {
+  /** A verdict with nothing to open, for a row that leads elsewhere (a list of cables, a schedule's column). */
+  verdict: Verdict;
+  size?: 'small' | 'medium';
+  prefix?: string;
+}
+
+/**
+ * A verdict as a chip, the same on the phone and at the desk. Given a judged result, a tap shows the figure, the
+ * limit and where the limit comes from; given a verdict alone, it only says it.
+ */
+export function VerdictChip(props: JudgedProps | SummaryProps) {
+  if ('verdict' in props) {
+    const { verdict, size = 'small', prefix } = props;
+    return (
+      <Chip
+        icon={ICONS[verdict]}
+        label={`${prefix ? `${prefix}: ` : ''}${VERDICT_WORDS[verdict]}`}
+        color={VERDICT_COLOURS[verdict]}
+        variant={verdict === 'check' ? 'outlined' : 'filled'}
+        size={size}
+      />
+    );
+  }
+  return <JudgedChip {...props} />;
+}
+
+function JudgedChip({ what, result, size = 'medium', against = 'limit', prefix, plain = false }: JudgedProps) {
   const [open, setOpen] = useState(false);
   const words = VERDICT_WORDS[result.verdict];
-  const prefix = { limit: 'limit ', expected: 'expect about ', within: 'within ±', none: '' }[against];
-  const limit = result.limit !== null && against !== 'none' ? ` · ${prefix}${figure(result.limit, result.unit)}` : '';
+  const said = { limit: 'limit ', expected: 'expect about ', within: 'within ±', none: '' }[against];
+  const limit = result.limit !== null && against !== 'none' ? ` · ${said}${figure(result.limit, result.unit)}` : '';
   return (
     <>
       <Chip
-        icon={ICONS[result.verdict]}
-        label={`${words}${limit}`}
-        color={COLOURS[result.verdict]}
+        icon={plain ? undefined : ICONS[result.verdict]}
+        label={`${prefix ? `${prefix}: ` : ''}${words}${limit}`}
+        color={VERDICT_COLOURS[result.verdict]}
         variant={result.verdict === 'check' ? 'outlined' : 'filled'}
         size={size}
         onClick={() => setOpen(true)}

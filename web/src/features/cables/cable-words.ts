@@ -1,4 +1,4 @@
-import type { ConductorColour } from '@wiretrail/core';
+import type { ConductorColour, WiremapFault } from '@wiretrail/core';
 
 export const MEDIUM_WORDS: Record<string, string> = {
   Cat5e: 'Cat5e', Cat6: 'Cat6', Cat6A: 'Cat6A', coax: 'Coax', speaker: 'Speaker cable', HDMI: 'HDMI', fibre: 'Fibre', other: 'Other',
@@ -6,6 +6,7 @@ export const MEDIUM_WORDS: Record<string, string> = {
 export const CABLE_STATUS_WORDS: Record<string, string> = {
   unidentified: 'Not yet identified', traced: 'Traced', terminated: 'Terminated', tested: 'Tested',
 };
+export const cableStatusWords = (status: string | null) => (status ? (CABLE_STATUS_WORDS[status] ?? status) : '—');
 export const TRACE_METHOD_WORDS: Record<string, string> = {
   'tone-and-probe': 'Tone and probe', continuity: 'Continuity tester', tdr: 'TDR', visual: 'Seen end to end',
 };
@@ -19,6 +20,11 @@ export const COLOUR_WORDS: Record<ConductorColour, string> = {
 };
 export const colourWords = (c: ConductorColour | null) => (c ? COLOUR_WORDS[c] : 'no conductor');
 
-export const FAULT_WORDS: Record<string, string> = {
+export const FAULT_WORDS: Record<WiremapFault['kind'], string> = {
   open: 'Open', short: 'Short', reversed: 'Reversed pair', crossed: 'Crossed pairs', split: 'Split pair', miswired: 'Miswired',
 };
+
+/** "Crossed pairs, pins 1, 2, 3, 6 (near end)". */
+export function faultWords(f: WiremapFault): string {
+  return `${FAULT_WORDS[f.kind] ?? f.kind}, pin${f.pins.length === 1 ? '' : 's'} ${f.pins.join(', ')}${f.end ? ` (${f.end} end)` : ''}`;
+}

@@ -13,16 +13,16 @@ import { Link as RouterLink, useParams, useSearchParams } from 'react-router-dom
 import { PageHeader } from '@/components/page-header';
 import { SafetyCaution } from '@/components/safety-caution';
 import { paths } from '@/config/paths';
-import { CableSchedule } from '@/features/cable-runs/components/cable-schedule';
+import { CableSchedule } from '@/features/cables/desk/cable-schedule';
 import { JobConflictsNotice } from '@/features/conflicts/components/job-conflicts-notice';
 import { JobDocuments } from '@/features/documents/components/job-documents';
 import { JobInvoices } from '@/features/invoices/components/job-invoices';
 import { useJob } from '@/features/jobs/api/get-jobs';
-import { useJobVisits } from '@/features/jobs/api/get-job-visits';
+import { useJobVisits } from '@/features/visits/api/get-job-visits';
 import { JobSummary } from '@/features/jobs/components/job-summary';
-import { JobVisits } from '@/features/jobs/components/job-visits';
-import { JobPhotoTrail } from '@/features/photos/components/job-photo-trail';
-import { JobPointChanges } from '@/features/point-changes/components/job-point-changes';
+import { JobVisits } from '@/features/visits/desk/job-visits';
+import { JobPhotoTrail } from '@/features/photos/desk/job-photo-trail';
+import { JobPointChanges } from '@/features/points/desk/job-point-changes';
 import { siteAreasQueryOptions } from '@/features/sites/api/get-areas';
 import { siteCircuitsQueryOptions } from '@/features/sites/api/get-circuits';
 import { siteQueryOptions } from '@/features/sites/api/get-sites';
@@ -30,8 +30,8 @@ import { JobShareLinks } from '@/features/share-links/components/job-share-links
 import { CustomerAndSite } from '@/features/sites/components/customer-and-site';
 import { SiteCircuits } from '@/features/sites/components/site-circuits';
 import { usersQueryOptions } from '@/features/team/api/get-users';
-import { CircuitTestVerdict } from '@/features/test-results/components/circuit-test-verdict';
-import { JobTestResults } from '@/features/test-results/components/job-test-results';
+import { CircuitTestVerdict } from '@/features/circuits/desk/circuit-test-verdict';
+import { JobTestResults } from '@/features/circuits/desk/job-test-results';
 import { useDirectory } from '@/lib/directory';
 import { useSession } from '@/lib/session';
 

@@ -3,10 +3,10 @@ import Tab from '@mui/material/Tab';
 import Tabs from '@mui/material/Tabs';
 import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
-import { BillingTermsForm } from '@/features/pricing/components/billing-terms-form';
-import { LabourRatesCard } from '@/features/pricing/components/labour-rates-card';
-import { PriceListTable } from '@/features/pricing/components/price-list-table';
-import { VatRatesCard } from '@/features/pricing/components/vat-rates-card';
+import { BillingTermsForm } from '@/features/price-list/components/billing-terms-form';
+import { LabourRatesCard } from '@/features/price-list/components/labour-rates-card';
+import { PriceListTable } from '@/features/price-list/components/price-list-table';
+import { VatRatesCard } from '@/features/price-list/components/vat-rates-card';
 
 const TABS = [
   { key: 'items', label: 'Price list' },

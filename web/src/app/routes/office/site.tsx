@@ -7,7 +7,7 @@ import { useState } from 'react';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
-import { CircuitPhotos } from '@/features/photos/components/circuit-photos';
+import { CircuitPhotos } from '@/features/photos/desk/circuit-photos';
 import { useCustomers } from '@/features/sites/api/get-customers';
 import { useSite } from '@/features/sites/api/get-sites';
 import { SiteDialog } from '@/features/sites/components/forms/site-dialog';

@@ -6,9 +6,9 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { Link as RouterLink, useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
-import { useSiteCables } from '@/features/cables/api/get-site-cables';
-import { LabelSheet } from '@/features/cables/components/label-sheet';
-import { useVisit } from '@/features/visits/api/get-visit';
+import { useSiteCables } from '@/features/cables/data/get-site-cables';
+import { LabelSheet } from '@/features/cables/phone/label-sheet';
+import { useVisit } from '@/features/visits/data/get-visit';
 
 /** A sheet of cable labels to print (or show to a label printer app); only the labels go to paper. */
 export function Component() {

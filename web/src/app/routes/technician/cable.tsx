@@ -1,12 +1,11 @@
 import CableOutlined from '@mui/icons-material/CableOutlined';
 import Typography from '@mui/material/Typography';
-import { useLiveQuery } from 'dexie-react-hooks';
 import { Navigate, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
 import { paths } from '@/config/paths';
-import { useCable, useSiteCables } from '@/features/cables/api/get-site-cables';
-import { CableForm } from '@/features/cables/components/cable-form';
-import { db } from '@/lib/db';
+import { useCable, useSiteCables } from '@/features/cables/data/get-site-cables';
+import { CableForm } from '@/features/cables/phone/cable-form';
+import { useOpenVisitAt } from '@/features/visits/data/get-open-visit';
 import { useSession } from '@/lib/session';
 
 /**
@@ -18,12 +17,7 @@ export function Component() {
   const userId = useSession()?.user.id ?? '';
   const cable = useCable(cableId);
   const site = useSiteCables(cable?.siteId ?? '');
-  const visit = useLiveQuery(async () => {
-    if (!cable) return null;
-    const visits = await db.visit.where('siteId').equals(cable.siteId).toArray();
-    const mine = visits.filter((v) => (v.technicianIds ?? []).includes(userId) && v.status !== 'cancelled' && v.status !== 'finished');
-    return mine.find((v) => v.status === 'on-site') ?? mine.sort((a, b) => (a.plannedStart ?? '').localeCompare(b.plannedStart ?? ''))[0] ?? null;
-  }, [cable, userId]);
+  const visit = useOpenVisitAt(cable?.siteId, userId);
   if (cable === undefined || visit === undefined || (cable && !site)) return null;
   if (!cable) {
     return (

@@ -8,7 +8,7 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import { useEffect, useState } from 'react';
 import { PageHeader } from '@/components/page-header';
-import { PhotoUploads } from '@/features/photos/components/photo-uploads';
+import { PhotoUploads } from '@/features/photos/phone/photo-uploads';
 import { FailedChanges } from '@/features/sync/components/failed-changes';
 import { useSession } from '@/lib/session';
 import { syncNow } from '@/lib/sync/sync-runner';

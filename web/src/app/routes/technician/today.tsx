@@ -3,8 +3,8 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { EmptyState } from '@/components/empty-state';
 import { PageHeader } from '@/components/page-header';
-import { useUpcomingVisits } from '@/features/visits/api/get-upcoming-visits';
-import { VisitCard } from '@/features/visits/components/visit-card';
+import { useUpcomingVisits } from '@/features/visits/data/get-upcoming-visits';
+import { VisitCard } from '@/features/visits/phone/visit-card';
 import { useSession } from '@/lib/session';
 import { useSyncStatus } from '@/lib/sync/use-sync-status';
 

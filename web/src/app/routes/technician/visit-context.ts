@@ -1,5 +1,5 @@
 import { useOutletContext } from 'react-router-dom';
-import type { VisitSummary } from '@/features/visits/api/get-upcoming-visits';
+import type { VisitSummary } from '@/features/visits/data/get-upcoming-visits';
 
 /** What every section of a visit is given by the visit screen around it. */
 export interface VisitContext {

@@ -5,7 +5,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
 import { ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
-import { lengthFrom, parseNvp } from '../components/cable-form';
+import { lengthFrom, parseNvp } from '../phone/cable-form';
 
 beforeEach(resetPhone);
 afterEach(tidyUp);

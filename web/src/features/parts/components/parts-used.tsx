@@ -14,7 +14,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { readingField, usableReading } from '@/lib/readings';
 import { createRecord, deleteRecord } from '@/lib/sync/local-write';
-import { useVisitParts } from '../api/get-parts';
+import { useVisitParts } from '../data/get-parts';
 
 const TYPED = 'typed';
 

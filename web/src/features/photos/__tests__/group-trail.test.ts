@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ServerPhoto } from '../api/get-photos';
-import { groupTrail } from '../components/job-photo-trail';
+import { groupTrail } from '../desk/job-photo-trail';
 
 const photo = (id: string, visitId: string, visitPlannedStart: string, areaId: string | null, takenAt: string): ServerPhoto => ({
   id, visitId, visitPlannedStart, areaId, takenAt, siteId: 's', subjectType: null, subjectId: null, caption: id, tags: [], sha256: null, sizeBytes: null,

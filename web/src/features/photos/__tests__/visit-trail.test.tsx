@@ -6,8 +6,8 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { db, type LocalRow, type PhotoRow, type VisitRow } from '@/lib/db';
 import { setSession } from '@/lib/session';
 import { resetUploadProgress } from '@/lib/photos/upload-progress';
-import { photoBadge } from '../components/photo-badge';
-import { VisitTrail } from '../components/visit-trail';
+import { photoBadge } from '../phone/photo-badge';
+import { VisitTrail } from '../phone/visit-trail';
 
 const USER = { id: '01900000-0000-7000-8000-0000000000aa', email: 'tech1@larkfield.example', name: 'Sam Brannigan', role: 'technician' as const, organisationId: 'o1' };
 const SITE = '01900000-0000-7000-8000-000000000002';

@@ -5,7 +5,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
 import { addRing, at, base, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
-import { predictExtension } from '../components/point-form';
+import { predictExtension } from '../phone/point-form';
 
 beforeEach(async () => {
   await resetPhone();

@@ -3,7 +3,7 @@ import { MINOR_WORKS_CASES } from '@wiretrail/core/minor-works-cases';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db';
 import { base, ids, resetPhone, tidyUp } from '@/test/visit-fixtures';
-import { getSignOff } from '../api/get-sign-off';
+import { getSignOff } from '../data/get-sign-off';
 
 beforeEach(resetPhone);
 afterEach(tidyUp);

@@ -9,7 +9,7 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { AidLine } from '@/components/verdicts/verdict-chip';
-import type { Problem, SignOffSummary } from '../api/get-sign-off';
+import type { Problem, SignOffSummary } from '../data/get-sign-off';
 
 const KIND_WORDS: Record<Problem['kind'], string> = { fail: 'Fail', missing: 'Missing', untested: 'Not tested', 'no-circuit': 'No circuit', 'unknown-circuit': 'Unknown circuit' };
 

@@ -5,8 +5,8 @@ import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
 import Typography from '@mui/material/Typography';
 import type { SyncEntityName } from '@wiretrail/core';
-import { useLiveQuery } from 'dexie-react-hooks';
-import { db, type FailedEntry } from '@/lib/db';
+import type { FailedEntry } from '@/lib/db';
+import { dismissFailedChange, useFailedChanges } from '../data/get-failed-changes';
 
 const ENTITY_WORDS: Record<SyncEntityName, string> = {
   customer: 'Customer', site: 'Site', area: 'Area', board: 'Board', circuit: 'Circuit', job: 'Job', visit: 'Visit', photo: 'Photo',
@@ -27,7 +27,7 @@ export function failedSummary(f: FailedEntry): string {
 
 /** Changes the office system refused for good, with its reason; kept until the technician has read them. */
 export function FailedChanges({ userId }: { userId: string }) {
-  const failed = useLiveQuery(() => db.failed.where('userId').equals(userId).reverse().sortBy('seq'), [userId]);
+  const failed = useFailedChanges(userId);
   if (!failed || failed.length === 0) return null;
   return (
     <Paper variant="outlined" sx={{ borderColor: 'error.main' }} component="section" aria-labelledby="failed-heading">
@@ -43,7 +43,7 @@ export function FailedChanges({ userId }: { userId: string }) {
             key={f.seq}
             divider
             secondaryAction={
-              <Button size="small" onClick={() => void db.failed.delete(f.seq!)} aria-label={`Dismiss: ${failedSummary(f)}`}>
+              <Button size="small" onClick={() => void dismissFailedChange(f.seq!)} aria-label={`Dismiss: ${failedSummary(f)}`}>
                 Dismiss
               </Button>
             }

@@ -66,19 +66,19 @@ describe('Visit', () => {
   });
 
   it('shows the safety cautions once per visit before circuit work, and keeps when they were read', async () => {
-    show(paths.visitTests.href(ids.visit));
+    show(paths.visitCircuits.href(ids.visit));
     expect(await screen.findByRole('heading', { name: 'Before you work on a circuit' })).toBeTruthy();
     expect(screen.getByText(/Prove it dead at the point of work with an approved voltage indicator/)).toBeTruthy();
     expect(screen.queryByRole('form', { name: 'Add a circuit' })).toBeNull();
     fireEvent.click(screen.getByRole('button', { name: 'I have read these cautions' }));
     expect(await screen.findByRole('form', { name: 'Add a circuit' })).toBeTruthy();
-    expect(screen.getByText(/regulations in force, local codes and licensed practice decide/)).toBeTruthy();
+    expect(screen.getByText(/regulations in force, local codes and a competent person decide/)).toBeTruthy();
     expect((await db.visit.get(ids.visit))!.cautionsReadAt).toBeTruthy();
   });
 
   it('adds a circuit found on site, making its board first, and refuses a rating that is not a number', async () => {
     await db.visit.update(ids.visit, { cautionsReadAt: at(9) });
-    show(paths.visitTests.href(ids.visit));
+    show(paths.visitCircuits.href(ids.visit));
     fireEvent.change(await screen.findByLabelText('Board name'), { target: { value: 'Consumer unit, hall' } });
     fireEvent.change(screen.getByLabelText('Circuit number'), { target: { value: '5' } });
     fireEvent.change(screen.getByLabelText('Description'), { target: { value: 'Electric fire, fused spur' } });

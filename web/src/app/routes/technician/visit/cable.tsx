@@ -4,8 +4,8 @@ import Typography from '@mui/material/Typography';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
 import { paths } from '@/config/paths';
-import { useCable, useSiteCables } from '@/features/cables/api/get-site-cables';
-import { CableForm } from '@/features/cables/components/cable-form';
+import { useCable, useSiteCables } from '@/features/cables/data/get-site-cables';
+import { CableForm } from '@/features/cables/phone/cable-form';
 import CableOutlined from '@mui/icons-material/CableOutlined';
 import { useVisitContext } from '../visit-context';
 

@@ -1,6 +1,6 @@
 import Alert from '@mui/material/Alert';
 import { useLocation } from 'react-router-dom';
-import { CableList } from '@/features/cables/components/cable-list';
+import { CableList } from '@/features/cables/phone/cable-list';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {

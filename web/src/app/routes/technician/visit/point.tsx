@@ -4,15 +4,13 @@ import Button from '@mui/material/Button';
 import Divider from '@mui/material/Divider';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { useLiveQuery } from 'dexie-react-hooks';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
 import { paths } from '@/config/paths';
-import { PhotoCapture } from '@/features/photos/components/photo-capture';
-import { useVisitPoints } from '@/features/points/api/get-visit-points';
-import { PointForm } from '@/features/points/components/point-form';
-import { CautionGate } from '@/features/visits/components/caution-gate';
-import { db } from '@/lib/db';
+import { PhotoCapture } from '@/features/photos/phone/photo-capture';
+import { usePointChange, useVisitPoints } from '@/features/points/data/get-visit-points';
+import { PointForm } from '@/features/points/phone/point-form';
+import { CautionGate } from '@/features/visits/phone/caution-gate';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {
@@ -22,7 +20,7 @@ export function Component() {
   const navigate = useNavigate();
   const isNew = pointId === 'new';
   const data = useVisitPoints(visit.id, visit.siteId);
-  const point = useLiveQuery(async () => (isNew ? null : ((await db.pointChange.get(pointId)) ?? null)), [pointId, isNew]);
+  const point = usePointChange(isNew ? null : pointId);
   const back = paths.visitPoints.href(visit.id);
   if (!data || point === undefined) return null;
   return (

@@ -1,7 +1,7 @@
 import Alert from '@mui/material/Alert';
 import { useLocation } from 'react-router-dom';
-import { PointList } from '@/features/points/components/point-list';
-import { CautionGate } from '@/features/visits/components/caution-gate';
+import { PointList } from '@/features/points/phone/point-list';
+import { CautionGate } from '@/features/visits/phone/caution-gate';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {

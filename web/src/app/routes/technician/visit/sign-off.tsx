@@ -3,7 +3,7 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { PartsUsed } from '@/features/parts/components/parts-used';
-import { useSignOff } from '@/features/sign-off/api/get-sign-off';
+import { useSignOff } from '@/features/sign-off/data/get-sign-off';
 import { SignOffForm } from '@/features/sign-off/components/sign-off-form';
 import { SignOffSummaryView } from '@/features/sign-off/components/sign-off-summary';
 import { whenSigned } from '@/features/visits/visit-format';

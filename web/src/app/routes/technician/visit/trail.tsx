@@ -1,5 +1,5 @@
-import { VisitTrail } from '@/features/photos/components/visit-trail';
-import { QuickNote } from '@/features/visits/components/quick-note';
+import { VisitTrail } from '@/features/photos/phone/visit-trail';
+import { QuickNote } from '@/features/visits/phone/quick-note';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {

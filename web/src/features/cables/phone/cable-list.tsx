@@ -1,0 +1,78 @@
+import AddOutlined from '@mui/icons-material/AddOutlined';
+import QrCode2Outlined from '@mui/icons-material/QrCode2Outlined';
+import Button from '@mui/material/Button';
+import List from '@mui/material/List';
+import ListItemButton from '@mui/material/ListItemButton';
+import ListItemText from '@mui/material/ListItemText';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import { assessCableRun, type Verdict } from '@wiretrail/core';
+import { Link as RouterLink } from 'react-router-dom';
+import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
+import { paths } from '@/config/paths';
+import type { CableRunRow } from '@/lib/db';
+import { useSiteCables } from '../data/get-site-cables';
+import { CABLE_STATUS_WORDS, MEDIUM_WORDS } from '../cable-words';
+import { readWiremap } from './wiremap-entry';
+
+export function endWords(cable: CableRunRow, e: 'A' | 'B', areaNames: Map<string, string>): string {
+  const area = cable[`end${e}AreaId`] as string | null | undefined;
+  return [area ? areaNames.get(area) : null, cable[`end${e}Description`] as string | null | undefined].filter(Boolean).join(', ') || 'not recorded';
+}
+
+export function cableVerdict(c: CableRunRow): Verdict | null {
+  if (c.wiremap == null && c.lengthM == null) return null;
+  return assessCableRun({ medium: c.medium, scheme: c.scheme, wiremap: readWiremap(c.wiremap), lengthM: c.lengthM, linkKind: c.linkKind as never }).verdict;
+}
+
+/** The site's cable runs, each with where its ends are and how its test went; they stay with the site from visit to visit. */
+export function CableList({ siteId, visitId, locked }: { siteId: string; visitId: string; locked: boolean }) {
+  const data = useSiteCables(siteId);
+  if (!data) return null;
+  return (
+    <Stack spacing={1.5} component="section" aria-labelledby="cables-heading">
+      <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'center' }}>
+        <Typography variant="h2" id="cables-heading">
+          Cables on this site
+        </Typography>
+        <Typography variant="body2" color="text.secondary">
+          {data.cables.length}
+        </Typography>
+      </Stack>
+      {!locked && (
+        <Button component={RouterLink} to={paths.visitCable.href(visitId, 'new')} variant="contained" size="large" startIcon={<AddOutlined />}>
+          Record a cable
+        </Button>
+      )}
+      {data.cables.length === 0 ? (
+        <Typography color="text.secondary" variant="body2">
+          No cable runs recorded for this site yet. Each one you record stays with the site for later visits.
+        </Typography>
+      ) : (
+        <Paper variant="outlined">
+          <List aria-label="Cable runs" disablePadding>
+            {data.cables.map((c) => {
+              const verdict = cableVerdict(c);
+              return (
+                <ListItemButton key={c.id} divider component={RouterLink} to={paths.visitCable.href(visitId, c.id)} sx={{ gap: 1, alignItems: 'flex-start' }}>
+                  <ListItemText
+                    primary={`${c.label}${c.medium ? ` · ${MEDIUM_WORDS[c.medium] ?? c.medium}` : ''}`}
+                    secondary={`A: ${endWords(c, 'A', data.areaNames)} → B: ${endWords(c, 'B', data.areaNames)} · ${CABLE_STATUS_WORDS[c.status ?? 'unidentified']}`}
+                  />
+                  {verdict && <VerdictChip verdict={verdict} />}
+                </ListItemButton>
+              );
+            })}
+          </List>
+        </Paper>
+      )}
+      {data.cables.length > 0 && <AidLine />}
+      {data.cables.length > 0 && (
+        <Button component={RouterLink} to={paths.cableLabels.href(visitId)} startIcon={<QrCode2Outlined />} variant="outlined" size="large">
+          Print labels with QR codes
+        </Button>
+      )}
+    </Stack>
+  );
+}

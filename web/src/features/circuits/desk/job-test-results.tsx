@@ -1,0 +1,105 @@
+import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
+import Alert from '@mui/material/Alert';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import type { GridColDef } from '@mui/x-data-grid';
+import type { CircuitTestLine, CircuitReadings } from '@wiretrail/core';
+import { EmptyState } from '@/components/empty-state';
+import { RecordGrid } from '@/components/record-grid';
+import { type TestResult, useJobTestResults } from '../api/get-test-results';
+import { overallResult } from '../overall-result';
+import { VerdictChip } from '@/components/verdicts/verdict-chip';
+
+/** The readings a line shows beside its verdict, with their units. */
+const UNITS: Partial<Record<keyof CircuitReadings, string>> = {
+  r1Ohm: 'Ω', rnOhm: 'Ω', r2Ohm: 'Ω', r1r2Ohm: 'Ω', irLiveLiveMOhm: 'MΩ', irLiveEarthMOhm: 'MΩ', zsOhm: 'Ω', rcdTripMs: 'ms', rcdTripMs5x: 'ms',
+};
+const SHORT: Record<string, string> = { 'ring-r1-rn': 'r1, rn', 'ring-r2': 'r2', 'ir-live-live': 'L–L', 'ir-live-earth': 'L–E', 'rcd-1x': '1×', 'rcd-5x': '5×', 'rcd-button': 'Button' };
+
+/** The ring's r2 line also judges r1, which the line above it shows already. */
+const SHOWN: Partial<Record<string, (keyof CircuitReadings)[]>> = { 'ring-r2': ['r2Ohm'] };
+const ANSWER_WORDS: Record<string, string> = { operates: 'trips', fails: 'does not trip', correct: 'correct', incorrect: 'incorrect' };
+
+function readingsOf(line: CircuitTestLine, result: TestResult): string {
+  const values = (SHOWN[line.key] ?? line.fields).map((f) => {
+    const v = result[f as keyof TestResult] as number | string | null;
+    if (v === null || v === undefined) return '—';
+    if (typeof v === 'string') return ANSWER_WORDS[v] ?? v;
+    return UNITS[f] ? `${v} ${UNITS[f]}` : String(v);
+  });
+  return [...new Set(values)].join(', ');
+}
+
+/**
+ * The lines of one group (ring, insulation, RCD…): each reading with its verdict, which opens to its limit and source.
+ * A group of one line needs no name beside its reading; the column says what it is.
+ */
+function Lines({ result, keys }: { result: TestResult; keys: string[] }) {
+  const lines = result.assessment.lines.filter((l) => keys.includes(l.key));
+  if (!lines.length) return <Typography color="text.secondary">—</Typography>;
+  return (
+    <Stack spacing={0.5}>
+      {lines.map((l) => (
+        <Stack key={l.key} direction="row" sx={{ alignItems: 'center', gap: 0.75 }}>
+          {keys.length > 1 && (
+            <Typography variant="body2" color="text.secondary" sx={{ minWidth: 36 }}>
+              {SHORT[l.key] ?? l.key}
+            </Typography>
+          )}
+          <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
+            {readingsOf(l, result)}
+          </Typography>
+          <VerdictChip what={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} size="small" against="none" plain />
+        </Stack>
+      ))}
+    </Stack>
+  );
+}
+
+/**
+ * The test results taken on the job's visits, one row per result, with the server's verdicts worked out from the
+ * circuit as recorded and the site's earthing.
+ */
+export function JobTestResults({ jobId }: { jobId: string }) {
+  const results = useJobTestResults(jobId);
+  const group = (headerName: string, keys: string[], width = 170): GridColDef<TestResult> => ({
+    field: headerName,
+    headerName,
+    width,
+    sortable: false,
+    renderCell: ({ row }) => <Lines result={row} keys={keys} />,
+  });
+  const columns: GridColDef<TestResult>[] = [
+    {
+      field: 'circuit',
+      headerName: 'Circuit',
+      flex: 1,
+      minWidth: 160,
+      valueGetter: (_v, row) => row.circuit?.label ?? 'No circuit given',
+      renderCell: ({ row }) => (
+        <Stack spacing={0.5} sx={{ alignItems: 'flex-start' }}>
+          <Typography sx={{ fontWeight: 500 }}>{row.circuit?.label ?? 'No circuit given'}</Typography>
+          <Typography variant="body2" color="text.secondary">
+            {[row.testedAt ? new Date(row.testedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' }) : null, row.instrument].filter(Boolean).join(' · ') || 'Time not recorded'}
+          </Typography>
+          <VerdictChip what={`${row.circuit?.label ?? 'Circuit'}: all tests`} result={overallResult(row.assessment)} size="small" prefix="Overall" />
+        </Stack>
+      ),
+    },
+    group('Ring', ['ring-r1-rn', 'ring-r2'], 190),
+    group('R1+R2', ['r1r2'], 120),
+    group('Insulation', ['ir-live-live', 'ir-live-earth'], 175),
+    group('Polarity', ['polarity'], 130),
+    group('Zs', ['zs'], 120),
+    group('RCD', ['rcd-1x', 'rcd-5x', 'rcd-button'], 168),
+  ];
+  if (results.isError) return <Alert severity="error">{results.error.message}</Alert>;
+  if (results.isSuccess && results.data.items.length === 0) {
+    return (
+      <EmptyState icon={<FactCheckOutlined />} title="No test results on this job yet">
+        Readings a technician takes on site appear here once their phone has synced, each checked against its limit.
+      </EmptyState>
+    );
+  }
+  return <RecordGrid label="Test results" rows={results.data?.items ?? []} columns={columns} loading={results.isPending} initialState={{ pagination: { paginationModel: { pageSize: 25 } } }} />;
+}

@@ -1,0 +1,267 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import Box from '@mui/material/Box';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import TextField from '@mui/material/TextField';
+import ToggleButton from '@mui/material/ToggleButton';
+import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
+import Typography from '@mui/material/Typography';
+import { type CircuitTestAssessment, type CircuitTestKey, extendRing, type FieldValue, INSULATION_TEST_VOLTAGES, InvalidInputError, type RingExtension, roundTo } from '@wiretrail/core';
+import { type ReactNode, useMemo, useState } from 'react';
+import { Controller, type FieldPath, useForm, useWatch } from 'react-hook-form';
+import { z } from 'zod';
+import { SaveBar } from '@/components/forms/phone-inputs';
+import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
+import { VERDICT_WORDS } from '@/components/verdicts/verdict-words';
+import type { CircuitRow, PointChangeRow, TestResultRow } from '@/lib/db';
+import { readingField, readingText, usableReading } from '@/lib/readings';
+import { createRecord, type Fields, saveRecord } from '@/lib/sync/local-write';
+import { assess, fromTyped, NUMERIC_READINGS, type TypedReadings, verdictSummary } from '../circuit-readings';
+
+const r = (field: string, label: string, unit: string) => readingField('testResult', field, label, unit);
+
+export const readingsSchema = z.object({
+  r1Ohm: r('r1Ohm', 'r1', 'Ω'),
+  rnOhm: r('rnOhm', 'rn', 'Ω'),
+  r2Ohm: r('r2Ohm', 'r2', 'Ω'),
+  r1r2Ohm: r('r1r2Ohm', 'R1+R2', 'Ω'),
+  irLiveLiveMOhm: r('irLiveLiveMOhm', 'Insulation live to live', 'MΩ'),
+  irLiveEarthMOhm: r('irLiveEarthMOhm', 'Insulation live to earth', 'MΩ'),
+  irTestVoltageV: z.enum(['', '250', '500', '1000']),
+  polarity: z.enum(['', 'correct', 'incorrect']),
+  zsOhm: r('zsOhm', 'Zs', 'Ω'),
+  rcdTripMs: r('rcdTripMs', 'The RCD time', 'ms'),
+  rcdTripMs5x: r('rcdTripMs5x', 'The RCD time at 5 ×', 'ms'),
+  rcdButton: z.enum(['', 'operates', 'fails']),
+  instrument: z.string().max(200, 'The instrument must be at most 200 characters.'),
+});
+type ReadingsValues = z.infer<typeof readingsSchema>;
+
+function defaults(result: TestResultRow | undefined): ReadingsValues {
+  const typed = Object.fromEntries(NUMERIC_READINGS.map((f) => [f, readingText(result?.[f])])) as Record<(typeof NUMERIC_READINGS)[number], string>;
+  return {
+    ...typed,
+    irTestVoltageV: result?.irTestVoltageV ? (String(result.irTestVoltageV) as ReadingsValues['irTestVoltageV']) : '500',
+    polarity: result?.polarity ?? '',
+    rcdButton: result?.rcdButton ?? '',
+    instrument: result?.instrument ?? '',
+  };
+}
+
+interface Props {
+  visitId: string;
+  siteId: string;
+  circuit: CircuitRow;
+  result: TestResultRow | undefined;
+  earthing: string | null | undefined;
+  /** Ring extensions on this visit, whose predicted readings sit beside the measured ones. */
+  extensions: PointChangeRow[];
+  locked: boolean;
+  onSaved: () => void;
+}
+
+/** The ring's own checks compare readings with each other; R1+R2 is compared with what the ring should give. */
+const AGAINST: Partial<Record<CircuitTestKey, 'expected' | 'within'>> = { 'ring-r1-rn': 'within', 'ring-r2': 'within', r1r2: 'expected' };
+
+const ohms = (v: number) => `${roundTo(v, 2).toFixed(2)} Ω`;
+
+/** What this visit's ring extension(s) should have made the end-to-end readings, from the point change's own figures. */
+function predictedAfter(extensions: PointChangeRow[], circuit: CircuitRow): RingExtension | null {
+  const p = extensions.find((x) => x.connection === 'ring-extension' && x.beforeR1Ohm != null && x.beforeRnOhm != null && x.beforeR2Ohm != null && x.addedRouteM != null);
+  const live = p?.liveCsaMm2 ?? circuit.liveCsaMm2;
+  const cpc = p?.cpcCsaMm2 ?? circuit.cpcCsaMm2;
+  if (!p || live == null || cpc == null) return null;
+  try {
+    return extendRing({ r1: p.beforeR1Ohm!, rn: p.beforeRnOhm!, r2: p.beforeR2Ohm!, liveCsaMm2: live, cpcCsaMm2: cpc, addedRouteM: p.addedRouteM! });
+  } catch (err) {
+    if (err instanceof InvalidInputError) return null;
+    throw err;
+  }
+}
+
+function Verdicts({ assessment, keys }: { assessment: CircuitTestAssessment; keys: CircuitTestKey[] }) {
+  const lines = assessment.lines.filter((l) => keys.includes(l.key));
+  if (lines.length === 0) return null;
+  return (
+    <Stack spacing={0.75}>
+      {lines.map((l) => (
+        <Stack key={l.key} spacing={0.25}>
+          <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap', rowGap: 0.5 }}>
+            <Typography variant="body2" sx={{ fontWeight: 500 }}>
+              {l.label}
+            </Typography>
+            <VerdictChip what={l.label} result={l.result} size="small" against={AGAINST[l.key] ?? 'limit'} />
+          </Stack>
+          {l.result.verdict !== 'pass' && (
+            <Typography variant="body2" color={l.result.verdict === 'fail' ? 'error' : 'text.secondary'}>
+              {l.result.note}
+            </Typography>
+          )}
+        </Stack>
+      ))}
+      <AidLine />
+    </Stack>
+  );
+}
+
+function Group({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <Paper variant="outlined" sx={{ p: 1.5 }} component="section" aria-label={title}>
+      <Stack spacing={1.5}>
+        <Typography variant="h3">{title}</Typography>
+        {children}
+      </Stack>
+    </Paper>
+  );
+}
+
+/** The readings for one circuit on this visit; each verdict shows as it is typed. */
+export function ReadingsForm({ visitId, siteId, circuit, result, earthing, extensions, locked, onSaved }: Props) {
+  const { register, control, handleSubmit, formState } = useForm<ReadingsValues>({ resolver: zodResolver(readingsSchema), defaultValues: defaults(result), mode: 'onChange' });
+  const values = useWatch({ control }) as ReadingsValues;
+  const [error, setError] = useState<string | null>(null);
+  const errors = formState.errors;
+  const assessment = useMemo(() => assess(circuit, fromTyped(values as TypedReadings), earthing), [circuit, values, earthing]);
+  const ring = circuit.kind === 'ring';
+  const rcd = circuit.rcdRatingMa != null;
+  const predicted = useMemo(() => predictedAfter(extensions, circuit), [extensions, circuit]);
+
+  const reading = (name: FieldPath<ReadingsValues>, label: string, unit: string) => (
+    <TextField
+      label={`${label} (${unit})`}
+      {...register(name)}
+      error={!!errors[name]}
+      helperText={errors[name]?.message ?? ' '}
+      slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' } }}
+    />
+  );
+
+  async function save(v: ReadingsValues) {
+    setError(null);
+    const final = assess(circuit, fromTyped(v as TypedReadings), earthing);
+    const fields: Record<string, FieldValue> = {
+      ...Object.fromEntries(NUMERIC_READINGS.map((f) => [f, usableReading(v[f])])),
+      irTestVoltageV: v.irTestVoltageV ? Number(v.irTestVoltageV) : null,
+      polarity: v.polarity || null,
+      rcdButton: v.rcdButton || null,
+      instrument: v.instrument.trim() || null,
+      verdicts: verdictSummary(final) as unknown as FieldValue,
+      testedAt: new Date().toISOString(),
+    };
+    try {
+      if (result) await saveRecord('testResult', result.id, fields);
+      else await createRecord('testResult', { visitId, siteId, circuitId: circuit.id, ...(Object.fromEntries(Object.entries(fields).filter(([, x]) => x !== null)) as Fields) });
+      onSaved();
+    } catch (err) {
+      setError((err as Error).message);
+    }
+  }
+
+  const toggle = (name: 'polarity' | 'rcdButton', label: string, options: [string, string][]) => (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field }) => (
+        <ToggleButtonGroup exclusive fullWidth value={field.value} onChange={(_, x) => field.onChange(x ?? '')} aria-label={label} disabled={locked}>
+          {options.map(([value, words]) => (
+            <ToggleButton key={value} value={value}>
+              {words}
+            </ToggleButton>
+          ))}
+        </ToggleButtonGroup>
+      )}
+    />
+  );
+
+  return (
+    <Box component="form" aria-label={`Readings for circuit ${circuit.number}`} noValidate onSubmit={handleSubmit(save)}>
+      <Box component="fieldset" disabled={locked} sx={{ border: 0, p: 0, m: 0, minWidth: 0 }}>
+        <Stack spacing={2}>
+          {ring && (
+            <Group title="Ring continuity, end to end">
+              <Stack direction="row" spacing={1}>
+                {reading('r1Ohm', 'r1', 'Ω')}
+                {reading('rnOhm', 'rn', 'Ω')}
+                {reading('r2Ohm', 'r2', 'Ω')}
+              </Stack>
+              {predicted && (
+                <Typography variant="body2" color="text.secondary">
+                  Predicted after this visit’s extension: r1 {ohms(predicted.r1)}, rn {ohms(predicted.rn)}, r2 {ohms(predicted.r2)}.
+                </Typography>
+              )}
+              {assessment.ring?.expectedR1R2 != null && (
+                <Typography variant="body2">
+                  Expect R1+R2 at the furthest point: (r1 + r2) / 4 = {roundTo(assessment.ring.expectedR1R2, 2).toFixed(2)} Ω
+                </Typography>
+              )}
+              <Verdicts assessment={assessment} keys={['ring-r1-rn', 'ring-r2']} />
+            </Group>
+          )}
+          <Group title="Protective conductor">
+            {reading('r1r2Ohm', 'R1+R2', 'Ω')}
+            <Verdicts assessment={assessment} keys={['r1r2']} />
+          </Group>
+          <Group title="Insulation resistance">
+            <Controller
+              control={control}
+              name="irTestVoltageV"
+              render={({ field }) => (
+                <TextField select label="Test voltage" {...field} slotProps={{ select: { native: true }, inputLabel: { shrink: true } }}>
+                  <option value="">Not recorded</option>
+                  {INSULATION_TEST_VOLTAGES.map((v) => (
+                    <option key={v} value={v}>
+                      {v} V DC
+                    </option>
+                  ))}
+                </TextField>
+              )}
+            />
+            <Stack direction="row" spacing={1}>
+              {reading('irLiveLiveMOhm', 'Live to live', 'MΩ')}
+              {reading('irLiveEarthMOhm', 'Live to earth', 'MΩ')}
+            </Stack>
+            <Verdicts assessment={assessment} keys={['ir-live-live', 'ir-live-earth']} />
+          </Group>
+          <Group title="Polarity">
+            {toggle('polarity', 'Polarity', [
+              ['correct', 'Correct'],
+              ['incorrect', 'Incorrect'],
+            ])}
+            <Verdicts assessment={assessment} keys={['polarity']} />
+          </Group>
+          <Group title="Earth fault loop impedance">
+            {reading('zsOhm', 'Measured Zs', 'Ω')}
+            <Verdicts assessment={assessment} keys={['zs']} />
+          </Group>
+          {rcd && (
+            <Group title={`RCD, ${circuit.rcdRatingMa} mA`}>
+              <Stack direction="row" spacing={1}>
+                {reading('rcdTripMs', `Time at ${circuit.rcdRatingMa} mA`, 'ms')}
+                {reading('rcdTripMs5x', 'At 5 ×, optional', 'ms')}
+              </Stack>
+              {toggle('rcdButton', 'RCD test button', [
+                ['operates', 'Test button trips it'],
+                ['fails', 'Does not trip'],
+              ])}
+              <Verdicts assessment={assessment} keys={['rcd-1x', 'rcd-5x', 'rcd-button']} />
+            </Group>
+          )}
+          <TextField label="Instrument" placeholder="Make, model and serial" {...register('instrument')} error={!!errors.instrument} helperText={errors.instrument?.message ?? ' '} />
+          <Paper variant="outlined" sx={{ p: 1.5 }} role="status" aria-label="Circuit summary">
+            <Typography sx={{ fontWeight: 500 }}>
+              This circuit: {VERDICT_WORDS[assessment.verdict]}
+              {assessment.failing.length > 0 ? ` — ${assessment.failing.length} failing` : ''}
+            </Typography>
+            {assessment.missing.length > 0 && (
+              <Typography variant="body2" color="text.secondary">
+                Still to record: {assessment.missing.map((l) => l.label).join('; ')}.
+              </Typography>
+            )}
+            <AidLine />
+          </Paper>
+          <SaveBar error={error} locked={locked} label="Save readings" />
+        </Stack>
+      </Box>
+    </Box>
+  );
+}

@@ -1,0 +1,96 @@
+import DirectionsOutlined from '@mui/icons-material/DirectionsOutlined';
+import PlaceOutlined from '@mui/icons-material/PlaceOutlined';
+import Button from '@mui/material/Button';
+import Card from '@mui/material/Card';
+import CardActionArea from '@mui/material/CardActionArea';
+import CardActions from '@mui/material/CardActions';
+import CardContent from '@mui/material/CardContent';
+import Chip from '@mui/material/Chip';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import { useState } from 'react';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import type { SiteRow } from '@/lib/db';
+import { saveRecord } from '@/lib/sync/local-write';
+import type { VisitSummary } from '../data/get-upcoming-visits';
+import { dayLabel, timeWindow, visitStatusWords } from '../visit-format';
+
+export function siteAddress(s: VisitSummary): string {
+  return [s.site?.address, s.site?.postcode].filter(Boolean).join(', ') || 'Address not on this phone yet';
+}
+
+/** Opens the phone's maps with directions to the site. */
+export function directionsHref(site: Pick<SiteRow, 'address' | 'postcode'>): string {
+  return `https://www.google.com/maps/dir/?api=1&destination=${encodeURIComponent([site.address, site.postcode].filter(Boolean).join(', '))}`;
+}
+
+/** Arrival is the first thing recorded on a visit: it starts the clock and tells the office someone is there. */
+export async function recordArrival(visitId: string): Promise<void> {
+  await saveRecord('visit', visitId, { status: 'on-site', actualStart: new Date().toISOString() });
+}
+
+/** One visit on Today: when, what, who and where, with arrival and finishing one tap away. */
+export function VisitCard({ summary }: { summary: VisitSummary }) {
+  const { visit, job, customer, site } = summary;
+  const [error, setError] = useState<string | null>(null);
+  const title = job?.title ?? 'Visit';
+  const status = visit.status ?? 'planned';
+  async function arrive() {
+    try {
+      await recordArrival(visit.id);
+    } catch (err) {
+      setError((err as Error).message);
+    }
+  }
+  return (
+    <Card variant="outlined" component="article" aria-label={title}>
+      <CardActionArea component={RouterLink} to={paths.visit.href(visit.id)} aria-label={`Open ${title}, ${dayLabel(visit.plannedStart ?? new Date().toISOString())} ${timeWindow(visit.plannedStart, visit.plannedEnd)}`}>
+        <CardContent sx={{ pb: 1 }}>
+          <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'center', gap: 1, mb: 0.5 }}>
+            <Typography variant="body2" sx={{ fontWeight: 500 }}>
+              {visit.plannedStart ? `${dayLabel(visit.plannedStart)} · ` : ''}
+              {timeWindow(visit.plannedStart, visit.plannedEnd)}
+            </Typography>
+            <Chip size="small" label={visitStatusWords(status)} color={status === 'on-site' ? 'secondary' : 'default'} />
+          </Stack>
+          <Typography variant="h3" component="h2">
+            {title}
+          </Typography>
+          {customer && <Typography color="text.secondary">{customer.name}</Typography>}
+          <Stack direction="row" sx={{ gap: 0.5, alignItems: 'flex-start', mt: 0.5, color: 'text.secondary' }}>
+            <PlaceOutlined fontSize="small" sx={{ mt: '2px' }} />
+            <Typography variant="body2">{siteAddress(summary)}</Typography>
+          </Stack>
+          {site?.accessNotes && (
+            <Typography variant="body2" sx={{ mt: 0.75 }}>
+              <strong>Access:</strong> {site.accessNotes}
+            </Typography>
+          )}
+        </CardContent>
+      </CardActionArea>
+      <CardActions sx={{ px: 2, pb: 2, pt: 0, gap: 1, flexWrap: 'wrap' }}>
+        {site && (
+          <Button component="a" href={directionsHref(site)} target="_blank" rel="noopener" startIcon={<DirectionsOutlined />} variant="outlined">
+            Directions
+          </Button>
+        )}
+        {status === 'planned' && (
+          <Button variant="contained" onClick={arrive} sx={{ flex: 1 }}>
+            I’m on site
+          </Button>
+        )}
+        {status === 'on-site' && (
+          <Button variant="contained" color="secondary" component={RouterLink} to={paths.visitSignOff.href(visit.id)} sx={{ flex: 1 }}>
+            Sign off
+          </Button>
+        )}
+      </CardActions>
+      {error && (
+        <Typography color="error" role="alert" variant="body2" sx={{ px: 2, pb: 2 }}>
+          {error}
+        </Typography>
+      )}
+    </Card>
+  );
+}
