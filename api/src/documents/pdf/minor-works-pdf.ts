@@ -25,7 +25,7 @@ export interface MinorWorksPdf {
   signature: Buffer;
 }
 
-type Certified = CertifiedCircuit<SyncRecord, SyncRecord, SyncRecord>;
+type Certified = CertifiedCircuit<SyncRecord<'visit'>, SyncRecord<'testResult'>, SyncRecord<'circuit'>>;
 const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
 
 const text = (v: unknown): string => (typeof v === 'string' ? v.trim() : '');
@@ -109,12 +109,12 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     ['Standard it was done to', rules.edition],
   ]);
 
-  const texts = (field: string) => visits.map((v) => text(v[field])).filter(Boolean);
+  const texts = (field: 'observations' | 'departures' | 'existingInstallationComments' | 'permittedExceptions' | 'riskAssessmentRef') => visits.map((v) => text(v[field])).filter(Boolean);
 
   layout.heading('Supply, earthing and bonding at the site');
   const { site } = file;
-  const boardsOf = [...new Set(circuits.map((c) => c.circuit.boardId as string))].map((id) => content.boards.get(id)).filter((b) => !!b);
-  const zdb = boardsOf.map((b) => (number(b.zdbOhm) === null ? `${String(b.name)}: not recorded` : `${String(b.name)}: ${b.zdbOhm} Ω`));
+  const boardsOf = [...new Set(circuits.map((c) => c.circuit.boardId))].flatMap((id) => content.boards.get(id) ?? []);
+  const zdb = boardsOf.map((b) => (b.zdbOhm === null ? `${b.name}: not recorded` : `${b.name}: ${b.zdbOhm} Ω`));
   layout.fields(
     [
       ['Earthing arrangement', text(site.earthing) || 'Not recorded'],
@@ -140,11 +140,11 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   for (const c of circuits) {
     const { circuit } = c;
     layout.heading(`Circuit details: ${circuitName(circuit)}`);
-    const board = content.boards.get(circuit.boardId as string);
+    const board = content.boards.get(circuit.boardId);
     layout.fields(
       [
         ['Board and circuit', joined([board?.name, `circuit ${circuit.number ?? '?'}`], ', ')],
-        ['Kind', KIND_WORDS[circuit.kind as string] ?? 'Not recorded'],
+        ['Kind', (circuit.kind && KIND_WORDS[circuit.kind]) || 'Not recorded'],
         ['Method of fault protection', faultProtectionWords(circuit)],
         ['Protective device', deviceWords(circuit)],
         ['RCD', rcdWords(circuit)],
