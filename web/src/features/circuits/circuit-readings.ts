@@ -17,9 +17,11 @@ export interface TypedReadings {
   rcdTripMs: string;
   rcdTripMs5x: string;
   rcdButton: '' | 'operates' | 'fails';
+  r2LeadOhm: string;
+  afddButton: '' | 'operates' | 'fails';
 }
 
-export const NUMERIC_READINGS = ['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x'] as const;
+export const NUMERIC_READINGS = ['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x', 'r2LeadOhm'] as const;
 
 export function circuitUnderTest(c: CircuitRow): CircuitUnderTest {
   return { kind: c.kind, deviceType: c.deviceType, deviceRatingA: c.deviceRatingA, rcdRatingMa: c.rcdRatingMa, rcdType: c.rcdType, liveCsaMm2: c.liveCsaMm2, cpcCsaMm2: c.cpcCsaMm2 };
@@ -31,6 +33,7 @@ export function fromTyped(t: TypedReadings): CircuitReadings {
   out.irTestVoltageV = t.irTestVoltageV ? Number(t.irTestVoltageV) : null;
   out.polarity = t.polarity || null;
   out.rcdButton = t.rcdButton || null;
+  out.afddButton = t.afddButton || null;
   return out as CircuitReadings;
 }
 
@@ -38,6 +41,7 @@ export function fromStored(r: TestResultRow | undefined): CircuitReadings {
   return {
     r1Ohm: r?.r1Ohm, rnOhm: r?.rnOhm, r2Ohm: r?.r2Ohm, r1r2Ohm: r?.r1r2Ohm, irLiveLiveMOhm: r?.irLiveLiveMOhm, irLiveEarthMOhm: r?.irLiveEarthMOhm,
     irTestVoltageV: r?.irTestVoltageV, polarity: r?.polarity, zsOhm: r?.zsOhm, rcdTripMs: r?.rcdTripMs, rcdTripMs5x: r?.rcdTripMs5x, rcdButton: r?.rcdButton,
+    r2LeadOhm: r?.r2LeadOhm, afddButton: r?.afddButton,
   };
 }
 

@@ -5,7 +5,7 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { useState } from 'react';
-import { type FieldErrors, useForm, type UseFormRegister, useWatch } from 'react-hook-form';
+import { type Control, type FieldErrors, useForm, type UseFormRegister, useWatch } from 'react-hook-form';
 import { v7 as uuidv7 } from 'uuid';
 import { z } from 'zod';
 import type { BoardRow } from '@/lib/db';
@@ -85,7 +85,7 @@ export function AddCircuitForm({ siteId, boards, onAdded }: { siteId: string; bo
           slotProps={{ htmlInput: { autoCapitalize: 'characters' } }}
         />
         <TextField label="Description" {...register('description')} error={!!errors.description} helperText={errors.description?.message} />
-        <CircuitDetailFields register={register as unknown as UseFormRegister<CircuitDetails>} errors={errors as FieldErrors<CircuitDetails>} />
+        <CircuitDetailFields register={register as unknown as UseFormRegister<CircuitDetails>} control={control as unknown as Control<CircuitDetails>} errors={errors as FieldErrors<CircuitDetails>} />
         {error && (
           <Typography color="error" role="alert">
             {error}

@@ -6,11 +6,19 @@ import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import ExpandMore from '@mui/icons-material/ExpandMore';
-import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
 import type { CircuitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
-import { type CircuitDetails, CircuitDetailFields, circuitDetailFields, circuitDetailsOf, circuitDetailsSchema } from './circuit-fields';
+import {
+  CertificateDetailFields,
+  certificateOffers,
+  type CircuitDetails,
+  CircuitDetailFields,
+  circuitDetailFields,
+  circuitDetailsOf,
+  circuitDetailsSchema,
+} from './circuit-fields';
 import { KIND_WORDS } from './circuit-fields';
 
 export function describeCircuit(c: CircuitRow): string {
@@ -24,12 +32,38 @@ export function describeCircuit(c: CircuitRow): string {
     .join(' · ');
 }
 
-/** The circuit's details, folded away once known; the verdicts depend on them, so they can be put right here. */
-export function CircuitDetailsForm({ circuit, locked }: { circuit: CircuitRow; locked: boolean }) {
+type Offered = keyof ReturnType<typeof certificateOffers>;
+const OFFERED: readonly Offered[] = ['deviceStandard', 'rcdStandard', 'rcdRatedCurrentA', 'maxDisconnectionS'];
+
+/**
+ * The circuit's details, folded away once known; the verdicts depend on them, so they can be put right here, and the
+ * certificate states the rest. Where the certificate's details are not recorded, the standard values are offered and
+ * follow the device, the RCD and the site's earthing until the technician types their own.
+ */
+export function CircuitDetailsForm({ circuit, locked, earthing }: { circuit: CircuitRow; locked: boolean; earthing?: string | null }) {
   const incomplete = !circuit.deviceType || circuit.deviceRatingA == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null;
   const [open, setOpen] = useState(incomplete);
   const [note, setNote] = useState('');
-  const { register, handleSubmit, formState } = useForm<CircuitDetails>({ resolver: zodResolver(circuitDetailsSchema), defaultValues: circuitDetailsOf(circuit) });
+  const { register, handleSubmit, formState, control, setValue, getValues } = useForm<CircuitDetails>({ resolver: zodResolver(circuitDetailsSchema), defaultValues: circuitDetailsOf(circuit, earthing) });
+  const [kind, deviceType, deviceRatingA, rcdRatingMa, rcdType, rcdStandard, deviceStandard, rcdRatedCurrentA, maxDisconnectionS] = useWatch({
+    control,
+    name: ['kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'rcdStandard', 'deviceStandard', 'rcdRatedCurrentA', 'maxDisconnectionS'],
+  });
+  const offers = useMemo(
+    () => certificateOffers({ kind, deviceType, deviceRatingA, rcdRatingMa, rcdType, rcdStandard }, earthing),
+    [kind, deviceType, deviceRatingA, rcdRatingMa, rcdType, rcdStandard, earthing],
+  );
+  // An offer follows what it is offered from until the technician types over it.
+  const lastOffers = useRef(offers);
+  useEffect(() => {
+    for (const field of OFFERED) {
+      const now = getValues(field);
+      if (offers[field] !== lastOffers.current[field] && (now === '' || now === lastOffers.current[field])) setValue(field, offers[field]);
+    }
+    lastOffers.current = offers;
+  }, [offers, getValues, setValue]);
+  const current: Record<Offered, string> = { deviceStandard, rcdStandard, rcdRatedCurrentA, maxDisconnectionS };
+  const offered = new Set<keyof CircuitDetails>(OFFERED.filter((f) => circuit[f] == null && current[f] !== '' && current[f] === offers[f]));
   async function save(v: CircuitDetails) {
     try {
       await saveRecord('circuit', circuit.id, circuitDetailFields(v));
@@ -52,7 +86,11 @@ export function CircuitDetailsForm({ circuit, locked }: { circuit: CircuitRow; l
       <AccordionDetails id="circuit-details">
         <Stack component="form" aria-label="Circuit details" noValidate onSubmit={handleSubmit(save)} spacing={1.5}>
           <fieldset disabled={locked} style={{ border: 0, padding: 0, margin: 0, minWidth: 0, display: 'grid', gap: 12 }}>
-            <CircuitDetailFields register={register} errors={formState.errors} />
+            <CircuitDetailFields register={register} control={control} errors={formState.errors} />
+            <Typography variant="body2" color="text.secondary">
+              For the certificate
+            </Typography>
+            <CertificateDetailFields register={register} control={control} errors={formState.errors} values={{ deviceStandard, rcdStandard, rcdRatingMa }} offered={offered} />
             {!locked && (
               <Button type="submit" variant="outlined" size="large">
                 Save circuit details

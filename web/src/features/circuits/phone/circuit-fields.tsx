@@ -1,7 +1,18 @@
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
-import { CIRCUIT_KINDS, type FieldValue, PROTECTIVE_DEVICES } from '@wiretrail/core';
-import type { FieldErrors, UseFormRegister } from 'react-hook-form';
+import {
+  AFDD_STANDARD,
+  CIRCUIT_KINDS,
+  DEVICE_STANDARD_CHOICES,
+  deviceStandardFor,
+  type FieldValue,
+  PROTECTIVE_DEVICES,
+  RCBO_STANDARD,
+  RCD_STANDARD_CHOICES,
+  rcdStandardFor,
+  standardDisconnectionTime,
+} from '@wiretrail/core';
+import { type Control, Controller, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import { z } from 'zod';
 import type { CircuitRow } from '@/lib/db';
 import { choicesOf, NativeChoice } from '@/components/forms/phone-inputs';
@@ -19,12 +30,40 @@ export const circuitDetailsSchema = z.object({
   rcdType: z.string().max(20, 'The RCD type must be at most 20 characters.'),
   liveCsaMm2: readingField('circuit', 'liveCsaMm2', 'The live conductor size', 'mm²'),
   cpcCsaMm2: readingField('circuit', 'cpcCsaMm2', 'The cpc size', 'mm²'),
+  // What the certificate states beyond what the tests need.
+  deviceStandard: z.string().max(40, 'The device standard must be at most 40 characters.'),
+  rcdStandard: z.string().max(40, 'The RCD standard must be at most 40 characters.'),
+  rcdRatedCurrentA: readingField('circuit', 'rcdRatedCurrentA', 'The RCD rated current', 'A'),
+  afddStandard: z.string().max(40, 'The AFDD standard must be at most 40 characters.'),
+  referenceMethod: z.string().max(20, 'The reference method must be at most 20 characters.'),
+  pointsServed: readingField('circuit', 'pointsServed', 'The number of points served'),
+  maxDisconnectionS: readingField('circuit', 'maxDisconnectionS', 'The maximum disconnection time', 's'),
 });
 export type CircuitDetails = z.infer<typeof circuitDetailsSchema>;
 
-/** What the form starts from: the circuit as recorded, or blanks for a new one (a guess would be recorded as fact). */
-export function circuitDetailsOf(c: CircuitRow | null): CircuitDetails {
+/**
+ * The standard values offered for what a certificate states of a circuit, where nothing is recorded yet: the
+ * standard its kind of device is made to, the RCD's by its type (and an RCBO's rated current is its breaker's), and
+ * the longest disconnection time the regulations allow on this earthing. Each shows as an offer until saved.
+ */
+export function certificateOffers(c: Pick<CircuitDetails, 'kind' | 'deviceType' | 'deviceRatingA' | 'rcdRatingMa' | 'rcdType' | 'rcdStandard'>, earthing: string | null | undefined) {
+  const rating = usableReading(c.deviceRatingA);
+  const hasRcd = usableReading(c.rcdRatingMa) !== null;
+  const rcdStandard = hasRcd ? rcdStandardFor(c.rcdType) : '';
   return {
+    deviceStandard: deviceStandardFor(c.deviceType) ?? '',
+    rcdStandard,
+    rcdRatedCurrentA: hasRcd && c.rcdStandard === RCBO_STANDARD && rating !== null ? String(rating) : '',
+    maxDisconnectionS: readingText(standardDisconnectionTime({ kind: c.kind, deviceRatingA: rating }, earthing)?.seconds),
+  };
+}
+
+/**
+ * What the form starts from: the circuit as recorded, or blanks for a new one (a guess would be recorded as fact),
+ * with the standard values offered where the certificate's details are not recorded yet.
+ */
+export function circuitDetailsOf(c: CircuitRow | null, earthing?: string | null): CircuitDetails {
+  const recorded: CircuitDetails = {
     kind: (c?.kind as CircuitDetails['kind']) ?? 'ring',
     deviceType: (c?.deviceType as CircuitDetails['deviceType']) ?? '',
     deviceRatingA: readingText(c?.deviceRatingA),
@@ -32,6 +71,22 @@ export function circuitDetailsOf(c: CircuitRow | null): CircuitDetails {
     rcdType: c?.rcdType ?? '',
     liveCsaMm2: readingText(c?.liveCsaMm2),
     cpcCsaMm2: readingText(c?.cpcCsaMm2),
+    deviceStandard: c?.deviceStandard ?? '',
+    rcdStandard: c?.rcdStandard ?? '',
+    rcdRatedCurrentA: readingText(c?.rcdRatedCurrentA),
+    afddStandard: c?.afddStandard ?? '',
+    referenceMethod: c?.referenceMethod ?? '',
+    pointsServed: readingText(c?.pointsServed),
+    maxDisconnectionS: readingText(c?.maxDisconnectionS),
+  };
+  if (!c) return recorded;
+  const offers = certificateOffers(recorded, earthing);
+  return {
+    ...recorded,
+    deviceStandard: recorded.deviceStandard || offers.deviceStandard,
+    rcdStandard: recorded.rcdStandard || offers.rcdStandard,
+    rcdRatedCurrentA: recorded.rcdRatedCurrentA || offers.rcdRatedCurrentA,
+    maxDisconnectionS: recorded.maxDisconnectionS || offers.maxDisconnectionS,
   };
 }
 
@@ -44,17 +99,31 @@ export function circuitDetailFields(v: CircuitDetails): Record<string, FieldValu
     rcdType: v.rcdType.trim() || null,
     liveCsaMm2: usableReading(v.liveCsaMm2),
     cpcCsaMm2: usableReading(v.cpcCsaMm2),
+    deviceStandard: v.deviceStandard.trim() || null,
+    rcdStandard: v.rcdStandard.trim() || null,
+    rcdRatedCurrentA: usableReading(v.rcdRatedCurrentA),
+    afddStandard: v.afddStandard.trim() || null,
+    referenceMethod: v.referenceMethod.trim() || null,
+    pointsServed: usableReading(v.pointsServed),
+    maxDisconnectionS: usableReading(v.maxDisconnectionS),
   };
 }
 
 /** Kind, protective device, RCD and cable sizes, for the add and edit forms alike. */
-export function CircuitDetailFields({ register, errors }: { register: UseFormRegister<CircuitDetails>; errors: FieldErrors<CircuitDetails> }) {
+export function CircuitDetailFields({ register, control, errors }: { register: UseFormRegister<CircuitDetails>; control: Control<CircuitDetails>; errors: FieldErrors<CircuitDetails> }) {
   const num = { htmlInput: { inputMode: 'decimal' as const } };
   return (
     <>
-      <NativeChoice label="Kind" {...register('kind')} options={choicesOf(CIRCUIT_KINDS, KIND_WORDS)} />
+      {/* Controlled, so the recorded choice shows and the standard values offered follow it. */}
+      <Controller control={control} name="kind" render={({ field }) => <NativeChoice label="Kind" {...field} options={choicesOf(CIRCUIT_KINDS, KIND_WORDS)} />} />
       <Stack direction="row" spacing={1.5}>
-        <NativeChoice label="Protective device" {...register('deviceType')} emptyLabel="Not known" options={PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d] ?? `${d} fuse` }))} />
+        <Controller
+          control={control}
+          name="deviceType"
+          render={({ field }) => (
+            <NativeChoice label="Protective device" {...field} emptyLabel="Not known" options={PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d] ?? `${d} fuse` }))} />
+          )}
+        />
         <TextField label="Rating (A)" {...register('deviceRatingA')} error={!!errors.deviceRatingA} helperText={errors.deviceRatingA?.message ?? ' '} slotProps={num} sx={{ maxWidth: 130 }} />
       </Stack>
       <Stack direction="row" spacing={1.5}>
@@ -65,6 +134,66 @@ export function CircuitDetailFields({ register, errors }: { register: UseFormReg
         <TextField label="Live size (mm²)" {...register('liveCsaMm2')} error={!!errors.liveCsaMm2} helperText={errors.liveCsaMm2?.message ?? ' '} slotProps={num} />
         <TextField label="Cpc size (mm²)" {...register('cpcCsaMm2')} error={!!errors.cpcCsaMm2} helperText={errors.cpcCsaMm2?.message ?? ' '} slotProps={num} />
       </Stack>
+    </>
+  );
+}
+
+/** Choices that keep a value already recorded even where it is not one of the usual ones. */
+const standardChoices = (usual: readonly string[], current: string) => [...(current && !usual.includes(current) ? [current] : []), ...usual].map((v) => ({ value: v, label: v }));
+
+/**
+ * What a certificate states of the circuit beyond what its tests need: the devices' product standards, the RCD's
+ * rated current, an AFDD, the reference method, the points served and the longest disconnection time allowed.
+ * `offered` names the fields showing a standard value not yet saved, so the technician checks them against the device.
+ */
+export function CertificateDetailFields({
+  register,
+  control,
+  errors,
+  values,
+  offered,
+}: {
+  register: UseFormRegister<CircuitDetails>;
+  // The choices are controlled, so an offered value shows the moment it is offered.
+  control: Control<CircuitDetails>;
+  errors: FieldErrors<CircuitDetails>;
+  values: Pick<CircuitDetails, 'deviceStandard' | 'rcdStandard' | 'rcdRatingMa'>;
+  offered: ReadonlySet<keyof CircuitDetails>;
+}) {
+  const num = { htmlInput: { inputMode: 'decimal' as const } };
+  const hint = (field: keyof CircuitDetails, usual: string) => errors[field]?.message ?? (offered.has(field) ? 'The standard value: check it against the device.' : usual);
+  const hasRcd = usableReading(values.rcdRatingMa) !== null;
+  return (
+    <>
+      <Controller
+        control={control}
+        name="deviceStandard"
+        render={({ field }) => (
+          <NativeChoice label="Device standard, BS (EN)" {...field} emptyLabel="Not known" options={standardChoices(DEVICE_STANDARD_CHOICES, values.deviceStandard)} helperText={hint('deviceStandard', 'As printed on the device.')} />
+        )}
+      />
+      {hasRcd && (
+        <Stack direction="row" spacing={1.5}>
+          <Controller
+            control={control}
+            name="rcdStandard"
+            render={({ field }) => (
+              <NativeChoice label="RCD standard, BS (EN)" {...field} emptyLabel="Not known" options={standardChoices(RCD_STANDARD_CHOICES, values.rcdStandard)} helperText={hint('rcdStandard', 'BS EN 61009-1 for an RCBO.')} />
+            )}
+          />
+          <TextField label="RCD rated current (A)" {...register('rcdRatedCurrentA')} error={!!errors.rcdRatedCurrentA} helperText={hint('rcdRatedCurrentA', 'In, as printed on it.')} slotProps={num} sx={{ maxWidth: 170 }} />
+        </Stack>
+      )}
+      <Controller
+        control={control}
+        name="afddStandard"
+        render={({ field }) => <NativeChoice label="AFDD" {...field} emptyLabel="None fitted" options={standardChoices([AFDD_STANDARD], field.value)} helperText=" " />}
+      />
+      <Stack direction="row" spacing={1.5}>
+        <TextField label="Reference method" placeholder="C" {...register('referenceMethod')} error={!!errors.referenceMethod} helperText={errors.referenceMethod?.message ?? 'How the cable is installed, as in Appendix 4.'} />
+        <TextField label="Points served" {...register('pointsServed')} error={!!errors.pointsServed} helperText={errors.pointsServed?.message ?? ' '} slotProps={{ htmlInput: { inputMode: 'numeric' } }} sx={{ maxWidth: 130 }} />
+      </Stack>
+      <TextField label="Maximum disconnection time (s)" {...register('maxDisconnectionS')} error={!!errors.maxDisconnectionS} helperText={hint('maxDisconnectionS', 'Allowed by the regulations for this circuit.')} slotProps={num} />
     </>
   );
 }

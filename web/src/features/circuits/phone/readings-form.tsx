@@ -33,6 +33,8 @@ export const readingsSchema = z.object({
   rcdTripMs: r('rcdTripMs', 'The RCD time', 'ms'),
   rcdTripMs5x: r('rcdTripMs5x', 'The RCD time at 5 ×', 'ms'),
   rcdButton: z.enum(['', 'operates', 'fails']),
+  r2LeadOhm: r('r2LeadOhm', 'R2', 'Ω'),
+  afddButton: z.enum(['', 'operates', 'fails']),
   instrument: z.string().max(200, 'The instrument must be at most 200 characters.'),
 });
 type ReadingsValues = z.infer<typeof readingsSchema>;
@@ -44,6 +46,7 @@ function defaults(result: TestResultRow | undefined): ReadingsValues {
     irTestVoltageV: result?.irTestVoltageV ? (String(result.irTestVoltageV) as ReadingsValues['irTestVoltageV']) : '500',
     polarity: result?.polarity ?? '',
     rcdButton: result?.rcdButton ?? '',
+    afddButton: result?.afddButton ?? '',
     instrument: result?.instrument ?? '',
   };
 }
@@ -144,6 +147,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
       irTestVoltageV: v.irTestVoltageV ? Number(v.irTestVoltageV) : null,
       polarity: v.polarity || null,
       rcdButton: v.rcdButton || null,
+      afddButton: v.afddButton || null,
       instrument: v.instrument.trim() || null,
       verdicts: verdictSummary(final) as unknown as FieldValue,
       testedAt: new Date().toISOString(),
@@ -157,7 +161,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
     }
   }
 
-  const toggle = (name: 'polarity' | 'rcdButton', label: string, options: [string, string][]) => (
+  const toggle = (name: 'polarity' | 'rcdButton' | 'afddButton', label: string, options: [string, string][]) => (
     <Controller
       control={control}
       name={name}
@@ -198,7 +202,10 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
             </Group>
           )}
           <Group title="Protective conductor">
-            {reading('r1r2Ohm', 'R1+R2', 'Ω')}
+            <Stack direction="row" spacing={1}>
+              {reading('r1r2Ohm', 'R1+R2', 'Ω')}
+              {reading('r2LeadOhm', 'or R2, long lead', 'Ω')}
+            </Stack>
             <Verdicts assessment={assessment} keys={['r1r2']} />
           </Group>
           <Group title="Insulation resistance">
@@ -244,6 +251,15 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
                 ['fails', 'Does not trip'],
               ])}
               <Verdicts assessment={assessment} keys={['rcd-1x', 'rcd-5x', 'rcd-button']} />
+            </Group>
+          )}
+          {circuit.afddStandard && (
+            <Group title="AFDD">
+              {toggle('afddButton', 'AFDD test button', [
+                ['operates', 'Test button trips it'],
+                ['fails', 'Does not trip'],
+              ])}
+              <Verdicts assessment={assessment} keys={['afdd-button']} />
             </Group>
           )}
           <TextField label="Instrument" placeholder="Make, model and serial" {...register('instrument')} error={!!errors.instrument} helperText={errors.instrument?.message ?? ' '} />

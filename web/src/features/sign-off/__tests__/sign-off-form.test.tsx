@@ -42,7 +42,10 @@ describe('sign-off', () => {
   it('keeps the signature as a small SVG of its strokes', () => {
     const svg = strokesToSvg([{ points: [{ x: 10.4, y: 20.6, pressure: 0.5, time: 0 }, { x: 30, y: 40, pressure: 0.5, time: 1 }], dotSize: 0, minWidth: 1, maxWidth: 3, penColor: '#000', velocityFilterWeight: 0.7, compositeOperation: 'source-over' }], 320, 180);
     expect(svg).toBe('<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 320 180" width="320" height="180"><g fill="none" stroke="#14262b" stroke-width="2.5" stroke-linecap="round" stroke-linejoin="round"><path d="M10 21L30 40"/></g></svg>');
-    const base = { arrivedAt: '09:05', leftAt: '12:30', workDescription: 'Moved a socket', observations: '', departures: '', signedByName: 'Sam' };
+    const base = {
+      arrivedAt: '09:05', leftAt: '12:30', workDescription: 'Moved a socket', observations: '', departures: '', signedByName: 'Sam', signedByPosition: '',
+      existingInstallationComments: '', permittedExceptions: '', riskAssessmentRef: '',
+    };
     expect(signOffSchema.safeParse({ ...base, signatureSvg: svg }).success).toBe(true);
     expect(signOffSchema.safeParse({ ...base, signatureSvg: 'x'.repeat(60_001) }).success).toBe(false);
     const backwards = signOffSchema.safeParse({ ...base, leftAt: '08:00', signatureSvg: svg });

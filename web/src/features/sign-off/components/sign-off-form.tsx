@@ -9,7 +9,7 @@ import DialogTitle from '@mui/material/DialogTitle';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
-import { FINISHED_VISIT_STATUS } from '@wiretrail/core';
+import { DEFAULT_RULE_SET, EXISTING_INSTALLATION_REG, FINISHED_VISIT_STATUS, minorWorksDeclaration, PERMITTED_EXCEPTIONS_REG } from '@wiretrail/core';
 import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
@@ -27,9 +27,16 @@ export const signOffSchema = z.object({
   workDescription: text(20_000, 'The description of the work').refine((s) => s.trim().length > 0, 'Describe the work done and its extent.'),
   observations: text(20_000, 'The observations'),
   departures: text(20_000, 'The departures'),
+  existingInstallationComments: text(20_000, 'The comments on the existing installation'),
+  permittedExceptions: text(20_000, 'The permitted exceptions'),
+  riskAssessmentRef: text(200, 'The risk assessment reference'),
+  signedByPosition: text(100, 'The position'),
   signedByName: z.string().trim().min(1, 'Give the name of the person signing.').max(200, 'The name must be at most 200 characters.'),
   signatureSvg: z.string().nullable().refine((s) => !!s, 'Sign in the box to finish the visit.').refine((s) => !s || s.length <= 60_000, 'The signature is too long; clear it and sign again.'),
-}).refine((v) => !CLOCK.test(v.arrivedAt) || !CLOCK.test(v.leftAt) || v.leftAt >= v.arrivedAt, { path: ['leftAt'], message: 'The time you left must be after the time you arrived.' });
+})
+  .refine((v) => !CLOCK.test(v.arrivedAt) || !CLOCK.test(v.leftAt) || v.leftAt >= v.arrivedAt, { path: ['leftAt'], message: 'The time you left must be after the time you arrived.' })
+  // The standard asks for the risk assessment behind an exception to be attached: name it.
+  .refine((v) => !v.permittedExceptions.trim() || !!v.riskAssessmentRef.trim(), { path: ['riskAssessmentRef'], message: 'Name the risk assessment behind the exception.' });
 export type SignOffValues = z.infer<typeof signOffSchema>;
 
 const clock = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
@@ -46,11 +53,16 @@ interface Props {
   visit: VisitRow;
   defaultDescription: string;
   signerName: string;
+  /** The position the signer gave last time, offered again. */
+  signerPosition?: string;
   problemCount: number;
 }
 
+/** What the signer declares, as the certificate prints it above the signature. */
+export const DECLARATION = minorWorksDeclaration(DEFAULT_RULE_SET.edition);
+
 /** What was done, what was seen and where it departs from the standard, signed; finishing locks the visit's records. */
-export function SignOffForm({ visit, defaultDescription, signerName, problemCount }: Props) {
+export function SignOffForm({ visit, defaultDescription, signerName, signerPosition = '', problemCount }: Props) {
   const { register, control, handleSubmit, formState, getValues } = useForm<SignOffValues>({
     resolver: zodResolver(signOffSchema),
     defaultValues: {
@@ -59,6 +71,10 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
       workDescription: visit.workDescription ?? defaultDescription,
       observations: visit.observations ?? '',
       departures: visit.departures ?? '',
+      existingInstallationComments: visit.existingInstallationComments ?? '',
+      permittedExceptions: visit.permittedExceptions ?? '',
+      riskAssessmentRef: visit.riskAssessmentRef ?? '',
+      signedByPosition: visit.signedByPosition ?? signerPosition,
       signedByName: visit.signedByName ?? signerName,
       signatureSvg: null,
     },
@@ -66,7 +82,7 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const errors = formState.errors;
-  const departures = useWatch({ control, name: 'departures' });
+  const [departures, permittedExceptions] = useWatch({ control, name: ['departures', 'permittedExceptions'] });
   // A fail or a gap with no departure written cannot go on a certificate: say so at the field.
   const departureWanted = problemCount > 0 && !departures?.trim();
 
@@ -86,6 +102,10 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
         workDescription: v.workDescription.trim(),
         observations: v.observations.trim() || null,
         departures: v.departures.trim() || null,
+        existingInstallationComments: v.existingInstallationComments.trim() || null,
+        permittedExceptions: v.permittedExceptions.trim() || null,
+        riskAssessmentRef: v.permittedExceptions.trim() ? v.riskAssessmentRef.trim() || null : null,
+        signedByPosition: v.signedByPosition.trim() || null,
       });
     } catch (err) {
       setError((err as Error).message);
@@ -119,7 +139,32 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
               : 'Where the work departs from the standard, and why. Needed for any fail or missing reading.')
           }
         />
-        <TextField label="Signed by" {...register('signedByName')} error={!!errors.signedByName} helperText={errors.signedByName?.message ?? ' '} autoComplete="name" />
+        <TextField
+          label={`Comments on the existing installation (${EXISTING_INSTALLATION_REG})`}
+          multiline
+          minRows={2}
+          {...register('existingInstallationComments')}
+          error={!!errors.existingInstallationComments}
+          helperText={errors.existingInstallationComments?.message ?? 'Defects seen in the installation the work connects to, including its earthing and bonding.'}
+        />
+        <TextField
+          label={`Permitted exceptions (${PERMITTED_EXCEPTIONS_REG})`}
+          multiline
+          minRows={1}
+          {...register('permittedExceptions')}
+          error={!!errors.permittedExceptions}
+          helperText={errors.permittedExceptions?.message ?? 'Where the regulations allow a part without fault protection. Blank if none.'}
+        />
+        {permittedExceptions?.trim() && (
+          <TextField label="Risk assessment reference" {...register('riskAssessmentRef')} error={!!errors.riskAssessmentRef} helperText={errors.riskAssessmentRef?.message ?? 'The risk assessment kept with the certificate.'} />
+        )}
+        <Stack direction="row" spacing={1.5}>
+          <TextField label="Signed by" {...register('signedByName')} error={!!errors.signedByName} helperText={errors.signedByName?.message ?? ' '} autoComplete="name" sx={{ flex: 1 }} />
+          <TextField label="Position" placeholder="Electrician" {...register('signedByPosition')} error={!!errors.signedByPosition} helperText={errors.signedByPosition?.message ?? 'As the certificate names it.'} autoComplete="organization-title" sx={{ flex: 1 }} />
+        </Stack>
+        <Typography variant="body2" component="p" role="note" aria-label="Declaration">
+          <strong>Declaration on the certificate.</strong> {DECLARATION}
+        </Typography>
         <Controller control={control} name="signatureSvg" render={({ field }) => <SignatureBox onChange={field.onChange} error={errors.signatureSvg?.message} />} />
         {error && (
           <Alert severity="error" role="alert">

@@ -6,7 +6,7 @@ import {
   type MinorWorksJudgement,
 } from '@wiretrail/core';
 import { useLiveQuery } from 'dexie-react-hooks';
-import { type CableRunRow, type CircuitRow, db, type PointChangeRow, type TestResultRow, type VisitRow } from '@/lib/db';
+import { type BoardRow, type CableRunRow, type CircuitRow, db, type PointChangeRow, type SiteRow, type TestResultRow, type VisitRow } from '@/lib/db';
 
 /** One thing the office (or the certificate) will ask about. */
 export interface Problem {
@@ -22,11 +22,17 @@ export interface SignOffSummary {
   cables: { cable: CableRunRow; assessment: CableRunAssessment }[];
   points: PointChangeRow[];
   problems: Problem[];
+  /** The site, whose earthing and bonding the certificate states. */
+  site: SiteRow | undefined;
+  /** The boards the circuits tested on this visit hang off, or every board of the site when none was tested, for Zdb. */
+  boards: BoardRow[];
+  /** The position the signer gave when they last signed a visit on this phone, offered again. */
+  lastPosition: string;
 }
 
 /** Everything recorded on the visit, judged again, with every fail and every missing reading in words. */
-export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
-  const [photos, notes, points, results, cables, circuits, site] = await Promise.all([
+export async function getSignOff(visit: VisitRow, signerName = ''): Promise<SignOffSummary> {
+  const [photos, notes, points, results, cables, circuits, site, siteBoards, signed] = await Promise.all([
     db.photo.where('visitId').equals(visit.id).count(),
     db.note.where('visitId').equals(visit.id).count(),
     db.pointChange.where('visitId').equals(visit.id).toArray(),
@@ -34,6 +40,8 @@ export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
     db.cableRun.where('siteId').equals(visit.siteId).toArray(),
     db.circuit.where('siteId').equals(visit.siteId).toArray(),
     db.site.get(visit.siteId),
+    db.board.where('siteId').equals(visit.siteId).toArray(),
+    db.visit.filter((v) => !!v.signedByPosition && v.signedByName === signerName).toArray(),
   ]);
   const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing });
   // A visit of data cabling alone has no circuit to certify: whether the job has one is the office's question.
@@ -51,15 +59,21 @@ export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
     }
     if (assessment.missing.length > 0) problems.push({ kind: 'missing', what: `Cable ${cable.label}`, detail: `Still to record: ${assessment.missing.join(', ')}.` });
   }
+  const tested = new Set(certificate.circuits.map((c) => c.circuit.boardId));
+  const boards = (tested.size ? siteBoards.filter((b) => tested.has(b.id)) : siteBoards).sort((a, b) => a.name.localeCompare(b.name, 'en-GB', { numeric: true }));
+  const lastSigned = signed.sort((a, b) => (b.signedAt ?? '').localeCompare(a.signedAt ?? ''))[0];
   return {
     counts: { photos, notes, cables: mine.length, points: points.length, circuits: certificate.circuits.length },
     certificate,
     cables: mine,
     points,
     problems,
+    site,
+    boards,
+    lastPosition: lastSigned?.signedByPosition ?? '',
   };
 }
 
-export function useSignOff(visit: VisitRow): SignOffSummary | undefined {
-  return useLiveQuery(() => getSignOff(visit), [visit]);
+export function useSignOff(visit: VisitRow, signerName = ''): SignOffSummary | undefined {
+  return useLiveQuery(() => getSignOff(visit, signerName), [visit, signerName]);
 }

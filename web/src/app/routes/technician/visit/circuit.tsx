@@ -38,7 +38,7 @@ export function Component() {
             Circuit {circuit.number}
             {circuit.description ? ` · ${circuit.description}` : ''}
           </Typography>
-          <CircuitDetailsForm key={`${circuit.id}-${circuit._base.version}`} circuit={circuit} locked={locked} />
+          <CircuitDetailsForm key={`${circuit.id}-${circuit._base.version}`} circuit={circuit} locked={locked} earthing={data.site?.earthing} />
           {saved && (
             <Alert severity="success" role="status" onClose={() => setSaved(false)}>
               Readings saved on this phone.
