@@ -1,11 +1,13 @@
 import { cleanup, configure, render } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
+import { vi } from 'vitest';
 import { technicianScreens } from '@/app/router';
 import { db, type LocalRow } from '@/lib/db';
 import { setSession } from '@/lib/session';
 
 // The visit's sections are lazy routes, as in the app: on a busy machine the first one takes seconds to load.
 configure({ asyncUtilTimeout: 10_000 });
+vi.setConfig({ testTimeout: 30_000 });
 
 /** A technician's phone with one visit at one site, as a pull would have left it; for the visit screens' tests. */
 export const USER = { id: '01900000-0000-7000-8000-0000000000aa', email: 'tech1@larkfield.example', name: 'Sam Brannigan', role: 'technician' as const, organisationId: 'o1' };

@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
 import { addRing, at, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
@@ -13,13 +13,10 @@ beforeEach(async () => {
 });
 afterEach(tidyUp);
 
-// The visit's screens load lazily, as in the app: the first find waits for them.
-const LOADING = { timeout: 15_000 };
-vi.setConfig({ testTimeout: 30_000 });
 
 const details = async () => {
   show(paths.visitCircuit.href(ids.visit, ids.circuit));
-  fireEvent.click(await screen.findByRole('button', { name: /Circuit details/ }, LOADING));
+  fireEvent.click(await screen.findByRole('button', { name: /Circuit details/ }));
   return screen.findByRole('form', { name: 'Circuit details' });
 };
 const field = (el: HTMLElement, label: string) => within(el).getByLabelText(label) as HTMLInputElement | HTMLSelectElement;
@@ -58,7 +55,7 @@ describe('the circuit’s details for the certificate', () => {
     type(f, 'AFDD', 'BS EN 62606');
     type(f, 'RCD rated current (A)', '63');
     fireEvent.click(within(f).getByRole('button', { name: 'Save circuit details' }));
-    expect(await screen.findByText('Circuit details saved on this phone.', {}, LOADING)).toBeTruthy();
+    expect(await screen.findByText('Circuit details saved on this phone.')).toBeTruthy();
     expect(await db.circuit.get(ids.circuit)).toMatchObject({
       deviceStandard: 'BS EN 60898-1', rcdStandard: 'BS EN 61008-1', rcdRatedCurrentA: 63, afddStandard: 'BS EN 62606', referenceMethod: 'C', pointsServed: 9, maxDisconnectionS: 0.4,
     });
@@ -67,13 +64,13 @@ describe('the circuit’s details for the certificate', () => {
   it('takes R2 by the long lead instead of R1+R2, and the AFDD’s test button where one is fitted', async () => {
     await db.circuit.update(ids.circuit, { afddStandard: 'BS EN 62606', kind: 'radial' });
     show(paths.visitCircuit.href(ids.visit, ids.circuit));
-    const f = await screen.findByRole('form', { name: 'Readings for circuit 1' }, LOADING);
+    const f = await screen.findByRole('form', { name: 'Readings for circuit 1' });
     type(f, 'or R2, long lead (Ω)', '0.41');
     expect(await within(f).findByRole('button', { name: /^R2 \(protective conductor continuity, long lead\): Pass/ })).toBeTruthy();
     fireEvent.click(within(within(f).getByRole('region', { name: 'AFDD' })).getByRole('button', { name: 'Does not trip' }));
     expect(await within(f).findByRole('button', { name: /^AFDD test button: Fail/ })).toBeTruthy();
     fireEvent.click(within(f).getByRole('button', { name: 'Save readings' }));
-    expect(await screen.findByText('Readings saved on this phone.', {}, LOADING)).toBeTruthy();
+    expect(await screen.findByText('Readings saved on this phone.')).toBeTruthy();
     expect((await db.testResult.toArray())[0]).toMatchObject({ r2LeadOhm: 0.41, afddButton: 'fails' });
   });
 });

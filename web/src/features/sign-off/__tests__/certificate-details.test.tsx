@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
 import { addRing, at, base, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
@@ -13,9 +13,6 @@ beforeEach(async () => {
 });
 afterEach(tidyUp);
 
-// The visit's screens load lazily, as in the app: the first find waits for them.
-const LOADING = { timeout: 15_000 };
-vi.setConfig({ testTimeout: 30_000 });
 
 const type = (el: HTMLElement, label: string | RegExp, value: string) => fireEvent.change(within(el).getByLabelText(label), { target: { value } });
 
@@ -24,7 +21,7 @@ describe('what the certificate states, at sign-off', () => {
     await db.site.update(ids.site, { earthingConductor: 'adequate', bondingWater: 'adequate', bondingGas: 'none' });
     await db.board.update(ids.board, { zdbOhm: 0.31 });
     show(paths.visitSignOff.href(ids.visit));
-    const form = await screen.findByRole('form', { name: 'Earthing and bonding' }, LOADING);
+    const form = await screen.findByRole('form', { name: 'Earthing and bonding' });
     expect((within(form).getByLabelText('Zdb at Consumer unit (Ω)') as HTMLInputElement).value).toBe('0.31');
     expect((within(form).getByLabelText('Earthing conductor') as HTMLSelectElement).value).toBe('adequate');
     expect((within(form).getByLabelText('Main bonding to water') as HTMLSelectElement).value).toBe('adequate');
@@ -41,7 +38,7 @@ describe('what the certificate states, at sign-off', () => {
     type(form, 'Main bonding to other parts', 'adequate');
     type(form, 'Other parts bonded', 'Lightning protection');
     fireEvent.click(within(form).getByRole('button', { name: 'Save earthing and bonding' }));
-    expect(await within(form).findByText('Earthing, bonding and Zdb saved on this phone.', {}, LOADING)).toBeTruthy();
+    expect(await within(form).findByText('Earthing, bonding and Zdb saved on this phone.')).toBeTruthy();
     expect(await db.board.get(ids.board)).toMatchObject({ zdbOhm: 0.29 });
     expect(await db.site.get(ids.site)).toMatchObject({
       earthingConductor: 'adequate', bondingWater: 'adequate', bondingGas: 'none', bondingOil: 'none', bondingSteel: 'inadequate', bondingOther: 'adequate', bondingOtherWhat: 'Lightning protection',
@@ -53,7 +50,7 @@ describe('what the certificate states, at sign-off', () => {
   it('shows the declaration, takes the position, comments and a permitted exception with its risk assessment, and offers the last position again', async () => {
     await db.visit.put({ id: '01900000-0000-7000-8000-000000000050', jobId: ids.job, siteId: ids.site, technicianIds: [], status: 'finished', signedByName: 'Sam Brannigan', signedByPosition: 'Qualifying supervisor', signedAt: at(10, -7), ...base });
     show(paths.visitSignOff.href(ids.visit));
-    const form = await screen.findByRole('form', { name: 'Sign off' }, LOADING);
+    const form = await screen.findByRole('form', { name: 'Sign off' });
     const declaration = within(form).getByRole('note', { name: 'Declaration' });
     expect(declaration.textContent).toContain('does not impair the safety of the existing installation');
     expect(declaration.textContent).toContain('in accordance with BS 7671:2018 as amended to A2:2022');
