@@ -64,8 +64,8 @@ export function certificateOffers(c: Pick<CircuitDetails, 'kind' | 'deviceType' 
  */
 export function circuitDetailsOf(c: CircuitRow | null, earthing?: string | null): CircuitDetails {
   const recorded: CircuitDetails = {
-    kind: (c?.kind as CircuitDetails['kind']) ?? 'ring',
-    deviceType: (c?.deviceType as CircuitDetails['deviceType']) ?? '',
+    kind: c?.kind ?? 'ring',
+    deviceType: c?.deviceType ?? '',
     deviceRatingA: readingText(c?.deviceRatingA),
     rcdRatingMa: readingText(c?.rcdRatingMa),
     rcdType: c?.rcdType ?? '',
