@@ -107,4 +107,19 @@ describe('the content of a minor works certificate', () => {
       expect(text).toContain(expected);
     }
   });
+
+  it('lets the office record the same details over REST, within the registry’s limits', async () => {
+    const harbour = await jobByReference(t, office, 'LED-0042');
+    const circuits = (await t.http.get(`/api/circuits?siteId=${harbour.siteId}`).set(bearer(office)).expect(200)).body.items as Array<{ id: string; boardId: string }>;
+    const circuit = circuits[0]!;
+    const changed = await t.http.patch(`/api/circuits/${circuit.id}`).set(bearer(office))
+      .send({ deviceStandard: 'BS EN 60898-1', referenceMethod: 'B', pointsServed: 4, maxDisconnectionS: 0.4, rcdRatedCurrentA: 40 }).expect(200);
+    expect(changed.body).toMatchObject({ deviceStandard: 'BS EN 60898-1', referenceMethod: 'B', pointsServed: 4, maxDisconnectionS: 0.4, rcdRatedCurrentA: 40 });
+    const refused = await t.http.patch(`/api/circuits/${circuit.id}`).set(bearer(office)).send({ pointsServed: 2.5, maxDisconnectionS: 60 }).expect(400);
+    expect((refused.body.message as string[]).join(' ')).toMatch(/pointsServed/);
+    expect((await t.http.patch(`/api/boards/${circuit.boardId}`).set(bearer(office)).send({ zdbOhm: 0.33 }).expect(200)).body).toMatchObject({ zdbOhm: 0.33 });
+    const site = await t.http.patch(`/api/sites/${harbour.siteId}`).set(bearer(office)).send({ earthingConductor: 'adequate', bondingOil: 'none', bondingOtherWhat: 'Lightning protection' }).expect(200);
+    expect(site.body).toMatchObject({ earthingConductor: 'adequate', bondingOil: 'none', bondingOtherWhat: 'Lightning protection' });
+    await t.http.patch(`/api/sites/${harbour.siteId}`).set(bearer(office)).send({ bondingGas: 'maybe' }).expect(400);
+  });
 });

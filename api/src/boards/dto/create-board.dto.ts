@@ -1,4 +1,4 @@
-import { IdField, TextField } from '../../records/record-fields.js';
+import { IdField, NumberField, TextField } from '../../records/record-fields.js';
 
 export class CreateBoardDto {
   @IdField('site', { required: true })
@@ -12,4 +12,7 @@ export class CreateBoardDto {
 
   @TextField(500, { example: '10-way dual RCD board' })
   description?: string | null;
+
+  @NumberField(0, 1000, { description: 'earth fault loop impedance at the board Zdb, ohms' })
+  zdbOhm?: number | null;
 }

@@ -1,5 +1,5 @@
 import { CIRCUIT_KINDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
-import { ChoiceField, IdField, NumberField, TextField } from '../../records/record-fields.js';
+import { ChoiceField, IdField, IntegerField, NumberField, TextField } from '../../records/record-fields.js';
 
 export class CreateCircuitDto {
   @IdField('site', { required: true })
@@ -34,4 +34,25 @@ export class CreateCircuitDto {
 
   @NumberField(0.5, 400, { example: 1.5, description: 'circuit protective conductor cross-section, mm²' })
   cpcCsaMm2?: number | null;
+
+  @TextField(40, { example: 'BS EN 60898-1', description: 'the protective device\'s product standard' })
+  deviceStandard?: string | null;
+
+  @TextField(40, { example: 'BS EN 61008-1', description: 'the RCD\'s product standard' })
+  rcdStandard?: string | null;
+
+  @NumberField(1, 1000, { example: 63, description: 'RCD rated current, A' })
+  rcdRatedCurrentA?: number | null;
+
+  @TextField(40, { example: 'BS EN 62606', description: 'the AFDD\'s product standard; empty when none is fitted' })
+  afddStandard?: string | null;
+
+  @TextField(20, { example: 'C', description: 'installation reference method (BS 7671 Appendix 4)' })
+  referenceMethod?: string | null;
+
+  @IntegerField(0, 1000, { example: 9, description: 'number of points served' })
+  pointsServed?: number | null;
+
+  @NumberField(0.01, 10, { example: 0.4, description: 'maximum disconnection time allowed, s' })
+  maxDisconnectionS?: number | null;
 }

@@ -1,4 +1,4 @@
-import { EARTHING_ARRANGEMENTS } from '@wiretrail/core';
+import { BONDING_STATES, EARTHING_ARRANGEMENTS, EARTHING_CONDUCTOR_STATES } from '@wiretrail/core';
 import { ChoiceField, IdField, NumberField, TextField } from '../../records/record-fields.js';
 
 export class CreateSiteDto {
@@ -25,4 +25,25 @@ export class CreateSiteDto {
 
   @NumberField(0, 100, { description: 'prospective fault current, kA' })
   pfcKa?: number | null;
+
+  @ChoiceField(EARTHING_CONDUCTOR_STATES, { description: 'the earthing conductor as inspected' })
+  earthingConductor?: (typeof EARTHING_CONDUCTOR_STATES)[number] | null;
+
+  @ChoiceField(BONDING_STATES, { description: 'main protective bonding to water' })
+  bondingWater?: (typeof BONDING_STATES)[number] | null;
+
+  @ChoiceField(BONDING_STATES, { description: 'main protective bonding to gas' })
+  bondingGas?: (typeof BONDING_STATES)[number] | null;
+
+  @ChoiceField(BONDING_STATES, { description: 'main protective bonding to oil' })
+  bondingOil?: (typeof BONDING_STATES)[number] | null;
+
+  @ChoiceField(BONDING_STATES, { description: 'main protective bonding to structural steel' })
+  bondingSteel?: (typeof BONDING_STATES)[number] | null;
+
+  @ChoiceField(BONDING_STATES, { description: 'main protective bonding to other parts' })
+  bondingOther?: (typeof BONDING_STATES)[number] | null;
+
+  @TextField(100, { example: 'Lightning protection', description: 'what the other main bonding goes to' })
+  bondingOtherWhat?: string | null;
 }
