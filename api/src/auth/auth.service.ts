@@ -86,7 +86,7 @@ export class AuthService {
   }
 
   private async issue(em: EntityManager, user: User, familyId: string, userAgent?: string): Promise<SessionTokens> {
-    const payload: AccessTokenPayload = { sub: user.id, org: user.organisationId, role: user.role };
+    const payload: AccessTokenPayload = { sub: user.id, org: user.organisationId, role: user.role, sid: familyId };
     const accessToken = await this.jwt.signAsync(payload, { expiresIn: this.config.accessTokenTtlSeconds });
     const secret = randomBytes(32).toString('base64url');
     const row = em.create(RefreshToken, {
