@@ -4,10 +4,29 @@ import { inTurn } from '../common/in-turn.js';
 import { type JobFile, jobVisits, live, rows } from '../paperwork/job-file.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import type { RecordKey } from '../sync/record-locks.js';
 import { User } from '../users/entities/user.entity.js';
 
 export interface MinorWorksContent extends MinorWorksJudgement<SyncRecord, SyncRecord, SyncRecord> {
   boards: Map<string, string>;
+  /** Every reading and point change recorded on the job's visits: the evidence behind the certificate, held with it. */
+  recorded: RecordKey[];
+}
+
+/**
+ * What a minor works certificate prints, which its lock holds: the site (earthing, Ze, PFC), the visits judged and
+ * everything recorded on the job's visits, each certified circuit and its board.
+ */
+export function minorWorksPrints(file: JobFile, content: MinorWorksContent): RecordKey[] {
+  return [
+    { entity: 'site', id: file.site.id },
+    ...content.visits.map((v) => ({ entity: 'visit' as const, id: v.id })),
+    ...content.recorded,
+    ...content.circuits.flatMap(({ circuit }) => [
+      { entity: 'circuit' as const, id: circuit.id },
+      ...(typeof circuit.boardId === 'string' ? [{ entity: 'board' as const, id: circuit.boardId }] : []),
+    ]),
+  ];
 }
 
 /** The records behind a minor works certificate, judged; see judgeMinorWorks for when it may be issued. */
@@ -23,7 +42,8 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
   );
   const earthing = typeof file.site.earthing === 'string' ? file.site.earthing : null;
   const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing }, rules);
-  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])) };
+  const recorded: RecordKey[] = [...tests.map((r) => ({ entity: 'testResult' as const, id: r.id })), ...pointChanges.map((r) => ({ entity: 'pointChange' as const, id: r.id }))];
+  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name as string])), recorded };
 }
 
 export interface ScheduledCable {
@@ -31,9 +51,19 @@ export interface ScheduledCable {
   assessment: CableRunAssessment;
 }
 
-/** The site's cable schedule, every run judged again from its recorded wiremap and length, by label. */
-export async function loadCableSchedule(em: EntityManager, file: JobFile, rules: RuleSet): Promise<ScheduledCable[]> {
-  const runs = await rows(em, 'cableRun', { siteId: file.site.id, ...live(file.organisation.id) });
+/**
+ * The cables a report covers, every run judged again from its recorded wiremap and length, by label: those recorded
+ * or tested on the job's visits, or the site's whole schedule when the office chose it (cables another job recorded,
+ * or one made in error there, are otherwise not this customer's report).
+ */
+export async function loadCableSchedule(em: EntityManager, file: JobFile, rules: RuleSet, coverage: 'job' | 'site'): Promise<ScheduledCable[]> {
+  const org = file.organisation.id;
+  let runs: SyncRecord[];
+  if (coverage === 'site') runs = await rows(em, 'cableRun', { siteId: file.site.id, ...live(org) });
+  else {
+    const visitIds = (await jobVisits(em, file)).map((v) => v.id);
+    runs = visitIds.length ? await rows(em, 'cableRun', { siteId: file.site.id, lastVisitId: In(visitIds), ...live(org) }) : [];
+  }
   return runs
     .sort((a, b) => String(a.label).localeCompare(String(b.label), 'en-GB', { numeric: true }))
     .map((run) => ({
@@ -43,6 +73,17 @@ export async function loadCableSchedule(em: EntityManager, file: JobFile, rules:
         rules,
       ),
     }));
+}
+
+/** Each failing cable named, with what fails, for the office to see as the report is issued. */
+export function cableNotices(cables: ScheduledCable[]): string[] {
+  return cables
+    .filter((c) => c.assessment.verdict === 'fail')
+    .map((c) => {
+      const a = c.assessment;
+      const why = [...(a.wiremap?.faults ?? []).map((f) => f.note), ...(a.length && a.length.verdict === 'fail' ? [a.length.note] : []), ...a.problems];
+      return `${String(c.run.label)} fails: ${why.length ? why.join(' ') : 'see the report.'}`;
+    });
 }
 
 export interface RecordedPhoto {
