@@ -1,6 +1,6 @@
 import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit, UnprocessableEntityException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
-import { DEFAULT_RULE_SET, type DOCUMENT_COVERAGES, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
+import { DEFAULT_RULE_SET, type DocumentCoverage, type HeldChange, type IssuedDocument, isSyncEntity, type SyncedRow } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
@@ -23,7 +23,7 @@ import { ShareLinksService } from '../share-links/share-links.service.js';
 import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
 import { DOCUMENT_STORAGE, documentKey, PHOTO_STORAGE, photoKey } from '../storage/file-stores.js';
 import { insertMany } from '../sync/bulk-write.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { type Actor, type RecordKey, SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import { User } from '../users/entities/user.entity.js';
@@ -31,7 +31,7 @@ import { cableNotices, loadCableSchedule, loadMinorWorks, loadPhotoRecord, minor
 import type { DocumentKind } from './dto/issue-document.dto.js';
 import { DOCUMENT_LOCK } from './document-lock.js';
 import type { ReviseDocumentDto } from './dto/revise-document.dto.js';
-import { heldChangesOf, type HeldChange } from './held-changes.js';
+import { heldChangesOf } from './held-changes.js';
 import { cablingReportPdf } from './pdf/cabling-report-pdf.js';
 import { minorWorksPdf } from './pdf/minor-works-pdf.js';
 import { photoRecordPdf } from './pdf/photo-record-pdf.js';
@@ -60,14 +60,13 @@ interface Prepared {
   notices: string[];
 }
 
-export type DocumentCoverage = (typeof DOCUMENT_COVERAGES)[number];
 
-/** An issued document as the issue and revise routes answer it: the row, and what the office should know about it now. */
-export type IssuedDocument = SyncedRow & { notices: string[] };
+/** An issue or revision as answered: the synced row, and what the office should know about it now (core's IssuedDocument). */
+type IssuedAnswer = SyncedRow & Pick<IssuedDocument, 'notices'>;
 
 /** What a revision brings: the document it supersedes, why, and its new row's id (which the old one names). */
 interface Revision {
-  old: SyncRecord;
+  old: SyncRecord<'document'>;
   reason: string;
   id: string;
 }
@@ -99,11 +98,11 @@ export class DocumentsService implements OnModuleInit {
     });
   }
 
-  async issue(user: AuthUser, jobId: string, kind: DocumentKind, coverage?: DocumentCoverage): Promise<IssuedDocument> {
+  async issue(user: AuthUser, jobId: string, kind: DocumentKind, coverage?: DocumentCoverage): Promise<IssuedAnswer> {
     // Photos are made print-ready before the transaction: their bytes never change, and the write queue should not wait on them.
     const images = kind === 'photo-record' ? await this.printablePhotos(user.organisationId, jobId) : new Map<string, Buffer>();
     const { row, notices } = await this.queue.run((em) => this.issueIn(em, user, jobId, kind, images, coverage ?? null, null));
-    this.logger.log(`Issued ${row.number as string} for job ${jobId}`);
+    this.logger.log(`Issued ${row.number} for job ${jobId}`);
     return { ...toSyncedRow(row), notices };
   }
 
@@ -113,38 +112,38 @@ export class DocumentsService implements OnModuleInit {
    * (kept conflicts of its records) are made before the new one prints the records and locks them again. All in one
    * transaction: a refused revision changes nothing and uses no number.
    */
-  async revise(user: AuthUser, id: string, dto: ReviseDocumentDto): Promise<IssuedDocument> {
+  async revise(user: AuthUser, id: string, dto: ReviseDocumentDto): Promise<IssuedAnswer> {
     const first = await this.row(user, id);
-    const images = first.kind === 'photo-record' ? await this.printablePhotos(user.organisationId, first.jobId as string) : new Map<string, Buffer>();
+    const images = first.kind === 'photo-record' ? await this.printablePhotos(user.organisationId, first.jobId) : new Map<string, Buffer>();
     const { row, notices } = await this.queue.run(async (em) => {
       const old = await this.documentOf(em, user.organisationId, id);
-      if (!old.issuedAt) throw new ConflictException(`${old.number as string} was never issued, so there is nothing to revise.`);
-      if (old.supersededAt) throw new ConflictException(`${old.number as string} is already superseded; revise the document that superseded it.`);
+      if (!old.issuedAt) throw new ConflictException(`${old.number} was never issued, so there is nothing to revise.`);
+      if (old.supersededAt) throw new ConflictException(`${old.number} is already superseded; revise the document that superseded it.`);
       const actor = officeActor(user);
       const revision: Revision = { old, reason: dto.reason.trim(), id: uuidv7() };
       await this.engine.serverWrite(em, actor, 'document', [{ row: old, changes: { supersededAt: new Date().toISOString(), supersededById: revision.id } }]);
       await this.takeChanges(em, actor, old, dto.take ?? []);
-      return this.issueIn(em, user, old.jobId as string, old.kind as DocumentKind, images, (old.coverage as DocumentCoverage | null) ?? null, revision);
+      return this.issueIn(em, user, old.jobId, old.kind as DocumentKind, images, (old.coverage as DocumentCoverage | null) ?? null, revision);
     });
-    this.logger.log(`Issued ${row.number as string}, superseding ${first.number as string}`);
+    this.logger.log(`Issued ${row.number}, superseding ${first.number}`);
     return { ...toSyncedRow(row), notices };
   }
 
   /** The changes kept back by a document's lock that the office takes into its revision, made as the office's own edits. */
-  private async takeChanges(em: EntityManager, actor: Actor, old: SyncRecord, conflictIds: string[]): Promise<void> {
+  private async takeChanges(em: EntityManager, actor: Actor, old: SyncRecord<'document'>, conflictIds: string[]): Promise<void> {
     if (!conflictIds.length) return;
-    const conflicts = await em.getRepository<SyncRecord>('conflict').findBy({ id: In(conflictIds), organisationId: actor.organisationId });
+    const conflicts = await syncRepository(em, 'conflict').findBy({ id: In(conflictIds), organisationId: actor.organisationId });
     const printed = await em.findBy(PrintedRecord, { documentId: old.id });
     const prints = new Set(printed.map((p) => `${p.entity}:${p.rowId}`));
     for (const conflictId of conflictIds) {
       const c = conflicts.find((x) => x.id === conflictId);
-      if (!c || c.resolvedAt || c.reason !== DOCUMENT_LOCK.reason || !prints.has(`${c.entity as string}:${c.rowId as string}`)) {
-        throw new UnprocessableEntityException([`Conflict ${conflictId} is not a change waiting behind ${old.number as string}.`]);
+      if (!c || c.resolvedAt || c.reason !== DOCUMENT_LOCK.reason || !prints.has(`${c.entity}:${c.rowId}`)) {
+        throw new UnprocessableEntityException([`Conflict ${conflictId} is not a change waiting behind ${old.number}.`]);
       }
-      const entity = c.entity as keyof typeof SYNC_ENTITIES;
-      const row = await em.getRepository<SyncRecord>(entity).findOne({ where: { id: c.rowId as string }, withDeleted: true });
+      const entity = c.entity;
+      const row = isSyncEntity(entity) ? await syncRepository(em, entity).findOne({ where: { id: c.rowId }, withDeleted: true }) : null;
       if (!row) throw new UnprocessableEntityException([`The record of conflict ${conflictId} no longer exists.`]);
-      const set = c.field === '*' ? null : { [c.field as string]: c.discardedValue };
+      const set = c.field === '*' ? null : { [c.field]: c.discardedValue };
       const base = officeMutation(entity, row.id, row.version, set ?? {});
       const mutation = set ? base : { mutationId: base.mutationId, entity, id: row.id, baseVersion: row.version, hlc: base.hlc, delete: true as const };
       const [result] = await this.engine.applyAll(em, actor, [mutation]);
@@ -168,7 +167,7 @@ export class DocumentsService implements OnModuleInit {
     // Numbered last, after every refusal, and in this transaction: a refused issue uses no number.
     const prepared = await this.prepare(em, kind, file, images, coverage ?? 'job');
     const number = await takeNextNumber(em, user.organisationId, kind, KINDS[kind].prefix);
-    const supersedes = revision ? { number: revision.old.number as string, reason: revision.reason } : undefined;
+    const supersedes = revision ? { number: revision.old.number ?? '', reason: revision.reason } : undefined;
     const rendered = await prepared.render({ number, issuedAt, issuedBy: user.name, supersedes });
     await this.storage.put(documentKey(user.organisationId, id), rendered.pdf, 'application/pdf');
     const printed = [...new Map(prepared.printed.map((r) => [`${r.entity}:${r.id}`, r])).values()];
@@ -181,7 +180,7 @@ export class DocumentsService implements OnModuleInit {
       kind,
       visitId: rendered.visitId,
       number,
-      title: `${KINDS[kind].title}: ${file.job.title as string}`.slice(0, 200),
+      title: `${KINDS[kind].title}: ${file.job.title}`.slice(0, 200),
       signerName: rendered.signerName,
       pdfSha256: fingerprint(rendered.pdf),
       pdfBytes: rendered.pdf.length,
@@ -238,7 +237,7 @@ export class DocumentsService implements OnModuleInit {
           ]);
         }
         for (const { photo } of content.photos) {
-          const sha = photo.sha256 as string;
+          const sha = photo.sha256;
           if (!images.has(sha)) images.set(sha, await this.printable(file.organisation.id, sha));
         }
         return {
@@ -253,14 +252,14 @@ export class DocumentsService implements OnModuleInit {
   /** Changes kept back by the job's standing documents, each beside the value as issued. */
   heldChanges(user: AuthUser, jobId: string): Promise<{ items: HeldChange[] }> {
     return this.queue.read(async (em) => {
-      const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
+      const job = await syncRepository(em, 'job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
       if (!job) throw new NotFoundException('No such job.');
       return { items: await heldChangesOf(em, user.organisationId, jobId) };
     });
   }
 
   private async printablePhotos(organisationId: string, jobId: string): Promise<Map<string, Buffer>> {
-    const hashes = await this.queue.read(async (em) => (await loadPhotoRecord(em, await loadJobFile(em, organisationId, jobId))).photos.map((p) => p.photo.sha256 as string));
+    const hashes = await this.queue.read(async (em) => (await loadPhotoRecord(em, await loadJobFile(em, organisationId, jobId))).photos.map((p) => p.photo.sha256));
     const images = new Map<string, Buffer>();
     for (const sha of new Set(hashes)) images.set(sha, await this.printable(organisationId, sha));
     return images;
@@ -279,9 +278,9 @@ export class DocumentsService implements OnModuleInit {
 
   async list(user: AuthUser, jobId: string): Promise<{ items: SyncedRow[] }> {
     const rows = await this.queue.read(async (em) => {
-      const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
+      const job = await syncRepository(em, 'job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
       if (!job) throw new NotFoundException('No such job.');
-      return em.getRepository<SyncRecord>('document').find({
+      return syncRepository(em, 'document').find({
         where: { jobId, organisationId: user.organisationId, deletedAt: IsNull() },
         order: { issuedAt: 'DESC', id: 'DESC' },
       });
@@ -294,7 +293,7 @@ export class DocumentsService implements OnModuleInit {
   }
 
   /** The stored row, for the PDF download. */
-  row(user: AuthUser, id: string): Promise<SyncRecord> {
+  row(user: AuthUser, id: string): Promise<SyncRecord<'document'>> {
     return this.queue.read((em) => this.documentOf(em, user.organisationId, id));
   }
 
@@ -306,8 +305,8 @@ export class DocumentsService implements OnModuleInit {
     const { row, link } = await this.queue.run(async (em) => {
       const doc = await this.documentOf(em, user.organisationId, id);
       if (!doc.issuedAt || !doc.pdfSha256) throw new ConflictException('Only an issued document can be e-mailed.');
-      const file = await loadJobFile(em, user.organisationId, doc.jobId as string);
-      const link = await this.shareLinks.createIn(em, user, file.job.id, { days: dto.linkDays, label: `E-mailed with ${doc.number as string} to ${dto.to}` });
+      const file = await loadJobFile(em, user.organisationId, doc.jobId);
+      const link = await this.shareLinks.createIn(em, user, file.job.id, { days: dto.linkDays, label: `E-mailed with ${doc.number} to ${dto.to}` });
       await this.outbox.enqueue(em, {
         organisationId: user.organisationId,
         purpose: DOCUMENT_MAIL,
@@ -317,32 +316,32 @@ export class DocumentsService implements OnModuleInit {
         ...this.letter(file, doc, dto.to, link.url, link.expiresAt),
       });
       await this.engine.serverWrite(em, officeActor(user), 'document', [{ row: doc, changes: { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null } }]);
-      return { row: await em.getRepository<SyncRecord>('document').findOneByOrFail({ id }), link };
+      return { row: await syncRepository(em, 'document').findOneByOrFail({ id }), link };
     });
     return { document: toSyncedRow(row), shareLink: { id: link.id, expiresAt: link.expiresAt } };
   }
 
-  private letter(file: JobFile, doc: SyncRecord, to: string, url: string, expiresAt: string): { subject: string; text: string } {
+  private letter(file: JobFile, doc: SyncRecord<'document'>, to: string, url: string, expiresAt: string): { subject: string; text: string } {
     const org = file.organisation;
-    const kind = KINDS[doc.kind as DocumentKind].title;
+    const kind = KINDS[doc.kind].title;
     const text = coveringLetter(file, to, [
-      `Attached is ${kind.toLowerCase()} ${doc.number as string} for ${theWork(file)}.`,
+      `Attached is ${kind.toLowerCase()} ${doc.number} for ${theWork(file)}.`,
       '',
       `You can also see the job's record, with its photos and documents, at this link until ${dateWords(expiresAt, org.timeZone)}:`,
       url,
     ]);
-    return { subject: `${kind} ${doc.number as string} from ${org.name}`, text };
+    return { subject: `${kind} ${doc.number} from ${org.name}`, text };
   }
 
   private async attachment(message: OutboxMessage) {
-    const doc = await this.queue.read((em) => em.getRepository<SyncRecord>('document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId }));
+    const doc = await this.queue.read((em) => syncRepository(em, 'document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId }));
     if (!doc?.pdfSha256) throw new Error('The document is no longer on the server.');
     return [await issuedPdfAttachment(this.storage, doc)];
   }
 
   /** Writes the outbox's news to the document row through the engine, so it is numbered and every device pulls it. */
   private async recordMailState(em: EntityManager, message: OutboxMessage): Promise<void> {
-    const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId });
+    const doc = await syncRepository(em, 'document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId });
     if (!doc) return;
     if (!(await isLatestMessage(em, message))) return;
     const { emailedAt, ...state } = mailState(message, this.mail.maxAttempts);
@@ -352,8 +351,8 @@ export class DocumentsService implements OnModuleInit {
     await this.engine.serverWrite(em, officeActor(actor, 'mail-outbox'), 'document', [{ row: doc, changes: set }]);
   }
 
-  private async documentOf(em: EntityManager, organisationId: string, id: string): Promise<SyncRecord> {
-    const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id, organisationId, deletedAt: IsNull() });
+  private async documentOf(em: EntityManager, organisationId: string, id: string): Promise<SyncRecord<'document'>> {
+    const doc = await syncRepository(em, 'document').findOneBy({ id, organisationId, deletedAt: IsNull() });
     if (!doc) throw new NotFoundException('No such document.');
     return doc;
   }

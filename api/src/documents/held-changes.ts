@@ -1,25 +1,8 @@
-import { isSyncEntity, type SyncEntityName } from '@wiretrail/core';
+import { type HeldChange, isSyncEntity, type SyncEntityName } from '@wiretrail/core';
 import { type EntityManager, In } from 'typeorm';
 import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { DOCUMENT_LOCK } from './document-lock.js';
-
-/** A change kept back by a standing document, beside the value the document printed. */
-export interface HeldChange {
-  conflictId: string;
-  documentId: string;
-  number: string;
-  entity: SyncEntityName;
-  rowId: string;
-  /** The record in the office's words: "Circuit 2 (Sockets, first floor)", "Cable OR-01", "The site". */
-  record: string;
-  /** The field changed, or `*` for a deletion. */
-  field: string;
-  issuedValue: unknown;
-  pendingValue: unknown;
-  changedById: string | null;
-  changedHlc: string | null;
-}
 
 const describe = (entity: SyncEntityName, row: SyncRecord | undefined, circuits: Map<string, SyncRecord>): string => {
   const circuit = (c: SyncRecord | undefined) => (c ? `Circuit ${String(c.number)}${c.description ? ` (${String(c.description)})` : ''}` : 'A circuit');

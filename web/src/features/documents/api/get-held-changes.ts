@@ -1,20 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { HeldChange } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-/** A change an issued document keeps back, beside the value the document printed. */
-export interface HeldChange {
-  conflictId: string;
-  documentId: string;
-  number: string;
-  entity: string;
-  rowId: string;
-  record: string;
-  field: string;
-  issuedValue: unknown;
-  pendingValue: unknown;
-  changedById: string | null;
-  changedHlc: string | null;
-}
+export type { HeldChange } from '@wiretrail/core';
 
 export const heldChangesQueryOptions = (jobId: string) =>
   queryOptions({
