@@ -8,6 +8,7 @@ import Typography from '@mui/material/Typography';
 import ExpandMore from '@mui/icons-material/ExpandMore';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
+import { circuitKindWords } from '@wiretrail/core';
 import type { CircuitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
 import {
@@ -19,11 +20,10 @@ import {
   circuitDetailsOf,
   circuitDetailsSchema,
 } from './circuit-fields';
-import { KIND_WORDS } from './circuit-fields';
 
 export function describeCircuit(c: CircuitRow): string {
   return [
-    c.kind ? KIND_WORDS[c.kind] : null,
+    c.kind ? circuitKindWords(c.kind) : null,
     c.deviceType ? `${/^[BCD]$/.test(c.deviceType) ? `type ${c.deviceType}` : c.deviceType} ${c.deviceRatingA ?? '?'}\u00a0A` : 'device not recorded',
     c.rcdRatingMa ? `${c.rcdRatingMa} mA RCD${c.rcdType ? ` (${c.rcdType})` : ''}` : 'no RCD recorded',
     c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2}/${c.cpcCsaMm2}\u00a0mm²` : 'sizes not recorded',

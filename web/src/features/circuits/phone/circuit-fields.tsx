@@ -2,10 +2,12 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import {
   AFDD_STANDARD,
+  CIRCUIT_KIND_WORDS,
   CIRCUIT_KINDS,
   DEVICE_STANDARD_CHOICES,
   deviceStandardFor,
   type FieldValue,
+  PROTECTIVE_DEVICE_WORDS,
   PROTECTIVE_DEVICES,
   RCBO_STANDARD,
   RCD_STANDARD_CHOICES,
@@ -17,9 +19,6 @@ import { z } from 'zod';
 import type { CircuitRow } from '@/lib/db';
 import { choicesOf, NativeChoice } from '@/components/forms/phone-inputs';
 import { readingField, readingText, usableReading } from '@/lib/readings';
-
-export const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
-const DEVICE_WORDS: Record<string, string> = { B: 'Type B circuit-breaker', C: 'Type C circuit-breaker', D: 'Type D circuit-breaker' };
 
 /** The circuit's own details that its tests depend on. */
 export const circuitDetailsSchema = z.object({
@@ -115,14 +114,12 @@ export function CircuitDetailFields({ register, control, errors }: { register: U
   return (
     <>
       {/* Controlled, so the recorded choice shows and the standard values offered follow it. */}
-      <Controller control={control} name="kind" render={({ field }) => <NativeChoice label="Kind" {...field} options={choicesOf(CIRCUIT_KINDS, KIND_WORDS)} />} />
+      <Controller control={control} name="kind" render={({ field }) => <NativeChoice label="Kind" {...field} options={choicesOf(CIRCUIT_KINDS, CIRCUIT_KIND_WORDS)} />} />
       <Stack direction="row" spacing={1.5}>
         <Controller
           control={control}
           name="deviceType"
-          render={({ field }) => (
-            <NativeChoice label="Protective device" {...field} emptyLabel="Not known" options={PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d] ?? `${d} fuse` }))} />
-          )}
+          render={({ field }) => <NativeChoice label="Protective device" {...field} emptyLabel="Not known" options={choicesOf(PROTECTIVE_DEVICES, PROTECTIVE_DEVICE_WORDS)} />}
         />
         <TextField label="Rating (A)" {...register('deviceRatingA')} error={!!errors.deviceRatingA} helperText={errors.deviceRatingA?.message ?? ' '} slotProps={num} sx={{ maxWidth: 130 }} />
       </Stack>
