@@ -30,7 +30,7 @@ const CLAIM_MS = 2 * 60_000;
 
 /** An SMTP reply in the 5xx range will not change by asking again (no such mailbox, refused as spam). */
 const isPermanent = (err: unknown) => {
-  const code = (err as { responseCode?: unknown })?.responseCode;
+  const code = typeof err === 'object' && err !== null && 'responseCode' in err ? err.responseCode : undefined;
   return typeof code === 'number' && code >= 500 && code < 600;
 };
 

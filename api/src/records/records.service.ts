@@ -1,5 +1,5 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import { formatHlc, type Mutation, type MutationResult, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
+import { fieldError, type FieldValue, formatHlc, isFieldValue, type Mutation, type MutationResult, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
 import { type EntityManager, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
@@ -63,12 +63,18 @@ export function officeActor(user: AuthUser, deviceId = 'office'): Actor {
 
 /** One change the office makes, as a mutation the engine applies like any device's. */
 export function officeMutation(entity: Mutation['entity'], id: string, baseVersion: number, set: Record<string, unknown>, deviceId = 'office'): Mutation {
+  const values: Record<string, FieldValue> = {};
+  for (const [field, value] of Object.entries(set)) {
+    // A value JSON would change could not come from a device either; it is refused as the engine refuses a device's.
+    if (!isFieldValue(value)) throw new BadRequestException(fieldError(entity, field, value) ?? `${entity}.${field} must be a JSON value`);
+    values[field] = value;
+  }
   return {
     mutationId: uuidv7(),
     entity,
     id,
     baseVersion,
-    set: set as Mutation['set'],
+    set: values,
     hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId }),
   };
 }

@@ -55,4 +55,4 @@ export class LocalFileStorage implements FileStorage {
   }
 }
 
-const isMissing = (err: unknown) => (err as NodeJS.ErrnoException)?.code === 'ENOENT';
+const isMissing = (err: unknown) => err instanceof Error && 'code' in err && err.code === 'ENOENT';

@@ -156,7 +156,7 @@ export class SyncEngine {
     const done = mutationId ? run.batch.applied.get(mutationId) : undefined;
     if (done) {
       if (done.organisationId !== actor.organisationId) return { mutationId, status: 'rejected', error: 'mutationId was already used.' };
-      return done.result as unknown as MutationResult;
+      return done.result;
     }
     let result: MutationResult;
     try {
@@ -166,7 +166,7 @@ export class SyncEngine {
       result = { mutationId, status: 'rejected', error: err.message };
     }
     // The same id twice in one batch is a replay too.
-    if (mutationId) run.batch.recordApplied({ mutationId, organisationId: actor.organisationId, userId: actor.userId, deviceId: actor.deviceId, result: result as never });
+    if (mutationId) run.batch.recordApplied({ mutationId, organisationId: actor.organisationId, userId: actor.userId, deviceId: actor.deviceId, result });
     return result;
   }
 
