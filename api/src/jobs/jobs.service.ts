@@ -31,7 +31,7 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
 
   protected listing(q: ListJobsQueryDto): Listing {
     const sort = q.sort ?? 'created';
-    const direction = (q.direction ?? (sort === 'created' ? 'desc' : 'asc')).toUpperCase() as 'ASC' | 'DESC';
+    const direction = (q.direction ?? (sort === 'created' ? 'desc' : 'asc')) === 'desc' ? 'DESC' : 'ASC';
     return {
       search: ['reference', 'title', 'description'],
       searchThrough: [
@@ -48,7 +48,7 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
 
   /** The number of jobs in each status under the same filters, for the board's columns. */
   async statusCounts(user: AuthUser, q: JobFiltersDto): Promise<JobStatusCounts> {
-    const found = await this.countBy(user, { ...q, status: undefined } as ListJobsQueryDto, 'status');
+    const found = await this.countBy(user, { ...q, status: undefined }, 'status');
     const counts: JobStatusCounts['counts'] = { enquiry: 0, booked: 0, 'on-site': 0, paperwork: 0, done: 0, cancelled: 0 };
     for (const s of JOB_STATUSES) counts[s] = found.get(s) ?? 0;
     return { counts, total: [...found.values()].reduce((a, b) => a + b, 0) };

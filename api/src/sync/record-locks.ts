@@ -59,7 +59,7 @@ export class RecordLocks {
       const rows = await this.reads.select(entity, 'jobId', [...jobIds], { deletedAt: null });
       const known = this.jobsOf(entity);
       for (const jobId of jobIds) known.set(jobId, false);
-      for (const row of rows) if (rule.locksJob!(row)) known.set(row.jobId as string, true);
+      for (const row of rows) if (rule.locksJob!(row) && typeof row.jobId === 'string') known.set(row.jobId, true);
     }
   }
 
@@ -69,11 +69,12 @@ export class RecordLocks {
     const own = this.rules.get(spec.name);
     if (own?.locksRow) return own.locksRow(row, fields) ? own.reason : null;
     if (!spec.visitField) return null;
-    const visitId = (spec.visitField === 'id' ? row.id : row.visitId) as string | null;
+    const visitId = spec.visitField === 'id' ? row.id : typeof row.visitId === 'string' ? row.visitId : null;
     if (!visitId) return null;
     const visit = spec.visitField === 'id' ? row : await this.reads.rowOf('visit', visitId);
-    if (!visit?.jobId) return null;
-    for (const [entity, rule] of this.jobRules()) if (await this.jobLocked(entity, rule, visit.jobId as string)) return rule.reason;
+    const jobId = visit?.jobId;
+    if (typeof jobId !== 'string' || !jobId) return null;
+    for (const [entity, rule] of this.jobRules()) if (await this.jobLocked(entity, rule, jobId)) return rule.reason;
     if (role === 'technician' && visit.status === FINISHED_VISIT_STATUS) return SIGN_OFF_REASON;
     return null;
   }
