@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
-import { JOB_STATUSES, type JobSort, type JobStatusCounts } from '@wiretrail/core';
+import { JOB_STATUSES, type JobListing, type JobPage, type JobSort, type JobStatusCounts } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { type Condition, type Listing, type OfficeRow, RecordsService } from '../records/records.service.js';
+import { type Condition, type Listing, RecordsService } from '../records/records.service.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { JobFiltersDto, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
@@ -26,8 +26,17 @@ const SORTS: Record<JobSort, string> = {
 };
 
 @Injectable()
-export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
+export class JobsService extends RecordsService<ListJobsQueryDto, 'job', JobListing> {
   protected readonly entity = 'job';
+
+  // Declared here so the replies are checked against the contract the office's job screens read.
+  override list(user: AuthUser, q: ListJobsQueryDto): Promise<JobPage> {
+    return super.list(user, q);
+  }
+
+  override findOne(user: AuthUser, id: string): Promise<JobListing> {
+    return super.findOne(user, id);
+  }
 
   protected listing(q: ListJobsQueryDto): Listing {
     const sort = q.sort ?? 'created';
@@ -82,7 +91,7 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
   }
 
   /** Each job with its customer's and site's names, its next visit and who is booked on its visits. */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'job'>[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'job'>[]): Promise<JobListing[]> {
     if (!rows.length) return [];
     const org = user.organisationId;
     const ids = (field: 'customerId' | 'siteId') => [...new Set(rows.map((r) => r[field]))];
