@@ -149,6 +149,7 @@ export async function seedDemoData(
   invoiceStorage?: FileStorage,
 ): Promise<boolean> {
   if ((await dataSource.getRepository(Organisation).count()) > 0) return false;
+  // The scenario is our own file beside this code, and seeding it checks every record as a push would.
   const scenario = JSON.parse(await readFile(scenarioPath, 'utf8')) as Scenario;
   const passwordHash = await hashPassword(scenario.password);
   const imageNames = scenario.organisations.flatMap((o) => (o.records ?? []).map((r) => imageName(r.set.sha256))).filter((n): n is string => !!n);

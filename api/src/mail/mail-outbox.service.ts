@@ -165,7 +165,7 @@ export class MailOutbox implements OnApplicationBootstrap, OnModuleDestroy {
     if (failure !== null) this.logger.warn(`Attempt ${attempts} to send "${message.subject}" to ${message.toAddress} failed: ${reasonOf(failure)}`);
     await this.queue.run(async (em) => {
       await em.update(OutboxMessage, { id: message.id }, changes);
-      await purpose?.settled(em, { ...message, ...changes } as OutboxMessage);
+      await purpose?.settled(em, Object.assign({}, message, changes));
     });
     // A retry falls due while no message is being sent: look again then, not only at the next poll.
     if (changes.nextAttemptAt && !this.stopped) setTimeout(() => this.kick(), changes.nextAttemptAt.getTime() - Date.now() + 5).unref();

@@ -85,6 +85,7 @@ export async function selectMany<T extends ObjectLiteral>(
     for (const r of raw) {
       const row: Record<string, unknown> = {};
       for (const { c, property, name } of columns) row[property] = driver.prepareHydratedValue(r[name], c);
+      // Every column of T's metadata, hydrated by the driver: what TypeORM's own find gives typed as T.
       out.push(row as T);
     }
   }
