@@ -50,7 +50,7 @@ export function configureApp<A extends NestExpressApplication>(app: A): A {
   const config = app.get(ConfigService);
   // Behind the README's load balancer every client would otherwise be the balancer's one address.
   const trustProxy = config.get<string>('app.trustProxy');
-  if (trustProxy) (app as NestExpressApplication).set('trust proxy', trustProxyValue(trustProxy));
+  if (trustProxy) app.set('trust proxy', trustProxyValue(trustProxy));
   // Customers' share pages need no account; a token cannot be guessed, but the pages should not be hammered either.
   app.use(
     '/api/shared',
