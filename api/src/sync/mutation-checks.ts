@@ -4,6 +4,7 @@ import {
   type FieldValue,
   isHlc,
   isSyncEntity,
+  parseHlc,
   isUuid,
   type Mutation,
   SYNC_ENTITIES,
@@ -44,7 +45,7 @@ export function checkMutation(mutation: Mutation): CheckedMutation {
   const spec = SYNC_ENTITIES[mutation.entity];
   if (spec.serverOnly) throw new MutationRefused(`${mutation.entity} rows are made by the server only.`);
   if (!isUuid(mutation.id)) throw new MutationRefused('id must be a UUID.');
-  if (!isHlc(mutation.hlc)) throw new MutationRefused('hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>.');
+  if (!isHlc(mutation.hlc)) throw new MutationRefused('hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>, with a real date from 2020 on.');
   if (!Number.isInteger(mutation.baseVersion) || mutation.baseVersion < 0) throw new MutationRefused('baseVersion must be a whole number, 0 for a new row.');
   const isDelete = mutation.delete === true;
   const set = mutation.set ?? {};
@@ -58,6 +59,18 @@ export function checkMutation(mutation: Mutation): CheckedMutation {
     if (problem) throw new MutationRefused(problem);
   }
   return { mutation, spec, set, isDelete };
+}
+
+/**
+ * What a pushing device claims about itself: its clock must carry its own id (the merge takes one device's changes
+ * as already in order, so a borrowed id would pass as another device's later edit), and its base no newer than
+ * what it has been sent.
+ */
+export function checkDeviceClaims(actor: { deviceId: string }, device: { pulledUpTo: number }, { mutation: m }: CheckedMutation): void {
+  if (parseHlc(m.hlc)!.deviceId !== actor.deviceId) throw new MutationRefused(`hlc must end with this device's id (${actor.deviceId}).`);
+  if (m.baseVersion > device.pulledUpTo) {
+    throw new MutationRefused(`baseVersion ${m.baseVersion} is newer than anything this device has pulled (${device.pulledUpTo}); pull, then make the change again.`);
+  }
 }
 
 /** A new row must bring every field the registry calls required. */

@@ -18,7 +18,7 @@ import { v7 as uuidv7 } from 'uuid';
 import { AppliedMutation } from './entities/sync-bookkeeping.entity.js';
 import type { SyncRecord } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';
-import { type CheckedMutation, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
+import { type CheckedMutation, checkDeviceClaims, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
 import { type LockRule, RecordLocks } from './record-locks.js';
 import { checkReferences, preloadReferences, referencedIds } from './reference-checks.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
@@ -34,8 +34,23 @@ export interface Actor {
   deviceId: string;
 }
 
+/** The device ids the server's own writers stamp their clocks with; no phone may push as one of them. */
+export const SERVER_DEVICE_IDS: ReadonlySet<string> = new Set(['office', 'server', 'seed', 'mail-outbox']);
+
+/**
+ * What the server knows of a pushing device, against which its claims are checked: the highest change it has
+ * been sent. The office's REST writes and the server's own have no such claims to check.
+ */
+export interface DeviceClaims {
+  pulledUpTo: number;
+}
+
 /** Work a feature does inside the same transaction right after a row is created; see SyncEngine.afterCreate. */
 export type CreateHook = (em: EntityManager, actor: Actor, row: SyncRecord) => Promise<void>;
+
+/** Why a checked mutation is refused, or null; made by a feature's WriteJudge for one batch. */
+export type Verdict = (checked: CheckedMutation, existing: SyncRecord | null) => string | null;
+export type WriteJudge = (em: EntityManager, actor: Actor, scope: TechnicianScope | null, mutations: Mutation[]) => Promise<Verdict>;
 
 /** One value of a field, as a conflict row records it. */
 interface ConflictSide {
@@ -63,6 +78,7 @@ export class SyncEngine {
   private readonly createHooks = new Map<SyncEntityName, CreateHook>();
   private readonly lockRules = new Map<SyncEntityName, LockRule>();
   private readonly runs = new WeakMap<EntityManager, Run>();
+  private readonly writeJudges = new Map<SyncEntityName, WriteJudge>();
 
   constructor(private readonly scopes: ScopeService) {}
 
@@ -74,18 +90,36 @@ export class SyncEngine {
     this.createHooks.set(entity, hook);
   }
 
+  /**
+   * Lets a feature refuse what the registry cannot know is wrong (a photo naming bytes its author may not see).
+   * The judge is made once per batch, from every mutation of the entity, so it reads what it needs in one go.
+   */
+  judgeWrites(entity: SyncEntityName, judge: WriteJudge): void {
+    this.writeJudges.set(entity, judge);
+  }
+
+  private async judgesFor(em: EntityManager, actor: Actor, scope: TechnicianScope | null, mutations: Mutation[]): Promise<Map<SyncEntityName, Verdict>> {
+    const out = new Map<SyncEntityName, Verdict>();
+    for (const [entity, judge] of this.writeJudges) {
+      const mine = mutations.filter((m) => m?.entity === entity && m.set && typeof m.set === 'object');
+      if (mine.length) out.set(entity, await judge(em, actor, scope, mine));
+    }
+    return out;
+  }
+
   /** Lets a feature keep records from changing while its rows say so (an issued certificate, say); see record-locks.ts. */
   lockRule(entity: SyncEntityName, rule: LockRule): void {
     this.lockRules.set(entity, rule);
   }
 
   /** Applies a device's mutations in order inside the caller's transaction. */
-  async applyAll(em: EntityManager, actor: Actor, mutations: Mutation[]): Promise<MutationResult[]> {
+  async applyAll(em: EntityManager, actor: Actor, mutations: Mutation[], device?: DeviceClaims): Promise<MutationResult[]> {
     return this.inBatch(em, async (run) => {
       const scope = actor.role === 'technician' ? await this.scopes.technicianScope(em, actor.organisationId, actor.userId) : null;
       await this.preload(run, actor, mutations);
+      const judges = await this.judgesFor(em, actor, scope, mutations);
       const results: MutationResult[] = [];
-      for (const m of mutations) results.push(await this.applyOnce(run, actor, scope, m));
+      for (const m of mutations) results.push(await this.applyOnce(run, actor, scope, m, device, judges));
       return results;
     });
   }
@@ -150,7 +184,9 @@ export class SyncEngine {
     await preloadReferences(batch.em, actor.organisationId, referencedIds(mutations), batch.known);
   }
 
-  private async applyOnce(run: Run, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
+  private async applyOnce(
+    run: Run, actor: Actor, scope: TechnicianScope | null, m: Mutation, device: DeviceClaims | undefined, judges: Map<SyncEntityName, Verdict>,
+  ): Promise<MutationResult> {
     // An id that could never be stored is refused without being looked up or kept.
     const mutationId = isMutationId(m?.mutationId) ? m.mutationId : '';
     const done = mutationId ? run.batch.applied.get(mutationId) : undefined;
@@ -160,7 +196,9 @@ export class SyncEngine {
     }
     let result: MutationResult;
     try {
-      result = await this.apply(run, actor, scope, checkMutation(m));
+      const checked = checkMutation(m);
+      if (device) checkDeviceClaims(actor, device, checked);
+      result = await this.apply(run, actor, scope, checked, judges);
     } catch (err) {
       if (!(err instanceof MutationRefused)) throw err;
       result = { mutationId, status: 'rejected', error: err.message };
@@ -170,12 +208,16 @@ export class SyncEngine {
     return result;
   }
 
-  private async apply(run: Run, actor: Actor, scope: TechnicianScope | null, checked: CheckedMutation): Promise<MutationResult> {
+  private async apply(run: Run, actor: Actor, scope: TechnicianScope | null, checked: CheckedMutation, judges: Map<SyncEntityName, Verdict>): Promise<MutationResult> {
     const { mutation: m, spec, set, isDelete } = checked;
     const existing = await run.batch.rowOf(m.entity, m.id);
     if (existing && existing.organisationId !== actor.organisationId) throw new MutationRefused(`No ${m.entity} with that id.`);
+    // A base above the row's version claims to have seen changes that never happened, and would win every merge.
+    if (existing && m.baseVersion > existing.version) throw new MutationRefused(`baseVersion ${m.baseVersion} is newer than the ${m.entity} itself (version ${existing.version}).`);
 
     checkTechnicianWrite(scope, checked, existing);
+    const refusal = judges.get(m.entity)?.(checked, existing);
+    if (refusal) throw new MutationRefused(refusal);
     await checkReferences(run.batch.em, actor.organisationId, m.entity, spec, set, run.batch.known);
 
     if (!existing) {

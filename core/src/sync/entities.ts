@@ -39,6 +39,8 @@ export interface FieldSpec {
   readonly required?: boolean;
   /** A technician may set this field (within rows they may write). */
   readonly technician?: boolean;
+  /** Never sent to a technician's phone: the office's business, not what work on site needs (a cost price). */
+  readonly officeOnly?: boolean;
 }
 
 /**
@@ -241,7 +243,7 @@ const REGISTRY = {
     name: 'priceItem', table: 'price_item', technicianWrite: 'none', technicianVisible: true, siteField: null, visitField: null, organisationWide: true,
     fields: {
       name: office(str(), true), unit: office(str(20), true), category: office(str(60)), code: office(str(40)),
-      costMinor: office(int(0, 100_000_000)), sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office(bool),
+      costMinor: { ...office(int(0, 100_000_000)), officeOnly: true }, sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office(bool),
     },
   },
   materialLine: {
@@ -296,6 +298,11 @@ export type RowFieldsOf<E extends SyncEntityName, F = EntityFields<E>> = Flat<
 >;
 /** A row of a synced entity, as both sides hold it: its id and the registry's fields. */
 export type RowOf<E extends SyncEntityName> = Flat<{ id: string } & RowFieldsOf<E>>;
+/** The fields of an entity that a technician's phone never receives. */
+export function officeOnlyFields(entity: SyncEntityName): string[] {
+  return Object.entries(SYNC_ENTITIES[entity].fields).filter(([, f]) => (f as FieldSpec).officeOnly).map(([name]) => name);
+}
+
 /** A row that may not yet carry its optional fields (a row written on a phone, a draft). */
 export type DraftRowOf<E extends SyncEntityName> = Flat<
   { id: string } & Pick<RowFieldsOf<E>, RequiredFieldName<EntityFields<E>> & keyof RowFieldsOf<E>> &
