@@ -197,8 +197,7 @@ export class SyncEngine {
     let result: MutationResult;
     try {
       const checked = checkMutation(m);
-      if (device) checkDeviceClaims(actor, device, checked);
-      result = await this.apply(run, actor, scope, checked, judges);
+      result = await this.apply(run, actor, scope, checked, judges, device);
     } catch (err) {
       if (!(err instanceof MutationRefused)) throw err;
       result = { mutationId, status: 'rejected', error: err.message };
@@ -208,12 +207,15 @@ export class SyncEngine {
     return result;
   }
 
-  private async apply(run: Run, actor: Actor, scope: TechnicianScope | null, checked: CheckedMutation, judges: Map<SyncEntityName, Verdict>): Promise<MutationResult> {
+  private async apply(
+    run: Run, actor: Actor, scope: TechnicianScope | null, checked: CheckedMutation, judges: Map<SyncEntityName, Verdict>, device: DeviceClaims | undefined,
+  ): Promise<MutationResult> {
     const { mutation: m, spec, set, isDelete } = checked;
     const existing = await run.batch.rowOf(m.entity, m.id);
     if (existing && existing.organisationId !== actor.organisationId) throw new MutationRefused(`No ${m.entity} with that id.`);
     // A base above the row's version claims to have seen changes that never happened, and would win every merge.
     if (existing && m.baseVersion > existing.version) throw new MutationRefused(`baseVersion ${m.baseVersion} is newer than the ${m.entity} itself (version ${existing.version}).`);
+    if (device) checkDeviceClaims(actor, device, checked);
 
     checkTechnicianWrite(scope, checked, existing);
     const refusal = judges.get(m.entity)?.(checked, existing);
