@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import type { SyncedRow } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
 import { bearer, noisyJpeg, sha256, upload } from './photo-helpers.js';
 import { DeviceMirror, mutation, push, type Session } from './sync-helpers.js';
@@ -15,7 +16,7 @@ describe('photos by hash stay within the person’s sites', () => {
     const job = officeView.one('job', (r) => r.title === title);
     return officeView.one('visit', (r) => r.jobId === job.id && (r.technicianIds as string[]).includes(who.user.id));
   };
-  const photoRow = (visit: { id: string; siteId: unknown }, hash: string, size: number) =>
+  const photoRow = (visit: SyncedRow, hash: string, size: number) =>
     mutation('photo', uuidv7(), { visitId: visit.id, siteId: visit.siteId as string, caption: 'Board', sha256: hash, sizeBytes: size, uploadState: 'ready' });
   const missing = async (s: Session, hashes: string[]) => (await t.http.post('/api/blobs/missing').set(bearer(s)).send({ hashes }).expect(200)).body.missing;
 

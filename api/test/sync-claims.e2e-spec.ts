@@ -156,4 +156,56 @@ describe('sync: claims a device cannot back up, and what a technician receives',
       expect(phone.find('job', (r) => r.id === enquiry.id)).toHaveLength(0);
     });
   });
+
+  describe('what a record may say', () => {
+    it('refuses a circuit made through sync on one site at a board on another, as the office’s form does', async () => {
+      await catchUp(t, office, 'claims-desk');
+      const orchard = site('Orchard Rise');
+      const otherBoard = officeView.find('board', (r) => r.siteId !== orchard.id)[0]!;
+      const ownBoard = officeView.find('board', (r) => r.siteId === orchard.id)[0]!;
+      const [across, own] = await push(t, office, 'claims-desk', [
+        mutation('circuit', uuidv7(), { siteId: orchard.id, boardId: otherBoard.id, number: '9', description: 'Across sites' }),
+        mutation('circuit', uuidv7(), { siteId: orchard.id, boardId: ownBoard.id, number: '9', description: 'Same site' }),
+      ]);
+      expect(across).toMatchObject({ status: 'rejected', error: 'circuit.boardId points at a board on another site.' });
+      expect(own!.status).toBe('applied');
+      // Moving a circuit's board to another site's is refused too, and over REST as before.
+      const circuit = circuitAt('Orchard Rise');
+      await catchUp(t, office, 'claims-desk');
+      const current = (await t.http.get(`/api/circuits/${circuit.id}`).set('authorization', `Bearer ${office.accessToken}`).expect(200)).body;
+      const [moved] = await push(t, office, 'claims-desk', [mutation('circuit', circuit.id, { boardId: otherBoard.id }, { baseVersion: current.version })]);
+      expect(moved).toMatchObject({ status: 'rejected', error: 'circuit.boardId points at a board on another site.' });
+    });
+
+    it('refuses a name made only of no-break, em and zero-width spaces, through sync and over REST', async () => {
+      const invisible = '\u00a0\u2003\u200b\u200b';
+      const [pushed] = await push(t, office, 'claims-desk', [mutation('customer', uuidv7(), { name: invisible })]);
+      expect(pushed).toMatchObject({ status: 'rejected', error: 'customer.name must not be empty' });
+      const rest = await t.http.post('/api/customers').set('authorization', `Bearer ${office.accessToken}`).send({ name: invisible });
+      expect(rest.status).toBe(400);
+      expect(rest.body.message).toContain('name must not be empty');
+    });
+
+    it('keeps one spelling of text that looks the same, whichever way it was typed', async () => {
+      const id = uuidv7();
+      const [made] = await push(t, office, 'claims-desk', [mutation('customer', id, { name: 'Rene\u0301e Okafor' })]);
+      expect(made!.status).toBe('applied');
+      const rest = await t.http.post('/api/customers').set('authorization', `Bearer ${office.accessToken}`).send({ name: 'Zo\u0308e Hart' }).expect(201);
+      await officeView.pullAll(t, office);
+      expect(officeView.rows.get(`customer:${id}`)!.name).toBe('Ren\u00e9e Okafor');
+      expect(rest.body.name).toBe('Z\u00f6e Hart');
+    });
+
+    it('refuses an e-mail address that mixes alphabets to look like someone else’s', async () => {
+      const admin = await signIn(t, 'admin@larkfield.example');
+      const lookalike = await t.http.post('/api/users').set('authorization', `Bearer ${admin.accessToken}`)
+        .send({ email: '\u0430dmin@larkfield.example', name: 'Admin', role: 'admin', password: 'long-enough-pass' });
+      expect(lookalike.status).toBe(400);
+      expect(lookalike.body.message).toContain('email mixes letters of different alphabets; type the address in one');
+      const blank = await t.http.post('/api/users').set('authorization', `Bearer ${admin.accessToken}`)
+        .send({ email: 'blank.name@larkfield.example', name: '\u200b\u00a0', role: 'technician', password: 'long-enough-pass' });
+      expect(blank.status).toBe(400);
+      expect(blank.body.message).toContain('name must not be empty');
+    });
+  });
 });

@@ -7,6 +7,7 @@ import {
   parseHlc,
   isUuid,
   type Mutation,
+  normaliseText,
   SYNC_ENTITIES,
   type SyncEntityName,
 } from '@wiretrail/core';
@@ -58,7 +59,9 @@ export function checkMutation(mutation: Mutation): CheckedMutation {
     const problem = fieldError(mutation.entity, field, value);
     if (problem) throw new MutationRefused(problem);
   }
-  return { mutation, spec, set, isDelete };
+  // One spelling of what looks the same, as the office's forms keep it, so that searches find it either way.
+  const normalised = Object.fromEntries(Object.entries(set).map(([f, v]) => [f, typeof v === 'string' ? normaliseText(v) : v])) as Record<string, FieldValue>;
+  return { mutation, spec, set: normalised, isDelete };
 }
 
 /**

@@ -181,7 +181,7 @@ export class SyncEngine {
     const existing: Array<[SyncEntityName, SyncRecord]> = [];
     for (const [entity, ids] of rowIds) for (const row of await batch.load(entity, [...ids])) existing.push([entity, row]);
     await locks.preload(existing, SYNC_ENTITIES);
-    await preloadReferences(batch.em, actor.organisationId, referencedIds(mutations), batch.known);
+    await preloadReferences(batch.em, actor.organisationId, referencedIds(mutations), batch.known, batch.sites);
   }
 
   private async applyOnce(
@@ -220,7 +220,8 @@ export class SyncEngine {
     checkTechnicianWrite(scope, checked, existing);
     const refusal = judges.get(m.entity)?.(checked, existing);
     if (refusal) throw new MutationRefused(refusal);
-    await checkReferences(run.batch.em, actor.organisationId, m.entity, spec, set, run.batch.known);
+    const rowSite = spec.siteField === 'siteId' ? ((set.siteId ?? existing?.siteId ?? null) as string | null) : spec.siteField === 'id' ? m.id : null;
+    await checkReferences(run.batch.em, actor.organisationId, m.entity, spec, set, run.batch.known, run.batch.sites, rowSite);
 
     if (!existing) {
       if (isDelete) return { mutationId: m.mutationId, status: 'applied', version: 0, fieldVersions: {} };
@@ -232,7 +233,7 @@ export class SyncEngine {
     return this.update(run, actor, checked, existing);
   }
 
-  private async create(run: Run, actor: Actor, { mutation: m, set }: CheckedMutation): Promise<MutationResult> {
+  private async create(run: Run, actor: Actor, { mutation: m, spec, set }: CheckedMutation): Promise<MutationResult> {
     const { batch, locks } = run;
     checkNewRow(m.entity, set);
     const seq = await batch.nextSeq();
@@ -244,6 +245,7 @@ export class SyncEngine {
     };
     batch.insert(m.entity, row);
     batch.recordChange(m.entity, row, seq);
+    if (spec.siteField === 'siteId') batch.sites.set(`${m.entity}:${m.id}`, (row.siteId as string | null) ?? null);
     const hook = this.createHooks.get(m.entity);
     if (hook) {
       // A feature's hook reads and writes the database: give it the row, and everything before it, written.
@@ -284,6 +286,7 @@ export class SyncEngine {
     const next = { ...changes, fieldMeta, version: seq, updatedById: actor.userId, ...(revived ? { deletedAt: null } : {}) };
     await batch.write(m.entity, row, next);
     locks.changed(m.entity);
+    if (typeof changes.siteId === 'string') batch.sites.set(`${m.entity}:${row.id}`, changes.siteId);
     if (revived) batch.known.add(`${m.entity}:${row.id}`);
     batch.recordChange(m.entity, row, seq);
     return {

@@ -2,6 +2,7 @@
  * The synced entities of Wiretrail and their fields, shared by the server (validation, merge policy, scope)
  * and the app (local tables). Field names are the product's camelCase names.
  */
+import { isBlankText } from '../text/typed-text.js';
 import type { RecordedWiremap } from '../cabling/cable-test.js';
 
 export const SYNC_ENTITY_NAMES = [
@@ -330,7 +331,8 @@ export function fieldError(entity: SyncEntityName, field: string, value: unknown
       if (value.length > t.max) return `${name} must be at most ${t.max} characters`;
       // No database keeps it faithfully (PostgreSQL refuses it in text), and nobody types it.
       if (value.includes('\u0000')) return `${name} must not contain the NUL character (U+0000)`;
-      if (spec.required && value.trim() === '') return `${name} must not be empty`;
+      // A name of no-break, em and zero-width spaces is as empty as no name.
+      if (spec.required && isBlankText(value)) return `${name} must not be empty`;
       return null;
     case 'number':
     case 'integer':
