@@ -6,6 +6,7 @@ import { VisitRecords1796218834250 } from './1796218834250-VisitRecords.js';
 import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 import { Billing1796223023465 } from './1796223023465-Billing.js';
+import { DocumentRevisions1796230000000 } from './1796230000000-DocumentRevisions.js';
 import { PhotoSenders1796430000000 } from './1796430000000-PhotoSenders.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
@@ -18,5 +19,6 @@ export const MIGRATIONS = [
   Documents1796219621037,
   PartsAndPrices1796221754005,
   Billing1796223023465,
+  DocumentRevisions1796230000000,
   PhotoSenders1796430000000,
 ];
