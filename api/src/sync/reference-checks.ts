@@ -61,7 +61,8 @@ export async function checkReferences(
   for (const [field, value] of Object.entries(set)) {
     const type = spec.fields[field]!.type;
     if (value === null || (type.kind !== 'ref' && type.kind !== 'refs')) continue;
-    const all = type.kind === 'ref' ? [value as string] : (value as string[]);
+    // Checked by fieldError before this: a ref is an id, refs a list of ids.
+    const all = typeof value === 'string' ? [value] : Array.isArray(value) ? value.filter((id): id is string => typeof id === 'string') : [];
     await checkSameSite(em, organisationId, entity, field, type.entity, all, sites, rowSite);
     const ids = all.filter((id) => !known.has(`${type.entity}:${id}`));
     if (ids.length === 0) continue;

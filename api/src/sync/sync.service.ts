@@ -2,6 +2,7 @@ import { ForbiddenException, Injectable, PayloadTooLargeException, Unprocessable
 import {
   type Change,
   clockProblem,
+  type Conflict,
   MAX_CLOCK_AHEAD_MS,
   MAX_PULL_LIMIT,
   MAX_PUSH_MUTATIONS,
@@ -27,25 +28,47 @@ import { SERVER_DEVICE_IDS, SyncEngine, versionsOf } from './sync-engine.service
 const HIDDEN = new Set(['organisationId', 'fieldMeta', 'deletedAt']);
 const NONE: ReadonlySet<string> = new Set();
 
-/** The row as a device sees it: its fields, version and per-field versions, none of the server's bookkeeping. */
-export function toSyncedRow(row: SyncRecord): SyncedRow {
-  return syncedRowWithout(row, NONE);
+/** The row as a device pulls it: its fields, version and per-field versions, none of the server's bookkeeping. */
+export function toPulledRow(row: SyncRecord): SyncedRow {
+  return pulledRowWithout(row, NONE);
 }
 
 /** The row less the fields this device may not receive (a technician's phone gets no cost price). */
-function syncedRowWithout(row: SyncRecord, withheld: ReadonlySet<string>): SyncedRow {
-  const out: Record<string, unknown> = {};
+function pulledRowWithout(row: SyncRecord, withheld: ReadonlySet<string>): SyncedRow {
+  const versions = versionsOf(row.fieldMeta ?? {});
+  for (const f of withheld) delete versions[f];
+  const out: SyncedRow = { id: row.id, version: row.version, fieldVersions: versions };
   for (const k in row) {
-    if (!Object.hasOwn(row, k) || HIDDEN.has(k) || withheld.has(k)) continue;
+    if (!Object.hasOwn(row, k) || HIDDEN.has(k) || withheld.has(k) || k in out) continue;
     const v = row[k];
     out[k] = v instanceof Date ? v.toISOString() : v;
   }
-  out.id = row.id;
-  out.version = row.version;
-  const versions = versionsOf(row.fieldMeta ?? {});
-  for (const f of withheld) delete versions[f];
-  out.fieldVersions = versions;
-  return out as SyncedRow;
+  return out;
+}
+
+/** A record as the office reads it: the registry's fields with the row's version, times as ISO text. */
+export type SyncedReply<E extends Exclude<SyncEntityName, 'conflict'>> = Omit<SyncRecord<E>, 'organisationId' | 'fieldMeta' | 'deletedAt' | 'createdAt' | 'updatedAt'> & {
+  createdAt: string;
+  updatedAt: string;
+  fieldVersions: Record<string, number>;
+};
+
+/** The row as the office reads it, typed from the registry so that each reply is checked against its contract. */
+export function toSyncedRow<E extends Exclude<SyncEntityName, 'conflict'>>(row: SyncRecord<E>): SyncedReply<E> {
+  const { organisationId: _organisation, fieldMeta, deletedAt: _deleted, createdAt, updatedAt, ...fields } = row;
+  return { ...fields, createdAt: createdAt.toISOString(), updatedAt: updatedAt.toISOString(), fieldVersions: versionsOf(fieldMeta ?? {}) };
+}
+
+/** A conflict as the office reads it: its resolution time as ISO text. */
+export function toConflictReply(row: SyncRecord<'conflict'>): Conflict {
+  const { organisationId: _organisation, fieldMeta, deletedAt: _deleted, createdAt, updatedAt, resolvedAt, ...fields } = row;
+  return {
+    ...fields,
+    resolvedAt: resolvedAt?.toISOString() ?? null,
+    createdAt: createdAt.toISOString(),
+    updatedAt: updatedAt.toISOString(),
+    fieldVersions: versionsOf(fieldMeta ?? {}),
+  };
 }
 
 /** Per entity, what a technician's phone never receives. */
@@ -136,7 +159,8 @@ export class SyncService {
       const hasMore = page.length === take;
       const next = page.length ? page[page.length - 1]!.seq : checkpoint;
 
-      const extra: SyncChange[] = [];
+      // Catch-up entries beside the page; an eviction is sent whatever its number.
+      const extra: Array<SyncChange & { evict?: boolean }> = [];
       if (scope && checkpoint > 0) {
         const then = new Set(sitesThen ?? []);
         const gained = sitesNow!.filter((s) => !then.has(s));
@@ -155,7 +179,7 @@ export class SyncService {
         }
       }
 
-      const changes = await this.materialise(em, [...extra.filter((c) => c.seq <= next || (c as { evict?: boolean }).evict), ...page], scope, checkpoint);
+      const changes = await this.materialise(em, [...extra.filter((c) => c.seq <= next || c.evict), ...page], scope, checkpoint);
       await this.rememberDevice(em, user, deviceId, checkpoint, sitesThen, next, sitesNow);
       return { changes, checkpoint: next, hasMore };
     });
@@ -165,7 +189,7 @@ export class SyncService {
     const byEntity = new Map<SyncEntityName, Set<string>>();
     for (const c of entries) {
       if (c.deleted) continue;
-      const entity = c.entity as SyncEntityName;
+      const entity = c.entity;
       let ids = byEntity.get(entity);
       if (!ids) byEntity.set(entity, (ids = new Set()));
       ids.add(c.rowId);
@@ -183,11 +207,11 @@ export class SyncService {
       const key = `${c.entity}:${c.rowId}`;
       if (seen.has(key)) continue;
       seen.add(key);
-      const entity = c.entity as SyncEntityName;
+      const entity = c.entity;
       const row = c.deleted || (scope && !this.technicianSees(scope, entity, c.rowId)) ? null : (rows.get(key) ?? null);
       const deleted = !row || row.deletedAt !== null;
       const withheld = scope ? WITHHELD_FROM_TECHNICIANS.get(entity) : undefined;
-      out.push({ entity, id: c.rowId, version: row?.version ?? c.seq, deleted, row: deleted ? null : syncedRowWithout(row!, withheld ?? NONE) });
+      out.push({ entity, id: c.rowId, version: row?.version ?? c.seq, deleted, row: deleted ? null : pulledRowWithout(row!, withheld ?? NONE) });
     }
     return out.reverse();
   }
