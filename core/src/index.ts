@@ -31,3 +31,7 @@ export * from './money/aged-debt.js';
 export * from './money/time-on-site.js';
 export * from './money/invoice-standing.js';
 export * from './money/invoices.js';
+export * from './contracts/conflicts.js';
+export * from './contracts/shared-job.js';
+export * from './contracts/records.js';
+export * from './contracts/jobs.js';

@@ -4,7 +4,7 @@ import type { JobFile } from './job-file.js';
 export function theWork(file: JobFile): string {
   const { job, site } = file;
   const where = [site.address, site.postcode].filter(Boolean).join(', ');
-  return `the work at ${where}${job.reference ? ` (our job ${job.reference as string}, “${job.title as string}”)` : ''}`;
+  return `the work at ${where}${job.reference ? ` (our job ${job.reference}, “${job.title}”)` : ''}`;
 }
 
 /**
