@@ -1,5 +1,6 @@
 import { PostgresSchema1796424218561 } from './1796424218561-PostgresSchema.js';
 import { PostgresBilling1796424218562 } from './1796424218562-PostgresBilling.js';
+import { PostgresCertificateJudgment1796430000000 } from './1796430000000-PostgresCertificateJudgment.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
-export const POSTGRES_MIGRATIONS = [PostgresSchema1796424218561, PostgresBilling1796424218562];
+export const POSTGRES_MIGRATIONS = [PostgresSchema1796424218561, PostgresBilling1796424218562, PostgresCertificateJudgment1796430000000];
