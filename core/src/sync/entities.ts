@@ -116,11 +116,12 @@ export const FAULT_PROTECTION_METHODS = ['overcurrent-device', 'rcd'] as const;
  * A departure from the standard as the sign-off records it (BS 7671 Regs 120.3, 133.1.3, 133.5): the regulation
  * departed from, what is done instead, and why that gives no less safety. It never stands in for a test result.
  */
-export interface DepartureEntry {
+// A type, not an interface, so that it is a plain JSON value a mutation may carry.
+export type DepartureEntry = {
   readonly regulation: string;
   readonly instead: string;
   readonly noLessSafe: string;
-}
+};
 export const CABLE_MEDIA = ['Cat5e', 'Cat6', 'Cat6A', 'coax', 'speaker', 'HDMI', 'fibre', 'other'] as const;
 export const CABLE_STATUSES = ['unidentified', 'traced', 'terminated', 'tested'] as const;
 export const TRACE_METHODS = ['tone-and-probe', 'continuity', 'tdr', 'visual'] as const;
