@@ -13,7 +13,7 @@ export function theWork(file: JobFile): string {
  */
 export function coveringLetter(file: JobFile, to: string, body: string[]): string {
   const { organisation: org, customer } = file;
-  const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name as string},` : 'Hello,';
+  const greeting = customer?.email && customer.email.toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name},` : 'Hello,';
   return [
     greeting,
     '',

@@ -36,8 +36,8 @@ export type CircuitDetails = z.infer<typeof circuitDetailsSchema>;
  */
 export function circuitDetailsOf(c: CircuitRow | null, visitId?: string): CircuitDetails {
   return {
-    kind: (c?.kind as CircuitDetails['kind']) ?? 'ring',
-    deviceType: (c?.deviceType as CircuitDetails['deviceType']) ?? '',
+    kind: c?.kind ?? 'ring',
+    deviceType: c?.deviceType ?? '',
     deviceRatingA: readingText(c?.deviceRatingA),
     rcdRatingMa: readingText(c?.rcdRatingMa),
     rcdType: c?.rcdType ?? '',
