@@ -16,7 +16,7 @@ afterEach(tidyUp);
 describe('a circuit’s details', () => {
   it('records the method of fault protection and a circuit installed new on this visit, as the technician chooses them', async () => {
     show(paths.visitCircuit.href(ids.visit, ids.circuit));
-    const form = await screen.findByRole('form', { name: 'Circuit details' });
+    const form = await screen.findByRole('form', { name: 'Circuit details' }, { timeout: 15_000 });
     // Nothing is assumed: the method starts unrecorded, and the circuit starts as an existing one.
     expect((within(form).getByLabelText('Fault protection') as HTMLSelectElement).value).toBe('');
     fireEvent.change(within(form).getByLabelText('Fault protection'), { target: { value: 'rcd' } });
@@ -29,7 +29,7 @@ describe('a circuit’s details', () => {
   it('keeps the mark of a circuit installed new on another visit', async () => {
     await db.circuit.update(ids.circuit, { newOnVisitId: ids.otherVisit });
     show(paths.visitCircuit.href(ids.visit, ids.circuit));
-    const form = await screen.findByRole('form', { name: 'Circuit details' });
+    const form = await screen.findByRole('form', { name: 'Circuit details' }, { timeout: 15_000 });
     expect((within(form).getByLabelText('Existing or new') as HTMLSelectElement).value).toBe('existing');
     fireEvent.change(within(form).getByLabelText('Fault protection'), { target: { value: 'overcurrent-device' } });
     fireEvent.click(within(form).getByRole('button', { name: 'Save circuit details' }));
@@ -39,7 +39,7 @@ describe('a circuit’s details', () => {
 
   it('marks the circuit’s board as replaced on this visit', async () => {
     show(paths.visitCircuit.href(ids.visit, ids.circuit));
-    const form = await screen.findByRole('form', { name: 'Circuit details' });
+    const form = await screen.findByRole('form', { name: 'Circuit details' }, { timeout: 15_000 });
     fireEvent.click(within(form).getByLabelText(/Consumer unit was replaced on this visit/));
     await waitFor(async () => expect((await db.board.get(ids.board))!.replacedOnVisitId).toBe(ids.visit));
   });

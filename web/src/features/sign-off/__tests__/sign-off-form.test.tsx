@@ -21,7 +21,7 @@ describe('sign-off', () => {
     await db.circuit.put({ id: '01900000-0000-7000-8000-000000000031', siteId: ids.site, boardId: ids.board, number: '4', description: 'Cooker', kind: 'radial', ...base });
     await db.pointChange.put({ id: '01900000-0000-7000-8000-000000000032', visitId: ids.visit, siteId: ids.site, circuitId: '01900000-0000-7000-8000-000000000031', action: 'add', ...base });
     show(paths.visitSignOff.href(ids.visit));
-    const list = await screen.findByRole('list', { name: 'Fails and missing readings' });
+    const list = await screen.findByRole('list', { name: 'Fails and missing readings' }, { timeout: 15_000 });
     // 1.25 Ω against 1.10 Ω for a B32 (BS 7671:2018+A2:2022 Table 41.3, Appendix 3).
     expect(within(list).getByText('Fail: Circuit 1 (Sockets, ground floor): Earth fault loop impedance Zs')).toBeTruthy();
     expect(within(list).getByText('Missing: Circuit 1 (Sockets, ground floor): Polarity')).toBeTruthy();
@@ -88,7 +88,7 @@ describe('departures on the sign-off', () => {
     await db.testResult.put({ id: '01900000-0000-7000-8000-000000000030', visitId: ids.visit, siteId: ids.site, circuitId: ids.circuit, zsOhm: 1.25, ...base });
     await db.visit.update(ids.visit, { departureEntries: [{ regulation: '411.3.2', instead: 'Left as found', noLessSafe: 'The RCD trips fast' }] });
     show(paths.visitSignOff.href(ids.visit));
-    const list = await screen.findByRole('list', { name: 'Fails and missing readings' });
+    const list = await screen.findByRole('list', { name: 'Fails and missing readings' }, { timeout: 15_000 });
     expect(within(list).getByText('Fail: Circuit 1 (Sockets, ground floor): Earth fault loop impedance Zs')).toBeTruthy();
     const form = screen.getByRole('form', { name: 'Sign off' });
     expect((within(form).getByLabelText('Regulation departed from') as HTMLInputElement).value).toBe('411.3.2');
