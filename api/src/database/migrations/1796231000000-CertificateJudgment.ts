@@ -5,8 +5,8 @@ import type { MigrationInterface, QueryRunner } from "typeorm";
  * new on, the visit a board was fitted as a replacement on, and a sign-off's structured departures. Added in place,
  * so columns other changes add to these tables are kept.
  */
-export class CertificateJudgment1796230000000 implements MigrationInterface {
-    name = 'CertificateJudgment1796230000000'
+export class CertificateJudgment1796231000000 implements MigrationInterface {
+    name = 'CertificateJudgment1796231000000'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`ALTER TABLE "circuit" ADD COLUMN "faultProtection" varchar(40)`);

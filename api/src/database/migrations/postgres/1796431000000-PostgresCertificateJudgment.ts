@@ -1,8 +1,8 @@
 import type { MigrationInterface, QueryRunner } from "typeorm";
 
-/** The PostgreSQL side of ../1796230000000-CertificateJudgment.ts. */
-export class PostgresCertificateJudgment1796430000000 implements MigrationInterface {
-    name = 'PostgresCertificateJudgment1796430000000'
+/** The PostgreSQL side of ../1796231000000-CertificateJudgment.ts. */
+export class PostgresCertificateJudgment1796431000000 implements MigrationInterface {
+    name = 'PostgresCertificateJudgment1796431000000'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`ALTER TABLE "circuit" ADD COLUMN "faultProtection" character varying(40)`);
