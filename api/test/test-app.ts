@@ -28,7 +28,9 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
     NODE_ENV: 'test',
     ...(await databaseEnvFor(dir)),
     JWT_SECRET: 'test-secret-that-is-long-enough-for-hs256-signing',
+    // Suites that sign in and refresh hundreds of times from one address; sign-in-limits.e2e-spec.ts tests the real limits.
     SIGN_IN_RATE_LIMIT: '1000',
+    REFRESH_RATE_LIMIT: '1000',
     ...env,
   });
   const { AppModule } = await import('../src/app.module.js');
