@@ -1,4 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { Test } from '@nestjs/testing';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -37,7 +38,7 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
   const { configureApp } = await import('../src/app.setup.js');
   const { seedDemoData } = await import('../src/database/seed.js');
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
-  const app = configureApp(moduleRef.createNestApplication({ logger: ['error'], rawBody: true }));
+  const app = configureApp(moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'], rawBody: true }));
   await app.init();
   const dataSource = app.get(DataSource);
   await dataSource.runMigrations();

@@ -21,7 +21,8 @@ export const appConfig = registerAs('app', () => ({
 }));
 
 export const authConfig = registerAs('auth', () => ({
-  jwtSecret: process.env.JWT_SECRET as string,
+  // Checked at boot (env.validation.ts): at least 32 characters.
+  jwtSecret: process.env.JWT_SECRET ?? '',
   accessTokenTtlSeconds: Number(process.env.ACCESS_TOKEN_TTL_SECONDS ?? 900),
   refreshTokenTtlDays: Number(process.env.REFRESH_TOKEN_TTL_DAYS ?? 30),
 }));
