@@ -28,10 +28,11 @@ describe('the content of a minor works certificate', () => {
     const res = await issue(orchard.id).expect(201);
     const text = await pdfText((await downloadPdf(t, office, res.body.id)).bytes);
     for (const expected of [
-      // The declaration, in our words, and the amendment the work was done to.
+      // The declaration, in our words, and the amendment in force on the completion date: the demo's visit is signed
+      // in 2026, under A3:2024 (from 31 July 2024, M).
       'Declaration',
       'certifies that the work described on this certificate does not impair the safety of the existing installation',
-      'designed, constructed, inspected and tested in accordance with BS 7671:2018 as amended to A2:2022',
+      'designed, constructed, inspected and tested in accordance with BS 7671:2018+A3:2024, in force on',
       'complies with BS 7671 except for the departures recorded on this certificate',
       'WORK DONE AND TESTED BY Aled Pryce', 'POSITION Electrician and qualifying supervisor',
       // The site, as carried from its records.
@@ -44,7 +45,8 @@ describe('the content of a minor works certificate', () => {
       'Permitted exceptions (Reg 411.3.3) None.',
       // The circuit.
       'Circuit details: Circuit 2 (Sockets, first floor)',
-      'METHOD OF FAULT PROTECTION Automatic disconnection of supply',
+      // As the circuit records it: by its protective device (Tables 41.2 to 41.4), not inferred from the device.
+      'METHOD OF FAULT PROTECTION Automatic disconnection by the protective device',
       'PROTECTIVE DEVICE Type B circuit-breaker, 32 A, BS EN 60898-1',
       'RCD 30 mA type A, rated 63 A, BS EN 61008-1',
       'AFDD None fitted',

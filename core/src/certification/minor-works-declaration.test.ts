@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_RULE_SET } from '../rules/uk-bs7671-2018-a2-2022.js';
+import { ruleSetInForce } from '../rules/rules-in-force.js';
 import { amendedTo, editionParts, minorWorksDeclaration } from './minor-works-declaration.js';
 
 describe('the declaration a minor works certificate carries', () => {
@@ -11,10 +11,12 @@ describe('the declaration a minor works certificate carries', () => {
     expect(amendedTo('BS 7671:2018')).toBe('BS 7671:2018');
   });
 
-  it('says, as the model form in BS 7671:2018+A2:2022 Appendix 6 asks, that the work does not impair the existing installation and was done to the standard as amended', () => {
-    const text = minorWorksDeclaration(DEFAULT_RULE_SET.edition);
+  it('says, as the model form in BS 7671:2018+A2:2022 Appendix 6 asks, that the work does not impair the existing installation and was done to the amendment in force on its completion date', () => {
+    // Work completed on 5 December 2026 falls under A3:2024 (in force from 31 July 2024).
+    const text = minorWorksDeclaration(ruleSetInForce('2026-12-05')!.edition, '5 December 2026');
     expect(text).toContain('does not impair the safety of the existing installation');
-    expect(text).toContain('designed, constructed, inspected and tested in accordance with BS 7671:2018 as amended to A2:2022');
+    expect(text).toContain('designed, constructed, inspected and tested in accordance with BS 7671:2018+A3:2024, in force on 5 December 2026');
+    expect(text).not.toContain('as amended to');
     expect(text).toContain('complies with BS 7671 except for the departures recorded on this certificate');
     // The verdicts' own caution belongs to the app, not to what the signer declares.
     expect(text).not.toMatch(/aid|substitute/);

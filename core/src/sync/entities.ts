@@ -2,6 +2,7 @@
  * The synced entities of Wiretrail and their fields, shared by the server (validation, merge policy, scope)
  * and the app (local tables). Field names are the product's camelCase names.
  */
+import { isBlankText } from '../text/typed-text.js';
 import type { RecordedWiremap } from '../cabling/cable-test.js';
 
 export const SYNC_ENTITY_NAMES = [
@@ -40,6 +41,8 @@ export interface FieldSpec {
   readonly required?: boolean;
   /** A technician may set this field (within rows they may write). */
   readonly technician?: boolean;
+  /** Never sent to a technician's phone: the office's business, not what work on site needs (a cost price). */
+  readonly officeOnly?: boolean;
 }
 
 /**
@@ -107,6 +110,21 @@ export const JOB_STATUSES = ['enquiry', 'booked', 'on-site', 'paperwork', 'done'
 export const VISIT_STATUSES = ['planned', 'on-site', 'finished', 'cancelled'] as const;
 export const CIRCUIT_KINDS = ['ring', 'radial', 'lighting', 'other'] as const;
 export const PROTECTIVE_DEVICES = ['B', 'C', 'D', 'BS 88-2', 'BS 88-3', 'BS 3036', 'BS 1362'] as const;
+/**
+ * How a circuit is protected against electric shock under fault: by its overcurrent protective device (Zs held to
+ * Tables 41.2 to 41.4) or by an RCD (Table 41.5). The technician records it; nothing infers it from the earthing.
+ */
+export const FAULT_PROTECTION_METHODS = ['overcurrent-device', 'rcd'] as const;
+/**
+ * A departure from the standard as the sign-off records it (BS 7671 Regs 120.3, 133.1.3, 133.5): the regulation
+ * departed from, what is done instead, and why that gives no less safety. It never stands in for a test result.
+ */
+// A type, not an interface, so that it is a plain JSON value a mutation may carry.
+export type DepartureEntry = {
+  readonly regulation: string;
+  readonly instead: string;
+  readonly noLessSafe: string;
+};
 export const CABLE_MEDIA = ['Cat5e', 'Cat6', 'Cat6A', 'coax', 'speaker', 'HDMI', 'fibre', 'other'] as const;
 export const CABLE_STATUSES = ['unidentified', 'traced', 'terminated', 'tested'] as const;
 export const TRACE_METHODS = ['tone-and-probe', 'continuity', 'tdr', 'visual'] as const;
@@ -158,6 +176,8 @@ const REGISTRY = {
       siteId: seen(ref('site'), true), areaId: seen(ref('area')), name: seen(str(), true), description: seen(str(500)),
       // Earth fault loop impedance measured at the board (Zdb).
       zdbOhm: seen(num(0, 1000)),
+      // The visit on which this board was fitted as a replacement: that work needs an installation certificate.
+      replacedOnVisitId: seen(ref('visit')),
     },
   },
   circuit: {
@@ -170,6 +190,9 @@ const REGISTRY = {
       // RCD's rated current, an AFDD where one is fitted, how the cable is installed and what it serves.
       deviceStandard: seen(str(40)), rcdStandard: seen(str(40)), rcdRatedCurrentA: seen(num(1, 1000)), afddStandard: seen(str(40)),
       referenceMethod: seen(str(20)), pointsServed: seen(int(0, 1000)), maxDisconnectionS: seen(num(0.01, 10)),
+      faultProtection: seen(oneOf(...FAULT_PROTECTION_METHODS)),
+      // The visit on which this circuit was installed new: that work needs an installation certificate.
+      newOnVisitId: seen(ref('visit')),
     },
   },
   job: {
@@ -188,7 +211,10 @@ const REGISTRY = {
       // Shown once per visit before work on a circuit; kept as evidence that the cautions were read.
       cautionsReadAt: seen(when),
       // Sign-off on site: what was done, what was seen, where the work departs from the standard, and who signed.
-      workDescription: seen(text()), observations: seen(text()), departures: seen(text()),
+      workDescription: seen(text()), observations: seen(text()),
+      // Free text from before departures were structured: kept and shown, but it waives nothing.
+      departures: seen(text()),
+      departureEntries: seen(jsonOf<readonly DepartureEntry[]>()),
       signedByName: seen(str()), signedAt: seen(when), signatureSvg: seen(str(60_000)),
       // The certificate's declaration names the signer's position; the existing installation is commented on,
       // and a permitted exception (no fault protection where the regulations allow it) names its risk assessment.
@@ -273,7 +299,7 @@ const REGISTRY = {
     name: 'priceItem', table: 'price_item', technicianWrite: 'none', technicianVisible: true, siteField: null, visitField: null, organisationWide: true,
     fields: {
       name: office(str(), true), unit: office(str(20), true), category: office(str(60)), code: office(str(40)),
-      costMinor: office(int(0, 100_000_000)), sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office(bool),
+      costMinor: { ...office(int(0, 100_000_000)), officeOnly: true }, sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office(bool),
     },
   },
   materialLine: {
@@ -328,6 +354,11 @@ export type RowFieldsOf<E extends SyncEntityName, F = EntityFields<E>> = Flat<
 >;
 /** A row of a synced entity, as both sides hold it: its id and the registry's fields. */
 export type RowOf<E extends SyncEntityName> = Flat<{ id: string } & RowFieldsOf<E>>;
+/** The fields of an entity that a technician's phone never receives. */
+export function officeOnlyFields(entity: SyncEntityName): string[] {
+  return Object.entries(SYNC_ENTITIES[entity].fields).filter(([, f]) => (f as FieldSpec).officeOnly).map(([name]) => name);
+}
+
 /** A row that may not yet carry its optional fields (a row written on a phone, a draft). */
 export type DraftRowOf<E extends SyncEntityName> = Flat<
   { id: string } & Pick<RowFieldsOf<E>, RequiredFieldName<EntityFields<E>> & keyof RowFieldsOf<E>> &
@@ -354,7 +385,8 @@ export function fieldError(entity: SyncEntityName, field: string, value: unknown
       if (value.length > t.max) return `${name} must be at most ${t.max} characters`;
       // No database keeps it faithfully (PostgreSQL refuses it in text), and nobody types it.
       if (value.includes('\u0000')) return `${name} must not contain the NUL character (U+0000)`;
-      if (spec.required && value.trim() === '') return `${name} must not be empty`;
+      // A name of no-break, em and zero-width spaces is as empty as no name.
+      if (spec.required && isBlankText(value)) return `${name} must not be empty`;
       return null;
     case 'number':
     case 'integer':

@@ -15,4 +15,7 @@ export class CreateBoardDto {
 
   @NumberField(0, 1000, { description: 'earth fault loop impedance at the board Zdb, ohms' })
   zdbOhm?: number | null;
+
+  @IdField('visit', { description: 'the visit on which the board was fitted as a replacement (it then needs an installation certificate)' })
+  replacedOnVisitId?: string | null;
 }

@@ -7,6 +7,8 @@ import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 import { Billing1796223023465 } from './1796223023465-Billing.js';
 import { DocumentRevisions1796230000000 } from './1796230000000-DocumentRevisions.js';
+import { CertificateJudgment1796231000000 } from './1796231000000-CertificateJudgment.js';
+import { PhotoSenders1796430000000 } from './1796430000000-PhotoSenders.js';
 import { CertificateContent1796471619935 } from './1796471619935-CertificateContent.js';
 import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefunds.js';
 
@@ -21,6 +23,8 @@ export const MIGRATIONS = [
   PartsAndPrices1796221754005,
   Billing1796223023465,
   DocumentRevisions1796230000000,
+  CertificateJudgment1796231000000,
+  PhotoSenders1796430000000,
   CertificateContent1796471619935,
   AttemptsAndRefunds1796481200000,
 ];

@@ -47,10 +47,12 @@ function rcdWords(c: Certified['circuit']): string {
   );
 }
 
-/** Fault protection is by automatic disconnection wherever a protective device is recorded: every circuit Wiretrail certifies. */
-function faultProtectionWords(c: Certified['circuit']): string {
-  return text(c.deviceType) ? 'Automatic disconnection of supply' : 'Not recorded';
-}
+/** The circuit's recorded method of fault protection: automatic disconnection by its protective device or by its RCD. */
+const FAULT_PROTECTION_WORDS: Record<string, string> = {
+  'overcurrent-device': 'Automatic disconnection by the protective device',
+  rcd: 'Automatic disconnection by the RCD',
+};
+const faultProtectionWords = (c: Certified['circuit']): string => FAULT_PROTECTION_WORDS[text(c.faultProtection)] ?? 'Not recorded';
 
 const BONDING_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present', none: 'No such service' };
 const EARTHING_CONDUCTOR_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present' };
@@ -104,9 +106,11 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   layout.heading('The work');
   layout.paragraph(described.length ? described.join('\n\n') : joined([file.job.title, file.job.description], '. '));
   const days = [...new Set(visits.map((v) => dateWords(v.actualEnd ?? v.signedAt ?? v.plannedStart, tz)).filter(Boolean))];
+  const completedOn = dateWords(content.completedOn, tz) || content.completedOn;
   layout.fields([
     ['Carried out on', days.join(', ')],
-    ['Standard it was done to', rules.edition],
+    // The amendment in force on the completion date, by its published name.
+    ['Standard it was done to', `${rules.edition}, in force on ${completedOn}`],
   ]);
 
   const texts = (field: 'observations' | 'departures' | 'existingInstallationComments' | 'permittedExceptions' | 'riskAssessmentRef') => visits.map((v) => text(v[field])).filter(Boolean);
@@ -172,9 +176,6 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
       'regular',
       INK.muted,
     );
-    if (c.departureRecorded && (c.assessment.missing.length || c.assessment.failing.length)) {
-      layout.paragraph('Issued with the readings below as they stand, because the sign-off records a departure from the standard (see Departures).', 'medium', INK.fail);
-    }
     layout.table(
       [
         { header: 'Test', width: 2.2 },
@@ -187,9 +188,20 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   }
 
   layout.heading('Observations');
-  layout.paragraph(texts('observations').join('\n\n') || 'None recorded.');
+  // Free text typed where departures used to go is kept as an observation: it departs from nothing.
+  layout.paragraph([...texts('observations'), ...texts('departures')].join('\n\n') || 'None recorded.');
   layout.heading('Departures from the standard');
-  layout.paragraph(texts('departures').join('\n\n') || 'None recorded.');
+  if (content.departures.length === 0) layout.paragraph('None.');
+  else {
+    layout.table(
+      [
+        { header: 'Regulation departed from', width: 1 },
+        { header: 'What is done instead', width: 2 },
+        { header: 'Why it gives no less safety', width: 2 },
+      ],
+      content.departures.map((d) => ({ cells: [{ text: d.regulation, weight: 'medium' }, d.instead, d.noLessSafe] })),
+    );
+  }
   layout.heading(`Permitted exceptions (${PERMITTED_EXCEPTIONS_REG})`);
   const exceptions = texts('permittedExceptions');
   layout.paragraph(exceptions.join('\n\n') || 'None.');
@@ -202,7 +214,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   // The declaration and the signature beneath it stay on one page.
   layout.ensure(220);
   layout.heading('Declaration');
-  layout.paragraph(minorWorksDeclaration(rules.edition), 'medium');
+  layout.paragraph(minorWorksDeclaration(rules.edition, completedOn), 'medium');
   layout.ensure(120);
   const top = layout.y;
   const half = layout.width / 2 - 10;
@@ -228,7 +240,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   doc.x = layout.left;
 
   // The verdicts' caution belongs to the app's screens; a signed certificate is the signer's declaration.
-  layout.paragraph(`Limits applied are those of ${rules.name} (Wiretrail rule set ${rules.id}).`, 'regular', INK.muted, 7.5);
+  layout.paragraph(`Limits applied are those of ${rules.edition}.`, 'regular', INK.muted, 7.5);
   issuedBy(layout, issue, file);
   return layout.finish();
 }

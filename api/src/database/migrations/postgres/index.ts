@@ -1,6 +1,8 @@
 import { PostgresSchema1796424218561 } from './1796424218561-PostgresSchema.js';
 import { PostgresBilling1796424218562 } from './1796424218562-PostgresBilling.js';
 import { PostgresDocumentRevisions1796430000000 } from './1796430000000-PostgresDocumentRevisions.js';
+import { PostgresPhotoSenders1796430000001 } from './1796430000001-PostgresPhotoSenders.js';
+import { PostgresCertificateJudgment1796431000000 } from './1796431000000-PostgresCertificateJudgment.js';
 import { PostgresCertificateContent1796471619935 } from './1796471619935-PostgresCertificateContent.js';
 import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-PostgresAttemptsAndRefunds.js';
 
@@ -9,6 +11,8 @@ export const POSTGRES_MIGRATIONS = [
   PostgresSchema1796424218561,
   PostgresBilling1796424218562,
   PostgresDocumentRevisions1796430000000,
+  PostgresPhotoSenders1796430000001,
+  PostgresCertificateJudgment1796431000000,
   PostgresCertificateContent1796471619935,
   PostgresAttemptsAndRefunds1796481200001,
 ];

@@ -3,13 +3,15 @@ import Accordion from '@mui/material/Accordion';
 import AccordionDetails from '@mui/material/AccordionDetails';
 import AccordionSummary from '@mui/material/AccordionSummary';
 import Button from '@mui/material/Button';
+import Checkbox from '@mui/material/Checkbox';
+import FormControlLabel from '@mui/material/FormControlLabel';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import ExpandMore from '@mui/icons-material/ExpandMore';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { circuitKindWords } from '@wiretrail/core';
-import type { CircuitRow } from '@/lib/db';
+import type { BoardRow, CircuitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
 import {
   CertificateDetailFields,
@@ -19,6 +21,7 @@ import {
   circuitDetailFields,
   circuitDetailsOf,
   circuitDetailsSchema,
+  FAULT_PROTECTION_WORDS,
 } from './circuit-fields';
 
 export function describeCircuit(c: CircuitRow): string {
@@ -27,6 +30,8 @@ export function describeCircuit(c: CircuitRow): string {
     c.deviceType ? `${/^[BCD]$/.test(c.deviceType) ? `type ${c.deviceType}` : c.deviceType} ${c.deviceRatingA ?? '?'}\u00a0A` : 'device not recorded',
     c.rcdRatingMa ? `${c.rcdRatingMa} mA RCD${c.rcdType ? ` (${c.rcdType})` : ''}` : 'no RCD recorded',
     c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2}/${c.cpcCsaMm2}\u00a0mm²` : 'sizes not recorded',
+    c.faultProtection ? `fault protection ${FAULT_PROTECTION_WORDS[c.faultProtection]?.split(' (')[0]?.toLowerCase()}` : 'fault protection not recorded',
+    c.newOnVisitId ? 'new circuit' : null,
   ]
     .filter(Boolean)
     .join(' · ');
@@ -40,11 +45,26 @@ const OFFERED: readonly Offered[] = ['deviceStandard', 'rcdStandard', 'rcdRatedC
  * certificate states the rest. Where the certificate's details are not recorded, the standard values are offered and
  * follow the device, the RCD and the site's earthing until the technician types their own.
  */
-export function CircuitDetailsForm({ circuit, locked, earthing }: { circuit: CircuitRow; locked: boolean; earthing?: string | null }) {
-  const incomplete = !circuit.deviceType || circuit.deviceRatingA == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null;
+export function CircuitDetailsForm({
+  circuit,
+  board,
+  visitId,
+  locked,
+  earthing,
+}: {
+  circuit: CircuitRow;
+  board?: BoardRow;
+  visitId: string;
+  locked: boolean;
+  earthing?: string | null;
+}) {
+  const incomplete = !circuit.deviceType || circuit.deviceRatingA == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null || !circuit.faultProtection;
   const [open, setOpen] = useState(incomplete);
   const [note, setNote] = useState('');
-  const { register, handleSubmit, formState, control, setValue, getValues } = useForm<CircuitDetails>({ resolver: zodResolver(circuitDetailsSchema), defaultValues: circuitDetailsOf(circuit, earthing) });
+  const { register, handleSubmit, formState, control, setValue, getValues } = useForm<CircuitDetails>({
+    resolver: zodResolver(circuitDetailsSchema),
+    defaultValues: circuitDetailsOf(circuit, visitId, earthing),
+  });
   const [kind, deviceType, deviceRatingA, rcdRatingMa, rcdType, rcdStandard, deviceStandard, rcdRatedCurrentA, maxDisconnectionS] = useWatch({
     control,
     name: ['kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'rcdStandard', 'deviceStandard', 'rcdRatedCurrentA', 'maxDisconnectionS'],
@@ -64,9 +84,18 @@ export function CircuitDetailsForm({ circuit, locked, earthing }: { circuit: Cir
   }, [offers, getValues, setValue]);
   const current: Record<Offered, string> = { deviceStandard, rcdStandard, rcdRatedCurrentA, maxDisconnectionS };
   const offered = new Set<keyof CircuitDetails>(OFFERED.filter((f) => circuit[f] == null && current[f] !== '' && current[f] === offers[f]));
+  async function markBoard(replaced: boolean) {
+    if (!board) return;
+    try {
+      await saveRecord('board', board.id, { replacedOnVisitId: replaced ? visitId : null });
+      setNote(replaced ? `${board.name} recorded as replaced on this visit.` : `${board.name} no longer recorded as replaced.`);
+    } catch (err) {
+      setNote((err as Error).message);
+    }
+  }
   async function save(v: CircuitDetails) {
     try {
-      await saveRecord('circuit', circuit.id, circuitDetailFields(v));
+      await saveRecord('circuit', circuit.id, circuitDetailFields(v, visitId, circuit));
       setNote('Circuit details saved on this phone.');
       setOpen(false);
     } catch (err) {
@@ -87,6 +116,12 @@ export function CircuitDetailsForm({ circuit, locked, earthing }: { circuit: Cir
         <Stack component="form" aria-label="Circuit details" noValidate onSubmit={handleSubmit(save)} spacing={1.5}>
           <fieldset disabled={locked} style={{ border: 0, padding: 0, margin: 0, minWidth: 0, display: 'grid', gap: 12 }}>
             <CircuitDetailFields register={register} control={control} errors={formState.errors} />
+            {board && (
+              <FormControlLabel
+                control={<Checkbox checked={board.replacedOnVisitId === visitId} onChange={(e) => void markBoard(e.target.checked)} />}
+                label={`${board.name} was replaced on this visit (a consumer unit replacement needs an electrical installation certificate)`}
+              />
+            )}
             <Typography variant="body2" color="text.secondary">
               For the certificate
             </Typography>

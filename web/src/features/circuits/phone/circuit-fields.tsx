@@ -6,6 +6,7 @@ import {
   CIRCUIT_KINDS,
   DEVICE_STANDARD_CHOICES,
   deviceStandardFor,
+  FAULT_PROTECTION_METHODS,
   type FieldValue,
   PROTECTIVE_DEVICE_WORDS,
   PROTECTIVE_DEVICES,
@@ -20,6 +21,13 @@ import type { CircuitRow } from '@/lib/db';
 import { choicesOf, NativeChoice } from '@/components/forms/phone-inputs';
 import { readingField, readingText, usableReading } from '@/lib/readings';
 
+export const FAULT_PROTECTION_WORDS: Record<string, string> = {
+  'overcurrent-device': 'By the protective device (Tables 41.2 to 41.4)',
+  rcd: 'By the RCD (Table 41.5)',
+};
+const INSTALLED = ['existing', 'new'] as const;
+const INSTALLED_WORDS: Record<string, string> = { existing: 'An existing circuit, altered or added to', new: 'A new circuit, installed on this visit' };
+
 /** The circuit's own details that its tests depend on. */
 export const circuitDetailsSchema = z.object({
   kind: z.enum(CIRCUIT_KINDS),
@@ -29,6 +37,8 @@ export const circuitDetailsSchema = z.object({
   rcdType: z.string().max(20, 'The RCD type must be at most 20 characters.'),
   liveCsaMm2: readingField('circuit', 'liveCsaMm2', 'The live conductor size', 'mm²'),
   cpcCsaMm2: readingField('circuit', 'cpcCsaMm2', 'The cpc size', 'mm²'),
+  faultProtection: z.enum(['', ...FAULT_PROTECTION_METHODS]),
+  installed: z.enum(INSTALLED),
   // What the certificate states beyond what the tests need.
   deviceStandard: z.string().max(40, 'The device standard must be at most 40 characters.'),
   rcdStandard: z.string().max(40, 'The RCD standard must be at most 40 characters.'),
@@ -59,9 +69,10 @@ export function certificateOffers(c: Pick<CircuitDetails, 'kind' | 'deviceType' 
 
 /**
  * What the form starts from: the circuit as recorded, or blanks for a new one (a guess would be recorded as fact),
- * with the standard values offered where the certificate's details are not recorded yet.
+ * with the standard values offered where the certificate's details are not recorded yet. "New" is said of the visit
+ * the form is open on: a circuit installed new on an earlier job is existing now.
  */
-export function circuitDetailsOf(c: CircuitRow | null, earthing?: string | null): CircuitDetails {
+export function circuitDetailsOf(c: CircuitRow | null, visitId?: string, earthing?: string | null): CircuitDetails {
   const recorded: CircuitDetails = {
     kind: c?.kind ?? 'ring',
     deviceType: c?.deviceType ?? '',
@@ -70,6 +81,8 @@ export function circuitDetailsOf(c: CircuitRow | null, earthing?: string | null)
     rcdType: c?.rcdType ?? '',
     liveCsaMm2: readingText(c?.liveCsaMm2),
     cpcCsaMm2: readingText(c?.cpcCsaMm2),
+    faultProtection: (c?.faultProtection as CircuitDetails['faultProtection']) ?? '',
+    installed: visitId && c?.newOnVisitId === visitId ? 'new' : 'existing',
     deviceStandard: c?.deviceStandard ?? '',
     rcdStandard: c?.rcdStandard ?? '',
     rcdRatedCurrentA: readingText(c?.rcdRatedCurrentA),
@@ -89,8 +102,13 @@ export function circuitDetailsOf(c: CircuitRow | null, earthing?: string | null)
   };
 }
 
-export function circuitDetailFields(v: CircuitDetails): Record<string, FieldValue> {
+/** The fields to write; the mark of a circuit installed new on another visit is left as it is. */
+export function circuitDetailFields(v: CircuitDetails, visitId?: string, current?: CircuitRow | null): Record<string, FieldValue> {
+  const markedHere = !!visitId && current?.newOnVisitId === visitId;
+  const newOnVisitId = v.installed === 'new' && visitId ? visitId : markedHere ? null : (current?.newOnVisitId ?? null);
   return {
+    faultProtection: v.faultProtection || null,
+    newOnVisitId,
     kind: v.kind,
     deviceType: v.deviceType || null,
     deviceRatingA: usableReading(v.deviceRatingA),
@@ -131,6 +149,19 @@ export function CircuitDetailFields({ register, control, errors }: { register: U
         <TextField label="Live size (mm²)" {...register('liveCsaMm2')} error={!!errors.liveCsaMm2} helperText={errors.liveCsaMm2?.message ?? ' '} slotProps={num} />
         <TextField label="Cpc size (mm²)" {...register('cpcCsaMm2')} error={!!errors.cpcCsaMm2} helperText={errors.cpcCsaMm2?.message ?? ' '} slotProps={num} />
       </Stack>
+      <NativeChoice
+        label="Fault protection"
+        {...register('faultProtection')}
+        emptyLabel="Not recorded"
+        options={choicesOf(FAULT_PROTECTION_METHODS, FAULT_PROTECTION_WORDS)}
+        helperText="How this circuit disconnects under an earth fault: it decides which table Zs is held to. On a TT supply it is usually the RCD."
+      />
+      <NativeChoice
+        label="Existing or new"
+        {...register('installed')}
+        options={choicesOf(INSTALLED, INSTALLED_WORDS)}
+        helperText="A new circuit is certified with an electrical installation certificate, not a minor works certificate."
+      />
     </>
   );
 }

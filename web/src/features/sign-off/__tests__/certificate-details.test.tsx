@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
-import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
@@ -8,6 +8,7 @@ import { addRing, at, base, ids, resetPhone, show, tidyUp } from '@/test/visit-f
 import { signOffSchema } from '../components/sign-off-form';
 
 beforeEach(async () => {
+  localStorage.clear();
   await resetPhone();
   await addRing();
 });
@@ -53,7 +54,8 @@ describe('what the certificate states, at sign-off', () => {
     const form = await screen.findByRole('form', { name: 'Sign off' });
     const declaration = within(form).getByRole('note', { name: 'Declaration' });
     expect(declaration.textContent).toContain('does not impair the safety of the existing installation');
-    expect(declaration.textContent).toContain('in accordance with BS 7671:2018 as amended to A2:2022');
+    // The amendment in force on the day it is signed: A3:2024 from 31 July 2024 (M).
+    expect(declaration.textContent).toContain('in accordance with BS 7671:2018+A3:2024, in force on');
     await waitFor(() => expect((within(form).getByLabelText('Position') as HTMLInputElement).value).toBe('Qualifying supervisor'));
 
     type(form, 'Position', 'Electrician');
@@ -65,10 +67,28 @@ describe('what the certificate states, at sign-off', () => {
     expect((await db.visit.get(ids.visit))!.status).toBe('planned');
   });
 
+  it('keeps the position, comments, exception and risk assessment in the draft when the screen is left and opened again', async () => {
+    show(paths.visitSignOff.href(ids.visit));
+    let form = await screen.findByRole('form', { name: 'Sign off' });
+    type(form, 'Position', 'Approved electrician');
+    type(form, /Comments on the existing installation \(Reg 644\.1\.2\)/, 'No main bonding to the gas meter: recommended.');
+    type(form, /Permitted exceptions \(Reg 411\.3\.3\)/, 'Loft ceiling bracket out of reach, not earthed.');
+    type(form, 'Risk assessment reference', 'RA-14');
+    cleanup();
+
+    show(paths.visitSignOff.href(ids.visit));
+    form = await screen.findByRole('form', { name: 'Sign off' });
+    const value = (label: string | RegExp) => (within(form).getByLabelText(label) as HTMLInputElement | HTMLTextAreaElement).value;
+    expect(value('Position')).toBe('Approved electrician');
+    expect(value(/Comments on the existing installation/)).toBe('No main bonding to the gas meter: recommended.');
+    expect(value(/Permitted exceptions/)).toBe('Loft ceiling bracket out of reach, not earthed.');
+    expect(value('Risk assessment reference')).toBe('RA-14');
+  });
+
   it('refuses an exception with no risk assessment, and keeps what the certificate needs when all is given', () => {
     const svg = '<svg xmlns="http://www.w3.org/2000/svg"/>';
     const given = {
-      arrivedAt: '09:05', leftAt: '12:30', workDescription: 'Moved a socket', observations: '', departures: '', signedByName: 'Sam', signedByPosition: 'Electrician',
+      arrivedAt: '09:05', leftAt: '12:30', workDescription: 'Moved a socket', observations: '', departureEntries: [], signedByName: 'Sam', signedByPosition: 'Electrician',
       existingInstallationComments: 'No cpc at the hall light.', permittedExceptions: 'Loft bracket out of reach.', riskAssessmentRef: '', signatureSvg: svg,
     };
     expect(signOffSchema.safeParse(given).error?.issues[0]).toMatchObject({ path: ['riskAssessmentRef'], message: 'Name the risk assessment behind the exception.' });

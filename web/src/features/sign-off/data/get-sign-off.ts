@@ -43,7 +43,7 @@ export async function getSignOff(visit: VisitRow, signerName = ''): Promise<Sign
     db.board.where('siteId').equals(visit.siteId).toArray(),
     db.visit.filter((v) => !!v.signedByPosition && v.signedByName === signerName).toArray(),
   ]);
-  const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing });
+  const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing, boards: siteBoards });
   // A visit of data cabling alone has no circuit to certify: whether the job has one is the office's question.
   const problems: Problem[] = certificate.findings.flatMap((f) =>
     f.kind === 'not-signed' || f.kind === 'nothing-tested' ? [] : [{ kind: f.kind, what: f.what, detail: f.detail }],

@@ -46,7 +46,7 @@ export function Component() {
             )}
             {visit.departures && (
               <Typography variant="body2">
-                <strong>Departures:</strong> {visit.departures}
+                <strong>Noted:</strong> {visit.departures}
               </Typography>
             )}
             {visit.existingInstallationComments && (
@@ -60,6 +60,11 @@ export function Component() {
                 {visit.riskAssessmentRef ? ` (risk assessment ${visit.riskAssessmentRef})` : ''}
               </Typography>
             )}
+            {signOff.certificate.departures.map((d, i) => (
+              <Typography variant="body2" key={i}>
+                <strong>Departure from Reg {d.regulation}:</strong> {d.instead} No less safe because: {d.noLessSafe}
+              </Typography>
+            ))}
           </Stack>
         </Paper>
       ) : (
