@@ -36,3 +36,4 @@ export * from './electrical/rcd-required.js';
 export * from './electrical/ring-spurs.js';
 export * from './electrical/cable-sizing.js';
 export * from './electrical/adiabatic-cpc.js';
+export * from './certification/checks-before-work.js';

@@ -127,3 +127,20 @@ export const RING_SPUR_LIMITS: SpurLimits = {
   spursNotMoreThanPoints: `${OSG} (unfused spurs no more than the socket-outlets and stationary equipment connected directly in the ring)`,
   noSpurFromSpur: `common trade practice, following ${BS7671} Appendix 15 (spurs are taken from the ring, never from another spur), no published wording`,
 };
+
+/**
+ * A circuit-breaker's instantaneous (magnetic) trip: at or above this multiple of In it opens within 0.1 s,
+ * the time used in the adiabatic check. Below it the time must be read from the device's own curve.
+ */
+export const BREAKER_INSTANT_TRIP = {
+  multiples: { B: 5, C: 10, D: 20 },
+  timeS: 0.1,
+  unit: 's',
+  source: 'BS EN 60898-1 instantaneous tripping (type B up to 5 In, C up to 10 In, D up to 20 In); 0.1 s as read from the curves in BS 7671:2018+A2:2022 Appendix 3, common trade practice',
+} as const;
+
+/** A BS 1363 socket-outlet, the rating the RCD requirement is judged at for socket-outlet points. */
+export const SOCKET_OUTLET_RATING_A = { value: 13, unit: 'A', source: 'BS 1363 socket-outlets (13 A)' } as const;
+
+/** Ring design loading at the furthest point, used as the design current of a ring's cable. */
+export const RING_DESIGN_CURRENT_A = { value: 20, unit: 'A', source: `${OSG} (20 A at the furthest point)` } as const;

@@ -6,6 +6,7 @@ import { VisitRecords1796218834250 } from './1796218834250-VisitRecords.js';
 import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 import { Billing1796223023465 } from './1796223023465-Billing.js';
+import { ChecksBeforeWork1796230000000 } from './1796230000000-ChecksBeforeWork.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -17,4 +18,5 @@ export const MIGRATIONS = [
   Documents1796219621037,
   PartsAndPrices1796221754005,
   Billing1796223023465,
+  ChecksBeforeWork1796230000000,
 ];
