@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
-import { assessCircuitTest, circuitUnderTest, DEFAULT_RULE_SET, readingsOf } from '@wiretrail/core';
-import type { EntityManager } from 'typeorm';
+import { assessCircuitTest, checksBeforeWork, circuitUnderTest, DEFAULT_RULE_SET, readingsOf } from '@wiretrail/core';
+import { type EntityManager, In } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { circuitLabel, rowsById } from '../records/annotations.js';
 import { type Listing, type OfficeRow, ofJobVisits, RecordsService } from '../records/records.service.js';
@@ -10,10 +10,17 @@ import type { ListTestResultsQueryDto } from './dto/list-test-results-query.dto.
 import { inTurn } from '../common/in-turn.js';
 
 const CIRCUIT_FIELDS = [
-  'boardId', 'number', 'description', 'kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'liveCsaMm2', 'cpcCsaMm2',
+  'boardId', 'number', 'description', 'kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'liveCsaMm2', 'cpcCsaMm2', 'lengthM',
 ] as const;
 
 const pick = <K extends string>(row: SyncRecord, fields: readonly K[]) => Object.fromEntries(fields.map((f) => [f, row[f] ?? null])) as Record<K, unknown>;
+
+/** The point changes of these results' visits on these results' circuits, in the order they were recorded. */
+async function pointChangesOf(em: EntityManager, organisationId: string, rows: SyncRecord[]): Promise<SyncRecord[]> {
+  const visitIds = [...new Set(rows.map((r) => r.visitId).filter((v): v is string => typeof v === 'string'))];
+  if (!visitIds.length) return [];
+  return em.getRepository<SyncRecord>('pointChange').find({ where: { organisationId, visitId: In(visitIds) }, order: { id: 'ASC' } });
+}
 
 @Injectable()
 export class TestResultsService extends RecordsService<ListTestResultsQueryDto> {
@@ -31,12 +38,14 @@ export class TestResultsService extends RecordsService<ListTestResultsQueryDto> 
   /**
    * Each result with its circuit and the server's own verdicts, worked out from the readings, the circuit as it is
    * recorded now and the site's earthing. The phone's verdicts stay in `verdicts`; these are the ones documents use.
+   * Beside them, the checks before the work of each point change on that circuit in the same visit.
    */
   protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
     const org = user.organisationId;
-    const [circuits, sites] = await inTurn(
+    const [circuits, sites, points] = await inTurn(
       () => rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
       () => rowsById(em, org, 'site', rows.map((r) => r.siteId)),
+      () => pointChangesOf(em, org, rows),
     );
     const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
     return rows.map((r) => {
@@ -45,7 +54,10 @@ export class TestResultsService extends RecordsService<ListTestResultsQueryDto> 
       const circuit = c ? { id: c.id, ...pick(c, CIRCUIT_FIELDS), boardName: (board?.name as string | undefined) ?? null, label: circuitLabel(c, board) } : null;
       const earthing = (sites.get(r.siteId as string)?.earthing as string | null | undefined) ?? null;
       const assessment = assessCircuitTest({ circuit: c ? circuitUnderTest(c) : {}, readings: readingsOf(r), earthing }, DEFAULT_RULE_SET);
-      return { ...toSyncedRow(r), circuit, earthing, assessment };
+      const beforeWork = points
+        .filter((p) => p.visitId === r.visitId && p.circuitId === r.circuitId)
+        .map((p) => ({ pointChangeId: p.id, accessoryKind: (p.accessoryKind as string | null | undefined) ?? null, ...checksBeforeWork({ point: p, circuit: c, site: sites.get(r.siteId as string) }, DEFAULT_RULE_SET) }));
+      return { ...toSyncedRow(r), circuit, earthing, assessment, beforeWork };
     });
   }
 }
