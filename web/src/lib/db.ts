@@ -83,6 +83,7 @@ export interface CircuitRow extends LocalRow {
   rcdType?: string | null;
   liveCsaMm2?: number | null;
   cpcCsaMm2?: number | null;
+  lengthM?: number | null;
 }
 export interface CableRunRow extends LocalRow {
   siteId: string;
@@ -129,6 +130,19 @@ export interface PointChangeRow extends LocalRow {
   beforeRnOhm?: number | null;
   beforeR2Ohm?: number | null;
   concealedRoute?: unknown;
+  supplies?: string | null;
+  location?: string | null;
+  dwelling?: boolean | null;
+  joinR1R2Ohm?: number | null;
+  ringPoints?: number | null;
+  ringUnfusedSpurs?: number | null;
+  spurFeeds?: number | null;
+  spurFromSpur?: boolean | null;
+  designCurrentA?: number | null;
+  installationMethod?: string | null;
+  ambientFactor?: number | null;
+  groupingFactor?: number | null;
+  insulationFactor?: number | null;
 }
 export interface TestResultRow extends LocalRow {
   visitId: string;

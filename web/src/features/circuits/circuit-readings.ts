@@ -22,7 +22,7 @@ export interface TypedReadings {
 export const NUMERIC_READINGS = ['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x'] as const;
 
 export function circuitUnderTest(c: CircuitRow): CircuitUnderTest {
-  return { kind: c.kind, deviceType: c.deviceType, deviceRatingA: c.deviceRatingA, rcdRatingMa: c.rcdRatingMa, rcdType: c.rcdType, liveCsaMm2: c.liveCsaMm2, cpcCsaMm2: c.cpcCsaMm2 };
+  return { kind: c.kind, deviceType: c.deviceType, deviceRatingA: c.deviceRatingA, rcdRatingMa: c.rcdRatingMa, rcdType: c.rcdType, liveCsaMm2: c.liveCsaMm2, cpcCsaMm2: c.cpcCsaMm2, lengthM: c.lengthM };
 }
 
 export function fromTyped(t: TypedReadings): CircuitReadings {
