@@ -12,8 +12,10 @@ async function bootstrap(): Promise<void> {
   const port = config.getOrThrow<number>('app.port');
   const host = config.getOrThrow<string>('app.host');
   await app.listen(port, host);
-  const bound = app.getHttpServer().address() as { port: number } | null;
-  new Logger('Wiretrail').log(`API listening on http://${host}:${bound?.port ?? port}/api`);
+  // A string address is a pipe or socket path, which has no port of its own.
+  const bound: unknown = app.getHttpServer().address();
+  const boundPort = typeof bound === 'object' && bound !== null && 'port' in bound ? bound.port : port;
+  new Logger('Wiretrail').log(`API listening on http://${host}:${String(boundPort)}/api`);
 }
 
 bootstrap().catch((err) => {

@@ -37,3 +37,7 @@ export * from './electrical/ring-spurs.js';
 export * from './electrical/cable-sizing.js';
 export * from './electrical/adiabatic-cpc.js';
 export * from './certification/checks-before-work.js';
+export * from './contracts/conflicts.js';
+export * from './contracts/shared-job.js';
+export * from './contracts/records.js';
+export * from './contracts/jobs.js';

@@ -3,7 +3,7 @@ import { type Listing, RecordsService } from '../records/records.service.js';
 import type { ListAreasQueryDto } from './dto/list-areas-query.dto.js';
 
 @Injectable()
-export class AreasService extends RecordsService<ListAreasQueryDto> {
+export class AreasService extends RecordsService<ListAreasQueryDto, 'area'> {
   protected readonly entity = 'area';
 
   protected listing(q: ListAreasQueryDto): Listing {

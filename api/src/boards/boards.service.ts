@@ -3,7 +3,7 @@ import { type Listing, RecordsService, type SameSiteRef } from '../records/recor
 import type { ListBoardsQueryDto } from './dto/list-boards-query.dto.js';
 
 @Injectable()
-export class BoardsService extends RecordsService<ListBoardsQueryDto> {
+export class BoardsService extends RecordsService<ListBoardsQueryDto, 'board'> {
   protected readonly entity = 'board';
   protected readonly sameSite: SameSiteRef[] = [{ field: 'areaId', entity: 'area' }];
 

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { assessCableRun, type CableRunTestInput } from '@wiretrail/core';
+import { assessCableRun } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { nameOf, rowsById } from '../records/annotations.js';
@@ -9,7 +9,7 @@ import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListCableRunsQueryDto } from './dto/list-cable-runs-query.dto.js';
 
 @Injectable()
-export class CableRunsService extends RecordsService<ListCableRunsQueryDto> {
+export class CableRunsService extends RecordsService<ListCableRunsQueryDto, 'cableRun'> {
   protected readonly entity = 'cableRun';
 
   protected listing(q: ListCableRunsQueryDto): Listing {
@@ -23,19 +23,13 @@ export class CableRunsService extends RecordsService<ListCableRunsQueryDto> {
   }
 
   /** Each run with its ends' area names and the server's own judgement of its test (the phone's is in `verdict`). */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'cableRun'>[]): Promise<OfficeRow[]> {
     const areas = await rowsById(em, user.organisationId, 'area', rows.flatMap((r) => [r.endAAreaId, r.endBAreaId]));
     return rows.map((r) => ({
       ...toSyncedRow(r),
-      endAAreaName: nameOf(areas.get(r.endAAreaId as string)),
-      endBAreaName: nameOf(areas.get(r.endBAreaId as string)),
-      assessment: assessCableRun({
-        medium: r.medium,
-        scheme: r.scheme,
-        wiremap: r.wiremap,
-        lengthM: r.lengthM,
-        linkKind: r.linkKind,
-      } as CableRunTestInput),
+      endAAreaName: nameOf(areas.get(r.endAAreaId)),
+      endBAreaName: nameOf(areas.get(r.endBAreaId)),
+      assessment: assessCableRun({ medium: r.medium, scheme: r.scheme, wiremap: r.wiremap, lengthM: r.lengthM, linkKind: r.linkKind }),
     }));
   }
 }

@@ -11,7 +11,7 @@ import { accountsOf, todayFor } from '../invoices/invoice-accounts.js';
 import { PaymentsService } from '../invoices/payments.service.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { syncRepository } from '../sync/entities/sync-schemas.js';
 import { CardCheckout } from './entities/card-checkout.entity.js';
 import { PaymentEvent } from './entities/payment-event.entity.js';
 import { PAYMENT_PROVIDER } from './payment-provider.js';
@@ -62,8 +62,8 @@ export class CardPaymentsService {
       const invoice = await em.findOneBy(Invoice, { id: invoiceId, organisationId, jobId, kind: 'invoice', status: 'issued' });
       if (!invoice) throw new NotFoundException('No such invoice on this job.');
       const account = (await accountsOf(em, [invoice], await todayFor(em, organisationId))).get(invoice.id)!;
-      const job = await em.getRepository<SyncRecord>('job').findOneByOrFail({ id: jobId });
-      const customer = await em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId }, withDeleted: true });
+      const job = await syncRepository(em, 'job').findOneByOrFail({ id: jobId });
+      const customer = await syncRepository(em, 'customer').findOne({ where: { id: job.customerId, organisationId }, withDeleted: true });
       return {
         invoice,
         owed: account.owedMinor,

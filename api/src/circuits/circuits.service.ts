@@ -3,7 +3,7 @@ import { type Listing, RecordsService, type SameSiteRef } from '../records/recor
 import type { ListCircuitsQueryDto } from './dto/list-circuits-query.dto.js';
 
 @Injectable()
-export class CircuitsService extends RecordsService<ListCircuitsQueryDto> {
+export class CircuitsService extends RecordsService<ListCircuitsQueryDto, 'circuit'> {
   protected readonly entity = 'circuit';
   protected readonly sameSite: SameSiteRef[] = [{ field: 'boardId', entity: 'board' }];
 

@@ -2,7 +2,14 @@ import { BadRequestException } from '@nestjs/common';
 
 /** The fields a PATCH body actually sent, so that absent ones never overwrite stored values. */
 export function definedFields<T extends object>(dto: T): Partial<T> {
-  return Object.fromEntries(Object.entries(dto).filter(([, v]) => v !== undefined)) as Partial<T>;
+  const sent: Partial<T> = { ...dto };
+  for (const [field, value] of Object.entries(sent)) if (value === undefined) Reflect.deleteProperty(sent, field);
+  return sent;
+}
+
+/** The same, for a body whose fields are checked field by field downstream (by the field registry). */
+export function sentFields(dto: object): Record<string, unknown> {
+  return Object.fromEntries(Object.entries(dto).filter(([, v]) => v !== undefined));
 }
 
 /**

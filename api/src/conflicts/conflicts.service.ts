@@ -4,7 +4,7 @@ import { type EntityManager, In, IsNull, Not } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListConflictsQueryDto } from './dto/list-conflicts-query.dto.js';
@@ -18,16 +18,19 @@ export class ConflictsService {
   ) {}
 
   async list(user: AuthUser, q: ListConflictsQueryDto) {
+    // Conflicts are only ever about synced entities: any other name has none.
+    const entity = q.entity ? (isSyncEntity(q.entity) ? q.entity : null) : undefined;
+    if (entity === null) return { items: [], total: 0, page: q.page, pageSize: q.pageSize };
     const [rows, total] = await this.queue.read(async (em) => {
       const rowIds = q.jobId ? await this.rowsOfJob(em, user.organisationId, q.jobId) : null;
       const where = {
         organisationId: user.organisationId,
         resolvedAt: q.resolved ? Not(IsNull()) : IsNull(),
-        ...(q.entity ? { entity: q.entity } : {}),
+        ...(entity ? { entity } : {}),
         ...(q.rowId ? { rowId: q.rowId } : {}),
         ...(rowIds ? { rowId: In(q.rowId ? rowIds.filter((id) => id === q.rowId) : rowIds) } : {}),
       };
-      return em.getRepository<SyncRecord>('conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
+      return syncRepository(em, 'conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
     });
     return { items: rows.map(toSyncedRow), total, page: q.page, pageSize: q.pageSize };
   }
@@ -50,7 +53,7 @@ export class ConflictsService {
   }
 
   async findOne(user: AuthUser, id: string) {
-    const row = await this.queue.read((em) => em.getRepository<SyncRecord>('conflict').findOneBy({ id, organisationId: user.organisationId }));
+    const row = await this.queue.read((em) => syncRepository(em, 'conflict').findOneBy({ id, organisationId: user.organisationId }));
     if (!row) throw new NotFoundException('No such conflict.');
     return toSyncedRow(row);
   }
@@ -61,18 +64,17 @@ export class ConflictsService {
    */
   async resolve(user: AuthUser, id: string, dto: ResolveConflictDto) {
     return this.queue.run(async (em) => {
-      const conflict = await em.getRepository<SyncRecord>('conflict').findOneBy({ id, organisationId: user.organisationId });
+      const conflict = await syncRepository(em, 'conflict').findOneBy({ id, organisationId: user.organisationId });
       if (!conflict) throw new NotFoundException('No such conflict.');
       if (conflict.resolvedAt) throw new ConflictException('This conflict was already settled.');
-      const entity = conflict.entity as string;
-      const field = conflict.field as string;
+      const { entity, field } = conflict;
       const actor = { userId: user.id, organisationId: user.organisationId, role: user.role, deviceId: 'office' };
       const wantsChange = dto.choice !== 'kept';
       if (wantsChange && conflict.reason === 'locked-by-document') {
         throw new ConflictException('This record is behind an issued document; keep the recorded value, or issue a new document to change it.');
       }
       if (wantsChange && isSyncEntity(entity)) {
-        const row = await em.getRepository<SyncRecord>(entity).findOne({ where: { id: conflict.rowId as string }, withDeleted: true });
+        const row = await syncRepository(em, entity).findOne({ where: { id: conflict.rowId }, withDeleted: true });
         if (!row) throw new NotFoundException('The record this conflict is about no longer exists.');
         const hlc = formatHlc({ ms: Date.now(), counter: 0, deviceId: 'office' });
         const base = { mutationId: uuidv7(), entity, id: row.id, baseVersion: row.version, hlc };
@@ -96,7 +98,7 @@ export class ConflictsService {
           resolution: { choice: dto.choice, ...(dto.choice === 'value' ? { value: dto.value } : {}) },
         },
       }]);
-      return toSyncedRow((await em.getRepository<SyncRecord>('conflict').findOneByOrFail({ id }))!);
+      return toSyncedRow((await syncRepository(em, 'conflict').findOneByOrFail({ id }))!);
     });
   }
 }

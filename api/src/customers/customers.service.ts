@@ -2,12 +2,12 @@ import { Injectable } from '@nestjs/common';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { type Listing, type OfficeRow, RecordsService } from '../records/records.service.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListCustomersQueryDto } from './dto/list-customers-query.dto.js';
 
 @Injectable()
-export class CustomersService extends RecordsService<ListCustomersQueryDto> {
+export class CustomersService extends RecordsService<ListCustomersQueryDto, 'customer'> {
   protected readonly entity = 'customer';
 
   protected listing(): Listing {
@@ -15,9 +15,9 @@ export class CustomersService extends RecordsService<ListCustomersQueryDto> {
   }
 
   /** Each customer with the sites the office works at for them, by name. */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'customer'>[]): Promise<OfficeRow[]> {
     const sites = rows.length
-      ? await em.getRepository<SyncRecord>('site').find({
+      ? await syncRepository(em, 'site').find({
           where: { customerId: In(rows.map((r) => r.id)), organisationId: user.organisationId, deletedAt: IsNull() },
           select: { id: true, customerId: true, name: true, address: true },
           order: { address: 'ASC' },
@@ -25,7 +25,7 @@ export class CustomersService extends RecordsService<ListCustomersQueryDto> {
       : [];
     return rows.map((r) => ({
       ...toSyncedRow(r),
-      sites: sites.filter((s) => s.customerId === r.id).map((s) => ({ id: s.id, name: (s.name as string | null) ?? (s.address as string) })),
+      sites: sites.filter((s) => s.customerId === r.id).map((s) => ({ id: s.id, name: s.name ?? s.address })),
     }));
   }
 }

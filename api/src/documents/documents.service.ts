@@ -21,7 +21,7 @@ import type { Issue } from '../paperwork/pdf/job-heading.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
 import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
 import { DOCUMENT_STORAGE, documentKey, PHOTO_STORAGE, photoKey } from '../storage/file-stores.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import { User } from '../users/entities/user.entity.js';
@@ -94,7 +94,7 @@ export class DocumentsService implements OnModuleInit {
         kind,
         visitId: rendered.visitId,
         number,
-        title: `${KINDS[kind].title}: ${file.job.title as string}`.slice(0, 200),
+        title: `${KINDS[kind].title}: ${file.job.title}`.slice(0, 200),
         signerName: rendered.signerName,
         pdfSha256: fingerprint(rendered.pdf),
         pdfBytes: rendered.pdf.length,
@@ -103,9 +103,9 @@ export class DocumentsService implements OnModuleInit {
       };
       const [result] = await this.engine.applyAll(em, officeActor(user), [officeMutation('document', id, 0, set)]);
       if (result?.status !== 'applied') throw new Error(`The document row was not written: ${result?.error ?? result?.status}`);
-      return em.getRepository<SyncRecord>('document').findOneByOrFail({ id });
+      return syncRepository(em, 'document').findOneByOrFail({ id });
     });
-    this.logger.log(`Issued ${row.number as string} for job ${jobId}`);
+    this.logger.log(`Issued ${row.number} for job ${jobId}`);
     return toSyncedRow(row);
   }
 
@@ -139,7 +139,7 @@ export class DocumentsService implements OnModuleInit {
           ]);
         }
         for (const { photo } of content.photos) {
-          const sha = photo.sha256 as string;
+          const sha = photo.sha256;
           if (!images.has(sha)) images.set(sha, await this.printable(file.organisation.id, sha));
         }
         return async (issue) => ({ pdf: await photoRecordPdf({ issue, file, content, images }), visitId: null, signerName: issue.issuedBy });
@@ -148,7 +148,7 @@ export class DocumentsService implements OnModuleInit {
   }
 
   private async printablePhotos(organisationId: string, jobId: string): Promise<Map<string, Buffer>> {
-    const hashes = await this.queue.read(async (em) => (await loadPhotoRecord(em, await loadJobFile(em, organisationId, jobId))).photos.map((p) => p.photo.sha256 as string));
+    const hashes = await this.queue.read(async (em) => (await loadPhotoRecord(em, await loadJobFile(em, organisationId, jobId))).photos.map((p) => p.photo.sha256));
     const images = new Map<string, Buffer>();
     for (const sha of new Set(hashes)) images.set(sha, await this.printable(organisationId, sha));
     return images;
@@ -167,9 +167,9 @@ export class DocumentsService implements OnModuleInit {
 
   async list(user: AuthUser, jobId: string): Promise<{ items: SyncedRow[] }> {
     const rows = await this.queue.read(async (em) => {
-      const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
+      const job = await syncRepository(em, 'job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
       if (!job) throw new NotFoundException('No such job.');
-      return em.getRepository<SyncRecord>('document').find({
+      return syncRepository(em, 'document').find({
         where: { jobId, organisationId: user.organisationId, deletedAt: IsNull() },
         order: { issuedAt: 'DESC', id: 'DESC' },
       });
@@ -194,8 +194,8 @@ export class DocumentsService implements OnModuleInit {
     const { row, link } = await this.queue.run(async (em) => {
       const doc = await this.documentOf(em, user.organisationId, id);
       if (!doc.issuedAt || !doc.pdfSha256) throw new ConflictException('Only an issued document can be e-mailed.');
-      const file = await loadJobFile(em, user.organisationId, doc.jobId as string);
-      const link = await this.shareLinks.createIn(em, user, file.job.id, { days: dto.linkDays, label: `E-mailed with ${doc.number as string} to ${dto.to}` });
+      const file = await loadJobFile(em, user.organisationId, doc.jobId);
+      const link = await this.shareLinks.createIn(em, user, file.job.id, { days: dto.linkDays, label: `E-mailed with ${doc.number} to ${dto.to}` });
       await this.outbox.enqueue(em, {
         organisationId: user.organisationId,
         purpose: DOCUMENT_MAIL,
@@ -208,32 +208,32 @@ export class DocumentsService implements OnModuleInit {
         officeMutation('document', doc.id, doc.version, { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null }),
       ]);
       if (result?.status !== 'applied') throw new Error(`The document's e-mail state was not written: ${result?.error ?? result?.status}`);
-      return { row: await em.getRepository<SyncRecord>('document').findOneByOrFail({ id }), link };
+      return { row: await syncRepository(em, 'document').findOneByOrFail({ id }), link };
     });
     return { document: toSyncedRow(row), shareLink: { id: link.id, expiresAt: link.expiresAt } };
   }
 
-  private letter(file: JobFile, doc: SyncRecord, to: string, url: string, expiresAt: string): { subject: string; text: string } {
+  private letter(file: JobFile, doc: SyncRecord<'document'>, to: string, url: string, expiresAt: string): { subject: string; text: string } {
     const org = file.organisation;
-    const kind = KINDS[doc.kind as DocumentKind].title;
+    const kind = KINDS[doc.kind].title;
     const text = coveringLetter(file, to, [
-      `Attached is ${kind.toLowerCase()} ${doc.number as string} for ${theWork(file)}.`,
+      `Attached is ${kind.toLowerCase()} ${doc.number} for ${theWork(file)}.`,
       '',
       `You can also see the job's record, with its photos and documents, at this link until ${dateWords(expiresAt, org.timeZone)}:`,
       url,
     ]);
-    return { subject: `${kind} ${doc.number as string} from ${org.name}`, text };
+    return { subject: `${kind} ${doc.number} from ${org.name}`, text };
   }
 
   private async attachment(message: OutboxMessage) {
-    const doc = await this.queue.read((em) => em.getRepository<SyncRecord>('document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId }));
+    const doc = await this.queue.read((em) => syncRepository(em, 'document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId }));
     if (!doc?.pdfSha256) throw new Error('The document is no longer on the server.');
     return [await issuedPdfAttachment(this.storage, doc)];
   }
 
   /** Writes the outbox's news to the document row through the engine, so it is numbered and every device pulls it. */
   private async recordMailState(em: EntityManager, message: OutboxMessage): Promise<void> {
-    const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId });
+    const doc = await syncRepository(em, 'document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId });
     if (!doc) return;
     if (!(await isLatestMessage(em, message))) return;
     const { emailedAt, ...state } = mailState(message, this.mail.maxAttempts);
@@ -241,11 +241,11 @@ export class DocumentsService implements OnModuleInit {
     const sender = await em.findOneBy(User, { id: message.createdById, organisationId: message.organisationId });
     const actor = { id: message.createdById, organisationId: message.organisationId, role: sender?.role ?? 'office', email: sender?.email ?? '', name: sender?.name ?? '' };
     const [result] = await this.engine.applyAll(em, officeActor(actor, 'mail-outbox'), [officeMutation('document', doc.id, doc.version, set, 'mail-outbox')]);
-    if (result?.status !== 'applied') this.logger.warn(`The e-mail state of ${doc.number as string} was not written: ${result?.error ?? result?.status}`);
+    if (result?.status !== 'applied') this.logger.warn(`The e-mail state of ${doc.number} was not written: ${result?.error ?? result?.status}`);
   }
 
-  private async documentOf(em: EntityManager, organisationId: string, id: string): Promise<SyncRecord> {
-    const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id, organisationId, deletedAt: IsNull() });
+  private async documentOf(em: EntityManager, organisationId: string, id: string): Promise<SyncRecord<'document'>> {
+    const doc = await syncRepository(em, 'document').findOneBy({ id, organisationId, deletedAt: IsNull() });
     if (!doc) throw new NotFoundException('No such document.');
     return doc;
   }

@@ -1,7 +1,7 @@
 import { documentTotals, type InvoiceAccount, type InvoiceDetail, type InvoiceSummary, invoiceStanding, localDate } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { InvoiceLine } from './entities/invoice-line.entity.js';
 import { Payment } from './entities/payment.entity.js';
@@ -45,9 +45,9 @@ export async function accountsOf(em: EntityManager, invoices: Invoice[], asOf: s
 /** Summaries for lists: each with its job, customer and account, read in a handful of queries whatever the count. */
 export async function summarise(em: EntityManager, organisationId: string, invoices: Invoice[], asOf: string): Promise<InvoiceSummary[]> {
   const jobIds = [...new Set(invoices.map((i) => i.jobId))];
-  const jobs = jobIds.length ? await em.getRepository<SyncRecord>('job').find({ where: { id: In(jobIds), organisationId }, withDeleted: true }) : [];
-  const customerIds = [...new Set(jobs.map((j) => j.customerId as string))];
-  const customers = customerIds.length ? await em.getRepository<SyncRecord>('customer').find({ where: { id: In(customerIds), organisationId }, withDeleted: true }) : [];
+  const jobs = jobIds.length ? await syncRepository(em, 'job').find({ where: { id: In(jobIds), organisationId }, withDeleted: true }) : [];
+  const customerIds = [...new Set(jobs.map((j) => j.customerId))];
+  const customers = customerIds.length ? await syncRepository(em, 'customer').find({ where: { id: In(customerIds), organisationId }, withDeleted: true }) : [];
   const creditedIds = [...new Set(invoices.map((i) => i.creditsInvoiceId).filter((id): id is string => !!id))];
   const credited = creditedIds.length ? await em.find(Invoice, { where: { id: In(creditedIds), organisationId }, select: { id: true, number: true } }) : [];
   const accounts = await accountsOf(em, invoices, asOf);
@@ -56,7 +56,7 @@ export async function summarise(em: EntityManager, organisationId: string, invoi
   const numberOf = new Map(credited.map((c) => [c.id, c.number]));
   return invoices.map((i) => {
     const job = jobOf.get(i.jobId);
-    const customer = job ? customerOf.get(job.customerId as string) : undefined;
+    const customer = job ? customerOf.get(job.customerId) : undefined;
     return {
       id: i.id,
       jobId: i.jobId,
@@ -77,8 +77,8 @@ export async function summarise(em: EntityManager, organisationId: string, invoi
       emailedAt: iso(i.emailedAt),
       emailError: i.emailError,
       createdAt: i.createdAt.toISOString(),
-      job: { reference: (job?.reference as string) ?? null, title: (job?.title as string) ?? '' },
-      customer: customer ? { id: customer.id, name: customer.name as string, email: (customer.email as string) || null } : null,
+      job: { reference: job?.reference ?? null, title: job?.title ?? '' },
+      customer: customer ? { id: customer.id, name: customer.name, email: customer.email || null } : null,
       account: accounts.get(i.id) ?? null,
       lapsed: i.kind === 'quote' && i.status === 'issued' && !!i.dueDate && i.dueDate < asOf,
     };
@@ -116,5 +116,5 @@ export async function detail(em: EntityManager, invoice: Invoice, asOf: string):
 
 /** A job of the organisation that is still there, or nothing. */
 export function liveJob(em: EntityManager, organisationId: string, jobId: string): Promise<SyncRecord | null> {
-  return em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, organisationId, deletedAt: IsNull() });
+  return syncRepository(em, 'job').findOneBy({ id: jobId, organisationId, deletedAt: IsNull() });
 }

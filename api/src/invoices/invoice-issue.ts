@@ -1,6 +1,7 @@
 import { BadRequestException, UnprocessableEntityException } from '@nestjs/common';
 import { addDays, formatMoney, type InvoiceKind, localDate } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
+import { messageOf } from '../common/exception-message.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { takeNextNumber } from '../paperwork/document-numbers.js';
 import { fingerprint } from '../paperwork/issued-pdf.js';
@@ -112,7 +113,7 @@ export async function issueDraft(em: EntityManager, { invoice, issuer, now, stor
   try {
     priced = priceLines(await withCreditRates(em, invoice, stored.map(draftOf)), await loadRateBook(em, org.id), signOf(invoice.kind)).lines;
   } catch (err) {
-    if (err instanceof BadRequestException) throw new UnprocessableEntityException((err.getResponse() as { message: string[] }).message);
+    if (err instanceof BadRequestException) throw new UnprocessableEntityException(messageOf(err));
     throw err;
   }
   const gross = priced.reduce((s, l) => s + l.grossMinor, 0);

@@ -2,6 +2,7 @@ import { BadRequestException } from '@nestjs/common';
 import { type DocumentTotals, documentTotals, type InvoiceLineInput, lineTotals, MoneyError, quantityThousandths } from '@wiretrail/core';
 import type { RateBook } from '../pricing/rate-book.js';
 import { activeVatRate } from '../pricing/rate-book.js';
+import { messageOf } from '../common/exception-message.js';
 
 /** A line as the office edits it, or as it is built from the job: before VAT is looked up and totals worked out. */
 export interface LineDraft extends Omit<InvoiceLineInput, 'quantity'> {
@@ -53,7 +54,7 @@ export function priceLines(drafts: readonly LineDraft[], book: RateBook, sign: 1
       }
     } catch (err) {
       if (err instanceof MoneyError) problems.push(err.message);
-      else if (err instanceof BadRequestException) problems.push(String((err.getResponse() as { message: string }).message));
+      else if (err instanceof BadRequestException) problems.push(String(messageOf(err)));
       else throw err;
     }
   });

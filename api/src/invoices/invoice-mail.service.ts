@@ -19,7 +19,7 @@ import { dateWords } from '../paperwork/pdf/document-words.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
 import type { FileStorage } from '../storage/file-storage.js';
 import { DOCUMENT_STORAGE, INVOICE_STORAGE } from '../storage/file-stores.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { detail, todayFor } from './invoice-accounts.js';
 
@@ -75,14 +75,14 @@ export class InvoiceMailService implements OnModuleInit {
     });
   }
 
-  private jobDocuments(em: EntityManager, invoice: Invoice): Promise<SyncRecord[]> {
-    return em.getRepository<SyncRecord>('document').find({
+  private jobDocuments(em: EntityManager, invoice: Invoice): Promise<SyncRecord<'document'>[]> {
+    return syncRepository(em, 'document').find({
       where: { jobId: invoice.jobId, organisationId: invoice.organisationId, deletedAt: IsNull(), issuedAt: Not(IsNull()), pdfSha256: Not(IsNull()) },
       order: { issuedAt: 'ASC' },
     });
   }
 
-  private letter(file: JobFile, invoice: Invoice, documents: SyncRecord[], to: string, url: string, expiresAt: string): { subject: string; text: string } {
+  private letter(file: JobFile, invoice: Invoice, documents: SyncRecord<'document'>[], to: string, url: string, expiresAt: string): { subject: string; text: string } {
     const org = file.organisation;
     const tz = org.timeZone;
     const title = INVOICE_NAMES[invoice.kind];
@@ -96,7 +96,7 @@ export class InvoiceMailService implements OnModuleInit {
     const card = invoice.kind === 'invoice' && this.payments.apiKey;
     const text = coveringLetter(file, to, [
       opening,
-      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${documentTitle(d.kind)} ${d.number as string}`).join(', ')}.`] : []),
+      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${documentTitle(d.kind)} ${d.number}`).join(', ')}.`] : []),
       '',
       `You can see the job's record, with its photos and documents${card ? ', and pay by card' : ''}, at this link until ${dateWords(expiresAt, tz)}:`,
       url,

@@ -3,7 +3,7 @@ import { type EntityManager, In, IsNull } from 'typeorm';
 import { type JobFile, jobVisits } from '../paperwork/job-file.js';
 import { shortDateWords } from '../paperwork/pdf/document-words.js';
 import type { RateBook } from '../pricing/rate-book.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { syncRepository } from '../sync/entities/sync-schemas.js';
 import type { LineDraft } from './invoice-lines.js';
 import { quantityText } from './invoice-lines.js';
 
@@ -36,8 +36,8 @@ export async function linesFromJob(em: EntityManager, file: JobFile, book: RateB
   const fallback = fallbackVat(book);
 
   for (const visit of visits) {
-    const start = visit.actualStart as string | null;
-    const end = visit.actualEnd as string | null;
+    const start = visit.actualStart;
+    const end = visit.actualEnd;
     const day = shortDateWords(start ?? visit.plannedStart ?? visit.createdAt, tz) || 'an unscheduled day';
     if (!start || !end) {
       warnings.push(`The visit on ${day} has no ${start ? 'departure' : 'arrival'} time recorded, so its labour is not included.`);
@@ -67,17 +67,17 @@ export async function linesFromJob(em: EntityManager, file: JobFile, book: RateB
   }
 
   const parts = visits.length
-    ? await em.getRepository<SyncRecord>('materialLine').find({ where: { visitId: In(visits.map((v) => v.id)), organisationId: org, deletedAt: IsNull() }, order: { createdAt: 'ASC', id: 'ASC' } })
+    ? await syncRepository(em, 'materialLine').find({ where: { visitId: In(visits.map((v) => v.id)), organisationId: org, deletedAt: IsNull() }, order: { createdAt: 'ASC', id: 'ASC' } })
     : [];
   const itemIds = [...new Set(parts.map((p) => p.priceItemId).filter((id): id is string => typeof id === 'string'))];
   const items = new Map(
-    (itemIds.length ? await em.getRepository<SyncRecord>('priceItem').find({ where: { id: In(itemIds), organisationId: org }, withDeleted: true }) : []).map((i) => [i.id, i]),
+    (itemIds.length ? await syncRepository(em, 'priceItem').find({ where: { id: In(itemIds), organisationId: org }, withDeleted: true }) : []).map((i) => [i.id, i]),
   );
   // The same part used on several visits is one line: quantities add up in thousandths, exactly.
   const grouped = new Map<string, { draft: LineDraft; thousandths: bigint }>();
   for (const p of parts) {
     const item = typeof p.priceItemId === 'string' ? items.get(p.priceItemId) : undefined;
-    const unit = ((item?.unit ?? p.unit) as string | null) ?? null;
+    const unit = item?.unit ?? p.unit ?? null;
     const key = item ? `item:${item.id}:${unit}` : `typed:${String(p.description).trim().toLowerCase()}:${unit}`;
     const thousandths = BigInt(Math.round(Number(p.quantity) * 1000));
     const seen = grouped.get(key);
@@ -85,7 +85,7 @@ export async function linesFromJob(em: EntityManager, file: JobFile, book: RateB
       seen.thousandths += thousandths;
       continue;
     }
-    const vat = (item?.vatRateCode as string | null) ?? fallback ?? '';
+    const vat = item?.vatRateCode ?? fallback ?? '';
     grouped.set(key, {
       thousandths,
       draft: {

@@ -1,11 +1,11 @@
 import { Injectable } from '@nestjs/common';
-import { JOB_STATUSES } from '@wiretrail/core';
+import { JOB_STATUSES, type JobSort, type JobStatusCounts } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { type Condition, type Listing, type OfficeRow, RecordsService } from '../records/records.service.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
-import type { JobFiltersDto, JobSort, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
+import type { JobFiltersDto, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
 import { inTurn } from '../common/in-turn.js';
 
 /** Visits still to do: the next visit of a job is the earliest of these. */
@@ -25,13 +25,8 @@ const SORTS: Record<JobSort, string> = {
   created: 'createdAt',
 };
 
-export interface StatusCounts {
-  counts: Record<(typeof JOB_STATUSES)[number], number>;
-  total: number;
-}
-
 @Injectable()
-export class JobsService extends RecordsService<ListJobsQueryDto> {
+export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
   protected readonly entity = 'job';
 
   protected listing(q: ListJobsQueryDto): Listing {
@@ -52,9 +47,10 @@ export class JobsService extends RecordsService<ListJobsQueryDto> {
   }
 
   /** The number of jobs in each status under the same filters, for the board's columns. */
-  async statusCounts(user: AuthUser, q: JobFiltersDto): Promise<StatusCounts> {
+  async statusCounts(user: AuthUser, q: JobFiltersDto): Promise<JobStatusCounts> {
     const found = await this.countBy(user, { ...q, status: undefined } as ListJobsQueryDto, 'status');
-    const counts = Object.fromEntries(JOB_STATUSES.map((s) => [s, found.get(s) ?? 0])) as StatusCounts['counts'];
+    const counts: JobStatusCounts['counts'] = { enquiry: 0, booked: 0, 'on-site': 0, paperwork: 0, done: 0, cancelled: 0 };
+    for (const s of JOB_STATUSES) counts[s] = found.get(s) ?? 0;
     return { counts, total: [...found.values()].reduce((a, b) => a + b, 0) };
   }
 
@@ -86,29 +82,29 @@ export class JobsService extends RecordsService<ListJobsQueryDto> {
   }
 
   /** Each job with its customer's and site's names, its next visit and who is booked on its visits. */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'job'>[]): Promise<OfficeRow[]> {
     if (!rows.length) return [];
     const org = user.organisationId;
-    const ids = (field: string) => [...new Set(rows.map((r) => r[field] as string))];
+    const ids = (field: 'customerId' | 'siteId') => [...new Set(rows.map((r) => r[field]))];
     const [customers, sites, visits] = await inTurn(
-      () => em.getRepository<SyncRecord>('customer').find({ where: { id: In(ids('customerId')), organisationId: org }, select: { id: true, name: true } }),
-      () => em.getRepository<SyncRecord>('site').find({ where: { id: In(ids('siteId')), organisationId: org }, select: { id: true, name: true, address: true } }),
-      () => em.getRepository<SyncRecord>('visit').find({
+      () => syncRepository(em, 'customer').find({ where: { id: In(ids('customerId')), organisationId: org }, select: { id: true, name: true } }),
+      () => syncRepository(em, 'site').find({ where: { id: In(ids('siteId')), organisationId: org }, select: { id: true, name: true, address: true } }),
+      () => syncRepository(em, 'visit').find({
         where: { jobId: In(rows.map((r) => r.id)), organisationId: org, deletedAt: IsNull() },
         select: { id: true, jobId: true, plannedStart: true, status: true, technicianIds: true },
       }),
     );
-    const customerName = new Map(customers.map((c) => [c.id, c.name as string]));
-    const siteName = new Map(sites.map((s) => [s.id, (s.name as string | null) ?? (s.address as string)]));
+    const customerName = new Map(customers.map((c) => [c.id, c.name]));
+    const siteName = new Map(sites.map((s) => [s.id, s.name ?? s.address]));
     return rows.map((r) => {
       const own = visits.filter((v) => v.jobId === r.id);
-      const open = own.filter((v) => v.status !== 'finished' && v.status !== 'cancelled' && typeof v.plannedStart === 'string');
-      const next = open.map((v) => v.plannedStart as string).sort()[0] ?? null;
-      const technicianIds = [...new Set(own.filter((v) => v.status !== 'cancelled').flatMap((v) => (v.technicianIds as string[] | null) ?? []))];
+      const open = own.filter((v) => v.status !== 'finished' && v.status !== 'cancelled');
+      const next = open.flatMap((v) => (typeof v.plannedStart === 'string' ? [v.plannedStart] : [])).sort()[0] ?? null;
+      const technicianIds = [...new Set(own.filter((v) => v.status !== 'cancelled').flatMap((v) => v.technicianIds ?? []))];
       return {
         ...toSyncedRow(r),
-        customerName: customerName.get(r.customerId as string) ?? null,
-        siteName: siteName.get(r.siteId as string) ?? null,
+        customerName: customerName.get(r.customerId) ?? null,
+        siteName: siteName.get(r.siteId) ?? null,
         nextVisitStart: next,
         visitCount: own.length,
         technicianIds,

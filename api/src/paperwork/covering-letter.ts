@@ -4,7 +4,7 @@ import type { JobFile } from './job-file.js';
 export function theWork(file: JobFile): string {
   const { job, site } = file;
   const where = [site.address, site.postcode].filter(Boolean).join(', ');
-  return `the work at ${where}${job.reference ? ` (our job ${job.reference as string}, “${job.title as string}”)` : ''}`;
+  return `the work at ${where}${job.reference ? ` (our job ${job.reference}, “${job.title}”)` : ''}`;
 }
 
 /**
@@ -13,7 +13,7 @@ export function theWork(file: JobFile): string {
  */
 export function coveringLetter(file: JobFile, to: string, body: string[]): string {
   const { organisation: org, customer } = file;
-  const greeting = customer?.email && String(customer.email).toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name as string},` : 'Hello,';
+  const greeting = customer?.email && customer.email.toLowerCase() === to.toLowerCase() && customer.name ? `Hello ${customer.name},` : 'Hello,';
   return [
     greeting,
     '',

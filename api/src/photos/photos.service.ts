@@ -7,7 +7,7 @@ import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { User } from '../users/entities/user.entity.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { type Actor, SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
@@ -112,7 +112,7 @@ export class PhotosService implements OnModuleInit {
    * cannot then overwrite the server's word without the merge rules seeing it.
    */
   private async markReady(em: EntityManager, actor: Actor, blob: PhotoBlob, rows?: SyncRecord[]): Promise<void> {
-    const photos = rows ?? (await em.getRepository<SyncRecord>('photo').findBy({ organisationId: blob.organisationId, sha256: blob.sha256, deletedAt: IsNull() }));
+    const photos = rows ?? (await syncRepository(em, 'photo').findBy({ organisationId: blob.organisationId, sha256: blob.sha256, deletedAt: IsNull() }));
     const writes: Array<{ row: SyncRecord; changes: Record<string, unknown> }> = [];
     for (const row of photos) {
       const changes: Record<string, unknown> = {};
@@ -147,8 +147,7 @@ export class PhotosService implements OnModuleInit {
       params.like = `%${escapeLike(q.search)}%`;
     }
     const { rows, total, visits, people } = await this.queue.read(async (em) => {
-      const [rows, total] = await em
-        .getRepository<SyncRecord>('photo')
+      const [rows, total] = await syncRepository(em, 'photo')
         .createQueryBuilder('r')
         .where(where.join(' AND '), params)
         .orderBy('r.takenAt', 'ASC', 'NULLS LAST')
@@ -156,20 +155,20 @@ export class PhotosService implements OnModuleInit {
         .offset((q.page - 1) * q.pageSize)
         .limit(q.pageSize)
         .getManyAndCount();
-      const visitIds = [...new Set(rows.map((r) => r.visitId as string))];
+      const visitIds = [...new Set(rows.map((r) => r.visitId))];
       const visits = visitIds.length
-        ? await em.getRepository<SyncRecord>('visit').find({ where: { id: In(visitIds), organisationId: user.organisationId }, select: { id: true, plannedStart: true }, withDeleted: true })
+        ? await syncRepository(em, 'visit').find({ where: { id: In(visitIds), organisationId: user.organisationId }, select: { id: true, plannedStart: true }, withDeleted: true })
         : [];
       const userIds = [...new Set(rows.map((r) => r.createdById).filter((id): id is string => !!id))];
       const people = userIds.length ? await em.find(User, { where: { id: In(userIds), organisationId: user.organisationId }, select: { id: true, name: true } }) : [];
       return { rows, total, visits, people };
     });
-    const plannedStart = new Map(visits.map((v) => [v.id, (v.plannedStart as string | null) ?? null]));
+    const plannedStart = new Map(visits.map((v) => [v.id, v.plannedStart ?? null]));
     const names = new Map(people.map((p) => [p.id, p.name]));
     return {
       items: rows.map((r) => ({
         ...toSyncedRow(r),
-        visitPlannedStart: plannedStart.get(r.visitId as string) ?? null,
+        visitPlannedStart: plannedStart.get(r.visitId) ?? null,
         createdByName: (r.createdById && names.get(r.createdById)) || null,
       })),
       total,
@@ -184,11 +183,11 @@ export class PhotosService implements OnModuleInit {
    */
   async file(user: AuthUser, id: string, variant: StoredVariant): Promise<PhotoFile> {
     const { row, blob } = await this.queue.read(async (em) => {
-      const row = await em.getRepository<SyncRecord>('photo').findOneBy({ id, organisationId: user.organisationId, deletedAt: IsNull() });
+      const row = await syncRepository(em, 'photo').findOneBy({ id, organisationId: user.organisationId, deletedAt: IsNull() });
       if (!row) return { row: null, blob: null };
       if (user.role === 'technician') {
         const scope = await this.scopes.technicianScope(em, user.organisationId, user.id);
-        if (!scope.siteIds.has(row.siteId as string)) return { row: null, blob: null };
+        if (!scope.siteIds.has(row.siteId)) return { row: null, blob: null };
       }
       const blob = typeof row.sha256 === 'string' ? await em.findOneBy(PhotoBlob, { organisationId: user.organisationId, sha256: row.sha256 }) : null;
       return { row, blob };
@@ -202,8 +201,7 @@ export class PhotosService implements OnModuleInit {
    */
   async fileOnJob(organisationId: string, jobId: string, id: string, variant: Exclude<StoredVariant, 'original'>): Promise<PhotoFile> {
     const { row, blob } = await this.queue.read(async (em) => {
-      const row = await em
-        .getRepository<SyncRecord>('photo')
+      const row = await syncRepository(em, 'photo')
         .createQueryBuilder('p')
         .where('p.id = :id AND p.organisationId = :org AND p.deletedAt IS NULL', { id, org: organisationId })
         .andWhere('p.visitId IN (SELECT "v"."id" FROM "visit" AS "v" WHERE "v"."organisationId" = :org AND "v"."jobId" = :jobId AND "v"."deletedAt" IS NULL)', { jobId })

@@ -10,7 +10,7 @@ import type { ListPointChangesQueryDto } from './dto/list-point-changes-query.dt
 import { inTurn } from '../common/in-turn.js';
 
 @Injectable()
-export class PointChangesService extends RecordsService<ListPointChangesQueryDto> {
+export class PointChangesService extends RecordsService<ListPointChangesQueryDto, 'pointChange'> {
   protected readonly entity = 'pointChange';
 
   protected listing(q: ListPointChangesQueryDto): Listing {
@@ -24,7 +24,7 @@ export class PointChangesService extends RecordsService<ListPointChangesQueryDto
   }
 
   /** Each change with the names of its circuit and areas, when its visit was planned, and the server's own checks before the work. */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'pointChange'>[]): Promise<OfficeRow[]> {
     const org = user.organisationId;
     const [areas, circuits, visits, sites] = await inTurn(
       () => rowsById(em, org, 'area', rows.flatMap((r) => [r.fromAreaId, r.toAreaId])),
@@ -34,14 +34,14 @@ export class PointChangesService extends RecordsService<ListPointChangesQueryDto
     );
     const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
     return rows.map((r) => {
-      const circuit = circuits.get(r.circuitId as string);
+      const circuit = circuits.get(r.circuitId);
       return {
         ...toSyncedRow(r),
-        fromAreaName: nameOf(areas.get(r.fromAreaId as string)),
-        toAreaName: nameOf(areas.get(r.toAreaId as string)),
-        circuitLabel: circuitLabel(circuit, boards.get(circuit?.boardId as string)),
-        visitPlannedStart: (visits.get(r.visitId as string)?.plannedStart as string | null | undefined) ?? null,
-        beforeWork: checksBeforeWork({ point: r, circuit, site: sites.get(r.siteId as string) }, DEFAULT_RULE_SET),
+        fromAreaName: nameOf(areas.get(r.fromAreaId)),
+        toAreaName: nameOf(areas.get(r.toAreaId)),
+        circuitLabel: circuitLabel(circuit, boards.get(circuit?.boardId)),
+        visitPlannedStart: visits.get(r.visitId)?.plannedStart ?? null,
+        beforeWork: checksBeforeWork({ point: r, circuit, site: sites.get(r.siteId) }, DEFAULT_RULE_SET),
       };
     });
   }

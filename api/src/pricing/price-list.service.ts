@@ -11,7 +11,7 @@ import { activeVatRate, loadRateBook } from './rate-book.js';
  * parts offline), so writes go through the sync engine like any other; the VAT rate must be one the office set up.
  */
 @Injectable()
-export class PriceListService extends RecordsService<ListPriceItemsQueryDto> {
+export class PriceListService extends RecordsService<ListPriceItemsQueryDto, 'priceItem'> {
   protected readonly entity = 'priceItem';
 
   protected listing(q: ListPriceItemsQueryDto): Listing {

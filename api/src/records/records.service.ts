@@ -2,11 +2,11 @@ import { BadRequestException, ConflictException, Injectable, NotFoundException }
 import { formatHlc, type Mutation, type MutationResult, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
 import { type EntityManager, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { type Actor, SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { definedFields } from '../common/defined-fields.js';
+import { sentFields } from '../common/defined-fields.js';
 import { WriteQueue } from '../common/write-queue.js';
 import type { PageQueryDto } from './page-query.dto.js';
 import { jsonListHas, textLike } from '../database/sql.js';
@@ -53,7 +53,7 @@ export interface Listing {
 /** A reference that must lie on the record's own site: a circuit's board, a board's area, a visit's job. */
 export interface SameSiteRef {
   field: string;
-  entity: OfficeRecord;
+  entity: Exclude<OfficeRecord, 'customer' | 'site' | 'priceItem'>;
 }
 
 /** The office writing through the sync engine from a desk: its own device id, so its edits are numbered like a push. */
@@ -92,8 +92,8 @@ const sortKey = (sort: string) => (/^\w+$/.test(sort) ? `r.${sort}` : sort);
  * A feature's service extends this and says which record it serves and how it is listed.
  */
 @Injectable()
-export abstract class RecordsService<Q extends PageQueryDto> {
-  protected abstract readonly entity: SiteRecord;
+export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecord = SiteRecord> {
+  protected abstract readonly entity: E;
   protected readonly sameSite: SameSiteRef[] = [];
   protected abstract listing(query: Q): Listing;
 
@@ -106,7 +106,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
     const l = this.listing(q);
     const { where, params } = this.conditionsFor(user, l, q.search);
     const { rows, total } = await this.queue.read(async (em) => {
-      const qb = em.getRepository<SyncRecord>(this.entity).createQueryBuilder('r').where(where.join(' AND '), params);
+      const qb = syncRepository(em, this.entity).createQueryBuilder('r').where(where.join(' AND '), params);
       for (const [sort, direction, nulls] of l.order) qb.addOrderBy(sortKey(sort), direction, nulls);
       if (!l.order.some(([sort]) => sort === 'id')) qb.addOrderBy('r.id', 'ASC');
       const [found, total] = await qb.offset((q.page - 1) * q.pageSize).limit(q.pageSize).getManyAndCount();
@@ -119,8 +119,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
   protected async countBy(user: AuthUser, q: Q, field: string): Promise<Map<string | null, number>> {
     const { where, params } = this.conditionsFor(user, this.listing(q), q.search);
     const rows = await this.queue.read((em) =>
-      em
-        .getRepository<SyncRecord>(this.entity)
+      syncRepository(em, this.entity)
         .createQueryBuilder('r')
         .select(`r.${field}`, 'value')
         .addSelect('COUNT(*)', 'n')
@@ -135,7 +134,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
    * What a feature adds to its rows as the office reads them, inside the same read so that the additions match the rows.
    * By default, nothing.
    */
-  protected async annotate(_em: EntityManager, _user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+  protected async annotate(_em: EntityManager, _user: AuthUser, rows: SyncRecord<E>[]): Promise<OfficeRow[]> {
     return rows.map(toSyncedRow);
   }
 
@@ -181,7 +180,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
   }
 
   async create(user: AuthUser, dto: object): Promise<OfficeRow> {
-    const set = definedFields(dto) as Record<string, unknown>;
+    const set = sentFields(dto);
     const id = uuidv7();
     const { result, row } = await this.queue.run(async (em) => {
       await this.checkSameSite(em, user, set, set);
@@ -192,7 +191,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
   }
 
   async update(user: AuthUser, id: string, dto: object): Promise<OfficeRow> {
-    const set = definedFields(dto) as Record<string, unknown>;
+    const set = sentFields(dto);
     if (Object.keys(set).length === 0) throw new BadRequestException('Nothing to change: send at least one field.');
     const { result, row } = await this.queue.run(async (em) => {
       const existing = await this.current(em, user, id);
@@ -206,12 +205,15 @@ export abstract class RecordsService<Q extends PageQueryDto> {
 
   /** The row as written, answered as the office reads it, so a save's answer equals the next read. */
   private async saved(em: EntityManager, user: AuthUser, id: string): Promise<OfficeRow | null> {
-    const row = await em.getRepository<SyncRecord>(this.entity).findOneBy({ id });
+    const row = await syncRepository(em, this.entity).createQueryBuilder('r').where('r.id = :id', { id }).getOne();
     return row ? (await this.annotate(em, user, [row]))[0]! : null;
   }
 
-  private async current(em: EntityManager, user: AuthUser, id: string): Promise<SyncRecord> {
-    const row = await em.getRepository<SyncRecord>(this.entity).findOneBy({ id, organisationId: user.organisationId, deletedAt: IsNull() });
+  private async current(em: EntityManager, user: AuthUser, id: string): Promise<SyncRecord<E>> {
+    const row = await syncRepository(em, this.entity)
+      .createQueryBuilder('r')
+      .where('r.id = :id AND r.organisationId = :org AND r.deletedAt IS NULL', { id, org: user.organisationId })
+      .getOne();
     if (!row) throw new NotFoundException(`No such ${this.entity}.`);
     return row;
   }
@@ -225,9 +227,7 @@ export abstract class RecordsService<Q extends PageQueryDto> {
       if (!(ref.field in set) && !('siteId' in set)) continue;
       const refId = merged[ref.field];
       if (typeof refId !== 'string') continue;
-      const target = await em
-        .getRepository<SyncRecord>(ref.entity)
-        .findOne({ where: { id: refId, organisationId: user.organisationId, deletedAt: IsNull() }, select: { id: true, siteId: true } });
+      const target = await syncRepository(em, ref.entity).findOne({ where: { id: refId, organisationId: user.organisationId, deletedAt: IsNull() }, select: { id: true, siteId: true } });
       if (target && target.siteId !== merged.siteId) {
         throw new BadRequestException(`${ref.field} must be on this ${this.entity}'s site.`);
       }

@@ -1,46 +1,18 @@
 import { GoneException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { createHash, randomBytes } from 'node:crypto';
+import type { NewShareLink, SharedJob, ShareLinkState, ShareLinkView } from '@wiretrail/core';
 import { type EntityManager, In, IsNull, Not } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
-import type { SyncRecord } from '../sync/entities/sync-schemas.js';
+import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import type { CreateShareLinkDto } from './dto/create-share-link.dto.js';
 import { SHARE_LINK_DAYS } from './dto/create-share-link.dto.js';
 import { ShareLink } from './entities/share-link.entity.js';
 import { inTurn } from '../common/in-turn.js';
-
-export type ShareLinkState = 'active' | 'expired' | 'revoked';
-
-export interface ShareLinkView {
-  id: string;
-  jobId: string;
-  label: string | null;
-  createdAt: string;
-  createdById: string;
-  expiresAt: string;
-  revokedAt: string | null;
-  lastOpenedAt: string | null;
-  openCount: number;
-  state: ShareLinkState;
-}
-
-/** A link just made: the only time its address is known, since only the token's hash is kept. */
-export interface NewShareLink extends ShareLinkView {
-  url: string;
-}
-
-/** What a customer sees through a link: the job, its photo trail and its documents, and nothing else. */
-export interface SharedJob {
-  expiresAt: string;
-  contractor: { name: string; phone: string | null; email: string | null };
-  job: { reference: string | null; title: string; status: string | null; customerName: string | null; siteAddress: string };
-  photos: Array<{ id: string; caption: string | null; area: string | null; takenAt: string | null; thumbUrl: string; displayUrl: string }>;
-  documents: Array<{ id: string; number: string; kind: string; title: string | null; issuedAt: string; pdfUrl: string }>;
-}
 
 /** 32 random bytes in base64url: the whole token, 43 characters. */
 const TOKEN = /^[A-Za-z0-9_-]{43}$/;
@@ -138,61 +110,57 @@ export class ShareLinksService {
       const job = await this.jobOf(em, org, link.jobId);
       const [organisation, site, customer, visits, documents] = await inTurn(
         () => em.findOneByOrFail(Organisation, { id: org }),
-        () => em.getRepository<SyncRecord>('site').findOne({ where: { id: job.siteId as string, organisationId: org }, withDeleted: true }),
-        () => em.getRepository<SyncRecord>('customer').findOne({ where: { id: job.customerId as string, organisationId: org }, withDeleted: true }),
-        () => em.getRepository<SyncRecord>('visit').find({ where: { jobId: job.id, organisationId: org, deletedAt: IsNull() }, select: { id: true } }),
-        () => em.getRepository<SyncRecord>('document').find({
+        () => syncRepository(em, 'site').findOne({ where: { id: job.siteId, organisationId: org }, withDeleted: true }),
+        () => syncRepository(em, 'customer').findOne({ where: { id: job.customerId, organisationId: org }, withDeleted: true }),
+        () => syncRepository(em, 'visit').find({ where: { jobId: job.id, organisationId: org, deletedAt: IsNull() }, select: { id: true } }),
+        () => syncRepository(em, 'document').find({
           where: { jobId: job.id, organisationId: org, deletedAt: IsNull(), issuedAt: Not(IsNull()), pdfSha256: Not(IsNull()) },
           order: { issuedAt: 'ASC' },
         }),
       );
       const photos = visits.length
-        ? await em.getRepository<SyncRecord>('photo').find({ where: { visitId: In(visits.map((v) => v.id)), organisationId: org, deletedAt: IsNull() }, order: { takenAt: 'ASC', id: 'ASC' } })
+        ? await syncRepository(em, 'photo').find({ where: { visitId: In(visits.map((v) => v.id)), organisationId: org, deletedAt: IsNull() }, order: { takenAt: 'ASC', id: 'ASC' } })
         : [];
       // Only photos whose bytes are here can be shown.
       const hashes = [...new Set(photos.map((p) => p.sha256).filter((h): h is string => typeof h === 'string'))];
       const held = hashes.length ? new Set((await em.find(PhotoBlob, { where: { organisationId: org, sha256: In(hashes) }, select: { sha256: true } })).map((b) => b.sha256)) : new Set();
-      const areas = site ? await em.getRepository<SyncRecord>('area').find({ where: { siteId: site.id, organisationId: org }, select: { id: true, name: true } }) : [];
-      const areaName = new Map(areas.map((a) => [a.id, a.name as string]));
+      const areas = site ? await syncRepository(em, 'area').find({ where: { siteId: site.id, organisationId: org }, select: { id: true, name: true } }) : [];
+      const areaName = new Map<string | null, string>(areas.map((a) => [a.id, a.name]));
       await em.update(ShareLink, { id: link.id }, { openCount: link.openCount + 1, lastOpenedAt: new Date() });
       const base = `/api/shared/${token}`;
       return {
         expiresAt: link.expiresAt.toISOString(),
         contractor: { name: organisation.name, phone: organisation.phone, email: organisation.email },
         job: {
-          reference: (job.reference as string) ?? null,
-          title: job.title as string,
-          status: (job.status as string) ?? null,
-          customerName: (customer?.name as string) ?? null,
+          reference: job.reference ?? null,
+          title: job.title,
+          status: job.status ?? null,
+          customerName: customer?.name ?? null,
           siteAddress: [site?.address, site?.postcode].filter((p) => typeof p === 'string' && p).join(', '),
         },
         photos: photos
-          .filter((p) => held.has(p.sha256 as string))
+          .filter((p) => held.has(p.sha256))
           .map((p) => ({
             id: p.id,
-            caption: (p.caption as string) ?? null,
-            area: areaName.get(p.areaId as string) ?? null,
-            takenAt: (p.takenAt as string) ?? null,
+            caption: p.caption ?? null,
+            area: areaName.get(p.areaId) ?? null,
+            takenAt: p.takenAt ?? null,
             thumbUrl: `${base}/photos/${p.id}/thumb`,
             displayUrl: `${base}/photos/${p.id}/display`,
           })),
-        documents: documents.map((d) => ({
-          id: d.id,
-          number: d.number as string,
-          kind: d.kind as string,
-          title: (d.title as string) ?? null,
-          issuedAt: d.issuedAt as string,
-          pdfUrl: `${base}/documents/${d.id}/pdf`,
-        })),
+        // Issued documents all carry a number and a time of issue; the query asked for issued ones only.
+        documents: documents.flatMap(({ id, number, kind, title, issuedAt }) =>
+          number !== null && issuedAt !== null ? [{ id, number, kind, title: title ?? null, issuedAt, pdfUrl: `${base}/documents/${id}/pdf` }] : [],
+        ),
       };
     });
   }
 
   /** An issued document of the link's job; any other document is not found. */
-  async document(token: string, documentId: string): Promise<SyncRecord> {
+  async document(token: string, documentId: string): Promise<SyncRecord<'document'>> {
     return this.queue.read(async (em) => {
       const link = await this.linkFor(em, token);
-      const doc = await em.getRepository<SyncRecord>('document').findOneBy({ id: documentId, organisationId: link.organisationId, jobId: link.jobId, deletedAt: IsNull(), issuedAt: Not(IsNull()) });
+      const doc = await syncRepository(em, 'document').findOneBy({ id: documentId, organisationId: link.organisationId, jobId: link.jobId, deletedAt: IsNull(), issuedAt: Not(IsNull()) });
       if (!doc) throw new NotFoundException('No such document on this job.');
       return doc;
     });
@@ -206,8 +174,8 @@ export class ShareLinksService {
     return link;
   }
 
-  private async jobOf(em: EntityManager, organisationId: string, jobId: string): Promise<SyncRecord> {
-    const job = await em.getRepository<SyncRecord>('job').findOneBy({ id: jobId, organisationId, deletedAt: IsNull() });
+  private async jobOf(em: EntityManager, organisationId: string, jobId: string): Promise<SyncRecord<'job'>> {
+    const job = await syncRepository(em, 'job').findOneBy({ id: jobId, organisationId, deletedAt: IsNull() });
     if (!job) throw new NotFoundException('No such job.');
     return job;
   }

@@ -8,7 +8,7 @@ import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListSitesQueryDto } from './dto/list-sites-query.dto.js';
 
 @Injectable()
-export class SitesService extends RecordsService<ListSitesQueryDto> {
+export class SitesService extends RecordsService<ListSitesQueryDto, 'site'> {
   protected readonly entity = 'site';
 
   protected listing(q: ListSitesQueryDto): Listing {
@@ -22,8 +22,8 @@ export class SitesService extends RecordsService<ListSitesQueryDto> {
   }
 
   /** Each site with its customer's name, for the office's list of sites. */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'site'>[]): Promise<OfficeRow[]> {
     const customers = await rowsById(em, user.organisationId, 'customer', rows.map((r) => r.customerId));
-    return rows.map((r) => ({ ...toSyncedRow(r), customerName: nameOf(customers.get(r.customerId as string)) }));
+    return rows.map((r) => ({ ...toSyncedRow(r), customerName: nameOf(customers.get(r.customerId)) }));
   }
 }

@@ -9,21 +9,21 @@ import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListTestResultsQueryDto } from './dto/list-test-results-query.dto.js';
 import { inTurn } from '../common/in-turn.js';
 
-const CIRCUIT_FIELDS = [
-  'boardId', 'number', 'description', 'kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'liveCsaMm2', 'cpcCsaMm2', 'lengthM',
-] as const;
-
-const pick = <K extends string>(row: SyncRecord, fields: readonly K[]) => Object.fromEntries(fields.map((f) => [f, row[f] ?? null])) as Record<K, unknown>;
+/** The circuit as recorded, as the office reads it beside a result. */
+const circuitOf = (c: SyncRecord<'circuit'>) => ({
+  boardId: c.boardId, number: c.number, description: c.description, kind: c.kind, deviceType: c.deviceType, deviceRatingA: c.deviceRatingA,
+  rcdRatingMa: c.rcdRatingMa, rcdType: c.rcdType, liveCsaMm2: c.liveCsaMm2, cpcCsaMm2: c.cpcCsaMm2, lengthM: c.lengthM,
+});
 
 /** The point changes of these results' visits on these results' circuits, in the order they were recorded. */
-async function pointChangesOf(em: EntityManager, organisationId: string, rows: SyncRecord[]): Promise<SyncRecord[]> {
-  const visitIds = [...new Set(rows.map((r) => r.visitId).filter((v): v is string => typeof v === 'string'))];
+async function pointChangesOf(em: EntityManager, organisationId: string, rows: SyncRecord<'testResult'>[]): Promise<SyncRecord<'pointChange'>[]> {
+  const visitIds = [...new Set(rows.map((r) => r.visitId))];
   if (!visitIds.length) return [];
-  return em.getRepository<SyncRecord>('pointChange').find({ where: { organisationId, visitId: In(visitIds) }, order: { id: 'ASC' } });
+  return em.getRepository<SyncRecord<'pointChange'>>('pointChange').find({ where: { organisationId, visitId: In(visitIds) }, order: { id: 'ASC' } });
 }
 
 @Injectable()
-export class TestResultsService extends RecordsService<ListTestResultsQueryDto> {
+export class TestResultsService extends RecordsService<ListTestResultsQueryDto, 'testResult'> {
   protected readonly entity = 'testResult';
 
   protected listing(q: ListTestResultsQueryDto): Listing {
@@ -40,7 +40,7 @@ export class TestResultsService extends RecordsService<ListTestResultsQueryDto> 
    * recorded now and the site's earthing. The phone's verdicts stay in `verdicts`; these are the ones documents use.
    * Beside them, the checks before the work of each point change on that circuit in the same visit.
    */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'testResult'>[]): Promise<OfficeRow[]> {
     const org = user.organisationId;
     const [circuits, sites, points] = await inTurn(
       () => rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
@@ -49,14 +49,14 @@ export class TestResultsService extends RecordsService<ListTestResultsQueryDto> 
     );
     const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
     return rows.map((r) => {
-      const c = circuits.get(r.circuitId as string);
-      const board = boards.get(c?.boardId as string);
-      const circuit = c ? { id: c.id, ...pick(c, CIRCUIT_FIELDS), boardName: (board?.name as string | undefined) ?? null, label: circuitLabel(c, board) } : null;
-      const earthing = (sites.get(r.siteId as string)?.earthing as string | null | undefined) ?? null;
+      const c = circuits.get(r.circuitId);
+      const board = boards.get(c?.boardId);
+      const circuit = c ? { id: c.id, ...circuitOf(c), boardName: board?.name ?? null, label: circuitLabel(c, board) } : null;
+      const earthing = sites.get(r.siteId)?.earthing ?? null;
       const assessment = assessCircuitTest({ circuit: c ? circuitUnderTest(c) : {}, readings: readingsOf(r), earthing }, DEFAULT_RULE_SET);
       const beforeWork = points
         .filter((p) => p.visitId === r.visitId && p.circuitId === r.circuitId)
-        .map((p) => ({ pointChangeId: p.id, accessoryKind: (p.accessoryKind as string | null | undefined) ?? null, ...checksBeforeWork({ point: p, circuit: c, site: sites.get(r.siteId as string) }, DEFAULT_RULE_SET) }));
+        .map((p) => ({ pointChangeId: p.id, accessoryKind: p.accessoryKind ?? null, ...checksBeforeWork({ point: p, circuit: c, site: sites.get(r.siteId) }, DEFAULT_RULE_SET) }));
       return { ...toSyncedRow(r), circuit, earthing, assessment, beforeWork };
     });
   }

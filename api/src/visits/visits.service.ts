@@ -3,7 +3,7 @@ import { type Listing, RecordsService, type SameSiteRef } from '../records/recor
 import type { ListVisitsQueryDto } from './dto/list-visits-query.dto.js';
 
 @Injectable()
-export class VisitsService extends RecordsService<ListVisitsQueryDto> {
+export class VisitsService extends RecordsService<ListVisitsQueryDto, 'visit'> {
   protected readonly entity = 'visit';
   protected readonly sameSite: SameSiteRef[] = [{ field: 'jobId', entity: 'job' }];
 

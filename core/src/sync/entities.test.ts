@@ -1,5 +1,6 @@
 import { describe, expect, expectTypeOf, it } from 'vitest';
 import { type DraftRowOf, fieldError, isSyncEntity, type RowOf, SYNC_ENTITIES, SYNC_ENTITY_NAMES, SYNC_REGISTRY } from './entities.js';
+import type { RecordedWiremap } from '../cabling/cable-test.js';
 
 describe('synced entities', () => {
   it('covers the domain model, each with a table', () => {
@@ -61,6 +62,7 @@ describe('row types derived from the registry', () => {
     expectTypeOf<RowOf<'priceItem'>['active']>().toEqualTypeOf<boolean | null>();
     expectTypeOf<RowOf<'photo'>['tags']>().toEqualTypeOf<string[] | null>();
     expectTypeOf<RowOf<'testResult'>['verdicts']>().toEqualTypeOf<unknown>();
+    expectTypeOf<RowOf<'cableRun'>['wiremap']>().toEqualTypeOf<RecordedWiremap | null>();
     expectTypeOf<RowOf<'materialLine'>['quantity']>().toEqualTypeOf<number>();
     expectTypeOf<DraftRowOf<'note'>>().toEqualTypeOf<{ id: string; visitId: string; siteId: string; text: string }>();
     expectTypeOf<DraftRowOf<'area'>['level']>().toEqualTypeOf<string | null | undefined>();

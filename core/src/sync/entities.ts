@@ -4,6 +4,7 @@
  */
 import { POINT_LOCATIONS, RCD_CIRCUIT_KINDS } from '../electrical/rcd-required.js';
 import { INSTALLATION_METHODS } from '../rules/uk-bs7671-before-work.js';
+import type { RecordedWiremap } from '../cabling/cable-test.js';
 
 export const SYNC_ENTITY_NAMES = [
   'customer', 'site', 'area', 'board', 'circuit', 'job', 'visit', 'photo', 'note', 'cableRun', 'pointChange', 'testResult', 'document', 'conflict',
@@ -194,7 +195,7 @@ const REGISTRY = {
       endAAreaId: seen(ref('area')), endADescription: seen(str(300)), endATermination: seen(str(100)),
       endBAreaId: seen(ref('area')), endBDescription: seen(str(300)), endBTermination: seen(str(100)),
       status: seen(oneOf(...CABLE_STATUSES)), traceMethod: seen(oneOf(...TRACE_METHODS)), lengthM: seen(num(0, 10_000)),
-      nvp: seen(num(0.01, 1)), scheme: seen(oneOf('T568A', 'T568B')), wiremap: seen(json), verdict: seen(oneOf('pass', 'fail', 'check')),
+      nvp: seen(num(0.01, 1)), scheme: seen(oneOf('T568A', 'T568B')), wiremap: seen(jsonOf<RecordedWiremap>()), verdict: seen(oneOf('pass', 'fail', 'check')),
       // Round-trip time read off a TDR, from which lengthM was worked out with nvp.
       tdrNs: seen(num(0, 100_000)), linkKind: seen(oneOf(...LINK_KINDS)), testedAt: seen(when),
       // Cable runs belong to the site; this says on which visit it was last recorded, for that visit's trail.

@@ -1,4 +1,4 @@
-import { type FieldValue, type Mutation, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
+import { type ConflictFields, type DraftRowOf, type FieldValue, type Mutation, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
 import Dexie, { type Table } from 'dexie';
 
 /**
@@ -12,7 +12,7 @@ export interface RowBase {
   values: Record<string, FieldValue | undefined>;
 }
 
-/** A synced row as the screens read it: the server's fields with this phone's unsent changes on top. */
+/** Any synced row as the screens read it, field by field: for code that works on every entity (sync, outbox). */
 export interface LocalRow {
   id: string;
   createdAt?: string;
@@ -21,186 +21,36 @@ export interface LocalRow {
   [field: string]: unknown;
 }
 
-export interface CustomerRow extends LocalRow {
-  name: string;
-  email?: string | null;
-  phone?: string | null;
-  address?: string | null;
-}
-export interface SiteRow extends LocalRow {
-  customerId: string;
-  name?: string | null;
-  address: string;
-  postcode?: string | null;
-  accessNotes?: string | null;
-  earthing?: string | null;
-  zeOhm?: number | null;
-  pfcKa?: number | null;
-}
-export interface JobRow extends LocalRow {
-  siteId: string;
-  customerId: string;
-  reference?: string | null;
-  title: string;
-  status?: string | null;
-}
-export interface VisitRow extends LocalRow {
-  jobId: string;
-  siteId: string;
-  technicianIds?: string[] | null;
-  plannedStart?: string | null;
-  plannedEnd?: string | null;
-  actualStart?: string | null;
-  actualEnd?: string | null;
-  status?: string | null;
-  cautionsReadAt?: string | null;
-  workDescription?: string | null;
-  observations?: string | null;
-  departures?: string | null;
-  signedByName?: string | null;
-  signedAt?: string | null;
-  signatureSvg?: string | null;
-}
-export interface AreaRow extends LocalRow {
-  siteId: string;
-  name: string;
-  level?: string | null;
-}
-export interface BoardRow extends LocalRow {
-  siteId: string;
-  name: string;
-  description?: string | null;
-}
-export interface CircuitRow extends LocalRow {
-  siteId: string;
-  boardId: string;
-  number: string;
-  description?: string | null;
-  kind?: string | null;
-  deviceType?: string | null;
-  deviceRatingA?: number | null;
-  rcdRatingMa?: number | null;
-  rcdType?: string | null;
-  liveCsaMm2?: number | null;
-  cpcCsaMm2?: number | null;
-  lengthM?: number | null;
-}
-export interface CableRunRow extends LocalRow {
-  siteId: string;
-  label: string;
-  medium?: string | null;
-  endAAreaId?: string | null;
-  endADescription?: string | null;
-  endATermination?: string | null;
-  endBAreaId?: string | null;
-  endBDescription?: string | null;
-  endBTermination?: string | null;
-  status?: string | null;
-  traceMethod?: string | null;
-  lengthM?: number | null;
-  tdrNs?: number | null;
-  nvp?: number | null;
-  linkKind?: string | null;
-  scheme?: 'T568A' | 'T568B' | null;
-  /** { nearEnd, farEnd, shorts, opens }: the colours seen at each end's pins (end A is the near end). */
-  wiremap?: unknown;
-  verdict?: string | null;
-  testedAt?: string | null;
-  lastVisitId?: string | null;
-}
-export interface PointChangeRow extends LocalRow {
-  visitId: string;
-  siteId: string;
-  circuitId?: string | null;
-  action: string;
-  accessoryKind?: string | null;
-  fromAreaId?: string | null;
-  fromDescription?: string | null;
-  fromHeightMm?: number | null;
-  toAreaId?: string | null;
-  toDescription?: string | null;
-  toHeightMm?: number | null;
-  connection?: string | null;
-  liveCsaMm2?: number | null;
-  cpcCsaMm2?: number | null;
-  addedRouteM?: number | null;
-  fuseRatingA?: number | null;
-  loadW?: number | null;
-  beforeR1Ohm?: number | null;
-  beforeRnOhm?: number | null;
-  beforeR2Ohm?: number | null;
-  concealedRoute?: unknown;
-  supplies?: string | null;
-  location?: string | null;
-  dwelling?: boolean | null;
-  joinR1R2Ohm?: number | null;
-  ringPoints?: number | null;
-  ringUnfusedSpurs?: number | null;
-  spurFeeds?: number | null;
-  spurFromSpur?: boolean | null;
-  designCurrentA?: number | null;
-  installationMethod?: string | null;
-  ambientFactor?: number | null;
-  groupingFactor?: number | null;
-  insulationFactor?: number | null;
-}
-export interface TestResultRow extends LocalRow {
-  visitId: string;
-  siteId: string;
-  circuitId?: string | null;
-  r1Ohm?: number | null;
-  rnOhm?: number | null;
-  r2Ohm?: number | null;
-  r1r2Ohm?: number | null;
-  irLiveLiveMOhm?: number | null;
-  irLiveEarthMOhm?: number | null;
-  irTestVoltageV?: number | null;
-  polarity?: 'correct' | 'incorrect' | null;
-  zsOhm?: number | null;
-  rcdTripMs?: number | null;
-  rcdTripMs5x?: number | null;
-  rcdButton?: 'operates' | 'fails' | null;
-  instrument?: string | null;
-  testedAt?: string | null;
-  verdicts?: unknown;
-}
-export interface PhotoRow extends LocalRow {
-  visitId: string;
-  siteId: string;
-  areaId?: string | null;
-  subjectType?: string | null;
-  subjectId?: string | null;
-  caption?: string | null;
-  tags?: string[] | null;
-  takenAt?: string | null;
-  sha256?: string | null;
-  sizeBytes?: number | null;
-  width?: number | null;
-  height?: number | null;
-  /** 'waiting' until the server has the bytes and has made its sizes ('ready'), or 'refused'. */
-  uploadState?: string | null;
-}
-export interface NoteRow extends LocalRow {
-  visitId: string;
-  siteId: string;
-  text: string;
-}
+/**
+ * A synced row of one entity as the screens read it: the field registry's fields, the server's view and this
+ * phone's unsent changes on top. Optional fields may be absent on a row made on this phone.
+ */
+export type LocalRowOf<E extends SyncEntityName> = (E extends 'conflict' ? { id: string } & ConflictFields : DraftRowOf<E>) & {
+  createdAt?: string;
+  updatedAt?: string;
+  /** Who made the row, as the server recorded it (absent until it has been pulled). */
+  createdById?: string | null;
+  updatedById?: string | null;
+  _base: RowBase;
+};
 
-export interface PriceItemRow extends LocalRow {
-  name: string;
-  unit: string;
-  category?: string | null;
-  code?: string | null;
-  active?: boolean | null;
-}
-export interface MaterialLineRow extends LocalRow {
-  visitId: string;
-  siteId: string;
-  priceItemId?: string | null;
-  description: string;
-  quantity: number;
-  unit?: string | null;
-}
+export type CustomerRow = LocalRowOf<'customer'>;
+export type SiteRow = LocalRowOf<'site'>;
+export type JobRow = LocalRowOf<'job'>;
+export type VisitRow = LocalRowOf<'visit'>;
+export type AreaRow = LocalRowOf<'area'>;
+export type BoardRow = LocalRowOf<'board'>;
+export type CircuitRow = LocalRowOf<'circuit'>;
+export type CableRunRow = LocalRowOf<'cableRun'>;
+export type PointChangeRow = LocalRowOf<'pointChange'>;
+export type TestResultRow = LocalRowOf<'testResult'>;
+/** `uploadState`: 'waiting' until the server has the bytes and has made its sizes ('ready'), or 'refused'. */
+export type PhotoRow = LocalRowOf<'photo'>;
+export type NoteRow = LocalRowOf<'note'>;
+export type DocumentRow = LocalRowOf<'document'>;
+export type ConflictRow = LocalRowOf<'conflict'>;
+export type PriceItemRow = LocalRowOf<'priceItem'>;
+export type MaterialLineRow = LocalRowOf<'materialLine'>;
 
 /** A change made on this phone and not yet acknowledged by the server, in the order it was made. */
 export interface OutboxEntry extends Mutation {
@@ -329,8 +179,8 @@ export class WiretrailDb extends Dexie {
   declare cableRun: Table<CableRunRow, string>;
   declare pointChange: Table<PointChangeRow, string>;
   declare testResult: Table<TestResultRow, string>;
-  declare document: Table<LocalRow, string>;
-  declare conflict: Table<LocalRow, string>;
+  declare document: Table<DocumentRow, string>;
+  declare conflict: Table<ConflictRow, string>;
   declare priceItem: Table<PriceItemRow, string>;
   declare materialLine: Table<MaterialLineRow, string>;
   declare outbox: Table<OutboxEntry, number>;

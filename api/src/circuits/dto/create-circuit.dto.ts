@@ -34,4 +34,7 @@ export class CreateCircuitDto {
 
   @NumberField(0.5, 400, { example: 1.5, description: 'circuit protective conductor cross-section, mm²' })
   cpcCsaMm2?: number | null;
+
+  @NumberField(0, 10_000, { example: 20, description: 'one-way cable length to the furthest point, m' })
+  lengthM?: number | null;
 }

@@ -13,9 +13,12 @@ const NOT_DECOMPRESSIBLE: [number, string] = [400, 'The request body is not the 
 
 /** The body parser's refusal behind an error, whether Nest's Express adapter wrapped it in an HttpException or not. */
 function bodyRefusal(exception: unknown): [number, string] | null {
-  const err = (exception instanceof HttpException ? exception.cause : exception) as { type?: unknown; code?: unknown } | undefined;
-  if (typeof err?.type === 'string' && Object.prototype.hasOwnProperty.call(BODY_REFUSALS, err.type)) return BODY_REFUSALS[err.type]!;
-  if (typeof err?.code === 'string' && err.code.startsWith('Z_')) return NOT_DECOMPRESSIBLE;
+  const err = exception instanceof HttpException ? exception.cause : exception;
+  if (typeof err !== 'object' || err === null) return null;
+  const type = 'type' in err ? err.type : undefined;
+  const code = 'code' in err ? err.code : undefined;
+  if (typeof type === 'string' && Object.prototype.hasOwnProperty.call(BODY_REFUSALS, type)) return BODY_REFUSALS[type]!;
+  if (typeof code === 'string' && code.startsWith('Z_')) return NOT_DECOMPRESSIBLE;
   return null;
 }
 

@@ -1,7 +1,7 @@
-import { DOCUMENT_KINDS } from '@wiretrail/core';
+import { DOCUMENT_KINDS, type DocumentKind } from '@wiretrail/core';
 import { ChoiceField } from '../../records/record-fields.js';
 
-export type DocumentKind = (typeof DOCUMENT_KINDS)[number];
+export type { DocumentKind };
 
 export class IssueDocumentDto {
   @ChoiceField(DOCUMENT_KINDS, { required: true, description: 'which document to issue for the job' })

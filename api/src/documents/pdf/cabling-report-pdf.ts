@@ -28,7 +28,7 @@ export function faultWords(f: WiremapFault): string {
 }
 
 function wiremapWords(c: ScheduledCable): string {
-  if (!isTwistedPair(c.run.medium as string)) return 'Not applicable';
+  if (!isTwistedPair(c.run.medium)) return 'Not applicable';
   const w = c.assessment.wiremap;
   if (!w) return 'Not recorded';
   if (w.faults.length === 0) return w.verdict === 'pass' ? 'Correct, pin to pin' : 'Incomplete';
@@ -36,9 +36,9 @@ function wiremapWords(c: ScheduledCable): string {
 }
 
 function endWords(file: JobFile, run: ScheduledCable['run'], end: 'A' | 'B'): string {
-  const area = file.areas.get(run[`end${end}AreaId`] as string);
+  const area = file.areas.get(run[`end${end}AreaId`]);
   const termination = run[`end${end}Termination`];
-  return joined([joined([area, run[`end${end}Description`]], ': '), termination ? `(${termination as string})` : ''], ' ');
+  return joined([joined([area, run[`end${end}Description`]], ': '), termination ? `(${termination})` : ''], ' ');
 }
 
 function lengthWords(c: ScheduledCable): string {
@@ -87,10 +87,10 @@ export async function cablingReportPdf({ issue, file, cables, rules }: CablingRe
           { text: String(c.run.label), weight: 'medium' },
           endWords(file, c.run, 'A'),
           endWords(file, c.run, 'B'),
-          MEDIUM_WORDS[c.run.medium as string] ?? joined([c.run.medium]),
+          (c.run.medium && MEDIUM_WORDS[c.run.medium]) ?? joined([c.run.medium]),
           joined([c.run.scheme]),
           lengthWords(c),
-          LINK_WORDS[c.run.linkKind as string] ?? '',
+          (c.run.linkKind && LINK_WORDS[c.run.linkKind]) ?? '',
           wiremapWords(c),
           { text: VERDICT_WORDS[a.verdict], weight: 'bold', color: VERDICT_INK[a.verdict] },
           shortDateWords(c.run.testedAt, tz) || 'Not tested',

@@ -98,9 +98,9 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     ],
     circuits.map((c) => ({
       cells: [
-        { text: joined([content.boards.get(c.circuit.boardId as string), `circuit ${c.circuit.number ?? '?'}`], ', '), weight: 'medium' },
+        { text: joined([content.boards.get(c.circuit.boardId), `circuit ${c.circuit.number}`], ', '), weight: 'medium' },
         joined([c.circuit.description]),
-        KIND_WORDS[c.circuit.kind as string] ?? '',
+        (c.circuit.kind && KIND_WORDS[c.circuit.kind]) ?? '',
         deviceWords(c.circuit),
         rcdWords(c.circuit),
         conductorWords(c.circuit),
@@ -136,7 +136,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     );
   }
 
-  const texts = (field: string) => visits.map((v) => (typeof v[field] === 'string' ? (v[field] as string).trim() : '')).filter(Boolean);
+  const texts = (field: 'observations' | 'departures') => visits.map((v) => v[field]?.trim() ?? '').filter(Boolean);
   layout.heading('Observations');
   layout.paragraph(texts('observations').join('\n\n') || 'None recorded.');
   layout.heading('Departures from the standard');

@@ -45,12 +45,12 @@ export async function photoRecordPdf({ issue, file, content, images }: PhotoReco
     row.forEach(({ photo, takenBy }, j) => {
       const x = layout.left + j * (cellW + gap);
       doc.rect(x, top, cellW, imageH).fill(INK.tint);
-      const image = images.get(photo.sha256 as string);
+      const image = images.get(photo.sha256);
       if (image) doc.image(image, x, top, { fit: [cellW, imageH], align: 'center', valign: 'center' });
       layout.font('medium', 9, INK.text);
       doc.text(String(photo.caption || 'No caption'), x + 2, top + imageH + 5, { width: textW });
       layout.font('regular', 7.5, INK.muted);
-      doc.text(joined([file.areas.get(photo.areaId as string) ?? 'No area given', dateTimeWords(photo.takenAt ?? photo.createdAt, tz), takenBy], ' · '), x + 2, doc.y + 1.5, { width: textW });
+      doc.text(joined([file.areas.get(photo.areaId) ?? 'No area given', dateTimeWords(photo.takenAt ?? photo.createdAt, tz), takenBy], ' · '), x + 2, doc.y + 1.5, { width: textW });
     });
     layout.y = top + imageH + captionH + 14;
     doc.x = layout.left;

@@ -1,9 +1,7 @@
-import { JOB_STATUSES } from '@wiretrail/core';
+import { JOB_SORTS, JOB_STATUSES, type JobSort } from '@wiretrail/core';
 import { PageQueryDto } from '../../records/page-query.dto.js';
 import { ChoiceField, DateTimeField, IdField } from '../../records/record-fields.js';
 
-export const JOB_SORTS = ['reference', 'title', 'status', 'customer', 'nextVisit', 'created'] as const;
-export type JobSort = (typeof JOB_SORTS)[number];
 export const SORT_DIRECTIONS = ['asc', 'desc'] as const;
 
 /**

@@ -1,4 +1,4 @@
-import { type FieldStamp, type FieldType, type RowOf, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
+import { type ConflictFields, type FieldStamp, type FieldType, type RowOf, SYNC_ENTITIES, SYNC_ENTITY_NAMES, type SyncEntityName } from '@wiretrail/core';
 import { type EntityManager, EntitySchema, type EntitySchemaColumnOptions, type Repository } from 'typeorm';
 import { TIMESTAMP } from '../../database/column-types.js';
 
@@ -19,9 +19,8 @@ export type SyncBookkeeping = {
  * A synced row as stored: the registry's fields of the entity plus the bookkeeping. Without an entity it is the
  * loose row the sync engine walks field by field.
  */
-export type SyncRecord<E extends SyncEntityName | undefined = undefined> = E extends SyncEntityName
-  ? SyncBookkeeping & RowOf<E>
-  : SyncBookkeeping & { [field: string]: unknown };
+export type SyncRecord<E extends SyncEntityName | undefined = undefined> = SyncBookkeeping &
+  (E extends 'conflict' ? ConflictFields<Date> : E extends SyncEntityName ? RowOf<E> : { [field: string]: unknown });
 
 function columnFor(type: FieldType, required: boolean): EntitySchemaColumnOptions {
   const nullable = !required;

@@ -78,7 +78,7 @@ describe('recording a cable', () => {
     const [cable] = await db.cableRun.toArray();
     expect(cable).toMatchObject({ label: 'RC-08', siteId: ids.site, endAAreaId: ids.lounge, scheme: 'T568B', lengthM: 23, verdict: 'fail', status: 'tested', lastVisitId: ids.visit });
     expect(cable!.testedAt).toBeTruthy();
-    expect((cable!.wiremap as { farEnd: string[] }).farEnd[3]).toBe('green');
+    expect(cable!.wiremap?.farEnd[3]).toBe('green');
     expect((await db.outbox.toArray()).map((e) => e.entity)).toEqual(['cableRun']);
   });
 

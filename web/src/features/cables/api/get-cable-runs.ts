@@ -1,34 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { CableRunAssessment } from '@wiretrail/core';
+import type { CableRunAssessment, RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
 /** A cable run as the office reads it: the synced row, its ends' area names and the server's judgement of its test. */
-export interface CableRun {
-  id: string;
+export type CableRun = Omit<RowOf<'cableRun'>, 'wiremap'> & {
   version: number;
-  siteId: string;
-  label: string;
-  medium: string | null;
-  endAAreaId: string | null;
-  endADescription: string | null;
-  endATermination: string | null;
-  endBAreaId: string | null;
-  endBDescription: string | null;
-  endBTermination: string | null;
-  status: string | null;
-  traceMethod: string | null;
-  lengthM: number | null;
-  nvp: number | null;
-  tdrNs: number | null;
-  scheme: string | null;
-  linkKind: string | null;
-  verdict: string | null;
-  testedAt: string | null;
-  lastVisitId: string | null;
   endAAreaName: string | null;
   endBAreaName: string | null;
   assessment: CableRunAssessment;
-}
+};
 
 interface CableRunPage {
   items: CableRun[];

@@ -86,7 +86,7 @@ export type CableValues = z.infer<typeof cableSchema>;
 function defaults(cable: CableRunRow | null): CableValues {
   return {
     label: cable?.label ?? '',
-    medium: (cable?.medium as CableValues['medium']) ?? 'Cat6',
+    medium: cable?.medium ?? 'Cat6',
     endAAreaId: cable?.endAAreaId ?? '',
     endANewArea: '',
     endADescription: cable?.endADescription ?? '',
@@ -95,14 +95,14 @@ function defaults(cable: CableRunRow | null): CableValues {
     endBNewArea: '',
     endBDescription: cable?.endBDescription ?? '',
     endBTermination: cable?.endBTermination ?? '',
-    traceMethod: (cable?.traceMethod as CableValues['traceMethod']) ?? '',
-    status: (cable?.status as CableValues['status']) ?? 'unidentified',
+    traceMethod: cable?.traceMethod ?? '',
+    status: cable?.status ?? 'unidentified',
     scheme: cable?.scheme ?? 'T568B',
     lengthMode: cable?.tdrNs != null ? 'tdr' : 'typed',
     lengthM: readingText(cable?.lengthM),
     tdrNs: readingText(cable?.tdrNs),
     nvp: readingText(cable?.nvp),
-    linkKind: (cable?.linkKind as CableValues['linkKind']) ?? 'permanent-link',
+    linkKind: cable?.linkKind ?? 'permanent-link',
   };
 }
 

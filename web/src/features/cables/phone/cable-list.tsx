@@ -17,13 +17,13 @@ import { CABLE_STATUS_WORDS, MEDIUM_WORDS } from '../cable-words';
 import { readWiremap } from './wiremap-entry';
 
 export function endWords(cable: CableRunRow, e: 'A' | 'B', areaNames: Map<string, string>): string {
-  const area = cable[`end${e}AreaId`] as string | null | undefined;
-  return [area ? areaNames.get(area) : null, cable[`end${e}Description`] as string | null | undefined].filter(Boolean).join(', ') || 'not recorded';
+  const area = cable[`end${e}AreaId`];
+  return [area ? areaNames.get(area) : null, cable[`end${e}Description`]].filter(Boolean).join(', ') || 'not recorded';
 }
 
 export function cableVerdict(c: CableRunRow): Verdict | null {
   if (c.wiremap == null && c.lengthM == null) return null;
-  return assessCableRun({ medium: c.medium, scheme: c.scheme, wiremap: readWiremap(c.wiremap), lengthM: c.lengthM, linkKind: c.linkKind as never }).verdict;
+  return assessCableRun({ medium: c.medium, scheme: c.scheme, wiremap: readWiremap(c.wiremap), lengthM: c.lengthM, linkKind: c.linkKind }).verdict;
 }
 
 /** The site's cable runs, each with where its ends are and how its test went; they stay with the site from visit to visit. */

@@ -1,27 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ChecksBeforeWork, CircuitTestAssessment } from '@wiretrail/core';
+import type { ChecksBeforeWork, CircuitTestAssessment, RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
 /** A circuit's test results as the office reads them: the readings, the circuit as recorded, and the server's verdicts. */
-export interface TestResult {
-  id: string;
-  visitId: string;
-  siteId: string;
-  circuitId: string | null;
-  r1Ohm: number | null;
-  rnOhm: number | null;
-  r2Ohm: number | null;
-  r1r2Ohm: number | null;
-  irLiveLiveMOhm: number | null;
-  irLiveEarthMOhm: number | null;
-  irTestVoltageV: number | null;
-  polarity: string | null;
-  zsOhm: number | null;
-  rcdTripMs: number | null;
-  rcdTripMs5x: number | null;
-  rcdButton: string | null;
-  instrument: string | null;
-  testedAt: string | null;
+export type TestResult = Omit<RowOf<'testResult'>, 'verdicts'> & {
   circuit: {
     id: string;
     number: string;
@@ -38,7 +20,7 @@ export interface TestResult {
   assessment: CircuitTestAssessment;
   /** The checks before the work of each point change made on this circuit on the same visit. */
   beforeWork: Array<ChecksBeforeWork & { pointChangeId: string; accessoryKind: string | null }>;
-}
+};
 
 export const jobTestResultsQueryOptions = (jobId: string) =>
   queryOptions({

@@ -26,8 +26,8 @@ export type CircuitDetails = z.infer<typeof circuitDetailsSchema>;
 /** What the form starts from: the circuit as recorded, or blanks for a new one (a guess would be recorded as fact). */
 export function circuitDetailsOf(c: CircuitRow | null): CircuitDetails {
   return {
-    kind: (c?.kind as CircuitDetails['kind']) ?? 'ring',
-    deviceType: (c?.deviceType as CircuitDetails['deviceType']) ?? '',
+    kind: c?.kind ?? 'ring',
+    deviceType: c?.deviceType ?? '',
     deviceRatingA: readingText(c?.deviceRatingA),
     rcdRatingMa: readingText(c?.rcdRatingMa),
     rcdType: c?.rcdType ?? '',

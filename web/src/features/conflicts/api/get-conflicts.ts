@@ -1,29 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { ConflictPage } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-export interface Conflict {
-  id: string;
-  entity: string;
-  rowId: string;
-  field: string;
-  reason: 'later-edit-wins' | 'office-owned' | 'edit-beats-delete' | 'locked-by-document' | string;
-  baseVersion: number;
-  keptValue: unknown;
-  keptById: string | null;
-  keptHlc: string | null;
-  discardedValue: unknown;
-  discardedById: string | null;
-  discardedHlc: string | null;
-  resolvedAt: string | null;
-  version: number;
-}
-
-export interface ConflictPage {
-  items: Conflict[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
+// The shapes are core's, shared with the API that gives them.
+export type { Conflict, ConflictPage } from '@wiretrail/core';
 
 /** Unsettled conflicts, newest first; with a job, only those about the job, its visits and what was recorded on them. */
 export const conflictsQueryOptions = (page = 1, jobId?: string) =>

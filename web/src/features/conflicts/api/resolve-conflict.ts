@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { Conflict } from './get-conflicts';
+import type { Conflict, ConflictResolution as Resolution } from '@wiretrail/core';
 
-export type Resolution = { choice: 'kept' } | { choice: 'discarded' } | { choice: 'value'; value: unknown };
+export type { Resolution };
 
 export function resolveConflict(id: string, resolution: Resolution): Promise<Conflict> {
   return api.post<Conflict>(`/conflicts/${id}/resolve`, resolution as Record<string, unknown>);

@@ -1,26 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { JobDocument } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-export type DocumentKind = 'minor-works' | 'cabling-report' | 'photo-record';
-export type EmailState = 'queued' | 'sent' | 'failed';
-
-/** A document row as the API gives it. */
-export interface JobDocument {
-  id: string;
-  jobId: string;
-  kind: DocumentKind;
-  number: string;
-  title: string | null;
-  signerName: string | null;
-  pdfSha256: string;
-  pdfBytes: number;
-  issuedAt: string;
-  issuedById: string | null;
-  emailState: EmailState | null;
-  emailedTo: string | null;
-  emailedAt: string | null;
-  emailError: string | null;
-}
+// The shapes are core's, shared with the API that gives them.
+export type { DocumentEmailState as EmailState, DocumentKind, JobDocument } from '@wiretrail/core';
 
 /** While an e-mail is on its way, the list asks again every few seconds so the state moves on by itself. */
 const WHILE_SENDING_MS = 3000;

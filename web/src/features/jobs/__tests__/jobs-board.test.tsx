@@ -7,7 +7,7 @@ import { officeApiForEachTest, sentBy } from '@/testing/office-api';
 import type { Job } from '../api/get-jobs';
 import { JobsBoard } from '../components/jobs-board';
 
-const job = (reference: string, status: string, title: string): Job => ({
+const job = (reference: string, status: Job['status'], title: string): Job => ({
   id: `01900000-0000-7000-8000-0000000000${reference.slice(-2)}`, version: 3, siteId: 's1', customerId: 'c1', reference, title, status, description: null,
   customerName: 'Hannah Greaves', siteName: 'Orchard Rise', nextVisitStart: null, technicianIds: ['t1'],
 });

@@ -1,12 +1,9 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { JOB_STATUSES } from '@wiretrail/core';
+import type { JobStatusCounts } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 import { type JobQuery, jobSearchParams } from './get-jobs';
 
-export interface JobStatusCounts {
-  counts: Record<(typeof JOB_STATUSES)[number], number>;
-  total: number;
-}
+export type { JobStatusCounts } from '@wiretrail/core';
 
 export type JobFilters = Pick<JobQuery, 'search' | 'customerId' | 'technicianId' | 'from' | 'to'>;
 

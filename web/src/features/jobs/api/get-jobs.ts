@@ -1,35 +1,10 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { JobListing as Job, JobPage, JobSort } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-export interface Job {
-  id: string;
-  version: number;
-  siteId: string;
-  customerId: string;
-  reference: string | null;
-  title: string;
-  status: string | null;
-  description: string | null;
-  createdAt?: string;
-  /** Added by the server for the office's lists. */
-  customerName?: string | null;
-  siteName?: string | null;
-  /** The earliest visit neither finished nor cancelled. */
-  nextVisitStart?: string | null;
-  visitCount?: number;
-  /** Who is booked on the job's visits that are not cancelled. */
-  technicianIds?: string[];
-}
-
-export interface JobPage {
-  items: Job[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
-export const JOB_SORTS = ['reference', 'title', 'status', 'customer', 'nextVisit', 'created'] as const;
-export type JobSort = (typeof JOB_SORTS)[number];
+// The shapes are core's, shared with the API that gives them.
+export type { JobListing as Job, JobPage, JobSort } from '@wiretrail/core';
+export { JOB_SORTS } from '@wiretrail/core';
 
 /** What the board and the table ask the server for; `from` and `to` are ISO times with their zone. */
 export interface JobQuery {

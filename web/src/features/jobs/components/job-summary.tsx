@@ -7,7 +7,7 @@ import Alert from '@mui/material/Alert';
 import { JOB_STATUSES } from '@wiretrail/core';
 import type { Job } from '../api/get-jobs';
 import { useUpdateJob } from '../api/update-job';
-import { JOB_STATUS_HINTS, type JobStatus, jobStatusWords } from '../job-status';
+import { JOB_STATUS_HINTS, jobStatusWords } from '../job-status';
 import { visitWhen } from './job-when';
 
 /** Where the job stands, and the status the office moves it on with. */
@@ -22,8 +22,11 @@ export function JobSummary({ job }: { job: Job }) {
           label="Status"
           value={job.status ?? ''}
           disabled={update.isPending}
-          onChange={(e) => update.mutate({ id: job.id, changes: { status: e.target.value } })}
-          helperText={job.status ? JOB_STATUS_HINTS[job.status as JobStatus] : 'Not set'}
+          onChange={(e) => {
+            const status = JOB_STATUSES.find((s) => s === e.target.value);
+            if (status) update.mutate({ id: job.id, changes: { status } });
+          }}
+          helperText={job.status ? JOB_STATUS_HINTS[job.status] : 'Not set'}
         >
           {JOB_STATUSES.map((s) => (
             <MenuItem key={s} value={s}>

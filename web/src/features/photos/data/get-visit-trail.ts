@@ -76,7 +76,7 @@ export async function getVisitTrail(visit: VisitRow): Promise<VisitTrail> {
     ...circuits
       .filter((c) => {
         const t = c.createdAt ? Date.parse(c.createdAt) : NaN;
-        const by = c.createdById as string | null | undefined;
+        const by = c.createdById;
         return window !== null && t >= window[0] && t < window[1] && (!by || (visit.technicianIds ?? []).includes(by));
       })
       .map((circuit) => ({ kind: 'circuit' as const, id: circuit.id, at: circuit.createdAt ?? '', circuit })),

@@ -1,35 +1,16 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ChecksBeforeWork } from '@wiretrail/core';
+import type { ChecksBeforeWork, RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
 /** A point added, moved, removed or replaced on a visit, with the names of its circuit and areas. */
-export interface PointChange {
-  id: string;
-  visitId: string;
-  siteId: string;
-  circuitId: string | null;
-  action: string;
-  accessoryKind: string | null;
-  fromAreaId: string | null;
-  fromDescription: string | null;
-  fromHeightMm: number | null;
-  toAreaId: string | null;
-  toDescription: string | null;
-  toHeightMm: number | null;
-  connection: string | null;
-  liveCsaMm2: number | null;
-  cpcCsaMm2: number | null;
-  addedRouteM: number | null;
-  fuseRatingA: number | null;
-  loadW: number | null;
-  concealedRoute: unknown;
+export type PointChange = Omit<RowOf<'pointChange'>, 'beforeR1Ohm' | 'beforeRnOhm' | 'beforeR2Ohm'> & {
   fromAreaName: string | null;
   toAreaName: string | null;
   circuitLabel: string | null;
   visitPlannedStart: string | null;
   /** The server's checks before the work, worked out by core's rule as the phone does. */
   beforeWork: ChecksBeforeWork;
-}
+};
 
 export const jobPointChangesQueryOptions = (jobId: string) =>
   queryOptions({

@@ -87,10 +87,10 @@ export type PointValues = z.infer<typeof pointSchema>;
 
 function defaults(point: PointChangeRow | null): PointValues {
   return {
-    action: (point?.action as PointValues['action']) ?? 'move',
+    action: point?.action ?? 'move',
     accessoryKind: point?.accessoryKind ?? '',
     circuitId: point?.circuitId ?? '',
-    connection: (point?.connection as PointValues['connection']) ?? '',
+    connection: point?.connection ?? '',
     fromAreaId: point?.fromAreaId ?? '',
     fromDescription: point?.fromDescription ?? '',
     fromHeightMm: readingText(point?.fromHeightMm),

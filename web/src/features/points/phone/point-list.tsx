@@ -13,9 +13,9 @@ import { useVisitPoints } from '../data/get-visit-points';
 import { ACTION_WORDS, CONNECTION_WORDS } from '../point-words';
 
 export function placeWords(p: PointChangeRow, side: 'from' | 'to', areaNames: Map<string, string>): string {
-  const area = p[`${side}AreaId`] as string | null | undefined;
-  const height = p[`${side}HeightMm`] as number | null | undefined;
-  return [area ? areaNames.get(area) : null, p[`${side}Description`] as string | null | undefined, height != null ? `${height} mm up` : null].filter(Boolean).join(', ');
+  const area = p[`${side}AreaId`];
+  const height = p[`${side}HeightMm`];
+  return [area ? areaNames.get(area) : null, p[`${side}Description`], height != null ? `${height} mm up` : null].filter(Boolean).join(', ');
 }
 
 /** The points changed on this visit, in the order they were recorded. */

@@ -1,15 +1,9 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-export interface Visit {
-  id: string;
-  jobId: string;
-  siteId: string;
-  technicianIds: string[] | null;
-  plannedStart: string | null;
-  plannedEnd: string | null;
-  status: 'planned' | 'on-site' | 'finished' | 'cancelled' | null;
-}
+/** A visit as the schedule reads it. */
+export type Visit = Pick<RowOf<'visit'>, 'id' | 'jobId' | 'siteId' | 'technicianIds' | 'plannedStart' | 'plannedEnd' | 'status'>;
 
 export interface Job {
   id: string;

@@ -10,7 +10,7 @@ import { JobShareLinks } from '../components/job-share-links';
 const JOB = '01900000-0000-7000-8000-000000000010';
 const URL_MADE = 'https://larkfield.wiretrail.example/shared/AbCdEfGhIjKlMnOpQrStUvWxYz0123456789-_abcde';
 const link = (n: number, extra: Partial<ShareLink>): ShareLink => ({
-  id: `01900000-0000-7000-8000-00000000003${n}`, jobId: JOB, label: null, createdAt: '2026-03-10T09:00:00.000Z', expiresAt: '2026-04-09T09:00:00.000Z',
+  id: `01900000-0000-7000-8000-00000000003${n}`, jobId: JOB, label: null, createdAt: '2026-03-10T09:00:00.000Z', createdById: '01900000-0000-7000-8000-000000000001', expiresAt: '2026-04-09T09:00:00.000Z',
   revokedAt: null, lastOpenedAt: null, openCount: 0, state: 'active', ...extra,
 });
 

@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { jobShareLinksQueryOptions, type ShareLink } from './get-job-share-links';
+import type { NewShareLink } from '@wiretrail/core';
+import { jobShareLinksQueryOptions } from './get-job-share-links';
 
 /** The answer is the only time the link's address is known: the server keeps just a fingerprint of it. */
-export type NewShareLink = ShareLink & { url: string };
+export type { NewShareLink };
 
 export function useCreateShareLink(jobId: string) {
   const queryClient = useQueryClient();

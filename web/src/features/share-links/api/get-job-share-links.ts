@@ -1,19 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { ShareLinkView } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-export type ShareLinkState = 'active' | 'expired' | 'revoked';
-
-export interface ShareLink {
-  id: string;
-  jobId: string;
-  label: string | null;
-  createdAt: string;
-  expiresAt: string;
-  revokedAt: string | null;
-  lastOpenedAt: string | null;
-  openCount: number;
-  state: ShareLinkState;
-}
+export type { ShareLinkState } from '@wiretrail/core';
+/** A share link as the office lists it; core's, shared with the API. */
+export type ShareLink = ShareLinkView;
 
 export const jobShareLinksQueryOptions = (jobId: string) =>
   queryOptions({

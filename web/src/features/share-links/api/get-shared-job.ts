@@ -1,14 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { SharedJob } from '@wiretrail/core';
 import { ApiError, apiRequest } from '@/lib/api-client';
 
-/** What a customer's link shows; see the API's SharedJob. */
-export interface SharedJob {
-  expiresAt: string;
-  contractor: { name: string; phone: string | null; email: string | null };
-  job: { reference: string | null; title: string; status: string | null; customerName: string | null; siteAddress: string };
-  photos: Array<{ id: string; caption: string | null; area: string | null; takenAt: string | null; thumbUrl: string; displayUrl: string }>;
-  documents: Array<{ id: string; number: string; kind: string; title: string | null; issuedAt: string; pdfUrl: string }>;
-}
+// The reply's shape is core's, shared with the API that gives it.
+export type { SharedJob } from '@wiretrail/core';
 
 export const sharedJobQueryOptions = (token: string) =>
   queryOptions({

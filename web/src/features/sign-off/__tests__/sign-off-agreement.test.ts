@@ -15,7 +15,7 @@ afterEach(tidyUp);
 describe('the sign-off gives the answer the server gives', () => {
   for (const c of MINOR_WORKS_CASES) {
     it(c.name, async () => {
-      await db.site.update(ids.site, { earthing: c.earthing });
+      await db.table('site').update(ids.site, { earthing: c.earthing });
       await db.board.put({ id: ids.board, siteId: ids.site, name: 'Consumer unit', ...base });
       await db.table('circuit').bulkPut(c.circuits.map((row) => ({ ...row, siteId: ids.site, boardId: ids.board, ...base })));
       await db.table('visit').put({ ...c.visit, jobId: ids.job, siteId: ids.site, ...base });

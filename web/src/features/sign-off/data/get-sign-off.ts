@@ -42,7 +42,7 @@ export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
   );
   const mine = cables
     .filter((c) => c.lastVisitId === visit.id)
-    .map((cable) => ({ cable, assessment: assessCableRun({ medium: cable.medium, scheme: cable.scheme, wiremap: cable.wiremap as never, lengthM: cable.lengthM, linkKind: cable.linkKind as never }) }))
+    .map((cable) => ({ cable, assessment: assessCableRun({ medium: cable.medium, scheme: cable.scheme, wiremap: cable.wiremap, lengthM: cable.lengthM, linkKind: cable.linkKind }) }))
     .sort((a, b) => a.cable.label.localeCompare(b.cable.label, 'en-GB', { numeric: true }));
   for (const { cable, assessment } of mine) {
     if (assessment.verdict === 'fail') {

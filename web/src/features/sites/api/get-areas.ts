@@ -1,13 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 import type { RecordPage } from './get-customers';
 
-export interface Area {
-  id: string;
-  siteId: string;
-  name: string;
-  level: string | null;
-}
+/** An area as the office reads it: the registry's fields. */
+export type Area = RowOf<'area'>;
 
 export const siteAreasQueryOptions = (siteId: string) =>
   queryOptions({

@@ -1,29 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 import type { RecordPage } from './get-customers';
 
-export interface Board {
-  id: string;
-  siteId: string;
-  areaId: string | null;
-  name: string;
-  description: string | null;
-}
+/** A board as the office reads it: the registry's fields. */
+export type Board = RowOf<'board'>;
 
-export interface Circuit {
-  id: string;
-  siteId: string;
-  boardId: string;
-  number: string;
-  description: string | null;
-  kind: string | null;
-  deviceType: string | null;
-  deviceRatingA: number | null;
-  rcdRatingMa: number | null;
-  rcdType: string | null;
-  liveCsaMm2: number | null;
-  cpcCsaMm2: number | null;
-}
+/** A circuit as the office reads it: the registry's fields. */
+export type Circuit = RowOf<'circuit'>;
 
 export const siteBoardsQueryOptions = (siteId: string) =>
   queryOptions({

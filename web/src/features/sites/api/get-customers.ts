@@ -1,16 +1,9 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-export interface Customer {
-  id: string;
-  name: string;
-  email: string | null;
-  phone: string | null;
-  address: string | null;
-  notes: string | null;
-  /** The customer's sites, by name. */
-  sites?: { id: string; name: string }[];
-}
+/** A customer as the office reads it: the registry's fields, with the customer's sites by name. */
+export type Customer = RowOf<'customer'> & { sites?: { id: string; name: string }[] };
 
 export interface RecordPage<T> {
   items: T[];

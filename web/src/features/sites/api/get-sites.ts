@@ -1,19 +1,10 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 import type { RecordPage } from './get-customers';
 
-export interface Site {
-  id: string;
-  customerId: string;
-  name: string | null;
-  address: string;
-  postcode: string | null;
-  earthing: string | null;
-  zeOhm: number | null;
-  pfcKa: number | null;
-  accessNotes: string | null;
-  customerName?: string | null;
-}
+/** A site as the office reads it: the registry's fields, with its customer's name. */
+export type Site = RowOf<'site'> & { customerName?: string | null };
 
 export interface SiteListQuery {
   search?: string;

@@ -1,18 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { JobVisit } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
-export interface JobVisit {
-  id: string;
-  jobId: string;
-  technicianIds: string[] | null;
-  plannedStart: string | null;
-  plannedEnd: string | null;
-  status: string | null;
-  actualStart?: string | null;
-  actualEnd?: string | null;
-  signedByName?: string | null;
-  signedAt?: string | null;
-}
+// The shape is core's, shared with the API that gives it.
+export type { JobVisit } from '@wiretrail/core';
 
 export const jobVisitsQueryOptions = (jobId: string) =>
   queryOptions({
