@@ -5,10 +5,9 @@ import { InvalidInputError, requireNonNegative, requireOneOf, type CheckResult }
 import type { RuleSet } from '../rules/rule-set.js';
 import { DEFAULT_RULE_SET } from '../rules/uk-bs7671-2018-a2-2022.js';
 
-export const RCD_CIRCUIT_KINDS = ['sockets', 'lighting', 'shower', 'cooker', 'fixed-equipment', 'outdoor-mobile'] as const;
-export type RcdCircuitKind = (typeof RCD_CIRCUIT_KINDS)[number];
-export const POINT_LOCATIONS = ['indoors', 'bathroom', 'outdoors'] as const;
-export type PointLocation = (typeof POINT_LOCATIONS)[number];
+import { POINT_LOCATIONS, RCD_CIRCUIT_KINDS, type PointLocation, type RcdCircuitKind } from './before-work-choices.js';
+
+export { POINT_LOCATIONS, RCD_CIRCUIT_KINDS, type PointLocation, type RcdCircuitKind };
 /** Who uses the socket-outlets: ordinary persons, or skilled or instructed persons (the exception needs a risk assessment). */
 export const USER_SKILLS = ['ordinary', 'skilled'] as const;
 export type UserSkill = (typeof USER_SKILLS)[number];

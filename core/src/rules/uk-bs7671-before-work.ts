@@ -3,14 +3,15 @@
  * rating factors, k values for the cpc, where 30 mA RCDs, AFDDs and SPDs are called for, and the customary
  * limits for spurs from a ring final circuit. Part of the United Kingdom rule set.
  */
+import { INSTALLATION_METHODS, type InstallationMethod } from '../electrical/before-work-choices.js';
 import type { SourcedLimit } from './rule-set.js';
+
+export { INSTALLATION_METHODS, type InstallationMethod };
 
 const BS7671 = 'BS 7671:2018+A2:2022';
 /** The edition of the guide the spur limits are quoted from; its section number is as quoted on public pages. */
 const OSG = 'IET On-Site Guide (BS 7671:2018+A2:2022 edition) §7.2.2';
 
-export const INSTALLATION_METHODS = ['A', 'C', '100', '101', '102', '103'] as const;
-export type InstallationMethod = (typeof INSTALLATION_METHODS)[number];
 
 export interface InstallationMethodTable {
   readonly source: string;

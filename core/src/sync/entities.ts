@@ -2,8 +2,7 @@
  * The synced entities of Wiretrail and their fields, shared by the server (validation, merge policy, scope)
  * and the app (local tables). Field names are the product's camelCase names.
  */
-import { POINT_LOCATIONS, RCD_CIRCUIT_KINDS } from '../electrical/rcd-required.js';
-import { INSTALLATION_METHODS } from '../rules/uk-bs7671-before-work.js';
+import { INSTALLATION_METHODS, POINT_LOCATIONS, RCD_CIRCUIT_KINDS } from '../electrical/before-work-choices.js';
 import type { RecordedWiremap } from '../cabling/cable-test.js';
 
 export const SYNC_ENTITY_NAMES = [
