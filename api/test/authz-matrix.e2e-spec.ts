@@ -43,6 +43,7 @@ describe('authorisation matrix: every route × every role × own and other organ
     for (const expected of [
       'post /api/auth/sign-in', 'get /api/users', 'post /api/sync/push', 'get /api/sync/pull', 'get /api/conflicts', 'get /api/circuits', 'patch /api/visits/:id',
       'post /api/jobs/:id/documents', 'get /api/jobs/:id/documents', 'get /api/documents/:id', 'get /api/documents/:id/pdf', 'post /api/documents/:id/send',
+      'get /api/jobs/:id/held-changes', 'post /api/documents/:id/revisions',
       'post /api/jobs/:id/share-links', 'get /api/jobs/:id/share-links', 'post /api/share-links/:id/revoke',
       'get /api/shared/:token', 'get /api/shared/:token/photos/:photoId/thumb', 'get /api/shared/:token/photos/:photoId/display', 'get /api/shared/:token/documents/:documentId/pdf',
       'get /api/jobs/status-counts', 'get /api/cable-runs', 'get /api/cable-runs/:id', 'patch /api/cable-runs/:id',

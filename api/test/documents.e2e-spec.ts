@@ -21,7 +21,8 @@ describe('issuing documents', () => {
   let officeView: DeviceMirror;
   let certificate: { id: string; number: string; pdfSha256: string };
 
-  const issue = (s: Session, jobId: string, kind: string) => t.http.post(`/api/jobs/${jobId}/documents`).set(bearer(s)).send({ kind });
+  const issue = (s: Session, jobId: string, kind: string, coverage?: string) =>
+    t.http.post(`/api/jobs/${jobId}/documents`).set(bearer(s)).send({ kind, ...(coverage ? { coverage } : {}) });
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -86,12 +87,12 @@ describe('issuing documents', () => {
     expect(text).not.toMatch(/\bFail\b/);
   });
 
-  it("issues a cabling report of the site's cable schedule, naming each wiremap fault and its pins", async () => {
+  it("issues a cabling report of the job's cables, naming each wiremap fault and its pins", async () => {
     const res = await issue(office, orchard.id, 'cabling-report').expect(201);
-    expect(res.body).toMatchObject({ kind: 'cabling-report', number: 'CR-0001', signerName: 'Dan Whitlow' });
+    expect(res.body).toMatchObject({ kind: 'cabling-report', number: 'CR-0001', signerName: 'Dan Whitlow', coverage: 'job', notices: [] });
     const text = await pdfText((await downloadPdf(t, office, res.body.id)).bytes);
     for (const expected of [
-      'Cabling test report', 'CR-0001', 'LKD-20417', '2 cables on this site: 1 pass, 0 fail, 1 to check.',
+      'Wiremap and length record', 'CR-0001', 'LKD-20417', '2 cables recorded or tested on this job’s visits: 1 correct, 0 with a fault, 1 to check.',
       'OR-01', 'Cupboard under stairs: Router shelf beside the consumer unit (RJ45 plug, patched to router port 2)',
       'Front bedroom: Single data outlet beside the new socket, left of the window', 'Cat6', 'T568B', 'Permanent link', 'Correct, pin to pin',
       '17.4 m (≤ 90 m)', // ANSI/TIA-568 and ISO/IEC 11801: permanent link at most 90 m
@@ -111,15 +112,18 @@ describe('issuing documents', () => {
       }, { deviceId: 'tech2-phone' }),
     ]);
     expect(made!.status).toBe('applied');
-    const faulty = await issue(office, harbour.id, 'cabling-report').expect(201);
+    // The office chooses the site's whole schedule: the cables already there were recorded on no visit of this job.
+    const faulty = await issue(office, harbour.id, 'cabling-report', 'site').expect(201);
     expect(faulty.body.number).toBe('CR-0002');
+    expect(faulty.body.notices).toEqual([expect.stringMatching(/^RC-03 fails: /)]);
     const report = await pdfText((await downloadPdf(t, office, faulty.body.id)).bytes);
-    expect(report).toContain('3 cables on this site: 0 pass, 1 fail, 2 to check.');
+    expect(report).toContain('3 cables on this site (the site’s whole schedule): 0 correct, 1 with a fault, 2 to check.');
     expect(report).toContain('Crossed pair: pins 1, 2, 3, 6 (near end)');
     expect(report).toContain('The pair on pins 1,2 lands on pins 3,6 at the other end.');
     // ANSI/TIA-568 and ISO/IEC 11801: 96.5 m is over the 90 m permanent-link limit.
     expect(report).toContain('96.5 m (≤ 90 m)');
-    expect(report).toMatch(/RC-03 .*Fail/);
+    expect(report).toMatch(/RC-03 .*Fault/);
+    expect(report).not.toMatch(/\bPass\b/);
     // RC-02 is still only traced: what it lacks is said.
     expect(report).toContain('Still to record: the termination scheme (T568A or T568B), the wiremap, the length.');
   });
@@ -158,10 +162,10 @@ describe('issuing documents', () => {
     expect(officeView.one('testResult', (r) => r.id === result.id).zsOhm).toBe(0.63);
     // The office is held to it too, and the certificate itself does not change.
     const patch = await t.http.patch(`/api/visits/${visit.id}`).set(bearer(office)).send({ plannedEnd: '2030-01-01T12:00:00Z' }).expect(409);
-    expect(patch.body.message).toMatch(/issued document/);
+    expect(patch.body.message).toMatch(/printed on MW-0001, an issued document/);
     const doc = officeView.one('document', (d) => d.id === certificate.id);
     const [renumber] = await push(t, office, 'office-desk', [mutation('document', doc.id, { number: 'MW-9999', pdfSha256: 'f'.repeat(64) }, { baseVersion: doc.version })]);
-    expect(renumber!.status).toBe('merged');
+    expect(renumber!.status).toBe('rejected');
     const after = (await t.http.get(`/api/documents/${certificate.id}`).set(bearer(office)).expect(200)).body;
     expect(after).toMatchObject({ number: 'MW-0001', pdfSha256: certificate.pdfSha256 });
     expect(sha256((await downloadPdf(t, office, certificate.id)).bytes)).toBe(certificate.pdfSha256);
@@ -256,7 +260,7 @@ describe('issuing documents', () => {
     const site = (await t.http.post('/api/sites').set(bearer(oakmere)).send({ customerId: customer.id, address: '3 Mill Lane, Oakmere Cross' }).expect(201)).body;
     const job = (await t.http.post('/api/jobs').set(bearer(oakmere)).send({ siteId: site.id, customerId: customer.id, title: 'Data points for the tills' }).expect(201)).body;
     await push(t, oakmere, 'oakmere-desk', [mutation('cableRun', uuidv7(), { siteId: site.id, label: 'T-01', medium: 'Cat6', lengthM: 12 })]);
-    const theirs = await issue(oakmere, job.id, 'cabling-report').expect(201);
+    const theirs = await issue(oakmere, job.id, 'cabling-report', 'site').expect(201);
     expect(theirs.body.number).toBe('CR-0001');
   });
 

@@ -391,23 +391,22 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
       expect(messages(board.body)).toMatch(/board.areaId points at an area that does not exist/);
     });
 
-    it('turns an edit of a record behind an issued document into a conflict, answering 409', async () => {
-      const job = await create('/api/jobs', { siteId: seed.orchard!.id, customerId: seed.greaves!.id, title: 'Periodic inspection', status: 'paperwork' });
+    it('turns an edit of a record behind an issued document into a conflict, answering 409 naming the document', async () => {
+      const job = await create('/api/jobs', { siteId: seed.orchard!.id, customerId: seed.greaves!.id, title: 'Cable survey', status: 'paperwork' });
       const visit = await create('/api/visits', { jobId: job.id, siteId: seed.orchard!.id, plannedStart: '2030-02-01T09:00:00Z', status: 'finished' });
-      const issued = await push(office, {
-        entity: 'document', id: uuidv7(), baseVersion: 0,
-        set: { jobId: job.id, siteId: seed.orchard!.id, kind: 'minor-works', number: 'EIC-0001', issuedAt: new Date().toISOString() },
-      });
-      expect(issued.body.results[0].status).toBe('applied');
+      // The site's whole cable schedule, chosen at issue: this job's visit recorded none of them.
+      const issued = (await t.http.post(`/api/jobs/${job.id}/documents`).set(as(office)).send({ kind: 'cabling-report', coverage: 'site' }).expect(201)).body;
+      const cable = (await list(office, `/api/cable-runs?siteId=${seed.orchard!.id}`)).items.find((c) => c.label === 'OR-01')!;
 
-      const res = await t.http.patch(`/api/visits/${visit.id}`).set(as(office)).send({ plannedStart: '2030-02-02T09:00:00Z' }).expect(409);
+      const res = await t.http.patch(`/api/cable-runs/${cable.id}`).set(as(office)).send({ endBDescription: 'Front bedroom, right of the window' }).expect(409);
       expectErrorBody(res.body, 409);
-      expect(res.body.message).toMatch(/issued document/);
-      expect(res.body.conflictIds).toHaveLength(1);
-      expect((await t.http.get(`/api/visits/${visit.id}`).set(as(office)).expect(200)).body.plannedStart).toBe('2030-02-01T09:00:00.000Z');
+      expect(res.body.message).toBe(`This cableRun is printed on ${issued.number}, an issued document, so the change was not made; it waits beside the issued value for review. To correct it, revise ${issued.number}.`);
+      expect(res.body).toMatchObject({ heldBy: issued.number, conflictIds: [expect.any(String)] });
+      expect((await t.http.get(`/api/cable-runs/${cable.id}`).set(as(office)).expect(200)).body.endBDescription).toBe(cable.endBDescription);
       const conflict = (await t.http.get(`/api/conflicts/${res.body.conflictIds[0]}`).set(as(office)).expect(200)).body;
-      expect(conflict).toMatchObject({ entity: 'visit', rowId: visit.id, field: 'plannedStart', reason: 'locked-by-document', discardedValue: '2030-02-02T09:00:00.000Z' });
-      // The job itself is not behind the document and can still be closed.
+      expect(conflict).toMatchObject({ entity: 'cableRun', rowId: cable.id, field: 'endBDescription', reason: 'locked-by-document', discardedValue: 'Front bedroom, right of the window' });
+      // The job and its visit are not printed on the report and can still change.
+      await t.http.patch(`/api/visits/${visit.id}`).set(as(office)).send({ plannedStart: '2030-02-02T09:00:00Z' }).expect(200);
       await t.http.patch(`/api/jobs/${job.id}`).set(as(office)).send({ status: 'done' }).expect(200);
     });
   });

@@ -59,7 +59,6 @@ describe('sync: push and pull', () => {
       mutation('cableRun', make('cableRun'), { siteId: ids.site!, label: 'G-01', medium: 'Cat6A', status: 'traced', traceMethod: 'tone-and-probe', wiremap: { near: [1, 2, 3, 4, 5, 6, 7, 8] } }),
       mutation('pointChange', make('pointChange'), { visitId: ids.visit!, siteId: ids.site!, circuitId: ids.circuit!, action: 'add', connection: 'radial', toDescription: 'Above the bench', toHeightMm: 1100 }),
       mutation('testResult', make('testResult'), { visitId: ids.visit!, siteId: ids.site!, circuitId: ids.circuit!, r1r2Ohm: 0.41, zsOhm: 0.69, irLiveEarthMOhm: 200, irTestVoltageV: 500, polarity: 'correct', instrument: 'MFT serial 0001' }),
-      mutation('document', make('document'), { jobId: ids.job!, siteId: ids.site!, kind: 'minor-works', number: 'MW-0099' }),
     ];
     const results = await push(t, office, 'office-desk-1', batch);
     expect(results.map((r) => r.status)).toEqual(batch.map(() => 'applied'));
@@ -244,48 +243,33 @@ describe('sync: push and pull', () => {
 
   it('turns an edit of a record behind an issued certificate into a conflict for review', async () => {
     const earlier = officeView.one('visit', (r) => r.status === 'finished');
-    const note = officeView.one('note', (r) => r.visitId === earlier.id);
-    await push(t, office, 'office-desk-1', [
-      mutation('document', uuidv7(), { jobId: earlier.jobId as string, siteId: earlier.siteId as string, kind: 'minor-works', number: 'MW-0033', issuedAt: '2026-11-27T16:00:00.000Z' }),
-    ]);
-    const [edit] = await push(t, tech2, 'tech2-phone', [mutation('note', note.id, { text: 'Changed after signing' }, { baseVersion: note.version })]);
-    expect(edit).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)] });
+    const result = officeView.one('testResult', (r) => r.visitId === earlier.id);
+    const issued = await t.http.post(`/api/jobs/${earlier.jobId as string}/documents`).set('authorization', `Bearer ${office.accessToken}`).send({ kind: 'minor-works' });
+    expect(issued.status).toBe(201);
+    const [edit] = await push(t, tech2, 'tech2-phone', [mutation('testResult', result.id, { zsOhm: 0.71 }, { baseVersion: result.version })]);
+    expect(edit).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)], heldBy: issued.body.number });
     await officeView.pullAll(t, office);
-    expect(officeView.rows.get(`note:${note.id}`)!.text).toBe(note.text);
-    expect(officeView.one('conflict', (r) => r.id === edit!.conflictIds![0])).toMatchObject({ reason: 'locked-by-document', discardedValue: 'Changed after signing' });
+    expect(officeView.rows.get(`testResult:${result.id}`)!.zsOhm).toBe(result.zsOhm);
+    expect(officeView.one('conflict', (r) => r.id === edit!.conflictIds![0])).toMatchObject({ reason: 'locked-by-document', discardedValue: 0.71 });
     const res = await t.http.post(`/api/conflicts/${edit!.conflictIds![0]}/resolve`).set('authorization', `Bearer ${office.accessToken}`).send({ choice: 'discarded' });
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/issued document/);
   });
 
-  it('judges each edit against the documents as they stand at that point of its batch', async () => {
+  it('refuses a document in a push, alone, and applies the rest of the batch', async () => {
     const orchard = site('Orchard Rise');
-    const [jobId, visitId, noteId, documentId] = [uuidv7(), uuidv7(), uuidv7(), uuidv7()];
+    const [jobId, visitId, noteId] = [uuidv7(), uuidv7(), uuidv7()];
     const made = await push(t, office, 'office-desk-1', [
       mutation('job', jobId, { siteId: orchard.id, customerId: orchard.customerId as string, title: 'Porch light', status: 'booked' }),
       mutation('visit', visitId, { jobId, siteId: orchard.id, technicianIds: [tech2.user.id], plannedStart: '2026-12-10T09:00:00.000Z', status: 'planned' }),
       mutation('note', noteId, { visitId, siteId: orchard.id, text: 'Porch light on the landing circuit.' }),
-      mutation('document', documentId, { jobId, siteId: orchard.id, kind: 'minor-works', number: 'MW-0101' }),
+      mutation('document', uuidv7(), { jobId, siteId: orchard.id, kind: 'minor-works', number: 'MW-0101', issuedAt: '2026-12-10T15:00:00.000Z' }),
+      mutation('note', noteId, { text: 'After the refused document' }, { baseVersion: 0 }),
     ]);
-    const [note, document] = [made[2]!, made[3]!];
-    // Issued in the middle of a batch: the edit before it goes through, the edit after it is held.
-    const issued = await push(t, office, 'office-desk-1', [
-      mutation('note', noteId, { text: 'Before issue' }, { baseVersion: note.version }),
-      mutation('document', documentId, { issuedAt: '2026-12-10T15:00:00.000Z' }, { baseVersion: document.version }),
-      mutation('note', noteId, { text: 'After issue' }, { baseVersion: note.version }),
-    ]);
-    expect(issued.map((r) => r.status)).toEqual(['applied', 'applied', 'merged']);
-    // Withdrawn in the middle of a batch: the edit after it goes through again.
-    const withdrawn = await push(t, office, 'office-desk-1', [
-      mutation('note', noteId, { text: 'Still held' }, { baseVersion: issued[0]!.version }),
-      mutation('document', documentId, 'delete', { baseVersion: issued[1]!.version }),
-      mutation('note', noteId, { text: 'After withdrawal' }, { baseVersion: issued[0]!.version }),
-    ]);
-    expect(withdrawn.map((r) => r.status)).toEqual(['merged', 'applied', 'applied']);
+    expect(made.map((r) => r.status)).toEqual(['applied', 'applied', 'applied', 'rejected', 'applied']);
     await officeView.pullAll(t, office);
-    expect(officeView.rows.get(`note:${noteId}`)!.text).toBe('After withdrawal');
-    const held = officeView.find('conflict', (r) => r.rowId === noteId).map((r) => [r.reason, r.discardedValue]);
-    expect(held).toEqual(expect.arrayContaining([['locked-by-document', 'After issue'], ['locked-by-document', 'Still held']]));
+    expect(officeView.rows.get(`note:${noteId}`)!.text).toBe('After the refused document');
+    expect(officeView.find('document', (d) => d.number === 'MW-0101')).toEqual([]);
   });
 
   it('locks a visit signed off on site: a technician’s later edits become conflicts, new records still arrive, the office may correct', async () => {

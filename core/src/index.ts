@@ -22,6 +22,7 @@ export * from './electrical/protective-conductor.js';
 export * from './certification/circuit-test.js';
 export * from './certification/circuit-readings.js';
 export * from './certification/circuit-records.js';
+export * from './certification/circuit-words.js';
 export * from './certification/minor-works.js';
 export * from './cabling/cable-test.js';
 export * from './money/vat.js';

@@ -4,6 +4,7 @@ import { type EntityManager, In, IsNull, Not } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
+import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
@@ -36,8 +37,8 @@ export class ConflictsService {
   }
 
   /**
-   * The rows a job's conflicts can be about: the job, its visits, what was recorded on them, and the cable runs last
-   * recorded on them. Deleted rows count too, since a deletion can be what conflicted.
+   * The rows a job's conflicts can be about: the job, its visits, what was recorded on them, the cable runs last
+   * recorded on them, and every record its documents print. Deleted rows count too, since a deletion can be what conflicted.
    */
   private async rowsOfJob(em: EntityManager, organisationId: string, jobId: string): Promise<string[]> {
     const ids = async (entity: SyncEntityName, where: Record<string, unknown>) =>
@@ -49,7 +50,10 @@ export class ConflictsService {
       for (const e of ['photo', 'note', 'pointChange', 'testResult'] as const) recorded.push(...(await ids(e, { visitId: In(visitIds) })));
       recorded.push(...(await ids('cableRun', { lastVisitId: In(visitIds) })));
     }
-    return [jobId, ...visitIds, ...recorded];
+    // And what the job's documents print, site-wide records included (the site's earthing, a board, a circuit).
+    const documentIds = await ids('document', { jobId });
+    if (documentIds.length) recorded.push(...(await em.findBy(PrintedRecord, { organisationId, documentId: In(documentIds) })).map((p) => p.rowId));
+    return [...new Set([jobId, ...visitIds, ...recorded])];
   }
 
   async findOne(user: AuthUser, id: string) {

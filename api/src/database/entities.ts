@@ -6,6 +6,7 @@ import { Payment } from '../invoices/entities/payment.entity.js';
 import { PasswordReset } from '../auth/entities/password-reset.entity.js';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
 import { DocumentCounter } from '../paperwork/entities/document-counter.entity.js';
+import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { LabourRate } from '../pricing/entities/labour-rate.entity.js';
@@ -18,6 +19,6 @@ import { User } from '../users/entities/user.entity.js';
 
 /** For the migration CLI and scripts; the Nest app registers entities per feature module. */
 export const ALL_ENTITIES = [
-  Organisation, User, RefreshToken, PasswordReset, PhotoBlob, DocumentCounter, OutboxMessage, ShareLink,
+  Organisation, User, RefreshToken, PasswordReset, PhotoBlob, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
   VatRate, LabourRate, Invoice, InvoiceLine, Payment, CardCheckout, PaymentEvent, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
 ];

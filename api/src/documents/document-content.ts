@@ -4,10 +4,29 @@ import { inTurn } from '../common/in-turn.js';
 import { type JobFile, jobVisits, live } from '../paperwork/job-file.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
+import type { RecordKey } from '../sync/record-locks.js';
 import { User } from '../users/entities/user.entity.js';
 
 export interface MinorWorksContent extends MinorWorksJudgement<SyncRecord<'visit'>, SyncRecord<'testResult'>, SyncRecord<'circuit'>> {
   boards: Map<string, string>;
+  /** Every reading and point change recorded on the job's visits: the evidence behind the certificate, held with it. */
+  recorded: RecordKey[];
+}
+
+/**
+ * What a minor works certificate prints, which its lock holds: the site (earthing, Ze, PFC), the visits judged and
+ * everything recorded on the job's visits, each certified circuit and its board.
+ */
+export function minorWorksPrints(file: JobFile, content: MinorWorksContent): RecordKey[] {
+  return [
+    { entity: 'site', id: file.site.id },
+    ...content.visits.map((v) => ({ entity: 'visit' as const, id: v.id })),
+    ...content.recorded,
+    ...content.circuits.flatMap(({ circuit }) => [
+      { entity: 'circuit' as const, id: circuit.id },
+      ...(circuit.boardId ? [{ entity: 'board' as const, id: circuit.boardId }] : []),
+    ]),
+  ];
 }
 
 /** The records behind a minor works certificate, judged; see judgeMinorWorks for when it may be issued. */
@@ -22,7 +41,8 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
     () => syncRepository(em, 'board').find({ where: { siteId: file.site.id, organisationId: org } }),
   );
   const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: file.site.earthing ?? null }, rules);
-  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name])) };
+  const recorded: RecordKey[] = [...tests.map((r) => ({ entity: 'testResult' as const, id: r.id })), ...pointChanges.map((r) => ({ entity: 'pointChange' as const, id: r.id }))];
+  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name])), recorded };
 }
 
 export interface ScheduledCable {
@@ -30,15 +50,36 @@ export interface ScheduledCable {
   assessment: CableRunAssessment;
 }
 
-/** The site's cable schedule, every run judged again from its recorded wiremap and length, by label. */
-export async function loadCableSchedule(em: EntityManager, file: JobFile, rules: RuleSet): Promise<ScheduledCable[]> {
-  const runs = await syncRepository(em, 'cableRun').find({ where: { siteId: file.site.id, ...live(file.organisation.id) } });
+/**
+ * The cables a report covers, every run judged again from its recorded wiremap and length, by label: those recorded
+ * or tested on the job's visits, or the site's whole schedule when the office chose it (cables another job recorded,
+ * or one made in error there, are otherwise not this customer's report).
+ */
+export async function loadCableSchedule(em: EntityManager, file: JobFile, rules: RuleSet, coverage: 'job' | 'site'): Promise<ScheduledCable[]> {
+  const where = { siteId: file.site.id, ...live(file.organisation.id) };
+  let runs: SyncRecord<'cableRun'>[];
+  if (coverage === 'site') runs = await syncRepository(em, 'cableRun').find({ where });
+  else {
+    const visitIds = (await jobVisits(em, file)).map((v) => v.id);
+    runs = visitIds.length ? await syncRepository(em, 'cableRun').find({ where: { ...where, lastVisitId: In(visitIds) } }) : [];
+  }
   return runs
     .sort((a, b) => a.label.localeCompare(b.label, 'en-GB', { numeric: true }))
     .map((run) => ({
       run,
       assessment: assessCableRun({ medium: run.medium, scheme: run.scheme, wiremap: run.wiremap, lengthM: run.lengthM, linkKind: run.linkKind }, rules),
     }));
+}
+
+/** Each failing cable named, with what fails, for the office to see as the report is issued. */
+export function cableNotices(cables: ScheduledCable[]): string[] {
+  return cables
+    .filter((c) => c.assessment.verdict === 'fail')
+    .map((c) => {
+      const a = c.assessment;
+      const why = [...(a.wiremap?.faults ?? []).map((f) => f.note), ...(a.length && a.length.verdict === 'fail' ? [a.length.note] : []), ...a.problems];
+      return `${c.run.label} fails: ${why.length ? why.join(' ') : 'see the report.'}`;
+    });
 }
 
 /** A photo whose bytes are on the server. */

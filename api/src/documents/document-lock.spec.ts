@@ -16,11 +16,11 @@ describe('the lock of an issued document', () => {
 
   it('holds nothing of a document not issued', () => {
     expect(DOCUMENT_LOCK.locksRow!(document(null), ['number'])).toBe(false);
-    expect(DOCUMENT_LOCK.locksJob!(document(null))).toBe(false);
   });
 
-  it('holds the records of its job once issued, under its own reason', () => {
-    expect(DOCUMENT_LOCK.locksJob!(document('2026-03-14T10:00:00.000Z'))).toBe(true);
+  it('holds the records it prints under its own reason, but for a site\'s access notes, which no document prints', () => {
     expect(DOCUMENT_LOCK.reason).toBe('locked-by-document');
+    expect(DOCUMENT_LOCK.holds).toBeDefined();
+    expect(DOCUMENT_LOCK.unheldFields).toEqual({ site: ['accessNotes'] });
   });
 });

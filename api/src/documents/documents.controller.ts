@@ -7,6 +7,7 @@ import { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
 import { sendIssuedPdf } from '../paperwork/issued-pdf.js';
 import { DocumentsService } from './documents.service.js';
 import { IssueDocumentDto } from './dto/issue-document.dto.js';
+import { ReviseDocumentDto } from './dto/revise-document.dto.js';
 import type { FileStorage } from '../storage/file-storage.js';
 import { DOCUMENT_STORAGE } from '../storage/file-stores.js';
 
@@ -24,7 +25,22 @@ export class DocumentsController {
   /** Refused with 422 and every reason (naming the circuit and reading) when the records cannot support it yet. */
   @Post('jobs/:id/documents')
   issue(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) jobId: string, @Body() dto: IssueDocumentDto) {
-    return this.documents.issue(user, jobId, dto.kind);
+    return this.documents.issue(user, jobId, dto.kind, dto.coverage);
+  }
+
+  /** Changes that the job's issued documents keep back, each beside the value as issued. */
+  @Get('jobs/:id/held-changes')
+  heldChanges(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) jobId: string) {
+    return this.documents.heldChanges(user, jobId);
+  }
+
+  /**
+   * A correction: a new document with a new number naming this one and why, taking the chosen held changes; this one
+   * stays, marked superseded. An issued document is never deleted, by this route or any other.
+   */
+  @Post('documents/:id/revisions')
+  revise(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string, @Body() dto: ReviseDocumentDto) {
+    return this.documents.revise(user, id, dto);
   }
 
   @Get('jobs/:id/documents')

@@ -1,7 +1,7 @@
 import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit, UnprocessableEntityException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
-import { DEFAULT_RULE_SET, type SyncedRow } from '@wiretrail/core';
-import { type EntityManager, IsNull } from 'typeorm';
+import { DEFAULT_RULE_SET, type DocumentCoverage, type HeldChange, type IssuedDocument, isSyncEntity, type SyncedRow } from '@wiretrail/core';
+import { type EntityManager, In, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { officeActor, officeMutation } from '../records/records.service.js';
@@ -13,6 +13,7 @@ import { coveringLetter, theWork } from '../paperwork/covering-letter.js';
 import { CABLING_REPORT_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
 import { takeNextNumber } from '../paperwork/document-numbers.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
+import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import { fingerprint, issuedPdfAttachment } from '../paperwork/issued-pdf.js';
 import { type JobFile, loadJobFile } from '../paperwork/job-file.js';
 import { isLatestMessage, mailState } from '../paperwork/mail-state.js';
@@ -21,13 +22,16 @@ import type { Issue } from '../paperwork/pdf/job-heading.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
 import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
 import { DOCUMENT_STORAGE, documentKey, PHOTO_STORAGE, photoKey } from '../storage/file-stores.js';
+import { insertMany } from '../sync/bulk-write.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
-import { SyncEngine } from '../sync/sync-engine.service.js';
+import { type Actor, type RecordKey, SyncEngine } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import { User } from '../users/entities/user.entity.js';
-import { loadCableSchedule, loadMinorWorks, loadPhotoRecord } from './document-content.js';
+import { cableNotices, loadCableSchedule, loadMinorWorks, loadPhotoRecord, minorWorksPrints } from './document-content.js';
 import type { DocumentKind } from './dto/issue-document.dto.js';
 import { DOCUMENT_LOCK } from './document-lock.js';
+import type { ReviseDocumentDto } from './dto/revise-document.dto.js';
+import { heldChangesOf } from './held-changes.js';
 import { cablingReportPdf } from './pdf/cabling-report-pdf.js';
 import { minorWorksPdf } from './pdf/minor-works-pdf.js';
 import { photoRecordPdf } from './pdf/photo-record-pdf.js';
@@ -47,6 +51,24 @@ interface Rendered {
   pdf: Buffer;
   visitId: string | null;
   signerName: string;
+}
+
+/** A document checked and ready to number: how to render it, the records it prints (which its lock holds), and what to tell the office. */
+interface Prepared {
+  render: (issue: Issue) => Promise<Rendered>;
+  printed: RecordKey[];
+  notices: string[];
+}
+
+
+/** An issue or revision as answered: the synced row, and what the office should know about it now (core's IssuedDocument). */
+type IssuedAnswer = SyncedRow & Pick<IssuedDocument, 'notices'>;
+
+/** What a revision brings: the document it supersedes, why, and its new row's id (which the old one names). */
+interface Revision {
+  old: SyncRecord<'document'>;
+  reason: string;
+  id: string;
 }
 
 /**
@@ -76,41 +98,103 @@ export class DocumentsService implements OnModuleInit {
     });
   }
 
-  async issue(user: AuthUser, jobId: string, kind: DocumentKind): Promise<SyncedRow> {
+  async issue(user: AuthUser, jobId: string, kind: DocumentKind, coverage?: DocumentCoverage): Promise<IssuedAnswer> {
     // Photos are made print-ready before the transaction: their bytes never change, and the write queue should not wait on them.
     const images = kind === 'photo-record' ? await this.printablePhotos(user.organisationId, jobId) : new Map<string, Buffer>();
-    const row = await this.queue.run(async (em) => {
-      const file = await loadJobFile(em, user.organisationId, jobId);
-      const issuedAt = new Date();
-      const id = uuidv7();
-      // Numbered last, after every refusal, and in this transaction: a refused issue uses no number.
-      const render = await this.prepare(em, kind, file, images);
-      const number = await takeNextNumber(em, user.organisationId, kind, KINDS[kind].prefix);
-      const rendered = await render({ number, issuedAt, issuedBy: user.name });
-      await this.storage.put(documentKey(user.organisationId, id), rendered.pdf, 'application/pdf');
-      const set = {
-        jobId: file.job.id,
-        siteId: file.site.id,
-        kind,
-        visitId: rendered.visitId,
-        number,
-        title: `${KINDS[kind].title}: ${file.job.title}`.slice(0, 200),
-        signerName: rendered.signerName,
-        pdfSha256: fingerprint(rendered.pdf),
-        pdfBytes: rendered.pdf.length,
-        issuedAt: issuedAt.toISOString(),
-        issuedById: user.id,
-      };
-      const [result] = await this.engine.applyAll(em, officeActor(user), [officeMutation('document', id, 0, set)]);
-      if (result?.status !== 'applied') throw new Error(`The document row was not written: ${result?.error ?? result?.status}`);
-      return syncRepository(em, 'document').findOneByOrFail({ id });
-    });
+    const { row, notices } = await this.queue.run((em) => this.issueIn(em, user, jobId, kind, images, coverage ?? null, null));
     this.logger.log(`Issued ${row.number} for job ${jobId}`);
-    return toSyncedRow(row);
+    return { ...toSyncedRow(row), notices };
+  }
+
+  /**
+   * A correction: a new document of the same kind for the same job, with a new number, naming the one it supersedes
+   * and why. The old one stays, marked superseded, and its lock lifts so that the pending changes the office takes
+   * (kept conflicts of its records) are made before the new one prints the records and locks them again. All in one
+   * transaction: a refused revision changes nothing and uses no number.
+   */
+  async revise(user: AuthUser, id: string, dto: ReviseDocumentDto): Promise<IssuedAnswer> {
+    const first = await this.row(user, id);
+    const images = first.kind === 'photo-record' ? await this.printablePhotos(user.organisationId, first.jobId) : new Map<string, Buffer>();
+    const { row, notices } = await this.queue.run(async (em) => {
+      const old = await this.documentOf(em, user.organisationId, id);
+      if (!old.issuedAt) throw new ConflictException(`${old.number} was never issued, so there is nothing to revise.`);
+      if (old.supersededAt) throw new ConflictException(`${old.number} is already superseded; revise the document that superseded it.`);
+      const actor = officeActor(user);
+      const revision: Revision = { old, reason: dto.reason.trim(), id: uuidv7() };
+      await this.engine.serverWrite(em, actor, 'document', [{ row: old, changes: { supersededAt: new Date().toISOString(), supersededById: revision.id } }]);
+      await this.takeChanges(em, actor, old, dto.take ?? []);
+      return this.issueIn(em, user, old.jobId, old.kind as DocumentKind, images, (old.coverage as DocumentCoverage | null) ?? null, revision);
+    });
+    this.logger.log(`Issued ${row.number}, superseding ${first.number}`);
+    return { ...toSyncedRow(row), notices };
+  }
+
+  /** The changes kept back by a document's lock that the office takes into its revision, made as the office's own edits. */
+  private async takeChanges(em: EntityManager, actor: Actor, old: SyncRecord<'document'>, conflictIds: string[]): Promise<void> {
+    if (!conflictIds.length) return;
+    const conflicts = await syncRepository(em, 'conflict').findBy({ id: In(conflictIds), organisationId: actor.organisationId });
+    const printed = await em.findBy(PrintedRecord, { documentId: old.id });
+    const prints = new Set(printed.map((p) => `${p.entity}:${p.rowId}`));
+    for (const conflictId of conflictIds) {
+      const c = conflicts.find((x) => x.id === conflictId);
+      if (!c || c.resolvedAt || c.reason !== DOCUMENT_LOCK.reason || !prints.has(`${c.entity}:${c.rowId}`)) {
+        throw new UnprocessableEntityException([`Conflict ${conflictId} is not a change waiting behind ${old.number}.`]);
+      }
+      const entity = c.entity;
+      const row = isSyncEntity(entity) ? await syncRepository(em, entity).findOne({ where: { id: c.rowId }, withDeleted: true }) : null;
+      if (!row) throw new UnprocessableEntityException([`The record of conflict ${conflictId} no longer exists.`]);
+      const set = c.field === '*' ? null : { [c.field]: c.discardedValue };
+      const base = officeMutation(entity, row.id, row.version, set ?? {});
+      const mutation = set ? base : { mutationId: base.mutationId, entity, id: row.id, baseVersion: row.version, hlc: base.hlc, delete: true as const };
+      const [result] = await this.engine.applyAll(em, actor, [mutation]);
+      if (result?.status === 'rejected') throw new UnprocessableEntityException([result.error ?? 'The change could not be made.']);
+      if (result?.status === 'merged') {
+        throw new ConflictException(`The change to this ${entity} is held by ${result.heldBy ?? 'another issued document'} too; revise that one first.`);
+      }
+      await this.engine.serverWrite(em, actor, 'conflict', [{
+        row: c,
+        changes: { resolvedAt: new Date(), resolvedById: actor.userId, resolution: { choice: 'discarded', revisedFrom: old.number } },
+      }]);
+    }
+  }
+
+  private async issueIn(
+    em: EntityManager, user: AuthUser, jobId: string, kind: DocumentKind, images: Map<string, Buffer>, coverage: DocumentCoverage | null, revision: Revision | null,
+  ): Promise<{ row: SyncRecord; notices: string[] }> {
+    const file = await loadJobFile(em, user.organisationId, jobId);
+    const issuedAt = new Date();
+    const id = revision?.id ?? uuidv7();
+    // Numbered last, after every refusal, and in this transaction: a refused issue uses no number.
+    const prepared = await this.prepare(em, kind, file, images, coverage ?? 'job');
+    const number = await takeNextNumber(em, user.organisationId, kind, KINDS[kind].prefix);
+    const supersedes = revision ? { number: revision.old.number ?? '', reason: revision.reason } : undefined;
+    const rendered = await prepared.render({ number, issuedAt, issuedBy: user.name, supersedes });
+    await this.storage.put(documentKey(user.organisationId, id), rendered.pdf, 'application/pdf');
+    const printed = [...new Map(prepared.printed.map((r) => [`${r.entity}:${r.id}`, r])).values()];
+    for (let i = 0; i < printed.length; i += 200) {
+      await insertMany(em, PrintedRecord, printed.slice(i, i + 200).map((r) => ({ documentId: id, entity: r.entity, rowId: r.id, organisationId: user.organisationId })));
+    }
+    const set = {
+      jobId: file.job.id,
+      siteId: file.site.id,
+      kind,
+      visitId: rendered.visitId,
+      number,
+      title: `${KINDS[kind].title}: ${file.job.title}`.slice(0, 200),
+      signerName: rendered.signerName,
+      pdfSha256: fingerprint(rendered.pdf),
+      pdfBytes: rendered.pdf.length,
+      issuedAt: issuedAt.toISOString(),
+      issuedById: user.id,
+      ...(kind === 'cabling-report' ? { coverage: coverage ?? 'job' } : {}),
+      ...(revision ? { supersedesId: revision.old.id, revisionReason: revision.reason } : {}),
+    };
+    const row = await this.engine.serverCreate(em, officeActor(user), 'document', id, set);
+    return { row, notices: prepared.notices };
   }
 
   /** Loads and checks what the document needs (refusing with every reason at once), and returns how to render it. */
-  private async prepare(em: EntityManager, kind: DocumentKind, file: JobFile, images: Map<string, Buffer>): Promise<(issue: Issue) => Promise<Rendered>> {
+  private async prepare(em: EntityManager, kind: DocumentKind, file: JobFile, images: Map<string, Buffer>, coverage: DocumentCoverage): Promise<Prepared> {
     const rules = DEFAULT_RULE_SET;
     switch (kind) {
       case 'minor-works': {
@@ -118,16 +202,30 @@ export class DocumentsService implements OnModuleInit {
         if (content.problems.length) throw new UnprocessableEntityException(content.problems);
         const signer = content.visits[content.visits.length - 1]!;
         const signature = await signatureImage(signer.signatureSvg as string);
-        return async (issue) => ({
-          pdf: await minorWorksPdf({ issue, file, content, rules, signature }),
-          visitId: signer.id,
-          signerName: signer.signedByName as string,
-        });
+        return {
+          render: async (issue) => ({
+            pdf: await minorWorksPdf({ issue, file, content, rules, signature }),
+            visitId: signer.id,
+            signerName: signer.signedByName as string,
+          }),
+          printed: minorWorksPrints(file, content),
+          notices: [],
+        };
       }
       case 'cabling-report': {
-        const cables = await loadCableSchedule(em, file, rules);
-        if (!cables.length) throw new UnprocessableEntityException(['This site has no cable runs recorded, so there is no cable schedule to report.']);
-        return async (issue) => ({ pdf: await cablingReportPdf({ issue, file, cables, rules }), visitId: null, signerName: issue.issuedBy });
+        const cables = await loadCableSchedule(em, file, rules, coverage);
+        if (!cables.length) {
+          throw new UnprocessableEntityException([
+            coverage === 'site'
+              ? 'This site has no cable runs recorded, so there is no cable schedule to report.'
+              : 'No cable was recorded or tested on this job’s visits. Choose the site’s whole cable schedule to report on the cables already there.',
+          ]);
+        }
+        return {
+          render: async (issue) => ({ pdf: await cablingReportPdf({ issue, file, cables, rules, coverage }), visitId: null, signerName: issue.issuedBy }),
+          printed: cables.map((c) => ({ entity: 'cableRun', id: c.run.id })),
+          notices: cableNotices(cables),
+        };
       }
       case 'photo-record': {
         const content = await loadPhotoRecord(em, file);
@@ -142,9 +240,22 @@ export class DocumentsService implements OnModuleInit {
           const sha = photo.sha256;
           if (!images.has(sha)) images.set(sha, await this.printable(file.organisation.id, sha));
         }
-        return async (issue) => ({ pdf: await photoRecordPdf({ issue, file, content, images }), visitId: null, signerName: issue.issuedBy });
+        return {
+          render: async (issue) => ({ pdf: await photoRecordPdf({ issue, file, content, images }), visitId: null, signerName: issue.issuedBy }),
+          printed: content.photos.map(({ photo }) => ({ entity: 'photo', id: photo.id })),
+          notices: [],
+        };
       }
     }
+  }
+
+  /** Changes kept back by the job's standing documents, each beside the value as issued. */
+  heldChanges(user: AuthUser, jobId: string): Promise<{ items: HeldChange[] }> {
+    return this.queue.read(async (em) => {
+      const job = await syncRepository(em, 'job').findOneBy({ id: jobId, organisationId: user.organisationId, deletedAt: IsNull() });
+      if (!job) throw new NotFoundException('No such job.');
+      return { items: await heldChangesOf(em, user.organisationId, jobId) };
+    });
   }
 
   private async printablePhotos(organisationId: string, jobId: string): Promise<Map<string, Buffer>> {
@@ -182,7 +293,7 @@ export class DocumentsService implements OnModuleInit {
   }
 
   /** The stored row, for the PDF download. */
-  row(user: AuthUser, id: string): Promise<SyncRecord> {
+  row(user: AuthUser, id: string): Promise<SyncRecord<'document'>> {
     return this.queue.read((em) => this.documentOf(em, user.organisationId, id));
   }
 
@@ -204,10 +315,7 @@ export class DocumentsService implements OnModuleInit {
         createdById: user.id,
         ...this.letter(file, doc, dto.to, link.url, link.expiresAt),
       });
-      const [result] = await this.engine.applyAll(em, officeActor(user), [
-        officeMutation('document', doc.id, doc.version, { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null }),
-      ]);
-      if (result?.status !== 'applied') throw new Error(`The document's e-mail state was not written: ${result?.error ?? result?.status}`);
+      await this.engine.serverWrite(em, officeActor(user), 'document', [{ row: doc, changes: { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null } }]);
       return { row: await syncRepository(em, 'document').findOneByOrFail({ id }), link };
     });
     return { document: toSyncedRow(row), shareLink: { id: link.id, expiresAt: link.expiresAt } };
@@ -240,8 +348,7 @@ export class DocumentsService implements OnModuleInit {
     const set = { ...state, ...(emailedAt ? { emailedAt: emailedAt.toISOString() } : {}) };
     const sender = await em.findOneBy(User, { id: message.createdById, organisationId: message.organisationId });
     const actor = { id: message.createdById, organisationId: message.organisationId, role: sender?.role ?? 'office', email: sender?.email ?? '', name: sender?.name ?? '' };
-    const [result] = await this.engine.applyAll(em, officeActor(actor, 'mail-outbox'), [officeMutation('document', doc.id, doc.version, set, 'mail-outbox')]);
-    if (result?.status !== 'applied') this.logger.warn(`The e-mail state of ${doc.number} was not written: ${result?.error ?? result?.status}`);
+    await this.engine.serverWrite(em, officeActor(actor, 'mail-outbox'), 'document', [{ row: doc, changes: set }]);
   }
 
   private async documentOf(em: EntityManager, organisationId: string, id: string): Promise<SyncRecord<'document'>> {

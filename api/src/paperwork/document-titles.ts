@@ -1,7 +1,8 @@
 import type { DOCUMENT_KINDS } from '@wiretrail/core';
 
 export const MINOR_WORKS_TITLE = 'Minor works certificate';
-export const CABLING_REPORT_TITLE = 'Cabling test report';
+// Wiremap and length are what a cable's record holds; a performance test would be another document.
+export const CABLING_REPORT_TITLE = 'Wiremap and length record';
 export const PHOTO_RECORD_TITLE = 'Photo record';
 
 /** What each kind of document is called: on its PDF, in the e-mail it goes with, and where an invoice lists it. */

@@ -249,11 +249,14 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
       throw /^No \w+ with that id/.test(error) ? new NotFoundException(`No such ${this.entity}.`) : new BadRequestException(error);
     }
     if (result.status === 'merged') {
+      const held = result.heldBy ? `printed on ${result.heldBy}, an issued document` : 'part of an issued document';
+      const revise = result.heldBy ? ` To correct it, revise ${result.heldBy}.` : '';
       throw new ConflictException({
         statusCode: 409,
-        message: `This ${this.entity} is part of an issued document, so the change was not made; it waits in Conflicts for review.`,
+        message: `This ${this.entity} is ${held}, so the change was not made; it waits beside the issued value for review.${revise}`,
         error: 'Conflict',
         conflictIds: result.conflictIds ?? [],
+        ...(result.heldBy ? { heldBy: result.heldBy } : {}),
       });
     }
     return row!;

@@ -43,7 +43,10 @@ describe('mutation checks', () => {
     expect(refusal(() => checkMutation(mutation({ mutationId: 'short' })))).toMatch(/^mutationId/);
     expect(refusal(() => checkMutation(mutation({ mutationId: 'mutation\u0000001' })))).toMatch(/control characters/);
     expect(refusal(() => checkMutation(mutation({ entity: 'wallpaper' as never })))).toMatch(/^entity must be one of/);
-    expect(refusal(() => checkMutation(mutation({ entity: 'conflict' })))).toBe('conflict rows are made by the server only.');
+    expect(refusal(() => checkMutation(mutation({ entity: 'conflict' })))).toBe('conflict rows are written by the server only; no push may create, change or delete one.');
+    // Documents are issued, revised and e-mailed by their own routes; a push may not make, change or delete one.
+    expect(refusal(() => checkMutation(mutation({ entity: 'document', set: { number: 'MW-9999' } })))).toMatch(/^document rows are written by the server only/);
+    expect(refusal(() => checkMutation(mutation({ entity: 'document', set: undefined, delete: true })))).toMatch(/^document rows are written by the server only/);
     expect(refusal(() => checkMutation(mutation({ id: 'not-an-id' })))).toBe('id must be a UUID.');
     expect(refusal(() => checkMutation(mutation({ hlc: 'yesterday' })))).toMatch(/^hlc must look like/);
     expect(refusal(() => checkMutation(mutation({ baseVersion: -1 })))).toMatch(/^baseVersion/);

@@ -35,14 +35,14 @@ export function isMutationId(id: unknown): id is string {
  * Judges one mutation of a push on its own: its shape, its entity, and every field it sets against the registry.
  * A batch is a list of anything until checked, so null or a number in it is refused alone, like any bad mutation.
  */
-export function checkMutation(mutation: Mutation): CheckedMutation {
+export function checkMutation(mutation: Mutation, { server = false } = {}): CheckedMutation {
   if (typeof mutation !== 'object' || mutation === null || Array.isArray(mutation)) {
     throw new MutationRefused('A mutation must be an object: { mutationId, entity, id, baseVersion, set or delete, hlc }.');
   }
   if (!isMutationId(mutation.mutationId)) throw new MutationRefused('mutationId must be a unique id of 8 to 64 characters, none of them control characters.');
   if (!isSyncEntity(mutation.entity)) throw new MutationRefused(`entity must be one of the synced entities; got ${JSON.stringify(mutation.entity)}.`);
   const spec = SYNC_ENTITIES[mutation.entity];
-  if (spec.serverOnly) throw new MutationRefused(`${mutation.entity} rows are made by the server only.`);
+  if (spec.serverOnly && !server) throw new MutationRefused(`${mutation.entity} rows are written by the server only; no push may create, change or delete one.`);
   if (!isUuid(mutation.id)) throw new MutationRefused('id must be a UUID.');
   if (!isHlc(mutation.hlc)) throw new MutationRefused('hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>.');
   if (!Number.isInteger(mutation.baseVersion) || mutation.baseVersion < 0) throw new MutationRefused('baseVersion must be a whole number, 0 for a new row.');

@@ -19,13 +19,13 @@ import { AppliedMutation } from './entities/sync-bookkeeping.entity.js';
 import type { SyncRecord } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';
 import { type CheckedMutation, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
-import { type LockRule, RecordLocks } from './record-locks.js';
+import { type Lock, type LockRule, RecordLocks } from './record-locks.js';
 import { checkReferences, preloadReferences, referencedIds } from './reference-checks.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
 import { SyncBatch } from './sync-batch.js';
 
 export { MutationRefused } from './mutation-checks.js';
-export type { LockRule } from './record-locks.js';
+export type { LockRule, RecordKey } from './record-locks.js';
 
 export interface Actor {
   userId: string;
@@ -109,6 +109,20 @@ export class SyncEngine {
         locks.changed(entity);
         batch.recordChange(entity, row, seq);
       }
+    });
+  }
+
+  /**
+   * The server's own new row (an issued document): numbered, stamped and logged like a device's, for the rows that
+   * no push may make. The fields are checked against the registry as a push's would be.
+   */
+  async serverCreate(em: EntityManager, actor: Actor, entity: SyncEntityName, id: string, set: Record<string, unknown>): Promise<SyncRecord> {
+    const checked = checkMutation({ mutationId: uuidv7(), entity, id, baseVersion: 0, set: set as Mutation['set'], hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId: actor.deviceId }) }, { server: true });
+    return this.inBatch(em, async (run) => {
+      await checkReferences(run.batch.em, actor.organisationId, entity, checked.spec, checked.set, run.batch.known);
+      await this.create(run, actor, checked);
+      run.locks.changed(entity);
+      return (await run.batch.rowOf(entity, id))!;
     });
   }
 
@@ -275,14 +289,17 @@ export class SyncEngine {
   }
 
   /** A locked record does not change under anyone: every attempted change goes to the office as a conflict. */
-  private async lockedToConflicts(run: Run, actor: Actor, { mutation: m, set, isDelete }: CheckedMutation, row: SyncRecord, reason: string): Promise<MutationResult> {
+  private async lockedToConflicts(run: Run, actor: Actor, { mutation: m, set, isDelete }: CheckedMutation, row: SyncRecord, { reason, heldBy }: Lock): Promise<MutationResult> {
     const conflictIds: string[] = [];
     const entries: Array<[string, unknown]> = isDelete ? [['*', 'deleted']] : Object.entries(set).filter(([f, v]) => !sameValue(row[f], v));
     for (const [field, value] of entries) {
       const current = { value: field === '*' ? 'kept' : row[field], by: row.fieldMeta[field]?.by ?? null, hlc: row.fieldMeta[field]?.hlc ?? null, deviceId: null };
       conflictIds.push(await this.writeConflict(run.batch, actor, m.entity, row.id, field, reason, m.baseVersion, current, { value, by: actor.userId, hlc: m.hlc, deviceId: actor.deviceId }));
     }
-    return { mutationId: m.mutationId, status: conflictIds.length ? 'merged' : 'applied', version: row.version, fieldVersions: versionsOf(row.fieldMeta), ...(conflictIds.length ? { conflictIds } : {}) };
+    return {
+      mutationId: m.mutationId, status: conflictIds.length ? 'merged' : 'applied', version: row.version, fieldVersions: versionsOf(row.fieldMeta),
+      ...(conflictIds.length ? { conflictIds, ...(heldBy ? { heldBy } : {}) } : {}),
+    };
   }
 
   /** The value not kept, as a conflict row of its own: numbered and pulled by office devices like any row. */

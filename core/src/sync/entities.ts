@@ -67,7 +67,7 @@ export interface EntitySpec {
   readonly siteField: 'siteId' | 'id' | null;
   /** The field that ties the row to a visit, for technician writes and document locks. */
   readonly visitField: 'visitId' | 'id' | null;
-  /** Only the server creates these rows (conflicts). */
+  /** Only the server writes these rows (conflicts, issued documents): a push that names one is refused. */
   readonly serverOnly?: boolean;
   /** Belongs to the whole organisation, not a site: every technician receives it (the price list, to pick parts offline). */
   readonly organisationWide?: boolean;
@@ -116,6 +116,8 @@ export const POINT_CONNECTIONS = ['ring-extension', 'unfused-spur', 'fused-spur'
 export const PHOTO_SUBJECTS = ['cableRun', 'pointChange', 'circuit'] as const;
 export const DOCUMENT_KINDS = ['minor-works', 'cabling-report', 'photo-record'] as const;
 export const DOCUMENT_EMAIL_STATES = ['queued', 'sent', 'failed'] as const;
+/** What a cabling report covers: the cables recorded or tested on the job's visits, or the site's whole schedule. */
+export const DOCUMENT_COVERAGES = ['job', 'site'] as const;
 export const LINK_KINDS = ['permanent-link', 'channel'] as const;
 export const POLARITY_RESULTS = ['correct', 'incorrect'] as const;
 export const RCD_BUTTON_RESULTS = ['operates', 'fails'] as const;
@@ -240,13 +242,19 @@ const REGISTRY = {
     },
   },
   document: {
-    name: 'document', table: 'document', technicianWrite: 'none', technicianVisible: true, siteField: 'siteId', visitField: null,
+    // Made only by the issue route: no push may create, change or delete one, whatever the role.
+    name: 'document', table: 'document', technicianWrite: 'none', technicianVisible: true, siteField: 'siteId', visitField: null, serverOnly: true,
     fields: {
       jobId: office(ref('job'), true), siteId: office(ref('site'), true), kind: office(oneOf(...DOCUMENT_KINDS), true),
       visitId: office(ref('visit')), number: office(str(40)), title: office(str()), signerName: office(str()),
       pdfSha256: office(str(64)), pdfBytes: office(int(0)), issuedAt: office(when), issuedById: office(ref('user')),
       // Sending by e-mail: queued, then sent, or failed with the reason (retried until it gives up).
       emailState: office(oneOf(...DOCUMENT_EMAIL_STATES)), emailedTo: office(str(254)), emailedAt: office(when), emailError: office(str(500)),
+      // A correction is a revision: the new document names the one it supersedes and why; the old one is kept, marked superseded.
+      supersedesId: office(ref('document')), revisionReason: office(str(1000)),
+      supersededAt: office(when), supersededById: office(ref('document')),
+      // A cabling report covers the job's cables, or the site's whole schedule when the office chose it at issue.
+      coverage: office(oneOf(...DOCUMENT_COVERAGES)),
     },
   },
   priceItem: {

@@ -29,6 +29,8 @@ export interface MutationResult {
   version?: number;
   fieldVersions?: Record<string, number>;
   conflictIds?: string[];
+  /** The issued document that holds the row, by number, when the change was kept back for that reason. */
+  heldBy?: string;
   error?: string;
 }
 

@@ -1,19 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { RowOf } from '@wiretrail/core';
 import { api } from './api-client';
 
 /** A line of the price list: a synced row, so it carries its version. Prices in pence before VAT. */
-export interface PriceItem {
-  id: string;
-  version: number;
-  name: string;
-  unit: string;
-  category: string | null;
-  code: string | null;
-  costMinor: number | null;
-  sellMinor: number | null;
-  vatRateCode: string | null;
-  active: boolean | null;
-}
+export type PriceItem = RowOf<'priceItem'> & { version: number };
 
 /** The whole list at once (a contractor's price list is a few hundred lines at most): the price list screen keeps it, invoices pick from it. */
 export const priceItemsQueryOptions = () =>

@@ -1,5 +1,5 @@
 import { cleanup, render } from '@testing-library/react';
-import { createMemoryRouter, RouterProvider } from 'react-router-dom';
+import { createMemoryRouter, matchRoutes, type RouteObject, RouterProvider } from 'react-router-dom';
 import { technicianScreens } from '@/app/router';
 import { db, type LocalRow } from '@/lib/db';
 import { setSession } from '@/lib/session';
@@ -49,9 +49,20 @@ export async function addRing(): Promise<void> {
   });
 }
 
+const screens: RouteObject[] = [{ HydrateFallback: () => null, children: technicianScreens }];
+
+/**
+ * Loads the lazy routes a path opens, as the router would. The first load compiles each screen's modules, which on
+ * a busy machine takes longer than a query waits for the screen to appear; a hook that calls this first leaves the
+ * queries waiting only for the phone's database.
+ */
+export async function loadScreens(path: string): Promise<void> {
+  for (const { route } of matchRoutes(screens, path) ?? []) if (typeof route.lazy === 'function') await route.lazy();
+}
+
 /** The technician's own screens (lazy, as in the app), in memory, at a path; without the shell, so nothing syncs. */
 export function show(path: string) {
-  const router = createMemoryRouter([{ HydrateFallback: () => null, children: technicianScreens }], { initialEntries: [path] });
+  const router = createMemoryRouter(screens, { initialEntries: [path] });
   render(<RouterProvider router={router} />);
   return router;
 }

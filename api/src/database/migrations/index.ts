@@ -6,7 +6,8 @@ import { VisitRecords1796218834250 } from './1796218834250-VisitRecords.js';
 import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 import { Billing1796223023465 } from './1796223023465-Billing.js';
-import { ChecksBeforeWork1796230000000 } from './1796230000000-ChecksBeforeWork.js';
+import { DocumentRevisions1796230000000 } from './1796230000000-DocumentRevisions.js';
+import { ChecksBeforeWork1796231000000 } from './1796231000000-ChecksBeforeWork.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -18,5 +19,6 @@ export const MIGRATIONS = [
   Documents1796219621037,
   PartsAndPrices1796221754005,
   Billing1796223023465,
-  ChecksBeforeWork1796230000000,
+  DocumentRevisions1796230000000,
+  ChecksBeforeWork1796231000000,
 ];

@@ -1,7 +1,7 @@
-import { isTwistedPair, type RuleSet, VERDICT_DISCLAIMER, type WiremapFault } from '@wiretrail/core';
+import { isTwistedPair, type RuleSet, type Verdict, VERDICT_DISCLAIMER, type WiremapFault } from '@wiretrail/core';
 import { CABLING_REPORT_TITLE } from '../../paperwork/document-titles.js';
 import type { JobFile } from '../../paperwork/job-file.js';
-import { figure, joined, shortDateWords, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
+import { figure, joined, shortDateWords, VERDICT_INK } from '../../paperwork/pdf/document-words.js';
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { ScheduledCable } from '../document-content.js';
 
@@ -10,7 +10,15 @@ export interface CablingReportPdf {
   file: JobFile;
   cables: ScheduledCable[];
   rules: RuleSet;
+  /** The cables of the job's visits, or the site's whole schedule as the office chose at issue. */
+  coverage: 'job' | 'site';
 }
+
+/**
+ * Only wiremap and length are recorded, so a cable is never said to "pass": that word belongs to a performance test
+ * (insertion loss, NEXT, return loss) against its category, which this record is not.
+ */
+const RESULT_WORDS: Record<Verdict, string> = { pass: 'Correct', fail: 'Fault', check: 'To check' };
 
 const FAULT_WORDS: Record<WiremapFault['kind'], string> = {
   open: 'Open',
@@ -50,15 +58,28 @@ function lengthWords(c: ScheduledCable): string {
 const LINK_WORDS: Record<string, string> = { 'permanent-link': 'Permanent link', channel: 'Channel' };
 const MEDIUM_WORDS: Record<string, string> = { coax: 'Coax', speaker: 'Speaker', fibre: 'Fibre', other: 'Other' };
 
-/** The site's cable schedule with each run's test judged, in landscape so one run fits one line. */
-export async function cablingReportPdf({ issue, file, cables, rules }: CablingReportPdf): Promise<Buffer> {
+/** The cables' schedule with each run's wiremap and length judged, in landscape so one run fits one line. */
+export async function cablingReportPdf({ issue, file, cables, rules, coverage }: CablingReportPdf): Promise<Buffer> {
   const tz = file.organisation.timeZone;
-  const layout = await startJobDocument({ title: CABLING_REPORT_TITLE, subtitle: 'The site’s cable schedule: where each cable runs, how it is terminated and how it tested', issue, file, landscape: true });
+  const layout = await startJobDocument({
+    title: CABLING_REPORT_TITLE,
+    subtitle: 'Where each cable runs, how it is terminated, its wiremap and its length',
+    issue,
+    file,
+    landscape: true,
+  });
 
   const count = (v: string) => cables.filter((c) => c.assessment.verdict === v).length;
+  const cablesWord = cables.length === 1 ? '1 cable' : `${cables.length} cables`;
   layout.heading('Cable schedule');
   layout.paragraph(
-    `${cables.length === 1 ? '1 cable' : `${cables.length} cables`} on this site: ${count('pass')} pass, ${count('fail')} fail, ${count('check')} to check.`,
+    `${cablesWord} ${coverage === 'site' ? 'on this site (the site’s whole schedule)' : 'recorded or tested on this job’s visits'}: ` +
+      `${count('pass')} correct, ${count('fail')} with a fault, ${count('check')} to check.`,
+  );
+  const faulty = cables.filter((c) => c.assessment.verdict === 'fail').map((c) => String(c.run.label));
+  if (faulty.length) layout.paragraph(`Fault found on ${faulty.join(', ')}: see the notes under ${faulty.length === 1 ? 'that cable' : 'those cables'}.`);
+  layout.paragraph(
+    'This record gives each cable’s wiremap and length only. It is not a performance test of the links: no insertion loss, NEXT or return loss was measured, so no cable here is certified to its category.',
   );
   layout.table(
     [
@@ -70,7 +91,7 @@ export async function cablingReportPdf({ issue, file, cables, rules }: CablingRe
       { header: 'Length', width: 1.3 },
       { header: 'Link', width: 1 },
       { header: 'Wiremap', width: 1.8 },
-      { header: 'Verdict', width: 0.7 },
+      { header: 'Result', width: 0.7 },
       { header: 'Tested', width: 1 },
     ],
     cables.map((c) => {
@@ -92,7 +113,7 @@ export async function cablingReportPdf({ issue, file, cables, rules }: CablingRe
           lengthWords(c),
           (c.run.linkKind && LINK_WORDS[c.run.linkKind]) ?? '',
           wiremapWords(c),
-          { text: VERDICT_WORDS[a.verdict], weight: 'bold', color: VERDICT_INK[a.verdict] },
+          { text: RESULT_WORDS[a.verdict], weight: 'bold', color: VERDICT_INK[a.verdict] },
           shortDateWords(c.run.testedAt, tz) || 'Not tested',
         ],
         detail: notes.length ? notes.join(' ') : undefined,

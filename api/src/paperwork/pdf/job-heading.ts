@@ -31,6 +31,8 @@ export interface Issue {
   number: string;
   issuedAt: Date;
   issuedBy: string;
+  /** A revision: the document this one supersedes, and why. */
+  supersedes?: { number: string; reason: string };
 }
 
 /** A new document for the job: its band (kind, number, date issued), then who did the work and for whom. */
@@ -54,6 +56,12 @@ export async function startJobDocument(o: {
     landscape: o.landscape,
   });
   jobHeading(layout, file, o.contractor);
+  if (issue.supersedes) {
+    layout.notice(
+      `Revision of ${issue.supersedes.number}`,
+      `This document supersedes ${issue.supersedes.number}, which stays on record marked superseded. Why it was revised: ${issue.supersedes.reason}`,
+    );
+  }
   return layout;
 }
 

@@ -1,6 +1,6 @@
-import type { CircuitReadings, CircuitTestAssessment, CircuitUnderTest } from '@wiretrail/core';
-import { assessCircuitTest } from '@wiretrail/core';
-import type { CircuitRow, TestResultRow } from '@/lib/db';
+import type { CircuitReadings, CircuitTestAssessment, ReadingField } from '@wiretrail/core';
+import { assessCircuitTest, circuitUnderTest, readingsOf } from '@wiretrail/core';
+import type { CircuitRow } from '@/lib/db';
 import { usableReading } from '@/lib/readings';
 
 /** The readings a form holds, as typed. */
@@ -19,26 +19,22 @@ export interface TypedReadings {
   rcdButton: '' | 'operates' | 'fails';
 }
 
-export const NUMERIC_READINGS = ['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x'] as const;
+/** The readings typed as figures; the test voltage and the answers are chosen. */
+export const NUMERIC_READINGS = ['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'zsOhm', 'rcdTripMs', 'rcdTripMs5x'] as const satisfies readonly ReadingField[];
 
-export function circuitUnderTest(c: CircuitRow): CircuitUnderTest {
-  return { kind: c.kind, deviceType: c.deviceType, deviceRatingA: c.deviceRatingA, rcdRatingMa: c.rcdRatingMa, rcdType: c.rcdType, liveCsaMm2: c.liveCsaMm2, cpcCsaMm2: c.cpcCsaMm2, lengthM: c.lengthM };
-}
-
-export function fromTyped(t: TypedReadings): CircuitReadings {
-  const out: Record<string, unknown> = {};
-  for (const f of NUMERIC_READINGS) out[f] = usableReading(t[f]);
-  out.irTestVoltageV = t.irTestVoltageV ? Number(t.irTestVoltageV) : null;
-  out.polarity = t.polarity || null;
-  out.rcdButton = t.rcdButton || null;
-  return out as CircuitReadings;
-}
-
-export function fromStored(r: TestResultRow | undefined): CircuitReadings {
+/** The typed readings as a test result stores them: blank and malformed figures are not recorded. */
+export function storedReadings(t: TypedReadings) {
   return {
-    r1Ohm: r?.r1Ohm, rnOhm: r?.rnOhm, r2Ohm: r?.r2Ohm, r1r2Ohm: r?.r1r2Ohm, irLiveLiveMOhm: r?.irLiveLiveMOhm, irLiveEarthMOhm: r?.irLiveEarthMOhm,
-    irTestVoltageV: r?.irTestVoltageV, polarity: r?.polarity, zsOhm: r?.zsOhm, rcdTripMs: r?.rcdTripMs, rcdTripMs5x: r?.rcdTripMs5x, rcdButton: r?.rcdButton,
+    ...Object.fromEntries(NUMERIC_READINGS.map((f) => [f, usableReading(t[f])])),
+    irTestVoltageV: t.irTestVoltageV ? Number(t.irTestVoltageV) : null,
+    polarity: t.polarity || null,
+    rcdButton: t.rcdButton || null,
   };
+}
+
+/** What the typed readings are judged as: the same mapping the server applies to the stored row. */
+export function fromTyped(t: TypedReadings): CircuitReadings {
+  return readingsOf({ id: '', ...storedReadings(t) });
 }
 
 export function assess(circuit: CircuitRow, readings: CircuitReadings, earthing: string | null | undefined): CircuitTestAssessment {

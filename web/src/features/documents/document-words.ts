@@ -1,4 +1,4 @@
-import type { DocumentKind } from './api/get-job-documents';
+import type { DocumentCoverage, DocumentKind } from './api/get-job-documents';
 
 export const DOCUMENT_KINDS: Array<{ kind: DocumentKind; name: string; issue: string; about: string }> = [
   {
@@ -9,9 +9,9 @@ export const DOCUMENT_KINDS: Array<{ kind: DocumentKind; name: string; issue: st
   },
   {
     kind: 'cabling-report',
-    name: 'Cabling test report',
-    issue: 'Issue cabling report',
-    about: 'The site’s cable schedule: each cable’s ends, length and wiremap.',
+    name: 'Wiremap and length record',
+    issue: 'Issue wiremap and length record',
+    about: 'The cables recorded or tested on this job’s visits, or the site’s whole schedule: each cable’s ends, wiremap and length.',
   },
   {
     kind: 'photo-record',
@@ -30,4 +30,33 @@ export function issuedTime(iso: string | null): string {
   if (!iso) return '';
   const d = new Date(iso);
   return Number.isNaN(d.getTime()) ? '' : stamp.format(d);
+}
+
+/** What a cabling report covers, as the office chooses it at issue. */
+export const COVERAGES: Array<{ value: DocumentCoverage; label: string; about: string }> = [
+  { value: 'job', label: 'This job’s cables', about: 'The cables recorded or tested on this job’s visits.' },
+  { value: 'site', label: 'The site’s whole cable schedule', about: 'Every cable recorded at the site, by any job, for a customer who asked for the lot.' },
+];
+
+/** Readings and ratings by the names and units the trade writes them with. */
+const FIELD_WORDS: Record<string, string> = {
+  deviceRatingA: 'Device rating (A)', rcdRatingMa: 'RCD rating (mA)', rcdType: 'RCD type', zeOhm: 'Ze (Ω)', pfcKa: 'PFC (kA)', zsOhm: 'Zs (Ω)',
+  r1r2Ohm: 'R1+R2 (Ω)', r1Ohm: 'r1 (Ω)', rnOhm: 'rn (Ω)', r2Ohm: 'r2 (Ω)', lengthM: 'Length (m)', nvp: 'NVP',
+};
+
+/** `earthing` → "Earthing", `rcdRatingMa` → "RCD rating (mA)"; `*` is the record itself (a deletion). */
+export function heldFieldName(field: string): string {
+  if (field === '*') return 'The record itself';
+  if (FIELD_WORDS[field]) return FIELD_WORDS[field];
+  const words = field.replace(/([a-z])([A-Z0-9])/g, '$1 $2').replace(/Csa Mm2/, 'size (mm²)').toLowerCase();
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+/** A value as issued or as changed since, in words. */
+export function heldValue(value: unknown): string {
+  if (value === null || value === undefined || value === '') return '(empty)';
+  if (value === 'deleted') return 'Deleted';
+  if (value === 'kept') return 'Recorded';
+  if (typeof value === 'object') return JSON.stringify(value);
+  return String(value);
 }

@@ -24,12 +24,6 @@ export function whenSigned(iso: string): string {
   return dated.format(new Date(iso));
 }
 
-/** A visit's time as the office reads it: "Tue 3 Dec, 09:00". */
-export function visitWhen(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  return new Date(iso).toLocaleString('en-GB', { weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
-}
-
 export function whenRecorded(iso?: string | null, now = new Date()): string {
   if (!iso) return '';
   return `${dayLabel(iso, now)}, ${time.format(new Date(iso))}`;

@@ -1,6 +1,12 @@
 import { PostgresSchema1796424218561 } from './1796424218561-PostgresSchema.js';
 import { PostgresBilling1796424218562 } from './1796424218562-PostgresBilling.js';
-import { PostgresChecksBeforeWork1796424218570 } from './1796424218570-PostgresChecksBeforeWork.js';
+import { PostgresDocumentRevisions1796430000000 } from './1796430000000-PostgresDocumentRevisions.js';
+import { PostgresChecksBeforeWork1796431000000 } from './1796431000000-PostgresChecksBeforeWork.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
-export const POSTGRES_MIGRATIONS = [PostgresSchema1796424218561, PostgresBilling1796424218562, PostgresChecksBeforeWork1796424218570];
+export const POSTGRES_MIGRATIONS = [
+  PostgresSchema1796424218561,
+  PostgresBilling1796424218562,
+  PostgresDocumentRevisions1796430000000,
+  PostgresChecksBeforeWork1796431000000,
+];

@@ -15,6 +15,7 @@ import { SafetyCaution } from '@/components/safety-caution';
 import { paths } from '@/config/paths';
 import { CableSchedule } from '@/features/cables/desk/cable-schedule';
 import { JobConflictsNotice } from '@/features/conflicts/components/job-conflicts-notice';
+import { HeldChanges } from '@/features/documents/components/held-changes';
 import { JobDocuments } from '@/features/documents/components/job-documents';
 import { JobInvoices } from '@/features/invoices/components/job-invoices';
 import { useJob } from '@/features/jobs/api/get-jobs';
@@ -92,6 +93,7 @@ export function Component() {
       <Stack spacing={2}>
         <JobSummary job={j} />
         <JobConflictsNotice jobId={j.id} />
+        <HeldChanges jobId={j.id} />
         <Box sx={{ borderBottom: 1, borderColor: 'divider' }}>
           <Tabs value={tab} onChange={(_, value: TabValue) => setParams(value === 'overview' ? {} : { tab: value }, { replace: true })} aria-label="Job record">
             {TABS.map((t) => (

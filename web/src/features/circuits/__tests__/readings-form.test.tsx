@@ -1,10 +1,15 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
-import { addRing, at, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
+import { addRing, at, ids, loadScreens, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
+
+const screenPath = paths.visitCircuit.href(ids.visit, ids.circuit);
+
+// The visit's layout and the circuit's section are lazy routes: compiled once here, not inside a query's wait.
+beforeAll(() => loadScreens(screenPath), 60_000);
 
 beforeEach(async () => {
   await resetPhone();
@@ -13,26 +18,29 @@ beforeEach(async () => {
 });
 afterEach(tidyUp);
 
-const form = async () => screen.findByRole('form', { name: 'Readings for circuit 1' });
+// The form then waits for the visit's and the circuit's live queries and a first render of the whole visit, and a
+// save for a write to the phone's database: a second of work each on a busy shared machine, so waits allow ten.
+const BUSY = { timeout: 10_000 };
+const form = async () => screen.findByRole('form', { name: 'Readings for circuit 1' }, BUSY);
 const type = (el: HTMLElement, label: string, value: string) => fireEvent.change(within(el).getByLabelText(label, { exact: true }), { target: { value } });
 
-describe('readings for a circuit', () => {
+describe('readings for a circuit', { timeout: 30_000 }, () => {
   it('refuses readings outside physical sense with a plain message', async () => {
-    show(paths.visitCircuit.href(ids.visit, ids.circuit));
+    show(screenPath);
     const f = await form();
     type(f, 'Measured Zs (Ω)', '-1');
-    expect(await within(f).findByText('Zs cannot be negative.')).toBeTruthy();
+    expect(await within(f).findByText('Zs cannot be negative.', undefined, BUSY)).toBeTruthy();
     type(f, 'Measured Zs (Ω)', 'high');
-    expect(await within(f).findByText('Zs must be a number, like 0.45.')).toBeTruthy();
+    expect(await within(f).findByText('Zs must be a number, like 0.45.', undefined, BUSY)).toBeTruthy();
     type(f, 'r1 (Ω)', '300');
-    expect(await within(f).findByText('r1 above 100 Ω is not a real reading; check the figure.')).toBeTruthy();
+    expect(await within(f).findByText('r1 above 100 Ω is not a real reading; check the figure.', undefined, BUSY)).toBeTruthy();
     fireEvent.click(within(f).getByRole('button', { name: 'Save readings' }));
     await new Promise((r) => setTimeout(r, 50));
     expect(await db.testResult.count()).toBe(0);
   });
 
   it('shows each verdict with its limit as it is typed, and keeps the readings with what the phone judged', async () => {
-    show(paths.visitCircuit.href(ids.visit, ids.circuit));
+    show(screenPath);
     const f = await form();
     type(f, 'r1 (Ω)', '0.37');
     type(f, 'rn (Ω)', '0.37');
@@ -44,9 +52,9 @@ describe('readings for a circuit', () => {
     type(f, 'Time at 30 mA (ms)', '24');
     // B32: 0.8 × 1.37 Ω = 1.10 Ω (BS 7671:2018+A2:2022 Table 41.3 and Appendix 3).
     type(f, 'Measured Zs (Ω)', '1.25');
-    expect(await within(f).findByRole('button', { name: 'Earth fault loop impedance Zs: Fail · limit 1.10 Ω. Show how it was judged' })).toBeTruthy();
+    expect(await within(f).findByRole('button', { name: 'Earth fault loop impedance Zs: Fail · limit 1.10 Ω. Show how it was judged' }, BUSY)).toBeTruthy();
     type(f, 'Measured Zs (Ω)', '0.52');
-    expect(await within(f).findByRole('button', { name: 'Earth fault loop impedance Zs: Pass · limit 1.10 Ω. Show how it was judged' })).toBeTruthy();
+    expect(await within(f).findByRole('button', { name: 'Earth fault loop impedance Zs: Pass · limit 1.10 Ω. Show how it was judged' }, BUSY)).toBeTruthy();
     // 24 ms against 300 ms (BS 7671:2018+A2:2022 Reg 643.8); 200 MΩ against 1.0 MΩ at 500 V (Table 64).
     expect(within(f).getByRole('button', { name: /^RCD operating time at 30 mA: Pass · limit 300 ms/ })).toBeTruthy();
     expect(within(f).getByRole('button', { name: /^Insulation resistance, live to earth: Pass · limit 1 MΩ/ })).toBeTruthy();
@@ -55,7 +63,7 @@ describe('readings for a circuit', () => {
     expect(within(f).getAllByText(/An aid only: the regulations in force/).length).toBeGreaterThan(5);
 
     fireEvent.click(within(f).getByRole('button', { name: 'Save readings' }));
-    expect(await screen.findByText('Readings saved on this phone.')).toBeTruthy();
+    expect(await screen.findByText('Readings saved on this phone.', undefined, BUSY)).toBeTruthy();
     const [saved] = await db.testResult.toArray();
     expect(saved).toMatchObject({ visitId: ids.visit, circuitId: ids.circuit, r1Ohm: 0.37, zsOhm: 0.52, irTestVoltageV: 500, polarity: 'correct', rcdTripMs: 24 });
     expect(saved!.verdicts).toEqual({
@@ -67,11 +75,11 @@ describe('readings for a circuit', () => {
   });
 
   it('lists what is still missing for the certificate', async () => {
-    show(paths.visitCircuit.href(ids.visit, ids.circuit));
+    show(screenPath);
     const f = await form();
     type(f, 'Measured Zs (Ω)', '0.5');
     const summary = within(f).getByRole('status', { name: 'Circuit summary' });
-    await waitFor(() => expect(summary.textContent).toContain('Still to record: Ring: r1 against rn; Ring: r2 against r1; R1+R2'));
+    await waitFor(() => expect(summary.textContent).toContain('Still to record: Ring: r1 against rn; Ring: r2 against r1; R1+R2'), BUSY);
     expect(summary.textContent).toContain('This circuit: Check');
   });
 });

@@ -4,33 +4,13 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import type { GridColDef } from '@mui/x-data-grid';
-import type { CircuitTestLine, CircuitReadings } from '@wiretrail/core';
 import { EmptyState } from '@/components/empty-state';
 import { RecordGrid } from '@/components/record-grid';
 import { BeforeWorkChecks, BeforeWorkSummary } from '@/components/verdicts/before-work-checks';
 import { type TestResult, useJobTestResults } from '../api/get-test-results';
 import { overallResult } from '../overall-result';
+import { lineReadings, shortName } from './test-result-lines';
 import { VerdictChip } from '@/components/verdicts/verdict-chip';
-
-/** The readings a line shows beside its verdict, with their units. */
-const UNITS: Partial<Record<keyof CircuitReadings, string>> = {
-  r1Ohm: 'Ω', rnOhm: 'Ω', r2Ohm: 'Ω', r1r2Ohm: 'Ω', irLiveLiveMOhm: 'MΩ', irLiveEarthMOhm: 'MΩ', zsOhm: 'Ω', rcdTripMs: 'ms', rcdTripMs5x: 'ms',
-};
-const SHORT: Record<string, string> = { 'ring-r1-rn': 'r1, rn', 'ring-r2': 'r2', 'ir-live-live': 'L–L', 'ir-live-earth': 'L–E', 'rcd-1x': '1×', 'rcd-5x': '5×', 'rcd-button': 'Button' };
-
-/** The ring's r2 line also judges r1, which the line above it shows already. */
-const SHOWN: Partial<Record<string, (keyof CircuitReadings)[]>> = { 'ring-r2': ['r2Ohm'] };
-const ANSWER_WORDS: Record<string, string> = { operates: 'trips', fails: 'does not trip', correct: 'correct', incorrect: 'incorrect' };
-
-function readingsOf(line: CircuitTestLine, result: TestResult): string {
-  const values = (SHOWN[line.key] ?? line.fields).map((f) => {
-    const v = result[f as keyof TestResult] as number | string | null;
-    if (v === null || v === undefined) return '—';
-    if (typeof v === 'string') return ANSWER_WORDS[v] ?? v;
-    return UNITS[f] ? `${v} ${UNITS[f]}` : String(v);
-  });
-  return [...new Set(values)].join(', ');
-}
 
 /**
  * The lines of one group (ring, insulation, RCD…): each reading with its verdict, which opens to its limit and source.
@@ -45,11 +25,11 @@ function Lines({ result, keys }: { result: TestResult; keys: string[] }) {
         <Stack key={l.key} direction="row" sx={{ alignItems: 'center', gap: 0.75 }}>
           {keys.length > 1 && (
             <Typography variant="body2" color="text.secondary" sx={{ minWidth: 36 }}>
-              {SHORT[l.key] ?? l.key}
+              {shortName(l)}
             </Typography>
           )}
           <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
-            {readingsOf(l, result)}
+            {lineReadings(l, result)}
           </Typography>
           <VerdictChip what={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} size="small" against="none" plain />
         </Stack>

@@ -8,14 +8,14 @@ import Typography from '@mui/material/Typography';
 import ExpandMore from '@mui/icons-material/ExpandMore';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { circuitKindWords } from '@wiretrail/core';
 import type { CircuitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
 import { type CircuitDetails, CircuitDetailFields, circuitDetailFields, circuitDetailsOf, circuitDetailsSchema } from './circuit-fields';
-import { KIND_WORDS } from './circuit-fields';
 
 export function describeCircuit(c: CircuitRow): string {
   return [
-    c.kind ? KIND_WORDS[c.kind] : null,
+    c.kind ? circuitKindWords(c.kind) : null,
     c.deviceType ? `${/^[BCD]$/.test(c.deviceType) ? `type ${c.deviceType}` : c.deviceType} ${c.deviceRatingA ?? '?'}\u00a0A` : 'device not recorded',
     c.rcdRatingMa ? `${c.rcdRatingMa} mA RCD${c.rcdType ? ` (${c.rcdType})` : ''}` : 'no RCD recorded',
     c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2}/${c.cpcCsaMm2}\u00a0mm²` : 'sizes not recorded',

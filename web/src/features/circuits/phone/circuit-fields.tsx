@@ -1,14 +1,11 @@
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
-import { CIRCUIT_KINDS, type FieldValue, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import { CIRCUIT_KIND_WORDS, CIRCUIT_KINDS, type FieldValue, PROTECTIVE_DEVICE_WORDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
 import type { FieldErrors, UseFormRegister } from 'react-hook-form';
 import { z } from 'zod';
 import type { CircuitRow } from '@/lib/db';
 import { choicesOf, NativeChoice } from '@/components/forms/phone-inputs';
 import { readingField, readingText, usableReading } from '@/lib/readings';
-
-export const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
-const DEVICE_WORDS: Record<string, string> = { B: 'Type B circuit-breaker', C: 'Type C circuit-breaker', D: 'Type D circuit-breaker' };
 
 /** The circuit's own details that its tests depend on. */
 export const circuitDetailsSchema = z.object({
@@ -55,9 +52,9 @@ export function CircuitDetailFields({ register, errors }: { register: UseFormReg
   const num = { htmlInput: { inputMode: 'decimal' as const } };
   return (
     <>
-      <NativeChoice label="Kind" {...register('kind')} options={choicesOf(CIRCUIT_KINDS, KIND_WORDS)} />
+      <NativeChoice label="Kind" {...register('kind')} options={choicesOf(CIRCUIT_KINDS, CIRCUIT_KIND_WORDS)} />
       <Stack direction="row" spacing={1.5}>
-        <NativeChoice label="Protective device" {...register('deviceType')} emptyLabel="Not known" options={PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d] ?? `${d} fuse` }))} />
+        <NativeChoice label="Protective device" {...register('deviceType')} emptyLabel="Not known" options={choicesOf(PROTECTIVE_DEVICES, PROTECTIVE_DEVICE_WORDS)} />
         <TextField label="Rating (A)" {...register('deviceRatingA')} error={!!errors.deviceRatingA} helperText={errors.deviceRatingA?.message ?? ' '} slotProps={num} sx={{ maxWidth: 130 }} />
       </Stack>
       <Stack direction="row" spacing={1.5}>

@@ -7,26 +7,26 @@ import ListSubheader from '@mui/material/ListSubheader';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
+import { circuitKindWords, readingsOf } from '@wiretrail/core';
 import { Link as RouterLink } from 'react-router-dom';
 import { VerdictChip } from '@/components/verdicts/verdict-chip';
 import { paths } from '@/config/paths';
 import type { CircuitRow } from '@/lib/db';
 import { usePendingIds } from '@/lib/sync/use-pending-ids';
 import { type CircuitTests, useCircuitTests } from '../data/get-circuit-tests';
-import { assess, fromStored } from '../circuit-readings';
+import { assess } from '../circuit-readings';
 import { AddCircuitForm } from './add-circuit-form';
-import { KIND_WORDS } from './circuit-fields';
 
 function CircuitItem({ circuit, data, visitId, waiting }: { circuit: CircuitRow; data: CircuitTests; visitId: string; waiting: boolean }) {
   const result = data.results.get(circuit.id);
   const altered = data.altered.has(circuit.id);
-  const verdict = result ? assess(circuit, fromStored(result), data.site?.earthing).verdict : null;
+  const verdict = result ? assess(circuit, readingsOf(result), data.site?.earthing).verdict : null;
   const device = circuit.deviceType && circuit.deviceRatingA ? `${circuit.deviceType}${circuit.deviceRatingA}` : null;
   return (
     <ListItemButton divider component={RouterLink} to={paths.visitCircuit.href(visitId, circuit.id)} sx={{ gap: 1 }}>
       <ListItemText
         primary={`${circuit.number} · ${circuit.description || 'No description'}`}
-        secondary={[circuit.kind ? KIND_WORDS[circuit.kind] : null, device, circuit.rcdRatingMa ? `${circuit.rcdRatingMa} mA RCD` : null, altered ? 'altered on this visit' : null, waiting ? 'waiting to send' : null]
+        secondary={[circuit.kind ? circuitKindWords(circuit.kind) : null, device, circuit.rcdRatingMa ? `${circuit.rcdRatingMa} mA RCD` : null, altered ? 'altered on this visit' : null, waiting ? 'waiting to send' : null]
           .filter(Boolean)
           .join(' · ')}
       />

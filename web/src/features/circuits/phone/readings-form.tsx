@@ -6,32 +6,41 @@ import TextField from '@mui/material/TextField';
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
-import { type CircuitTestAssessment, type CircuitTestKey, extendRing, type FieldValue, INSULATION_TEST_VOLTAGES, InvalidInputError, type RingExtension, r1r2Expected, roundTo } from '@wiretrail/core';
+import {
+  circuitReading,
+  type CircuitTestAssessment,
+  type CircuitTestKey,
+  extendRing,
+  type FieldValue,
+  INSULATION_TEST_VOLTAGES,
+  InvalidInputError,
+  type RingExtension,
+  r1r2Expected,
+  roundTo,
+} from '@wiretrail/core';
 import { type ReactNode, useMemo, useState } from 'react';
-import { Controller, type FieldPath, useForm, useWatch } from 'react-hook-form';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { SaveBar } from '@/components/forms/phone-inputs';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import { VERDICT_WORDS } from '@/components/verdicts/verdict-words';
 import type { CircuitRow, PointChangeRow, TestResultRow } from '@/lib/db';
-import { readingField, readingText, usableReading } from '@/lib/readings';
+import { circuitReadingField, readingText } from '@/lib/readings';
 import { createRecord, type Fields, saveRecord } from '@/lib/sync/local-write';
-import { assess, fromTyped, NUMERIC_READINGS, type TypedReadings, verdictSummary } from '../circuit-readings';
-
-const r = (field: string, label: string, unit: string) => readingField('testResult', field, label, unit);
+import { assess, fromTyped, NUMERIC_READINGS, storedReadings, verdictSummary } from '../circuit-readings';
 
 export const readingsSchema = z.object({
-  r1Ohm: r('r1Ohm', 'r1', 'Ω'),
-  rnOhm: r('rnOhm', 'rn', 'Ω'),
-  r2Ohm: r('r2Ohm', 'r2', 'Ω'),
-  r1r2Ohm: r('r1r2Ohm', 'R1+R2', 'Ω'),
-  irLiveLiveMOhm: r('irLiveLiveMOhm', 'Insulation live to live', 'MΩ'),
-  irLiveEarthMOhm: r('irLiveEarthMOhm', 'Insulation live to earth', 'MΩ'),
+  r1Ohm: circuitReadingField('r1Ohm'),
+  rnOhm: circuitReadingField('rnOhm'),
+  r2Ohm: circuitReadingField('r2Ohm'),
+  r1r2Ohm: circuitReadingField('r1r2Ohm'),
+  irLiveLiveMOhm: circuitReadingField('irLiveLiveMOhm'),
+  irLiveEarthMOhm: circuitReadingField('irLiveEarthMOhm'),
   irTestVoltageV: z.enum(['', '250', '500', '1000']),
   polarity: z.enum(['', 'correct', 'incorrect']),
-  zsOhm: r('zsOhm', 'Zs', 'Ω'),
-  rcdTripMs: r('rcdTripMs', 'The RCD time', 'ms'),
-  rcdTripMs5x: r('rcdTripMs5x', 'The RCD time at 5 ×', 'ms'),
+  zsOhm: circuitReadingField('zsOhm'),
+  rcdTripMs: circuitReadingField('rcdTripMs'),
+  rcdTripMs5x: circuitReadingField('rcdTripMs5x'),
   rcdButton: z.enum(['', 'operates', 'fails']),
   instrument: z.string().max(200, 'The instrument must be at most 200 characters.'),
 });
@@ -133,15 +142,16 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
   const values = useWatch({ control }) as ReadingsValues;
   const [error, setError] = useState<string | null>(null);
   const errors = formState.errors;
-  const assessment = useMemo(() => assess(circuit, fromTyped(values as TypedReadings), earthing), [circuit, values, earthing]);
+  const assessment = useMemo(() => assess(circuit, fromTyped(values), earthing), [circuit, values, earthing]);
   const ring = circuit.kind === 'ring';
   const rcd = circuit.rcdRatingMa != null;
   const predicted = useMemo(() => predictedAfter(extensions, circuit), [extensions, circuit]);
   const radial = useMemo(() => radialExpectation(circuit), [circuit]);
 
-  const reading = (name: FieldPath<ReadingsValues>, label: string, unit: string) => (
+  // The unit, and the label unless the group around it says the rest, are the catalogue's.
+  const reading = (name: (typeof NUMERIC_READINGS)[number], label = circuitReading(name).label) => (
     <TextField
-      label={`${label} (${unit})`}
+      label={`${label} (${circuitReading(name).unit})`}
       {...register(name)}
       error={!!errors[name]}
       helperText={errors[name]?.message ?? ' '}
@@ -151,12 +161,9 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
 
   async function save(v: ReadingsValues) {
     setError(null);
-    const final = assess(circuit, fromTyped(v as TypedReadings), earthing);
+    const final = assess(circuit, fromTyped(v), earthing);
     const fields: Record<string, FieldValue> = {
-      ...Object.fromEntries(NUMERIC_READINGS.map((f) => [f, usableReading(v[f])])),
-      irTestVoltageV: v.irTestVoltageV ? Number(v.irTestVoltageV) : null,
-      polarity: v.polarity || null,
-      rcdButton: v.rcdButton || null,
+      ...storedReadings(v),
       instrument: v.instrument.trim() || null,
       verdicts: verdictSummary(final) as unknown as FieldValue,
       testedAt: new Date().toISOString(),
@@ -193,9 +200,9 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
           {ring && (
             <Group title="Ring continuity, end to end">
               <Stack direction="row" spacing={1}>
-                {reading('r1Ohm', 'r1', 'Ω')}
-                {reading('rnOhm', 'rn', 'Ω')}
-                {reading('r2Ohm', 'r2', 'Ω')}
+                {reading('r1Ohm')}
+                {reading('rnOhm')}
+                {reading('r2Ohm')}
               </Stack>
               {predicted && (
                 <Typography variant="body2" color="text.secondary">
@@ -211,7 +218,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
             </Group>
           )}
           <Group title="Protective conductor">
-            {reading('r1r2Ohm', 'R1+R2', 'Ω')}
+            {reading('r1r2Ohm')}
             {radial && <Typography variant="body2">{radial}</Typography>}
             <Verdicts assessment={assessment} keys={['r1r2']} />
           </Group>
@@ -231,8 +238,8 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
               )}
             />
             <Stack direction="row" spacing={1}>
-              {reading('irLiveLiveMOhm', 'Live to live', 'MΩ')}
-              {reading('irLiveEarthMOhm', 'Live to earth', 'MΩ')}
+              {reading('irLiveLiveMOhm', 'Live to live')}
+              {reading('irLiveEarthMOhm', 'Live to earth')}
             </Stack>
             <Verdicts assessment={assessment} keys={['ir-live-live', 'ir-live-earth']} />
           </Group>
@@ -244,14 +251,14 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
             <Verdicts assessment={assessment} keys={['polarity']} />
           </Group>
           <Group title="Earth fault loop impedance">
-            {reading('zsOhm', 'Measured Zs', 'Ω')}
+            {reading('zsOhm', 'Measured Zs')}
             <Verdicts assessment={assessment} keys={['zs']} />
           </Group>
           {rcd && (
             <Group title={`RCD, ${circuit.rcdRatingMa} mA`}>
               <Stack direction="row" spacing={1}>
-                {reading('rcdTripMs', `Time at ${circuit.rcdRatingMa} mA`, 'ms')}
-                {reading('rcdTripMs5x', 'At 5 ×, optional', 'ms')}
+                {reading('rcdTripMs', `Time at ${circuit.rcdRatingMa} mA`)}
+                {reading('rcdTripMs5x', 'At 5 ×, optional')}
               </Stack>
               {toggle('rcdButton', 'RCD test button', [
                 ['operates', 'Test button trips it'],

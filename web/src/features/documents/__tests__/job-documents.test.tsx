@@ -11,6 +11,7 @@ const JOB = '01900000-0000-7000-8000-000000000010';
 const doc = (n: number, extra: Partial<JobDocument>): JobDocument => ({
   id: `01900000-0000-7000-8000-00000000002${n}`, jobId: JOB, kind: 'photo-record', number: `PR-000${n}`, title: null, signerName: 'Dan Whitlow',
   pdfSha256: 'a'.repeat(64), pdfBytes: 1000, issuedAt: '2026-03-14T11:00:00.000Z', issuedById: null, emailState: null, emailedTo: null, emailedAt: null, emailError: null,
+  coverage: null, supersedesId: null, revisionReason: null, supersededAt: null, supersededById: null,
   ...extra,
 });
 
@@ -84,6 +85,24 @@ describe('JobDocuments', () => {
     expect(within(alert).getByText(/Zs 1\.52 Ω is above 1\.10 Ω/)).toBeTruthy();
     expect(within(alert).getByText(/RCD operating time at 30 mA has no reading/)).toBeTruthy();
     expect(calls.filter((c) => c.method === 'POST')).toEqual([{ method: 'POST', path: `/api/jobs/${JOB}/documents`, body: { kind: 'minor-works' } }]);
+  });
+
+  it('asks which cables a cabling report covers, and names each cable that fails once issued', async () => {
+    const calls = show((c) =>
+      c.method === 'POST'
+        ? { status: 201, body: { ...doc(1, { kind: 'cabling-report', number: 'CR-0001', coverage: 'site' }), notices: ['RC-03 fails: The pair on pins 1,2 lands on pins 3,6 at the other end.'] } }
+        : { status: 200, body: { items: [doc(2, { kind: 'minor-works', number: 'MW-0002', supersedesId: doc(3, {}).id, revisionReason: 'Breaker is 20 A' }), doc(3, { kind: 'minor-works', number: 'MW-0001', supersededAt: '2026-03-15T09:00:00.000Z', supersededById: doc(2, {}).id })] } },
+    );
+    const table = await screen.findByRole('table', { name: 'Issued documents' });
+    expect(within(table).getByText('Superseded by MW-0002')).toBeTruthy();
+    expect(within(table).getByText('Revision of MW-0001: Breaker is 20 A')).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Issue wiremap and length record' }));
+    const confirm = screen.getByRole('dialog', { name: 'Issue the wiremap and length record?' });
+    fireEvent.click(within(confirm).getByLabelText(/The site’s whole cable schedule/));
+    fireEvent.click(within(confirm).getByRole('button', { name: 'Issue' }));
+    expect(await screen.findByText('CR-0001 records a fault')).toBeTruthy();
+    expect(screen.getByText(/RC-03 fails: The pair on pins 1,2 lands on pins 3,6/)).toBeTruthy();
+    expect(calls.filter((c) => c.method === 'POST')).toEqual([{ method: 'POST', path: `/api/jobs/${JOB}/documents`, body: { kind: 'cabling-report', coverage: 'site' } }]);
   });
 
   it("opens the e-mail form with the customer's address filled in", async () => {

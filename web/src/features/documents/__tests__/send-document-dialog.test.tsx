@@ -11,6 +11,7 @@ const JOB = '01900000-0000-7000-8000-000000000010';
 const DOC: JobDocument = {
   id: '01900000-0000-7000-8000-000000000020', jobId: JOB, kind: 'minor-works', number: 'MW-0001', title: null, signerName: 'Aled Pryce',
   pdfSha256: 'a'.repeat(64), pdfBytes: 51234, issuedAt: '2026-03-14T11:00:00.000Z', issuedById: null, emailState: null, emailedTo: null, emailedAt: null, emailError: null,
+  coverage: null, supersedesId: null, revisionReason: null, supersededAt: null, supersededById: null,
 };
 
 function show(answer: (c: FakeCall) => FakeAnswer, defaultTo: string | null = 'hannah.greaves@example.com') {

@@ -3,7 +3,7 @@ import type { JobDocument } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
 // The shapes are core's, shared with the API that gives them.
-export type { DocumentEmailState as EmailState, DocumentKind, JobDocument } from '@wiretrail/core';
+export type { DocumentCoverage, DocumentEmailState as EmailState, DocumentKind, IssuedDocument, JobDocument } from '@wiretrail/core';
 
 /** While an e-mail is on its way, the list asks again every few seconds so the state moves on by itself. */
 const WHILE_SENDING_MS = 3000;

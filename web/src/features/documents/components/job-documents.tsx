@@ -10,8 +10,11 @@ import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogContentText from '@mui/material/DialogContentText';
 import DialogTitle from '@mui/material/DialogTitle';
+import FormControlLabel from '@mui/material/FormControlLabel';
 import LinearProgress from '@mui/material/LinearProgress';
 import Paper from '@mui/material/Paper';
+import Radio from '@mui/material/Radio';
+import RadioGroup from '@mui/material/RadioGroup';
 import Snackbar from '@mui/material/Snackbar';
 import Stack from '@mui/material/Stack';
 import Table from '@mui/material/Table';
@@ -26,10 +29,10 @@ import { useState } from 'react';
 import { VisuallyHidden } from '@/components/visually-hidden';
 import { ApiError } from '@/lib/api-client';
 import { useDownloadDocument } from '../api/download-document';
-import { type DocumentKind, type JobDocument, useJobDocuments } from '../api/get-job-documents';
+import { type DocumentCoverage, type DocumentKind, type JobDocument, useJobDocuments } from '../api/get-job-documents';
 import { useJobRecipient } from '../api/get-job-recipient';
 import { useIssueDocument } from '../api/issue-document';
-import { DOCUMENT_KINDS, issuedTime, kindName } from '../document-words';
+import { COVERAGES, DOCUMENT_KINDS, issuedTime, kindName } from '../document-words';
 import { EmailStateChip } from './email-state-chip';
 import { SendDocumentDialog } from './send-document-dialog';
 
@@ -43,16 +46,27 @@ export function JobDocuments({ jobId }: { jobId: string }) {
   const [refused, setRefused] = useState<{ kind: DocumentKind; messages: string[] } | null>(null);
   const [sending, setSending] = useState<JobDocument | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
+  const [coverage, setCoverage] = useState<DocumentCoverage>('job');
+  // What the office should know of a document just issued: each cable that fails, by name.
+  const [issuedNotices, setIssuedNotices] = useState<{ number: string; notices: string[] } | null>(null);
 
   const start = (kind: DocumentKind) => {
     setConfirming(null);
     setRefused(null);
-    issue.mutate(kind, {
-      onSuccess: (doc) => setNotice(`${doc.number} issued.`),
-      onError: (err) => setRefused({ kind, messages: err instanceof ApiError ? err.messages : [err.message] }),
-    });
+    setIssuedNotices(null);
+    issue.mutate(
+      { kind, coverage },
+      {
+        onSuccess: (doc) => {
+          setNotice(`${doc.number} issued.`);
+          if (doc.notices?.length) setIssuedNotices({ number: doc.number, notices: doc.notices });
+        },
+        onError: (err) => setRefused({ kind, messages: err instanceof ApiError ? err.messages : [err.message] }),
+      },
+    );
   };
   const items = documents.data?.items ?? [];
+  const numberOf = (id: string | null) => items.find((d) => d.id === id)?.number ?? 'another document';
 
   return (
     <Stack component="section" aria-labelledby="documents-heading" spacing={2}>
@@ -96,6 +110,16 @@ export function JobDocuments({ jobId }: { jobId: string }) {
           )}
         </Alert>
       )}
+      {issuedNotices && (
+        <Alert severity="warning" onClose={() => setIssuedNotices(null)}>
+          <AlertTitle>{issuedNotices.number} records a fault</AlertTitle>
+          <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
+            {issuedNotices.notices.map((m) => (
+              <li key={m}>{m}</li>
+            ))}
+          </Box>
+        </Alert>
+      )}
       {documents.isError && <Alert severity="error">{documents.error.message}</Alert>}
       {download.isError && (
         <Alert severity="error" onClose={() => download.reset()}>
@@ -124,9 +148,21 @@ export function JobDocuments({ jobId }: { jobId: string }) {
             <TableBody>
               {items.map((d) => (
                 <TableRow key={d.id}>
-                  <TableCell sx={{ fontWeight: 500, whiteSpace: 'nowrap' }}>{d.number}</TableCell>
+                  <TableCell sx={{ fontWeight: 500, whiteSpace: 'nowrap' }}>
+                    {d.number}
+                    {d.supersededAt && (
+                      <Typography variant="body2" color="warning.main">
+                        Superseded by {numberOf(d.supersededById)}
+                      </Typography>
+                    )}
+                  </TableCell>
                   <TableCell>
                     {kindName(d.kind)}
+                    {d.supersedesId && (
+                      <Typography variant="body2" color="text.secondary">
+                        Revision of {numberOf(d.supersedesId)}: {d.revisionReason}
+                      </Typography>
+                    )}
                     {d.signerName && (
                       <Typography variant="body2" color="text.secondary">
                         {d.kind === 'minor-works' ? `Signed by ${d.signerName}` : `Issued by ${d.signerName}`}
@@ -158,9 +194,28 @@ export function JobDocuments({ jobId }: { jobId: string }) {
         <DialogTitle id="issue-document-title">{confirming && `Issue the ${kindName(confirming).toLowerCase()}?`}</DialogTitle>
         <DialogContent>
           <DialogContentText>
-            It gets the next number and cannot be changed afterwards. The records of this job’s visits lock: any later change to them waits in
-            Conflicts for review instead of altering what was issued.
+            It gets the next number and cannot be changed afterwards. Every record it prints locks, the site’s earthing, boards and circuits
+            included: any later change waits beside the issued value for review, and a correction is a revision with a new number.
           </DialogContentText>
+          {confirming === 'cabling-report' && (
+            <RadioGroup aria-label="Cables to report" value={coverage} onChange={(_, v) => setCoverage(v as DocumentCoverage)} sx={{ mt: 2 }}>
+              {COVERAGES.map((c) => (
+                <FormControlLabel
+                  key={c.value}
+                  value={c.value}
+                  control={<Radio />}
+                  label={
+                    <>
+                      {c.label}
+                      <Typography variant="body2" color="text.secondary">
+                        {c.about}
+                      </Typography>
+                    </>
+                  }
+                />
+              ))}
+            </RadioGroup>
+          )}
         </DialogContent>
         <DialogActions sx={{ px: 3, pb: 2 }}>
           <Button onClick={() => setConfirming(null)}>Cancel</Button>

@@ -8,7 +8,7 @@ import { JOB_STATUSES } from '@wiretrail/core';
 import type { Job } from '../api/get-jobs';
 import { useUpdateJob } from '../api/update-job';
 import { JOB_STATUS_HINTS, jobStatusWords } from '../job-status';
-import { visitWhen } from './job-when';
+import { visitWhen } from '@/lib/visit-when';
 
 /** Where the job stands, and the status the office moves it on with. */
 export function JobSummary({ job }: { job: Job }) {

@@ -21,7 +21,7 @@ import type { JobFilters, JobStatusCounts } from '../api/get-job-status-counts';
 import { type Job, useJobs } from '../api/get-jobs';
 import { useUpdateJob } from '../api/update-job';
 import { JOB_STATUS_HINTS, type JobStatus, jobStatusWords, OPEN_JOB_STATUSES } from '../job-status';
-import { visitWhen } from './job-when';
+import { visitWhen } from '@/lib/visit-when';
 
 /** Cards shown per column before the table takes over. */
 const COLUMN_SIZE = 30;

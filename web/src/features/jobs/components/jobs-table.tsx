@@ -8,7 +8,7 @@ import { paths } from '@/config/paths';
 import { type Job, type JobSort, useJobs } from '../api/get-jobs';
 import { type JobScreenState, tableQueryOf } from '../job-filters';
 import { jobStatusWords } from '../job-status';
-import { visitWhen } from './job-when';
+import { visitWhen } from '@/lib/visit-when';
 
 /** Grid columns the server can sort by, and its name for each. */
 const SORT_OF: Record<string, JobSort> = { reference: 'reference', title: 'title', status: 'status', customerName: 'customer', nextVisitStart: 'nextVisit' };

@@ -5,13 +5,7 @@ import { api } from '@/lib/api-client';
 /** A visit as the schedule reads it. */
 export type Visit = Pick<RowOf<'visit'>, 'id' | 'jobId' | 'siteId' | 'technicianIds' | 'plannedStart' | 'plannedEnd' | 'status'>;
 
-export interface Job {
-  id: string;
-  siteId: string;
-  reference: string | null;
-  title: string;
-  status: string | null;
-}
+export type Job = Pick<RowOf<'job'>, 'id' | 'siteId' | 'reference' | 'title' | 'status'>;
 
 
 interface Page<T> {

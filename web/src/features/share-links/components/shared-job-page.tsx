@@ -23,7 +23,7 @@ import { SharedInvoices } from './shared-invoices';
 
 const KIND_NAMES: Record<string, string> = {
   'minor-works': 'Minor works certificate',
-  'cabling-report': 'Cabling test report',
+  'cabling-report': 'Wiremap and length record',
   'photo-record': 'Photo record',
 };
 const STATUS_WORDS: Record<string, string> = {

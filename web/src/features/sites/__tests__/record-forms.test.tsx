@@ -1,6 +1,7 @@
 // @vitest-environment happy-dom
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { PROTECTIVE_DEVICE_WORDS } from '@wiretrail/core';
 import type { ReactNode } from 'react';
 import { describe, expect, it, vi } from 'vitest';
 import { officeApiForEachTest, sentBy } from '@/testing/office-api';
@@ -147,6 +148,14 @@ describe('the circuit form', () => {
     expect(dialog.getByText('RCD rating must be at most 3000 mA.')).toBeTruthy();
     expect(dialog.getByText('Live conductor size must be at least 0.5 mm².')).toBeTruthy();
     expect(api.fetch).not.toHaveBeenCalled();
+  });
+
+  it("offers the protective devices in core's words, as the phone names them", async () => {
+    show(<CircuitDialog siteId={SITE_ID} boards={boards} onClose={vi.fn()} />);
+    fireEvent.mouseDown(within(screen.getByRole('dialog')).getByRole('combobox', { name: 'Protective device' }));
+    const options = (await screen.findAllByRole('option')).map((o) => o.textContent);
+    expect(options).toEqual(['Not recorded', ...Object.values(PROTECTIVE_DEVICE_WORDS)]);
+    expect(options).toContain('BS 3036 semi-enclosed fuse');
   });
 
   it('adds a circuit to the only board with its figures as numbers', async () => {

@@ -13,9 +13,9 @@ import TableContainer from '@mui/material/TableContainer';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
+import { circuitKindWords, deviceAndRating } from '@wiretrail/core';
 import { type ReactNode, useId, useState } from 'react';
 import { type Circuit, useSiteBoards, useSiteCircuits } from '../api/get-circuits';
-import { deviceWords, kindWords } from '../circuit-words';
 import { CircuitDialog } from './forms/circuit-dialog';
 
 interface Props {
@@ -83,8 +83,8 @@ export function SiteCircuits({ siteId, extra, editable = false, title }: Props) 
                   <TableCell>{boardName.get(c.boardId) ?? '—'}</TableCell>
                   <TableCell>{c.number}</TableCell>
                   <TableCell>{c.description ?? '—'}</TableCell>
-                  <TableCell>{kindWords(c.kind)}</TableCell>
-                  <TableCell>{deviceWords(c)}</TableCell>
+                  <TableCell>{circuitKindWords(c.kind)}</TableCell>
+                  <TableCell>{deviceAndRating(c)}</TableCell>
                   <TableCell align="right">{c.rcdRatingMa != null ? `${c.rcdRatingMa}${c.rcdType ? ` type ${c.rcdType}` : ''}` : '—'}</TableCell>
                   <TableCell align="right">{c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2} / ${c.cpcCsaMm2}` : '—'}</TableCell>
                   {extra && <TableCell>{extra.render(c, label(c))}</TableCell>}

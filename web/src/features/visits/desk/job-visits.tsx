@@ -12,8 +12,9 @@ import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import { visitWhen } from '@/lib/visit-when';
 import { useJobVisits } from '../api/get-job-visits';
-import { visitStatusWords, visitWhen } from '../visit-format';
+import { visitStatusWords } from '../visit-format';
 
 const time = (iso: string | null | undefined) => (iso ? new Date(iso).toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit' }) : null);
 

@@ -1,5 +1,5 @@
 import Stack from '@mui/material/Stack';
-import { CIRCUIT_KINDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import { CIRCUIT_KIND_WORDS, CIRCUIT_KINDS, PROTECTIVE_DEVICE_WORDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
 import { z } from 'zod';
 import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
@@ -7,7 +7,6 @@ import { useRecordForm } from '@/components/forms/use-record-form';
 import { optionalChoice, optionalNumber, optionalText, requiredId, requiredText, startingTexts } from '@/lib/record-schema';
 import type { Board, Circuit } from '../../api/get-circuits';
 import { useSaveCircuit } from '../../api/save-record';
-import { CIRCUIT_KIND_WORDS, DEVICE_WORDS } from '../../circuit-words';
 
 export const circuitSchema = z.object({
   boardId: requiredId('the board'),
@@ -24,7 +23,7 @@ export const circuitSchema = z.object({
 });
 
 const KINDS = CIRCUIT_KINDS.map((k) => ({ value: k, label: CIRCUIT_KIND_WORDS[k] }));
-const DEVICES = PROTECTIVE_DEVICES.map((d) => ({ value: d, label: DEVICE_WORDS[d] }));
+const DEVICES = PROTECTIVE_DEVICES.map((d) => ({ value: d, label: PROTECTIVE_DEVICE_WORDS[d] }));
 
 /** Adds a circuit to one of the site's boards, or changes one; the checks judge test results against what is recorded here. */
 export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: string; circuit?: Circuit; boards: Board[]; onClose: () => void }) {
