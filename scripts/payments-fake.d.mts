@@ -14,6 +14,20 @@ export interface FakeCheckoutSession {
   cancel_url: string | null;
   payment_intent: string | null;
   url: string;
+  /** Seconds since 1970: after it the session takes no payment. */
+  expires_at: number;
+  amount_refunded: number;
+}
+
+export interface FakeRefund {
+  id: string;
+  object: 'refund';
+  amount: number;
+  currency: string;
+  payment_intent: string;
+  reason: string | null;
+  metadata: Record<string, string>;
+  status: 'succeeded';
 }
 
 export interface FakeEvent {
@@ -30,7 +44,11 @@ export interface PaymentsFake {
   port: number;
   sessions: Map<string, FakeCheckoutSession>;
   events: FakeEvent[];
-  setWebhookUrl(url: string): void;
+  refunds: FakeRefund[];
+  /** Makes the provider refuse refunds (500) until set back, as when it is down. */
+  refuseRefunds(refuse?: boolean): void;
+  /** Where events go; undefined holds them back (they stay in `events`, to be resent). */
+  setWebhookUrl(url: string | undefined): void;
   /** Pays a session as the customer would on the fake's page; answers 303 when paid, 402 when the card is declined. */
   pay(sessionId: string, card?: string): Promise<Response>;
   close(): Promise<void>;

@@ -1,8 +1,9 @@
 #!/usr/bin/env node
 // Local stand-in for the card payment provider. It answers the few API calls Wiretrail makes through the
-// provider's official Node SDK (create, read and expire a hosted checkout session), in the shapes the provider
-// documents, shows a plain checkout page of its own, and on payment sends the signed `checkout.session.completed`
-// webhook. Pointing the SDK at the real provider is a configuration change (PAYMENTS_API_URL unset).
+// provider's official Node SDK (create, read and expire a hosted checkout session, refund a payment), in the shapes
+// the provider documents, shows a plain checkout page of its own, and on payment sends the signed
+// `checkout.session.completed` webhook. An expired session takes no payment, whether it was expired through the API
+// or its `expires_at` has passed (then `checkout.session.expired` is sent, as the provider does). Pointing the SDK at the real provider is a configuration change (PAYMENTS_API_URL unset).
 import { createHmac, randomBytes } from 'node:crypto';
 import { createServer } from 'node:http';
 import { pathToFileURL } from 'node:url';
@@ -52,6 +53,10 @@ const escape = (s) => String(s ?? '').replace(/[&<>"]/g, (c) => ({ '&': '&amp;',
 export async function startPaymentsFake({ port = 0, host = '127.0.0.1', webhookUrl, webhookSecret, log = () => undefined } = {}) {
   const sessions = new Map();
   const events = [];
+  const refunds = [];
+  /** The SDK's Idempotency-Key: a request sent again answers as the first did, and does nothing more. */
+  const idempotent = new Map();
+  const settings = { refuseRefunds: false };
   let base = '';
 
   async function deliver(event) {
@@ -81,6 +86,9 @@ export async function startPaymentsFake({ port = 0, host = '127.0.0.1', webhookU
     const currency = (items[0]?.price_data?.currency ?? 'gbp').toLowerCase();
     const amount = items.reduce((sum, li) => sum + Number(li.price_data?.unit_amount ?? 0) * Number(li.quantity ?? 1), 0);
     if (!items.length || !Number.isSafeInteger(amount) || amount <= 0) return { error: { type: 'invalid_request_error', message: 'line_items with a positive price_data[unit_amount] are required.' } };
+    if (form.expires_at !== undefined && !(Number(form.expires_at) > Date.now() / 1000)) {
+      return { error: { type: 'invalid_request_error', message: 'expires_at must be in the future.', param: 'expires_at' } };
+    }
     if (!form.success_url) return { error: { type: 'invalid_request_error', message: 'Missing required param: success_url.', param: 'success_url' } };
     const sid = id('cs_test');
     const session = {
@@ -99,13 +107,39 @@ export async function startPaymentsFake({ port = 0, host = '127.0.0.1', webhookU
       cancel_url: form.cancel_url ?? null,
       payment_intent: null,
       created: Math.floor(Date.now() / 1000),
-      expires_at: Math.floor(Date.now() / 1000) + 24 * 3600,
+      expires_at: Number(form.expires_at) || Math.floor(Date.now() / 1000) + 24 * 3600,
+      amount_refunded: 0,
       livemode: false,
       url: `${base}/checkout/${sid}`,
       line_items_description: items.map((li) => li.price_data?.product_data?.name).filter(Boolean).join(', '),
     };
     sessions.set(sid, session);
     return { session };
+  }
+
+  /** A session whose time is up lapses when next looked at, and the provider says so by its event. */
+  async function lapseIfDue(session) {
+    if (session.status !== 'open' || session.expires_at > Date.now() / 1000) return;
+    session.status = 'expired';
+    const event = eventFor('checkout.session.expired', session);
+    log(`checkout ${session.id} expired; sending ${event.id}`);
+    await deliver(event);
+  }
+
+  function createRefund(form) {
+    const session = [...sessions.values()].find((s) => s.payment_intent && s.payment_intent === form.payment_intent);
+    if (!session) return { status: 404, body: { error: { type: 'invalid_request_error', message: `No such payment_intent: '${form.payment_intent ?? ''}'`, code: 'resource_missing', param: 'payment_intent' } } };
+    const left = session.amount_total - session.amount_refunded;
+    const amount = form.amount === undefined ? left : Number(form.amount);
+    if (!Number.isSafeInteger(amount) || amount <= 0 || amount > left) {
+      return { status: 400, body: { error: { type: 'invalid_request_error', message: `Refund amount (${form.amount}) is greater than unrefunded amount on charge (${left})`, param: 'amount' } } };
+    }
+    if (settings.refuseRefunds) return { status: 500, body: { error: { type: 'api_error', message: 'Refunds are not available at the moment.' } } };
+    session.amount_refunded += amount;
+    const refund = { id: id('re'), object: 'refund', amount, currency: session.currency, payment_intent: session.payment_intent, reason: form.reason ?? null, metadata: form.metadata ?? {}, status: 'succeeded', created: Math.floor(Date.now() / 1000) };
+    refunds.push(refund);
+    log(`refunded ${amount} of ${session.payment_intent}`);
+    return { status: 200, body: refund };
   }
 
   const json = (res, status, body) => {
@@ -132,12 +166,21 @@ export async function startPaymentsFake({ port = 0, host = '127.0.0.1', webhookU
         if (!/^Bearer sk_(test|live)_/.test(req.headers.authorization ?? '')) {
           return json(res, 401, { error: { type: 'invalid_request_error', message: 'Invalid API Key provided.' } });
         }
+        if (req.method === 'POST' && url.pathname === '/v1/refunds') {
+          const key = req.headers['idempotency-key'];
+          const known = typeof key === 'string' ? idempotent.get(key) : undefined;
+          if (known) return json(res, known.status, known.body);
+          const made = createRefund(parseForm(await readBody(req)));
+          if (typeof key === 'string' && made.status < 500) idempotent.set(key, made);
+          return json(res, made.status, made.body);
+        }
         if (req.method === 'POST' && url.pathname === '/v1/checkout/sessions') {
           const made = createSession(parseForm(await readBody(req)));
           return made.error ? json(res, 400, { error: made.error }) : json(res, 200, made.session);
         }
         const session = parts[1] === 'checkout' && parts[2] === 'sessions' ? sessions.get(parts[3]) : undefined;
         if (!session) return json(res, 404, { error: { type: 'invalid_request_error', message: `No such checkout.session: '${parts[3] ?? ''}'`, code: 'resource_missing' } });
+        await lapseIfDue(session);
         if (req.method === 'GET' && parts.length === 4) return json(res, 200, session);
         if (req.method === 'POST' && parts[4] === 'expire') {
           if (session.status !== 'open') return json(res, 400, { error: { type: 'invalid_request_error', message: `Only Checkout Sessions with a status in ["open"] can be expired.` } });
@@ -149,6 +192,7 @@ export async function startPaymentsFake({ port = 0, host = '127.0.0.1', webhookU
       if (parts[0] === 'checkout' && parts[1]) {
         const session = sessions.get(parts[1]);
         if (!session) return res.writeHead(404, { 'content-type': 'text/html' }).end(page('Not found', '<h1>This payment page does not exist.</h1>'));
+        await lapseIfDue(session);
         if (session.status !== 'open') {
           return res.writeHead(200, { 'content-type': 'text/html' }).end(page('Closed', `<h1>This payment is ${session.status === 'complete' ? 'already made' : 'no longer open'}.</h1>`));
         }
@@ -202,6 +246,11 @@ export async function startPaymentsFake({ port = 0, host = '127.0.0.1', webhookU
     port: address.port,
     sessions,
     events,
+    refunds,
+    /** Makes the provider refuse refunds (500) until set back, as when it is down. */
+    refuseRefunds: (refuse = true) => {
+      settings.refuseRefunds = refuse;
+    },
     /** Where events go: a test may learn the API's address only after the fake has started. */
     setWebhookUrl: (url) => {
       webhookUrl = url;

@@ -1,4 +1,4 @@
-import { BadRequestException, type INestApplication, ValidationPipe } from '@nestjs/common';
+import { BadRequestException, ValidationPipe } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import type { ValidationError } from 'class-validator';
@@ -20,13 +20,19 @@ function flatten(errors: ValidationError[], parent = ''): string[] {
   });
 }
 
+/** TRUST_PROXY as Express takes it: a flag, a number of proxies in front, or addresses and subnets. */
+export function trustProxyValue(setting: string): boolean | number | string {
+  if (setting === 'true' || setting === 'false') return setting === 'true';
+  return /^\d+$/.test(setting) ? Number(setting) : setting;
+}
+
 /** Everything main.ts and the end-to-end tests share, so tests exercise the app as it runs. */
-export function configureApp(app: INestApplication): INestApplication {
+export function configureApp<A extends NestExpressApplication>(app: A): A {
   app.setGlobalPrefix('api');
   // Resumable photo uploads come first: no body parser may read their bytes, and Nest's routes never see them.
   app.use(app.get(PhotoUploads).handler());
   // A full push batch of field records is larger than Express's 100 kB default.
-  (app as NestExpressApplication).useBodyParser('json', { limit: '5mb' });
+  app.useBodyParser('json', { limit: '5mb' });
   app.use(refuseDeepBodies);
   app.use(
     helmet({
@@ -42,17 +48,9 @@ export function configureApp(app: INestApplication): INestApplication {
     }),
   );
   const config = app.get(ConfigService);
-  // Slows password guessing; counted per client address over a sliding window.
-  app.use(
-    ['/api/auth/sign-in', '/api/auth/password-reset'],
-    rateLimit({
-      windowMs: config.getOrThrow<number>('app.signInRateWindowMs'),
-      limit: config.getOrThrow<number>('app.signInRateLimit'),
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      message: { statusCode: 429, message: 'Too many sign-in attempts. Wait a minute and try again.', error: 'Too Many Requests' },
-    }),
-  );
+  // Behind the README's load balancer every client would otherwise be the balancer's one address.
+  const trustProxy = config.get<string>('app.trustProxy');
+  if (trustProxy) app.set('trust proxy', trustProxyValue(trustProxy));
   // Customers' share pages need no account; a token cannot be guessed, but the pages should not be hammered either.
   app.use(
     '/api/shared',

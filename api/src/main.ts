@@ -2,11 +2,12 @@ import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { AppModule } from './app.module.js';
 import { configureApp } from './app.setup.js';
 
 async function bootstrap(): Promise<void> {
-  const app = configureApp(await NestFactory.create(AppModule, { bufferLogs: false, rawBody: true }));
+  const app = configureApp(await NestFactory.create<NestExpressApplication>(AppModule, { bufferLogs: false, rawBody: true }));
   app.enableShutdownHooks();
   const config = app.get(ConfigService);
   const port = config.getOrThrow<number>('app.port');

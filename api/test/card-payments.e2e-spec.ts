@@ -171,6 +171,109 @@ describe('paying an invoice by card', () => {
     await until(async () => (await invoice(t, office, inv.id)).account!.state === 'paid');
   });
 
+  describe('when what is owed changes while a checkout is open', () => {
+    const webhookUrl = () => `http://127.0.0.1:${(t.app.getHttpServer().address() as AddressInfo).port}/api/payments/webhook`;
+    const cash = (id: string, amountMinor: number, receivedOn: string) =>
+      t.http.post(`/api/invoices/${id}/payments`).set(bearer(office)).send({ amountMinor, method: 'cash', receivedOn }).expect(201);
+    const creditInFull = async (id: string) => {
+      const credit = (await t.http.post(`/api/invoices/${id}/credit-note`).set(bearer(office)).expect(201)).body;
+      return (await t.http.post(`/api/invoices/${credit.id}/issue`).set(bearer(office)).expect(200)).body;
+    };
+    const paymentOf = (sessionId: string) => t.dataSource.getRepository(Payment).findOneByOrFail({ checkoutSessionId: sessionId });
+    /** The customer pays at the provider, but its event is held back, as when its delivery is slow. */
+    const payWithNewsHeldBack = async (sessionId: string) => {
+      fake.setWebhookUrl(undefined);
+      try {
+        expect((await fake.pay(sessionId)).status).toBe(303);
+      } finally {
+        fake.setWebhookUrl(webhookUrl());
+      }
+      return fake.events.at(-1)!;
+    };
+    const resend = async (eventId: string) => (await fetch(`${fake.url}/_fake/events/${eventId}/resend`, { method: 'POST' })).json() as Promise<{ deliveries: Array<{ status?: number }> }>;
+
+    it('expires the open checkout at the provider when the office records a payment, so the old figure cannot be paid', async () => {
+      // £216.67 + 20 % VAT = £260.00 (VAT Notice 700 §17.5: rounded to the nearest penny).
+      const inv = await issuedInvoice(t, office, job.id, [fixedLine('Kitchen circuit', 21_667)]);
+      const opened = (await checkout(inv.id).expect(201)).body;
+      expect(opened.amountMinor).toBe(26_000);
+      const session = sessionOf(opened.url);
+      await cash(inv.id, 10_000, inv.issueDate!);
+      expect(fake.sessions.get(session)!.status).toBe('expired');
+      expect(await t.dataSource.getRepository(CardCheckout).findOneByOrFail({ sessionId: session })).toMatchObject({ state: 'expired' });
+      const events = fake.events.length;
+      expect(await (await fake.pay(session)).text()).toContain('no longer open');
+      expect(fake.events.length).toBe(events);
+      // A new checkout asks for what is owed now.
+      expect((await checkout(inv.id).expect(201)).body.amountMinor).toBe(16_000);
+    });
+
+    it('expires the open checkout when a credit note is issued against the invoice', async () => {
+      const inv = await issuedInvoice(t, office, job.id, [fixedLine('Smoke alarms', 17_388)]);
+      const session = sessionOf((await checkout(inv.id).expect(201)).body.url);
+      expect(fake.sessions.get(session)!.amount_total).toBe(20_866);
+      await creditInFull(inv.id);
+      expect(fake.sessions.get(session)!.status).toBe('expired');
+      expect(await t.dataSource.getRepository(CardCheckout).findOneByOrFail({ sessionId: session })).toMatchObject({ state: 'expired' });
+      expect((await checkout(inv.id).expect(409)).body.message).toBe(`Nothing is owed on invoice ${inv.number}.`);
+    });
+
+    it('records a card payment whose news arrives after cash was recorded, and refunds what is above what was owed', async () => {
+      const inv = await issuedInvoice(t, office, job.id, [fixedLine('Kitchen circuit', 21_667)]);
+      const session = sessionOf((await checkout(inv.id).expect(201)).body.url);
+      const event = await payWithNewsHeldBack(session);
+      await cash(inv.id, 10_000, inv.issueDate!);
+      // Paid at the provider: nothing to expire; its news is on the way.
+      expect(fake.sessions.get(session)!.status).toBe('complete');
+      expect((await resend(event.id)).deliveries.at(-1)).toMatchObject({ status: 200 });
+
+      const intent = fake.sessions.get(session)!.payment_intent;
+      expect(fake.refunds.filter((r) => r.payment_intent === intent)).toEqual([expect.objectContaining({ amount: 10_000, status: 'succeeded' })]);
+      const after = await invoice(t, office, inv.id);
+      expect(after.account).toMatchObject({ paidMinor: 26_000, owedMinor: 0, state: 'paid' });
+      expect(after.payments.map((p) => [p.method, p.amountMinor, p.refundMinor])).toEqual([['cash', 10_000, 0], ['card', 26_000, 10_000]]);
+      expect(await paymentOf(session)).toMatchObject({ refundMinor: 10_000, refundedAt: expect.any(Date), refundReference: expect.stringMatching(/^re_/) });
+      expect((await t.dataSource.getRepository(PaymentEvent).findOneByOrFail({ eventId: event.id })).outcome).toBe(
+        `recorded £260.00 by card against ${inv.number}; £100.00 above the £160.00 owed goes back to the card`,
+      );
+      // The same news again refunds nothing more.
+      await resend(event.id);
+      expect(fake.refunds.filter((r) => r.payment_intent === intent)).toHaveLength(1);
+    });
+
+    it('refunds the whole of a payment whose news arrives after the invoice was credited in full, and tries again until the provider refunds it', async () => {
+      const inv = await issuedInvoice(t, office, job.id, [fixedLine('Smoke alarms', 17_388)]);
+      const session = sessionOf((await checkout(inv.id).expect(201)).body.url);
+      const event = await payWithNewsHeldBack(session);
+      await creditInFull(inv.id);
+      fake.refuseRefunds();
+      try {
+        // The provider cannot refund just now: the payment is recorded, and the event is answered 502 so it comes again.
+        expect((await resend(event.id)).deliveries.at(-1)).toMatchObject({ status: 502 });
+        expect(await paymentOf(session)).toMatchObject({ amountMinor: 20_866, refundMinor: 20_866, refundedAt: null });
+      } finally {
+        fake.refuseRefunds(false);
+      }
+      expect((await resend(event.id)).deliveries.at(-1)).toMatchObject({ status: 200 });
+      const intent = fake.sessions.get(session)!.payment_intent;
+      expect(fake.refunds.filter((r) => r.payment_intent === intent)).toEqual([expect.objectContaining({ amount: 20_866 })]);
+      expect(await paymentOf(session)).toMatchObject({ refundedAt: expect.any(Date) });
+      const after = await invoice(t, office, inv.id);
+      // Never an unexplained overpayment: nothing owed, nothing kept.
+      expect(after.account).toMatchObject({ paidMinor: 0, creditedMinor: 20_866, owedMinor: 0 });
+    });
+
+    it('takes no payment on a checkout whose time at the provider is up, and marks it expired on the provider’s news', async () => {
+      const inv = await issuedInvoice(t, office, job.id, [fixedLine('Outdoor socket', 9_500)]);
+      const session = sessionOf((await checkout(inv.id).expect(201)).body.url);
+      fake.sessions.get(session)!.expires_at = Math.floor(Date.now() / 1000) - 1;
+      expect(await (await fake.pay(session)).text()).toContain('no longer open');
+      expect(fake.events.at(-1)).toMatchObject({ type: 'checkout.session.expired' });
+      await until(async () => (await t.dataSource.getRepository(CardCheckout).findOneByOrFail({ sessionId: session })).state === 'expired');
+      expect((await invoice(t, office, inv.id)).account).toMatchObject({ paidMinor: 0, owedMinor: 11_400 });
+    });
+  });
+
   it('opens checkouts only for issued invoices of the link’s own job', async () => {
     const other = await jobByReference(t, office, 'LED-0042');
     const elsewhere = await issuedInvoice(t, office, other.id, [fixedLine('Patch panel', 9_000)]);

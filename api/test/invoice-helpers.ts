@@ -21,7 +21,7 @@ export interface InvoiceBody {
   fromQuoteId: string | null;
   lines: Array<{ kind: string; description: string; quantity: string; unit: string | null; unitPriceMinor: number; vatRateCode: string; vatBasisPoints: number; netMinor: number; vatMinor: number; grossMinor: number; visitId: string | null; priceItemId: string | null }>;
   byRate: Array<{ basisPoints: number; netMinor: number; vatMinor: number }>;
-  payments: Array<{ amountMinor: number; method: string; receivedOn: string; reference: string | null }>;
+  payments: Array<{ amountMinor: number; method: string; receivedOn: string; reference: string | null; refundMinor: number; refundedAt: string | null }>;
   account: { paidMinor: number; creditedMinor: number; owedMinor: number; state: string; overdueDays: number } | null;
   warnings?: string[];
   emailState: string | null;

@@ -10,10 +10,11 @@ describe('rate limits', () => {
   afterAll(() => t.close());
 
   it('answers 429 after too many attempts in the window', async () => {
+    // No TRUST_PROXY: a forwarded address is the client's own word, and ignored; every failure counts against the peer.
     for (let i = 0; i < 3; i++) {
-      await t.http.post('/api/auth/sign-in').send({ email: 'office@larkfield.example', password: 'wrong-password' }).expect(401);
+      await t.http.post('/api/auth/sign-in').set('x-forwarded-for', `203.0.113.${i}`).send({ email: `guess${i}@larkfield.example`, password: 'wrong-password' }).expect(401);
     }
-    const res = await t.http.post('/api/auth/sign-in').send({ email: 'office@larkfield.example', password: DEMO_PASSWORD }).expect(429);
+    const res = await t.http.post('/api/auth/sign-in').set('x-forwarded-for', '203.0.113.9').send({ email: 'office@larkfield.example', password: DEMO_PASSWORD }).expect(429);
     expect(res.body.message).toMatch(/Too many sign-in attempts/);
     // Other routes are not limited by it.
     await t.http.get('/api/health').expect(200);

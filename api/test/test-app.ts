@@ -1,4 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { Test } from '@nestjs/testing';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -28,14 +29,16 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
     NODE_ENV: 'test',
     ...(await databaseEnvFor(dir)),
     JWT_SECRET: 'test-secret-that-is-long-enough-for-hs256-signing',
+    // Suites that sign in and refresh hundreds of times from one address; sign-in-limits.e2e-spec.ts tests the real limits.
     SIGN_IN_RATE_LIMIT: '1000',
+    REFRESH_RATE_LIMIT: '1000',
     ...env,
   });
   const { AppModule } = await import('../src/app.module.js');
   const { configureApp } = await import('../src/app.setup.js');
   const { seedDemoData } = await import('../src/database/seed.js');
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
-  const app = configureApp(moduleRef.createNestApplication({ logger: ['error'], rawBody: true }));
+  const app = configureApp(moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'], rawBody: true }));
   await app.init();
   const dataSource = app.get(DataSource);
   await dataSource.runMigrations();

@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService } from '../records/records.service.js';
+import { type Listing, PlainRecordsService } from '../records/records.service.js';
 import type { ListAreasQueryDto } from './dto/list-areas-query.dto.js';
 
 @Injectable()
-export class AreasService extends RecordsService<ListAreasQueryDto, 'area'> {
+export class AreasService extends PlainRecordsService<ListAreasQueryDto, 'area'> {
   protected readonly entity = 'area';
 
   protected listing(q: ListAreasQueryDto): Listing {

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Headers, HttpCode, Post } from '@nestjs/common';
+import { BadRequestException, Body, Controller, Get, Headers, HttpCode, Ip, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { AnyRole } from '../common/decorators/roles.decorator.js';
 import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
@@ -23,22 +23,29 @@ export class AuthController {
   @Public()
   @Post('password-reset')
   @HttpCode(204)
-  async completePasswordReset(@Body() dto: CompletePasswordResetDto): Promise<void> {
-    await this.resets.complete(dto.token, dto.password);
+  async completePasswordReset(@Body() dto: CompletePasswordResetDto, @Ip() address: string): Promise<void> {
+    // A link is a secret to guess like a password: a refused one counts against the address.
+    await this.auth.refuseSpentAddress(address);
+    try {
+      await this.resets.complete(dto.token, dto.password);
+    } catch (err) {
+      if (err instanceof BadRequestException) await this.auth.countFailure(address);
+      throw err;
+    }
   }
 
   @Public()
   @Post('sign-in')
   @HttpCode(200)
-  signIn(@Body() dto: SignInDto, @Headers('user-agent') userAgent?: string) {
-    return this.auth.signIn(dto.email, dto.password, userAgent);
+  signIn(@Body() dto: SignInDto, @Ip() address: string, @Headers('user-agent') userAgent?: string) {
+    return this.auth.signIn(dto.email, dto.password, address, userAgent);
   }
 
   @Public()
   @Post('refresh')
   @HttpCode(200)
-  refresh(@Body() dto: RefreshTokenDto, @Headers('user-agent') userAgent?: string) {
-    return this.auth.refresh(dto.refreshToken, userAgent);
+  refresh(@Body() dto: RefreshTokenDto, @Ip() address: string, @Headers('user-agent') userAgent?: string) {
+    return this.auth.refresh(dto.refreshToken, address, userAgent);
   }
 
   @Public()

@@ -7,7 +7,9 @@ import { authConfig } from '../config/app.config.js';
 import { User } from '../users/entities/user.entity.js';
 import { UsersModule } from '../users/users.module.js';
 import { AuthController } from './auth.controller.js';
+import { AttemptLimits } from './attempt-limits.js';
 import { AuthService } from './auth.service.js';
+import { AttemptCount } from './entities/attempt-count.entity.js';
 import { RefreshToken } from './entities/refresh-token.entity.js';
 import { JwtStrategy } from './jwt.strategy.js';
 
@@ -15,7 +17,7 @@ import { JwtStrategy } from './jwt.strategy.js';
   imports: [
     PassportModule,
     UsersModule,
-    TypeOrmModule.forFeature([User, RefreshToken]),
+    TypeOrmModule.forFeature([User, RefreshToken, AttemptCount]),
     JwtModule.registerAsync({
       imports: [ConfigModule.forFeature(authConfig)],
       inject: [authConfig.KEY],
@@ -26,7 +28,7 @@ import { JwtStrategy } from './jwt.strategy.js';
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy],
+  providers: [AuthService, AttemptLimits, JwtStrategy],
   exports: [AuthService],
 })
 export class AuthModule {}

@@ -8,6 +8,7 @@ import { v7 as uuidv7 } from 'uuid';
 import { WriteQueue } from '../common/write-queue.js';
 import { authConfig } from '../config/app.config.js';
 import { type PublicUser, toPublicUser, User } from '../users/entities/user.entity.js';
+import { AttemptLimits } from './attempt-limits.js';
 import { RefreshToken } from './entities/refresh-token.entity.js';
 import type { AccessTokenPayload } from './jwt.strategy.js';
 import { decoyHash, verifyPassword } from './password.js';
@@ -30,26 +31,59 @@ export class AuthService {
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly jwt: JwtService,
     private readonly queue: WriteQueue,
+    private readonly limits: AttemptLimits,
   ) {}
 
-  async signIn(email: string, password: string, userAgent?: string): Promise<SessionTokens> {
+  /**
+   * Failures count against the address and the account, successes against neither. The account's attempt is
+   * counted before its password is checked, so that guesses sent at once cannot all slip under its limit; the
+   * address's only on failure, so that an office signing in together at 8 o'clock is never refused.
+   */
+  async signIn(email: string, password: string, address: string | undefined, userAgent?: string): Promise<SessionTokens> {
+    const from = this.limits.address(address);
+    const account = this.limits.account(email);
+    await this.queue.run(async (em) => {
+      await this.limits.refuseIfSpent(em, [from, account]);
+      await this.limits.count(em, [account]);
+    });
     const user = await this.users.findOne({
       where: { email: email.trim().toLowerCase() },
       select: { id: true, organisationId: true, email: true, name: true, role: true, active: true, passwordHash: true },
     });
     // Hash even when the e-mail is unknown, so the answer takes as long either way.
     const ok = await verifyPassword(password, user?.passwordHash ?? (await decoyHash()));
-    if (!user || !ok || !user.active) throw new UnauthorizedException(BAD_CREDENTIALS);
+    if (!user || !ok || !user.active) {
+      await this.countFailure(address);
+      throw new UnauthorizedException(BAD_CREDENTIALS);
+    }
     return this.queue.run(async (em) => {
+      await this.limits.forget(em, account);
       await em.update(User, { id: user.id }, { lastSignInAt: new Date() });
       return this.issue(em, user, uuidv7(), userAgent);
     });
   }
 
-  async refresh(presented: string, userAgent?: string): Promise<SessionTokens> {
+  /** Refuses (429) an address that has used up its failed sign-ins for now. */
+  refuseSpentAddress(address: string | undefined): Promise<void> {
+    return this.queue.read((em) => this.limits.refuseIfSpent(em, [this.limits.address(address)]));
+  }
+
+  /** A failed sign-in or password link, counted against the address it came from. */
+  countFailure(address: string | undefined): Promise<void> {
+    return this.queue.run((em) => this.limits.count(em, [this.limits.address(address)]));
+  }
+
+  async refresh(presented: string, address: string | undefined, userAgent?: string): Promise<SessionTokens> {
     // In the write queue: two refreshes racing with one token see each other's rotation. A refusal comes back
-    // as null rather than an exception, so that a revocation made on the way (reuse detected) is committed.
-    const session = await this.queue.run((em) => this.rotate(em, presented, userAgent));
+    // as null rather than an exception, so that a revocation made on the way (reuse detected) is committed, and
+    // counted against the address: a refresh token is guessed no faster than a password.
+    const from = this.limits.refresh(address);
+    const session = await this.queue.run(async (em) => {
+      await this.limits.refuseIfSpent(em, [from]);
+      const rotated = await this.rotate(em, presented, userAgent);
+      if (!rotated) await this.limits.count(em, [from]);
+      return rotated;
+    });
     if (!session) throw new UnauthorizedException(SESSION_ENDED);
     return session;
   }
@@ -69,6 +103,10 @@ export class AuthService {
       await this.revokeFamily(em, token.familyId);
       return null;
     }
+    // A session renewed over and over is a script, not a phone: refused before anything is written.
+    const session = this.limits.session(token.familyId);
+    await this.limits.refuseIfSpent(em, [session]);
+    await this.limits.count(em, [session]);
     await em.update(RefreshToken, { id: token.id }, { rotatedAt: new Date() });
     return this.issue(em, user, token.familyId, userAgent);
   }
@@ -86,7 +124,7 @@ export class AuthService {
   }
 
   private async issue(em: EntityManager, user: User, familyId: string, userAgent?: string): Promise<SessionTokens> {
-    const payload: AccessTokenPayload = { sub: user.id, org: user.organisationId, role: user.role };
+    const payload: AccessTokenPayload = { sub: user.id, org: user.organisationId, role: user.role, sid: familyId };
     const accessToken = await this.jwt.signAsync(payload, { expiresIn: this.config.accessTokenTtlSeconds });
     const secret = randomBytes(32).toString('base64url');
     const row = em.create(RefreshToken, {

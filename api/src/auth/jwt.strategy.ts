@@ -13,9 +13,14 @@ export interface AccessTokenPayload {
   sub: string;
   org: string;
   role: string;
+  /** The session (refresh-token family) the token was issued with; the token ends with it. */
+  sid: string;
 }
 
-/** Looks the user up on every request so that deactivation and role changes take effect at once. */
+/**
+ * Looks the user up on every request, with the session the token belongs to, so that deactivation, role changes
+ * and the end of a session (signed out, refresh token reused, password set anew) take effect at once.
+ */
 @Injectable()
 export class JwtStrategy extends PassportStrategy(Strategy) {
   constructor(
@@ -32,7 +37,15 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   }
 
   async validate(payload: AccessTokenPayload): Promise<AuthUser> {
-    const user = await this.users.findOneBy({ id: payload.sub, organisationId: payload.org });
+    const user =
+      typeof payload.sid === 'string'
+        ? await this.users
+            .createQueryBuilder('u')
+            .where('"u"."id" = :id AND "u"."organisationId" = :org', { id: payload.sub, org: payload.org })
+            // A family with one token not revoked is a session still going (rotated tokens keep revokedAt empty).
+            .andWhere('EXISTS (SELECT 1 FROM "refresh_token" "r" WHERE "r"."familyId" = :sid AND "r"."userId" = "u"."id" AND "r"."revokedAt" IS NULL)', { sid: payload.sid })
+            .getOne()
+        : null;
     if (!user || !user.active) throw new UnauthorizedException('Your session has ended. Please sign in again.');
     return { id: user.id, organisationId: user.organisationId, role: user.role, email: user.email, name: user.name };
   }

@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService, type SameSiteRef } from '../records/records.service.js';
+import { type Listing, PlainRecordsService, type SameSiteRef } from '../records/records.service.js';
 import type { ListBoardsQueryDto } from './dto/list-boards-query.dto.js';
 
 @Injectable()
-export class BoardsService extends RecordsService<ListBoardsQueryDto, 'board'> {
+export class BoardsService extends PlainRecordsService<ListBoardsQueryDto, 'board'> {
   protected readonly entity = 'board';
   protected readonly sameSite: SameSiteRef[] = [{ field: 'areaId', entity: 'area' }];
 

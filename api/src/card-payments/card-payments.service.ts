@@ -1,13 +1,15 @@
-import { BadGatewayException, BadRequestException, ConflictException, Inject, Injectable, Logger, NotFoundException, ServiceUnavailableException } from '@nestjs/common';
+import { BadGatewayException, BadRequestException, ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit, ServiceUnavailableException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { formatMoney, localDate } from '@wiretrail/core';
 import Stripe from 'stripe';
-import type { EntityManager } from 'typeorm';
+import { type EntityManager, IsNull } from 'typeorm';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { paymentsConfig } from '../config/payments.config.js';
 import { Invoice } from '../invoices/entities/invoice.entity.js';
 import { accountsOf, todayFor } from '../invoices/invoice-accounts.js';
+import { Payment } from '../invoices/entities/payment.entity.js';
+import { OwedChanges } from '../invoices/owed-changes.js';
 import { PaymentsService } from '../invoices/payments.service.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { ShareLinksService } from '../share-links/share-links.service.js';
@@ -22,7 +24,11 @@ const reasonOf = (err: unknown) => (err instanceof Error ? err.message : String(
 interface Applied {
   organisationId: string | null;
   outcome: string;
+  /** An invoice a card payment was recorded against: its other open checkouts are withdrawn. */
+  paidInvoiceId?: string;
 }
+
+const CHECKOUT_EVENTS = ['checkout.session.completed', 'checkout.session.async_payment_succeeded', 'checkout.session.expired'];
 
 /**
  * Card payments through the provider's hosted checkout, reached only through its official SDK: a customer on a
@@ -30,7 +36,7 @@ interface Applied {
  * payment. An event is taken in once, by its id, however often it is delivered.
  */
 @Injectable()
-export class CardPaymentsService {
+export class CardPaymentsService implements OnModuleInit {
   private readonly logger = new Logger('CardPayments');
   /** One checkout being started per invoice at a time, so two quick taps cannot open two. */
   private readonly starting = new Map<string, Promise<unknown>>();
@@ -42,18 +48,53 @@ export class CardPaymentsService {
     @Inject(PAYMENT_PROVIDER) private readonly provider: Stripe | null,
     @Inject(paymentsConfig.KEY) private readonly config: ConfigType<typeof paymentsConfig>,
     @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
+    private readonly owedChanges: OwedChanges,
   ) {}
+
+  onModuleInit(): void {
+    // A checkout offers a figure; once what is owed changes, that figure is wrong and the offer is withdrawn.
+    this.owedChanges.listen((invoiceId) => this.inTurnFor(invoiceId, () => this.closeOpenCheckouts(invoiceId)));
+  }
 
   async checkout(token: string, invoiceId: string): Promise<{ url: string; amountMinor: number }> {
     const link = await this.shareLinks.open(token);
     if (!this.provider) throw new ServiceUnavailableException(NOT_SET_UP);
+    return this.inTurnFor(invoiceId, () => this.startCheckout(this.provider!, token, link.organisationId, link.jobId, link.id, invoiceId));
+  }
+
+  /** One thing at a time per invoice: opening a checkout, or withdrawing them after what is owed changed. */
+  private async inTurnFor<T>(invoiceId: string, work: () => Promise<T>): Promise<T> {
     const previous = this.starting.get(invoiceId) ?? Promise.resolve();
-    const next = previous.catch(() => undefined).then(() => this.startCheckout(this.provider!, token, link.organisationId, link.jobId, link.id, invoiceId));
+    const next = previous.catch(() => undefined).then(work);
     this.starting.set(invoiceId, next);
     try {
       return await next;
     } finally {
       if (this.starting.get(invoiceId) === next) this.starting.delete(invoiceId);
+    }
+  }
+
+  /**
+   * Expires at the provider every checkout of the invoice still open here. One the customer has just paid stays as
+   * it is: its event is on the way, and what it brings above what is owed then goes back to the card. A provider
+   * that does not answer leaves the checkout open here, to be tried again; the refund on arrival still holds.
+   */
+  private async closeOpenCheckouts(invoiceId: string): Promise<void> {
+    const provider = this.provider;
+    if (!provider) return;
+    const open = await this.queue.read((em) => em.find(CardCheckout, { where: { invoiceId, state: 'open' } }));
+    for (const c of open) {
+      try {
+        let session = await provider.checkout.sessions.retrieve(c.sessionId);
+        if (session.status === 'open') session = await provider.checkout.sessions.expire(c.sessionId);
+        if (session.status === 'expired') {
+          await this.queue.run((em) => em.update(CardCheckout, { id: c.id, state: 'open' }, { state: 'expired' }));
+          this.logger.log(`Checkout ${c.sessionId} expired: what invoice ${invoiceId} owes has changed`);
+        }
+      } catch (err) {
+        if (!(err instanceof Stripe.errors.StripeError)) throw err;
+        this.logger.warn(`Could not expire checkout ${c.sessionId} after invoice ${invoiceId} changed: ${reasonOf(err)}`);
+      }
     }
   }
 
@@ -125,20 +166,48 @@ export class CardPaymentsService {
       this.logger.warn(`Refused a payment event whose signature does not verify: ${reasonOf(err)}`);
       throw new BadRequestException('The payment event’s signature does not verify.');
     }
-    return this.queue.run(async (em) => {
-      if (await em.findOneBy(PaymentEvent, { eventId: event.id })) return { received: true, duplicate: true } as const;
+    const taken = await this.queue.run(async (em) => {
+      if (await em.findOneBy(PaymentEvent, { eventId: event.id })) return { duplicate: true } as const;
       const applied = await this.apply(em, event);
       await em.insert(PaymentEvent, { eventId: event.id, type: event.type, organisationId: applied.organisationId, outcome: applied.outcome.slice(0, 300) });
       this.logger.log(`Payment event ${event.id} (${event.type}): ${applied.outcome}`);
-      return { received: true } as const;
+      return applied;
     });
+    // After the commit: a refund still owed is made now, and again when the provider resends the event after a
+    // failure (a 502 asks it to), so none is left waiting; the provider's idempotency key makes it once.
+    if (CHECKOUT_EVENTS.includes(event.type)) await this.refundDue((event.data.object as Stripe.Checkout.Session).id);
+    if ('paidInvoiceId' in taken && taken.paidInvoiceId) await this.owedChanges.changed(taken.paidInvoiceId);
+    return 'duplicate' in taken ? { received: true, duplicate: true } : { received: true };
+  }
+
+  /** Gives back to the card what a payment brought above what was owed, through the provider's SDK. */
+  private async refundDue(sessionId: string): Promise<void> {
+    const payment = await this.queue.read((em) => em.findOneBy(Payment, { checkoutSessionId: sessionId, refundedAt: IsNull() }));
+    if (!payment || payment.refundMinor <= 0) return;
+    if (!this.provider || !payment.reference) {
+      this.logger.error(`${formatMoney(payment.refundMinor)} of card payment ${payment.id} is to be refunded, but there is no provider to refund it through.`);
+      return;
+    }
+    let refund: Stripe.Refund;
+    try {
+      refund = await this.provider.refunds.create(
+        { payment_intent: payment.reference, amount: payment.refundMinor, reason: 'duplicate', metadata: { invoiceId: payment.invoiceId, paymentId: payment.id } },
+        { idempotencyKey: `wiretrail-refund-${payment.id}` },
+      );
+    } catch (err) {
+      if (!(err instanceof Stripe.errors.StripeError)) throw err;
+      this.logger.warn(`The refund of ${formatMoney(payment.refundMinor)} for card payment ${payment.id} was not made yet: ${reasonOf(err)}`);
+      throw new BadGatewayException('The refund could not be made yet; send the event again.');
+    }
+    await this.queue.run((em) => em.update(Payment, { id: payment.id }, { refundedAt: new Date(), refundReference: refund.id }));
+    this.logger.log(`Refunded ${formatMoney(payment.refundMinor)} of card payment ${payment.id} (${refund.id})`);
   }
 
   private async apply(em: EntityManager, event: Stripe.Event): Promise<Applied> {
-    if (event.type !== 'checkout.session.completed' && event.type !== 'checkout.session.async_payment_succeeded' && event.type !== 'checkout.session.expired') {
+    if (!CHECKOUT_EVENTS.includes(event.type)) {
       return { organisationId: null, outcome: 'not an event this server acts on' };
     }
-    const session = event.data.object;
+    const session = event.data.object as Stripe.Checkout.Session;
     const checkout = await em.findOneBy(CardCheckout, { sessionId: session.id });
     if (!checkout) return { organisationId: null, outcome: 'not a checkout this server started' };
     const org = checkout.organisationId;
@@ -153,6 +222,8 @@ export class CardPaymentsService {
     }
     const invoice = await em.findOneByOrFail(Invoice, { id: checkout.invoiceId, organisationId: org });
     const { timeZone } = await em.findOneByOrFail(Organisation, { id: org });
+    // What is owed now, not what the checkout was opened for: a payment or credit since may have lowered it.
+    const owed = (await accountsOf(em, [invoice], localDate(new Date(), timeZone))).get(invoice.id)?.owedMinor ?? 0;
     const intent = session.payment_intent;
     const payment = await this.payments.recordCard(em, {
       organisationId: org,
@@ -161,8 +232,11 @@ export class CardPaymentsService {
       receivedOn: localDate(new Date(event.created * 1000), timeZone),
       reference: (typeof intent === 'string' ? intent : intent?.id) ?? session.id,
       checkoutSessionId: session.id,
+      owedMinor: owed,
     });
     await em.update(CardCheckout, { id: checkout.id }, { state: 'complete' });
-    return { organisationId: org, outcome: payment ? `recorded ${formatMoney(payment.amountMinor)} by card against ${invoice.number}` : `already recorded against ${invoice.number}` };
+    if (!payment) return { organisationId: org, outcome: `already recorded against ${invoice.number}` };
+    const refund = payment.refundMinor > 0 ? `; ${formatMoney(payment.refundMinor)} above the ${formatMoney(Math.max(0, owed))} owed goes back to the card` : '';
+    return { organisationId: org, outcome: `recorded ${formatMoney(payment.amountMinor)} by card against ${invoice.number}${refund}`, paidInvoiceId: invoice.id };
   }
 }

@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService, type SameSiteRef } from '../records/records.service.js';
+import { type Listing, PlainRecordsService, type SameSiteRef } from '../records/records.service.js';
 import type { ListCircuitsQueryDto } from './dto/list-circuits-query.dto.js';
 
 @Injectable()
-export class CircuitsService extends RecordsService<ListCircuitsQueryDto, 'circuit'> {
+export class CircuitsService extends PlainRecordsService<ListCircuitsQueryDto, 'circuit'> {
   protected readonly entity = 'circuit';
   protected readonly sameSite: SameSiteRef[] = [{ field: 'boardId', entity: 'board' }];
 

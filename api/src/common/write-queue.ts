@@ -48,7 +48,8 @@ export class WriteQueue {
 
   private enqueue<T>(kind: Job['kind'], work: (em: EntityManager) => Promise<T>): Promise<T> {
     return new Promise<T>((resolve, reject) => {
-      this.jobs.push({ kind, work, resolve: resolve as (value: unknown) => void, reject });
+      // The job hands back how to answer, so each caller gets its own work's value once the transaction commits.
+      this.jobs.push({ kind, work: async (em) => { const value = await work(em); return () => resolve(value); }, reject });
       void this.drain();
     });
   }
@@ -61,7 +62,7 @@ export class WriteQueue {
       while (this.jobs.length > 0) {
         if (this.jobs[0]!.kind === 'read') {
           const job = this.jobs.shift()!;
-          await job.work(this.dataSource.manager).then(job.resolve, job.reject);
+          await job.work(this.dataSource.manager).then((answer) => answer(), job.reject);
           continue;
         }
         // A few turns of the event loop first, so that requests still being read reach the queue and commit with
@@ -78,19 +79,19 @@ export class WriteQueue {
   }
 
   private async commitGroup(group: Job[]): Promise<void> {
-    const outcomes: Array<{ ok: true; value: unknown } | { ok: false; error: unknown }> = [];
+    const outcomes: Array<{ ok: true; answer: () => void } | { ok: false; error: unknown }> = [];
     try {
       await this.dataSource.transaction(async (em) => {
         if (this.postgres) await em.query('SELECT pg_advisory_xact_lock($1)', [WRITER_LOCK]);
         for (const job of group) {
           if (group.length === 1) {
             // Alone, it needs no savepoint: its failure rolls the transaction back.
-            outcomes.push({ ok: true, value: await job.work(em) });
+            outcomes.push({ ok: true, answer: await job.work(em) });
             continue;
           }
           await em.query('SAVEPOINT write_queue_job');
           try {
-            outcomes.push({ ok: true, value: await job.work(em) });
+            outcomes.push({ ok: true, answer: await job.work(em) });
             await em.query('RELEASE SAVEPOINT write_queue_job');
           } catch (error) {
             await em.query('ROLLBACK TO SAVEPOINT write_queue_job');
@@ -106,7 +107,7 @@ export class WriteQueue {
     }
     group.forEach((job, i) => {
       const outcome = outcomes[i]!;
-      if (outcome.ok) job.resolve(outcome.value);
+      if (outcome.ok) outcome.answer();
       else job.reject(outcome.error);
     });
   }
@@ -114,8 +115,8 @@ export class WriteQueue {
 
 interface Job {
   kind: 'read' | 'write';
-  work: (em: EntityManager) => Promise<unknown>;
-  resolve: (value: unknown) => void;
+  /** Does the work, and gives back the call that answers its caller with the result. */
+  work: (em: EntityManager) => Promise<() => void>;
   reject: (error: unknown) => void;
 }
 

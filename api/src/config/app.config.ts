@@ -5,15 +5,24 @@ export const appConfig = registerAs('app', () => ({
   port: Number(process.env.PORT ?? 3000),
   host: process.env.HOST ?? '127.0.0.1',
   webDist: process.env.WEB_DIST || undefined,
+  /** Failed sign-ins (and password links) allowed per client address per window; successful ones are not counted. */
   signInRateLimit: Number(process.env.SIGN_IN_RATE_LIMIT ?? 10),
   signInRateWindowMs: Number(process.env.SIGN_IN_RATE_WINDOW_MS ?? 60_000),
+  /** Failed sign-ins allowed per account (e-mail address) per window, from whatever addresses they come. */
+  signInAccountLimit: Number(process.env.SIGN_IN_ACCOUNT_LIMIT ?? 5),
+  signInAccountWindowMs: Number(process.env.SIGN_IN_ACCOUNT_WINDOW_MS ?? 900_000),
+  /** Failed refreshes per client address, and refreshes per session, allowed per sign-in window. */
+  refreshRateLimit: Number(process.env.REFRESH_RATE_LIMIT ?? 30),
+  /** Express's "trust proxy": which proxies' X-Forwarded-For names the client (unset: none, the peer is the client). */
+  trustProxy: process.env.TRUST_PROXY || undefined,
   /** Requests per client address per window to the customers' share pages (a page of photos is one request a photo). */
   shareRateLimit: Number(process.env.SHARE_RATE_LIMIT ?? 300),
   shareRateWindowMs: Number(process.env.SHARE_RATE_WINDOW_MS ?? 60_000),
 }));
 
 export const authConfig = registerAs('auth', () => ({
-  jwtSecret: process.env.JWT_SECRET as string,
+  // Checked at boot (env.validation.ts): at least 32 characters.
+  jwtSecret: process.env.JWT_SECRET ?? '',
   accessTokenTtlSeconds: Number(process.env.ACCESS_TOKEN_TTL_SECONDS ?? 900),
   refreshTokenTtlDays: Number(process.env.REFRESH_TOKEN_TTL_DAYS ?? 30),
 }));

@@ -41,6 +41,20 @@ export class EnvironmentVariables {
   @Type(() => Number) @IsInt() @Min(1000)
   SIGN_IN_RATE_WINDOW_MS = 60_000;
 
+  @Type(() => Number) @IsInt() @Min(1)
+  SIGN_IN_ACCOUNT_LIMIT = 5;
+
+  @Type(() => Number) @IsInt() @Min(1000)
+  SIGN_IN_ACCOUNT_WINDOW_MS = 900_000;
+
+  @Type(() => Number) @IsInt() @Min(1)
+  REFRESH_RATE_LIMIT = 30;
+
+  /** As Express reads it: true, a number of proxies, or addresses and subnets (loopback, 10.0.0.0/8, …). */
+  @IsOptional() @IsString()
+  @Matches(/^(true|false|\d+|[0-9A-Za-z.:/_, -]+)$/, { message: 'TRUST_PROXY must be true, a number of proxies, or a list of addresses and subnets such as loopback, 10.0.0.0/8' })
+  TRUST_PROXY?: string;
+
   @IsOptional() @IsString()
   WEB_DIST?: string;
 

@@ -6,10 +6,11 @@ import { registerAs } from '@nestjs/config';
  */
 export const paymentsConfig = registerAs('payments', () => {
   const url = process.env.PAYMENTS_API_URL ? new URL(process.env.PAYMENTS_API_URL) : null;
+  const protocol: 'http' | 'https' = url?.protocol === 'https:' ? 'https' : 'http';
   return {
     apiKey: process.env.PAYMENTS_API_KEY || null,
     webhookSecret: process.env.PAYMENTS_WEBHOOK_SECRET || null,
-    api: url ? { host: url.hostname, port: Number(url.port || (url.protocol === 'https:' ? 443 : 80)), protocol: url.protocol.replace(':', '') as 'http' | 'https' } : null,
+    api: url ? { host: url.hostname, port: Number(url.port || (url.protocol === 'https:' ? 443 : 80)), protocol } : null,
     currency: 'gbp',
   };
 });

@@ -10,9 +10,11 @@ export type StorageDriver = 'local' | 's3';
  */
 export const storageConfig = registerAs('storage', () => {
   const dataDir = dirname(resolve(process.env.DATABASE_PATH ?? 'data/wiretrail.sqlite'));
+  // Checked at boot (env.validation.ts): local or s3.
+  const driver: StorageDriver = process.env.PHOTO_STORAGE === 's3' ? 's3' : 'local';
   const documents = resolve(process.env.DOCUMENT_STORAGE_DIR || join(dataDir, 'documents'));
   return {
-    driver: (process.env.PHOTO_STORAGE ?? 'local') as StorageDriver,
+    driver,
     directories: {
       photos: resolve(process.env.PHOTO_STORAGE_DIR || join(dataDir, 'photos')),
       documents,

@@ -1,5 +1,5 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import { fieldError, formatHlc, isSyncEntity, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
+import { type Conflict, type ConflictPage, fieldError, formatHlc, isFieldValue, isSyncEntity, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
 import { type EntityManager, In, IsNull, Not } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
@@ -7,7 +7,7 @@ import { WriteQueue } from '../common/write-queue.js';
 import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
-import { toSyncedRow } from '../sync/sync.service.js';
+import { toConflictReply } from '../sync/sync.service.js';
 import type { ListConflictsQueryDto } from './dto/list-conflicts-query.dto.js';
 import type { ResolveConflictDto } from './dto/resolve-conflict.dto.js';
 
@@ -18,7 +18,7 @@ export class ConflictsService {
     private readonly engine: SyncEngine,
   ) {}
 
-  async list(user: AuthUser, q: ListConflictsQueryDto) {
+  async list(user: AuthUser, q: ListConflictsQueryDto): Promise<ConflictPage> {
     // Conflicts are only ever about synced entities: any other name has none.
     const entity = q.entity ? (isSyncEntity(q.entity) ? q.entity : null) : undefined;
     if (entity === null) return { items: [], total: 0, page: q.page, pageSize: q.pageSize };
@@ -33,7 +33,7 @@ export class ConflictsService {
       };
       return syncRepository(em, 'conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
     });
-    return { items: rows.map(toSyncedRow), total, page: q.page, pageSize: q.pageSize };
+    return { items: rows.map(toConflictReply), total, page: q.page, pageSize: q.pageSize };
   }
 
   /**
@@ -56,17 +56,17 @@ export class ConflictsService {
     return [...new Set([jobId, ...visitIds, ...recorded])];
   }
 
-  async findOne(user: AuthUser, id: string) {
+  async findOne(user: AuthUser, id: string): Promise<Conflict> {
     const row = await this.queue.read((em) => syncRepository(em, 'conflict').findOneBy({ id, organisationId: user.organisationId }));
     if (!row) throw new NotFoundException('No such conflict.');
-    return toSyncedRow(row);
+    return toConflictReply(row);
   }
 
   /**
    * Settles a conflict: the chosen value is written through the sync engine as the office's own edit,
    * so every device receives it like any other change.
    */
-  async resolve(user: AuthUser, id: string, dto: ResolveConflictDto) {
+  async resolve(user: AuthUser, id: string, dto: ResolveConflictDto): Promise<Conflict> {
     return this.queue.run(async (em) => {
       const conflict = await syncRepository(em, 'conflict').findOneBy({ id, organisationId: user.organisationId });
       if (!conflict) throw new NotFoundException('No such conflict.');
@@ -89,7 +89,9 @@ export class ConflictsService {
           const value = dto.choice === 'value' ? dto.value : conflict.discardedValue;
           const problem = SYNC_ENTITIES[entity].fields[field] ? fieldError(entity, field, value) : `${entity}.${field} cannot be set`;
           if (problem) throw new ConflictException(problem);
-          mutation = { ...base, set: { [field]: value as never } };
+          // Both choices arrived as JSON, so this holds; the check lets the value travel typed.
+          if (!isFieldValue(value)) throw new ConflictException(`${entity}.${field} must be a JSON value`);
+          mutation = { ...base, set: { [field]: value } };
         }
         const [result] = await this.engine.applyAll(em, actor, [mutation]);
         if (result!.status === 'rejected') throw new ConflictException(result!.error);
@@ -102,7 +104,7 @@ export class ConflictsService {
           resolution: { choice: dto.choice, ...(dto.choice === 'value' ? { value: dto.value } : {}) },
         },
       }]);
-      return toSyncedRow((await syncRepository(em, 'conflict').findOneByOrFail({ id }))!);
+      return toConflictReply((await syncRepository(em, 'conflict').findOneByOrFail({ id }))!);
     });
   }
 }

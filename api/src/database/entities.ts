@@ -3,6 +3,7 @@ import { PaymentEvent } from '../card-payments/entities/payment-event.entity.js'
 import { Invoice } from '../invoices/entities/invoice.entity.js';
 import { InvoiceLine } from '../invoices/entities/invoice-line.entity.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
+import { AttemptCount } from '../auth/entities/attempt-count.entity.js';
 import { PasswordReset } from '../auth/entities/password-reset.entity.js';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
 import { DocumentCounter } from '../paperwork/entities/document-counter.entity.js';
@@ -19,6 +20,6 @@ import { User } from '../users/entities/user.entity.js';
 
 /** For the migration CLI and scripts; the Nest app registers entities per feature module. */
 export const ALL_ENTITIES = [
-  Organisation, User, RefreshToken, PasswordReset, PhotoBlob, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
+  Organisation, User, RefreshToken, PasswordReset, AttemptCount, PhotoBlob, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
   VatRate, LabourRate, Invoice, InvoiceLine, Payment, CardCheckout, PaymentEvent, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
 ];

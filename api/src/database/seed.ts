@@ -1,4 +1,4 @@
-import { formatHlc, localDate, type Mutation, type OfficePaymentMethod, type Role, type SyncEntityName, UK_VAT_RATES } from '@wiretrail/core';
+import { type FieldValue, formatHlc, localDate, type Mutation, type OfficePaymentMethod, type Role, type SyncEntityName, UK_VAT_RATES } from '@wiretrail/core';
 import { readFile } from 'node:fs/promises';
 import { resolve as resolvePath } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -28,7 +28,7 @@ import { type DemoImage, renderDemoImages, storeDemoImage } from './demo-photos.
 interface ScenarioRecord {
   entity: SyncEntityName;
   key: string;
-  set: Record<string, unknown>;
+  set: Record<string, FieldValue>;
   /** Who recorded it, when not the admin: a technician's photos are theirs. */
   by?: string;
 }
@@ -76,7 +76,7 @@ export const DEFAULT_SCENARIO = new URL('../../../seed/scenario.json', import.me
  * relative to today (`@day+1T08:30`, UTC), so the demo always has visits for today and the coming week, or at a
  * drawn scene (`@image:back-box`, the sha256 of seed/scenes/back-box.svg rendered to a JPEG).
  */
-function resolve(value: unknown, ids: Map<string, string>, users: Map<string, string>, today: Date, images: Map<string, DemoImage>): unknown {
+function resolve(value: FieldValue, ids: Map<string, string>, users: Map<string, string>, today: Date, images: Map<string, DemoImage>): FieldValue {
   if (Array.isArray(value)) return value.map((v) => resolve(v, ids, users, today, images));
   if (typeof value !== 'string' || !value.startsWith('@')) return value;
   if (value.startsWith('@image:')) return images.get(value.slice(7))!.sha256;
@@ -110,7 +110,11 @@ interface Resolving {
 
 /** Issues a scenario invoice the way the office would have on its day: built from the job, priced, numbered, printed. */
 async function seedInvoice(em: EntityManager, organisationId: string, inv: ScenarioInvoice, r: Resolving): Promise<void> {
-  const at = (value: string) => new Date(resolve(value, r.ids, r.users, r.today, r.images) as string);
+  const at = (value: string) => {
+    const resolved = resolve(value, r.ids, r.users, r.today, r.images);
+    if (typeof resolved !== 'string') throw new Error(`Scenario invoice has a time that is not text: ${value}`);
+    return new Date(resolved);
+  };
   const jobId = r.ids.get(`job:${inv.job}`);
   const issuerId = r.users.get(inv.by);
   if (!jobId || !issuerId) throw new Error(`Scenario invoice names an unknown job or user: ${inv.job}, ${inv.by}`);
@@ -145,6 +149,7 @@ export async function seedDemoData(
   invoiceStorage?: FileStorage,
 ): Promise<boolean> {
   if ((await dataSource.getRepository(Organisation).count()) > 0) return false;
+  // The scenario is our own file beside this code, and seeding it checks every record as a push would.
   const scenario = JSON.parse(await readFile(scenarioPath, 'utf8')) as Scenario;
   const passwordHash = await hashPassword(scenario.password);
   const imageNames = scenario.organisations.flatMap((o) => (o.records ?? []).map((r) => imageName(r.set.sha256))).filter((n): n is string => !!n);
@@ -186,7 +191,7 @@ export async function seedDemoData(
         return {
           by: r.by ?? admin.email,
           update: isUpdate(o.records!, i),
-          mutation: { mutationId: uuidv7(), entity: r.entity, id: ids.get(`${r.entity}:${r.key}`)!, baseVersion: 0, set: set as Mutation['set'], hlc: formatHlc({ ms: now.getTime(), counter: i, deviceId: 'seed' }) },
+          mutation: { mutationId: uuidv7(), entity: r.entity, id: ids.get(`${r.entity}:${r.key}`)!, baseVersion: 0, set, hlc: formatHlc({ ms: now.getTime(), counter: i, deviceId: 'seed' }) },
         };
       });
       // The admin's records first, then each other user's, in scenario order: a technician's photos need their visit.

@@ -25,7 +25,7 @@ import { DOCUMENT_STORAGE, documentKey, PHOTO_STORAGE, photoKey } from '../stora
 import { insertMany } from '../sync/bulk-write.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { type Actor, type RecordKey, SyncEngine } from '../sync/sync-engine.service.js';
-import { toSyncedRow } from '../sync/sync.service.js';
+import { toPulledRow, toSyncedRow } from '../sync/sync.service.js';
 import { User } from '../users/entities/user.entity.js';
 import { cableNotices, loadCableSchedule, loadMinorWorks, loadPhotoRecord, minorWorksPrints } from './document-content.js';
 import type { DocumentKind } from './dto/issue-document.dto.js';
@@ -103,7 +103,7 @@ export class DocumentsService implements OnModuleInit {
     const images = kind === 'photo-record' ? await this.printablePhotos(user.organisationId, jobId) : new Map<string, Buffer>();
     const { row, notices } = await this.queue.run((em) => this.issueIn(em, user, jobId, kind, images, coverage ?? null, null));
     this.logger.log(`Issued ${row.number} for job ${jobId}`);
-    return { ...toSyncedRow(row), notices };
+    return { ...toPulledRow(row), notices };
   }
 
   /**
@@ -126,7 +126,7 @@ export class DocumentsService implements OnModuleInit {
       return this.issueIn(em, user, old.jobId, old.kind as DocumentKind, images, (old.coverage as DocumentCoverage | null) ?? null, revision);
     });
     this.logger.log(`Issued ${row.number}, superseding ${first.number}`);
-    return { ...toSyncedRow(row), notices };
+    return { ...toPulledRow(row), notices };
   }
 
   /** The changes kept back by a document's lock that the office takes into its revision, made as the office's own edits. */

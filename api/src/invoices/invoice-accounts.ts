@@ -29,7 +29,8 @@ export async function accountsOf(em: EntityManager, invoices: Invoice[], asOf: s
     for (const r of rows) m.set(key(r), (m.get(key(r)) ?? 0) + value(r));
     return m;
   };
-  const paid = sum(payments, (p) => p.invoiceId, (p) => p.amountMinor);
+  // What goes back to a card was never the contractor's to keep.
+  const paid = sum(payments, (p) => p.invoiceId, (p) => p.amountMinor - p.refundMinor);
   // A credit note's total is negative; what it takes off the invoice is that, the other way round.
   const credited = sum(credits, (c) => c.creditsInvoiceId!, (c) => -c.grossMinor);
   return new Map(
@@ -109,6 +110,7 @@ export async function detail(em: EntityManager, invoice: Invoice, asOf: string):
     byRate: documentTotals(lines).byRate.map((r) => ({ ...r })),
     payments: payments.map((p) => ({
       id: p.id, amountMinor: p.amountMinor, method: p.method, receivedOn: p.receivedOn, reference: p.reference, note: p.note, recordedById: p.recordedById, createdAt: p.createdAt.toISOString(),
+      refundMinor: p.refundMinor, refundedAt: iso(p.refundedAt),
     })),
     credits: credits.map((c) => ({ id: c.id, number: c.number, status: c.status, grossMinor: c.grossMinor, issueDate: c.issueDate })),
   };

@@ -13,6 +13,7 @@ import { Payment } from './entities/payment.entity.js';
 import { InvoiceMailService } from './invoice-mail.service.js';
 import { InvoicesController } from './invoices.controller.js';
 import { InvoicesService } from './invoices.service.js';
+import { OwedChanges } from './owed-changes.js';
 import { PaymentsService } from './payments.service.js';
 import { SharedInvoicesController } from './shared-invoices.controller.js';
 
@@ -26,7 +27,7 @@ import { SharedInvoicesController } from './shared-invoices.controller.js';
     StorageModule,
   ],
   controllers: [InvoicesController, SharedInvoicesController],
-  providers: [InvoicesService, PaymentsService, InvoiceMailService],
-  exports: [InvoicesService, PaymentsService],
+  providers: [InvoicesService, PaymentsService, InvoiceMailService, OwedChanges],
+  exports: [InvoicesService, PaymentsService, OwedChanges],
 })
 export class InvoicesModule {}

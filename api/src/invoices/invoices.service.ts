@@ -18,6 +18,7 @@ import { detail, liveJob, summarise, todayFor } from './invoice-accounts.js';
 import { draftOf, issueDraft, linesOf, saveDraft, signOf, withCreditRates, writeLines } from './invoice-issue.js';
 import { type LineDraft, priceLines } from './invoice-lines.js';
 import { linesFromJob } from './job-billing.js';
+import { OwedChanges } from './owed-changes.js';
 
 /**
  * Quotes, invoices and credit notes for a job. Drafts are edited freely and have no number; issuing numbers one in
@@ -34,6 +35,7 @@ export class InvoicesService {
     private readonly shareLinks: ShareLinksService,
     @Inject(INVOICE_STORAGE) private readonly storage: FileStorage,
     @Inject(paymentsConfig.KEY) private readonly payments: ConfigType<typeof paymentsConfig>,
+    private readonly owedChanges: OwedChanges,
   ) {}
 
   forJob(user: AuthUser, jobId: string): Promise<{ items: InvoiceSummary[] }> {
@@ -161,6 +163,8 @@ export class InvoicesService {
       return detail(em, invoice, invoice.issueDate!);
     });
     this.logger.log(`Issued ${issued.number} for job ${issued.jobId}`);
+    // A credit note lowers what its invoice owes.
+    if (issued.creditsInvoiceId) await this.owedChanges.changed(issued.creditsInvoiceId);
     return issued;
   }
 

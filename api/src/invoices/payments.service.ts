@@ -7,6 +7,7 @@ import type { RecordPaymentDto } from './dto/record-payment.dto.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { Payment } from './entities/payment.entity.js';
 import { accountsOf, detail, summarise, todayFor } from './invoice-accounts.js';
+import { OwedChanges } from './owed-changes.js';
 
 /** A card payment the provider reported, to record once. */
 export interface CardPaymentReport {
@@ -16,16 +17,21 @@ export interface CardPaymentReport {
   receivedOn: string;
   reference: string | null;
   checkoutSessionId: string;
+  /** What was still owed when the news arrived: anything paid above it goes back to the card. */
+  owedMinor: number;
 }
 
 /** Money in against invoices, and what is still owed, by whom and for how long. */
 @Injectable()
 export class PaymentsService {
-  constructor(private readonly queue: WriteQueue) {}
+  constructor(
+    private readonly queue: WriteQueue,
+    private readonly owedChanges: OwedChanges,
+  ) {}
 
   /** Money taken on site or paid into the bank, recorded by the office; never more than is still owed. */
-  record(user: AuthUser, invoiceId: string, dto: RecordPaymentDto): Promise<InvoiceDetail> {
-    return this.queue.run(async (em) => {
+  async record(user: AuthUser, invoiceId: string, dto: RecordPaymentDto): Promise<InvoiceDetail> {
+    const recorded = await this.queue.run(async (em) => {
       const invoice = await em.findOneBy(Invoice, { id: invoiceId, organisationId: user.organisationId });
       if (!invoice) throw new NotFoundException('No such invoice.');
       if (invoice.kind !== 'invoice' || invoice.status !== 'issued') throw new ConflictException('Payments are recorded against issued invoices only.');
@@ -48,16 +54,23 @@ export class PaymentsService {
           note: dto.note ?? null,
           recordedById: user.id,
           checkoutSessionId: null,
+          refundMinor: 0,
+          refundedAt: null,
+          refundReference: null,
         }),
       );
       return detail(em, invoice, today);
     });
+    // A checkout opened for the old figure would take too much now.
+    await this.owedChanges.changed(recorded.id);
+    return recorded;
   }
 
   /**
    * A card payment, recorded inside the caller's transaction (the webhook's, with its event id). A checkout session
    * settles at most one payment, however many times its completion is reported. Money already taken is never
-   * refused: if it is more than was owed by now, the invoice shows it overpaid.
+   * refused: what is above what was owed by now (paid another way or credited while the customer was at the
+   * checkout) is recorded as to go back to the card, and the caller refunds it.
    */
   async recordCard(em: EntityManager, report: CardPaymentReport): Promise<Payment | null> {
     if (await em.findOneBy(Payment, { checkoutSessionId: report.checkoutSessionId })) return null;
@@ -72,6 +85,9 @@ export class PaymentsService {
         note: null,
         recordedById: null,
         checkoutSessionId: report.checkoutSessionId,
+        refundMinor: Math.max(0, report.amountMinor - Math.max(0, report.owedMinor)),
+        refundedAt: null,
+        refundReference: null,
       }),
     );
   }

@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
-import { JOB_STATUSES, type JobSort, type JobStatusCounts } from '@wiretrail/core';
+import { JOB_STATUSES, type JobListing, type JobPage, type JobSort, type JobStatusCounts } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { type Condition, type Listing, type OfficeRow, RecordsService } from '../records/records.service.js';
+import { type Condition, type Listing, RecordsService } from '../records/records.service.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { JobFiltersDto, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
@@ -26,12 +26,21 @@ const SORTS: Record<JobSort, string> = {
 };
 
 @Injectable()
-export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
+export class JobsService extends RecordsService<ListJobsQueryDto, 'job', JobListing> {
   protected readonly entity = 'job';
+
+  // Declared here so the replies are checked against the contract the office's job screens read.
+  override list(user: AuthUser, q: ListJobsQueryDto): Promise<JobPage> {
+    return super.list(user, q);
+  }
+
+  override findOne(user: AuthUser, id: string): Promise<JobListing> {
+    return super.findOne(user, id);
+  }
 
   protected listing(q: ListJobsQueryDto): Listing {
     const sort = q.sort ?? 'created';
-    const direction = (q.direction ?? (sort === 'created' ? 'desc' : 'asc')).toUpperCase() as 'ASC' | 'DESC';
+    const direction = (q.direction ?? (sort === 'created' ? 'desc' : 'asc')) === 'desc' ? 'DESC' : 'ASC';
     return {
       search: ['reference', 'title', 'description'],
       searchThrough: [
@@ -48,7 +57,7 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
 
   /** The number of jobs in each status under the same filters, for the board's columns. */
   async statusCounts(user: AuthUser, q: JobFiltersDto): Promise<JobStatusCounts> {
-    const found = await this.countBy(user, { ...q, status: undefined } as ListJobsQueryDto, 'status');
+    const found = await this.countBy(user, { ...q, status: undefined }, 'status');
     const counts: JobStatusCounts['counts'] = { enquiry: 0, booked: 0, 'on-site': 0, paperwork: 0, done: 0, cancelled: 0 };
     for (const s of JOB_STATUSES) counts[s] = found.get(s) ?? 0;
     return { counts, total: [...found.values()].reduce((a, b) => a + b, 0) };
@@ -82,7 +91,7 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job'> {
   }
 
   /** Each job with its customer's and site's names, its next visit and who is booked on its visits. */
-  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'job'>[]): Promise<OfficeRow[]> {
+  protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'job'>[]): Promise<JobListing[]> {
     if (!rows.length) return [];
     const org = user.organisationId;
     const ids = (field: 'customerId' | 'siteId') => [...new Set(rows.map((r) => r[field]))];

@@ -30,7 +30,7 @@ const CLAIM_MS = 2 * 60_000;
 
 /** An SMTP reply in the 5xx range will not change by asking again (no such mailbox, refused as spam). */
 const isPermanent = (err: unknown) => {
-  const code = (err as { responseCode?: unknown })?.responseCode;
+  const code = typeof err === 'object' && err !== null && 'responseCode' in err ? err.responseCode : undefined;
   return typeof code === 'number' && code >= 500 && code < 600;
 };
 
@@ -165,7 +165,7 @@ export class MailOutbox implements OnApplicationBootstrap, OnModuleDestroy {
     if (failure !== null) this.logger.warn(`Attempt ${attempts} to send "${message.subject}" to ${message.toAddress} failed: ${reasonOf(failure)}`);
     await this.queue.run(async (em) => {
       await em.update(OutboxMessage, { id: message.id }, changes);
-      await purpose?.settled(em, { ...message, ...changes } as OutboxMessage);
+      await purpose?.settled(em, Object.assign({}, message, changes));
     });
     // A retry falls due while no message is being sent: look again then, not only at the next poll.
     if (changes.nextAttemptAt && !this.stopped) setTimeout(() => this.kick(), changes.nextAttemptAt.getTime() - Date.now() + 5).unref();

@@ -70,7 +70,7 @@ export async function processPhoto(bytes: Buffer, options: { keepLocation: boole
     const upright = meta.autoOrient ?? { width: meta.width, height: meta.height };
     return { mime, width: upright.width, height: upright.height, thumb, display };
   } catch (err) {
-    if (/pixel limit/i.test(String((err as Error)?.message))) throw new PhotoRefused(413, REFUSALS.tooManyPixels(meta.width, meta.height));
+    if (/pixel limit/i.test(String(typeof err === 'object' && err !== null && 'message' in err ? err.message : err))) throw new PhotoRefused(413, REFUSALS.tooManyPixels(meta.width, meta.height));
     if (meta.format === 'heif') throw new PhotoRefused(415, REFUSALS.heic);
     throw new PhotoRefused(422, REFUSALS.damaged);
   }

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
-import { type Listing, RecordsService } from '../records/records.service.js';
+import { type Listing, PlainRecordsService } from '../records/records.service.js';
 import type { CreatePriceItemDto } from './dto/create-price-item.dto.js';
 import type { ListPriceItemsQueryDto } from './dto/list-price-items-query.dto.js';
 import type { UpdatePriceItemDto } from './dto/update-price-item.dto.js';
@@ -11,7 +11,7 @@ import { activeVatRate, loadRateBook } from './rate-book.js';
  * parts offline), so writes go through the sync engine like any other; the VAT rate must be one the office set up.
  */
 @Injectable()
-export class PriceListService extends RecordsService<ListPriceItemsQueryDto, 'priceItem'> {
+export class PriceListService extends PlainRecordsService<ListPriceItemsQueryDto, 'priceItem'> {
   protected readonly entity = 'priceItem';
 
   protected listing(q: ListPriceItemsQueryDto): Listing {

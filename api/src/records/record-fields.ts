@@ -77,7 +77,7 @@ export function BooleanField(o: FieldOptions = {}): PropertyDecorator {
 export function ChoiceField(values: readonly string[], o: FieldOptions = {}): PropertyDecorator {
   return applyDecorators(
     ...presence(o, { enum: [...values] }),
-    IsIn(values as string[], { message: `$property must be one of: ${values.join(', ')}` }),
+    IsIn(values, { message: `$property must be one of: ${values.join(', ')}` }),
   );
 }
 

@@ -1,10 +1,10 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import { formatHlc, type Mutation, type MutationResult, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
+import { fieldError, type FieldValue, formatHlc, isFieldValue, type Mutation, type MutationResult, type RecordPage, SYNC_ENTITIES, type SyncedRow } from '@wiretrail/core';
 import { type EntityManager, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { type Actor, SyncEngine } from '../sync/sync-engine.service.js';
-import { toSyncedRow } from '../sync/sync.service.js';
+import { type SyncedReply, toSyncedRow } from '../sync/sync.service.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { sentFields } from '../common/defined-fields.js';
 import { WriteQueue } from '../common/write-queue.js';
@@ -19,12 +19,6 @@ export type SiteRecord = OfficeRecord | 'cableRun' | 'pointChange' | 'testResult
 /** A row as the office reads it: the synced row, plus what a feature adds (names of what it points at, verdicts). */
 export type OfficeRow = SyncedRow & Record<string, unknown>;
 
-export interface RecordPage {
-  items: OfficeRow[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
 
 /** A condition over the alias `r`, in portable SQL with quoted identifiers for any other table. */
 export interface Condition {
@@ -63,12 +57,18 @@ export function officeActor(user: AuthUser, deviceId = 'office'): Actor {
 
 /** One change the office makes, as a mutation the engine applies like any device's. */
 export function officeMutation(entity: Mutation['entity'], id: string, baseVersion: number, set: Record<string, unknown>, deviceId = 'office'): Mutation {
+  const values: Record<string, FieldValue> = {};
+  for (const [field, value] of Object.entries(set)) {
+    // A value JSON would change could not come from a device either; it is refused as the engine refuses a device's.
+    if (!isFieldValue(value)) throw new BadRequestException(fieldError(entity, field, value) ?? `${entity}.${field} must be a JSON value`);
+    values[field] = value;
+  }
   return {
     mutationId: uuidv7(),
     entity,
     id,
     baseVersion,
-    set: set as Mutation['set'],
+    set: values,
     hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId }),
   };
 }
@@ -92,7 +92,7 @@ const sortKey = (sort: string) => (/^\w+$/.test(sort) ? `r.${sort}` : sort);
  * A feature's service extends this and says which record it serves and how it is listed.
  */
 @Injectable()
-export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecord = SiteRecord> {
+export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecord = SiteRecord, R extends object = OfficeRow> {
   protected abstract readonly entity: E;
   protected readonly sameSite: SameSiteRef[] = [];
   protected abstract listing(query: Q): Listing;
@@ -102,7 +102,7 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
     protected readonly engine: SyncEngine,
   ) {}
 
-  async list(user: AuthUser, q: Q): Promise<RecordPage> {
+  async list(user: AuthUser, q: Q): Promise<RecordPage<R>> {
     const l = this.listing(q);
     const { where, params } = this.conditionsFor(user, l, q.search);
     const { rows, total } = await this.queue.read(async (em) => {
@@ -134,9 +134,7 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
    * What a feature adds to its rows as the office reads them, inside the same read so that the additions match the rows.
    * By default, nothing.
    */
-  protected async annotate(_em: EntityManager, _user: AuthUser, rows: SyncRecord<E>[]): Promise<OfficeRow[]> {
-    return rows.map(toSyncedRow);
-  }
+  protected abstract annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<E>[]): Promise<R[]>;
 
   private conditionsFor(user: AuthUser, l: Listing, search: string | undefined): { where: string[]; params: Record<string, unknown> } {
     const params: Record<string, unknown> = { org: user.organisationId };
@@ -175,11 +173,11 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
   }
 
   /** Another organisation's record answers exactly like a missing one: its existence is not ours to reveal. */
-  async findOne(user: AuthUser, id: string): Promise<OfficeRow> {
+  async findOne(user: AuthUser, id: string): Promise<R> {
     return this.queue.read(async (em) => (await this.annotate(em, user, [await this.current(em, user, id)]))[0]!);
   }
 
-  async create(user: AuthUser, dto: object): Promise<OfficeRow> {
+  async create(user: AuthUser, dto: object): Promise<R> {
     const set = sentFields(dto);
     const id = uuidv7();
     const { result, row } = await this.queue.run(async (em) => {
@@ -190,7 +188,7 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
     return this.answer(result, row);
   }
 
-  async update(user: AuthUser, id: string, dto: object): Promise<OfficeRow> {
+  async update(user: AuthUser, id: string, dto: object): Promise<R> {
     const set = sentFields(dto);
     if (Object.keys(set).length === 0) throw new BadRequestException('Nothing to change: send at least one field.');
     const { result, row } = await this.queue.run(async (em) => {
@@ -204,7 +202,7 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
   }
 
   /** The row as written, answered as the office reads it, so a save's answer equals the next read. */
-  private async saved(em: EntityManager, user: AuthUser, id: string): Promise<OfficeRow | null> {
+  private async saved(em: EntityManager, user: AuthUser, id: string): Promise<R | null> {
     const row = await syncRepository(em, this.entity).createQueryBuilder('r').where('r.id = :id', { id }).getOne();
     return row ? (await this.annotate(em, user, [row]))[0]! : null;
   }
@@ -243,7 +241,7 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
   }
 
   /** Thrown after the transaction, so that conflicts the engine recorded are kept. */
-  private answer(result: MutationResult, row: OfficeRow | null): OfficeRow {
+  private answer(result: MutationResult, row: R | null): R {
     if (result.status === 'rejected') {
       const error = result.error ?? `The ${this.entity} was not saved.`;
       throw /^No \w+ with that id/.test(error) ? new NotFoundException(`No such ${this.entity}.`) : new BadRequestException(error);
@@ -260,5 +258,12 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
       });
     }
     return row!;
+  }
+}
+
+/** Records the office reads as they are stored, with nothing added. */
+export abstract class PlainRecordsService<Q extends PageQueryDto, E extends SiteRecord> extends RecordsService<Q, E, SyncedReply<E>> {
+  protected async annotate(_em: EntityManager, _user: AuthUser, rows: SyncRecord<E>[]): Promise<SyncedReply<E>[]> {
+    return rows.map(toSyncedRow);
   }
 }

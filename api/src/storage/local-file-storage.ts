@@ -55,4 +55,5 @@ export class LocalFileStorage implements FileStorage {
   }
 }
 
-const isMissing = (err: unknown) => (err as NodeJS.ErrnoException)?.code === 'ENOENT';
+// Not `instanceof Error`: Node's errors may come from another realm (a test runner's, say).
+const isMissing = (err: unknown) => typeof err === 'object' && err !== null && 'code' in err && err.code === 'ENOENT';

@@ -1,5 +1,5 @@
 import { GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
-import type { Readable } from 'node:stream';
+import { Readable } from 'node:stream';
 import type { StorageConfig } from '../config/storage.config.js';
 import { type FileStorage, type KeySpace, StoredFileMissing } from './file-storage.js';
 
@@ -37,7 +37,7 @@ export class S3FileStorage implements FileStorage {
   async get(key: string): Promise<Buffer> {
     const body = await this.open(key);
     const chunks: Buffer[] = [];
-    for await (const chunk of body) chunks.push(chunk as Buffer);
+    for await (const chunk of body) chunks.push(Buffer.isBuffer(chunk) ? chunk : Buffer.from(chunk));
     return Buffer.concat(chunks);
   }
 
@@ -58,8 +58,9 @@ export class S3FileStorage implements FileStorage {
   private async open(key: string): Promise<Readable> {
     try {
       const res = await this.client.send(new GetObjectCommand({ Bucket: this.bucket, Key: this.check(key) }));
-      // In Node.js the body is a readable stream.
-      return res.Body as Readable;
+      // In Node.js the body is a readable stream; the SDK's type covers the browser's bodies too.
+      if (!(res.Body instanceof Readable)) throw new Error(`The bucket answered ${key} without a readable body.`);
+      return res.Body;
     } catch (err) {
       throw isMissing(err) ? new StoredFileMissing(key) : err;
     }

@@ -81,10 +81,11 @@ export async function selectMany<T extends ObjectLiteral>(
     const { values: params, mark } = parameters(em);
     const conditions = [`${col(column)} IN (${values.slice(start, start + IN_LIST_LIMIT).map(mark).join(', ')})`];
     for (const [name, value] of Object.entries(where)) conditions.push(value === null ? `${col(name)} IS NULL` : `${col(name)} = ${mark(value)}`);
-    const raw = (await em.query(`SELECT * FROM ${driver.escape(meta.tableName)} WHERE ${conditions.join(' AND ')}`, params)) as Record<string, unknown>[];
+    const raw = await em.query<Record<string, unknown>[]>(`SELECT * FROM ${driver.escape(meta.tableName)} WHERE ${conditions.join(' AND ')}`, params);
     for (const r of raw) {
       const row: Record<string, unknown> = {};
       for (const { c, property, name } of columns) row[property] = driver.prepareHydratedValue(r[name], c);
+      // Every column of T's metadata, hydrated by the driver: what TypeORM's own find gives typed as T.
       out.push(row as T);
     }
   }

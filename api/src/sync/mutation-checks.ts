@@ -88,15 +88,15 @@ export function checkTechnicianWrite(scope: TechnicianScope | null, checked: Che
       if (!existing || !scope.siteIds.has(m.id)) refuse('That site is not one of your visits.');
       return;
     case 'visit': {
-      const visitId = (existing?.visitId ?? set.visitId) as string | undefined;
+      const visitId = idOf(existing?.visitId ?? set.visitId);
       if (existing && set.visitId !== undefined && set.visitId !== existing.visitId) refuse(`A ${m.entity} cannot move to another visit.`);
       if (!visitId || !scope.visitIds.has(visitId)) refuse('That visit is not assigned to you.');
-      const siteId = (set.siteId ?? existing?.siteId) as string | undefined;
+      const siteId = idOf(set.siteId ?? existing?.siteId);
       if (siteId !== scope.visitSite.get(visitId!)) refuse(`${m.entity}.siteId must be the site of its visit.`);
       return;
     }
     case 'site': {
-      const siteId = (existing?.siteId ?? set.siteId) as string | undefined;
+      const siteId = idOf(existing?.siteId ?? set.siteId);
       if (existing && set.siteId !== undefined && set.siteId !== existing.siteId) refuse(`A ${m.entity} cannot move to another site.`);
       if (!siteId || !scope.siteIds.has(siteId)) refuse('That site is not one of your visits.');
       return;
@@ -111,3 +111,6 @@ function requiredFields(entity: SyncEntityName): string[] {
   if (!fields) REQUIRED.set(entity, (fields = Object.entries(SYNC_ENTITIES[entity].fields).filter(([, f]) => f.required).map(([name]) => name)));
   return fields;
 }
+
+/** A reference field's id: fieldError has already refused anything but text or null. */
+const idOf = (value: unknown) => (typeof value === 'string' ? value : undefined);

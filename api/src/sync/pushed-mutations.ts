@@ -14,8 +14,8 @@ const setAside = new WeakMap<Request, unknown[]>();
 
 /** Middleware for `POST sync/push`, after the body parser: keeps a list of mutations aside for the handler. */
 export function setMutationsAside(req: Request, _res: Response, next: NextFunction): void {
-  const body = req.body as { mutations?: unknown } | undefined;
-  if (body !== null && typeof body === 'object' && Array.isArray(body.mutations)) {
+  const body: unknown = req.body;
+  if (body !== null && typeof body === 'object' && 'mutations' in body && Array.isArray(body.mutations)) {
     setAside.set(req, body.mutations);
     body.mutations = [];
   }
@@ -28,5 +28,6 @@ export function setMutationsAside(req: Request, _res: Response, next: NextFuncti
  */
 export const PushedMutations = createParamDecorator((_: unknown, ctx: ExecutionContext): unknown => {
   const req = ctx.switchToHttp().getRequest<Request>();
-  return setAside.get(req) ?? (req.body as { mutations?: unknown } | undefined)?.mutations;
+  const body: unknown = req.body;
+  return setAside.get(req) ?? (body !== null && typeof body === 'object' && 'mutations' in body ? body.mutations : undefined);
 });

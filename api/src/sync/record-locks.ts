@@ -83,7 +83,7 @@ export class RecordLocks {
     // A delete changes no field, and is held like any change.
     if (hold && (fields.length === 0 || fields.some((f) => !this.unheld(hold, spec.name).has(f)))) return hold;
     if (role !== 'technician' || !spec.visitField) return null;
-    const visitId = (spec.visitField === 'id' ? row.id : row.visitId) as string | null;
+    const visitId = spec.visitField === 'id' ? row.id : typeof row.visitId === 'string' ? row.visitId : null;
     const visit = !visitId ? null : spec.visitField === 'id' ? row : await this.reads.rowOf('visit', visitId);
     return visit?.status === FINISHED_VISIT_STATUS ? { reason: SIGN_OFF_REASON } : null;
   }

@@ -50,7 +50,8 @@ export async function checkReferences(
   for (const [field, value] of Object.entries(set)) {
     const type = spec.fields[field]!.type;
     if (value === null || (type.kind !== 'ref' && type.kind !== 'refs')) continue;
-    const ids = (type.kind === 'ref' ? [value as string] : (value as string[])).filter((id) => !known.has(`${type.entity}:${id}`));
+    // Checked by fieldError before this: a ref is an id, refs a list of ids.
+    const ids = (typeof value === 'string' ? [value] : Array.isArray(value) ? value.filter((id) => typeof id === 'string') : []).filter((id) => !known.has(`${type.entity}:${id}`));
     if (ids.length === 0) continue;
     const found =
       type.entity === 'user'

@@ -106,7 +106,7 @@ export class SyncBatch {
   /** The change log keeps one entry per row, its latest; only the last one of a batch is written. */
   recordChange(entity: SyncEntityName, row: SyncRecord, seq: number, deleted = false): void {
     const spec = SYNC_ENTITIES[entity];
-    const siteId = spec.siteField === 'id' ? row.id : spec.siteField === 'siteId' ? ((row.siteId as string) ?? null) : null;
+    const siteId = spec.siteField === 'id' ? row.id : spec.siteField === 'siteId' && typeof row.siteId === 'string' ? row.siteId : null;
     this.changes.set(`${entity}:${row.id}`, { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted });
   }
 

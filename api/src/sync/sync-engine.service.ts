@@ -5,6 +5,7 @@ import {
   formatHlc,
   isSyncEntity,
   isUuid,
+  type FieldValue,
   type Mutation,
   type MutationResult,
   type Role,
@@ -116,8 +117,8 @@ export class SyncEngine {
    * The server's own new row (an issued document): numbered, stamped and logged like a device's, for the rows that
    * no push may make. The fields are checked against the registry as a push's would be.
    */
-  async serverCreate(em: EntityManager, actor: Actor, entity: SyncEntityName, id: string, set: Record<string, unknown>): Promise<SyncRecord> {
-    const checked = checkMutation({ mutationId: uuidv7(), entity, id, baseVersion: 0, set: set as Mutation['set'], hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId: actor.deviceId }) }, { server: true });
+  async serverCreate(em: EntityManager, actor: Actor, entity: SyncEntityName, id: string, set: Record<string, FieldValue>): Promise<SyncRecord> {
+    const checked = checkMutation({ mutationId: uuidv7(), entity, id, baseVersion: 0, set, hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId: actor.deviceId }) }, { server: true });
     return this.inBatch(em, async (run) => {
       await checkReferences(run.batch.em, actor.organisationId, entity, checked.spec, checked.set, run.batch.known);
       await this.create(run, actor, checked);
@@ -170,7 +171,7 @@ export class SyncEngine {
     const done = mutationId ? run.batch.applied.get(mutationId) : undefined;
     if (done) {
       if (done.organisationId !== actor.organisationId) return { mutationId, status: 'rejected', error: 'mutationId was already used.' };
-      return done.result as unknown as MutationResult;
+      return done.result;
     }
     let result: MutationResult;
     try {
@@ -180,7 +181,7 @@ export class SyncEngine {
       result = { mutationId, status: 'rejected', error: err.message };
     }
     // The same id twice in one batch is a replay too.
-    if (mutationId) run.batch.recordApplied({ mutationId, organisationId: actor.organisationId, userId: actor.userId, deviceId: actor.deviceId, result: result as never });
+    if (mutationId) run.batch.recordApplied({ mutationId, organisationId: actor.organisationId, userId: actor.userId, deviceId: actor.deviceId, result });
     return result;
   }
 

@@ -1,6 +1,7 @@
 import { Injectable, PayloadTooLargeException } from '@nestjs/common';
 import {
   type Change,
+  type Conflict,
   MAX_PULL_LIMIT,
   MAX_PUSH_MUTATIONS,
   type Mutation,
@@ -21,18 +22,40 @@ import { SyncEngine, versionsOf } from './sync-engine.service.js';
 
 const HIDDEN = new Set(['organisationId', 'fieldMeta', 'deletedAt']);
 
-/** The row as a device sees it: its fields, version and per-field versions, none of the server's bookkeeping. */
-export function toSyncedRow(row: SyncRecord): SyncedRow {
-  const out: Record<string, unknown> = {};
+/** The row as a device pulls it: its fields, version and per-field versions, none of the server's bookkeeping. */
+export function toPulledRow(row: SyncRecord): SyncedRow {
+  const out: SyncedRow = { id: row.id, version: row.version, fieldVersions: versionsOf(row.fieldMeta ?? {}) };
   for (const k in row) {
-    if (!Object.hasOwn(row, k) || HIDDEN.has(k)) continue;
+    if (!Object.hasOwn(row, k) || HIDDEN.has(k) || k in out) continue;
     const v = row[k];
     out[k] = v instanceof Date ? v.toISOString() : v;
   }
-  out.id = row.id;
-  out.version = row.version;
-  out.fieldVersions = versionsOf(row.fieldMeta ?? {});
-  return out as SyncedRow;
+  return out;
+}
+
+/** A record as the office reads it: the registry's fields with the row's version, times as ISO text. */
+export type SyncedReply<E extends Exclude<SyncEntityName, 'conflict'>> = Omit<SyncRecord<E>, 'organisationId' | 'fieldMeta' | 'deletedAt' | 'createdAt' | 'updatedAt'> & {
+  createdAt: string;
+  updatedAt: string;
+  fieldVersions: Record<string, number>;
+};
+
+/** The row as the office reads it, typed from the registry so that each reply is checked against its contract. */
+export function toSyncedRow<E extends Exclude<SyncEntityName, 'conflict'>>(row: SyncRecord<E>): SyncedReply<E> {
+  const { organisationId: _organisation, fieldMeta, deletedAt: _deleted, createdAt, updatedAt, ...fields } = row;
+  return { ...fields, createdAt: createdAt.toISOString(), updatedAt: updatedAt.toISOString(), fieldVersions: versionsOf(fieldMeta ?? {}) };
+}
+
+/** A conflict as the office reads it: its resolution time as ISO text. */
+export function toConflictReply(row: SyncRecord<'conflict'>): Conflict {
+  const { organisationId: _organisation, fieldMeta, deletedAt: _deleted, createdAt, updatedAt, resolvedAt, ...fields } = row;
+  return {
+    ...fields,
+    resolvedAt: resolvedAt?.toISOString() ?? null,
+    createdAt: createdAt.toISOString(),
+    updatedAt: updatedAt.toISOString(),
+    fieldVersions: versionsOf(fieldMeta ?? {}),
+  };
 }
 
 @Injectable()
@@ -94,7 +117,8 @@ export class SyncService {
       const hasMore = page.length === take;
       const next = page.length ? page[page.length - 1]!.seq : checkpoint;
 
-      const extra: SyncChange[] = [];
+      // Catch-up entries beside the page; an eviction is sent whatever its number.
+      const extra: Array<SyncChange & { evict?: boolean }> = [];
       if (scope && checkpoint > 0) {
         const then = new Set(sitesThen ?? []);
         const gained = sitesNow!.filter((s) => !then.has(s));
@@ -113,7 +137,7 @@ export class SyncService {
         }
       }
 
-      const changes = await this.materialise(em, [...extra.filter((c) => c.seq <= next || (c as { evict?: boolean }).evict), ...page]);
+      const changes = await this.materialise(em, [...extra.filter((c) => c.seq <= next || c.evict), ...page]);
       await this.rememberDevice(em, user, deviceId, checkpoint, sitesThen, next, sitesNow);
       return { changes, checkpoint: next, hasMore };
     });
@@ -123,7 +147,7 @@ export class SyncService {
     const byEntity = new Map<SyncEntityName, Set<string>>();
     for (const c of entries) {
       if (c.deleted) continue;
-      const entity = c.entity as SyncEntityName;
+      const entity = c.entity;
       let ids = byEntity.get(entity);
       if (!ids) byEntity.set(entity, (ids = new Set()));
       ids.add(c.rowId);
@@ -142,7 +166,7 @@ export class SyncService {
       seen.add(key);
       const row = c.deleted ? null : (rows.get(key) ?? null);
       const deleted = c.deleted || !row || row.deletedAt !== null;
-      out.push({ entity: c.entity as SyncEntityName, id: c.rowId, version: row?.version ?? c.seq, deleted, row: deleted ? null : toSyncedRow(row!) });
+      out.push({ entity: c.entity, id: c.rowId, version: row?.version ?? c.seq, deleted, row: deleted ? null : toPulledRow(row!) });
     }
     return out.reverse();
   }

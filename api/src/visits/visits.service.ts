@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
-import { type Listing, RecordsService, type SameSiteRef } from '../records/records.service.js';
+import { type Listing, PlainRecordsService, type SameSiteRef } from '../records/records.service.js';
 import type { ListVisitsQueryDto } from './dto/list-visits-query.dto.js';
 
 @Injectable()
-export class VisitsService extends RecordsService<ListVisitsQueryDto, 'visit'> {
+export class VisitsService extends PlainRecordsService<ListVisitsQueryDto, 'visit'> {
   protected readonly entity = 'visit';
   protected readonly sameSite: SameSiteRef[] = [{ field: 'jobId', entity: 'job' }];
 

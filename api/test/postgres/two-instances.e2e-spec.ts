@@ -4,6 +4,7 @@ import { formatHlc, type Mutation, type MutationResult, type PullResponse } from
 import fc from 'fast-check';
 import { DataSource } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
+import { RefreshToken } from '../../src/auth/entities/refresh-token.entity.js';
 import type { AuthUser } from '../../src/common/decorators/current-user.decorator.js';
 import { ALL_ENTITIES } from '../../src/database/entities.js';
 import { databaseOptions } from '../../src/database/typeorm-options.js';
@@ -23,6 +24,21 @@ describe('two API processes on one PostgreSQL database', () => {
   let jwt: JwtService;
   let turn = 0;
   const figures = { requests: 0, byProcess: [0, 0] };
+  const sessions = new Map<string, Promise<string>>();
+
+  /** An access token belongs to a session (a refresh-token family): one per user, opened behind the API's back. */
+  function sessionOf(user: AuthUser): Promise<string> {
+    let sid = sessions.get(user.id);
+    if (!sid) {
+      const familyId = uuidv7();
+      sid = db
+        .getRepository(RefreshToken)
+        .insert({ id: uuidv7(), organisationId: user.organisationId, userId: user.id, familyId, tokenHash: '0'.repeat(64), expiresAt: new Date(Date.now() + 86_400_000), rotatedAt: null, revokedAt: null, userAgent: null })
+        .then(() => familyId);
+      sessions.set(user.id, sid);
+    }
+    return sid;
+  }
 
   beforeAll(async () => {
     const first = await ApiProcess.create();
@@ -45,7 +61,7 @@ describe('two API processes on one PostgreSQL database', () => {
     const i = turn++ % apis.length;
     figures.requests++;
     figures.byProcess[i]!++;
-    const token = await jwt.signAsync({ sub: user.id, org: user.organisationId, role: user.role }, { expiresIn: 3600 });
+    const token = await jwt.signAsync({ sub: user.id, org: user.organisationId, role: user.role, sid: await sessionOf(user) }, { expiresIn: 3600 });
     const res = await apis[i]!.request(method, path, { headers: { authorization: `Bearer ${token}` }, body });
     if (res.status !== 200) throw new Error(`${method} ${path} on process ${i + 1} answered ${res.status}: ${res.text.slice(0, 300)}`);
     return res;

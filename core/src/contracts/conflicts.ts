@@ -31,6 +31,11 @@ export type ConflictFields<When = string> = {
 export type Conflict = ConflictFields & {
   id: string;
   version: number;
+  fieldVersions?: Record<string, number>;
+  createdAt?: string;
+  updatedAt?: string;
+  createdById?: string | null;
+  updatedById?: string | null;
 };
 
 export interface ConflictPage {

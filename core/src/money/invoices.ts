@@ -103,6 +103,10 @@ export interface PaymentView {
   note: string | null;
   recordedById: string | null;
   createdAt: string;
+  /** The part of a card payment going back to the card (it came for more than was owed by then); 0 otherwise. */
+  refundMinor: number;
+  /** When the provider confirmed that refund; null while it is still to be made. */
+  refundedAt: string | null;
 }
 
 export interface InvoiceDetail extends InvoiceSummary {

@@ -3,6 +3,17 @@ import type { SyncEntityName } from './entities.js';
 /** Field values travel as JSON. */
 export type FieldValue = string | number | boolean | null | FieldValue[] | { [key: string]: FieldValue };
 
+/** Whether a value survives the trip as JSON unchanged: plain objects and lists of text, finite numbers, booleans and null. */
+export function isFieldValue(value: unknown): value is FieldValue {
+  if (value === null || typeof value === 'string' || typeof value === 'boolean') return true;
+  if (typeof value === 'number') return Number.isFinite(value);
+  if (Array.isArray(value)) return value.every(isFieldValue);
+  if (typeof value !== 'object') return false;
+  // A Date, a Map or a class instance would arrive as something else, or as nothing.
+  const proto: unknown = Object.getPrototypeOf(value);
+  return (proto === Object.prototype || proto === null) && Object.values(value).every(isFieldValue);
+}
+
 /** One change made on a device, pushed through `POST /api/sync/push`. */
 export interface Mutation {
   /** Made on the device (UUIDv7); the server applies each one exactly once. */

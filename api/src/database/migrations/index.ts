@@ -8,6 +8,7 @@ import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 import { Billing1796223023465 } from './1796223023465-Billing.js';
 import { DocumentRevisions1796230000000 } from './1796230000000-DocumentRevisions.js';
 import { ChecksBeforeWork1796231000000 } from './1796231000000-ChecksBeforeWork.js';
+import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefunds.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -21,4 +22,5 @@ export const MIGRATIONS = [
   Billing1796223023465,
   DocumentRevisions1796230000000,
   ChecksBeforeWork1796231000000,
+  AttemptsAndRefunds1796481200000,
 ];

@@ -1,6 +1,7 @@
 import type { PaymentMethod } from '@wiretrail/core';
 import { Column, Entity, Index } from 'typeorm';
 import { TenantRow } from '../../common/entities.js';
+import { TIMESTAMP } from '../../database/column-types.js';
 
 /**
  * Money received against an invoice: by card through the payment provider (recorded by its signed webhook), or
@@ -38,4 +39,19 @@ export class Payment extends TenantRow {
   @Index('IDX_payment_checkout_session', { unique: true })
   @Column({ type: 'varchar', length: 255, nullable: true })
   checkoutSessionId: string | null;
+
+  /**
+   * What goes back to the card: the part of a card payment above what was owed when its news arrived (the invoice
+   * was paid another way or credited while the customer was at the checkout). Taken off what the payment settles.
+   */
+  @Column({ type: 'integer', default: 0 })
+  refundMinor: number;
+
+  /** When the provider confirmed the refund; empty while it is still to be made. */
+  @Column({ type: TIMESTAMP, nullable: true })
+  refundedAt: Date | null;
+
+  /** The provider's refund. */
+  @Column({ type: 'varchar', length: 255, nullable: true })
+  refundReference: string | null;
 }

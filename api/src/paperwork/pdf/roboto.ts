@@ -57,8 +57,7 @@ let fonts: Record<FontWeight, Buffer> | null = null;
 
 /** Roboto from roboto-fontface, unwrapped once per process. */
 export function roboto(): Record<FontWeight, Buffer> {
-  fonts ??= Object.fromEntries(
-    Object.entries(FILES).map(([weight, file]) => [weight, woffToSfnt(readFileSync(require.resolve(`roboto-fontface/fonts/roboto/${file}`)))]),
-  ) as Record<FontWeight, Buffer>;
+  const load = (weight: FontWeight) => woffToSfnt(readFileSync(require.resolve(`roboto-fontface/fonts/roboto/${FILES[weight]}`)));
+  fonts ??= { regular: load('regular'), medium: load('medium'), bold: load('bold'), italic: load('italic') };
   return fonts;
 }

@@ -6,7 +6,7 @@ import { FileStore } from '@tus/file-store';
 import { ERRORS, EVENTS, Server, type Upload } from '@tus/server';
 import { isSha256, MAX_PHOTO_BYTES } from '@wiretrail/core';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
-import type { IncomingMessage } from 'node:http';
+import { IncomingMessage } from 'node:http';
 import { mkdirSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
@@ -162,7 +162,7 @@ export class PhotoUploads implements OnApplicationBootstrap, OnModuleDestroy {
   }
 
   private callerOf(req: unknown): AuthUser {
-    const node = (req as { runtime?: { node?: { req?: IncomingMessage } } }).runtime?.node?.req;
+    const node = nodeRequestOf(req);
     const user = node && this.callers.get(node);
     if (!user) throw { status_code: 401, body: SIGN_IN } satisfies TusAnswer;
     return user;
@@ -208,4 +208,12 @@ export class PhotoUploads implements OnApplicationBootstrap, OnModuleDestroy {
   private answer(res: Response, status: number, message: string): void {
     res.status(status).set({ 'Tus-Resumable': TUS_RESUMABLE, 'Content-Type': 'text/plain; charset=utf-8', 'Cache-Control': 'no-store' }).send(message);
   }
+}
+
+/** The Node request under tus's web Request (`req.runtime.node.req`), which its types do not name. */
+function nodeRequestOf(req: unknown): IncomingMessage | undefined {
+  const runtime = typeof req === 'object' && req !== null && 'runtime' in req ? req.runtime : undefined;
+  const node = typeof runtime === 'object' && runtime !== null && 'node' in runtime ? runtime.node : undefined;
+  const incoming = typeof node === 'object' && node !== null && 'req' in node ? node.req : undefined;
+  return incoming instanceof IncomingMessage ? incoming : undefined;
 }

@@ -1,3 +1,4 @@
+import type { MutationResult, SyncEntityName } from '@wiretrail/core';
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
 import { TIMESTAMP, NOW } from '../../database/column-types.js';
 
@@ -10,7 +11,7 @@ import { TIMESTAMP, NOW } from '../../database/column-types.js';
 @Index('IDX_sync_change_site', ['siteId'])
 export class SyncChange {
   @PrimaryColumn({ type: 'varchar', length: 40 })
-  entity: string;
+  entity: SyncEntityName;
 
   @PrimaryColumn({ type: 'varchar', length: 36 })
   rowId: string;
@@ -54,7 +55,7 @@ export class AppliedMutation {
   deviceId: string;
 
   @Column({ type: 'simple-json' })
-  result: Record<string, unknown>;
+  result: MutationResult;
 
   @Column({ type: TIMESTAMP, default: NOW })
   appliedAt: Date;

@@ -11,6 +11,12 @@ export function dateWords(date: string | null | undefined): string {
   return date && /^\d{4}-\d{2}-\d{2}$/.test(date) ? day.format(new Date(`${date}T12:00:00Z`)) : '';
 }
 
+/** A card payment that came for more than was owed: what goes back to the card, and whether it has. */
+export function refundWords(p: { refundMinor: number; refundedAt: string | null }): string {
+  if (p.refundMinor <= 0) return '';
+  return p.refundedAt ? `${formatMoney(p.refundMinor)} above what was owed refunded to the card` : `${formatMoney(p.refundMinor)} above what was owed to go back to the card`;
+}
+
 /** "Invoice INV-0003", or "Draft invoice". */
 export function invoiceName(i: Pick<InvoiceSummary, 'kind' | 'number'>): string {
   return i.number ? `${INVOICE_NAMES[i.kind]} ${i.number}` : `Draft ${INVOICE_NAMES[i.kind].toLowerCase()}`;

@@ -2,6 +2,7 @@ import { PostgresSchema1796424218561 } from './1796424218561-PostgresSchema.js';
 import { PostgresBilling1796424218562 } from './1796424218562-PostgresBilling.js';
 import { PostgresDocumentRevisions1796430000000 } from './1796430000000-PostgresDocumentRevisions.js';
 import { PostgresChecksBeforeWork1796431000000 } from './1796431000000-PostgresChecksBeforeWork.js';
+import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-PostgresAttemptsAndRefunds.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -9,4 +10,5 @@ export const POSTGRES_MIGRATIONS = [
   PostgresBilling1796424218562,
   PostgresDocumentRevisions1796430000000,
   PostgresChecksBeforeWork1796431000000,
+  PostgresAttemptsAndRefunds1796481200001,
 ];

@@ -29,7 +29,7 @@ import { ApiError } from '@/lib/api-client';
 import { type InvoiceDetail, useInvoice } from '../api/get-invoice';
 import { useCreateInvoice, useDeleteInvoice, useIssueInvoice, useRaiseCreditNote } from '../api/change-invoice';
 import { useDownloadInvoice } from '../api/download-invoice';
-import { dateWords, invoiceName, METHOD_NAMES } from '../invoice-words';
+import { dateWords, invoiceName, METHOD_NAMES, refundWords } from '../invoice-words';
 import { LineEditor } from './line-editor';
 import { PaymentForm } from './payment-form';
 import { SendInvoiceDialog } from './send-invoice-dialog';
@@ -167,7 +167,7 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
                       <TableRow key={p.id}>
                         <TableCell>{dateWords(p.receivedOn)}</TableCell>
                         <TableCell>{METHOD_NAMES[p.method]}</TableCell>
-                        <TableCell sx={{ color: 'text.secondary' }}>{[p.reference, p.note].filter(Boolean).join(' · ')}</TableCell>
+                        <TableCell sx={{ color: 'text.secondary' }}>{[p.reference, p.note, refundWords(p)].filter(Boolean).join(' · ')}</TableCell>
                         <TableCell align="right">{formatMoney(p.amountMinor)}</TableCell>
                       </TableRow>
                     ))}
