@@ -74,10 +74,11 @@ describe('issuing documents', () => {
       '≤ 1.10 Ω (80 % of 1.37 Ω)', // BS 7671:2018+A2:2022 Table 41.3, type B 32 A, 0.4 s: 1.37 Ω; × 0.8 cold-reading rule of thumb, Appendix 3 (trade practice)
       '≤ 300 ms', // BS 7671:2018+A2:2022 Reg 643.8: general-type RCD at IΔn
       '≤ 40 ms', // BS EN 61008-1 / BS EN 61009-1: general-type RCD at 5 IΔn
-      'Source: BS 7671:2018+A2:2022 Table 41.3', 'Source: BS 7671:2018+A2:2022 Table 64',
-      'Departures from the standard None recorded.',
+      // The amendment in force on the completion date: the demo's visit is signed in 2026, under A3:2024 (from 31 July 2024, M).
+      'Source: BS 7671:2018+A3:2024 Table 41.3', 'Source: BS 7671:2018+A3:2024 Table 64',
+      'Departures from the standard None.',
       'WORK DONE AND TESTED BY Aled Pryce',
-      'STANDARD IT WAS DONE TO BS 7671:2018+A2:2022',
+      'STANDARD IT WAS DONE TO BS 7671:2018+A3:2024',
       VERDICT_DISCLAIMER,
     ]) {
       expect(text).toContain(expected);
@@ -205,7 +206,7 @@ describe('issuing documents', () => {
       const messages = (res.body.message as string[]).join('\n');
       // BS 7671:2018+A2:2022 Table 41.3, type B 32 A: 1.37 Ω × 0.8 = 1.10 Ω, and 1.52 Ω is above it.
       expect(messages).toMatch(/Circuit 1 \(Sockets, ground floor\): Earth fault loop impedance Zs fails\. Zs 1\.52 Ω is above 1\.10 Ω/);
-      expect(messages).toMatch(/record the departure from the standard in the visit’s sign-off/);
+      expect(messages).toMatch(/a departure from the standard never stands in for a test result/);
     });
 
     it('refuses a missing reading, naming the circuit and the reading', async () => {
@@ -217,18 +218,56 @@ describe('issuing documents', () => {
       expect(messages).not.toMatch(/Zs fails/);
     });
 
-    it('issues it once the sign-off records a departure, printing the reading as it stands', async () => {
+    it('refuses a failing reading whatever the departures say, naming the circuit and the reading', async () => {
       const visit = await current('visit', visitId);
-      const departure = 'RCD on circuit 1 not tested: the customer’s medical equipment on that circuit could not be switched off. To be tested on the next visit.';
-      await push(t, office, 'office-desk-2', [mutation('visit', visitId, { departures: departure }, { baseVersion: visit.version, deviceId: 'office-desk-2' })]);
+      const note = 'Zs on circuit 1 is high: the network operator is to improve the supply earth.';
+      const departureEntries = [{ regulation: '411.3.2', instead: 'Left as found until the supply earth is improved.', noLessSafe: 'The 30 mA RCD trips in 25 ms.' }];
+      const result = await current('testResult', resultId);
+      const pushed = await push(t, office, 'office-desk-2', [
+        mutation('visit', visitId, { departures: note, departureEntries }, { baseVersion: visit.version, deviceId: 'office-desk-2' }),
+        // BS 7671:2018+A3:2024 Table 41.3, type B 32 A: 1.37 Ω × 0.8 = 1.10 Ω (Appendix 3, trade practice); 1.52 Ω is above it.
+        mutation('testResult', resultId, { zsOhm: 1.52, rcdTripMs: 25 }, { baseVersion: result.version, deviceId: 'office-desk-2' }),
+      ]);
+      expect(pushed.map((r) => r.status)).toEqual(['applied', 'applied']);
+      const res = await issue(office, job.id, 'minor-works').expect(422);
+      expect(res.body.message).toEqual([
+        expect.stringMatching(/^Circuit 1 \(Sockets, ground floor\): Earth fault loop impedance Zs fails\. Zs 1\.52 Ω is above 1\.10 Ω/),
+        'Record the missing readings, put right what fails and test the circuit again: a departure from the standard never stands in for a test result.',
+      ]);
+    });
+
+    it('refuses a reading that could not be judged ("check"), naming the circuit and the reading', async () => {
+      const result = await current('testResult', resultId);
+      // A Zs of 0 Ω is no reading a loop tester gives on a sound circuit, so it is neither a pass nor a fail.
+      await push(t, office, 'office-desk-2', [mutation('testResult', resultId, { zsOhm: 0 }, { baseVersion: result.version, deviceId: 'office-desk-2' })]);
+      const res = await issue(office, job.id, 'minor-works').expect(422);
+      expect(res.body.message[0]).toMatch(/^Circuit 1 \(Sockets, ground floor\): Earth fault loop impedance Zs has not been judged\. A Zs of 0 Ω cannot be right/);
+    });
+
+    it('issues once the circuit is tested again and passes, with the departure beside the results and no Fail', async () => {
+      const first = await current('testResult', resultId);
+      // Zs 0.74 Ω within 1.10 Ω (BS 7671:2018+A3:2024 Table 41.3, B32; Appendix 3); RCD 25 ms within 300 ms (Reg 643.8).
+      const retest = { ...Object.fromEntries(['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLiveMOhm', 'irLiveEarthMOhm', 'irTestVoltageV', 'polarity', 'circuitId'].map((k) => [k, first[k]])), zsOhm: 0.74, rcdTripMs: 25 };
+      const [retested] = await push(t, office, 'office-desk-2', [
+        mutation('testResult', uuidv7(), { ...retest, visitId, siteId: orchard.siteId, testedAt: new Date(Date.now() + 60_000).toISOString() }, { deviceId: 'office-desk-2' }),
+      ]);
+      expect(retested!.status).toBe('applied');
       const res = await issue(office, job.id, 'minor-works').expect(201);
       // The refusals above used no number.
       expect(res.body.number).toBe('MW-0002');
       const text = await pdfText((await downloadPdf(t, office, res.body.id)).bytes);
-      expect(text).toContain(departure);
-      expect(text).toContain('Issued with the readings below as they stand');
-      expect(text).toMatch(/RCD operating time at 30 mA Not recorded ≤ 300 ms Check/);
-      expect(text).toContain('WORK DONE AND TESTED BY Sam Brannigan');
+      for (const expected of [
+        'Left as found until the supply earth is improved.', 'The 30 mA RCD trips in 25 ms.', '411.3.2',
+        // Kept, as an observation: free text departs from nothing.
+        'Zs on circuit 1 is high: the network operator is to improve the supply earth.',
+        '0.74 Ω', 'WORK DONE AND TESTED BY Sam Brannigan',
+        // Completed now, so the amendment in force today (BS 7671:2018+A3:2024 from 31 July 2024, M).
+        'STANDARD IT WAS DONE TO BS 7671:2018+A3:2024',
+      ]) {
+        expect(text).toContain(expected);
+      }
+      expect(text).not.toMatch(/\bFail\b/);
+      expect(text).not.toMatch(/uk-bs7671/);
     });
   });
 

@@ -2,6 +2,8 @@ export * from './check.js';
 export * from './roles.js';
 export * from './rules/rule-set.js';
 export * from './rules/uk-bs7671-2018-a2-2022.js';
+export * from './rules/uk-bs7671-2018-a3-2024.js';
+export * from './rules/rules-in-force.js';
 export * from './electrical/conductor-resistance.js';
 export * from './electrical/ring-final-circuit.js';
 export * from './electrical/earth-fault-loop.js';

@@ -29,8 +29,11 @@ export function minorWorksPrints(file: JobFile, content: MinorWorksContent): Rec
   ];
 }
 
-/** The records behind a minor works certificate, judged; see judgeMinorWorks for when it may be issued. */
-export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: RuleSet): Promise<MinorWorksContent> {
+/**
+ * The records behind a minor works certificate, judged against the rule set in force on the day the work was
+ * completed; see judgeMinorWorks for when it may be issued.
+ */
+export async function loadMinorWorks(em: EntityManager, file: JobFile): Promise<MinorWorksContent> {
   const org = file.organisation.id;
   const visits = await jobVisits(em, file);
   const visitIds = visits.map((v) => v.id);
@@ -40,7 +43,7 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile, rules: Ru
     () => syncRepository(em, 'circuit').find({ where: { siteId: file.site.id, ...live(org) } }),
     () => syncRepository(em, 'board').find({ where: { siteId: file.site.id, organisationId: org } }),
   );
-  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: file.site.earthing ?? null }, rules);
+  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: file.site.earthing ?? null, boards });
   const recorded: RecordKey[] = [...tests.map((r) => ({ entity: 'testResult' as const, id: r.id })), ...pointChanges.map((r) => ({ entity: 'pointChange' as const, id: r.id }))];
   return { ...judgement, boards: new Map(boards.map((b) => [b.id, b.name])), recorded };
 }

@@ -198,13 +198,14 @@ export class DocumentsService implements OnModuleInit {
     const rules = DEFAULT_RULE_SET;
     switch (kind) {
       case 'minor-works': {
-        const content = await loadMinorWorks(em, file, rules);
-        if (content.problems.length) throw new UnprocessableEntityException(content.problems);
+        const content = await loadMinorWorks(em, file);
+        if (content.problems.length || !content.rules) throw new UnprocessableEntityException(content.problems);
         const signer = content.visits[content.visits.length - 1]!;
         const signature = await signatureImage(signer.signatureSvg as string);
+        const inForce = content.rules;
         return {
           render: async (issue) => ({
-            pdf: await minorWorksPdf({ issue, file, content, rules, signature }),
+            pdf: await minorWorksPdf({ issue, file, content, rules: inForce, signature }),
             visitId: signer.id,
             signerName: signer.signedByName as string,
           }),

@@ -12,7 +12,7 @@ import { inTurn } from '../common/in-turn.js';
 /** The circuit as recorded, as the office reads it beside a result. */
 const circuitOf = (c: SyncRecord<'circuit'>) => ({
   boardId: c.boardId, number: c.number, description: c.description, kind: c.kind, deviceType: c.deviceType, deviceRatingA: c.deviceRatingA,
-  rcdRatingMa: c.rcdRatingMa, rcdType: c.rcdType, liveCsaMm2: c.liveCsaMm2, cpcCsaMm2: c.cpcCsaMm2, lengthM: c.lengthM,
+  rcdRatingMa: c.rcdRatingMa, rcdType: c.rcdType, liveCsaMm2: c.liveCsaMm2, cpcCsaMm2: c.cpcCsaMm2, lengthM: c.lengthM, faultProtection: c.faultProtection,
 });
 
 /** The point changes of these results' visits on these results' circuits, in the order they were recorded. */

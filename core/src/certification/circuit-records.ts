@@ -30,6 +30,7 @@ export function circuitUnderTest(circuit: LooseRowOf<'circuit'>): CircuitUnderTe
     liveCsaMm2: numberOf(circuit.liveCsaMm2),
     cpcCsaMm2: numberOf(circuit.cpcCsaMm2),
     lengthM: numberOf(circuit.lengthM),
+    faultProtection: stringOf(circuit.faultProtection),
   };
 }
 

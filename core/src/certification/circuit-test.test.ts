@@ -88,11 +88,23 @@ describe('assessCircuitTest', () => {
     expect(result.lines.find((l) => l.key === 'ir-live-live')!.result.note).toMatch(/Record the test voltage/);
   });
 
-  it('holds Zs to 50 V / IΔn on a TT system with a 30 mA RCD: 1667 Ω (BS 7671:2018+A2:2022 Table 41.5)', () => {
-    const result = assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, zsOhm: 38.6 }, earthing: 'TT' });
+  it('holds Zs to 50 V / IΔn where fault protection is recorded as by a 30 mA RCD: 1667 Ω (BS 7671:2018+A2:2022 Table 41.5)', () => {
+    const result = assessCircuitTest({ circuit: { ...RING_B32, faultProtection: 'rcd' }, readings: { ...PASSING, zsOhm: 38.6 }, earthing: 'TT' });
     const zs = result.lines.find((l) => l.key === 'zs')!.result;
     expect(zs).toMatchObject({ verdict: 'pass', limit: 1667 });
     expect(zs.source).toMatch(/Table 41\.5/);
+  });
+
+  it('never infers fault protection by the RCD from a TT supply: the device table applies until it is recorded', () => {
+    // 38.6 Ω is above 0.8 × 1.37 = 1.10 Ω for a B32 (BS 7671:2018+A2:2022 Table 41.3; Appendix 3, trade practice).
+    const zs = assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, zsOhm: 38.6 }, earthing: 'TT' }).lines.find((l) => l.key === 'zs')!.result;
+    expect(zs).toMatchObject({ verdict: 'fail', limit: 1.1 });
+    expect(zs.note).toMatch(/record that as its method of fault protection/);
+  });
+
+  it('asks for the RCD rating when fault protection is by an RCD of unknown rating', () => {
+    const zs = assessCircuitTest({ circuit: { ...RING_B32, rcdRatingMa: null, faultProtection: 'rcd' }, readings: PASSING }).lines.find((l) => l.key === 'zs')!.result;
+    expect(zs).toMatchObject({ verdict: 'check', limit: null });
   });
 
   it('judges a 5 × IΔn time only when it was taken: 40 ms (BS EN 61008-1 / 61009-1, general type)', () => {
@@ -107,12 +119,13 @@ describe('assessCircuitTest', () => {
     expect(result.failing.map((l) => l.key)).toEqual(['rcd-button']);
   });
 
-  it('says why it cannot judge Zs for a fuse with no sourced table, instead of guessing a limit', () => {
+  it('says why it cannot judge Zs for a fuse rating the table does not list, instead of guessing a limit', () => {
+    // BS 88-3 is tabulated at 5, 16, 20, 32, 45 and 63 A (BS 7671:2018+A2:2022 Table 41.2, M); 30 A is not among them.
     const fused: CircuitUnderTest = { ...RING_B32, deviceType: 'BS 88-3', deviceRatingA: 30 };
     const zs = assessCircuitTest({ circuit: fused, readings: PASSING }).lines.find((l) => l.key === 'zs')!.result;
     expect(zs.verdict).toBe('check');
     expect(zs.limit).toBeNull();
-    expect(zs.note).toMatch(/no sourced maximum Zs table for "BS 88-3"/);
+    expect(zs.note).toMatch(/has no 30 A BS 88-3 fuse in this rule set \(listed: 5, 16, 20, 32, 45, 63 A\)/);
   });
 
   it('asks for the cable sizes before it compares ring readings', () => {

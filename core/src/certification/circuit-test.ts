@@ -4,7 +4,7 @@
  * out again before it issues a certificate.
  */
 import { InvalidInputError, worstVerdict, type CheckResult, type Reading, type Verdict } from '../check.js';
-import type { RcdType, RuleSet } from '../rules/rule-set.js';
+import type { ProtectiveDevice, RcdType, RuleSet } from '../rules/rule-set.js';
 import { DEFAULT_RULE_SET } from '../rules/uk-bs7671-2018-a2-2022.js';
 import { checkZs } from '../electrical/earth-fault-loop.js';
 import { checkInsulation } from '../electrical/insulation.js';
@@ -25,6 +25,8 @@ export interface CircuitUnderTest {
   readonly cpcCsaMm2?: number | null;
   /** One-way cable length to the furthest point (m): a radial's R1+R2 is judged against the cable's own resistance. */
   readonly lengthM?: number | null;
+  /** 'rcd' where the circuit relies on its RCD for fault protection (Table 41.5); otherwise its overcurrent device. */
+  readonly faultProtection?: string | null;
 }
 
 export interface CircuitReadings {
@@ -80,7 +82,7 @@ export interface CircuitTestAssessment {
 export interface CircuitTestInput {
   readonly circuit: CircuitUnderTest;
   readonly readings: CircuitReadings;
-  /** The site's earthing arrangement: on TT the RCD gives fault protection, so its Table 41.5 limit applies to Zs. */
+  /** The site's earthing arrangement; a failing Zs on TT points to the RCD as the method to record, never assumes it. */
   readonly earthing?: string | null;
 }
 
@@ -208,10 +210,11 @@ function insulationLine(megaohms: Reading, testV: number | null | undefined, liv
 
 function zsLine(input: CircuitTestInput, rules: RuleSet): CheckResult {
   const { circuit, readings } = input;
-  if (input.earthing === 'TT' && given(circuit.rcdRatingMa)) {
-    // On TT the RCD disconnects the fault, so Zs is held to 50 V / IΔn.
-    const limit = maxZsForRcd({ ratedMa: circuit.rcdRatingMa! }, rules);
+  if (circuit.faultProtection === 'rcd') {
+    // The RCD disconnects the fault, so Zs is held to 50 V / IΔn (Table 41.5).
     const source = rules.rcd.maxZsByRatedMa.source;
+    if (!given(circuit.rcdRatingMa)) return cannotJudge('Fault protection is recorded as by the RCD: record its rated residual current to check Zs.', source, 'Ω');
+    const limit = maxZsForRcd({ ratedMa: circuit.rcdRatingMa! }, rules);
     const measured = readings.zsOhm;
     if (!given(measured)) return { verdict: 'check', value: null, limit, unit: 'Ω', source, note: `Enter the measured Zs to check it against ${limit} Ω.` };
     const ok = measured! <= limit;
@@ -222,12 +225,16 @@ function zsLine(input: CircuitTestInput, rules: RuleSet): CheckResult {
       unit: 'Ω',
       source,
       note: ok
-        ? `Zs ${measured} Ω is within ${limit} Ω for a ${circuit.rcdRatingMa} mA RCD on a TT system.`
-        : `Zs ${measured} Ω is above ${limit} Ω for a ${circuit.rcdRatingMa} mA RCD on a TT system.`,
+        ? `Zs ${measured} Ω is within ${limit} Ω for fault protection by a ${circuit.rcdRatingMa} mA RCD.`
+        : `Zs ${measured} Ω is above ${limit} Ω for fault protection by a ${circuit.rcdRatingMa} mA RCD.`,
     };
   }
   if (!given(circuit.deviceType) || !given(circuit.deviceRatingA)) {
     return cannotJudge('Record the circuit’s protective device and rating to check Zs.', rules.earthFaultLoop.circuitBreakers.B.source, 'Ω');
   }
-  return checkZs({ measured: readings.zsOhm, device: circuit.deviceType as never, ratingA: circuit.deviceRatingA! }, rules);
+  const check = checkZs({ measured: readings.zsOhm, device: circuit.deviceType as ProtectiveDevice, ratingA: circuit.deviceRatingA! }, rules);
+  if (check.verdict === 'fail' && input.earthing === 'TT' && given(circuit.rcdRatingMa)) {
+    return { ...check, note: `${check.note} On a TT system an RCD usually gives fault protection: if this circuit relies on its RCD, record that as its method of fault protection.` };
+  }
+  return check;
 }

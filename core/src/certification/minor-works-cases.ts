@@ -18,6 +18,8 @@ export interface CaseRow {
 export interface MinorWorksCase {
   readonly name: string;
   readonly earthing: string;
+  /** Fields of the site's one board beyond its name, which each side gives it ("Consumer unit"). */
+  readonly board: Record<string, FieldValue>;
   /** The site's circuits. */
   readonly circuits: readonly CaseRow[];
   /** The visit's sign-off, as the phone writes it when the visit is finished. */
@@ -26,7 +28,7 @@ export interface MinorWorksCase {
   readonly pointChanges: readonly CaseRow[];
   readonly expected: {
     readonly issuable: boolean;
-    readonly findings: readonly { readonly kind: MinorWorksFindingKind; readonly what: string; readonly excused?: boolean }[];
+    readonly findings: readonly { readonly kind: MinorWorksFindingKind; readonly what: string }[];
   };
 }
 
@@ -36,7 +38,7 @@ const idOf = (caseNo: number, n: number) => `01900000-0000-7000-8${String(caseNo
 /** A signature as the phone's signature pad draws it: the certificate prints it, so it must be a real drawing. */
 const SIGNATURE =
   '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 300 100"><path d="M10 80 C 40 10 60 10 80 70 S 140 20 290 40" fill="none" stroke="#111" stroke-width="3"/></svg>';
-const SIGNED = { status: 'finished', signedByName: 'Aled Pryce', signedAt: '2026-03-14T11:00:00.000Z', signatureSvg: SIGNATURE, departures: null };
+const SIGNED = { status: 'finished', signedByName: 'Aled Pryce', signedAt: '2026-03-14T11:00:00.000Z', signatureSvg: SIGNATURE, departures: null, departureEntries: null };
 
 const RING = { number: '1', description: 'Sockets, ground floor', kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 };
 const COOKER = { number: '4', description: 'Cooker', kind: 'radial', deviceType: 'B', deviceRatingA: 32, liveCsaMm2: 6, cpcCsaMm2: 2.5 };
@@ -59,20 +61,25 @@ function visitCase(
   caseNo: number,
   name: string,
   rows: {
+    earthing?: string;
     visit?: Record<string, FieldValue>;
-    circuits?: Record<string, FieldValue>[];
+    /** Given the visit's id, as fields that point at it need. */
+    board?: (visitId: string) => Record<string, FieldValue>;
+    circuits?: ((visitId: string) => Record<string, FieldValue>)[];
     tests: ((circuitIds: string[]) => Record<string, FieldValue>)[];
     pointChanges?: ((circuitIds: string[]) => Record<string, FieldValue>)[];
   },
   expected: MinorWorksCase['expected'],
 ): MinorWorksCase {
-  const circuits = (rows.circuits ?? [RING]).map((c, i) => ({ id: idOf(caseNo, 100 + i), ...c }));
+  const visitId = idOf(caseNo, 1);
+  const circuits = (rows.circuits ?? [() => RING]).map((c, i) => ({ id: idOf(caseNo, 100 + i), ...c(visitId) }));
   const ids = circuits.map((c) => c.id);
   return {
     name,
-    earthing: 'TN-C-S',
+    earthing: rows.earthing ?? 'TN-C-S',
+    board: rows.board?.(visitId) ?? {},
     circuits,
-    visit: { id: idOf(caseNo, 1), ...SIGNED, ...rows.visit },
+    visit: { id: visitId, ...SIGNED, ...rows.visit },
     tests: rows.tests.map((t, i) => ({ id: idOf(caseNo, 200 + i), ...t(ids) })),
     pointChanges: (rows.pointChanges ?? []).map((p, i) => ({ id: idOf(caseNo, 300 + i), ...p(ids) })),
     expected,
@@ -110,15 +117,21 @@ export const MINOR_WORKS_CASES: readonly MinorWorksCase[] = [
   ),
   visitCase(
     5,
-    'a recorded departure carries a failing Zs onto the certificate',
-    { visit: { departures: 'Zs on circuit 1 is high: the supply earth is to be improved by the network operator.' }, tests: [tested('2026-03-14T10:30:00.000Z', { zsOhm: HIGH_ZS })] },
-    { issuable: true, findings: [{ kind: 'fail', what: ZS_FAIL, excused: true }] },
+    'a departure written in the sign-off does not carry a failing Zs onto the certificate',
+    {
+      visit: {
+        departures: 'Zs on circuit 1 is high: the supply earth is to be improved by the network operator.',
+        departureEntries: [{ regulation: '411.3.2', instead: 'The supply earth is to be improved by the network operator.', noLessSafe: 'The RCD trips in 24 ms.' }],
+      },
+      tests: [tested('2026-03-14T10:30:00.000Z', { zsOhm: HIGH_ZS })],
+    },
+    { issuable: false, findings: [{ kind: 'fail', what: ZS_FAIL }] },
   ),
   visitCase(
     6,
     'an altered circuit with no test, and a test that names no circuit',
     {
-      circuits: [RING, COOKER],
+      circuits: [() => RING, () => COOKER],
       tests: [tested('2026-03-14T10:30:00.000Z'), (ids) => ({ ...tested('2026-03-14T10:35:00.000Z')(ids), circuitId: null })],
       pointChanges: [(ids) => ({ circuitId: ids[1] ?? null, action: 'add' })],
     },
@@ -129,5 +142,58 @@ export const MINOR_WORKS_CASES: readonly MinorWorksCase[] = [
         { kind: 'untested', what: 'Circuit 4 (Cooker)' },
       ],
     },
+  ),
+  visitCase(
+    7,
+    'a Zs that no table judges blocks the certificate until it is judged',
+    // BS 88-3 fuses come in 5, 16, 20, 32, 45 and 63 A (BS 7671:2018+A2:2022 Table 41.2, M): a 30 A one has no limit.
+    { circuits: [() => ({ ...COOKER, deviceType: 'BS 88-3', deviceRatingA: 30 })], tests: [tested('2026-03-14T10:30:00.000Z')] },
+    { issuable: false, findings: [{ kind: 'unjudged', what: 'Circuit 4 (Cooker): Earth fault loop impedance Zs' }] },
+  ),
+  visitCase(
+    8,
+    'fault protection recorded as by the RCD on a TT supply holds Zs to Table 41.5',
+    // Zs 38.6 Ω against 50 V / 30 mA = 1667 Ω (BS 7671:2018+A2:2022 Table 41.5, Reg 411.5.3).
+    { earthing: 'TT', circuits: [() => ({ ...RING, faultProtection: 'rcd' })], tests: [tested('2026-03-14T10:30:00.000Z', { zsOhm: 38.6 })] },
+    { issuable: true, findings: [] },
+  ),
+  visitCase(
+    9,
+    'the same TT reading without the method recorded is judged against the circuit-breaker, and fails',
+    // Zs 38.6 Ω is far above 0.8 × 1.37 = 1.10 Ω for a B32 (BS 7671:2018+A2:2022 Table 41.3; Appendix 3, trade practice).
+    { earthing: 'TT', tests: [tested('2026-03-14T10:30:00.000Z', { zsOhm: 38.6 })] },
+    { issuable: false, findings: [{ kind: 'fail', what: ZS_FAIL }] },
+  ),
+  visitCase(
+    10,
+    'a new circuit needs an installation certificate',
+    { circuits: [(visitId) => ({ ...COOKER, newOnVisitId: visitId })], tests: [tested('2026-03-14T10:30:00.000Z')] },
+    { issuable: false, findings: [{ kind: 'new-circuit', what: 'Circuit 4 (Cooker)' }] },
+  ),
+  visitCase(
+    11,
+    'a replaced consumer unit needs an installation certificate',
+    { board: (visitId) => ({ replacedOnVisitId: visitId }), tests: [tested('2026-03-14T10:30:00.000Z')] },
+    { issuable: false, findings: [{ kind: 'board-replaced', what: 'Board Consumer unit' }] },
+  ),
+  visitCase(
+    12,
+    'a departure that does not say why it is no less safe',
+    {
+      visit: { departureEntries: [{ regulation: '522.6.202', instead: 'Cable run outside the safe zone in earthed steel conduit.', noLessSafe: '' }] },
+      tests: [tested('2026-03-14T10:30:00.000Z')],
+    },
+    { issuable: false, findings: [{ kind: 'departure-incomplete', what: 'Departure 1 from the standard' }] },
+  ),
+  visitCase(
+    13,
+    'a complete departure beside sound readings is issued with it',
+    {
+      visit: {
+        departureEntries: [{ regulation: '522.6.202', instead: 'Cable run outside the safe zone in earthed steel conduit (Reg 522.6.204).', noLessSafe: 'The earthed conduit gives the protection the zone would.' }],
+      },
+      tests: [tested('2026-03-14T10:30:00.000Z')],
+    },
+    { issuable: true, findings: [] },
   ),
 ];

@@ -44,8 +44,8 @@ describe('judgeMinorWorks', () => {
     const j = judge({ tests: [{ ...PASSING, zsOhm: 1.25 }] });
     expect(j.problems[0]).toMatch(/^Circuit 2 \(Sockets, first floor\): Earth fault loop impedance Zs fails\. Zs 1\.25 Ω is above 1\.10 Ω, 80 % of the 1\.37 Ω maximum/);
     expect(j.problems).toHaveLength(2);
-    expect(j.problems[1]).toMatch(/record the departure from the standard in the visit’s sign-off/);
-    expect(j.findings[0]).toMatchObject({ kind: 'fail', circuitId: 'c2', line: 'zs', what: 'Circuit 2 (Sockets, first floor): Earth fault loop impedance Zs', excused: false });
+    expect(j.problems[1]).toMatch(/test the circuit again: a departure from the standard never stands in for a test result/);
+    expect(j.findings[0]).toMatchObject({ kind: 'fail', circuitId: 'c2', line: 'zs', what: 'Circuit 2 (Sockets, first floor): Earth fault loop impedance Zs' });
   });
 
   it('names a missing reading with its circuit, in the words of the catalogue of readings', () => {
@@ -59,13 +59,67 @@ describe('judgeMinorWorks', () => {
     expect(j.findings.find((f) => f.line === 'rcd-1x')!.detail).toBe('Not recorded yet: RCD operating time.');
   });
 
-  it('lets a recorded departure carry missing and failing readings onto the certificate, still naming them', () => {
-    const j = judge({ visits: [{ ...SIGNED, departures: 'RCD not tested: medical equipment on the circuit.' }], tests: [{ ...PASSING, rcdTripMs: null, zsOhm: 1.25 }] });
-    expect(j.problems).toEqual([]);
-    expect(j.issuable).toBe(true);
-    expect(j.circuits[0]!.departureRecorded).toBe(true);
-    expect(j.circuits[0]!.assessment.failing.map((l) => l.key)).toEqual(['zs']);
-    expect(j.findings.map((f) => [f.kind, f.line, f.excused])).toEqual([['missing', 'rcd-1x', true], ['fail', 'zs', true]]);
+  it('refuses failing and missing readings whatever the departures say, naming the circuit and the reading', () => {
+    const departures = 'RCD not tested: medical equipment on the circuit.';
+    const departureEntries = [{ regulation: '643.8', instead: 'RCD left untested', noLessSafe: 'The equipment stays connected.' }];
+    const j = judge({ visits: [{ ...SIGNED, departures, departureEntries }], tests: [{ ...PASSING, rcdTripMs: null, zsOhm: 1.25 }] });
+    expect(j.issuable).toBe(false);
+    expect(j.findings.map((f) => [f.kind, f.line, f.what])).toEqual([
+      ['missing', 'rcd-1x', 'Circuit 2 (Sockets, first floor): RCD operating time at 30 mA'],
+      ['fail', 'zs', 'Circuit 2 (Sockets, first floor): Earth fault loop impedance Zs'],
+    ]);
+    // The departure itself is complete, so it is kept to print; it just waives nothing.
+    expect(j.departures).toEqual([{ ...departureEntries[0], visitId: 'v1' }]);
+  });
+
+  it('refuses a reading it cannot judge, as a "check" is not a pass', () => {
+    // A 30 A BS 88-3 fuse is not in BS 7671:2018+A2:2022 Table 41.2 (5, 16, 20, 32, 45, 63 A; M), so Zs has no limit.
+    const j = judge({ circuits: [{ ...RING, deviceType: 'BS 88-3', deviceRatingA: 30 }] });
+    expect(j.findings.map((f) => [f.kind, f.line])).toEqual([['unjudged', 'zs']]);
+    expect(j.problems[0]).toMatch(/^Circuit 2 \(Sockets, first floor\): Earth fault loop impedance Zs has not been judged\. Cannot judge this/);
+  });
+
+  it('never issues with a Fail on it, the optional tests included', () => {
+    // 45 ms at 5 × IΔn is above 40 ms (BS EN 61008-1 / 61009-1, general type).
+    for (const readings of [{ rcdTripMs5x: 45 }, { rcdButton: 'fails' }, { zsOhm: 1.25 }]) {
+      const j = judge({ tests: [{ ...PASSING, ...readings }] });
+      expect(j.issuable).toBe(false);
+    }
+    const sound = judge({});
+    expect(sound.circuits.flatMap((c) => c.assessment.lines.map((l) => l.result.verdict))).not.toContain('fail');
+  });
+
+  it('refuses a minor works certificate for a new circuit or a replaced board, naming why', () => {
+    const j = judge({ circuits: [{ ...RING, newOnVisitId: 'v1' }], boards: [{ id: 'b1', name: 'Garage', replacedOnVisitId: 'v1' }] });
+    expect(j.problems).toEqual([
+      'Circuit 2 (Sockets, first floor) is a new circuit: a minor works certificate covers an alteration or addition to an existing circuit, and a new circuit needs an electrical installation certificate.',
+      'Board Garage was replaced on this job: a consumer unit replacement needs an electrical installation certificate, not a minor works certificate.',
+    ]);
+    // Installed or replaced on another job: this one alters what is now existing.
+    expect(judge({ circuits: [{ ...RING, newOnVisitId: 'v0' }], boards: [{ id: 'b1', name: 'Garage', replacedOnVisitId: 'v0' }] }).issuable).toBe(true);
+  });
+
+  it('keeps complete departures and refuses one that leaves out a part', () => {
+    const entries = [
+      { regulation: '522.6.202', instead: 'Run in earthed steel conduit', noLessSafe: 'Earthed conduit protects as a zone would' },
+      { regulation: '', instead: 'Something', noLessSafe: '' },
+      { regulation: ' ', instead: '', noLessSafe: '' },
+      'not a departure',
+    ];
+    const j = judge({ visits: [{ ...SIGNED, departureEntries: entries }] });
+    expect(j.departures).toHaveLength(1);
+    expect(j.problems).toEqual(['Departure 2 from the standard does not say the regulation departed from or why that gives no less safety.']);
+  });
+
+  it('states the amendment in force on the day the work was completed', () => {
+    // BS 7671:2018+A3:2024 in force from 31 July 2024 (M); before it, BS 7671:2018+A2:2022 (from 28 March 2022, M).
+    const on = (signedAt: string) => judge({ visits: [{ ...SIGNED, signedAt }], tests: [{ ...PASSING, testedAt: signedAt }] });
+    expect(on('2026-03-14T10:48:00.000Z').rules?.edition).toBe('BS 7671:2018+A3:2024');
+    expect(on('2024-07-31T08:00:00.000Z').rules?.edition).toBe('BS 7671:2018+A3:2024');
+    expect(on('2024-07-30T16:00:00.000Z').rules?.edition).toBe('BS 7671:2018+A2:2022');
+    expect(on('2024-07-30T16:00:00.000Z').completedOn).toBe('2024-07-30');
+    const early = on('2021-06-01T10:00:00.000Z');
+    expect([early.issuable, early.rules, early.findings.map((f) => f.kind)]).toEqual([false, null, ['no-rules']]);
   });
 
   it('takes the latest test of a circuit, and only tests of signed visits', () => {
@@ -114,13 +168,14 @@ describe('the cases the phone and the server must agree on', () => {
     it(c.name, () => {
       const tests = c.tests.map((t) => ({ ...t, visitId: c.visit.id }));
       const pointChanges = c.pointChanges.map((p) => ({ ...p, visitId: c.visit.id }));
-      const j = judgeMinorWorks({ visits: [c.visit], tests, pointChanges, circuits: c.circuits, earthing: c.earthing });
+      const boards = [{ id: 'board', name: 'Consumer unit', ...c.board }];
+      const j = judgeMinorWorks({ visits: [c.visit], tests, pointChanges, circuits: c.circuits, earthing: c.earthing, boards });
       expect(j.issuable).toBe(c.expected.issuable);
-      expect(j.findings.map((f) => ({ kind: f.kind, what: f.what, excused: f.excused }))).toEqual(
-        c.expected.findings.map((f) => ({ excused: false, ...f })),
+      expect(j.findings.map((f) => ({ kind: f.kind, what: f.what }))).toEqual(
+        c.expected.findings.map((f) => ({ kind: f.kind, what: f.what })),
       );
       // The phone judges its one visit before it is signed: the answer is the same.
-      const onPhone = judgeCircuitWork({ visits: [{ ...c.visit, status: 'on-site', signatureSvg: null }], tests, pointChanges, circuits: c.circuits, earthing: c.earthing });
+      const onPhone = judgeCircuitWork({ visits: [{ ...c.visit, status: 'on-site', signatureSvg: null }], tests, pointChanges, circuits: c.circuits, earthing: c.earthing, boards });
       expect(onPhone.findings).toEqual(j.findings);
     });
   }

@@ -28,10 +28,7 @@ export interface SourcedTable {
 
 export type CircuitBreakerType = 'B' | 'C' | 'D';
 
-/**
- * Fuses are named by their product standard. No rule set carries a sourced maximum Zs table for them yet,
- * so asking for one throws rather than guessing.
- */
+/** Fuses are named by their product standard; a rating a rule set does not tabulate throws rather than guessing. */
 export type FuseType = 'BS 88-2' | 'BS 88-3' | 'BS 3036' | 'BS 1362';
 
 export type ProtectiveDevice = CircuitBreakerType | FuseType;
@@ -70,8 +67,10 @@ export interface RuleSet {
   /** Stable identifier stored with every recorded verdict. */
   readonly id: string;
   readonly name: string;
-  /** The edition of the governing standard, as printed on certificates. */
+  /** The edition of the governing standard with its amendment, as printed on certificates. */
   readonly edition: string;
+  /** The first day (ISO date, YYYY-MM-DD) this rule set is the one in force; the next one's date ends it. */
+  readonly effectiveFrom: string;
   /** ISO 3166-1 alpha-2 country code. */
   readonly country: string;
   readonly nominalVoltageV: SourcedLimit;

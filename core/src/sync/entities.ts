@@ -108,6 +108,21 @@ export const JOB_STATUSES = ['enquiry', 'booked', 'on-site', 'paperwork', 'done'
 export const VISIT_STATUSES = ['planned', 'on-site', 'finished', 'cancelled'] as const;
 export const CIRCUIT_KINDS = ['ring', 'radial', 'lighting', 'other'] as const;
 export const PROTECTIVE_DEVICES = ['B', 'C', 'D', 'BS 88-2', 'BS 88-3', 'BS 3036', 'BS 1362'] as const;
+/**
+ * How a circuit is protected against electric shock under fault: by its overcurrent protective device (Zs held to
+ * Tables 41.2 to 41.4) or by an RCD (Table 41.5). The technician records it; nothing infers it from the earthing.
+ */
+export const FAULT_PROTECTION_METHODS = ['overcurrent-device', 'rcd'] as const;
+/**
+ * A departure from the standard as the sign-off records it (BS 7671 Regs 120.3, 133.1.3, 133.5): the regulation
+ * departed from, what is done instead, and why that gives no less safety. It never stands in for a test result.
+ */
+// A type, not an interface, so that it is a plain JSON value a mutation may carry.
+export type DepartureEntry = {
+  readonly regulation: string;
+  readonly instead: string;
+  readonly noLessSafe: string;
+};
 export const CABLE_MEDIA = ['Cat5e', 'Cat6', 'Cat6A', 'coax', 'speaker', 'HDMI', 'fibre', 'other'] as const;
 export const CABLE_STATUSES = ['unidentified', 'traced', 'terminated', 'tested'] as const;
 export const TRACE_METHODS = ['tone-and-probe', 'continuity', 'tdr', 'visual'] as const;
@@ -145,7 +160,11 @@ const REGISTRY = {
   },
   board: {
     name: 'board', table: 'board', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
-    fields: { siteId: seen(ref('site'), true), areaId: seen(ref('area')), name: seen(str(), true), description: seen(str(500)) },
+    fields: {
+      siteId: seen(ref('site'), true), areaId: seen(ref('area')), name: seen(str(), true), description: seen(str(500)),
+      // The visit on which this board was fitted as a replacement: that work needs an installation certificate.
+      replacedOnVisitId: seen(ref('visit')),
+    },
   },
   circuit: {
     name: 'circuit', table: 'circuit', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
@@ -155,6 +174,9 @@ const REGISTRY = {
       rcdRatingMa: seen(num(1, 3000)), rcdType: seen(str(20)), liveCsaMm2: seen(num(0.5, 400)), cpcCsaMm2: seen(num(0.5, 400)),
       // One-way cable length to the furthest point: what a radial's R1+R2 should read follows from it.
       lengthM: seen(num(0, 10_000)),
+      faultProtection: seen(oneOf(...FAULT_PROTECTION_METHODS)),
+      // The visit on which this circuit was installed new: that work needs an installation certificate.
+      newOnVisitId: seen(ref('visit')),
     },
   },
   job: {
@@ -173,7 +195,10 @@ const REGISTRY = {
       // Shown once per visit before work on a circuit; kept as evidence that the cautions were read.
       cautionsReadAt: seen(when),
       // Sign-off on site: what was done, what was seen, where the work departs from the standard, and who signed.
-      workDescription: seen(text()), observations: seen(text()), departures: seen(text()),
+      workDescription: seen(text()), observations: seen(text()),
+      // Free text from before departures were structured: kept and shown, but it waives nothing.
+      departures: seen(text()),
+      departureEntries: seen(jsonOf<readonly DepartureEntry[]>()),
       signedByName: seen(str()), signedAt: seen(when), signatureSvg: seen(str(60_000)),
     },
   },

@@ -12,4 +12,7 @@ export class CreateBoardDto {
 
   @TextField(500, { example: '10-way dual RCD board' })
   description?: string | null;
+
+  @IdField('visit', { description: 'the visit on which the board was fitted as a replacement (it then needs an installation certificate)' })
+  replacedOnVisitId?: string | null;
 }

@@ -1,4 +1,4 @@
-import { CIRCUIT_KINDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import { CIRCUIT_KINDS, FAULT_PROTECTION_METHODS, PROTECTIVE_DEVICES } from '@wiretrail/core';
 import { ChoiceField, IdField, NumberField, TextField } from '../../records/record-fields.js';
 
 export class CreateCircuitDto {
@@ -37,4 +37,9 @@ export class CreateCircuitDto {
 
   @NumberField(0, 10_000, { example: 20, description: 'one-way cable length to the furthest point, m' })
   lengthM?: number | null;
+  @ChoiceField(FAULT_PROTECTION_METHODS, { description: 'how the circuit is protected under fault: by its protective device (Tables 41.2 to 41.4) or by its RCD (Table 41.5)' })
+  faultProtection?: (typeof FAULT_PROTECTION_METHODS)[number] | null;
+
+  @IdField('visit', { description: 'the visit on which the circuit was installed new (it then needs an installation certificate)' })
+  newOnVisitId?: string | null;
 }

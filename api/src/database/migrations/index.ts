@@ -7,7 +7,8 @@ import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 import { Billing1796223023465 } from './1796223023465-Billing.js';
 import { DocumentRevisions1796230000000 } from './1796230000000-DocumentRevisions.js';
-import { ChecksBeforeWork1796231000000 } from './1796231000000-ChecksBeforeWork.js';
+import { ChecksBeforeWork1796232000000 } from './1796232000000-ChecksBeforeWork.js';
+import { CertificateJudgment1796231000000 } from './1796231000000-CertificateJudgment.js';
 import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefunds.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
@@ -21,6 +22,7 @@ export const MIGRATIONS = [
   PartsAndPrices1796221754005,
   Billing1796223023465,
   DocumentRevisions1796230000000,
-  ChecksBeforeWork1796231000000,
+  CertificateJudgment1796231000000,
+  ChecksBeforeWork1796232000000,
   AttemptsAndRefunds1796481200000,
 ];

@@ -72,7 +72,8 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   const days = [...new Set(visits.map((v) => dateWords(v.actualEnd ?? v.signedAt ?? v.plannedStart, tz)).filter(Boolean))];
   layout.fields([
     ['Carried out on', days.join(', ')],
-    ['Standard it was done to', rules.edition],
+    // The amendment in force on the completion date, by its published name.
+    ['Standard it was done to', `${rules.edition}, in force on ${dateWords(content.completedOn, tz) || content.completedOn}`],
   ]);
 
   layout.heading('Supply and earthing at the site');
@@ -122,9 +123,6 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
       'regular',
       INK.muted,
     );
-    if (c.departureRecorded && (c.assessment.missing.length || c.assessment.failing.length)) {
-      layout.paragraph('Issued with the readings below as they stand, because the sign-off records a departure from the standard (see Departures).', 'medium', INK.fail);
-    }
     layout.table(
       [
         { header: 'Test', width: 2.2 },
@@ -138,9 +136,20 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
 
   const texts = (field: 'observations' | 'departures') => visits.map((v) => v[field]?.trim() ?? '').filter(Boolean);
   layout.heading('Observations');
-  layout.paragraph(texts('observations').join('\n\n') || 'None recorded.');
+  // Free text typed where departures used to go is kept as an observation: it departs from nothing.
+  layout.paragraph([...texts('observations'), ...texts('departures')].join('\n\n') || 'None recorded.');
   layout.heading('Departures from the standard');
-  layout.paragraph(texts('departures').join('\n\n') || 'None recorded.');
+  if (content.departures.length === 0) layout.paragraph('None.');
+  else {
+    layout.table(
+      [
+        { header: 'Regulation departed from', width: 1 },
+        { header: 'What is done instead', width: 2 },
+        { header: 'Why it gives no less safety', width: 2 },
+      ],
+      content.departures.map((d) => ({ cells: [{ text: d.regulation, weight: 'medium' }, d.instead, d.noLessSafe] })),
+    );
+  }
 
   const signer = visits[visits.length - 1]!;
   layout.heading('Sign-off');
@@ -167,7 +176,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   layout.y = Math.max(below, top + 92);
   doc.x = layout.left;
 
-  layout.notice('About the verdicts on this certificate', `${VERDICT_DISCLAIMER} Limits are those of ${rules.name} (Wiretrail rule set ${rules.id}).`);
+  layout.notice('About the verdicts on this certificate', `${VERDICT_DISCLAIMER} Limits are those of ${rules.edition}.`);
   issuedBy(layout, issue, file);
   return layout.finish();
 }

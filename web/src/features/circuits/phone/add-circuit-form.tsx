@@ -27,7 +27,7 @@ export const addCircuitSchema = circuitDetailsSchema
 type AddCircuitValues = z.infer<typeof addCircuitSchema>;
 
 /** A circuit found on site, with what its tests need; with no board on the phone yet, the board is named here too. */
-export function AddCircuitForm({ siteId, boards, onAdded }: { siteId: string; boards: BoardRow[]; onAdded?: (circuitId: string) => void }) {
+export function AddCircuitForm({ siteId, visitId, boards, onAdded }: { siteId: string; visitId: string; boards: BoardRow[]; onAdded?: (circuitId: string) => void }) {
   const { register, handleSubmit, formState, reset, control, setValue } = useForm<AddCircuitValues>({
     resolver: zodResolver(addCircuitSchema),
     defaultValues: { boardId: boards[0]?.id ?? NEW_BOARD, boardName: '', number: '', description: '', ...circuitDetailsOf(null) },
@@ -45,7 +45,7 @@ export function AddCircuitForm({ siteId, boards, onAdded }: { siteId: string; bo
       targetBoard = uuidv7();
       items.push({ entity: 'board', id: targetBoard, fields: { siteId, name: v.boardName.trim() } });
     }
-    const details = Object.fromEntries(Object.entries(circuitDetailFields(v)).filter(([, x]) => x !== null)) as Fields;
+    const details = Object.fromEntries(Object.entries(circuitDetailFields(v, visitId)).filter(([, x]) => x !== null)) as Fields;
     const circuitId = uuidv7();
     items.push({ entity: 'circuit', id: circuitId, fields: { siteId, boardId: targetBoard, number: v.number.trim(), ...(v.description.trim() ? { description: v.description.trim() } : {}), ...details } });
     try {

@@ -3,15 +3,18 @@ import Accordion from '@mui/material/Accordion';
 import AccordionDetails from '@mui/material/AccordionDetails';
 import AccordionSummary from '@mui/material/AccordionSummary';
 import Button from '@mui/material/Button';
+import Checkbox from '@mui/material/Checkbox';
+import FormControlLabel from '@mui/material/FormControlLabel';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import ExpandMore from '@mui/icons-material/ExpandMore';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { circuitKindWords } from '@wiretrail/core';
-import type { CircuitRow } from '@/lib/db';
+import type { BoardRow, CircuitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
 import { type CircuitDetails, CircuitDetailFields, circuitDetailFields, circuitDetailsOf, circuitDetailsSchema } from './circuit-fields';
+import { FAULT_PROTECTION_WORDS } from './circuit-fields';
 
 export function describeCircuit(c: CircuitRow): string {
   return [
@@ -19,20 +22,31 @@ export function describeCircuit(c: CircuitRow): string {
     c.deviceType ? `${/^[BCD]$/.test(c.deviceType) ? `type ${c.deviceType}` : c.deviceType} ${c.deviceRatingA ?? '?'}\u00a0A` : 'device not recorded',
     c.rcdRatingMa ? `${c.rcdRatingMa} mA RCD${c.rcdType ? ` (${c.rcdType})` : ''}` : 'no RCD recorded',
     c.liveCsaMm2 && c.cpcCsaMm2 ? `${c.liveCsaMm2}/${c.cpcCsaMm2}\u00a0mm²` : 'sizes not recorded',
+    c.faultProtection ? `fault protection ${FAULT_PROTECTION_WORDS[c.faultProtection]?.split(' (')[0]?.toLowerCase()}` : 'fault protection not recorded',
+    c.newOnVisitId ? 'new circuit' : null,
   ]
     .filter(Boolean)
     .join(' · ');
 }
 
 /** The circuit's details, folded away once known; the verdicts depend on them, so they can be put right here. */
-export function CircuitDetailsForm({ circuit, locked }: { circuit: CircuitRow; locked: boolean }) {
-  const incomplete = !circuit.deviceType || circuit.deviceRatingA == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null;
+export function CircuitDetailsForm({ circuit, board, visitId, locked }: { circuit: CircuitRow; board?: BoardRow; visitId: string; locked: boolean }) {
+  const incomplete = !circuit.deviceType || circuit.deviceRatingA == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null || !circuit.faultProtection;
   const [open, setOpen] = useState(incomplete);
   const [note, setNote] = useState('');
-  const { register, handleSubmit, formState } = useForm<CircuitDetails>({ resolver: zodResolver(circuitDetailsSchema), defaultValues: circuitDetailsOf(circuit) });
+  const { register, handleSubmit, formState } = useForm<CircuitDetails>({ resolver: zodResolver(circuitDetailsSchema), defaultValues: circuitDetailsOf(circuit, visitId) });
+  async function markBoard(replaced: boolean) {
+    if (!board) return;
+    try {
+      await saveRecord('board', board.id, { replacedOnVisitId: replaced ? visitId : null });
+      setNote(replaced ? `${board.name} recorded as replaced on this visit.` : `${board.name} no longer recorded as replaced.`);
+    } catch (err) {
+      setNote((err as Error).message);
+    }
+  }
   async function save(v: CircuitDetails) {
     try {
-      await saveRecord('circuit', circuit.id, circuitDetailFields(v));
+      await saveRecord('circuit', circuit.id, circuitDetailFields(v, visitId, circuit));
       setNote('Circuit details saved on this phone.');
       setOpen(false);
     } catch (err) {
@@ -53,6 +67,12 @@ export function CircuitDetailsForm({ circuit, locked }: { circuit: CircuitRow; l
         <Stack component="form" aria-label="Circuit details" noValidate onSubmit={handleSubmit(save)} spacing={1.5}>
           <fieldset disabled={locked} style={{ border: 0, padding: 0, margin: 0, minWidth: 0, display: 'grid', gap: 12 }}>
             <CircuitDetailFields register={register} errors={formState.errors} />
+            {board && (
+              <FormControlLabel
+                control={<Checkbox checked={board.replacedOnVisitId === visitId} onChange={(e) => void markBoard(e.target.checked)} />}
+                label={`${board.name} was replaced on this visit (a consumer unit replacement needs an electrical installation certificate)`}
+              />
+            )}
             {!locked && (
               <Button type="submit" variant="outlined" size="large">
                 Save circuit details

@@ -76,7 +76,7 @@ export function CircuitList({ visitId, siteId, locked }: { visitId: string; site
           </List>
         </Paper>
       )}
-      {!locked && <AddCircuitForm siteId={siteId} boards={data.boards.map((b) => b.board)} />}
+      {!locked && <AddCircuitForm siteId={siteId} visitId={visitId} boards={data.boards.map((b) => b.board)} />}
     </Stack>
   );
 }

@@ -16,7 +16,7 @@ describe('the sign-off gives the answer the server gives', () => {
   for (const c of MINOR_WORKS_CASES) {
     it(c.name, async () => {
       await db.table('site').update(ids.site, { earthing: c.earthing });
-      await db.board.put({ id: ids.board, siteId: ids.site, name: 'Consumer unit', ...base });
+      await db.board.put({ id: ids.board, siteId: ids.site, name: 'Consumer unit', ...c.board, ...base });
       await db.table('circuit').bulkPut(c.circuits.map((row) => ({ ...row, siteId: ids.site, boardId: ids.board, ...base })));
       await db.table('visit').put({ ...c.visit, jobId: ids.job, siteId: ids.site, ...base });
       await db.table('testResult').bulkPut(c.tests.map((row) => ({ ...row, visitId: c.visit.id, siteId: ids.site, ...base })));
@@ -25,7 +25,6 @@ describe('the sign-off gives the answer the server gives', () => {
       const summary = await getSignOff((await db.visit.get(c.visit.id))!);
       expect(summary.certificate.issuable).toBe(c.expected.issuable);
       expect(summary.problems.map((p) => ({ kind: p.kind, what: p.what }))).toEqual(c.expected.findings.map((f) => ({ kind: f.kind, what: f.what })));
-      expect(summary.certificate.findings.map((f) => f.excused)).toEqual(c.expected.findings.map((f) => f.excused ?? false));
     });
   }
 });

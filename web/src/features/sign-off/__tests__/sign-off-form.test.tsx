@@ -1,14 +1,15 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
-import { fireEvent, screen, within } from '@testing-library/react';
+import { cleanup, fireEvent, screen, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
 import { addRing, base, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
-import { signOffSchema } from '../components/sign-off-form';
+import { departureSchema, signOffSchema } from '../components/sign-off-form';
 import { strokesToSvg } from '../components/signature-pad';
 
 beforeEach(async () => {
+  localStorage.clear();
   await resetPhone();
   await addRing();
 });
@@ -20,7 +21,7 @@ describe('sign-off', () => {
     await db.circuit.put({ id: '01900000-0000-7000-8000-000000000031', siteId: ids.site, boardId: ids.board, number: '4', description: 'Cooker', kind: 'radial', ...base });
     await db.pointChange.put({ id: '01900000-0000-7000-8000-000000000032', visitId: ids.visit, siteId: ids.site, circuitId: '01900000-0000-7000-8000-000000000031', action: 'add', ...base });
     show(paths.visitSignOff.href(ids.visit));
-    const list = await screen.findByRole('list', { name: 'Fails and missing readings' });
+    const list = await screen.findByRole('list', { name: 'Fails and missing readings' }, { timeout: 15_000 });
     // 1.25 Ω against 1.10 Ω for a B32 (BS 7671:2018+A2:2022 Table 41.3, Appendix 3).
     expect(within(list).getByText('Fail: Circuit 1 (Sockets, ground floor): Earth fault loop impedance Zs')).toBeTruthy();
     expect(within(list).getByText('Missing: Circuit 1 (Sockets, ground floor): Polarity')).toBeTruthy();
@@ -42,11 +43,61 @@ describe('sign-off', () => {
   it('keeps the signature as a small SVG of its strokes', () => {
     const svg = strokesToSvg([{ points: [{ x: 10.4, y: 20.6, pressure: 0.5, time: 0 }, { x: 30, y: 40, pressure: 0.5, time: 1 }], dotSize: 0, minWidth: 1, maxWidth: 3, penColor: '#000', velocityFilterWeight: 0.7, compositeOperation: 'source-over' }], 320, 180);
     expect(svg).toBe('<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 320 180" width="320" height="180"><g fill="none" stroke="#14262b" stroke-width="2.5" stroke-linecap="round" stroke-linejoin="round"><path d="M10 21L30 40"/></g></svg>');
-    const base = { arrivedAt: '09:05', leftAt: '12:30', workDescription: 'Moved a socket', observations: '', departures: '', signedByName: 'Sam' };
+    const base = { arrivedAt: '09:05', leftAt: '12:30', workDescription: 'Moved a socket', observations: '', departureEntries: [], signedByName: 'Sam' };
     expect(signOffSchema.safeParse({ ...base, signatureSvg: svg }).success).toBe(true);
     expect(signOffSchema.safeParse({ ...base, signatureSvg: 'x'.repeat(60_001) }).success).toBe(false);
     const backwards = signOffSchema.safeParse({ ...base, leftAt: '08:00', signatureSvg: svg });
     expect(backwards.error?.issues[0]).toMatchObject({ path: ['leftAt'], message: 'The time you left must be after the time you arrived.' });
+  });
+});
+
+describe('departures on the sign-off', () => {
+  const CAUTION = /A departure never stands in for a failed or missing test/;
+
+  it('takes a departure as its regulation, what is done instead and why it is no less safe, and refuses one with a part left out', async () => {
+    show(paths.visitSignOff.href(ids.visit));
+    const form = await screen.findByRole('form', { name: 'Sign off' });
+    expect(within(form).getByText(CAUTION)).toBeTruthy();
+    fireEvent.click(within(form).getByRole('button', { name: 'Add a departure' }));
+    const entry = await within(form).findByRole('group', { name: 'Departure 1' });
+    fireEvent.change(within(entry).getByLabelText('Regulation departed from'), { target: { value: '522.6.202' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Finish visit' }));
+    expect(await within(entry).findByText('Say what is done instead.')).toBeTruthy();
+    expect(within(entry).getByText('Say why this gives no less safety.')).toBeTruthy();
+    expect((await db.visit.get(ids.visit))!.status).toBe('planned');
+  });
+
+  it('keeps what was typed, departures included, when the screen is left and opened again', async () => {
+    show(paths.visitSignOff.href(ids.visit));
+    let form = await screen.findByRole('form', { name: 'Sign off' });
+    fireEvent.change(within(form).getByLabelText('Observations'), { target: { value: 'Bonding to the gas pipe is 6 mm².' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add a departure' }));
+    const entry = await within(form).findByRole('group', { name: 'Departure 1' });
+    fireEvent.change(within(entry).getByLabelText('What is done instead'), { target: { value: 'Cable in earthed steel conduit' } });
+    cleanup();
+
+    show(paths.visitSignOff.href(ids.visit));
+    form = await screen.findByRole('form', { name: 'Sign off' });
+    expect((within(form).getByLabelText('Observations') as HTMLTextAreaElement).value).toBe('Bonding to the gas pipe is 6 mm².');
+    const kept = within(form).getByRole('group', { name: 'Departure 1' });
+    expect((within(kept).getByLabelText('What is done instead') as HTMLTextAreaElement).value).toBe('Cable in earthed steel conduit');
+  });
+
+  it('still lists a failing Zs as a fail when a departure is written, and asks before finishing', async () => {
+    // 1.25 Ω against 0.8 × 1.37 = 1.10 Ω for a B32 (BS 7671:2018+A3:2024 Table 41.3; Appendix 3, trade practice).
+    await db.testResult.put({ id: '01900000-0000-7000-8000-000000000030', visitId: ids.visit, siteId: ids.site, circuitId: ids.circuit, zsOhm: 1.25, ...base });
+    await db.visit.update(ids.visit, { departureEntries: [{ regulation: '411.3.2', instead: 'Left as found', noLessSafe: 'The RCD trips fast' }] });
+    show(paths.visitSignOff.href(ids.visit));
+    const list = await screen.findByRole('list', { name: 'Fails and missing readings' }, { timeout: 15_000 });
+    expect(within(list).getByText('Fail: Circuit 1 (Sockets, ground floor): Earth fault loop impedance Zs')).toBeTruthy();
+    const form = screen.getByRole('form', { name: 'Sign off' });
+    expect((within(form).getByLabelText('Regulation departed from') as HTMLInputElement).value).toBe('411.3.2');
+  });
+
+  it('judges a departure as the certificate does: all three parts or none', () => {
+    expect(departureSchema.safeParse({ regulation: '', instead: '', noLessSafe: '' }).success).toBe(true);
+    expect(departureSchema.safeParse({ regulation: '522.6.202', instead: 'Conduit', noLessSafe: 'Earthed' }).success).toBe(true);
+    expect(departureSchema.safeParse({ regulation: '522.6.202', instead: ' ', noLessSafe: 'Earthed' }).error?.issues.map((i) => i.path.join('.'))).toEqual(['instead']);
   });
 });
 

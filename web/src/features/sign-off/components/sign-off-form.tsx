@@ -6,31 +6,63 @@ import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
+import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
-import { FINISHED_VISIT_STATUS } from '@wiretrail/core';
-import { useState } from 'react';
-import { Controller, useForm, useWatch } from 'react-hook-form';
+import { type DepartureEntry, FINISHED_VISIT_STATUS } from '@wiretrail/core';
+import { useEffect, useState } from 'react';
+import { Controller, useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import type { VisitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
+import { clearSignOffDraft, readSignOffDraft, writeSignOffDraft } from './sign-off-draft';
 import { SignatureBox } from './signature-pad';
 
 const text = (max: number, what: string) => z.string().max(max, `${what} must be at most ${max.toLocaleString('en-GB')} characters.`);
 
 const CLOCK = /^([01]\d|2[0-3]):[0-5]\d$/;
 
+/** The three parts of a departure, as the certificate prints them; a part left out makes it no departure at all. */
+export const departureSchema = z
+  .object({
+    regulation: text(200, 'The regulation'),
+    instead: text(2_000, 'What is done instead'),
+    noLessSafe: text(2_000, 'Why it is no less safe'),
+  })
+  .superRefine((d, ctx) => {
+    const parts = [d.regulation, d.instead, d.noLessSafe].map((p) => p.trim());
+    if (parts.every((p) => !p)) return;
+    if (!parts[0]) ctx.addIssue({ code: 'custom', path: ['regulation'], message: 'Name the regulation the work departs from.' });
+    if (!parts[1]) ctx.addIssue({ code: 'custom', path: ['instead'], message: 'Say what is done instead.' });
+    if (!parts[2]) ctx.addIssue({ code: 'custom', path: ['noLessSafe'], message: 'Say why this gives no less safety.' });
+  });
+
+const BLANK_DEPARTURE = { regulation: '', instead: '', noLessSafe: '' };
+
+function storedDepartures(visit: VisitRow): { regulation: string; instead: string; noLessSafe: string }[] {
+  const entries = Array.isArray(visit.departureEntries) ? (visit.departureEntries as readonly Partial<DepartureEntry>[]) : [];
+  return entries.map((d) => ({ regulation: d.regulation ?? '', instead: d.instead ?? '', noLessSafe: d.noLessSafe ?? '' }));
+}
+
 export const signOffSchema = z.object({
   arrivedAt: z.string().regex(CLOCK, 'Give the time you arrived, like 09:05.'),
   leftAt: z.string().regex(CLOCK, 'Give the time you are leaving, like 12:30.'),
   workDescription: text(20_000, 'The description of the work').refine((s) => s.trim().length > 0, 'Describe the work done and its extent.'),
   observations: text(20_000, 'The observations'),
-  departures: text(20_000, 'The departures'),
+  departureEntries: z.array(departureSchema),
   signedByName: z.string().trim().min(1, 'Give the name of the person signing.').max(200, 'The name must be at most 200 characters.'),
   signatureSvg: z.string().nullable().refine((s) => !!s, 'Sign in the box to finish the visit.').refine((s) => !s || s.length <= 60_000, 'The signature is too long; clear it and sign again.'),
 }).refine((v) => !CLOCK.test(v.arrivedAt) || !CLOCK.test(v.leftAt) || v.leftAt >= v.arrivedAt, { path: ['leftAt'], message: 'The time you left must be after the time you arrived.' });
 export type SignOffValues = z.infer<typeof signOffSchema>;
+
+/** Entries left wholly blank are dropped; the rest are stored trimmed, or nothing when none is left. */
+function departuresToKeep(entries: SignOffValues['departureEntries']): DepartureEntry[] | null {
+  const kept = entries
+    .map((d) => ({ regulation: d.regulation.trim(), instead: d.instead.trim(), noLessSafe: d.noLessSafe.trim() }))
+    .filter((d) => d.regulation || d.instead || d.noLessSafe);
+  return kept.length ? kept : null;
+}
 
 const clock = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
 
@@ -49,26 +81,34 @@ interface Props {
   problemCount: number;
 }
 
-/** What was done, what was seen and where it departs from the standard, signed; finishing locks the visit's records. */
+/**
+ * What was done, what was seen and where the design departs from the standard, signed; finishing locks the visit's
+ * records. What is typed is kept as a draft on this phone, so leaving the tab or reloading loses nothing.
+ */
 export function SignOffForm({ visit, defaultDescription, signerName, problemCount }: Props) {
-  const { register, control, handleSubmit, formState, getValues } = useForm<SignOffValues>({
+  const draft = readSignOffDraft(visit.id);
+  const { register, control, handleSubmit, formState, getValues, watch } = useForm<SignOffValues>({
     resolver: zodResolver(signOffSchema),
     defaultValues: {
-      arrivedAt: clock(new Date(visit.actualStart ?? visit.plannedStart ?? Date.now())),
-      leftAt: clock(new Date()),
-      workDescription: visit.workDescription ?? defaultDescription,
-      observations: visit.observations ?? '',
-      departures: visit.departures ?? '',
-      signedByName: visit.signedByName ?? signerName,
+      arrivedAt: draft?.arrivedAt ?? clock(new Date(visit.actualStart ?? visit.plannedStart ?? Date.now())),
+      leftAt: draft?.leftAt ?? clock(new Date()),
+      workDescription: draft?.workDescription ?? visit.workDescription ?? defaultDescription,
+      observations: draft?.observations ?? visit.observations ?? '',
+      departureEntries: draft?.departureEntries ?? storedDepartures(visit),
+      signedByName: draft?.signedByName ?? visit.signedByName ?? signerName,
+      // Signing is the last act, so a signature is never kept in a draft.
       signatureSvg: null,
     },
   });
+  const departures = useFieldArray({ control, name: 'departureEntries' });
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const errors = formState.errors;
-  const departures = useWatch({ control, name: 'departures' });
-  // A fail or a gap with no departure written cannot go on a certificate: say so at the field.
-  const departureWanted = problemCount > 0 && !departures?.trim();
+
+  useEffect(() => {
+    const subscription = watch((values) => writeSignOffDraft(visit.id, values as Partial<SignOffValues>));
+    return () => subscription.unsubscribe();
+  }, [watch, visit.id]);
 
   async function finish(v: SignOffValues) {
     setConfirming(false);
@@ -85,15 +125,16 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
         signatureSvg: v.signatureSvg,
         workDescription: v.workDescription.trim(),
         observations: v.observations.trim() || null,
-        departures: v.departures.trim() || null,
+        departureEntries: departuresToKeep(v.departureEntries),
       });
+      clearSignOffDraft(visit.id);
     } catch (err) {
       setError((err as Error).message);
     }
   }
 
-  // Problems with no departure written: finishing is allowed, but only after saying so plainly.
-  const submit = handleSubmit((v) => (problemCount > 0 && !v.departures.trim() ? setConfirming(true) : finish(v)));
+  // Finishing with problems listed is allowed (the job may need another visit), but only after saying so plainly.
+  const submit = handleSubmit((v) => (problemCount > 0 ? setConfirming(true) : finish(v)));
 
   return (
     <Box component="form" aria-label="Sign off" noValidate onSubmit={submit}>
@@ -104,23 +145,34 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
         </Stack>
         <TextField label="Work done and its extent" multiline minRows={3} {...register('workDescription')} error={!!errors.workDescription} helperText={errors.workDescription?.message ?? 'As it should read on the certificate.'} />
         <TextField label="Observations" multiline minRows={2} {...register('observations')} error={!!errors.observations} helperText={errors.observations?.message ?? 'What you saw that the customer or the office should know.'} />
-        <TextField
-          label="Departures"
-          multiline
-          minRows={2}
-          {...register('departures')}
-          error={!!errors.departures}
-          color={departureWanted ? 'warning' : undefined}
-          focused={departureWanted ? true : undefined}
-          helperText={
-            errors.departures?.message ??
-            (departureWanted
-              ? `${problemCount === 1 ? 'One problem is' : `${problemCount} problems are`} listed above: write where the work departs from the standard and why, or put it right first.`
-              : 'Where the work departs from the standard, and why. Needed for any fail or missing reading.')
-          }
-        />
+        <Paper variant="outlined" component="section" aria-label="Departures from the standard" sx={{ p: 1.5 }}>
+          <Stack spacing={1.5}>
+            <Typography sx={{ fontWeight: 500 }}>Departures from the standard</Typography>
+            <Typography variant="body2" color="text.secondary">
+              Only where the design deliberately departs from a regulation and gives no less safety (BS 7671 Regs 120.3, 133.1.3 and 133.5). A departure
+              never stands in for a failed or missing test: put those right and test again.
+            </Typography>
+            {departures.fields.map((field, i) => {
+              const e = errors.departureEntries?.[i];
+              return (
+                <Stack key={field.id} spacing={1} component="fieldset" aria-label={`Departure ${i + 1}`} sx={{ border: 0, p: 0, m: 0 }}>
+                  <TextField label="Regulation departed from" {...register(`departureEntries.${i}.regulation`)} error={!!e?.regulation} helperText={e?.regulation?.message ?? 'For example 522.6.202.'} />
+                  <TextField label="What is done instead" multiline minRows={2} {...register(`departureEntries.${i}.instead`)} error={!!e?.instead} helperText={e?.instead?.message ?? ' '} />
+                  <TextField label="Why it gives no less safety" multiline minRows={2} {...register(`departureEntries.${i}.noLessSafe`)} error={!!e?.noLessSafe} helperText={e?.noLessSafe?.message ?? ' '} />
+                  <Button onClick={() => departures.remove(i)} sx={{ alignSelf: 'flex-start' }}>
+                    Remove departure {i + 1}
+                  </Button>
+                </Stack>
+              );
+            })}
+            <Button variant="outlined" onClick={() => departures.append({ ...BLANK_DEPARTURE })} sx={{ alignSelf: 'flex-start', minHeight: 48 }}>
+              Add a departure
+            </Button>
+          </Stack>
+        </Paper>
         <TextField label="Signed by" {...register('signedByName')} error={!!errors.signedByName} helperText={errors.signedByName?.message ?? ' '} autoComplete="name" />
         <Controller control={control} name="signatureSvg" render={({ field }) => <SignatureBox onChange={field.onChange} error={errors.signatureSvg?.message} />} />
+
         {error && (
           <Alert severity="error" role="alert">
             {error}
@@ -137,8 +189,8 @@ export function SignOffForm({ visit, defaultDescription, signerName, problemCoun
         <DialogTitle id="confirm-finish-title">Finish with {problemCount === 1 ? 'a problem' : `${problemCount} problems`} listed?</DialogTitle>
         <DialogContent>
           <Typography>
-            The list above shows fails or missing readings, and no departure is written. The office cannot issue a certificate for them until they are put right or
-            recorded as departures.
+            The list above shows what a certificate cannot carry: fails, missing or unjudged readings, or work that needs another kind of certificate. The office
+            cannot issue a minor works certificate until they are put right and the circuit is tested again; a departure does not change that.
           </Typography>
         </DialogContent>
         <DialogActions>

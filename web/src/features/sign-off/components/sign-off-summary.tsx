@@ -11,7 +11,18 @@ import Typography from '@mui/material/Typography';
 import { AidLine } from '@/components/verdicts/verdict-chip';
 import type { Problem, SignOffSummary } from '../data/get-sign-off';
 
-const KIND_WORDS: Record<Problem['kind'], string> = { fail: 'Fail', missing: 'Missing', untested: 'Not tested', 'no-circuit': 'No circuit', 'unknown-circuit': 'Unknown circuit' };
+const KIND_WORDS: Record<Problem['kind'], string> = {
+  fail: 'Fail',
+  missing: 'Missing',
+  unjudged: 'Not judged',
+  untested: 'Not tested',
+  'no-circuit': 'No circuit',
+  'unknown-circuit': 'Unknown circuit',
+  'new-circuit': 'Needs an installation certificate',
+  'board-replaced': 'Needs an installation certificate',
+  'departure-incomplete': 'Incomplete departure',
+  'no-rules': 'No standard for that date',
+};
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 

@@ -26,7 +26,7 @@ export interface SignOffSummary {
 
 /** Everything recorded on the visit, judged again, with every fail and every missing reading in words. */
 export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
-  const [photos, notes, points, results, cables, circuits, site] = await Promise.all([
+  const [photos, notes, points, results, cables, circuits, site, boards] = await Promise.all([
     db.photo.where('visitId').equals(visit.id).count(),
     db.note.where('visitId').equals(visit.id).count(),
     db.pointChange.where('visitId').equals(visit.id).toArray(),
@@ -34,8 +34,9 @@ export async function getSignOff(visit: VisitRow): Promise<SignOffSummary> {
     db.cableRun.where('siteId').equals(visit.siteId).toArray(),
     db.circuit.where('siteId').equals(visit.siteId).toArray(),
     db.site.get(visit.siteId),
+    db.board.where('siteId').equals(visit.siteId).toArray(),
   ]);
-  const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing });
+  const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing, boards });
   // A visit of data cabling alone has no circuit to certify: whether the job has one is the office's question.
   const problems: Problem[] = certificate.findings.flatMap((f) =>
     f.kind === 'not-signed' || f.kind === 'nothing-tested' ? [] : [{ kind: f.kind, what: f.what, detail: f.detail }],

@@ -22,13 +22,13 @@ const site: Site = {
   earthing: 'TN-C-S', zeOhm: 0.28, pfcKa: 1.8, accessNotes: null,
 };
 const boards: Board[] = [
-  { id: '01900000-0000-7000-8000-000000000006', siteId: SITE_ID, areaId: null, name: 'Consumer unit', description: null },
-  { id: '01900000-0000-7000-8000-000000000007', siteId: SITE_ID, areaId: null, name: 'Garage sub-board', description: null },
+  { id: '01900000-0000-7000-8000-000000000006', siteId: SITE_ID, areaId: null, name: 'Consumer unit', description: null, replacedOnVisitId: null },
+  { id: '01900000-0000-7000-8000-000000000007', siteId: SITE_ID, areaId: null, name: 'Garage sub-board', description: null, replacedOnVisitId: null },
 ];
 const areas: Area[] = [{ id: '01900000-0000-7000-8000-000000000008', siteId: SITE_ID, name: 'Lounge', level: 'Ground' }];
 const circuit: Circuit = {
   id: '01900000-0000-7000-8000-000000000009', siteId: SITE_ID, boardId: boards[0]!.id, number: '1', description: 'Sockets, ground floor', kind: 'ring',
-  deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5, lengthM: null,
+  deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5, lengthM: null, faultProtection: null, newOnVisitId: null,
 };
 
 const api = officeApiForEachTest();

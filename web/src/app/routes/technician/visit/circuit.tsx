@@ -38,7 +38,13 @@ export function Component() {
             Circuit {circuit.number}
             {circuit.description ? ` · ${circuit.description}` : ''}
           </Typography>
-          <CircuitDetailsForm key={`${circuit.id}-${circuit._base.version}`} circuit={circuit} locked={locked} />
+          <CircuitDetailsForm
+            key={`${circuit.id}-${circuit._base.version}`}
+            circuit={circuit}
+            board={data.boards.find((b) => b.circuits.some((c) => c.id === circuit.id))?.board}
+            visitId={visit.id}
+            locked={locked}
+          />
           {saved && (
             <Alert severity="success" role="status" onClose={() => setSaved(false)}>
               Readings saved on this phone.

@@ -38,9 +38,14 @@ export function Component() {
             )}
             {visit.departures && (
               <Typography variant="body2">
-                <strong>Departures:</strong> {visit.departures}
+                <strong>Noted:</strong> {visit.departures}
               </Typography>
             )}
+            {signOff.certificate.departures.map((d, i) => (
+              <Typography variant="body2" key={i}>
+                <strong>Departure from Reg {d.regulation}:</strong> {d.instead} No less safe because: {d.noLessSafe}
+              </Typography>
+            ))}
           </Stack>
         </Paper>
       ) : (

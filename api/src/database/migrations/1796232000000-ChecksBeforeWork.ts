@@ -8,8 +8,8 @@ const POINT_CHANGE_COLUMNS = [
     `"designCurrentA" float`, `"installationMethod" varchar(40)`, `"ambientFactor" float`, `"groupingFactor" float`, `"insulationFactor" float`,
 ];
 
-export class ChecksBeforeWork1796231000000 implements MigrationInterface {
-    name = 'ChecksBeforeWork1796231000000'
+export class ChecksBeforeWork1796232000000 implements MigrationInterface {
+    name = 'ChecksBeforeWork1796232000000'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`ALTER TABLE "circuit" ADD COLUMN "lengthM" float`);
