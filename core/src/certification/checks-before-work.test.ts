@@ -71,7 +71,9 @@ describe('checksBeforeWork', () => {
 
   it('refuses to guess a fuse’s disconnection time, and says why a value cannot be worked out', () => {
     const fuse = checksBeforeWork({ point: { ...extension }, circuit: { ...circuit, deviceType: 'BS 3036', deviceRatingA: 30 }, site });
-    expect(fuse.lines.find((l) => l.key === 'predicted-zs')?.result.note).toMatch(/Cannot work this out: device/);
+    // A fuse's Zs table (BS 7671:2018+A2:2022 Table 41.2) judges the Zs, but its disconnection time is read from its own curve
+    expect(fuse.lines.find((l) => l.key === 'predicted-zs')?.result.verdict).not.toBe('check');
+    expect(fuse.lines.find((l) => l.key === 'cpc')?.result.note).toMatch(/BS 3036 fuse’s disconnection time .* from its curve/);
     const odd = checksBeforeWork({ point: { ...extension, liveCsaMm2: 3 }, circuit, site });
     expect(odd.lines.find((l) => l.key === 'predicted-zs')?.result.note).toMatch(/not listed/);
   });
