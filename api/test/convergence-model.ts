@@ -171,9 +171,10 @@ export function convergenceProperty(port: SyncPort, options: { concurrent?: bool
     const site = uuidv7();
     const board = uuidv7();
     const circuits = [uuidv7(), uuidv7()];
-    const hlc = formatHlc({ ms: Date.now(), counter: 0, deviceId: 'setup' });
+    const setup = `setup-${n}`;
+    const hlc = formatHlc({ ms: Date.now(), counter: 0, deviceId: setup });
     const m = (entity: Mutation['entity'], id: string, set: Mutation['set']): Mutation => ({ mutationId: uuidv7(), entity, id, baseVersion: 0, set, hlc });
-    const { results } = await port.push(admin, 'setup', [
+    const { results } = await port.push(admin, setup, [
       m('customer', customer, { name: 'Start', phone: '0' }),
       m('site', site, { customerId: customer, address: '1 Model Row' }),
       m('board', board, { siteId: site, name: 'CU' }),

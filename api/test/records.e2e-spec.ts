@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { formatHlc } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
+import { catchUp } from './sync-helpers.js';
 import { bearer, createTestApp, expectErrorBody, messagesOf, signIn, signInAll, type TestApp } from './test-app.js';
 
 type Session = Awaited<ReturnType<typeof signIn>>;
@@ -35,11 +36,14 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
   const names = (page: Page, field = 'name') => page.items.map((r) => r[field]);
   const create = async (path: string, body: object, s = office): Promise<Row> => (await t.http.post(path).set(as(s)).send(body).expect(201)).body;
   const messages = messagesOf;
-  const push = (s: Session, mutation: object) =>
-    t.http.post('/api/sync/push').set(as(s)).send({
+  // The device pulls first, as a phone does: the server takes no base version above what the device was sent.
+  const push = async (s: Session, mutation: object) => {
+    await catchUp(t, s, 'testdevice2');
+    return t.http.post('/api/sync/push').set(as(s)).send({
       deviceId: 'testdevice2',
       mutations: [{ mutationId: uuidv7(), hlc: formatHlc({ ms: Date.now(), counter: 0, deviceId: 'testdevice2' }), ...mutation }],
     }).expect(200);
+  };
 
   beforeAll(async () => {
     t = await createTestApp();

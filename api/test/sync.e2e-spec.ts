@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { MAX_PUSH_MUTATIONS } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
-import { DeviceMirror, hlcAt, mutation, pullPage, push, type Session } from './sync-helpers.js';
+import { catchUp, DeviceMirror, hlcAt, mutation, pullPage, push, type Session } from './sync-helpers.js';
 import { createTestApp, signIn, type TestApp } from './test-app.js';
 
 describe('sync: push and pull', () => {
@@ -173,6 +173,7 @@ describe('sync: push and pull', () => {
     await tech1View.pullAll(t, tech1);
     const fern = visitAt('Fernhill Close', () => true);
     const current = (await pullPage(t, office, 'office-fresh', 0, 1000)).changes.find((c) => c.id === fern.id)!.row!;
+    await catchUp(t, office, 'office-desk-1');
     const [assign] = await push(t, office, 'office-desk-1', [mutation('visit', fern.id, { technicianIds: [tech2.user.id, tech1.user.id] }, { baseVersion: current.version })]);
     expect(assign!.status).toBe('applied');
     const gained = await tech1View.pullAll(t, tech1);
@@ -181,6 +182,7 @@ describe('sync: push and pull', () => {
     expect(tech1View.find('circuit', (r) => r.siteId === fernId)).toHaveLength(1);
     expect(tech1View.find('customer', (r) => r.name === 'Tom and Priya Okonjo')).toHaveLength(1);
 
+    await catchUp(t, office, 'office-desk-1');
     const [unassign] = await push(t, office, 'office-desk-1', [mutation('visit', fern.id, { technicianIds: [tech2.user.id] }, { baseVersion: assign!.version })]);
     expect(unassign!.status).toBe('applied');
     const lost = await tech1View.pullAll(t, tech1);
@@ -220,6 +222,8 @@ describe('sync: push and pull', () => {
     const [c1, c2] = circuits;
     const early = (id: string, base: number) => mutation('circuit', id, { description: 'Reception sockets (ring, verified)' }, { baseVersion: base, hlc: hlcAt('2026-12-02T10:00:00.000Z', 'tech1-phone') });
     const late = (id: string, base: number) => mutation('circuit', id, { description: 'Reception and waiting room sockets' }, { baseVersion: base, hlc: hlcAt('2026-12-02T10:05:00.000Z', 'tech2-phone') });
+    await catchUp(t, tech1, 'tech1-phone');
+    await catchUp(t, tech2, 'tech2-phone');
     // Order one: the earlier edit reaches the server first.
     await push(t, tech1, 'tech1-phone', [early(c1!.id, c1!.version)]);
     const r1 = await push(t, tech2, 'tech2-phone', [late(c1!.id, c1!.version)]);
@@ -246,6 +250,7 @@ describe('sync: push and pull', () => {
     const result = officeView.one('testResult', (r) => r.visitId === earlier.id);
     const issued = await t.http.post(`/api/jobs/${earlier.jobId as string}/documents`).set('authorization', `Bearer ${office.accessToken}`).send({ kind: 'minor-works' });
     expect(issued.status).toBe(201);
+    await catchUp(t, tech2, 'tech2-phone');
     const [edit] = await push(t, tech2, 'tech2-phone', [mutation('testResult', result.id, { zsOhm: 0.71 }, { baseVersion: result.version })]);
     expect(edit).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)], heldBy: issued.body.number });
     await officeView.pullAll(t, office);
@@ -281,6 +286,7 @@ describe('sync: push and pull', () => {
     ]);
     expect([created!.status, finished!.status]).toEqual(['applied', 'applied']);
     // A second phone, offline until now, edits the reading after the visit was signed.
+    await catchUp(t, tech1, 'tech1-tablet');
     const [edit] = await push(t, tech1, 'tech1-tablet', [mutation('testResult', testId, { zsOhm: 0.95 }, { baseVersion: created!.version, deviceId: 'tech1-tablet' })]);
     expect(edit).toMatchObject({ status: 'merged', conflictIds: [expect.any(String)] });
     const [reopen] = await push(t, tech1, 'tech1-tablet', [mutation('visit', visit.id, { status: 'on-site' }, { baseVersion: finished!.version, deviceId: 'tech1-tablet' })]);
@@ -292,6 +298,7 @@ describe('sync: push and pull', () => {
     expect(officeView.rows.get(`visit:${visit.id}`)!.status).toBe('finished');
     expect(officeView.one('conflict', (r) => r.id === edit!.conflictIds![0])).toMatchObject({ reason: 'locked-by-sign-off', field: 'zsOhm', keptValue: 0.59, discardedValue: 0.95 });
     // The office is not held by the sign-off lock.
+    await catchUp(t, office, 'office-desk-1');
     const [fix] = await push(t, office, 'office-desk-1', [mutation('testResult', testId, { instrument: 'Loop tester, serial 4471' }, { baseVersion: created!.version })]);
     expect(fix!.status).toBe('applied');
   });

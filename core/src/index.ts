@@ -44,3 +44,4 @@ export * from './contracts/conflicts.js';
 export * from './contracts/shared-job.js';
 export * from './contracts/records.js';
 export * from './contracts/jobs.js';
+export * from './text/typed-text.js';

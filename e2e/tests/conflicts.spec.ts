@@ -10,7 +10,11 @@ test('the office settles two offline edits of the same circuit, side by side', a
   const stamp = Date.now().toString(36);
   // Both technicians are on tomorrow's practice visit, so both may record its circuits.
   const [tech1, tech2] = [await tokenFor(request, 'tech1@larkfield.example'), await tokenFor(request, 'tech2@larkfield.example')];
-  const pulled = await (await request.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=conflict-e2e-probe', { headers: { authorization: `Bearer ${tech1}` } })).json();
+  // Each phone has pulled the circuit before going offline: the server takes no base a device was never sent.
+  const pullOn = async (token: string, device: string) =>
+    (await request.get(`/api/sync/pull?checkpoint=0&limit=1000&deviceId=${device}`, { headers: { authorization: `Bearer ${token}` } })).json();
+  const pulled = await pullOn(tech1, 'phonea');
+  await pullOn(tech2, 'phoneb');
   const circuit = pulled.changes.find((c: { entity: string; row: { description?: string } }) => c.entity === 'circuit' && c.row.description === 'Comms cabinet').row;
   const push = (token: string, device: string, at: string, description: string) =>
     request.post('/api/sync/push', {

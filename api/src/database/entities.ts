@@ -13,6 +13,7 @@ import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { LabourRate } from '../pricing/entities/labour-rate.entity.js';
 import { VatRate } from '../pricing/entities/vat-rate.entity.js';
 import { PhotoBlob } from '../photos/entities/photo-blob.entity.js';
+import { PhotoSender } from '../photos/entities/photo-sender.entity.js';
 import { SYNC_BOOKKEEPING } from '../sync/entities/sync-bookkeeping.entity.js';
 import { ALL_SYNC_SCHEMAS } from '../sync/entities/sync-schemas.js';
 import { ShareLink } from '../share-links/entities/share-link.entity.js';
@@ -20,6 +21,6 @@ import { User } from '../users/entities/user.entity.js';
 
 /** For the migration CLI and scripts; the Nest app registers entities per feature module. */
 export const ALL_ENTITIES = [
-  Organisation, User, RefreshToken, PasswordReset, AttemptCount, PhotoBlob, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
+  Organisation, User, RefreshToken, PasswordReset, AttemptCount, PhotoBlob, PhotoSender, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
   VatRate, LabourRate, Invoice, InvoiceLine, Payment, CardCheckout, PaymentEvent, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
 ];

@@ -10,6 +10,7 @@ import { StorageModule } from '../storage/storage.module.js';
 import { User } from '../users/entities/user.entity.js';
 import { BlobsController } from './blobs.controller.js';
 import { PhotoBlob } from './entities/photo-blob.entity.js';
+import { PhotoSender } from './entities/photo-sender.entity.js';
 import { PhotosController } from './photos.controller.js';
 import { PhotosService } from './photos.service.js';
 import { PhotoUploads } from './uploads/photo-uploads.js';
@@ -21,7 +22,7 @@ import { PhotoUploads } from './uploads/photo-uploads.js';
 @Module({
   imports: [
     ConfigModule.forFeature(photosConfig),
-    TypeOrmModule.forFeature([PhotoBlob, Organisation, User]),
+    TypeOrmModule.forFeature([PhotoBlob, PhotoSender, Organisation, User]),
     StorageModule,
     // Uploads check the access token themselves (they are not Nest routes), with the same secret as sign-in.
     JwtModule.registerAsync({

@@ -1,5 +1,5 @@
 import { Inject, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
-import type { SyncedRow } from '@wiretrail/core';
+import type { Mutation, SyncedRow } from '@wiretrail/core';
 import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import { type EntityManager, In, IsNull } from 'typeorm';
@@ -8,11 +8,12 @@ import { WriteQueue } from '../common/write-queue.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
-import { ScopeService } from '../sync/scope.service.js';
-import { type Actor, SyncEngine } from '../sync/sync-engine.service.js';
+import { ScopeService, type TechnicianScope } from '../sync/scope.service.js';
+import { type Actor, SyncEngine, type Verdict } from '../sync/sync-engine.service.js';
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { ListPhotosQueryDto } from './dto/list-photos-query.dto.js';
 import { PhotoBlob } from './entities/photo-blob.entity.js';
+import { PhotoSender } from './entities/photo-sender.entity.js';
 import { PhotoRefused, processPhoto } from './image-processing.js';
 import { type FileStorage, StoredFileMissing } from '../storage/file-storage.js';
 import { PHOTO_STORAGE, photoKey, type StoredVariant } from '../storage/file-stores.js';
@@ -49,6 +50,7 @@ export class PhotosService implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
+    this.engine.judgeWrites('photo', (em, actor, scope, mutations) => this.judgeHashes(em, actor, scope, mutations));
     // Devices send a photo's bytes before its row, so the row usually arrives to find them already here.
     this.engine.afterCreate('photo', async (em, actor, row) => {
       if (typeof row.sha256 !== 'string') return;
@@ -57,15 +59,53 @@ export class PhotosService implements OnModuleInit {
     });
   }
 
-  /** The hashes, of those asked about, that this organisation's storage does not hold yet; in the order asked. */
+  /**
+   * The hashes, of those asked about, that the server does not hold for this user yet; in the order asked. For a
+   * technician, bytes held only outside their sites count as missing: whether they exist there is not theirs to
+   * learn, and sending them proves they hold them.
+   */
   async missing(user: AuthUser, hashes: string[]): Promise<{ missing: string[] }> {
     const unique = [...new Set(hashes)];
     if (!unique.length) return { missing: [] };
-    const held = await this.queue.read((em) =>
-      em.find(PhotoBlob, { where: { organisationId: user.organisationId, sha256: In(unique) }, select: { sha256: true } }),
-    );
-    const have = new Set(held.map((b) => b.sha256));
+    const have = await this.queue.read(async (em) => {
+      const held = await em.find(PhotoBlob, { where: { organisationId: user.organisationId, sha256: In(unique) }, select: { sha256: true } });
+      const hashes = held.map((b) => b.sha256);
+      if (user.role !== 'technician' || !hashes.length) return new Set(hashes);
+      const scope = await this.scopes.technicianScope(em, user.organisationId, user.id);
+      return this.shownTo(em, user.organisationId, user.id, scope.siteIds, hashes);
+    });
     return { missing: unique.filter((h) => !have.has(h)) };
+  }
+
+  /** Of the given hashes, those a user has sent, or that a photo on one of the given sites already names. */
+  private async shownTo(em: EntityManager, organisationId: string, userId: string, siteIds: ReadonlySet<string>, hashes: string[]): Promise<Set<string>> {
+    const sent = await em.find(PhotoSender, { where: { organisationId, userId, sha256: In(hashes) }, select: { sha256: true } });
+    const shown = new Set(sent.map((s) => s.sha256));
+    const rest = hashes.filter((h) => !shown.has(h));
+    if (rest.length && siteIds.size) {
+      const rows = await em.getRepository<SyncRecord>('photo').find({
+        where: { organisationId, sha256: In(rest), siteId: In([...siteIds]), deletedAt: IsNull() }, select: { id: true, sha256: true },
+      });
+      for (const r of rows) shown.add(r.sha256 as string);
+    }
+    return shown;
+  }
+
+  /**
+   * A technician's photo row may name bytes the server holds only if they sent them or a photo on one of their
+   * sites already shows them: otherwise a hash seen elsewhere would open a photo from outside their sites. Bytes not
+   * held yet are fine; the row waits for them. Read once for the whole batch.
+   */
+  private async judgeHashes(em: EntityManager, actor: Actor, scope: TechnicianScope | null, mutations: Mutation[]): Promise<Verdict> {
+    if (!scope) return () => null;
+    const hashes = [...new Set(mutations.map((m) => m.set?.sha256).filter((h): h is string => typeof h === 'string'))];
+    if (!hashes.length) return () => null;
+    const held = await em.find(PhotoBlob, { where: { organisationId: actor.organisationId, sha256: In(hashes) }, select: { sha256: true } });
+    const heldHashes = held.map((b) => b.sha256);
+    const shown = heldHashes.length ? await this.shownTo(em, actor.organisationId, actor.userId, scope.siteIds, heldHashes) : new Set<string>();
+    const refused = new Set(heldHashes.filter((h) => !shown.has(h)));
+    return ({ set }) =>
+      typeof set.sha256 === 'string' && refused.has(set.sha256) ? 'That photo has not been sent from this phone. Send the photo itself, then its record.' : null;
   }
 
   /**
@@ -83,7 +123,10 @@ export class PhotosService implements OnModuleInit {
       keepLocation: (await em.findOneBy(Organisation, { id: user.organisationId }))?.keepPhotoLocation ?? false,
     }));
     if (held) {
-      await this.queue.run((em) => this.markReady(em, actor, held));
+      await this.queue.run(async (em) => {
+        await this.recordSender(em, user, claimedSha256);
+        await this.markReady(em, actor, held);
+      });
       return;
     }
     const photo = await processPhoto(bytes, { keepLocation });
@@ -102,8 +145,13 @@ export class PhotosService implements OnModuleInit {
         .values({ organisationId: user.organisationId, sha256: claimedSha256, mime: photo.mime, bytes: bytes.length, width: photo.width, height: photo.height })
         .orIgnore()
         .execute();
+      await this.recordSender(em, user, claimedSha256);
       await this.markReady(em, actor, await em.findOneByOrFail(PhotoBlob, { organisationId: user.organisationId, sha256: claimedSha256 }));
     });
+  }
+
+  private async recordSender(em: EntityManager, user: AuthUser, sha256: string): Promise<void> {
+    await em.createQueryBuilder().insert().into(PhotoSender).values({ organisationId: user.organisationId, sha256, userId: user.id }).orIgnore().execute();
   }
 
   /**

@@ -1,6 +1,7 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
+import { NormalisedText, VisibleText } from '../common/validators/typed-text.js';
 import {
   ArrayUnique,
   IsArray,
@@ -17,7 +18,6 @@ import {
   Max,
   MaxLength,
   Min,
-  MinLength,
 } from 'class-validator';
 
 /**
@@ -39,7 +39,7 @@ function presence(o: FieldOptions, api: ApiPropertyOptions): PropertyDecorator[]
     : [ApiPropertyOptional({ ...doc, nullable: true }), IsOptional()];
 }
 
-const trimmed = Transform(({ value }) => (typeof value === 'string' ? value.trim() : value));
+const trimmed = NormalisedText();
 
 export function TextField(max: number, o: FieldOptions = {}): PropertyDecorator {
   return applyDecorators(
@@ -47,7 +47,7 @@ export function TextField(max: number, o: FieldOptions = {}): PropertyDecorator 
     trimmed,
     IsString({ message: '$property must be text' }),
     MaxLength(max, { message: `$property must be at most ${max} characters` }),
-    ...(o.required ? [MinLength(1, { message: '$property must not be empty' })] : []),
+    ...(o.required ? [VisibleText()] : []),
   );
 }
 

@@ -24,7 +24,7 @@ const refusal = (fn: () => unknown): string => {
   throw new Error('was not refused');
 };
 
-const scope: TechnicianScope = { visitIds: new Set([VISIT]), visitSite: new Map([[VISIT, SITE]]), siteIds: new Set([SITE]), customerIds: new Set() };
+const scope: TechnicianScope = { visitIds: new Set([VISIT]), visitSite: new Map([[VISIT, SITE]]), siteIds: new Set([SITE]), customerIds: new Set(), ownVisitIds: new Set([VISIT]), jobIds: new Set() };
 const stored = (fields: Record<string, unknown>): SyncRecord => ({
   id: ROW, organisationId: 'org', version: 3, fieldMeta: {}, deletedAt: null, createdById: null, updatedById: null, createdAt: new Date(), updatedAt: new Date(), ...fields,
 });

@@ -4,8 +4,10 @@ import {
   type FieldValue,
   isHlc,
   isSyncEntity,
+  parseHlc,
   isUuid,
   type Mutation,
+  normaliseText,
   SYNC_ENTITIES,
   type SyncEntityName,
 } from '@wiretrail/core';
@@ -44,7 +46,7 @@ export function checkMutation(mutation: Mutation, { server = false } = {}): Chec
   const spec = SYNC_ENTITIES[mutation.entity];
   if (spec.serverOnly && !server) throw new MutationRefused(`${mutation.entity} rows are written by the server only; no push may create, change or delete one.`);
   if (!isUuid(mutation.id)) throw new MutationRefused('id must be a UUID.');
-  if (!isHlc(mutation.hlc)) throw new MutationRefused('hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>.');
+  if (!isHlc(mutation.hlc)) throw new MutationRefused('hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>, with a real date from 2020 on.');
   if (!Number.isInteger(mutation.baseVersion) || mutation.baseVersion < 0) throw new MutationRefused('baseVersion must be a whole number, 0 for a new row.');
   const isDelete = mutation.delete === true;
   const set = mutation.set ?? {};
@@ -57,7 +59,21 @@ export function checkMutation(mutation: Mutation, { server = false } = {}): Chec
     const problem = fieldError(mutation.entity, field, value);
     if (problem) throw new MutationRefused(problem);
   }
-  return { mutation, spec, set, isDelete };
+  // One spelling of what looks the same, as the office's forms keep it, so that searches find it either way.
+  const normalised = Object.fromEntries(Object.entries(set).map(([f, v]) => [f, typeof v === 'string' ? normaliseText(v) : v])) as Record<string, FieldValue>;
+  return { mutation, spec, set: normalised, isDelete };
+}
+
+/**
+ * What a pushing device claims about itself: its clock must carry its own id (the merge takes one device's changes
+ * as already in order, so a borrowed id would pass as another device's later edit), and its base no newer than
+ * what it has been sent.
+ */
+export function checkDeviceClaims(actor: { deviceId: string }, device: { pulledUpTo: number }, { mutation: m }: CheckedMutation): void {
+  if (parseHlc(m.hlc)!.deviceId !== actor.deviceId) throw new MutationRefused(`hlc must end with this device's id (${actor.deviceId}).`);
+  if (m.baseVersion > device.pulledUpTo) {
+    throw new MutationRefused(`baseVersion ${m.baseVersion} is newer than anything this device has pulled (${device.pulledUpTo}); pull, then make the change again.`);
+  }
 }
 
 /** A new row must bring every field the registry calls required. */

@@ -10,6 +10,10 @@ export interface TechnicianScope {
   siteIds: Set<string>;
   /** Customers of those sites, for names and contact details on site. */
   customerIds: Set<string>;
+  /** Every visit the technician is on, cancelled ones too: the only visits their phone receives. */
+  ownVisitIds: Set<string>;
+  /** The jobs of those visits: another job at the same site (an enquiry, say) is none of the phone's business. */
+  jobIds: Set<string>;
 }
 
 @Injectable()
@@ -18,9 +22,10 @@ export class ScopeService {
     // technicianIds is a JSON list; LIKE narrows the rows, the check below makes it exact.
     const visits = await syncRepository(em, 'visit').find({
       where: { organisationId, deletedAt: IsNull(), technicianIds: Like(`%${userId}%`) },
-      select: { id: true, siteId: true, technicianIds: true, status: true },
+      select: { id: true, siteId: true, jobId: true, technicianIds: true, status: true },
     });
-    const mine = visits.filter((v) => Array.isArray(v.technicianIds) && v.technicianIds.includes(userId) && v.status !== 'cancelled');
+    const own = visits.filter((v) => Array.isArray(v.technicianIds) && v.technicianIds.includes(userId));
+    const mine = own.filter((v) => v.status !== 'cancelled');
     const visitSite = new Map(mine.map((v) => [v.id, v.siteId]));
     const siteIds = new Set(visitSite.values());
     const sites = siteIds.size
@@ -31,6 +36,8 @@ export class ScopeService {
       visitSite,
       siteIds,
       customerIds: new Set(sites.map((s) => s.customerId)),
+      ownVisitIds: new Set(own.map((v) => v.id)),
+      jobIds: new Set(own.map((v) => v.jobId)),
     };
   }
 

@@ -3,7 +3,7 @@ import type { EntityManager } from 'typeorm';
 import { AppliedMutation, SyncChange, SyncCounter } from './entities/sync-bookkeeping.entity.js';
 import { SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
 import { insertMany, selectMany, updateWhere } from './bulk-write.js';
-import type { KnownRows } from './reference-checks.js';
+import type { KnownRows, RowSites } from './reference-checks.js';
 
 export type AppliedRecord = Pick<AppliedMutation, 'mutationId' | 'organisationId' | 'userId' | 'deviceId' | 'result'>;
 
@@ -18,6 +18,8 @@ export class SyncBatch {
   readonly applied = new Map<string, AppliedRecord>();
   /** Referenced rows already found to exist in this batch. */
   readonly known: KnownRows = new Set();
+  /** The site of each referenced or written row that belongs to one, by `entity:id`, for the same-site rule. */
+  readonly sites: RowSites = new Map();
   /** When the batch began: the creation time of the rows it makes. */
   readonly now = new Date();
   /** Rows read or written by this batch, by `entity:id`; null when read and not there. */

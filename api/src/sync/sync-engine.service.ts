@@ -19,7 +19,7 @@ import { v7 as uuidv7 } from 'uuid';
 import { AppliedMutation } from './entities/sync-bookkeeping.entity.js';
 import type { SyncRecord } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';
-import { type CheckedMutation, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
+import { type CheckedMutation, checkDeviceClaims, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
 import { type Lock, type LockRule, RecordLocks } from './record-locks.js';
 import { checkReferences, preloadReferences, referencedIds } from './reference-checks.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
@@ -35,8 +35,23 @@ export interface Actor {
   deviceId: string;
 }
 
+/** The device ids the server's own writers stamp their clocks with; no phone may push as one of them. */
+export const SERVER_DEVICE_IDS: ReadonlySet<string> = new Set(['office', 'server', 'seed', 'mail-outbox']);
+
+/**
+ * What the server knows of a pushing device, against which its claims are checked: the highest change it has
+ * been sent. The office's REST writes and the server's own have no such claims to check.
+ */
+export interface DeviceClaims {
+  pulledUpTo: number;
+}
+
 /** Work a feature does inside the same transaction right after a row is created; see SyncEngine.afterCreate. */
 export type CreateHook = (em: EntityManager, actor: Actor, row: SyncRecord) => Promise<void>;
+
+/** Why a checked mutation is refused, or null; made by a feature's WriteJudge for one batch. */
+export type Verdict = (checked: CheckedMutation, existing: SyncRecord | null) => string | null;
+export type WriteJudge = (em: EntityManager, actor: Actor, scope: TechnicianScope | null, mutations: Mutation[]) => Promise<Verdict>;
 
 /** One value of a field, as a conflict row records it. */
 interface ConflictSide {
@@ -64,6 +79,7 @@ export class SyncEngine {
   private readonly createHooks = new Map<SyncEntityName, CreateHook>();
   private readonly lockRules = new Map<SyncEntityName, LockRule>();
   private readonly runs = new WeakMap<EntityManager, Run>();
+  private readonly writeJudges = new Map<SyncEntityName, WriteJudge>();
 
   constructor(private readonly scopes: ScopeService) {}
 
@@ -75,18 +91,36 @@ export class SyncEngine {
     this.createHooks.set(entity, hook);
   }
 
+  /**
+   * Lets a feature refuse what the registry cannot know is wrong (a photo naming bytes its author may not see).
+   * The judge is made once per batch, from every mutation of the entity, so it reads what it needs in one go.
+   */
+  judgeWrites(entity: SyncEntityName, judge: WriteJudge): void {
+    this.writeJudges.set(entity, judge);
+  }
+
+  private async judgesFor(em: EntityManager, actor: Actor, scope: TechnicianScope | null, mutations: Mutation[]): Promise<Map<SyncEntityName, Verdict>> {
+    const out = new Map<SyncEntityName, Verdict>();
+    for (const [entity, judge] of this.writeJudges) {
+      const mine = mutations.filter((m) => m?.entity === entity && m.set && typeof m.set === 'object');
+      if (mine.length) out.set(entity, await judge(em, actor, scope, mine));
+    }
+    return out;
+  }
+
   /** Lets a feature keep records from changing while its rows say so (an issued certificate, say); see record-locks.ts. */
   lockRule(entity: SyncEntityName, rule: LockRule): void {
     this.lockRules.set(entity, rule);
   }
 
   /** Applies a device's mutations in order inside the caller's transaction. */
-  async applyAll(em: EntityManager, actor: Actor, mutations: Mutation[]): Promise<MutationResult[]> {
+  async applyAll(em: EntityManager, actor: Actor, mutations: Mutation[], device?: DeviceClaims): Promise<MutationResult[]> {
     return this.inBatch(em, async (run) => {
       const scope = actor.role === 'technician' ? await this.scopes.technicianScope(em, actor.organisationId, actor.userId) : null;
       await this.preload(run, actor, mutations);
+      const judges = await this.judgesFor(em, actor, scope, mutations);
       const results: MutationResult[] = [];
-      for (const m of mutations) results.push(await this.applyOnce(run, actor, scope, m));
+      for (const m of mutations) results.push(await this.applyOnce(run, actor, scope, m, device, judges));
       return results;
     });
   }
@@ -162,10 +196,12 @@ export class SyncEngine {
     const existing: Array<[SyncEntityName, SyncRecord]> = [];
     for (const [entity, ids] of rowIds) for (const row of await batch.load(entity, [...ids])) existing.push([entity, row]);
     await locks.preload(existing, SYNC_ENTITIES);
-    await preloadReferences(batch.em, actor.organisationId, referencedIds(mutations), batch.known);
+    await preloadReferences(batch.em, actor.organisationId, referencedIds(mutations), batch.known, batch.sites);
   }
 
-  private async applyOnce(run: Run, actor: Actor, scope: TechnicianScope | null, m: Mutation): Promise<MutationResult> {
+  private async applyOnce(
+    run: Run, actor: Actor, scope: TechnicianScope | null, m: Mutation, device: DeviceClaims | undefined, judges: Map<SyncEntityName, Verdict>,
+  ): Promise<MutationResult> {
     // An id that could never be stored is refused without being looked up or kept.
     const mutationId = isMutationId(m?.mutationId) ? m.mutationId : '';
     const done = mutationId ? run.batch.applied.get(mutationId) : undefined;
@@ -175,7 +211,8 @@ export class SyncEngine {
     }
     let result: MutationResult;
     try {
-      result = await this.apply(run, actor, scope, checkMutation(m));
+      const checked = checkMutation(m);
+      result = await this.apply(run, actor, scope, checked, judges, device);
     } catch (err) {
       if (!(err instanceof MutationRefused)) throw err;
       result = { mutationId, status: 'rejected', error: err.message };
@@ -185,13 +222,21 @@ export class SyncEngine {
     return result;
   }
 
-  private async apply(run: Run, actor: Actor, scope: TechnicianScope | null, checked: CheckedMutation): Promise<MutationResult> {
+  private async apply(
+    run: Run, actor: Actor, scope: TechnicianScope | null, checked: CheckedMutation, judges: Map<SyncEntityName, Verdict>, device: DeviceClaims | undefined,
+  ): Promise<MutationResult> {
     const { mutation: m, spec, set, isDelete } = checked;
     const existing = await run.batch.rowOf(m.entity, m.id);
     if (existing && existing.organisationId !== actor.organisationId) throw new MutationRefused(`No ${m.entity} with that id.`);
+    // A base above the row's version claims to have seen changes that never happened, and would win every merge.
+    if (existing && m.baseVersion > existing.version) throw new MutationRefused(`baseVersion ${m.baseVersion} is newer than the ${m.entity} itself (version ${existing.version}).`);
+    if (device) checkDeviceClaims(actor, device, checked);
 
     checkTechnicianWrite(scope, checked, existing);
-    await checkReferences(run.batch.em, actor.organisationId, m.entity, spec, set, run.batch.known);
+    const refusal = judges.get(m.entity)?.(checked, existing);
+    if (refusal) throw new MutationRefused(refusal);
+    const rowSite = spec.siteField === 'siteId' ? ((set.siteId ?? existing?.siteId ?? null) as string | null) : spec.siteField === 'id' ? m.id : null;
+    await checkReferences(run.batch.em, actor.organisationId, m.entity, spec, set, run.batch.known, run.batch.sites, rowSite);
 
     if (!existing) {
       if (isDelete) return { mutationId: m.mutationId, status: 'applied', version: 0, fieldVersions: {} };
@@ -203,7 +248,7 @@ export class SyncEngine {
     return this.update(run, actor, checked, existing);
   }
 
-  private async create(run: Run, actor: Actor, { mutation: m, set }: CheckedMutation): Promise<MutationResult> {
+  private async create(run: Run, actor: Actor, { mutation: m, spec, set }: CheckedMutation): Promise<MutationResult> {
     const { batch, locks } = run;
     checkNewRow(m.entity, set);
     const seq = await batch.nextSeq();
@@ -215,6 +260,7 @@ export class SyncEngine {
     };
     batch.insert(m.entity, row);
     batch.recordChange(m.entity, row, seq);
+    if (spec.siteField === 'siteId') batch.sites.set(`${m.entity}:${m.id}`, (row.siteId as string | null) ?? null);
     const hook = this.createHooks.get(m.entity);
     if (hook) {
       // A feature's hook reads and writes the database: give it the row, and everything before it, written.
@@ -255,6 +301,7 @@ export class SyncEngine {
     const next = { ...changes, fieldMeta, version: seq, updatedById: actor.userId, ...(revived ? { deletedAt: null } : {}) };
     await batch.write(m.entity, row, next);
     locks.changed(m.entity);
+    if (typeof changes.siteId === 'string') batch.sites.set(`${m.entity}:${row.id}`, changes.siteId);
     if (revived) batch.known.add(`${m.entity}:${row.id}`);
     batch.recordChange(m.entity, row, seq);
     return {

@@ -1,13 +1,18 @@
-import { Injectable, PayloadTooLargeException } from '@nestjs/common';
+import { ForbiddenException, Injectable, PayloadTooLargeException, UnprocessableEntityException } from '@nestjs/common';
 import {
   type Change,
+  clockProblem,
   type Conflict,
+  MAX_CLOCK_AHEAD_MS,
   MAX_PULL_LIMIT,
   MAX_PUSH_MUTATIONS,
   type Mutation,
   type PullResponse,
   type PushResponse,
+  isHlc,
+  officeOnlyFields,
   SYNC_ENTITIES,
+  SYNC_ENTITY_NAMES,
   type SyncEntityName,
   type SyncedRow,
 } from '@wiretrail/core';
@@ -17,16 +22,24 @@ import { WriteQueue } from '../common/write-queue.js';
 import { SyncChange, SyncDevice } from './entities/sync-bookkeeping.entity.js';
 import { SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
 import { insertMany, selectMany } from './bulk-write.js';
-import { ScopeService } from './scope.service.js';
-import { SyncEngine, versionsOf } from './sync-engine.service.js';
+import { ScopeService, type TechnicianScope } from './scope.service.js';
+import { SERVER_DEVICE_IDS, SyncEngine, versionsOf } from './sync-engine.service.js';
 
 const HIDDEN = new Set(['organisationId', 'fieldMeta', 'deletedAt']);
+const NONE: ReadonlySet<string> = new Set();
 
 /** The row as a device pulls it: its fields, version and per-field versions, none of the server's bookkeeping. */
 export function toPulledRow(row: SyncRecord): SyncedRow {
-  const out: SyncedRow = { id: row.id, version: row.version, fieldVersions: versionsOf(row.fieldMeta ?? {}) };
+  return pulledRowWithout(row, NONE);
+}
+
+/** The row less the fields this device may not receive (a technician's phone gets no cost price). */
+function pulledRowWithout(row: SyncRecord, withheld: ReadonlySet<string>): SyncedRow {
+  const versions = versionsOf(row.fieldMeta ?? {});
+  for (const f of withheld) delete versions[f];
+  const out: SyncedRow = { id: row.id, version: row.version, fieldVersions: versions };
   for (const k in row) {
-    if (!Object.hasOwn(row, k) || HIDDEN.has(k) || k in out) continue;
+    if (!Object.hasOwn(row, k) || HIDDEN.has(k) || withheld.has(k) || k in out) continue;
     const v = row[k];
     out[k] = v instanceof Date ? v.toISOString() : v;
   }
@@ -58,6 +71,9 @@ export function toConflictReply(row: SyncRecord<'conflict'>): Conflict {
   };
 }
 
+/** Per entity, what a technician's phone never receives. */
+const WITHHELD_FROM_TECHNICIANS = new Map(SYNC_ENTITY_NAMES.map((e) => [e, new Set(officeOnlyFields(e))]));
+
 @Injectable()
 export class SyncService {
   constructor(
@@ -70,9 +86,35 @@ export class SyncService {
     if (mutations.length > MAX_PUSH_MUTATIONS) {
       throw new PayloadTooLargeException(`A push carries at most ${MAX_PUSH_MUTATIONS} mutations; send the rest in another batch.`);
     }
+    // A clock ahead of ours would win every later edit; the whole push waits, with its changes kept on the phone.
+    const now = Date.now();
+    for (const m of mutations) {
+      const problem = typeof m?.hlc === 'string' && isHlc(m.hlc) ? clockProblem(m.hlc, now, MAX_CLOCK_AHEAD_MS) : null;
+      if (problem) throw new UnprocessableEntityException(problem);
+    }
     const actor = { userId: user.id, organisationId: user.organisationId, role: user.role, deviceId };
-    const results = await this.queue.run((em) => this.engine.applyAll(em, actor, mutations));
+    const results = await this.queue.run(async (em) => {
+      const device = await this.claimDevice(em, user, deviceId);
+      return this.engine.applyAll(em, actor, mutations, { pulledUpTo: device?.checkpoint ?? 0 });
+    });
     return { results };
+  }
+
+  /**
+   * A device id belongs to the person who first used it: another's changes under it would pass for that person's
+   * own later edits. A device seen for the first time is recorded, so that nobody else can take its id.
+   */
+  private async claimDevice(em: EntityManager, user: AuthUser, deviceId: string): Promise<SyncDevice | null> {
+    const device = await em.findOneBy(SyncDevice, { deviceId });
+    if (SERVER_DEVICE_IDS.has(deviceId) || (device && (device.userId !== user.id || device.organisationId !== user.organisationId))) {
+      throw new ForbiddenException('This device id belongs to someone else. Sign out and in again so that the app makes one of its own.');
+    }
+    if (!device) {
+      await em.createQueryBuilder().insert().into(SyncDevice)
+        .values({ deviceId, organisationId: user.organisationId, userId: user.id, checkpoint: 0, scope: null, previousCheckpoint: null, previousScope: null, lastPullAt: null })
+        .orIgnore().execute();
+    }
+    return device;
   }
 
   /**
@@ -82,7 +124,7 @@ export class SyncService {
   async pull(user: AuthUser, deviceId: string, checkpoint: number, limit: number): Promise<PullResponse> {
     return this.queue.run(async (em) => {
       const take = Math.min(Math.max(limit, 1), MAX_PULL_LIMIT);
-      const device = await em.findOneBy(SyncDevice, { deviceId });
+      const device = await this.claimDevice(em, user, deviceId);
       const isTechnician = user.role === 'technician';
       const scope = isTechnician ? await this.scopes.technicianScope(em, user.organisationId, user.id) : null;
       const sitesNow = scope ? [...scope.siteIds].sort() : null;
@@ -137,13 +179,13 @@ export class SyncService {
         }
       }
 
-      const changes = await this.materialise(em, [...extra.filter((c) => c.seq <= next || c.evict), ...page]);
+      const changes = await this.materialise(em, [...extra.filter((c) => c.seq <= next || c.evict), ...page], scope, checkpoint);
       await this.rememberDevice(em, user, deviceId, checkpoint, sitesThen, next, sitesNow);
       return { changes, checkpoint: next, hasMore };
     });
   }
 
-  private async materialise(em: EntityManager, entries: SyncChange[]): Promise<Change[]> {
+  private async materialise(em: EntityManager, entries: SyncChange[], scope: TechnicianScope | null, checkpoint = 0): Promise<Change[]> {
     const byEntity = new Map<SyncEntityName, Set<string>>();
     for (const c of entries) {
       if (c.deleted) continue;
@@ -157,6 +199,7 @@ export class SyncService {
     for (const [entity, ids] of byEntity) {
       for (const r of await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', [...ids])) rows.set(`${entity}:${r.id}`, r);
     }
+    if (scope) entries = await this.withJobsOfVisits(em, entries, rows, scope, checkpoint);
     const seen = new Set<string>();
     const out: Change[] = [];
     // Later entries for the same row supersede earlier ones (an eviction after a catch-up, say).
@@ -164,11 +207,48 @@ export class SyncService {
       const key = `${c.entity}:${c.rowId}`;
       if (seen.has(key)) continue;
       seen.add(key);
-      const row = c.deleted ? null : (rows.get(key) ?? null);
-      const deleted = c.deleted || !row || row.deletedAt !== null;
-      out.push({ entity: c.entity, id: c.rowId, version: row?.version ?? c.seq, deleted, row: deleted ? null : toPulledRow(row!) });
+      const entity = c.entity;
+      const row = c.deleted || (scope && !this.technicianSees(scope, entity, c.rowId)) ? null : (rows.get(key) ?? null);
+      const deleted = !row || row.deletedAt !== null;
+      const withheld = scope ? WITHHELD_FROM_TECHNICIANS.get(entity) : undefined;
+      out.push({ entity, id: c.rowId, version: row?.version ?? c.seq, deleted, row: deleted ? null : pulledRowWithout(row!, withheld ?? NONE) });
     }
     return out.reverse();
+  }
+
+  /**
+   * A technician's phone gets the visits they are on and those visits' jobs, not every visit and job at the site:
+   * another technician's signed visit or an enquiry with the customer's details is not theirs to carry about.
+   */
+  private technicianSees(scope: TechnicianScope, entity: SyncEntityName, id: string): boolean {
+    if (entity === 'visit') return scope.ownVisitIds.has(id);
+    if (entity === 'job') return scope.jobIds.has(id);
+    return true;
+  }
+
+  /**
+   * A visit newly theirs at a site already on the phone brings its job, which has not changed and would not come
+   * otherwise; a visit no longer theirs takes its job away (as a deletion) unless another of theirs needs it.
+   */
+  private async withJobsOfVisits(
+    em: EntityManager, entries: SyncChange[], rows: Map<string, SyncRecord>, scope: TechnicianScope, checkpoint: number,
+  ): Promise<SyncChange[]> {
+    const listed = new Set(entries.filter((c) => c.entity === 'job').map((c) => c.rowId));
+    const wanted = new Set<string>();
+    const gone: SyncChange[] = [];
+    for (const c of entries) {
+      const visit = c.entity === 'visit' ? rows.get(`visit:${c.rowId}`) : undefined;
+      const jobId = visit?.jobId as string | undefined;
+      // Only a visit whose people or job changed since the device's checkpoint can have changed what it may see.
+      const moved = Math.max(visit?.fieldMeta?.technicianIds?.v ?? 0, visit?.fieldMeta?.jobId?.v ?? 0) > checkpoint;
+      if (!jobId || listed.has(jobId) || !moved) continue;
+      if (scope.jobIds.has(jobId)) wanted.add(jobId);
+      else gone.push(Object.assign(new SyncChange(), { entity: 'job', rowId: jobId, organisationId: c.organisationId, seq: c.seq, siteId: c.siteId, deleted: true }));
+    }
+    if (!wanted.size) return gone.length ? [...entries, ...gone] : entries;
+    const jobs = await em.find(SyncChange, { where: { entity: 'job', rowId: In([...wanted]) } });
+    for (const r of await selectMany<SyncRecord>(em, SYNC_SCHEMAS.job, 'id', [...wanted])) rows.set(`job:${r.id}`, r);
+    return [...entries, ...gone, ...jobs];
   }
 
   private async rememberDevice(

@@ -3,6 +3,7 @@
  * and the app (local tables). Field names are the product's camelCase names.
  */
 import { INSTALLATION_METHODS, POINT_LOCATIONS, RCD_CIRCUIT_KINDS } from '../electrical/before-work-choices.js';
+import { isBlankText } from '../text/typed-text.js';
 import type { RecordedWiremap } from '../cabling/cable-test.js';
 
 export const SYNC_ENTITY_NAMES = [
@@ -41,6 +42,8 @@ export interface FieldSpec {
   readonly required?: boolean;
   /** A technician may set this field (within rows they may write). */
   readonly technician?: boolean;
+  /** Never sent to a technician's phone: the office's business, not what work on site needs (a cost price). */
+  readonly officeOnly?: boolean;
 }
 
 /**
@@ -287,7 +290,7 @@ const REGISTRY = {
     name: 'priceItem', table: 'price_item', technicianWrite: 'none', technicianVisible: true, siteField: null, visitField: null, organisationWide: true,
     fields: {
       name: office(str(), true), unit: office(str(20), true), category: office(str(60)), code: office(str(40)),
-      costMinor: office(int(0, 100_000_000)), sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office(bool),
+      costMinor: { ...office(int(0, 100_000_000)), officeOnly: true }, sellMinor: office(int(0, 100_000_000)), vatRateCode: office(str(20)), active: office(bool),
     },
   },
   materialLine: {
@@ -342,6 +345,11 @@ export type RowFieldsOf<E extends SyncEntityName, F = EntityFields<E>> = Flat<
 >;
 /** A row of a synced entity, as both sides hold it: its id and the registry's fields. */
 export type RowOf<E extends SyncEntityName> = Flat<{ id: string } & RowFieldsOf<E>>;
+/** The fields of an entity that a technician's phone never receives. */
+export function officeOnlyFields(entity: SyncEntityName): string[] {
+  return Object.entries(SYNC_ENTITIES[entity].fields).filter(([, f]) => (f as FieldSpec).officeOnly).map(([name]) => name);
+}
+
 /** A row that may not yet carry its optional fields (a row written on a phone, a draft). */
 export type DraftRowOf<E extends SyncEntityName> = Flat<
   { id: string } & Pick<RowFieldsOf<E>, RequiredFieldName<EntityFields<E>> & keyof RowFieldsOf<E>> &
@@ -368,7 +376,8 @@ export function fieldError(entity: SyncEntityName, field: string, value: unknown
       if (value.length > t.max) return `${name} must be at most ${t.max} characters`;
       // No database keeps it faithfully (PostgreSQL refuses it in text), and nobody types it.
       if (value.includes('\u0000')) return `${name} must not contain the NUL character (U+0000)`;
-      if (spec.required && value.trim() === '') return `${name} must not be empty`;
+      // A name of no-break, em and zero-width spaces is as empty as no name.
+      if (spec.required && isBlankText(value)) return `${name} must not be empty`;
       return null;
     case 'number':
     case 'integer':

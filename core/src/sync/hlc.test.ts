@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { compareHlc, formatHlc, MAX_CLOCK_DRIFT_MS, parseHlc, receiveHlc, tickHlc } from './hlc.js';
+import { clockProblem, compareHlc, EARLIEST_HLC_MS, formatHlc, MAX_CLOCK_AHEAD_MS, MAX_CLOCK_DRIFT_MS, parseHlc, receiveHlc, tickHlc } from './hlc.js';
 
 describe('hybrid logical clock', () => {
   it('formats as time-counter-device and parses back', () => {
@@ -45,5 +45,24 @@ describe('hybrid logical clock', () => {
       formatHlc({ ms: t, counter: 10, deviceId: 'a' }),
     ];
     expect([...list].sort(compareHlc)).toEqual([list[1], list[2], list[3], list[0]]);
+  });
+
+  it('takes only real dates from 2020 on', () => {
+    expect(parseHlc('2026-02-31T10:00:00.000Z-0000-d7f3')).toBeNull();
+    expect(parseHlc('2026-13-01T10:00:00.000Z-0000-d7f3')).toBeNull();
+    expect(parseHlc('0000-01-01T00:00:00.000Z-0000-d7f3')).toBeNull();
+    expect(parseHlc('2019-12-31T23:59:59.999Z-0000-d7f3')).toBeNull();
+    expect(parseHlc(formatHlc({ ms: EARLIEST_HLC_MS, counter: 0, deviceId: 'd7f3' }))?.ms).toBe(EARLIEST_HLC_MS);
+    expect(parseHlc('2028-02-29T10:00:00.000Z-0000-d7f3')).not.toBeNull();
+  });
+
+  it('tells a phone whose clock runs ahead of the receiver to set it, and lets a few seconds pass', () => {
+    const now = Date.parse('2026-12-05T12:00:00.000Z');
+    const at = (ms: number) => formatHlc({ ms, counter: 0, deviceId: 'd7f3' });
+    expect(clockProblem(at(now + 5_000), now, MAX_CLOCK_AHEAD_MS)).toBeNull();
+    expect(clockProblem(at(now - 30 * 86_400_000), now, MAX_CLOCK_AHEAD_MS)).toBeNull();
+    expect(clockProblem(at(now + MAX_CLOCK_AHEAD_MS + 1), now, MAX_CLOCK_AHEAD_MS)).toMatch(/clock is ahead .* Set the phone's date and time to automatic/);
+    expect(clockProblem('9999-12-31T23:59:59.999Z-0000-d7f3', now, MAX_CLOCK_AHEAD_MS)).toMatch(/clock is ahead/);
+    expect(clockProblem('2026-02-31T10:00:00.000Z-0000-d7f3', now, MAX_CLOCK_AHEAD_MS)).toMatch(/real date/);
   });
 });

@@ -13,6 +13,16 @@ const PATTERN = /^(\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z)-([0-9a-f]{4})-([
 const MAX_COUNTER = 0xffff;
 /** A device clock this far ahead of the receiver is not believed. */
 export const MAX_CLOCK_DRIFT_MS = 24 * 60 * 60 * 1000;
+/**
+ * No change can be older than the product: a clock before this is a device whose date was never set (or a forged
+ * one), and it would lose every merge it took part in.
+ */
+/**
+ * A pushing device's clock may run this far ahead of the server's before its changes are refused until its clock
+ * is put right. Phones that set their time from the network are within seconds (product's own allowance).
+ */
+export const MAX_CLOCK_AHEAD_MS = 5 * 60 * 1000;
+export const EARLIEST_HLC_MS = Date.UTC(2020, 0, 1);
 
 export function formatHlc({ ms, counter, deviceId }: Hlc): string {
   return `${new Date(ms).toISOString()}-${counter.toString(16).padStart(4, '0')}-${deviceId}`;
@@ -22,11 +32,26 @@ export function parseHlc(value: string): Hlc | null {
   const m = PATTERN.exec(value);
   if (!m) return null;
   const ms = Date.parse(m[1]!);
-  return Number.isFinite(ms) ? { ms, counter: parseInt(m[2]!, 16), deviceId: m[3]! } : null;
+  // Date.parse rolls 2026-02-31 over into March; a real date prints back exactly as it was written.
+  if (!Number.isFinite(ms) || ms < EARLIEST_HLC_MS || new Date(ms).toISOString() !== m[1]) return null;
+  return { ms, counter: parseInt(m[2]!, 16), deviceId: m[3]! };
 }
 
 export function isHlc(value: unknown): value is string {
   return typeof value === 'string' && parseHlc(value) !== null;
+}
+
+/**
+ * Why a device's clock cannot be taken, or null: a change stamped further ahead of the receiver's time than
+ * `maxAheadMs` would win every later concurrent edit until the world caught up with it.
+ */
+export function clockProblem(value: unknown, nowMs: number, maxAheadMs: number): string | null {
+  const hlc = typeof value === 'string' ? parseHlc(value) : null;
+  if (!hlc) return 'hlc must look like 2026-03-14T09:26:53.589Z-0001-<deviceId>, with a real date from 2020 on.';
+  if (hlc.ms > nowMs + maxAheadMs) {
+    return `This phone's clock is ahead of the office system's by more than ${Math.round(maxAheadMs / 60_000)} minutes. Set the phone's date and time to automatic, then sync again.`;
+  }
+  return null;
 }
 
 /** Orders two clocks; equal time and counter fall back to the device id. */

@@ -129,7 +129,10 @@ export interface PhotoUploadRow {
 }
 
 export interface MetaValues {
+  /** The one device id from before ids were per person (see lib/sync/device-id.ts). */
   deviceId: string;
+  /** Per person signed in on this phone, the device id they sync under. */
+  deviceIds: Record<string, string>;
   hlc: string;
   checkpoint: number;
   lastSyncAt: string;

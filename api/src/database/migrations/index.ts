@@ -9,6 +9,7 @@ import { Billing1796223023465 } from './1796223023465-Billing.js';
 import { DocumentRevisions1796230000000 } from './1796230000000-DocumentRevisions.js';
 import { ChecksBeforeWork1796232000000 } from './1796232000000-ChecksBeforeWork.js';
 import { CertificateJudgment1796231000000 } from './1796231000000-CertificateJudgment.js';
+import { PhotoSenders1796430000000 } from './1796430000000-PhotoSenders.js';
 import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefunds.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
@@ -24,5 +25,6 @@ export const MIGRATIONS = [
   DocumentRevisions1796230000000,
   CertificateJudgment1796231000000,
   ChecksBeforeWork1796232000000,
+  PhotoSenders1796430000000,
   AttemptsAndRefunds1796481200000,
 ];

@@ -1,19 +1,20 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { Transform } from 'class-transformer';
 import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
 import { type Role, ROLES } from '@wiretrail/core';
+import { NormalisedEmail, NormalisedText, SingleScriptEmail, VisibleText } from '../../common/validators/typed-text.js';
 
 export class CreateUserDto {
   @ApiProperty({ example: 'tech3@larkfield.example' })
-  @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
+  @NormalisedEmail()
   @IsEmail({ require_tld: false }, { message: 'email must be an e-mail address' })
+  @SingleScriptEmail()
   @MaxLength(254)
   email: string;
 
   @ApiProperty({ example: 'Priya Ansell' })
-  @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
+  @NormalisedText()
   @IsString()
-  @MinLength(1, { message: 'name must not be empty' })
+  @VisibleText()
   @MaxLength(200)
   name: string;
 

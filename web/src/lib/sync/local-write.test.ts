@@ -33,7 +33,8 @@ describe('local writes', () => {
       ['note', second, 0, USER.id],
     ]);
     expect(outbox[0]!.set).toEqual({ visitId: VISIT, siteId: SITE, text: 'Isolated at the consumer unit, proved dead' });
-    const deviceId = await db.getMeta('deviceId');
+    const deviceId = (await db.getMeta('deviceIds'))?.[USER.id];
+    expect(deviceId).toEqual(expect.any(String));
     expect(parseHlc(outbox[0]!.hlc)?.deviceId).toBe(deviceId);
     expect(compareHlc(outbox[0]!.hlc, outbox[1]!.hlc)).toBe(-1);
     expect(await db.getMeta('hlc')).toBe(outbox[1]!.hlc);

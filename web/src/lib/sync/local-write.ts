@@ -1,6 +1,7 @@
 import { type FieldValue, fieldError, formatHlc, parseHlc, SYNC_ENTITIES, type SyncEntityName, tickHlc } from '@wiretrail/core';
 import type { Table, Transaction } from 'dexie';
-import { v4 as uuidv4, v7 as uuidv7 } from 'uuid';
+import { v7 as uuidv7 } from 'uuid';
+import { deviceIdFor } from './device-id';
 import { db, type LocalRow, type OutboxEntry } from '@/lib/db';
 import { getSession } from '@/lib/session';
 
@@ -81,13 +82,9 @@ function validate(op: Op, role: string): void {
   }
 }
 
-async function nextHlc(tx: Transaction): Promise<string> {
+async function nextHlc(tx: Transaction, userId: string): Promise<string> {
   const meta = tx.table('meta');
-  let deviceId = (await meta.get('deviceId'))?.value as string | undefined;
-  if (!deviceId) {
-    deviceId = uuidv4();
-    await meta.put({ key: 'deviceId', value: deviceId });
-  }
+  const deviceId = await deviceIdFor(meta, userId);
   const last = parseHlc(((await meta.get('hlc'))?.value as string | undefined) ?? '');
   const hlc = formatHlc(tickHlc(last, Date.now(), deviceId));
   await meta.put({ key: 'hlc', value: hlc });
@@ -162,7 +159,7 @@ async function apply(tx: Transaction, op: Op, userId: string): Promise<void> {
     entry.delete = true;
     entry.restore = existing;
   }
-  entry.hlc = await nextHlc(tx);
+  entry.hlc = await nextHlc(tx, userId);
   await tx.table('outbox').add(entry);
 }
 

@@ -1,5 +1,6 @@
 import 'fake-indexeddb/auto';
 import type { Change, FieldValue, Mutation, MutationResult, PullResponse, PushRequest, PushResponse, SyncedRow, SyncEntityName } from '@wiretrail/core';
+import { MAX_CLOCK_AHEAD_MS, parseHlc } from '@wiretrail/core';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { ApiError, OfflineError } from '@/lib/api-client';
 import { db } from '@/lib/db';
@@ -284,6 +285,60 @@ describe('sync engine: push', () => {
 
     await expect(makeEngine().syncNow()).resolves.toBe('done');
     expect(server.row('note', id)?.text).toBe('kept for later');
+  });
+
+  it('shows the office system’s word that the phone’s clock is ahead, keeps the changes, and restamps them once the clock is right', async () => {
+    const realNow = Date.now;
+    const ahead = realNow() + 3 * 86_400_000;
+    Date.now = () => ahead;
+    let id: string;
+    try {
+      id = await note('Written while the phone thought it was Thursday');
+    } finally {
+      Date.now = realNow;
+    }
+    const clockRefusal = "This phone's clock is ahead of the office system's by more than 5 minutes. Set the phone's date and time to automatic, then sync again.";
+    const phoneClock = { now: ahead };
+    const transport: SyncTransport = {
+      push: async (request) => {
+        const far = request.mutations.some((m) => Date.parse(m.hlc.slice(0, 24)) > realNow() + MAX_CLOCK_AHEAD_MS);
+        if (far) throw new ApiError(422, [clockRefusal]);
+        return server.push(request);
+      },
+      pull: (p) => server.pull(p),
+    };
+    const engine = (now: () => number) => new SyncEngine({ db, transport, userId: USER.id, now, timers: { set: (run, ms) => scheduled.push({ run, ms }), clear: () => undefined } });
+    await expect(engine(() => phoneClock.now).syncNow()).resolves.toBe('failed');
+    expect(await db.getMeta('lastError')).toContain(clockRefusal);
+    expect(await db.outbox.count()).toBe(1);
+
+    // The clock is put right: the change goes with a clock of now, and later ones follow it.
+    await expect(engine(() => realNow()).syncNow()).resolves.toBe('done');
+    expect(server.row('note', id)?.text).toBe('Written while the phone thought it was Thursday');
+    const sent = server.pushes.at(-1)!.mutations[0]!;
+    expect(Date.parse(sent.hlc.slice(0, 24))).toBeLessThanOrEqual(realNow());
+    expect(Date.parse((await db.getMeta('hlc'))!.slice(0, 24))).toBeLessThanOrEqual(realNow());
+  });
+
+  it('syncs each person on a shared phone under a device id of their own', async () => {
+    await note('First person');
+    await makeEngine().syncNow();
+    const firstDevice = server.pushes[0]!.deviceId;
+    expect(parseHlc(server.pushes[0]!.mutations[0]!.hlc)?.deviceId).toBe(firstDevice);
+
+    const OTHER = { ...USER, id: 'u-tech-2', email: 'tech2@larkfield.example' };
+    setSession({ accessToken: 'a', refreshToken: 'r', user: OTHER });
+    await note('Second person');
+    await new SyncEngine({ db, transport: server, userId: OTHER.id, timers: { set: () => undefined, clear: () => undefined } }).syncNow();
+    const secondPush = server.pushes.at(-1)!;
+    expect(secondPush.deviceId).not.toBe(firstDevice);
+    expect(parseHlc(secondPush.mutations[0]!.hlc)?.deviceId).toBe(secondPush.deviceId);
+
+    // The first person comes back to the same id.
+    setSession({ accessToken: 'a', refreshToken: 'r', user: USER });
+    await note('First person again');
+    await makeEngine().syncNow();
+    expect(server.pushes.at(-1)!.deviceId).toBe(firstDevice);
   });
 
   it('backs off up to a few minutes', () => {

@@ -1,6 +1,9 @@
 import {
   type Change,
   type FieldValue,
+  formatHlc,
+  type Hlc,
+  MAX_CLOCK_AHEAD_MS,
   MAX_PULL_LIMIT,
   MAX_PUSH_MUTATIONS,
   type Mutation,
@@ -8,13 +11,15 @@ import {
   type PullResponse,
   type PushRequest,
   type PushResponse,
+  parseHlc,
   SYNC_ENTITY_NAMES,
   type SyncEntityName,
+  tickHlc,
 } from '@wiretrail/core';
 import type { Table } from 'dexie';
-import { v4 as uuidv4 } from 'uuid';
 import { ApiError, OfflineError } from '@/lib/api-client';
 import type { LocalRow, OutboxEntry, WiretrailDb } from '@/lib/db';
+import { deviceIdFor } from './device-id';
 import { setEngineState } from './sync-state';
 
 /** How the engine reaches the server; tests give it an in-memory server instead. */
@@ -142,6 +147,7 @@ export class SyncEngine {
       await this.prepareUser();
       const deviceId = await this.deviceId();
       const more = await this.beforePush();
+      await this.restampClocksAhead(deviceId);
       await this.pushAll(deviceId);
       await this.pullAll(deviceId);
       await this.db.meta.bulkPut([
@@ -201,12 +207,28 @@ export class SyncEngine {
 
   private async deviceId(): Promise<string> {
     const { db } = this;
-    return db.transaction('rw', db.meta, async () => {
-      const existing = await db.getMeta('deviceId');
-      if (existing) return existing;
-      const id = uuidv4();
-      await db.setMeta('deviceId', id);
-      return id;
+    return db.transaction('rw', db.meta, () => deviceIdFor(db.meta, this.userId));
+  }
+
+  /**
+   * Changes stamped while this phone's clock ran ahead would be refused (or, worse, win every later edit) once the
+   * clock is put right: they are stamped again from now, in the order they were made, and the clock starts over.
+   */
+  private async restampClocksAhead(deviceId: string): Promise<void> {
+    const { db } = this;
+    const now = this.now();
+    const ahead = (hlc: string | undefined) => (parseHlc(hlc ?? '')?.ms ?? 0) > now + MAX_CLOCK_AHEAD_MS;
+    await db.transaction('rw', db.outbox, db.meta, async () => {
+      const entries = await db.outbox.orderBy('seq').filter((e) => e.userId === this.userId).toArray();
+      const last = await db.getMeta('hlc');
+      if (!ahead(last) && !entries.some((e) => ahead(e.hlc))) return;
+      let clock: Hlc | null = null;
+      for (const e of entries) {
+        clock = tickHlc(clock, now, deviceId);
+        if (ahead(e.hlc)) await db.outbox.update(e.seq!, { hlc: formatHlc(clock) });
+      }
+      const stamped = tickHlc(clock, now, deviceId);
+      await db.setMeta('hlc', formatHlc(stamped));
     });
   }
 

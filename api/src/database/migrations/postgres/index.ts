@@ -2,6 +2,7 @@ import { PostgresSchema1796424218561 } from './1796424218561-PostgresSchema.js';
 import { PostgresBilling1796424218562 } from './1796424218562-PostgresBilling.js';
 import { PostgresDocumentRevisions1796430000000 } from './1796430000000-PostgresDocumentRevisions.js';
 import { PostgresChecksBeforeWork1796432000000 } from './1796432000000-PostgresChecksBeforeWork.js';
+import { PostgresPhotoSenders1796430000001 } from './1796430000001-PostgresPhotoSenders.js';
 import { PostgresCertificateJudgment1796431000000 } from './1796431000000-PostgresCertificateJudgment.js';
 import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-PostgresAttemptsAndRefunds.js';
 
@@ -10,6 +11,7 @@ export const POSTGRES_MIGRATIONS = [
   PostgresSchema1796424218561,
   PostgresBilling1796424218562,
   PostgresDocumentRevisions1796430000000,
+  PostgresPhotoSenders1796430000001,
   PostgresCertificateJudgment1796431000000,
   PostgresChecksBeforeWork1796432000000,
   PostgresAttemptsAndRefunds1796481200001,

@@ -61,6 +61,16 @@ describe('the cable schedule CSV', () => {
     expect(col('To position')).toBe(`'=HYPERLINK("http://example.com")`);
   });
 
+  it('quotes a formula hidden behind leading spaces or written in full-width characters', () => {
+    const sneaky = [' =1+1', '\u00a0\u00a0@SUM(A1)', '\u3000+cmd', '\uff1d1+1', '\uff0b1', '\uff20A1', ' \uff1dHYPERLINK("http://example.com")'];
+    const rows = parse(cableScheduleCsv(sneaky.map((text) => ({ ...coax, endBDescription: text }))));
+    const col = CSV_COLUMNS.indexOf('To position');
+    expect(rows.slice(1).map((r) => r[col])).toEqual(sneaky.map((text) => `'${text}`));
+    // Ordinary text that merely contains these characters stays as it was.
+    const plain = parse(cableScheduleCsv([{ ...coax, endBDescription: 'Socket 2 = spare, +1 later' }]))[1]!;
+    expect(plain[col]).toBe('Socket 2 = spare, +1 later');
+  });
+
   it('starts with a byte-order mark and ends lines as spreadsheets expect', () => {
     const csv = cableScheduleCsv([good]);
     expect(csv.startsWith('\uFEFFLabel,From area,')).toBe(true);

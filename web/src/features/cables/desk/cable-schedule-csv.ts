@@ -10,6 +10,13 @@ export const CSV_COLUMNS = [
   'Length (m)', 'Link', 'Wiremap', 'Length check', 'Verdict', 'Status', 'Last tested',
 ] as const;
 
+/**
+ * A cell a spreadsheet would take as a formula: one starting with = + - @ (or tab or carriage return), also after
+ * leading spaces (a no-break or ideographic space too), or in the full-width forms some spreadsheets read as the
+ * same characters.
+ */
+export const FORMULA_START = /^[\s\u00a0\u3000]*[=+\-@\t\r\uff1d\uff0b\uff0d\uff20]/u;
+
 const LINK_WORDS: Record<string, string> = { 'permanent-link': 'Permanent link', channel: 'Channel' };
 
 function lengthCheck(run: CableRun): string {
@@ -42,7 +49,7 @@ export function cableScheduleCsv(runs: readonly CableRun[]): string {
     cableStatusWords(r.status),
     r.testedAt ?? '',
   ]);
-  return `\uFEFF${Papa.unparse({ fields: [...CSV_COLUMNS], data }, { escapeFormulae: true, newline: '\r\n' })}`;
+  return `\uFEFF${Papa.unparse({ fields: [...CSV_COLUMNS], data }, { escapeFormulae: FORMULA_START, newline: '\r\n' })}`;
 }
 
 const slug = (text: string) =>
