@@ -1,4 +1,5 @@
 import { Injectable } from '@nestjs/common';
+import { checksBeforeWork, DEFAULT_RULE_SET } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { circuitLabel, nameOf, rowsById } from '../records/annotations.js';
@@ -22,13 +23,14 @@ export class PointChangesService extends RecordsService<ListPointChangesQueryDto
     };
   }
 
-  /** Each change with the names of its circuit and areas, and when its visit was planned. */
+  /** Each change with the names of its circuit and areas, when its visit was planned, and the server's own checks before the work. */
   protected async annotate(em: EntityManager, user: AuthUser, rows: SyncRecord<'pointChange'>[]): Promise<OfficeRow[]> {
     const org = user.organisationId;
-    const [areas, circuits, visits] = await inTurn(
+    const [areas, circuits, visits, sites] = await inTurn(
       () => rowsById(em, org, 'area', rows.flatMap((r) => [r.fromAreaId, r.toAreaId])),
       () => rowsById(em, org, 'circuit', rows.map((r) => r.circuitId)),
       () => rowsById(em, org, 'visit', rows.map((r) => r.visitId)),
+      () => rowsById(em, org, 'site', rows.map((r) => r.siteId)),
     );
     const boards = await rowsById(em, org, 'board', [...circuits.values()].map((c) => c.boardId));
     return rows.map((r) => {
@@ -39,6 +41,7 @@ export class PointChangesService extends RecordsService<ListPointChangesQueryDto
         toAreaName: nameOf(areas.get(r.toAreaId)),
         circuitLabel: circuitLabel(circuit, boards.get(circuit?.boardId)),
         visitPlannedStart: visits.get(r.visitId)?.plannedStart ?? null,
+        beforeWork: checksBeforeWork({ point: r, circuit, site: sites.get(r.siteId) }, DEFAULT_RULE_SET),
       };
     });
   }

@@ -29,6 +29,7 @@ export function circuitUnderTest(circuit: LooseRowOf<'circuit'>): CircuitUnderTe
     rcdType: stringOf(circuit.rcdType),
     liveCsaMm2: numberOf(circuit.liveCsaMm2),
     cpcCsaMm2: numberOf(circuit.cpcCsaMm2),
+    lengthM: numberOf(circuit.lengthM),
     faultProtection: stringOf(circuit.faultProtection),
   };
 }

@@ -53,6 +53,20 @@ describe('assessCircuitTest', () => {
     expect(result.lines.find((l) => l.key === 'zs')!.result.limit).toBe(2.18);
   });
 
+  it('judges a radial’s R1+R2 against its cable once the length is known: 5 Ω on 20 m of 2.5/1.5 mm² is no pass', () => {
+    // 20 m × 19.51 mΩ/m = 0.39 Ω (IEC 60228:2004 Tables 1–2, C1; D); the band is common trade practice
+    const radial: CircuitUnderTest = { kind: 'radial', deviceType: 'B', deviceRatingA: 16, liveCsaMm2: 2.5, cpcCsaMm2: 1.5, lengthM: 20 };
+    const readings = { irLiveLiveMOhm: 150, irLiveEarthMOhm: 150, irTestVoltageV: 500, polarity: 'correct', zsOhm: 0.7 } as const;
+    const far = assessCircuitTest({ circuit: radial, readings: { ...readings, r1r2Ohm: 5 } });
+    const line = far.lines.find((l) => l.key === 'r1r2');
+    expect(line?.result.verdict).toBe('check');
+    expect(line?.result.note).toMatch(/0\.39 Ω expected/);
+    expect(far.verdict).not.toBe('pass');
+    expect(assessCircuitTest({ circuit: radial, readings: { ...readings, r1r2Ohm: 0.41 } }).verdict).toBe('pass');
+    // Without the length, any finite reading still shows the cpc is continuous (Reg 643.2.1)
+    expect(assessCircuitTest({ circuit: { ...radial, lengthM: null }, readings: { ...readings, r1r2Ohm: 5 } }).lines.find((l) => l.key === 'r1r2')?.result.verdict).toBe('pass');
+  });
+
   it('fails insulation below 1.0 MΩ at 500 V (BS 7671:2018+A2:2022 Table 64)', () => {
     const result = assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, irLiveEarthMOhm: 0.8 } });
     expect(result.failing.map((l) => l.key)).toEqual(['ir-live-earth']);

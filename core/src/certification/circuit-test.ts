@@ -10,6 +10,7 @@ import { checkZs } from '../electrical/earth-fault-loop.js';
 import { checkInsulation } from '../electrical/insulation.js';
 import { checkPolarity, checkR1R2, type PolarityResult } from '../electrical/protective-conductor.js';
 import { checkRcd, maxZsForRcd } from '../electrical/rcd.js';
+import { r1r2Expected } from '../electrical/expected-r1r2.js';
 import { checkRing, type RingCheck } from '../electrical/ring-final-circuit.js';
 
 /** The circuit as recorded (any field may still be unknown). */
@@ -22,6 +23,8 @@ export interface CircuitUnderTest {
   readonly rcdType?: string | null;
   readonly liveCsaMm2?: number | null;
   readonly cpcCsaMm2?: number | null;
+  /** One-way cable length to the furthest point (m): a radial's R1+R2 is judged against the cable's own resistance. */
+  readonly lengthM?: number | null;
   /** 'rcd' where the circuit relies on its RCD for fault protection (Table 41.5); otherwise its overcurrent device. */
   readonly faultProtection?: string | null;
 }
@@ -133,12 +136,21 @@ export function assessCircuitTest(input: CircuitTestInput, rules: RuleSet = DEFA
     }
   }
 
-  // Either reading shows the protective conductor continuous; R1+R2 is judged when both were taken.
+  // Either reading shows the protective conductor continuous; R1+R2 is judged when both were taken. A radial whose
+  // cable is known is judged against the cable's own R1+R2, so a wildly high reading is not passed.
   if (!given(r.r1r2Ohm) && given(r.r2LeadOhm)) {
     add('r1r2', 'R2 (protective conductor continuity, long lead)', ['r2LeadOhm'], true, guarded(() => r2LeadLine(r.r2LeadOhm, rules), rules.circuitTests.protectiveConductorSource, 'Ω'));
   } else {
+    const radialCable = circuit.kind !== 'ring' && given(circuit.lengthM) && given(circuit.liveCsaMm2) && given(circuit.cpcCsaMm2);
     add('r1r2', 'R1+R2 (protective conductor continuity)', ['r1r2Ohm'], true,
-      guarded(() => checkR1R2({ measured: r.r1r2Ohm, expectedForRing: ring?.expectedR1R2 ?? null }, rules), rules.circuitTests.protectiveConductorSource, 'Ω'));
+      guarded(
+        () =>
+          radialCable
+            ? r1r2Expected({ liveCsaMm2: circuit.liveCsaMm2!, cpcCsaMm2: circuit.cpcCsaMm2!, lengthM: circuit.lengthM!, measured: r.r1r2Ohm }, rules)
+            : checkR1R2({ measured: r.r1r2Ohm, expectedForRing: ring?.expectedR1R2 ?? null }, rules),
+        rules.circuitTests.protectiveConductorSource,
+        'Ω',
+      ));
   }
 
   for (const [key, label, field] of [

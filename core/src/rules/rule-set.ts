@@ -4,6 +4,14 @@
  * is a new object, not a change to callers.
  */
 
+import type {
+  CpcArrangement,
+  InstallationMethodTable,
+  KValueTable,
+  RcdRequirementSources,
+  SpurLimits,
+} from './uk-bs7671-before-work.js';
+
 /** One published figure with where it comes from. */
 export interface SourcedLimit {
   readonly value: number;
@@ -154,6 +162,18 @@ export interface RuleSet {
     readonly wiremapSource: string;
     /** m/s, the value used in every TDR length calculation. */
     readonly speedOfLight: SourcedLimit;
+  };
+
+  /** What is checked before breaking into a circuit. */
+  readonly beforeWork: {
+    readonly cableCapacity: InstallationMethodTable;
+    readonly semiEnclosedFuseFactor: SourcedLimit;
+    readonly cpcK: Readonly<Record<CpcArrangement, KValueTable>>;
+    readonly adiabaticSource: string;
+    readonly rcdRequirements: RcdRequirementSources;
+    readonly spurs: SpurLimits;
+    /** Conductor temperature (°C) a predicted Zs is worked out at unless told otherwise: 70 °C thermoplastic. */
+    readonly operatingTempC: SourcedLimit;
   };
 }
 

@@ -5,6 +5,14 @@
  * Values are taken from public sources that quote the standards. An Amendment 4 (2026) exists and its
  * tables have not been checked: a rule set for it should be a new object beside this one.
  */
+import {
+  ADIABATIC_SOURCE,
+  BS3036_FACTOR,
+  CPC_K_VALUES,
+  FLAT_TWIN_AND_EARTH_CAPACITY,
+  RCD_REQUIREMENT_SOURCES,
+  RING_SPUR_LIMITS,
+} from './uk-bs7671-before-work.js';
 import { freezeRuleSet, type RuleSet, type SourcedLimit, type SourcedTable, type ZsTable } from './rule-set.js';
 
 const BS7671 = 'BS 7671:2018+A2:2022';
@@ -390,6 +398,19 @@ export const UK_BS7671_2018_A2_2022: RuleSet = freezeRuleSet({
     pinAssignmentSource: 'ANSI/TIA-568 T568A and T568B pin assignments',
     wiremapSource: 'ANSI/TIA-568 field test wiremap',
     speedOfLight: SPEED_OF_LIGHT_M_PER_S,
+  },
+  beforeWork: {
+    cableCapacity: FLAT_TWIN_AND_EARTH_CAPACITY,
+    semiEnclosedFuseFactor: BS3036_FACTOR,
+    cpcK: CPC_K_VALUES,
+    adiabaticSource: ADIABATIC_SOURCE,
+    rcdRequirements: RCD_REQUIREMENT_SOURCES,
+    spurs: RING_SPUR_LIMITS,
+    operatingTempC: {
+      value: 70,
+      unit: '°C',
+      source: `${BS7671} Table 4D5 (maximum operating temperature of 70 °C thermoplastic cable)`,
+    },
   },
 });
 

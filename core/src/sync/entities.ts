@@ -2,6 +2,7 @@
  * The synced entities of Wiretrail and their fields, shared by the server (validation, merge policy, scope)
  * and the app (local tables). Field names are the product's camelCase names.
  */
+import { INSTALLATION_METHODS, POINT_LOCATIONS, RCD_CIRCUIT_KINDS } from '../electrical/before-work-choices.js';
 import { isBlankText } from '../text/typed-text.js';
 import type { RecordedWiremap } from '../cabling/cable-test.js';
 
@@ -186,6 +187,8 @@ const REGISTRY = {
       siteId: seen(ref('site'), true), boardId: seen(ref('board'), true), number: seen(str(20), true), description: seen(str(500)),
       kind: seen(oneOf(...CIRCUIT_KINDS)), deviceType: seen(oneOf(...PROTECTIVE_DEVICES)), deviceRatingA: seen(num(0.5, 1000)),
       rcdRatingMa: seen(num(1, 3000)), rcdType: seen(str(20)), liveCsaMm2: seen(num(0.5, 400)), cpcCsaMm2: seen(num(0.5, 400)),
+      // One-way cable length to the furthest point: what a radial's R1+R2 should read follows from it.
+      lengthM: seen(num(0, 10_000)),
       // What a certificate states of the circuit beyond what its tests need: the devices' product standards, the
       // RCD's rated current, an AFDD where one is fitted, how the cable is installed and what it serves.
       deviceStandard: seen(str(40)), rcdStandard: seen(str(40)), rcdRatedCurrentA: seen(num(1, 1000)), afddStandard: seen(str(40)),
@@ -260,6 +263,15 @@ const REGISTRY = {
       beforeR1Ohm: seen(num(0, 100)), beforeRnOhm: seen(num(0, 100)), beforeR2Ohm: seen(num(0, 100)),
       // A new concealed route drawn on the wall: the safe-zone check's input (wall, accessory, route, depth, RCD).
       concealedRoute: seen(json),
+      // Checks before the work. What the point supplies and where, for the RCD requirement; the R1+R2 where a spur or
+      // radial joins (a ring extension works it out from the before readings), for the predicted Zs.
+      supplies: seen(oneOf(...RCD_CIRCUIT_KINDS)), location: seen(oneOf(...POINT_LOCATIONS)), dwelling: seen(bool),
+      joinR1R2Ohm: seen(num(0, 100)),
+      // The ring's points and unfused spurs, this one included, and what this spur feeds.
+      ringPoints: seen(int(0, 500)), ringUnfusedSpurs: seen(int(0, 500)), spurFeeds: seen(int(0, 50)), spurFromSpur: seen(bool),
+      // Sizing a new run: design current, how it is installed and the rating factors for ambient, grouping and insulation.
+      designCurrentA: seen(num(0, 1000)), installationMethod: seen(oneOf(...INSTALLATION_METHODS)),
+      ambientFactor: seen(num(0.01, 1.25)), groupingFactor: seen(num(0.01, 1)), insulationFactor: seen(num(0.01, 1)),
     },
   },
   testResult: {

@@ -35,6 +35,9 @@ export class CreateCircuitDto {
   @NumberField(0.5, 400, { example: 1.5, description: 'circuit protective conductor cross-section, mm²' })
   cpcCsaMm2?: number | null;
 
+  @NumberField(0, 10_000, { example: 20, description: 'one-way cable length to the furthest point, m' })
+  lengthM?: number | null;
+
   @TextField(40, { example: 'BS EN 60898-1', description: 'the protective device\'s product standard' })
   deviceStandard?: string | null;
 

@@ -7,6 +7,7 @@ import { Documents1796219621037 } from './1796219621037-Documents.js';
 import { PartsAndPrices1796221754005 } from './1796221754005-PartsAndPrices.js';
 import { Billing1796223023465 } from './1796223023465-Billing.js';
 import { DocumentRevisions1796230000000 } from './1796230000000-DocumentRevisions.js';
+import { ChecksBeforeWork1796232000000 } from './1796232000000-ChecksBeforeWork.js';
 import { CertificateJudgment1796231000000 } from './1796231000000-CertificateJudgment.js';
 import { PhotoSenders1796430000000 } from './1796430000000-PhotoSenders.js';
 import { CertificateContent1796471619935 } from './1796471619935-CertificateContent.js';
@@ -24,6 +25,7 @@ export const MIGRATIONS = [
   Billing1796223023465,
   DocumentRevisions1796230000000,
   CertificateJudgment1796231000000,
+  ChecksBeforeWork1796232000000,
   PhotoSenders1796430000000,
   CertificateContent1796471619935,
   AttemptsAndRefunds1796481200000,

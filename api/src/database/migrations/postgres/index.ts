@@ -3,6 +3,7 @@ import { PostgresBilling1796424218562 } from './1796424218562-PostgresBilling.js
 import { PostgresDocumentRevisions1796430000000 } from './1796430000000-PostgresDocumentRevisions.js';
 import { PostgresPhotoSenders1796430000001 } from './1796430000001-PostgresPhotoSenders.js';
 import { PostgresCertificateJudgment1796431000000 } from './1796431000000-PostgresCertificateJudgment.js';
+import { PostgresChecksBeforeWork1796432000000 } from './1796432000000-PostgresChecksBeforeWork.js';
 import { PostgresCertificateContent1796471619935 } from './1796471619935-PostgresCertificateContent.js';
 import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-PostgresAttemptsAndRefunds.js';
 
@@ -13,6 +14,7 @@ export const POSTGRES_MIGRATIONS = [
   PostgresDocumentRevisions1796430000000,
   PostgresPhotoSenders1796430000001,
   PostgresCertificateJudgment1796431000000,
+  PostgresChecksBeforeWork1796432000000,
   PostgresCertificateContent1796471619935,
   PostgresAttemptsAndRefunds1796481200001,
 ];

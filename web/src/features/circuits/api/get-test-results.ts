@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { CircuitTestAssessment, RowOf } from '@wiretrail/core';
+import type { ChecksBeforeWork, CircuitTestAssessment, RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
 /** A circuit's test results as the office reads them: the readings, the circuit as recorded, and the server's verdicts. */
@@ -12,11 +12,14 @@ export type TestResult = Omit<RowOf<'testResult'>, 'verdicts'> & {
     deviceType: string | null;
     deviceRatingA: number | null;
     rcdRatingMa: number | null;
+    lengthM: number | null;
     boardName: string | null;
     label: string | null;
   } | null;
   earthing: string | null;
   assessment: CircuitTestAssessment;
+  /** The checks before the work of each point change made on this circuit on the same visit. */
+  beforeWork: Array<ChecksBeforeWork & { pointChangeId: string; accessoryKind: string | null }>;
 };
 
 export const jobTestResultsQueryOptions = (jobId: string) =>

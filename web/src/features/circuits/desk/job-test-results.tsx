@@ -1,10 +1,12 @@
 import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
 import Alert from '@mui/material/Alert';
+import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import type { GridColDef } from '@mui/x-data-grid';
 import { EmptyState } from '@/components/empty-state';
 import { RecordGrid } from '@/components/record-grid';
+import { BeforeWorkChecks, BeforeWorkSummary } from '@/components/verdicts/before-work-checks';
 import { type TestResult, useJobTestResults } from '../api/get-test-results';
 import { overallResult } from '../overall-result';
 import { lineReadings, shortName } from './test-result-lines';
@@ -72,7 +74,24 @@ export function JobTestResults({ jobId }: { jobId: string }) {
     group('Polarity', ['polarity'], 130),
     group('Zs', ['zs'], 120),
     group('RCD', ['rcd-1x', 'rcd-5x', 'rcd-button'], 168),
+    {
+      field: 'beforeWork',
+      headerName: 'Before the work',
+      width: 280,
+      sortable: false,
+      renderCell: ({ row }) =>
+        row.beforeWork.length ? (
+          <Stack spacing={0.5}>
+            {row.beforeWork.map((b) => (
+              <BeforeWorkSummary key={b.pointChangeId} checks={b} what={`${row.circuit?.label ?? 'Circuit'}, ${b.accessoryKind ?? 'point change'}`} />
+            ))}
+          </Stack>
+        ) : (
+          <Typography color="text.secondary">—</Typography>
+        ),
+    },
   ];
+  const withChecks = (results.data?.items ?? []).filter((r) => r.beforeWork.length > 0);
   if (results.isError) return <Alert severity="error">{results.error.message}</Alert>;
   if (results.isSuccess && results.data.items.length === 0) {
     return (
@@ -81,5 +100,16 @@ export function JobTestResults({ jobId }: { jobId: string }) {
       </EmptyState>
     );
   }
-  return <RecordGrid label="Test results" rows={results.data?.items ?? []} columns={columns} loading={results.isPending} initialState={{ pagination: { paginationModel: { pageSize: 25 } } }} />;
+  return (
+    <Stack spacing={2}>
+      <RecordGrid label="Test results" rows={results.data?.items ?? []} columns={columns} loading={results.isPending} initialState={{ pagination: { paginationModel: { pageSize: 25 } } }} />
+      {withChecks.map((r) =>
+        r.beforeWork.map((b) => (
+          <Paper key={`${r.id}-${b.pointChangeId}`} variant="outlined" sx={{ p: 2 }}>
+            <BeforeWorkChecks checks={b} title={`Before the work: ${r.circuit?.label ?? 'circuit'}, ${b.accessoryKind ?? 'point change'}`} />
+          </Paper>
+        )),
+      )}
+    </Stack>
+  );
 }

@@ -37,6 +37,7 @@ export const circuitDetailsSchema = z.object({
   rcdType: z.string().max(20, 'The RCD type must be at most 20 characters.'),
   liveCsaMm2: readingField('circuit', 'liveCsaMm2', 'The live conductor size', 'mm²'),
   cpcCsaMm2: readingField('circuit', 'cpcCsaMm2', 'The cpc size', 'mm²'),
+  lengthM: readingField('circuit', 'lengthM', 'The cable length', 'm'),
   faultProtection: z.enum(['', ...FAULT_PROTECTION_METHODS]),
   installed: z.enum(INSTALLED),
   // What the certificate states beyond what the tests need.
@@ -81,6 +82,7 @@ export function circuitDetailsOf(c: CircuitRow | null, visitId?: string, earthin
     rcdType: c?.rcdType ?? '',
     liveCsaMm2: readingText(c?.liveCsaMm2),
     cpcCsaMm2: readingText(c?.cpcCsaMm2),
+    lengthM: readingText(c?.lengthM),
     faultProtection: (c?.faultProtection as CircuitDetails['faultProtection']) ?? '',
     installed: visitId && c?.newOnVisitId === visitId ? 'new' : 'existing',
     deviceStandard: c?.deviceStandard ?? '',
@@ -116,6 +118,7 @@ export function circuitDetailFields(v: CircuitDetails, visitId?: string, current
     rcdType: v.rcdType.trim() || null,
     liveCsaMm2: usableReading(v.liveCsaMm2),
     cpcCsaMm2: usableReading(v.cpcCsaMm2),
+    lengthM: usableReading(v.lengthM),
     deviceStandard: v.deviceStandard.trim() || null,
     rcdStandard: v.rcdStandard.trim() || null,
     rcdRatedCurrentA: usableReading(v.rcdRatedCurrentA),
@@ -149,6 +152,13 @@ export function CircuitDetailFields({ register, control, errors }: { register: U
         <TextField label="Live size (mm²)" {...register('liveCsaMm2')} error={!!errors.liveCsaMm2} helperText={errors.liveCsaMm2?.message ?? ' '} slotProps={num} />
         <TextField label="Cpc size (mm²)" {...register('cpcCsaMm2')} error={!!errors.cpcCsaMm2} helperText={errors.cpcCsaMm2?.message ?? ' '} slotProps={num} />
       </Stack>
+      <TextField
+        label="Cable length to the furthest point (m)"
+        {...register('lengthM')}
+        error={!!errors.lengthM}
+        helperText={errors.lengthM?.message ?? 'On a radial, R1+R2 is checked against the cable’s own resistance.'}
+        slotProps={num}
+      />
       <NativeChoice
         label="Fault protection"
         {...register('faultProtection')}

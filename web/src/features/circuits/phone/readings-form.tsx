@@ -15,6 +15,7 @@ import {
   INSULATION_TEST_VOLTAGES,
   InvalidInputError,
   type RingExtension,
+  r1r2Expected,
   roundTo,
 } from '@wiretrail/core';
 import { type ReactNode, useMemo, useState } from 'react';
@@ -90,6 +91,18 @@ function predictedAfter(extensions: PointChangeRow[], circuit: CircuitRow): Ring
   }
 }
 
+/** What a radial's R1+R2 should read from its cable's own resistance, once its length and sizes are recorded. */
+function radialExpectation(circuit: CircuitRow): string | null {
+  if (circuit.kind === 'ring' || circuit.lengthM == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null) return null;
+  try {
+    const e = r1r2Expected({ liveCsaMm2: circuit.liveCsaMm2, cpcCsaMm2: circuit.cpcCsaMm2, lengthM: circuit.lengthM });
+    return `Expect R1+R2 of about ${ohms(e.expectedOhm)}: ${circuit.lengthM} m of ${circuit.liveCsaMm2}/${circuit.cpcCsaMm2} mm² at ${roundTo(e.perMetreMohm, 2)} mΩ/m (IEC 60228:2004, 20 °C).`;
+  } catch (err) {
+    if (err instanceof InvalidInputError) return null;
+    throw err;
+  }
+}
+
 function Verdicts({ assessment, keys }: { assessment: CircuitTestAssessment; keys: CircuitTestKey[] }) {
   const lines = assessment.lines.filter((l) => keys.includes(l.key));
   if (lines.length === 0) return null;
@@ -136,6 +149,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
   const ring = circuit.kind === 'ring';
   const rcd = circuit.rcdRatingMa != null;
   const predicted = useMemo(() => predictedAfter(extensions, circuit), [extensions, circuit]);
+  const radial = useMemo(() => radialExpectation(circuit), [circuit]);
 
   // The unit, and the label unless the group around it says the rest, are the catalogue's.
   const reading = (name: (typeof NUMERIC_READINGS)[number], label = circuitReading(name).label) => (
@@ -211,6 +225,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
               {reading('r1r2Ohm')}
               {reading('r2LeadOhm', 'or R2, long lead')}
             </Stack>
+            {radial && <Typography variant="body2">{radial}</Typography>}
             <Verdicts assessment={assessment} keys={['r1r2']} />
           </Group>
           <Group title="Insulation resistance">

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { RowOf } from '@wiretrail/core';
+import type { ChecksBeforeWork, RowOf } from '@wiretrail/core';
 import { api } from '@/lib/api-client';
 
 /** A point added, moved, removed or replaced on a visit, with the names of its circuit and areas. */
@@ -8,6 +8,8 @@ export type PointChange = Omit<RowOf<'pointChange'>, 'beforeR1Ohm' | 'beforeRnOh
   toAreaName: string | null;
   circuitLabel: string | null;
   visitPlannedStart: string | null;
+  /** The server's checks before the work, worked out by core's rule as the phone does. */
+  beforeWork: ChecksBeforeWork;
 };
 
 export const jobPointChangesQueryOptions = (jobId: string) =>

@@ -1,5 +1,5 @@
 import { useLiveQuery } from 'dexie-react-hooks';
-import { type AreaRow, type CircuitRow, db, type PointChangeRow, type TestResultRow } from '@/lib/db';
+import { type AreaRow, type CircuitRow, db, type PointChangeRow, type SiteRow, type TestResultRow } from '@/lib/db';
 
 export interface RingBaseline {
   r1: number;
@@ -14,6 +14,8 @@ export interface VisitPoints {
   points: PointChangeRow[];
   circuits: CircuitRow[];
   areas: AreaRow[];
+  /** The site, for its Ze and earthing in the checks before the work. */
+  site: SiteRow | null;
   /** The latest end-to-end ring readings on the phone, per circuit: the base for predicting an extension. */
   ringBaselines: Map<string, RingBaseline>;
 }
@@ -32,17 +34,19 @@ export function latestRingReadings(results: TestResultRow[]): Map<string, RingBa
 }
 
 export async function getVisitPoints(visitId: string, siteId: string): Promise<VisitPoints> {
-  const [points, circuits, areas, results] = await Promise.all([
+  const [points, circuits, areas, results, site] = await Promise.all([
     db.pointChange.where('visitId').equals(visitId).toArray(),
     db.circuit.where('siteId').equals(siteId).toArray(),
     db.area.where('siteId').equals(siteId).toArray(),
     db.testResult.where('siteId').equals(siteId).toArray(),
+    db.site.get(siteId),
   ]);
   points.sort((a, b) => (a.createdAt ?? '').localeCompare(b.createdAt ?? '') || a.id.localeCompare(b.id));
   return {
     points,
     circuits: circuits.sort(byNumber),
     areas: areas.sort((a, b) => a.name.localeCompare(b.name, 'en-GB')),
+    site: site ?? null,
     ringBaselines: latestRingReadings(results),
   };
 }

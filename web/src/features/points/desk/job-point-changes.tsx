@@ -3,6 +3,7 @@ import Alert from '@mui/material/Alert';
 import Typography from '@mui/material/Typography';
 import type { GridColDef } from '@mui/x-data-grid';
 import { EmptyState } from '@/components/empty-state';
+import { BeforeWorkSummary } from '@/components/verdicts/before-work-checks';
 import { RecordGrid } from '@/components/record-grid';
 import { type PointChange, useJobPointChanges } from '../api/get-point-changes';
 
@@ -44,6 +45,13 @@ export function JobPointChanges({ jobId }: { jobId: string }) {
     { field: 'to', headerName: 'To', flex: 1, minWidth: 180, valueGetter: (_v, row) => (row.action === 'remove' ? '—' : positionWords(row.toAreaName, row.toDescription, row.toHeightMm)) },
     { field: 'circuitLabel', headerName: 'Circuit', flex: 1, minWidth: 180, valueGetter: (v: string | null) => v ?? 'Not given' },
     { field: 'connection', headerName: 'Connection', flex: 1, minWidth: 180, valueGetter: (_v, row) => connectionWords(row) },
+    {
+      field: 'beforeWork',
+      headerName: 'Before the work',
+      width: 300,
+      sortable: false,
+      renderCell: ({ row }) => <BeforeWorkSummary checks={row.beforeWork} what={row.accessoryKind ?? 'Point change'} />,
+    },
     { field: 'concealedRoute', headerName: 'Concealed route', width: 140, sortable: false, valueGetter: (v: unknown) => (v ? 'Drawn on site' : '—') },
   ];
   if (changes.isError) return <Alert severity="error">{changes.error.message}</Alert>;

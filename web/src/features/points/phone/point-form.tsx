@@ -9,17 +9,33 @@ import TextField from '@mui/material/TextField';
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
-import { extendRing, type FieldValue, type RingExtension, fuseForLoad, InvalidInputError, POINT_ACTIONS, POINT_CONNECTIONS, roundTo } from '@wiretrail/core';
+import {
+  checksBeforeWork,
+  extendRing,
+  type FieldValue,
+  fuseForLoad,
+  type FuseChoice,
+  INSTALLATION_METHODS,
+  InvalidInputError,
+  POINT_ACTIONS,
+  POINT_CONNECTIONS,
+  POINT_LOCATIONS,
+  RCD_CIRCUIT_KINDS,
+  type RingExtension,
+  roundTo,
+} from '@wiretrail/core';
 import { useEffect, useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { choicesOf, NativeChoice, SaveBar } from '@/components/forms/phone-inputs';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
-import type { AreaRow, CircuitRow, PointChangeRow } from '@/lib/db';
+import { BeforeWorkChecks } from '@/components/verdicts/before-work-checks';
+import type { AreaRow, CircuitRow, PointChangeRow, SiteRow } from '@/lib/db';
 import { readingField, readingText, usableReading } from '@/lib/readings';
 import { createRecord, type Fields, saveRecord } from '@/lib/sync/local-write';
 import type { RingBaseline } from '../data/get-visit-points';
-import { ACCESSORIES, ACTION_WORDS, CONNECTION_WORDS, hasFrom, hasTo, needsFuse } from '../point-words';
+import { ACCESSORIES, ACTION_WORDS, CONNECTION_WORDS, hasFrom, hasTo, LOCATION_WORDS, needsFuse, SUPPLIES_WORDS, suppliesOf } from '../point-words';
+import { InstallationMethodPicker } from './installation-method-picker';
 import { type ConcealedRoute, newRoute, readRoute, WallDiagram } from './wall-diagram';
 
 const r = (field: string, label: string, unit: string) => readingField('pointChange', field, label, unit);
@@ -43,6 +59,19 @@ export const pointSchema = z
     beforeRnOhm: r('beforeRnOhm', 'rn before', 'Ω'),
     beforeR2Ohm: r('beforeR2Ohm', 'r2 before', 'Ω'),
     loadW: r('loadW', 'The load', 'W'),
+    supplies: z.enum(['', ...RCD_CIRCUIT_KINDS]),
+    location: z.enum(POINT_LOCATIONS),
+    dwelling: z.boolean(),
+    joinR1R2Ohm: r('joinR1R2Ohm', 'R1+R2 where it joins', 'Ω'),
+    ringPoints: r('ringPoints', 'The points on the ring', ''),
+    ringUnfusedSpurs: r('ringUnfusedSpurs', 'The unfused spurs', ''),
+    spurFeeds: r('spurFeeds', 'What this spur feeds', ''),
+    spurFromSpur: z.boolean(),
+    designCurrentA: r('designCurrentA', 'The design current', 'A'),
+    installationMethod: z.enum(['', ...INSTALLATION_METHODS]),
+    ambientFactor: r('ambientFactor', 'The ambient factor Ca', ''),
+    groupingFactor: r('groupingFactor', 'The grouping factor Cg', ''),
+    insulationFactor: r('insulationFactor', 'The insulation factor Ci', ''),
   })
   .superRefine((v, ctx) => {
     const issue = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
@@ -75,6 +104,63 @@ function defaults(point: PointChangeRow | null): PointValues {
     beforeRnOhm: readingText(point?.beforeRnOhm),
     beforeR2Ohm: readingText(point?.beforeR2Ohm),
     loadW: readingText(point?.loadW),
+    supplies: (point?.supplies as PointValues['supplies'] | null | undefined) ?? suppliesOf(point?.accessoryKind ?? ''),
+    location: (point?.location as PointValues['location'] | null | undefined) ?? 'indoors',
+    dwelling: point?.dwelling ?? true,
+    joinR1R2Ohm: readingText(point?.joinR1R2Ohm),
+    ringPoints: readingText(point?.ringPoints),
+    ringUnfusedSpurs: readingText(point?.ringUnfusedSpurs),
+    spurFeeds: readingText(point?.spurFeeds),
+    spurFromSpur: point?.spurFromSpur ?? false,
+    designCurrentA: readingText(point?.designCurrentA),
+    installationMethod: (point?.installationMethod as PointValues['installationMethod'] | null | undefined) ?? '',
+    ambientFactor: readingText(point?.ambientFactor),
+    groupingFactor: readingText(point?.groupingFactor),
+    insulationFactor: readingText(point?.insulationFactor),
+  };
+}
+
+/** The row the form would save: what is stored, and what the checks before the work are worked out from. */
+export function pointFields(values: PointValues, route: ConcealedRoute | null, fuse: FuseChoice | null): Record<string, FieldValue> {
+  const text = (s: string) => s.trim() || null;
+  const fused = needsFuse(values.connection, values.accessoryKind);
+  const ring = values.connection === 'ring-extension';
+  const spur = values.connection === 'unfused-spur';
+  const joined = values.connection === 'unfused-spur' || values.connection === 'fused-spur' || values.connection === 'radial';
+  const newRun = values.installationMethod !== '';
+  return {
+    action: values.action,
+    accessoryKind: values.accessoryKind.trim(),
+    circuitId: values.circuitId || null,
+    connection: values.connection || null,
+    fromAreaId: hasFrom(values.action) ? values.fromAreaId || null : null,
+    fromDescription: hasFrom(values.action) ? text(values.fromDescription) : null,
+    fromHeightMm: hasFrom(values.action) ? usableReading(values.fromHeightMm) : null,
+    toAreaId: hasTo(values.action) ? values.toAreaId || null : null,
+    toDescription: hasTo(values.action) ? text(values.toDescription) : null,
+    toHeightMm: hasTo(values.action) ? usableReading(values.toHeightMm) : null,
+    liveCsaMm2: usableReading(values.liveCsaMm2),
+    cpcCsaMm2: usableReading(values.cpcCsaMm2),
+    addedRouteM: ring || joined ? usableReading(values.addedRouteM) : null,
+    beforeR1Ohm: ring ? usableReading(values.beforeR1Ohm) : null,
+    beforeRnOhm: ring ? usableReading(values.beforeRnOhm) : null,
+    beforeR2Ohm: ring ? usableReading(values.beforeR2Ohm) : null,
+    loadW: fused ? usableReading(values.loadW) : null,
+    fuseRatingA: fused ? (fuse?.fuseRatingA ?? null) : null,
+    concealedRoute: route && route.route.length > 1 ? (route as unknown as FieldValue) : null,
+    supplies: values.supplies || null,
+    location: values.location,
+    dwelling: values.dwelling,
+    joinR1R2Ohm: joined ? usableReading(values.joinR1R2Ohm) : null,
+    ringPoints: spur ? usableReading(values.ringPoints) : null,
+    ringUnfusedSpurs: spur ? usableReading(values.ringUnfusedSpurs) : null,
+    spurFeeds: spur ? usableReading(values.spurFeeds) : null,
+    spurFromSpur: spur ? values.spurFromSpur : null,
+    designCurrentA: newRun ? usableReading(values.designCurrentA) : null,
+    installationMethod: values.installationMethod || null,
+    ambientFactor: newRun ? usableReading(values.ambientFactor) : null,
+    groupingFactor: newRun ? usableReading(values.groupingFactor) : null,
+    insulationFactor: newRun ? usableReading(values.insulationFactor) : null,
   };
 }
 
@@ -103,12 +189,14 @@ interface Props {
   circuits: CircuitRow[];
   areas: AreaRow[];
   ringBaselines: Map<string, RingBaseline>;
+  /** For its Ze and earthing, which the predicted Zs needs. */
+  site: SiteRow | null;
   locked: boolean;
   onSaved: (id: string) => void;
 }
 
 /** A point added, moved, taken out or replaced: where from and to, and how it joins its circuit. */
-export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselines, locked, onSaved }: Props) {
+export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselines, site, locked, onSaved }: Props) {
   const { register, control, handleSubmit, formState, setValue, getValues } = useForm<PointValues>({ resolver: zodResolver(pointSchema), defaultValues: defaults(point) });
   const v = useWatch({ control }) as PointValues;
   const [route, setRoute] = useState<ConcealedRoute | null>(() => readRoute(point?.concealedRoute));
@@ -132,35 +220,26 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
     }
   }, [circuit, baseline, getValues, setValue]);
 
+  // The accessory says what the point supplies until the technician says otherwise.
+  useEffect(() => {
+    const guess = suppliesOf(v.accessoryKind ?? '');
+    if (guess && getValues('supplies') === '' && !formState.dirtyFields.supplies) setValue('supplies', guess);
+  }, [v.accessoryKind, getValues, setValue, formState.dirtyFields.supplies]);
+
   const extension = v.connection === 'ring-extension' ? predictExtension(v) : null;
   const fused = needsFuse(v.connection, v.accessoryKind);
   const load = usableReading(v.loadW);
   const fuse = useMemo(() => (fused && load !== null && load > 0 ? fuseForLoad({ watts: load }) : null), [fused, load]);
+  // Worked out by core's rule as the form is filled in, the same as the office is shown from the saved row.
+  const checks = useMemo(
+    () => (v.connection || v.supplies ? checksBeforeWork({ point: { id: point?.id ?? 'new', ...pointFields(v, route, fuse) }, circuit: circuit ?? null, site }) : null),
+    [v, route, fuse, circuit, site, point?.id],
+  );
+  const joined = v.connection === 'unfused-spur' || v.connection === 'fused-spur' || v.connection === 'radial';
 
   async function save(values: PointValues) {
     setError(null);
-    const text = (s: string) => s.trim() || null;
-    const fields: Record<string, FieldValue> = {
-      action: values.action,
-      accessoryKind: values.accessoryKind.trim(),
-      circuitId: values.circuitId || null,
-      connection: values.connection || null,
-      fromAreaId: hasFrom(values.action) ? values.fromAreaId || null : null,
-      fromDescription: hasFrom(values.action) ? text(values.fromDescription) : null,
-      fromHeightMm: hasFrom(values.action) ? usableReading(values.fromHeightMm) : null,
-      toAreaId: hasTo(values.action) ? values.toAreaId || null : null,
-      toDescription: hasTo(values.action) ? text(values.toDescription) : null,
-      toHeightMm: hasTo(values.action) ? usableReading(values.toHeightMm) : null,
-      liveCsaMm2: usableReading(values.liveCsaMm2),
-      cpcCsaMm2: usableReading(values.cpcCsaMm2),
-      addedRouteM: values.connection === 'ring-extension' ? usableReading(values.addedRouteM) : null,
-      beforeR1Ohm: values.connection === 'ring-extension' ? usableReading(values.beforeR1Ohm) : null,
-      beforeRnOhm: values.connection === 'ring-extension' ? usableReading(values.beforeRnOhm) : null,
-      beforeR2Ohm: values.connection === 'ring-extension' ? usableReading(values.beforeR2Ohm) : null,
-      loadW: fused ? usableReading(values.loadW) : null,
-      fuseRatingA: fused ? (fuse?.fuseRatingA ?? null) : null,
-      concealedRoute: route && route.route.length > 1 ? (route as unknown as FieldValue) : null,
-    };
+    const fields = pointFields(values, route, fuse);
     try {
       if (point) {
         await saveRecord('pointChange', point.id, fields);
@@ -300,6 +379,83 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
                   </Typography>
                 )}
               </Stack>
+            </Paper>
+          )}
+          {joined && (
+            <Paper variant="outlined" sx={{ p: 1.5 }} component="section" aria-label="New cable">
+              <Stack spacing={1.5}>
+                <Typography variant="h3">New cable</Typography>
+                <TextField label="Length of the new cable (m)" {...register('addedRouteM')} error={!!errors.addedRouteM} helperText={errors.addedRouteM?.message ?? 'From where it joins to the point.'} slotProps={numberInput} />
+                <TextField
+                  label="R1+R2 where it joins (Ω)"
+                  {...register('joinR1R2Ohm')}
+                  error={!!errors.joinR1R2Ohm}
+                  helperText={errors.joinR1R2Ohm?.message ?? 'Measured at the socket or junction it is taken from; 0 for a new circuit from the board.'}
+                  slotProps={numberInput}
+                />
+              </Stack>
+            </Paper>
+          )}
+          {v.connection === 'unfused-spur' && (
+            <Paper variant="outlined" sx={{ p: 1.5 }} component="section" aria-label="The ring's spurs">
+              <Stack spacing={1.5}>
+                <Typography variant="h3">The ring’s spurs</Typography>
+                <Stack direction="row" spacing={1}>
+                  <TextField label="Points on the ring" {...register('ringPoints')} error={!!errors.ringPoints} helperText={errors.ringPoints?.message ?? 'Sockets and fused connection units.'} slotProps={numberInput} />
+                  <TextField label="Unfused spurs" {...register('ringUnfusedSpurs')} error={!!errors.ringUnfusedSpurs} helperText={errors.ringUnfusedSpurs?.message ?? 'This one included.'} slotProps={numberInput} />
+                </Stack>
+                <TextField label="Accessories this spur feeds" {...register('spurFeeds')} error={!!errors.spurFeeds} helperText={errors.spurFeeds?.message ?? 'A twin socket-outlet counts as one.'} slotProps={numberInput} />
+                <Controller
+                  control={control}
+                  name="spurFromSpur"
+                  render={({ field }) => <FormControlLabel control={<Switch checked={field.value} onChange={(e) => field.onChange(e.target.checked)} />} label="Taken from another spur" />}
+                />
+              </Stack>
+            </Paper>
+          )}
+          <Paper variant="outlined" sx={{ p: 1.5 }} component="section" aria-label="Where the point is">
+            <Stack spacing={1.5}>
+              <Typography variant="h3">Where the point is</Typography>
+              <NativeChoice label="What the point supplies" {...register('supplies')} emptyLabel="Not given" options={choicesOf(RCD_CIRCUIT_KINDS, SUPPLIES_WORDS)} />
+              <NativeChoice label="Location" {...register('location')} options={choicesOf(POINT_LOCATIONS, LOCATION_WORDS)} />
+              <Controller
+                control={control}
+                name="dwelling"
+                render={({ field }) => <FormControlLabel control={<Switch checked={field.value} onChange={(e) => field.onChange(e.target.checked)} />} label="In a home" />}
+              />
+            </Stack>
+          </Paper>
+          <Paper variant="outlined" sx={{ p: 1.5 }} component="section" aria-label="Sizing a new cable">
+            <Stack spacing={1.5}>
+              <Typography variant="h3">Sizing a new cable</Typography>
+              <Typography variant="body2" color="text.secondary">
+                Pick how it runs to check its size and its cpc. Leave it unpicked where no new cable is run.
+              </Typography>
+              <Controller control={control} name="installationMethod" render={({ field }) => <InstallationMethodPicker value={field.value} onChange={field.onChange} disabled={locked} />} />
+              {v.installationMethod && (
+                <>
+                  <TextField
+                    label="Design current (A)"
+                    {...register('designCurrentA')}
+                    error={!!errors.designCurrentA}
+                    helperText={errors.designCurrentA?.message ?? 'Blank: the load above, or 20 A on a ring.'}
+                    slotProps={numberInput}
+                  />
+                  <Stack direction="row" spacing={1}>
+                    <TextField label="Ca" {...register('ambientFactor')} error={!!errors.ambientFactor} helperText={errors.ambientFactor?.message ?? 'Ambient'} slotProps={numberInput} />
+                    <TextField label="Cg" {...register('groupingFactor')} error={!!errors.groupingFactor} helperText={errors.groupingFactor?.message ?? 'Grouping'} slotProps={numberInput} />
+                    <TextField label="Ci" {...register('insulationFactor')} error={!!errors.insulationFactor} helperText={errors.insulationFactor?.message ?? 'Insulation'} slotProps={numberInput} />
+                  </Stack>
+                  <Typography variant="caption" color="text.secondary">
+                    Rating factors from BS 7671 Appendix 4 Tables 4B1, 4C1 and 52.2; blank counts as 1.
+                  </Typography>
+                </>
+              )}
+            </Stack>
+          </Paper>
+          {checks && (
+            <Paper variant="outlined" sx={{ p: 1.5 }} role="status" aria-label="Checks before the work">
+              <BeforeWorkChecks checks={checks} />
             </Paper>
           )}
           <Divider />

@@ -43,6 +43,7 @@ export function Component() {
             circuits={data.circuits}
             areas={data.areas}
             ringBaselines={data.ringBaselines}
+            site={data.site}
             locked={locked}
             onSaved={(id) => (isNew ? navigate(paths.visitPoint.href(visit.id, id), { replace: true, state: { saved: true } }) : navigate(back, { state: { saved: true } }))}
           />

@@ -19,6 +19,7 @@ export const circuitSchema = z.object({
   rcdType: optionalText('circuit', 'rcdType', 'RCD type'),
   liveCsaMm2: optionalNumber('circuit', 'liveCsaMm2', 'Live conductor size', { unit: 'mm²', example: 2.5 }),
   cpcCsaMm2: optionalNumber('circuit', 'cpcCsaMm2', 'cpc size', { unit: 'mm²', example: 1.5 }),
+  lengthM: optionalNumber('circuit', 'lengthM', 'Cable length', { unit: 'm', example: 20 }),
 });
 
 const KINDS = CIRCUIT_KINDS.map((k) => ({ value: k, label: CIRCUIT_KIND_WORDS[k] }));
@@ -52,6 +53,7 @@ export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: st
         <FormTextInput form={form} name="liveCsaMm2" label="Live conductor size" hint="mm²" inputMode="decimal" />
         <FormTextInput form={form} name="cpcCsaMm2" label="cpc size" hint="mm²" inputMode="decimal" />
       </Stack>
+      <FormTextInput form={form} name="lengthM" label="Cable length" hint="m to the furthest point; a radial's R1+R2 is checked against it" inputMode="decimal" />
     </RecordDialog>
   );
 }
