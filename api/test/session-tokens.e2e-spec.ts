@@ -29,6 +29,12 @@ describe('access tokens end with their session', () => {
     const refused = await me(phone).expect(401);
     expect(refused.body).toMatchObject({ statusCode: 401, message: 'Your session has ended. Please sign in again.' });
     await t.http.get('/api/sync/pull').set(bearer(phone)).expect(401);
+    // Photo uploads check tokens themselves, outside Nest's guard: the ended session opens them no more.
+    const upload = (s: { accessToken: string }) =>
+      t.http.post('/api/uploads').set(bearer(s)).set('Tus-Resumable', '1.0.0').set('Upload-Length', '10')
+        .set('Upload-Metadata', `sha256 ${Buffer.from('a'.repeat(64)).toString('base64')}`);
+    expect((await upload(phone)).status).toBe(401);
+    expect((await upload(desk)).status).toBe(201);
     await me(desk).expect(200);
   });
 

@@ -8,6 +8,7 @@ import { authConfig } from '../config/app.config.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { User } from '../users/entities/user.entity.js';
 import { signingKey } from './signing-key.js';
+import { sessionUser } from './session-user.js';
 
 export interface AccessTokenPayload {
   sub: string;
@@ -37,16 +38,8 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   }
 
   async validate(payload: AccessTokenPayload): Promise<AuthUser> {
-    const user =
-      typeof payload.sid === 'string'
-        ? await this.users
-            .createQueryBuilder('u')
-            .where('"u"."id" = :id AND "u"."organisationId" = :org', { id: payload.sub, org: payload.org })
-            // A family with one token not revoked is a session still going (rotated tokens keep revokedAt empty).
-            .andWhere('EXISTS (SELECT 1 FROM "refresh_token" "r" WHERE "r"."familyId" = :sid AND "r"."userId" = "u"."id" AND "r"."revokedAt" IS NULL)', { sid: payload.sid })
-            .getOne()
-        : null;
-    if (!user || !user.active) throw new UnauthorizedException('Your session has ended. Please sign in again.');
+    const user = await sessionUser(this.users, payload);
+    if (!user) throw new UnauthorizedException('Your session has ended. Please sign in again.');
     return { id: user.id, organisationId: user.organisationId, role: user.role, email: user.email, name: user.name };
   }
 }

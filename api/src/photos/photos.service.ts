@@ -86,7 +86,7 @@ export class PhotosService implements OnModuleInit {
       const rows = await em.getRepository<SyncRecord>('photo').find({
         where: { organisationId, sha256: In(rest), siteId: In([...siteIds]), deletedAt: IsNull() }, select: { id: true, sha256: true },
       });
-      for (const r of rows) shown.add(r.sha256 as string);
+      for (const r of rows) if (typeof r.sha256 === 'string') shown.add(r.sha256);
     }
     return shown;
   }

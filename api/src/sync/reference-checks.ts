@@ -1,7 +1,7 @@
 import { type EntitySpec, type FieldValue, isSyncEntity, isUuid, type Mutation, type RefTarget, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import { User } from '../users/entities/user.entity.js';
-import { SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
+import { SYNC_SCHEMAS, type SyncRecord, textOrNull } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';
 import { MutationRefused } from './mutation-checks.js';
 
@@ -45,7 +45,7 @@ export async function preloadReferences(
     }
     for (const row of await selectMany<SyncRecord>(em, SYNC_SCHEMAS[entity], 'id', list, { organisationId, deletedAt: null })) {
       known.add(`${entity}:${row.id}`);
-      if (onSite(entity)) sites.set(`${entity}:${row.id}`, (row.siteId as string | null) ?? null);
+      if (onSite(entity)) sites.set(`${entity}:${row.id}`, textOrNull(row.siteId));
     }
   }
 }
@@ -86,7 +86,7 @@ async function checkSameSite(
   const unread = ids.filter((id) => !sites.has(`${target}:${id}`));
   if (unread.length) {
     const rows = await em.getRepository<SyncRecord>(target).find({ where: { id: In(unread), organisationId }, select: { id: true, siteId: true } });
-    for (const r of rows) sites.set(`${target}:${r.id}`, (r.siteId as string | null) ?? null);
+    for (const r of rows) sites.set(`${target}:${r.id}`, textOrNull(r.siteId));
   }
   for (const id of ids) {
     const site = sites.get(`${target}:${id}`);

@@ -17,7 +17,7 @@ import {
 import type { EntityManager } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import { AppliedMutation } from './entities/sync-bookkeeping.entity.js';
-import type { SyncRecord } from './entities/sync-schemas.js';
+import { type SyncRecord, textOrNull } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';
 import { type CheckedMutation, checkDeviceClaims, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
 import { type Lock, type LockRule, RecordLocks } from './record-locks.js';
@@ -235,7 +235,7 @@ export class SyncEngine {
     checkTechnicianWrite(scope, checked, existing);
     const refusal = judges.get(m.entity)?.(checked, existing);
     if (refusal) throw new MutationRefused(refusal);
-    const rowSite = spec.siteField === 'siteId' ? ((set.siteId ?? existing?.siteId ?? null) as string | null) : spec.siteField === 'id' ? m.id : null;
+    const rowSite = spec.siteField === 'siteId' ? textOrNull(set.siteId ?? existing?.siteId) : spec.siteField === 'id' ? m.id : null;
     await checkReferences(run.batch.em, actor.organisationId, m.entity, spec, set, run.batch.known, run.batch.sites, rowSite);
 
     if (!existing) {
@@ -260,7 +260,7 @@ export class SyncEngine {
     };
     batch.insert(m.entity, row);
     batch.recordChange(m.entity, row, seq);
-    if (spec.siteField === 'siteId') batch.sites.set(`${m.entity}:${m.id}`, (row.siteId as string | null) ?? null);
+    if (spec.siteField === 'siteId') batch.sites.set(`${m.entity}:${m.id}`, textOrNull(row.siteId));
     const hook = this.createHooks.get(m.entity);
     if (hook) {
       // A feature's hook reads and writes the database: give it the row, and everything before it, written.

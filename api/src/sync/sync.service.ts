@@ -20,7 +20,7 @@ import { type EntityManager, In } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { SyncChange, SyncDevice } from './entities/sync-bookkeeping.entity.js';
-import { SYNC_SCHEMAS, type SyncRecord } from './entities/sync-schemas.js';
+import { SYNC_SCHEMAS, type SyncRecord, textOrNull } from './entities/sync-schemas.js';
 import { insertMany, selectMany } from './bulk-write.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
 import { SERVER_DEVICE_IDS, SyncEngine, versionsOf } from './sync-engine.service.js';
@@ -238,7 +238,7 @@ export class SyncService {
     const gone: SyncChange[] = [];
     for (const c of entries) {
       const visit = c.entity === 'visit' ? rows.get(`visit:${c.rowId}`) : undefined;
-      const jobId = visit?.jobId as string | undefined;
+      const jobId = textOrNull(visit?.jobId) ?? undefined;
       // Only a visit whose people or job changed since the device's checkpoint can have changed what it may see.
       const moved = Math.max(visit?.fieldMeta?.technicianIds?.v ?? 0, visit?.fieldMeta?.jobId?.v ?? 0) > checkpoint;
       if (!jobId || listed.has(jobId) || !moved) continue;

@@ -12,6 +12,7 @@ import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { Repository } from 'typeorm';
 import type { AccessTokenPayload } from '../../auth/jwt.strategy.js';
+import { sessionUser } from '../../auth/session-user.js';
 import type { AuthUser } from '../../common/decorators/current-user.decorator.js';
 import { photosConfig } from '../../config/photos.config.js';
 import { User } from '../../users/entities/user.entity.js';
@@ -137,7 +138,7 @@ export class PhotoUploads implements OnApplicationBootstrap, OnModuleDestroy {
     await this.tus.handle(req, res);
   }
 
-  /** The same checks as the JWT guard: a valid access token of an active user. Returns the refusal otherwise. */
+  /** The same checks as the JWT guard: a valid access token of an active user in a session still going. Returns the refusal otherwise. */
   private async authenticate(header: string | undefined): Promise<AuthUser | string> {
     const token = /^Bearer\s+(\S+)$/i.exec(header ?? '')?.[1];
     if (!token) return SIGN_IN;
@@ -147,8 +148,8 @@ export class PhotoUploads implements OnApplicationBootstrap, OnModuleDestroy {
     } catch {
       return SESSION_ENDED;
     }
-    const user = await this.users.findOneBy({ id: payload.sub, organisationId: payload.org });
-    if (!user || !user.active) return SESSION_ENDED;
+    const user = await sessionUser(this.users, payload);
+    if (!user) return SESSION_ENDED;
     return callerFrom(user);
   }
 

@@ -117,3 +117,6 @@ export const ALL_SYNC_SCHEMAS = SYNC_ENTITY_NAMES.map((n) => SYNC_SCHEMAS[n]);
 export function syncRepository<E extends SyncEntityName>(em: EntityManager, entity: E): Repository<SyncRecord<E>> {
   return em.getRepository(SYNC_SCHEMAS[entity]);
 }
+
+/** A loose row's field as text, or null when it holds none: the engine reads ids this way without trusting a cast. */
+export const textOrNull = (value: unknown): string | null => (typeof value === 'string' ? value : null);
