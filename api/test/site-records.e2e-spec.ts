@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { T568A, T568B } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
-import { hlcAt, mutation, push, type Session } from './sync-helpers.js';
+import { catchUp, hlcAt, mutation, push, type Session } from './sync-helpers.js';
 import { bearer, createTestApp, expectErrorBody, messagesOf, signInAll, type TestApp } from './test-app.js';
 
 type Row = { id: string; version: number; [field: string]: unknown };
@@ -219,8 +219,8 @@ describe('cable runs, point changes and test results for the office', () => {
       expect(light.assessment.missing.map((l) => l.key)).toEqual(['r1r2', 'ir-live-live', 'ir-live-earth', 'polarity', 'rcd-1x']);
     });
 
-    it("judges Zs by the site's earthing: on TT with a 30 mA RCD, 50 V / IΔn = 1667 Ω", async () => {
-      // BS 7671:2018+A2:2022 Table 41.5 (RA × IΔn ≤ 50 V).
+    it('judges Zs against Table 41.5 where the circuit records its RCD as the fault protection: 50 V / IΔn = 1667 Ω', async () => {
+      // BS 7671:2018+A2:2022 Table 41.5 (RA × IΔn ≤ 50 V). The demo's TT circuit records fault protection by its 30 mA RCD.
       const [tt] = (await get<Page<TestResultRow>>(office, `/api/test-results?siteId=${ids.fernhill}`)).items;
       expect(tt!.earthing).toBe('TT');
       expect(lineOf(tt!, 'zs').result).toMatchObject({ verdict: 'pass', value: 38.6, limit: 1667 });
@@ -283,14 +283,17 @@ describe('cable runs, point changes and test results for the office', () => {
 
   describe("a job's conflicts", () => {
     it('lists the conflicts about the job, its visits and what was recorded on them, and no others', async () => {
+      // Each phone has pulled what it edits, as the server requires of a device's base version.
+      for (const [s, device] of [[tech1, 'tech1-phone'], [tech1, 'tech1-tablet'], [tech2, 'tech2-phone'], [tech2, 'tech2-tablet']] as const) await catchUp(t, s, device);
       const ring = await get<TestResultRow>(office, `/api/test-results/${ids.ringTest}`);
-      // Two phones change the same reading before either syncs: the later clock wins, the other waits in Conflicts.
-      const [late] = await push(t, tech1, 'tech1-phone', [mutation('testResult', ids.ringTest, { zsOhm: 0.98 }, { baseVersion: ring.version, hlc: hlcAt('2030-01-01T10:05:00.000Z', 'tech1-phone') })]);
+      // Two phones change the same reading before either syncs: the later clock (a minute ahead, within the skew the
+      // server allows) wins, the other waits in Conflicts.
+      const [late] = await push(t, tech1, 'tech1-phone', [mutation('testResult', ids.ringTest, { zsOhm: 0.98 }, { baseVersion: ring.version, hlc: hlcAt(new Date(Date.now() + 60_000).toISOString(), 'tech1-phone') })]);
       const [early] = await push(t, tech1, 'tech1-tablet', [mutation('testResult', ids.ringTest, { zsOhm: 1.02 }, { baseVersion: ring.version, deviceId: 'tech1-tablet' })]);
       expect([late!.status, early!.status]).toEqual(['applied', 'merged']);
       // One on another job's cable run, which must not be listed with this job's.
       const rc3 = await get<CableRunRow>(office, `/api/cable-runs/${ids.rc3}`);
-      await push(t, tech2, 'tech2-phone', [mutation('cableRun', ids.rc3, { endBDescription: 'Wall plate, left of the chair' }, { baseVersion: rc3.version, hlc: hlcAt('2030-01-01T10:05:00.000Z', 'tech2-phone') })]);
+      await push(t, tech2, 'tech2-phone', [mutation('cableRun', ids.rc3, { endBDescription: 'Wall plate, left of the chair' }, { baseVersion: rc3.version, hlc: hlcAt(new Date(Date.now() + 60_000).toISOString(), 'tech2-phone') })]);
       const [other] = await push(t, tech2, 'tech2-tablet', [mutation('cableRun', ids.rc3, { endBDescription: 'Wall plate, right' }, { baseVersion: rc3.version, deviceId: 'tech2-tablet' })]);
       expect(other!.status).toBe('merged');
 
