@@ -45,8 +45,12 @@ function samples(type: FieldType): { good: unknown[]; bad: unknown[] } {
       return { good: [[], [ID]], bad: [['abc'], ID] };
     case 'datetime':
       return { good: ['2026-03-14T09:26:53.589Z'], bad: ['2026-03-14', 'soon'] };
-    default:
-      throw new Error(`no samples for ${type.kind}`);
+    case 'json':
+      // The one JSON field the office writes: the visit's departures (BS 7671 Regs 120.3, 133.1.3, 133.5).
+      return {
+        good: [[], [{ regulation: '522.6.202', instead: 'Earthed metal conduit', noLessSafe: 'Mechanical protection in place of the zones' }]],
+        bad: ['a departure', [{ regulation: 42, instead: 'x', noLessSafe: 'y' }], [{ regulation: 'x', instead: 'y' }], [{ regulation: 'x', instead: 'y', noLessSafe: 'z', extra: 1 }]],
+      };
   }
 }
 

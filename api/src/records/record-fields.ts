@@ -18,6 +18,7 @@ import {
   Max,
   MaxLength,
   Min,
+  ValidateBy,
 } from 'class-validator';
 
 /**
@@ -116,5 +117,34 @@ export function DateTimeField(o: FieldOptions = {}): PropertyDecorator {
     inUtc,
     IsISO8601({ strict: true }, { message }),
     Matches(DATE_TIME, { message }),
+  );
+}
+
+const DEPARTURE_PARTS = ['regulation', 'instead', 'noLessSafe'] as const;
+const DEPARTURE_PART_MAX = 2000;
+
+/** A list of departures as the sign-off records them: each the regulation, what is done instead and why no less safe. */
+export function DepartureEntriesField(o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { type: 'array', items: { type: 'object', properties: { regulation: { type: 'string' }, instead: { type: 'string' }, noLessSafe: { type: 'string' } } } }),
+    ValidateBy({
+      name: 'departureEntries',
+      validator: {
+        validate: (value: unknown) =>
+          Array.isArray(value) &&
+          value.every(
+            (entry: unknown) =>
+              typeof entry === 'object' &&
+              entry !== null &&
+              !Array.isArray(entry) &&
+              Object.keys(entry).every((k) => (DEPARTURE_PARTS as readonly string[]).includes(k)) &&
+              DEPARTURE_PARTS.every((k) => {
+                const part: unknown = Object.getOwnPropertyDescriptor(entry, k)?.value;
+                return typeof part === 'string' && part.length <= DEPARTURE_PART_MAX;
+              }),
+          ),
+        defaultMessage: () => `$property must be a list of departures, each with regulation, instead and noLessSafe as text of at most ${DEPARTURE_PART_MAX} characters`,
+      },
+    }),
   );
 }

@@ -1,5 +1,5 @@
-import { VISIT_STATUSES } from '@wiretrail/core';
-import { ChoiceField, DateTimeField, IdField, IdListField, TextField } from '../../records/record-fields.js';
+import { type DepartureEntry, VISIT_STATUSES } from '@wiretrail/core';
+import { ChoiceField, DateTimeField, DepartureEntriesField, IdField, IdListField, TextField } from '../../records/record-fields.js';
 
 export class CreateVisitDto {
   @IdField('job', { required: true })
@@ -38,8 +38,23 @@ export class CreateVisitDto {
   @TextField(20_000, { description: 'departures from the standard, as signed' })
   departures?: string | null;
 
+  @DepartureEntriesField({ description: 'departures from the standard, each the regulation, what is done instead and why it gives no less safety' })
+  departureEntries?: DepartureEntry[] | null;
+
   @TextField(200)
   signedByName?: string | null;
+
+  @TextField(100, { description: "the signatory's position" })
+  signedByPosition?: string | null;
+
+  @TextField(20_000, { description: 'comments on the existing installation (BS 7671 Reg 644.1.2)' })
+  existingInstallationComments?: string | null;
+
+  @TextField(20_000, { description: 'permitted exceptions (BS 7671 Reg 411.3.3)' })
+  permittedExceptions?: string | null;
+
+  @TextField(200, { description: 'the risk assessment behind a permitted exception' })
+  riskAssessmentRef?: string | null;
 
   @DateTimeField()
   signedAt?: string | null;
