@@ -26,10 +26,11 @@ test('the office reviews a finished job, settles a conflict, issues the certific
   // Aled's tablet, offline since the visit, edits a reading after the visit was signed: it waits for the office.
   const aled = await apiSession(request, 'tech2@larkfield.example');
   const pulled = (await (await request.get(`/api/sync/pull?checkpoint=0&limit=1000&deviceId=tablet${stamp}`, { headers: { authorization: `Bearer ${aled.accessToken}` } })).json()) as {
-    changes: { entity: string; row: Record<string, unknown> }[];
+    changes: { entity: string; row: Record<string, unknown> | null }[];
   };
-  const signed = pulled.changes.find((c) => c.entity === 'visit' && c.row.status === 'finished' && c.row.signedByName)!.row;
-  const reading = pulled.changes.find((c) => c.entity === 'testResult' && c.row.visitId === signed.id)!.row;
+  // A pull also carries rows that left the technician's scope, as deletions without a row.
+  const signed = pulled.changes.find((c) => c.entity === 'visit' && c.row?.status === 'finished' && c.row.signedByName)!.row!;
+  const reading = pulled.changes.find((c) => c.entity === 'testResult' && c.row?.visitId === signed.id)!.row!;
   const pushed = await request.post('/api/sync/push', {
     headers: { authorization: `Bearer ${aled.accessToken}` },
     data: {
