@@ -42,11 +42,11 @@ test('with no signal, the Points form answers before the cable is cut: predicted
   await expect(checks.getByRole('listitem', { name: 'RCD protection' })).toContainText('30 mA RCD required: the circuit has one');
   await expect(checks).toContainText('a competent person decide');
   // Pushed into the middle of the insulation (method 103) 2.5 mm² carries 13.5 A, under the 20 A a ring needs (Table 4D5)
-  await pointForm.getByRole('button', { name: /^Method 103:/ }).click();
+  await pointForm.getByRole('button', { name: /^Method 103 / }).click();
   await expect(checks.getByRole('listitem', { name: 'New cable' })).toContainText('Iz 13.5 A');
   await expect(checks.getByRole('listitem', { name: 'New cable' }).getByRole('button', { name: /: Fail/ })).toBeVisible();
   // Touching the board (method 102): 21 A
-  await pointForm.getByRole('button', { name: /^Method 102:/ }).click();
+  await pointForm.getByRole('button', { name: /^Method 102 / }).click();
   await expect(checks.getByRole('listitem', { name: 'New cable' })).toContainText('Iz 21 A');
   // 230 / 0.62 = 371 A clears the B32 at once: √(371² × 0.1) / 115 = 1.02 mm² ≤ 1.5 mm² (Reg 543.1.3, Table 54.3)
   await expect(checks.getByRole('listitem', { name: 'Cpc for the fault' })).toContainText('Minimum cpc 1.02 mm² at 371 A');

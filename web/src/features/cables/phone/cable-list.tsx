@@ -2,6 +2,7 @@ import AddOutlined from '@mui/icons-material/AddOutlined';
 import QrCode2Outlined from '@mui/icons-material/QrCode2Outlined';
 import Button from '@mui/material/Button';
 import List from '@mui/material/List';
+import ListItem from '@mui/material/ListItem';
 import ListItemButton from '@mui/material/ListItemButton';
 import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
@@ -55,13 +56,15 @@ export function CableList({ siteId, visitId, locked }: { siteId: string; visitId
             {data.cables.map((c) => {
               const verdict = cableVerdict(c);
               return (
-                <ListItemButton key={c.id} divider component={RouterLink} to={paths.visitCable.href(visitId, c.id)} sx={{ gap: 1, alignItems: 'flex-start' }}>
-                  <ListItemText
-                    primary={`${c.label}${c.medium ? ` · ${MEDIUM_WORDS[c.medium] ?? c.medium}` : ''}`}
-                    secondary={`A: ${endWords(c, 'A', data.areaNames)} → B: ${endWords(c, 'B', data.areaNames)} · ${CABLE_STATUS_WORDS[c.status ?? 'unidentified']}`}
-                  />
-                  {verdict && <VerdictChip verdict={verdict} />}
-                </ListItemButton>
+                <ListItem key={c.id} disablePadding divider>
+                  <ListItemButton component={RouterLink} to={paths.visitCable.href(visitId, c.id)} sx={{ gap: 1, alignItems: 'flex-start' }}>
+                    <ListItemText
+                      primary={`${c.label}${c.medium ? ` · ${MEDIUM_WORDS[c.medium] ?? c.medium}` : ''}`}
+                      secondary={`A: ${endWords(c, 'A', data.areaNames)} → B: ${endWords(c, 'B', data.areaNames)} · ${CABLE_STATUS_WORDS[c.status ?? 'unidentified']}`}
+                    />
+                    {verdict && <VerdictChip verdict={verdict} />}
+                  </ListItemButton>
+                </ListItem>
               );
             })}
           </List>

@@ -1,6 +1,7 @@
 import ChevronRight from '@mui/icons-material/ChevronRight';
 import Chip from '@mui/material/Chip';
 import List from '@mui/material/List';
+import ListItem from '@mui/material/ListItem';
 import ListItemButton from '@mui/material/ListItemButton';
 import ListItemText from '@mui/material/ListItemText';
 import ListSubheader from '@mui/material/ListSubheader';
@@ -23,20 +24,22 @@ function CircuitItem({ circuit, data, visitId, waiting }: { circuit: CircuitRow;
   const verdict = result ? assess(circuit, readingsOf(result), data.site?.earthing).verdict : null;
   const device = circuit.deviceType && circuit.deviceRatingA ? `${circuit.deviceType}${circuit.deviceRatingA}` : null;
   return (
-    <ListItemButton divider component={RouterLink} to={paths.visitCircuit.href(visitId, circuit.id)} sx={{ gap: 1 }}>
-      <ListItemText
-        primary={`${circuit.number} · ${circuit.description || 'No description'}`}
-        secondary={[circuit.kind ? circuitKindWords(circuit.kind) : null, device, circuit.rcdRatingMa ? `${circuit.rcdRatingMa} mA RCD` : null, altered ? 'altered on this visit' : null, waiting ? 'waiting to send' : null]
-          .filter(Boolean)
-          .join(' · ')}
-      />
-      {verdict ? (
-        <VerdictChip verdict={verdict} prefix="Tests" />
-      ) : altered ? (
-        <Chip size="small" color="warning" variant="outlined" label="Not tested" />
-      ) : null}
-      <ChevronRight color="action" />
-    </ListItemButton>
+    <ListItem disablePadding divider>
+      <ListItemButton component={RouterLink} to={paths.visitCircuit.href(visitId, circuit.id)} sx={{ gap: 1 }}>
+        <ListItemText
+          primary={`${circuit.number} · ${circuit.description || 'No description'}`}
+          secondary={[circuit.kind ? circuitKindWords(circuit.kind) : null, device, circuit.rcdRatingMa ? `${circuit.rcdRatingMa} mA RCD` : null, altered ? 'altered on this visit' : null, waiting ? 'waiting to send' : null]
+            .filter(Boolean)
+            .join(' · ')}
+        />
+        {verdict ? (
+          <VerdictChip verdict={verdict} prefix="Tests" />
+        ) : altered ? (
+          <Chip size="small" color="warning" variant="outlined" label="Not tested" />
+        ) : null}
+        <ChevronRight color="action" />
+      </ListItemButton>
+    </ListItem>
   );
 }
 

@@ -133,7 +133,7 @@ export function InvoicesTable({ jobLink }: { jobLink: (jobId: string) => string 
                     <StandingChip invoice={i} />
                   </TableCell>
                   <TableCell align="right">
-                    <Button component={RouterLink} to={jobLink(i.jobId)} aria-label={`${i.number ?? 'Draft'}: the job’s quotes and invoices`} sx={{ whiteSpace: 'nowrap' }}>
+                    <Button component={RouterLink} to={jobLink(i.jobId)} aria-label={`Job’s billing: ${i.number ?? 'draft'} and the rest of the job’s quotes and invoices`} sx={{ whiteSpace: 'nowrap' }}>
                       Job’s billing
                     </Button>
                   </TableCell>

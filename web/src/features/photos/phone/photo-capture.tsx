@@ -2,7 +2,7 @@ import PhotoCameraOutlined from '@mui/icons-material/PhotoCameraOutlined';
 import PhotoLibraryOutlined from '@mui/icons-material/PhotoLibraryOutlined';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
-import Button from '@mui/material/Button';
+import Button, { type ButtonProps } from '@mui/material/Button';
 import Chip from '@mui/material/Chip';
 import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
@@ -12,7 +12,7 @@ import LinearProgress from '@mui/material/LinearProgress';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
-import { type ChangeEvent, type CSSProperties, type FormEvent, useEffect, useMemo, useState } from 'react';
+import { type ChangeEvent, type CSSProperties, type FormEvent, useEffect, useId, useMemo, useState } from 'react';
 import { addPhoto, type PhotoSubjectType } from '@/lib/photos/add-photo';
 import { shrinkPhoto } from '@/lib/photos/shrink-photo';
 import { LocalWriteError } from '@/lib/sync/local-write';
@@ -55,22 +55,18 @@ export function PhotoCapture({ visitId, siteId, userId, preset }: Props) {
 
   return (
     <Stack spacing={1}>
-      <Button
-        component="label"
+      <PickPhotosButton
         variant="contained"
         color="secondary"
         size="large"
         startIcon={<PhotoCameraOutlined sx={{ fontSize: '2rem !important' }} />}
         sx={{ minHeight: 72, fontSize: '1.2rem', borderRadius: 3 }}
-      >
-        {preset?.label ?? 'Take or add photos'}
-        <input type="file" accept="image/*" capture="environment" multiple onChange={choose} style={hiddenInput} />
-      </Button>
+        label={preset?.label ?? 'Take or add photos'}
+        capture="environment"
+        onChoose={choose}
+      />
       {/* Android opens the camera straight away for the button above; this one opens the gallery. */}
-      <Button component="label" variant="text" startIcon={<PhotoLibraryOutlined />} sx={{ alignSelf: 'center' }}>
-        Choose from the gallery
-        <input type="file" accept="image/*" multiple onChange={choose} style={hiddenInput} />
-      </Button>
+      <PickPhotosButton variant="text" startIcon={<PhotoLibraryOutlined />} sx={{ alignSelf: 'center' }} label="Choose from the gallery" onChoose={choose} />
       <Typography variant="body2" color="text.secondary" role="status" sx={{ textAlign: 'center', minHeight: '1.5em' }}>
         {saved}
       </Typography>
@@ -88,6 +84,22 @@ export function PhotoCapture({ visitId, siteId, userId, preset }: Props) {
         />
       )}
     </Stack>
+  );
+}
+
+/**
+ * A button that opens the file picker. The input sits beside the label rather than inside it, so the button holds
+ * no second control for a screen reader to stumble on; the input keeps the label's name and takes no tab stop.
+ */
+function PickPhotosButton({ label, capture, onChoose, ...button }: Omit<ButtonProps<'label'>, 'onChange' | 'children'> & { label: string; capture?: 'environment'; onChoose: (e: ChangeEvent<HTMLInputElement>) => void }) {
+  const id = useId();
+  return (
+    <>
+      <Button component="label" htmlFor={id} {...button}>
+        {label}
+      </Button>
+      <input id={id} type="file" accept="image/*" capture={capture} multiple tabIndex={-1} onChange={onChoose} style={hiddenInput} />
+    </>
   );
 }
 

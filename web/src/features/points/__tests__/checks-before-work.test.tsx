@@ -61,7 +61,7 @@ describe('checks before the work on the Points form', () => {
 
   it('sizes the new cable and its cpc from the installation method picked from pictures', async () => {
     const f = await ringExtension();
-    fireEvent.click(within(f).getByRole('button', { name: /Method 103: In an insulated stud wall, not touching the board/ }));
+    fireEvent.click(within(f).getByRole('button', { name: /^Method 103 In an insulated stud wall, not touching the board/ }));
     const checks = await within(f).findByRole('status', { name: 'Checks before the work' });
     // Method 103, 2.5 mm²: 13.5 A, below the 20 A a ring's cable must carry (Table 4D5; Reg 433.1.204)
     const cable = await within(checks).findByRole('listitem', { name: 'New cable' });

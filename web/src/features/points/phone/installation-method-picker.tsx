@@ -67,7 +67,7 @@ const PICTURES: Record<InstallationMethod, ReactNode> = {
 /** A drawing of one reference method, with its name for screen readers. */
 export function InstallationMethodPicture({ method }: { method: InstallationMethod }) {
   return (
-    <svg viewBox="0 0 68 60" width={68} height={60} role="img" aria-label={installationMethodDescription(method)}>
+    <svg viewBox="0 0 68 60" width={68} height={60} aria-hidden="true">
       <defs>
         <pattern id="wiretrail-insulation" width={6} height={6} patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
           <rect width={6} height={6} fill="#fff8e1" />
@@ -91,7 +91,7 @@ export function InstallationMethodPicker({ value, onChange, disabled }: { value:
       sx={{ display: 'grid', gridTemplateColumns: 'repeat(2, 1fr)', gap: 1, '& .MuiToggleButtonGroup-grouped': { border: 1, borderColor: 'divider', borderRadius: 1, m: 0 } }}
     >
       {INSTALLATION_METHODS.map((m) => (
-        <ToggleButton key={m} value={m} aria-label={`Method ${m}: ${installationMethodDescription(m)}`} sx={{ flexDirection: 'column', gap: 0.5, textTransform: 'none', alignItems: 'center' }}>
+        <ToggleButton key={m} value={m} sx={{ flexDirection: 'column', gap: 0.5, textTransform: 'none', alignItems: 'center' }}>
           <InstallationMethodPicture method={m} />
           <Box>
             <Typography variant="body2" sx={{ fontWeight: 500 }}>

@@ -1,6 +1,7 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import Button from '@mui/material/Button';
 import List from '@mui/material/List';
+import ListItem from '@mui/material/ListItem';
 import ListItemButton from '@mui/material/ListItemButton';
 import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
@@ -45,19 +46,21 @@ export function PointList({ visitId, siteId, locked }: { visitId: string; siteId
               const from = placeWords(p, 'from', areaNames);
               const to = placeWords(p, 'to', areaNames);
               return (
-                <ListItemButton key={p.id} divider component={RouterLink} to={paths.visitPoint.href(visitId, p.id)}>
-                  <ListItemText
-                    primary={`${ACTION_WORDS[p.action] ?? p.action}: ${p.accessoryKind ?? 'point'}`}
-                    secondary={[
-                      from && to ? `${from} → ${to}` : from || to,
-                      [p.circuitId ? circuitNames.get(p.circuitId) : null, p.connection ? CONNECTION_WORDS[p.connection] : null, p.fuseRatingA ? `${p.fuseRatingA}\u00a0A fuse` : null]
+                <ListItem key={p.id} disablePadding divider>
+                  <ListItemButton component={RouterLink} to={paths.visitPoint.href(visitId, p.id)}>
+                    <ListItemText
+                      primary={`${ACTION_WORDS[p.action] ?? p.action}: ${p.accessoryKind ?? 'point'}`}
+                      secondary={[
+                        from && to ? `${from} → ${to}` : from || to,
+                        [p.circuitId ? circuitNames.get(p.circuitId) : null, p.connection ? CONNECTION_WORDS[p.connection] : null, p.fuseRatingA ? `${p.fuseRatingA}\u00a0A fuse` : null]
+                          .filter(Boolean)
+                          .join(' · '),
+                      ]
                         .filter(Boolean)
-                        .join(' · '),
-                    ]
-                      .filter(Boolean)
-                      .join(' — ')}
-                  />
-                </ListItemButton>
+                        .join(' — ')}
+                    />
+                  </ListItemButton>
+                </ListItem>
               );
             })}
           </List>

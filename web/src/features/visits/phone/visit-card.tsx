@@ -10,6 +10,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
+import { VisuallyHidden } from '@/components/visually-hidden';
 import { paths } from '@/config/paths';
 import type { SiteRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
@@ -45,18 +46,21 @@ export function VisitCard({ summary }: { summary: VisitSummary }) {
   }
   return (
     <Card variant="outlined" component="article" aria-label={title}>
-      <CardActionArea component={RouterLink} to={paths.visit.href(visit.id)} aria-label={`Open ${title}, ${dayLabel(visit.plannedStart ?? new Date().toISOString())} ${timeWindow(visit.plannedStart, visit.plannedEnd)}`}>
-        <CardContent sx={{ pb: 1 }}>
-          <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'center', gap: 1, mb: 0.5 }}>
+      {/* No label of its own: the link is named by what it shows, the title first, so a screen reader says what a tap opens. */}
+      <CardActionArea component={RouterLink} to={paths.visit.href(visit.id)}>
+        <CardContent sx={{ pb: 1, display: 'flex', flexDirection: 'column' }}>
+          <VisuallyHidden>Open </VisuallyHidden>
+          <Typography variant="h3" component="h2">
+            {title}
+          </Typography>
+          {/* Shown above the title, read after it. */}
+          <Stack direction="row" sx={{ order: -1, justifyContent: 'space-between', alignItems: 'center', gap: 1, mb: 0.5 }}>
             <Typography variant="body2" sx={{ fontWeight: 500 }}>
               {visit.plannedStart ? `${dayLabel(visit.plannedStart)} · ` : ''}
               {timeWindow(visit.plannedStart, visit.plannedEnd)}
             </Typography>
             <Chip size="small" label={visitStatusWords(status)} color={status === 'on-site' ? 'secondary' : 'default'} />
           </Stack>
-          <Typography variant="h3" component="h2">
-            {title}
-          </Typography>
           {customer && <Typography color="text.secondary">{customer.name}</Typography>}
           <Stack direction="row" sx={{ gap: 0.5, alignItems: 'flex-start', mt: 0.5, color: 'text.secondary' }}>
             <PlaceOutlined fontSize="small" sx={{ mt: '2px' }} />

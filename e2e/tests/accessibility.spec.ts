@@ -1,0 +1,106 @@
+import AxeBuilder from '@axe-core/playwright';
+import type { Page, TestInfo } from '@playwright/test';
+import { bookVisit, DESK, expect, PHONE, ROLE_USERS, test } from '../fixtures.js';
+
+/** WCAG 2.1 A and AA: what the public sector in the UK is held to, and what a paying customer may ask of us. */
+const WCAG_TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'];
+
+/** Runs axe on the page as it stands and fails with a line per problem and the elements it found it on. */
+async function expectNoAxeViolations(page: Page, testInfo: TestInfo, screen: string): Promise<void> {
+  // A screenshot of each screen checked, kept for whoever looks at the run (set SCREENSHOT_DIR to keep them all).
+  const dir = process.env.SCREENSHOT_DIR;
+  if (dir) await page.screenshot({ path: `${dir}/${testInfo.project.name}-${screen.replace(/\W+/g, '-')}-${page.viewportSize()?.width}.png`, fullPage: true });
+  const { violations } = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
+  const problems = violations.map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).slice(0, 4).join(' | ')}`);
+  expect.soft(problems, `accessibility problems on ${screen}`).toEqual([]);
+}
+
+for (const [size, viewport] of [
+  ['phone', PHONE],
+  ['desk', DESK],
+] as const) {
+  test.describe(`a technician's screens at ${size} size`, () => {
+    test.use({ viewport, signedInAs: 'technician' });
+
+    test(`Today, a visit's sections, the Points form with its checks, the readings and the sign-off pass WCAG 2.1 AA (${size})`, async ({
+      page,
+      request,
+      technicianVisit: visitPage,
+    }, testInfo) => {
+      test.setTimeout(180_000);
+      const title = `Accessible screens ${size} (${Date.now().toString(36)})`;
+      await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 9, endHour: 12 });
+      await visitPage.openToday();
+      await expectNoAxeViolations(page, testInfo, 'today');
+
+      await visitPage.openFromToday(title);
+      await expectNoAxeViolations(page, testInfo, 'visit trail');
+      await visitPage.section('Cables');
+      await expectNoAxeViolations(page, testInfo, 'visit cables');
+
+      await visitPage.section('Points');
+      await expectNoAxeViolations(page, testInfo, 'visit points with cautions');
+      await visitPage.readCautions();
+      await page.getByRole('link', { name: 'Record a point change' }).click();
+      const pointForm = visitPage.pointForm;
+      await pointForm.getByRole('button', { name: 'New point', exact: true }).click();
+      await pointForm.getByLabel('Accessory').fill('Twin socket-outlet');
+      await pointForm.getByLabel('Circuit', { exact: true }).selectOption({ label: '1 · Sockets, ground floor' });
+      await pointForm.getByLabel('How it joins the circuit').selectOption({ label: 'Ring extended through it' });
+      await pointForm.getByLabel('Cable added to the ring (m)').fill('8');
+      await pointForm.getByLabel('r1 before (Ω)').fill('0.3705');
+      await pointForm.getByLabel('rn before (Ω)').fill('0.3705');
+      await pointForm.getByLabel('r2 before (Ω)').fill('0.605');
+      await pointForm.getByRole('button', { name: /^Method 103 / }).click();
+      await expect(pointForm.getByRole('status', { name: 'Checks before the work' }).getByRole('listitem', { name: 'New cable' })).toContainText('Iz 13.5 A');
+      // Bad input on purpose: the error it shows must be as readable as the rest
+      await pointForm.getByLabel('r2 before (Ω)').fill('-1');
+      await expectNoAxeViolations(page, testInfo, 'point form with checks');
+      await page.goBack();
+
+      await visitPage.section('Circuits & tests');
+      await expectNoAxeViolations(page, testInfo, 'visit circuits');
+      await page.getByRole('list', { name: 'Circuits on this site' }).getByRole('link', { name: /^1 · Sockets, ground floor/ }).click();
+      await expect(page.getByRole('form', { name: 'Readings for circuit 1' })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'circuit readings');
+      await page.goBack();
+
+      await visitPage.section('Sign-off');
+      await expectNoAxeViolations(page, testInfo, 'sign-off');
+
+      await page.getByRole('link', { name: 'Sync', exact: true }).first().click();
+      await expectNoAxeViolations(page, testInfo, 'sync');
+    });
+  });
+
+  test.describe(`the office's screens at ${size} size`, () => {
+    test.use({ viewport, signedInAs: 'admin' });
+
+    test(`Jobs, a job's tabs, schedule, customers, conflicts, invoices, price list and team pass WCAG 2.1 AA (${size})`, async ({ page, officeJob }, testInfo) => {
+      test.setTimeout(180_000);
+      await page.goto('/jobs');
+      await expect(page.getByRole('heading', { level: 1, name: 'Jobs' })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'jobs');
+
+      await page.getByRole('link', { name: /Move two lounge sockets/ }).first().click();
+      await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'job photo trail');
+      for (const tab of ['Cable schedule', 'Documents & links'] as const) {
+        await officeJob.tab(tab);
+        await expectNoAxeViolations(page, testInfo, `job ${tab}`);
+      }
+      for (const [path, heading] of [
+        ['/schedule', 'Schedule'],
+        ['/customers', 'Customers & sites'],
+        ['/conflicts', 'Conflicts'],
+        ['/invoices', 'Invoices'],
+        ['/price-list', 'Price list'],
+        ['/team', 'Team'],
+      ] as const) {
+        await page.goto(path);
+        await expect(page.getByRole('heading', { level: 1, name: heading })).toBeVisible();
+        await expectNoAxeViolations(page, testInfo, heading);
+      }
+    });
+  });
+}
