@@ -10,9 +10,27 @@ async function expectNoAxeViolations(page: Page, testInfo: TestInfo, screen: str
   // A screenshot of each screen checked, kept for whoever looks at the run (set SCREENSHOT_DIR to keep them all).
   const dir = process.env.SCREENSHOT_DIR;
   if (dir) await page.screenshot({ path: `${dir}/${testInfo.project.name}-${screen.replace(/\W+/g, '-')}-${page.viewportSize()?.width}.png`, fullPage: true });
+  // Colours are judged at rest: a button caught half way through a transition reads as low contrast.
+  await page.addStyleTag({ content: '*, *::before, *::after { transition: none !important; animation: none !important; }' });
   const { violations } = await new AxeBuilder({ page }).withTags(WCAG_TAGS).analyze();
-  const problems = violations.map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).slice(0, 4).join(' | ')}`);
+  const problems = violations.map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => `${n.target.join(' ')} ${n.html.slice(0, 80)}`).slice(0, 4).join(' | ')}`);
   expect.soft(problems, `accessibility problems on ${screen}`).toEqual([]);
+  // WCAG 1.4.10 (reflow): at a phone's width the page itself never scrolls sideways; a wide table scrolls in its box.
+  const width = page.viewportSize()!.width;
+  const wide = await page.evaluate((w) => {
+    if (document.documentElement.scrollWidth <= w) return [];
+    // The outermost elements that reach past the right edge, to say what to mend.
+    const past = (el: Element) => el.getBoundingClientRect().right > w + 1;
+    const clipped = (el: Element): boolean => {
+      for (let a = el.parentElement; a; a = a.parentElement) if (getComputedStyle(a).overflowX !== 'visible' && !past(a)) return true;
+      return false;
+    };
+    return Array.from(document.body.querySelectorAll('*'))
+      .filter((el) => past(el) && !clipped(el) && el.parentElement && !past(el.parentElement))
+      .slice(0, 4)
+      .map((el) => `${el.tagName.toLowerCase()}.${el.className.toString().split(' ').slice(0, 2).join('.')} "${(el.textContent ?? '').slice(0, 40)}"`);
+  }, width);
+  expect.soft(wide, `${screen} is wider than the screen`).toEqual([]);
 }
 
 for (const [size, viewport] of [

@@ -17,11 +17,6 @@ export function trailTime(iso: string | null | undefined, now = new Date()): str
   return sameDay(d, now) ? time.format(d) : dayAndTimeFormat.format(d);
 }
 
-export function megabytes(bytes: number): string {
-  const mb = bytes / 1e6;
-  return mb < 0.1 && bytes > 0 ? '0.1 MB' : mb < 10 ? `${mb.toFixed(1)} MB` : `${Math.round(mb)} MB`;
-}
-
 /** A photo's tags as stored (a JSON list, or the list itself). */
 export function tagList(tags: unknown): string[] {
   if (Array.isArray(tags)) return tags.filter((t): t is string => typeof t === 'string');

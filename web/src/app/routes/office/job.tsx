@@ -95,7 +95,7 @@ export function Component() {
         <JobConflictsNotice jobId={j.id} />
         <HeldChanges jobId={j.id} />
         <Box sx={{ borderBottom: 1, borderColor: 'divider' }}>
-          <Tabs value={tab} onChange={(_, value: TabValue) => setParams(value === 'overview' ? {} : { tab: value }, { replace: true })} aria-label="Job record">
+          <Tabs variant="scrollable" scrollButtons="auto" allowScrollButtonsMobile value={tab} onChange={(_, value: TabValue) => setParams(value === 'overview' ? {} : { tab: value }, { replace: true })} aria-label="Job record">
             {TABS.map((t) => (
               <Tab key={t.value} value={t.value} label={t.label} id={`job-tab-${t.value}`} aria-controls={`job-panel-${t.value}`} />
             ))}

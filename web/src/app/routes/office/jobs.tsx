@@ -37,7 +37,7 @@ export function Component() {
             : `${total} ${total === 1 ? 'job' : 'jobs'}${Object.values(filters).some(Boolean) ? ' match' : ''}.${state.view === 'board' ? ' Drag a card, or use its menu, to move a job on.' : ''}`
         }
         action={
-          <Stack direction="row" sx={{ alignItems: 'center', gap: 2 }}>
+          <Stack direction="row" sx={{ alignItems: 'center', gap: 2, flexWrap: 'wrap' }}>
             {state.view === 'board' && (
               <FormControlLabel
                 sx={{ whiteSpace: 'nowrap' }}

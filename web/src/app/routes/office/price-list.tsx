@@ -20,7 +20,7 @@ export function Component() {
   return (
     <>
       <PageHeader title="Price list" subtitle="What you charge: parts, labour, VAT, and the terms every quote and invoice starts with." />
-      <Tabs value={tab} onChange={(_, key: string) => setParams(key === 'items' ? {} : { tab: key }, { replace: true })} aria-label="Price list sections" sx={{ mb: 2, borderBottom: 1, borderColor: 'divider' }}>
+      <Tabs variant="scrollable" scrollButtons="auto" value={tab} onChange={(_, key: string) => setParams(key === 'items' ? {} : { tab: key }, { replace: true })} aria-label="Price list sections" sx={{ mb: 2, borderBottom: 1, borderColor: 'divider' }}>
         {TABS.map((t) => (
           <Tab key={t.key} value={t.key} label={t.label} id={`pricing-tab-${t.key}`} aria-controls={`pricing-panel-${t.key}`} />
         ))}

@@ -10,18 +10,19 @@ import { useEffect, useState } from 'react';
 import { PageHeader } from '@/components/page-header';
 import { PhotoUploads } from '@/features/photos/phone/photo-uploads';
 import { FailedChanges } from '@/features/sync/components/failed-changes';
+import { dataSize } from '@/lib/data-size';
 import { useSession } from '@/lib/session';
 import { syncNow } from '@/lib/sync/sync-runner';
 import { useSyncStatus } from '@/lib/sync/use-sync-status';
 
 interface StorageState {
-  usedMb: number | null;
-  quotaMb: number | null;
+  usedBytes: number | null;
+  quotaBytes: number | null;
   persisted: boolean | null;
 }
 
 function useStorageState(refreshKey: unknown): StorageState {
-  const [state, setState] = useState<StorageState>({ usedMb: null, quotaMb: null, persisted: null });
+  const [state, setState] = useState<StorageState>({ usedBytes: null, quotaBytes: null, persisted: null });
   useEffect(() => {
     let live = true;
     void (async () => {
@@ -29,8 +30,8 @@ function useStorageState(refreshKey: unknown): StorageState {
       const persisted = await navigator.storage?.persisted?.().catch(() => null);
       if (live) {
         setState({
-          usedMb: estimate?.usage != null ? estimate.usage / 1e6 : null,
-          quotaMb: estimate?.quota != null ? estimate.quota / 1e6 : null,
+          usedBytes: estimate?.usage != null ? estimate.usage : null,
+          quotaBytes: estimate?.quota != null ? estimate.quota : null,
           persisted: persisted ?? null,
         });
       }
@@ -42,7 +43,7 @@ function useStorageState(refreshKey: unknown): StorageState {
   return state;
 }
 
-const mb = (v: number | null) => (v == null ? 'unknown' : v < 10 ? `${v.toFixed(1)} MB` : `${Math.round(v)} MB`);
+const size = (bytes: number | null) => (bytes == null ? 'unknown' : dataSize(bytes));
 const when = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
 
 function ago(iso: string, now: number): string {
@@ -116,7 +117,7 @@ export function Component() {
               />
             </ListItem>
             <ListItem>
-              <ListItemText primary="Storage used on this phone" secondary={`${mb(storage.usedMb)} of ${mb(storage.quotaMb)}`} />
+              <ListItemText primary="Storage used on this phone" secondary={`${size(storage.usedBytes)} of ${size(storage.quotaBytes)}`} />
             </ListItem>
             <ListItem>
               <ListItemText

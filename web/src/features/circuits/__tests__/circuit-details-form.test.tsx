@@ -31,7 +31,9 @@ describe('the circuit’s details for the certificate', () => {
     expect(field(f, 'Device standard, BS (EN)').value).toBe('BS EN 60898-1');
     expect(field(f, 'RCD standard, BS (EN)').value).toBe('BS EN 61008-1');
     expect(field(f, 'Maximum disconnection time (s)').value).toBe('0.4');
-    expect(within(f).getAllByText('The standard value: check it against the device.').length).toBe(3);
+    expect(within(f).getAllByText('The standard value: check it against the device.').length).toBe(2);
+    // The time is the regulations', not the device's
+    expect(within(f).getByText('From Table 41.1 for this circuit and supply: check it applies.')).toBeTruthy();
     expect(field(f, 'AFDD').value).toBe('');
 
     // A BS 88-3 fuse is named by its own standard (BS 7671:2018+A2:2022 Table 41.2 lists it so).

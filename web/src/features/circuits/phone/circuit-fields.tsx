@@ -136,7 +136,8 @@ export function CircuitDetailFields({ register, control, errors }: { register: U
     <>
       {/* Controlled, so the recorded choice shows and the standard values offered follow it. */}
       <Controller control={control} name="kind" render={({ field }) => <NativeChoice label="Kind" {...field} options={choicesOf(CIRCUIT_KINDS, CIRCUIT_KIND_WORDS)} />} />
-      <Stack direction="row" spacing={1.5}>
+      {/* Stacked on a phone, so the device's name is not cut short. */}
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
         <Controller
           control={control}
           name="deviceType"
@@ -199,7 +200,7 @@ export function CertificateDetailFields({
   offered: ReadonlySet<keyof CircuitDetails>;
 }) {
   const num = { htmlInput: { inputMode: 'decimal' as const } };
-  const hint = (field: keyof CircuitDetails, usual: string) => errors[field]?.message ?? (offered.has(field) ? 'The standard value: check it against the device.' : usual);
+  const hint = (field: keyof CircuitDetails, usual: string, offeredWords = 'The standard value: check it against the device.') => errors[field]?.message ?? (offered.has(field) ? offeredWords : usual);
   const hasRcd = usableReading(values.rcdRatingMa) !== null;
   return (
     <>
@@ -211,7 +212,7 @@ export function CertificateDetailFields({
         )}
       />
       {hasRcd && (
-        <Stack direction="row" spacing={1.5}>
+        <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
           <Controller
             control={control}
             name="rcdStandard"
@@ -219,7 +220,7 @@ export function CertificateDetailFields({
               <NativeChoice label="RCD standard, BS (EN)" {...field} emptyLabel="Not known" options={standardChoices(RCD_STANDARD_CHOICES, values.rcdStandard)} helperText={hint('rcdStandard', 'BS EN 61009-1 for an RCBO.')} />
             )}
           />
-          <TextField label="RCD rated current (A)" {...register('rcdRatedCurrentA')} error={!!errors.rcdRatedCurrentA} helperText={hint('rcdRatedCurrentA', 'In, as printed on it.')} slotProps={num} sx={{ maxWidth: 170 }} />
+          <TextField label="RCD rated current (A)" {...register('rcdRatedCurrentA')} error={!!errors.rcdRatedCurrentA} helperText={hint('rcdRatedCurrentA', 'In, as printed on it.')} slotProps={num} sx={{ maxWidth: { sm: 170 } }} />
         </Stack>
       )}
       <Controller
@@ -231,7 +232,7 @@ export function CertificateDetailFields({
         <TextField label="Reference method" placeholder="C" {...register('referenceMethod')} error={!!errors.referenceMethod} helperText={errors.referenceMethod?.message ?? 'How the cable is installed, as in Appendix 4.'} />
         <TextField label="Points served" {...register('pointsServed')} error={!!errors.pointsServed} helperText={errors.pointsServed?.message ?? ' '} slotProps={{ htmlInput: { inputMode: 'numeric' } }} sx={{ maxWidth: 130 }} />
       </Stack>
-      <TextField label="Maximum disconnection time (s)" {...register('maxDisconnectionS')} error={!!errors.maxDisconnectionS} helperText={hint('maxDisconnectionS', 'Allowed by the regulations for this circuit.')} slotProps={num} />
+      <TextField label="Maximum disconnection time (s)" {...register('maxDisconnectionS')} error={!!errors.maxDisconnectionS} helperText={hint('maxDisconnectionS', 'Allowed by the regulations for this circuit.', 'From Table 41.1 for this circuit and supply: check it applies.')} slotProps={num} />
     </>
   );
 }

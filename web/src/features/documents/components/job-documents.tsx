@@ -78,7 +78,7 @@ export function JobDocuments({ jobId }: { jobId: string }) {
       </Stack>
 
       <Paper variant="outlined" sx={{ p: 2 }}>
-        <Box role="group" aria-label="Issue a document" sx={{ display: 'grid', gap: 2, gridTemplateColumns: 'repeat(3, minmax(0, 1fr))' }}>
+        <Box role="group" aria-label="Issue a document" sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: 'repeat(3, minmax(0, 1fr))' } }}>
           {DOCUMENT_KINDS.map((k) => (
             <Stack key={k.kind} spacing={0.75} sx={{ alignItems: 'flex-start' }}>
               <Button variant="outlined" startIcon={<DescriptionOutlined />} disabled={issue.isPending} onClick={() => setConfirming(k.kind)}>

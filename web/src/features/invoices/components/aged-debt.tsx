@@ -41,7 +41,7 @@ export function AgedDebt({ jobLink }: { jobLink: (jobId: string) => string }) {
         </Typography>
         <Typography color="text.secondary">on {dateWords(d.asOf)}, by days past the due date</Typography>
       </Stack>
-      <Box role="list" aria-label="Owed, by how late" sx={{ display: 'grid', gap: 1.5, gridTemplateColumns: 'repeat(6, minmax(0, 1fr))' }}>
+      <Box role="list" aria-label="Owed, by how late" sx={{ display: 'grid', gap: 1.5, gridTemplateColumns: { xs: 'repeat(2, minmax(0, 1fr))', sm: 'repeat(3, minmax(0, 1fr))', lg: 'repeat(6, minmax(0, 1fr))' } }}>
         {d.buckets.map((b) => (
           <Paper role="listitem" aria-label={`${b.label}: ${formatMoney(d.totals[b.key])}`} key={b.key} variant="outlined" sx={{ p: 1.5, borderTop: 3, borderTopColor: TONE[b.key] }}>
             <Typography variant="body2" color="text.secondary">

@@ -15,7 +15,7 @@ export function JobSummary({ job }: { job: Job }) {
   const update = useUpdateJob();
   return (
     <Paper variant="outlined" component="section" aria-label="Summary" sx={{ p: 2 }}>
-      <Box sx={{ display: 'grid', gridTemplateColumns: '220px 160px 200px 1fr', gap: 3, alignItems: 'start' }}>
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr 1fr', md: '220px 160px 200px 1fr' }, gap: 3, alignItems: 'start' }}>
         <TextField
           select
           size="small"

@@ -11,7 +11,7 @@ import { useState } from 'react';
 import { DEFAULT_KEEP_ORIGINALS_DAYS } from '@/lib/photos/free-originals';
 import { useUploadProgress } from '@/lib/photos/upload-progress';
 import { keepOriginalsFor, usePhotoStorageSummary } from '../data/get-photo-states';
-import { megabytes } from '../trail-time';
+import { dataSize } from '@/lib/data-size';
 
 const KEEP_CHOICES = [
   { days: 0, label: 'Free them as soon as the office has them' },
@@ -41,14 +41,14 @@ export function PhotoUploads({ userId }: { userId: string }) {
         <ListItem>
           <ListItemText
             primary="Photos waiting to send"
-            secondary={!summary ? '…' : summary.waiting === 0 ? 'No photos waiting' : `${photos(summary.waiting)} · ${megabytes(summary.waitingBytes)}`}
+            secondary={!summary ? '…' : summary.waiting === 0 ? 'No photos waiting' : `${photos(summary.waiting)} · ${dataSize(summary.waitingBytes)}`}
           />
         </ListItem>
         {progress.active && progress.roundTotal > 0 && (
           <ListItem>
             <Stack spacing={0.75} sx={{ width: '100%' }}>
               <Typography variant="body2">
-                Sending photos: {Math.floor(share)} % ({megabytes(progress.roundSent)} of {megabytes(progress.roundTotal)})
+                Sending photos: {Math.floor(share)} % ({dataSize(progress.roundSent)} of {dataSize(progress.roundTotal)})
               </Typography>
               <LinearProgress variant="determinate" value={share} aria-label="Photos sent" sx={{ height: 8, borderRadius: 4 }} />
             </Stack>
@@ -78,7 +78,7 @@ export function PhotoUploads({ userId }: { userId: string }) {
         <ListItem>
           <ListItemText
             primary="Full-size photos on this phone"
-            secondary={summary ? `${photos(summary.kept)} · ${megabytes(summary.keptBytes)}. Thumbnails always stay.` : '…'}
+            secondary={summary ? `${photos(summary.kept)} · ${dataSize(summary.keptBytes)}. Thumbnails always stay.` : '…'}
           />
         </ListItem>
         <ListItem>

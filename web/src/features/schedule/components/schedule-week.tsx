@@ -41,11 +41,11 @@ export function ScheduleWeek() {
 
   return (
     <>
-      <Stack direction="row" sx={{ alignItems: 'center', gap: 1, mb: 2 }}>
+      <Stack direction="row" sx={{ alignItems: 'center', gap: 1, mb: 2, flexWrap: 'wrap' }}>
         <IconButton aria-label="Previous week" onClick={() => setMonday(addDays(monday, -7))}>
           <ChevronLeft />
         </IconButton>
-        <Typography variant="h3" sx={{ minWidth: 260, textAlign: 'center' }} aria-live="polite">
+        <Typography variant="h3" sx={{ minWidth: { sm: 260 }, textAlign: 'center' }} aria-live="polite">
           Week of {dayLabel.format(monday)}
         </Typography>
         <IconButton aria-label="Next week" onClick={() => setMonday(addDays(monday, 7))}>

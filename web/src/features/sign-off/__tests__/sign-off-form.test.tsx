@@ -28,6 +28,12 @@ describe('sign-off', () => {
     expect(within(list).getByText('Not tested: Circuit 4 (Cooker)')).toBeTruthy();
   });
 
+  it('does not show a visit with nothing tested as passed', async () => {
+    show(paths.visitSignOff.href(ids.visit));
+    expect(await screen.findByText('No circuit was altered or tested on this visit, so there are no readings to judge.', {}, { timeout: 15_000 })).toBeTruthy();
+    expect(screen.queryByText('No fails and no missing readings.')).toBeNull();
+  });
+
   it('will not finish without the work described, a name and a signature', async () => {
     show(paths.visitSignOff.href(ids.visit));
     const form = await screen.findByRole('form', { name: 'Sign off' });

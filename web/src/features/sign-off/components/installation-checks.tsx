@@ -95,13 +95,21 @@ export function InstallationChecks({ site, boards, locked }: { site: SiteRow | u
             As found at the installation, for the certificate. Carried from the last visit to this site: check them again.
           </Typography>
           {boards.map((b) => (
-            <TextField
+            // Controlled, so the label moves out of the way of a figure carried from the last visit.
+            <Controller
               key={b.id}
-              label={`Zdb at ${b.name} (Ω)`}
-              {...register(`zdb.${b.id}`)}
-              error={!!errors.zdb?.[b.id]}
-              helperText={errors.zdb?.[b.id]?.message ?? 'Earth fault loop impedance measured at the board.'}
-              slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' } }}
+              control={control}
+              name={`zdb.${b.id}`}
+              render={({ field }) => (
+                <TextField
+                  label={`Zdb at ${b.name} (Ω)`}
+                  {...field}
+                  value={field.value ?? ''}
+                  error={!!errors.zdb?.[b.id]}
+                  helperText={errors.zdb?.[b.id]?.message ?? 'Earth fault loop impedance measured at the board.'}
+                  slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' } }}
+                />
+              )}
             />
           ))}
           {choice('earthingConductor', 'Earthing conductor', CONDUCTOR_WORDS, EARTHING_CONDUCTOR_STATES)}

@@ -220,7 +220,7 @@ export function SignOffForm({ visit, defaultDescription, signerName, signerPosit
           minRows={1}
           {...register('permittedExceptions')}
           error={!!errors.permittedExceptions}
-          helperText={errors.permittedExceptions?.message ?? 'Where the regulations allow a part without fault protection. Blank if none.'}
+          helperText={errors.permittedExceptions?.message ?? 'Where 30 mA RCD protection of a socket-outlet is left off on a documented risk assessment. Blank if none.'}
         />
         {permittedExceptions?.trim() && (
           <TextField label="Risk assessment reference" {...register('riskAssessmentRef')} error={!!errors.riskAssessmentRef} helperText={errors.riskAssessmentRef?.message ?? 'The risk assessment kept with the certificate.'} />

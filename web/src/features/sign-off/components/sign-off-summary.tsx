@@ -1,6 +1,7 @@
 import CheckCircleOutlined from '@mui/icons-material/CheckCircleOutlined';
 import ErrorOutlineOutlined from '@mui/icons-material/ErrorOutlineOutlined';
 import HelpOutlineOutlined from '@mui/icons-material/HelpOutlineOutlined';
+import InfoOutlined from '@mui/icons-material/InfoOutlined';
 import List from '@mui/material/List';
 import ListItem from '@mui/material/ListItem';
 import ListItemIcon from '@mui/material/ListItemIcon';
@@ -39,7 +40,13 @@ export function SignOffSummaryView({ summary, signed = false }: { summary: SignO
           {[plural(counts.photos, 'photo'), plural(counts.notes, 'note'), plural(counts.cables, 'cable'), plural(counts.points, 'point change'), plural(counts.circuits, 'circuit tested', 'circuits tested')].join(' · ')}
         </Typography>
       </Paper>
-      {problems.length === 0 ? (
+      {problems.length === 0 && counts.circuits === 0 ? (
+        // Nothing judged is not a pass: a tick here would read as one.
+        <Stack direction="row" spacing={1} sx={{ alignItems: 'center', color: 'text.secondary' }} role="status">
+          <InfoOutlined />
+          <Typography sx={{ color: 'text.primary' }}>No circuit was altered or tested on this visit, so there are no readings to judge.</Typography>
+        </Stack>
+      ) : problems.length === 0 ? (
         <Stack direction="row" spacing={1} sx={{ alignItems: 'center', color: 'success.main' }} role="status">
           <CheckCircleOutlined />
           <Typography sx={{ color: 'text.primary' }}>No fails and no missing readings.</Typography>

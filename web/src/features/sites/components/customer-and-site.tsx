@@ -21,7 +21,7 @@ export function CustomerAndSite({ customerId, siteId }: { customerId: string; si
   const s = site.data;
   return (
     <Paper variant="outlined" component="section" aria-label="Customer and site" sx={{ p: 2 }}>
-      <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr 1.4fr', gap: 3 }}>
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', md: '1fr 1fr 1.4fr' }, gap: 3 }}>
         <Stack spacing={0.5}>
           <Typography variant="overline" color="text.secondary">
             Customer

@@ -19,7 +19,7 @@ export function Fact({ label, children }: { label: string; children: ReactNode }
 export function SiteSupply({ site }: { site: Site }) {
   return (
     <Paper variant="outlined" component="section" aria-label="Supply and access" sx={{ p: 2 }}>
-      <Box sx={{ display: 'grid', gridTemplateColumns: 'repeat(3, minmax(120px, 180px)) 1fr', gap: 2 }}>
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: 'repeat(2, minmax(0, 1fr))', md: 'repeat(3, minmax(120px, 180px)) 1fr' }, gap: 2 }}>
         <Fact label="Earthing">{site.earthing ?? 'Not recorded'}</Fact>
         <Fact label="Ze">{site.zeOhm != null ? `${site.zeOhm} Ω` : 'Not recorded'}</Fact>
         <Fact label="Prospective fault current">{site.pfcKa != null ? `${site.pfcKa} kA` : 'Not recorded'}</Fact>

@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
-import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
@@ -74,6 +74,17 @@ describe('Visit', () => {
     expect(await screen.findByRole('form', { name: 'Add a circuit' })).toBeTruthy();
     expect(screen.getByText(/regulations in force, local codes and a competent person decide/)).toBeTruthy();
     expect((await db.visit.get(ids.visit))!.cautionsReadAt).toBeTruthy();
+  });
+
+  it('keeps the caution for tracing an unknown cable in view on the cable list and on a cable being recorded', async () => {
+    // DESIGN §7: an unknown cable may be mains, a telephone line with ringing voltage or PoE
+    for (const path of [paths.visitCables.href(ids.visit), paths.visitCable.href(ids.visit, 'new')]) {
+      show(path);
+      const caution = await screen.findByRole('note', { name: 'Tracing an unknown cable' });
+      expect(caution.textContent).toMatch(/mains, a telephone line carrying ringing voltage or a data cable carrying PoE/);
+      expect(caution.textContent).toMatch(/regulations in force, local codes and a competent person decide/);
+      cleanup();
+    }
   });
 
   it('adds a circuit found on site, making its board first, and refuses a rating that is not a number', async () => {

@@ -7,6 +7,7 @@ import Stack from '@mui/material/Stack';
 import Table from '@mui/material/Table';
 import TableBody from '@mui/material/TableBody';
 import TableCell from '@mui/material/TableCell';
+import TableContainer from '@mui/material/TableContainer';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
@@ -34,6 +35,8 @@ export function JobVisits({ jobId, personName }: { jobId: string; personName: (i
       ) : visits.data?.items.length === 0 ? (
         <Typography color="text.secondary">No visits booked yet. Book one on the schedule.</Typography>
       ) : (
+        // Scrolls sideways on a narrow screen: a keyboard can reach it to scroll.
+        <TableContainer tabIndex={0} role="region" aria-label="Visits of this job">
         <Table size="small" aria-label="Visits of this job">
           <TableHead>
             <TableRow>
@@ -61,6 +64,7 @@ export function JobVisits({ jobId, personName }: { jobId: string; personName: (i
             ))}
           </TableBody>
         </Table>
+        </TableContainer>
       )}
     </Paper>
   );

@@ -6,6 +6,7 @@ import { EmptyState } from '@/components/empty-state';
 import { paths } from '@/config/paths';
 import { useCable, useSiteCables } from '@/features/cables/data/get-site-cables';
 import { CableForm } from '@/features/cables/phone/cable-form';
+import { TracingCaution } from '@/features/cables/phone/tracing-caution';
 import CableOutlined from '@mui/icons-material/CableOutlined';
 import { useVisitContext } from '../visit-context';
 
@@ -32,6 +33,7 @@ export function Component() {
           <Typography variant="h2" sx={{ mb: 2 }}>
             {isNew ? 'Record a cable' : `Cable ${cable!.label}`}
           </Typography>
+          <TracingCaution />
           <CableForm
             key={cable?.id ?? 'new'}
             siteId={summary.visit.siteId}

@@ -1,6 +1,7 @@
 import Alert from '@mui/material/Alert';
 import { useLocation } from 'react-router-dom';
 import { CableList } from '@/features/cables/phone/cable-list';
+import { TracingCaution } from '@/features/cables/phone/tracing-caution';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {
@@ -13,6 +14,7 @@ export function Component() {
           Cable {saved} saved on this phone.
         </Alert>
       )}
+      <TracingCaution />
       <CableList siteId={summary.visit.siteId} visitId={summary.visit.id} locked={locked} />
     </>
   );
