@@ -103,6 +103,25 @@ export class TechnicianVisitPage {
     return this.page.getByRole('form', { name: `Readings for circuit ${number}` });
   }
 
+  /**
+   * Starts a new point on the Points form that extends ring circuit 1 (the demo's B32 ground-floor sockets) by 8 m of
+   * 2.5/1.5 cable, with the end-to-end readings before the work: enough for every check before the work to answer.
+   */
+  async startRingExtension(where = 'Beside the new desk'): Promise<Locator> {
+    await this.page.getByRole('link', { name: 'Record a point change' }).click();
+    const form = this.pointForm;
+    await form.getByRole('button', { name: 'New point', exact: true }).click();
+    await form.getByLabel('Accessory').fill('Twin socket-outlet');
+    await form.getByLabel('Where it is: where on the wall').fill(where);
+    await form.getByLabel('Circuit', { exact: true }).selectOption({ label: '1 · Sockets, ground floor' });
+    await form.getByLabel('How it joins the circuit').selectOption({ label: 'Ring extended through it' });
+    await form.getByLabel('Cable added to the ring (m)').fill('8');
+    await form.getByLabel('r1 before (Ω)').fill('0.3705');
+    await form.getByLabel('rn before (Ω)').fill('0.3705');
+    await form.getByLabel('r2 before (Ω)').fill('0.605');
+    return form;
+  }
+
   /** Signs in the signature box with a stroke, as a thumb would. */
   async sign(): Promise<void> {
     const canvas = this.page.getByLabel('Signature box: sign with your finger');

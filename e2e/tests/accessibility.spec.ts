@@ -59,16 +59,7 @@ for (const [size, viewport] of [
       await visitPage.section('Points');
       await expectNoAxeViolations(page, testInfo, 'visit points with cautions');
       await visitPage.readCautions();
-      await page.getByRole('link', { name: 'Record a point change' }).click();
-      const pointForm = visitPage.pointForm;
-      await pointForm.getByRole('button', { name: 'New point', exact: true }).click();
-      await pointForm.getByLabel('Accessory').fill('Twin socket-outlet');
-      await pointForm.getByLabel('Circuit', { exact: true }).selectOption({ label: '1 · Sockets, ground floor' });
-      await pointForm.getByLabel('How it joins the circuit').selectOption({ label: 'Ring extended through it' });
-      await pointForm.getByLabel('Cable added to the ring (m)').fill('8');
-      await pointForm.getByLabel('r1 before (Ω)').fill('0.3705');
-      await pointForm.getByLabel('rn before (Ω)').fill('0.3705');
-      await pointForm.getByLabel('r2 before (Ω)').fill('0.605');
+      const pointForm = await visitPage.startRingExtension();
       await pointForm.getByRole('button', { name: /^Method 103 / }).click();
       await expect(pointForm.getByRole('status', { name: 'Checks before the work' }).getByRole('listitem', { name: 'New cable' })).toContainText('Iz 13.5 A');
       // Bad input on purpose: the error it shows must be as readable as the rest

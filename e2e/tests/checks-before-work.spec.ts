@@ -24,17 +24,7 @@ test('with no signal, the Points form answers before the cable is cut: predicted
   // A ring extension on circuit 1 (B32, 30 mA RCD), through an insulated stud wall.
   await visitPage.section('Points');
   await visitPage.readCautions();
-  await page.getByRole('link', { name: 'Record a point change' }).click();
-  const pointForm = visitPage.pointForm;
-  await pointForm.getByRole('button', { name: 'New point', exact: true }).click();
-  await pointForm.getByLabel('Accessory').fill('Twin socket-outlet');
-  await pointForm.getByLabel('Where it is: where on the wall').fill('Beside the new desk');
-  await pointForm.getByLabel('Circuit', { exact: true }).selectOption({ label: '1 · Sockets, ground floor' });
-  await pointForm.getByLabel('How it joins the circuit').selectOption({ label: 'Ring extended through it' });
-  await pointForm.getByLabel('Cable added to the ring (m)').fill('8');
-  await pointForm.getByLabel('r1 before (Ω)').fill('0.3705');
-  await pointForm.getByLabel('rn before (Ω)').fill('0.3705');
-  await pointForm.getByLabel('r2 before (Ω)').fill('0.605');
+  const pointForm = await visitPage.startRingExtension();
   const checks = pointForm.getByRole('status', { name: 'Checks before the work' });
   // Ze 0.28 Ω (the site) + 1.20 × (r1 + r2) / 4 after 8 m of 2.5/1.5 (0.2829 Ω) = 0.62 Ω ≤ 1.37 Ω for B32
   // (IEC 60228:2004; BS 7671:2018+A2:2022 Table 41.3)
