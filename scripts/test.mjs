@@ -8,16 +8,19 @@ import { canStartPostgres } from './postgres.mjs';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
+const hasCommand = (name) => spawnSync('sh', ['-c', `command -v ${name}`], { stdio: 'ignore' }).status === 0;
+
+/** Debian's Chromium for the browser tests, and poppler-utils' pdftotext, which reads issued certificates back. */
 function ensureChromium() {
-  if (existsSync(CHROMIUM)) return;
+  const missing = [...(existsSync(CHROMIUM) ? [] : ['chromium']), ...(hasCommand('pdftotext') ? [] : ['poppler-utils'])];
+  if (missing.length === 0) return;
   const isRoot = process.getuid?.() === 0;
-  const hasApt = spawnSync('sh', ['-c', 'command -v apt-get'], { stdio: 'ignore' }).status === 0;
-  if (isRoot && hasApt) {
-    console.log("Installing Debian's Chromium for the browser tests…");
-    run('sh', ['-c', 'apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null']);
+  if (isRoot && hasCommand('apt-get')) {
+    console.log(`Installing from Debian for the browser tests: ${missing.join(', ')}…`);
+    run('sh', ['-c', `apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq ${missing.join(' ')} >/dev/null`]);
     return;
   }
-  console.error(`The browser tests need Chromium at ${CHROMIUM}. Install it with: sudo apt-get install chromium`);
+  console.error(`The browser tests need Debian's ${missing.join(' and ')}. Install with: sudo apt-get install ${missing.join(' ')}`);
   process.exit(1);
 }
 
