@@ -105,7 +105,7 @@ export async function detail(em: EntityManager, invoice: Invoice, asOf: string):
     lines: lines.map((l) => ({
       id: l.id, position: l.position, kind: l.kind, description: l.description, quantity: l.quantity, unit: l.unit, unitPriceMinor: l.unitPriceMinor,
       vatRateCode: l.vatRateCode, vatBasisPoints: l.vatBasisPoints, netMinor: l.netMinor, vatMinor: l.vatMinor, grossMinor: l.grossMinor,
-      visitId: l.visitId, priceItemId: l.priceItemId, labourRateId: l.labourRateId,
+      visitId: l.visitId, priceItemId: l.priceItemId, labourRateId: l.labourRateId, partUseIds: l.partUseIds ?? [],
     })),
     byRate: documentTotals(lines).byRate.map((r) => ({ ...r })),
     payments: payments.map((p) => ({

@@ -9,6 +9,7 @@ import { loadJobFile } from '../paperwork/job-file.js';
 import { loadRateBook } from '../pricing/rate-book.js';
 import type { FileStorage } from '../storage/file-storage.js';
 import { documentKey } from '../storage/file-stores.js';
+import { refuseBilledTwice } from './billed-work.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { InvoiceLine } from './entities/invoice-line.entity.js';
 import { type LineDraft, type PricedLine, priceLines } from './invoice-lines.js';
@@ -21,7 +22,7 @@ export const signOf = (kind: InvoiceKind): 1 | -1 => (kind === 'credit-note' ? -
 
 export const draftOf = (l: InvoiceLine): LineDraft => ({
   kind: l.kind, description: l.description, quantity: l.quantity, unit: l.unit, unitPriceMinor: l.unitPriceMinor, vatRateCode: l.vatRateCode,
-  visitId: l.visitId, priceItemId: l.priceItemId, labourRateId: l.labourRateId,
+  visitId: l.visitId, priceItemId: l.priceItemId, labourRateId: l.labourRateId, partUseIds: l.partUseIds,
 });
 
 export function linesOf(em: EntityManager, invoiceId: string): Promise<InvoiceLine[]> {
@@ -46,6 +47,7 @@ export async function writeLines(em: EntityManager, invoice: Invoice, lines: Pri
       visitId: l.visitId ?? null,
       priceItemId: l.priceItemId ?? null,
       labourRateId: l.labourRateId ?? null,
+      partUseIds: l.partUseIds?.length ? l.partUseIds : null,
     }),
   );
   return rows.length ? em.save(rows) : [];
@@ -109,6 +111,7 @@ export async function issueDraft(em: EntityManager, { invoice, issuer, now, stor
   const org = await em.findOneByOrFail(Organisation, { id: invoice.organisationId });
   const stored = await linesOf(em, invoice.id);
   if (!stored.length) throw new UnprocessableEntityException(['Add at least one line before issuing.']);
+  await refuseBilledTwice(em, invoice, stored, org.timeZone);
   let priced: PricedLine[];
   try {
     priced = priceLines(await withCreditRates(em, invoice, stored.map(draftOf)), await loadRateBook(em, org.id), signOf(invoice.kind)).lines;

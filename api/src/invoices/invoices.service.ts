@@ -79,15 +79,16 @@ export class InvoicesService {
   }
 
   /** A new draft for the job, built from its visits, copied from an issued quote, or empty; warnings say what could not be priced. */
-  create(user: AuthUser, jobId: string, dto: CreateInvoiceDto): Promise<InvoiceDetail & { warnings: string[] }> {
+  create(user: AuthUser, jobId: string, dto: CreateInvoiceDto): Promise<InvoiceDetail & { warnings: string[]; leftOut: string[] }> {
     return this.queue.run(async (em) => {
       const file = await loadJobFile(em, user.organisationId, jobId);
       const book = await loadRateBook(em, user.organisationId);
       let drafts: LineDraft[] = [];
       let warnings: string[] = [];
+      let leftOut: string[] = [];
       let fromQuoteId: string | null = null;
       const from = dto.from ?? 'job';
-      if (from === 'job') ({ lines: drafts, warnings } = await linesFromJob(em, file, book));
+      if (from === 'job') ({ lines: drafts, warnings, leftOut } = await linesFromJob(em, file, book));
       if (from === 'quote') {
         const quote = await em.findOneBy(Invoice, { id: dto.quoteId!, organisationId: user.organisationId, jobId, kind: 'quote', status: 'issued' });
         if (!quote) throw new BadRequestException('quoteId must be the id of an issued quote of this job.');
@@ -103,7 +104,7 @@ export class InvoicesService {
         termDays: dto.kind === 'quote' ? file.organisation.quoteValidDays : file.organisation.paymentTermsDays,
         fromQuoteId,
       });
-      return { ...(await detail(em, invoice, localDate(new Date(), file.organisation.timeZone))), warnings };
+      return { ...(await detail(em, invoice, localDate(new Date(), file.organisation.timeZone))), warnings, leftOut };
     });
   }
 
@@ -116,7 +117,7 @@ export class InvoicesService {
       if (dto.notes !== undefined) invoice.notes = dto.notes;
       if (dto.termDays !== undefined) invoice.termDays = dto.termDays;
       if (dto.lines) {
-        const drafts: LineDraft[] = dto.lines.map((l) => ({ ...l, unit: l.unit ?? null, visitId: l.visitId ?? null, priceItemId: l.priceItemId ?? null, labourRateId: l.labourRateId ?? null }));
+        const drafts: LineDraft[] = dto.lines.map((l) => ({ ...l, unit: l.unit ?? null, visitId: l.visitId ?? null, priceItemId: l.priceItemId ?? null, labourRateId: l.labourRateId ?? null, partUseIds: l.partUseIds ?? null }));
         const { lines } = priceLines(await withCreditRates(em, invoice, drafts), await loadRateBook(em, user.organisationId), signOf(invoice.kind));
         await writeLines(em, invoice, lines);
       }

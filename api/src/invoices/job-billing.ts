@@ -4,6 +4,7 @@ import { type JobFile, jobVisits } from '../paperwork/job-file.js';
 import { shortDateWords } from '../paperwork/pdf/document-words.js';
 import type { RateBook } from '../pricing/rate-book.js';
 import { syncRepository } from '../sync/entities/sync-schemas.js';
+import { labourSource, type LeftOut, leftOutWords, liveInvoices, partSource } from './billed-work.js';
 import type { LineDraft } from './invoice-lines.js';
 import { quantityText } from './invoice-lines.js';
 
@@ -11,6 +12,8 @@ import { quantityText } from './invoice-lines.js';
 export interface JobBill {
   lines: LineDraft[];
   warnings: string[];
+  /** What was not taken because a live invoice already holds it, per visit and invoice. */
+  leftOut: string[];
 }
 
 const timeWords = (iso: string, timeZone: string) => new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit' }).format(new Date(iso));
@@ -34,11 +37,20 @@ export async function linesFromJob(em: EntityManager, file: JobFile, book: RateB
   const lines: LineDraft[] = [];
   const warnings: string[] = [];
   const fallback = fallbackVat(book);
+  const held = await liveInvoices(em, org, file.job.id);
+  const leftOut: LeftOut[] = [];
+  const dayOf = new Map<string, string>();
 
   for (const visit of visits) {
     const start = visit.actualStart;
     const end = visit.actualEnd;
     const day = shortDateWords(start ?? visit.plannedStart ?? visit.createdAt, tz) || 'an unscheduled day';
+    dayOf.set(visit.id, day);
+    const holder = held.get(labourSource(visit.id));
+    if (holder) {
+      leftOut.push({ visitId: visit.id, day, labour: true, parts: 0, invoice: holder });
+      continue;
+    }
     if (!start || !end) {
       warnings.push(`The visit on ${day} has no ${start ? 'departure' : 'arrival'} time recorded, so its labour is not included.`);
       continue;
@@ -66,15 +78,20 @@ export async function linesFromJob(em: EntityManager, file: JobFile, book: RateB
     }
   }
 
-  const parts = visits.length
+  const used = visits.length
     ? await syncRepository(em, 'materialLine').find({ where: { visitId: In(visits.map((v) => v.id)), organisationId: org, deletedAt: IsNull() }, order: { createdAt: 'ASC', id: 'ASC' } })
     : [];
+  const parts = used.filter((p) => {
+    const holder = held.get(partSource(p.id));
+    if (holder) leftOut.push({ visitId: p.visitId, day: dayOf.get(p.visitId) ?? 'an unscheduled day', labour: false, parts: 1, invoice: holder });
+    return !holder;
+  });
   const itemIds = [...new Set(parts.map((p) => p.priceItemId).filter((id): id is string => typeof id === 'string'))];
   const items = new Map(
     (itemIds.length ? await syncRepository(em, 'priceItem').find({ where: { id: In(itemIds), organisationId: org }, withDeleted: true }) : []).map((i) => [i.id, i]),
   );
   // The same part used on several visits is one line: quantities add up in thousandths, exactly.
-  const grouped = new Map<string, { draft: LineDraft; thousandths: bigint }>();
+  const grouped = new Map<string, { draft: LineDraft; thousandths: bigint; partUseIds: string[] }>();
   for (const p of parts) {
     const item = typeof p.priceItemId === 'string' ? items.get(p.priceItemId) : undefined;
     const unit = item?.unit ?? p.unit ?? null;
@@ -83,11 +100,13 @@ export async function linesFromJob(em: EntityManager, file: JobFile, book: RateB
     const seen = grouped.get(key);
     if (seen) {
       seen.thousandths += thousandths;
+      seen.partUseIds.push(p.id);
       continue;
     }
     const vat = item?.vatRateCode ?? fallback ?? '';
     grouped.set(key, {
       thousandths,
+      partUseIds: [p.id],
       draft: {
         kind: 'material',
         description: String(item?.name ?? p.description),
@@ -102,7 +121,7 @@ export async function linesFromJob(em: EntityManager, file: JobFile, book: RateB
     if (!item) warnings.push(`“${String(p.description)}” was typed on site and is not on the price list: give it a price.`);
     else if (typeof item.sellMinor !== 'number') warnings.push(`“${String(item.name)}” has no sell price on the price list: give it a price.`);
   }
-  for (const { draft, thousandths } of grouped.values()) lines.push({ ...draft, quantity: quantityText(thousandths) });
+  for (const { draft, thousandths, partUseIds } of grouped.values()) lines.push({ ...draft, quantity: quantityText(thousandths), partUseIds });
   if (!visits.length) warnings.push('This job has no visits yet, so there is no labour or parts to add: add fixed-price lines instead.');
-  return { lines, warnings };
+  return { lines, warnings, leftOut: leftOutWords(leftOut, tz) };
 }

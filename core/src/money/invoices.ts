@@ -43,6 +43,8 @@ export interface InvoiceLineInput {
   visitId?: string | null;
   priceItemId?: string | null;
   labourRateId?: string | null;
+  /** The part uses (the visits' parts lists) a part line adds up: the same part use is invoiced once. */
+  partUseIds?: string[] | null;
 }
 
 /** An issued invoice's money today: paid, credited, still owed. */

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
 import { LINE_KINDS, type LineKind } from '@wiretrail/core';
 
 const trim = Transform(({ value }) => (typeof value === 'string' ? value.trim() : value));
@@ -57,4 +57,11 @@ export class InvoiceLineDto {
   @IsOptional()
   @IsUUID('all', { message: 'labourRateId must be the id of a labour rate' })
   labourRateId?: string | null;
+
+  @ApiPropertyOptional({ type: [String], nullable: true, description: 'the part uses (parts list rows of visits) a part line adds up' })
+  @IsOptional()
+  @IsArray({ message: 'partUseIds must be a list of part use ids' })
+  @ArrayMaxSize(500, { message: 'partUseIds must have at most 500 items' })
+  @IsUUID('all', { each: true, message: 'partUseIds must hold ids of part uses' })
+  partUseIds?: string[] | null;
 }

@@ -57,4 +57,8 @@ export class InvoiceLine extends TenantRow {
 
   @Column({ type: 'varchar', length: 36, nullable: true })
   labourRateId: string | null;
+
+  /** The part uses a part line adds up (one per visit that used the part), so each is invoiced once. */
+  @Column({ type: 'simple-json', nullable: true })
+  partUseIds: string[] | null;
 }
