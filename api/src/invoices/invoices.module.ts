@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { JobsModule } from '../jobs/jobs.module.js';
 import { MailModule } from '../mail/mail.module.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { PaperworkModule } from '../paperwork/paperwork.module.js';
@@ -25,6 +26,7 @@ import { SharedInvoicesController } from './shared-invoices.controller.js';
     MailModule,
     ShareLinksModule,
     StorageModule,
+    JobsModule,
   ],
   controllers: [InvoicesController, SharedInvoicesController],
   providers: [InvoicesService, PaymentsService, InvoiceMailService, OwedChanges],

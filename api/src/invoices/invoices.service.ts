@@ -5,6 +5,7 @@ import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { paymentsConfig } from '../config/payments.config.js';
+import { JobProgress } from '../jobs/job-progress.js';
 import { loadJobFile } from '../paperwork/job-file.js';
 import type { FileStorage } from '../storage/file-storage.js';
 import { INVOICE_STORAGE } from '../storage/file-stores.js';
@@ -36,6 +37,7 @@ export class InvoicesService {
     @Inject(INVOICE_STORAGE) private readonly storage: FileStorage,
     @Inject(paymentsConfig.KEY) private readonly payments: ConfigType<typeof paymentsConfig>,
     private readonly owedChanges: OwedChanges,
+    private readonly progress: JobProgress,
   ) {}
 
   forJob(user: AuthUser, jobId: string): Promise<{ items: InvoiceSummary[] }> {
@@ -161,6 +163,8 @@ export class InvoicesService {
     const issued = await this.queue.run(async (em) => {
       const invoice = await this.draft(em, user, id);
       await issueDraft(em, { invoice, issuer: user, now: new Date(), storage: this.storage, cardPayments: !!this.payments.apiKey });
+      // An invoice issued, or one credited, may be what the job waited on; a quote moves nothing.
+      if (invoice.kind !== 'quote') await this.progress.follow(em, { userId: user.id, organisationId: user.organisationId, role: user.role }, [invoice.jobId]);
       return detail(em, invoice, invoice.issueDate!);
     });
     this.logger.log(`Issued ${issued.number} for job ${issued.jobId}`);

@@ -3,6 +3,7 @@ import { AGED_DEBT_BUCKETS, type AgedDebtInvoice, type AgedDebtReport, agedDebtB
 import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
+import { JobProgress } from '../jobs/job-progress.js';
 import type { RecordPaymentDto } from './dto/record-payment.dto.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { Payment } from './entities/payment.entity.js';
@@ -27,6 +28,7 @@ export class PaymentsService {
   constructor(
     private readonly queue: WriteQueue,
     private readonly owedChanges: OwedChanges,
+    private readonly progress: JobProgress,
   ) {}
 
   /** Money taken on site or paid into the bank, recorded by the office; never more than is still owed. */
@@ -59,6 +61,8 @@ export class PaymentsService {
           refundReference: null,
         }),
       );
+      // The last money in may be what the job waited on to be done.
+      await this.progress.follow(em, { userId: user.id, organisationId: user.organisationId, role: user.role }, [invoice.jobId]);
       return detail(em, invoice, today);
     });
     // A checkout opened for the old figure would take too much now.
@@ -74,7 +78,7 @@ export class PaymentsService {
    */
   async recordCard(em: EntityManager, report: CardPaymentReport): Promise<Payment | null> {
     if (await em.findOneBy(Payment, { checkoutSessionId: report.checkoutSessionId })) return null;
-    return em.save(
+    const payment = await em.save(
       em.create(Payment, {
         organisationId: report.organisationId,
         invoiceId: report.invoiceId,
@@ -90,6 +94,10 @@ export class PaymentsService {
         refundReference: null,
       }),
     );
+    const invoice = await em.findOneBy(Invoice, { id: report.invoiceId, organisationId: report.organisationId });
+    // Paid by the customer: the job moves on behalf of whoever issued the invoice.
+    if (invoice) await this.progress.follow(em, { userId: invoice.issuedById ?? invoice.createdById, organisationId: invoice.organisationId, role: 'office' }, [invoice.jobId]);
+    return payment;
   }
 
   /** What is owed on each issued invoice with money outstanding, grouped by customer, in buckets of how late it is. */

@@ -7,6 +7,7 @@ import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.j
 import { toSyncedRow } from '../sync/sync.service.js';
 import type { JobFiltersDto, ListJobsQueryDto } from './dto/list-jobs-query.dto.js';
 import { inTurn } from '../common/in-turn.js';
+import { workOf } from './job-progress.js';
 
 /** Visits still to do: the next visit of a job is the earliest of these. */
 const OPEN_VISIT = `("v"."status" IS NULL OR "v"."status" NOT IN ('finished', 'cancelled'))`;
@@ -83,6 +84,8 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job', JobList
       parts.push(`"v"."plannedStart" < :visitTo`);
       params.visitTo = q.to;
     }
+    // A cancelled visit is not a visit on those dates.
+    if (q.from !== undefined || q.to !== undefined) parts.push(`("v"."status" IS NULL OR "v"."status" <> 'cancelled')`);
     if (!parts.length) return [];
     return [{
       sql: `EXISTS (SELECT 1 FROM "visit" "v" WHERE "v"."jobId" = "r"."id" AND "v"."organisationId" = :org AND "v"."deletedAt" IS NULL AND ${parts.join(' AND ')})`,
@@ -103,6 +106,7 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job', JobList
         select: { id: true, jobId: true, plannedStart: true, status: true, technicianIds: true },
       }),
     );
+    const work = await workOf(em, org, rows.map((r) => r.id));
     const customerName = new Map(customers.map((c) => [c.id, c.name]));
     const siteName = new Map(sites.map((s) => [s.id, s.name ?? s.address]));
     return rows.map((r) => {
@@ -117,6 +121,7 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job', JobList
         nextVisitStart: next,
         visitCount: own.length,
         technicianIds,
+        work: work.get(r.id),
       };
     });
   }

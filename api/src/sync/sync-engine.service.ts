@@ -53,6 +53,12 @@ export type CreateHook = (em: EntityManager, actor: Actor, row: SyncRecord) => P
 export type Verdict = (checked: CheckedMutation, existing: SyncRecord | null) => string | null;
 export type WriteJudge = (em: EntityManager, actor: Actor, scope: TechnicianScope | null, mutations: Mutation[]) => Promise<Verdict>;
 
+/**
+ * Work a feature does once a batch has moved rows it watches (created, deleted, or one of the watched fields
+ * changed), in the same transaction before it commits: each row id with the actor who moved it last.
+ */
+export type MoveHook = (em: EntityManager, moved: ReadonlyMap<string, Actor>) => Promise<void>;
+
 /** One value of a field, as a conflict row records it. */
 interface ConflictSide {
   value: unknown;
@@ -61,10 +67,11 @@ interface ConflictSide {
   deviceId: string | null;
 }
 
-/** The engine's work in one transaction: the batch's bookkeeping and what it knows of locks. */
+/** The engine's work in one transaction: the batch's bookkeeping, what it knows of locks, and the watched rows it moved. */
 interface Run {
   batch: SyncBatch;
   locks: RecordLocks;
+  moved: Map<SyncEntityName, Map<string, Actor>>;
 }
 
 /**
@@ -80,6 +87,7 @@ export class SyncEngine {
   private readonly lockRules = new Map<SyncEntityName, LockRule>();
   private readonly runs = new WeakMap<EntityManager, Run>();
   private readonly writeJudges = new Map<SyncEntityName, WriteJudge>();
+  private readonly moveHooks = new Map<SyncEntityName, { fields: ReadonlySet<string>; hook: MoveHook }>();
 
   constructor(private readonly scopes: ScopeService) {}
 
@@ -108,6 +116,22 @@ export class SyncEngine {
     return out;
   }
 
+  /**
+   * Lets a feature follow rows of an entity as they move: the hook runs before the batch commits, once for every
+   * row created, deleted or changed in one of `fields`, whoever changed it (a push, the office, the server).
+   * Jobs use it: a visit booked, arrived at or signed off moves its job's status (jobs/job-progress.ts).
+   */
+  onMove(entity: SyncEntityName, fields: readonly string[], hook: MoveHook): void {
+    this.moveHooks.set(entity, { fields: new Set(fields), hook });
+  }
+
+  private noteMove(run: Run, actor: Actor, entity: SyncEntityName, id: string, fields?: readonly string[]): void {
+    const watch = this.moveHooks.get(entity);
+    if (!watch || (fields && !fields.some((f) => watch.fields.has(f)))) return;
+    if (!run.moved.has(entity)) run.moved.set(entity, new Map());
+    run.moved.get(entity)!.set(id, actor);
+  }
+
   /** Lets a feature keep records from changing while its rows say so (an issued certificate, say); see record-locks.ts. */
   lockRule(entity: SyncEntityName, rule: LockRule): void {
     this.lockRules.set(entity, rule);
@@ -133,8 +157,10 @@ export class SyncEngine {
   async serverWrite(em: EntityManager, actor: Actor, entity: SyncEntityName, writes: ReadonlyArray<{ row: SyncRecord; changes: Record<string, unknown> }>): Promise<void> {
     if (!writes.length) return;
     const spec = SYNC_ENTITIES[entity];
-    await this.inBatch(em, async ({ batch, locks }) => {
+    await this.inBatch(em, async (run) => {
+      const { batch, locks } = run;
       for (const { row, changes } of writes) {
+        this.noteMove(run, actor, entity, row.id, Object.keys(changes));
         const seq = await batch.nextSeq();
         const hlc = formatHlc({ ms: Date.now(), counter: 0, deviceId: actor.deviceId });
         const fieldMeta = { ...row.fieldMeta };
@@ -169,10 +195,17 @@ export class SyncEngine {
     const open = this.runs.get(em);
     if (open) return work(open);
     const batch = new SyncBatch(em);
-    const run = { batch, locks: new RecordLocks(this.lockRules, batch) };
+    const run: Run = { batch, locks: new RecordLocks(this.lockRules, batch), moved: new Map() };
     this.runs.set(em, run);
     try {
       const result = await work(run);
+      // A hook's own writes join this batch; rows they move in turn are followed until nothing more moves.
+      while (run.moved.size) {
+        const moved = [...run.moved];
+        run.moved.clear();
+        await batch.flush();
+        for (const [entity, rows] of moved) await this.moveHooks.get(entity)!.hook(batch.em, rows);
+      }
       await batch.close();
       return result;
     } finally {
@@ -260,6 +293,7 @@ export class SyncEngine {
     };
     batch.insert(m.entity, row);
     batch.recordChange(m.entity, row, seq);
+    this.noteMove(run, actor, m.entity, m.id);
     if (spec.siteField === 'siteId') batch.sites.set(`${m.entity}:${m.id}`, textOrNull(row.siteId));
     const hook = this.createHooks.get(m.entity);
     if (hook) {
@@ -304,6 +338,7 @@ export class SyncEngine {
     if (typeof changes.siteId === 'string') batch.sites.set(`${m.entity}:${row.id}`, changes.siteId);
     if (revived) batch.known.add(`${m.entity}:${row.id}`);
     batch.recordChange(m.entity, row, seq);
+    this.noteMove(run, actor, m.entity, row.id, revived ? undefined : Object.keys(changes));
     return {
       mutationId: m.mutationId,
       status: lost.some((l) => !l.keptIncoming) ? 'merged' : 'applied',
@@ -333,6 +368,7 @@ export class SyncEngine {
     locks.changed(m.entity);
     batch.known.delete(`${m.entity}:${row.id}`);
     batch.recordChange(m.entity, row, seq, true);
+    this.noteMove(run, actor, m.entity, row.id);
     return { mutationId: m.mutationId, status: 'applied', version: seq, fieldVersions: versionsOf(row.fieldMeta) };
   }
 

@@ -1,3 +1,4 @@
+import type { JobWork } from '../jobs/job-progress.js';
 import type { JOB_STATUSES } from '../sync/entities.js';
 import type { RecordPage, RecordReply } from './records.js';
 
@@ -14,6 +15,8 @@ export type JobListing = RecordReply<'job'> & {
   visitCount?: number;
   /** Who is booked on the job's visits that are not cancelled. */
   technicianIds?: string[];
+  /** What the job's visits and paperwork have reached: the board says from it what a column asks for. */
+  work?: JobWork;
 };
 
 export type JobPage = RecordPage<JobListing>;
