@@ -37,11 +37,11 @@ export const DRAFT: InvoiceDetail = {
   lines: [
     {
       id: 'l1', position: 0, kind: 'labour', description: 'Labour on 8 Mar 2026: 1 h 40 min on site', quantity: '1.75', unit: 'h', unitPriceMinor: 5_200, vatRateCode: 'standard', vatBasisPoints: 2000,
-      netMinor: 9_100, vatMinor: 1_820, grossMinor: 10_920, visitId: '01900000-0000-7000-8000-000000000040', priceItemId: null, labourRateId: null,
+      netMinor: 9_100, vatMinor: 1_820, grossMinor: 10_920, visitId: '01900000-0000-7000-8000-000000000040', priceItemId: null, labourRateId: null, partUseIds: [],
     },
     {
       id: 'l2', position: 1, kind: 'material', description: 'Twin switched socket-outlet, white', quantity: '1', unit: 'each', unitPriceMinor: 650, vatRateCode: 'standard', vatBasisPoints: 2000,
-      netMinor: 650, vatMinor: 130, grossMinor: 780, visitId: null, priceItemId: 'p1', labourRateId: null,
+      netMinor: 650, vatMinor: 130, grossMinor: 780, visitId: null, priceItemId: 'p1', labourRateId: null, partUseIds: ['01900000-0000-7000-8000-000000000051'],
     },
   ],
   byRate: [{ basisPoints: 2000, netMinor: 9_750, vatMinor: 1_950 }],

@@ -11,7 +11,7 @@ import { DRAFT, LABOUR_RATES, PRICE_ITEMS, VAT_RATES } from './invoice-fixtures'
 // Totals are worked by hand with the rule in core/src/money/vat.ts (VAT per line to the nearer penny,
 // HMRC VAT Notice 700 §17.5; the paragraph from memory): 20 % of £91.00 is £18.20 and of £6.50 is £1.30.
 
-function show(invoice: InvoiceDetail = DRAFT) {
+function show(invoice: InvoiceDetail = DRAFT, leftOut?: string[]) {
   const api = fakeApi((c: FakeCall) => {
     if (c.method === 'PATCH') return { status: 200, body: { ...invoice, ...(c.body as object) } };
     if (c.path === '/api/vat-rates') return { status: 200, body: VAT_RATES };
@@ -23,7 +23,7 @@ function show(invoice: InvoiceDetail = DRAFT) {
   const onSaved = vi.fn();
   render(
     <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <LineEditor invoice={invoice} onSaved={onSaved} />
+      <LineEditor invoice={invoice} leftOut={leftOut} onSaved={onSaved} />
     </QueryClientProvider>,
   );
   return { calls: api.calls, onSaved };
@@ -95,12 +95,26 @@ describe('LineEditor', { timeout: 15_000 }, () => {
     expect(patch.body).toEqual({
       lines: [
         { kind: 'labour', description: 'Labour on 8 Mar 2026: 1 h 40 min on site', quantity: '1.75', unit: 'h', unitPriceMinor: 5200, vatRateCode: 'standard', visitId: DRAFT.lines[0]!.visitId, priceItemId: null, labourRateId: null },
-        { kind: 'material', description: 'Twin switched socket-outlet, white', quantity: '2.5', unit: 'each', unitPriceMinor: 650, vatRateCode: 'standard', visitId: null, priceItemId: 'p1', labourRateId: null },
+        // Where the part line came from goes back with it, so its part uses stay invoiced once.
+        { kind: 'material', description: 'Twin switched socket-outlet, white', quantity: '2.5', unit: 'each', unitPriceMinor: 650, vatRateCode: 'standard', visitId: null, priceItemId: 'p1', labourRateId: null, partUseIds: DRAFT.lines[1]!.partUseIds },
         { kind: 'material', description: 'Cat6 keystone jack', quantity: '1', unit: 'each', unitPriceMinor: 420, vatRateCode: 'standard', visitId: null, priceItemId: 'p9', labourRateId: null },
       ],
       notes: null,
       termDays: 14,
     });
+  });
+
+  it('tells the office what the build left out because another invoice already asks for it', async () => {
+    show(DRAFT, ['Visit 3 Dec 2026: labour and 2 parts already on INV-0002, so not taken again.']);
+    const note = screen.getByRole('status', { name: 'Left out' });
+    expect(within(note).getByText('Left out: already invoiced')).toBeTruthy();
+    expect(within(note).getByRole('listitem').textContent).toBe('Visit 3 Dec 2026: labour and 2 parts already on INV-0002, so not taken again.');
+    expect(note.textContent).toContain('credit that invoice in full first');
+  });
+
+  it('says nothing was left out when nothing was', () => {
+    show();
+    expect(screen.queryByRole('status', { name: 'Left out' })).toBeNull();
   });
 
   it('on a credit note, wants quantities below nothing and offers only the rates its invoice charged', async () => {

@@ -14,7 +14,7 @@ export type { InvoiceLineInput as LineInput } from '@wiretrail/core';
 /** A new draft for the job: built from its visits (labour and parts), copied from an issued quote, or blank. */
 export const useCreateInvoice = (jobId: string) =>
   useInvoiceMutation((body: { kind: Exclude<InvoiceKind, 'credit-note'>; from?: 'job' | 'quote' | 'blank'; quoteId?: string }) =>
-    api.post<InvoiceDetail & { warnings: string[] }>(`/jobs/${encodeURIComponent(jobId)}/invoices`, body),
+    api.post<InvoiceDetail & { warnings: string[]; leftOut: string[] }>(`/jobs/${encodeURIComponent(jobId)}/invoices`, body),
   );
 
 export const useUpdateInvoice = () =>

@@ -41,6 +41,8 @@ interface Props {
   invoiceId: string | null;
   /** What could not be priced, when it was just built from the job. */
   warnings?: string[];
+  /** What the build left out because it is already invoiced. */
+  leftOut?: string[];
   onClose: () => void;
   /** Another one to show instead: a credit note just raised, an invoice made from a quote. */
   onOpen: (id: string) => void;
@@ -196,7 +198,7 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
 }
 
 /** One quote, invoice or credit note: a draft's line editor, or an issued one's details, payments and what to do next. */
-export function InvoiceDialog({ invoiceId, warnings, onClose, onOpen, onNotice }: Props) {
+export function InvoiceDialog({ invoiceId, warnings, leftOut, onClose, onOpen, onNotice }: Props) {
   const invoice = useInvoice(invoiceId);
   const issue = useIssueInvoice();
   const remove = useDeleteInvoice();
@@ -244,7 +246,7 @@ export function InvoiceDialog({ invoiceId, warnings, onClose, onOpen, onNotice }
             </Box>
           </Alert>
         )}
-        {i && i.status === 'draft' && <LineEditor invoice={i} warnings={warnings} onSaved={(_, thenIssue) => (thenIssue ? setConfirming(true) : onNotice('Draft saved.'))} />}
+        {i && i.status === 'draft' && <LineEditor invoice={i} warnings={warnings} leftOut={leftOut} onSaved={(_, thenIssue) => (thenIssue ? setConfirming(true) : onNotice('Draft saved.'))} />}
         {i && i.status === 'issued' && <IssuedView invoice={i} onOpen={onOpen} onNotice={onNotice} />}
       </DialogContent>
       {i && i.status === 'draft' && (

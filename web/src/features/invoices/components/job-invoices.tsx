@@ -34,7 +34,7 @@ export function JobInvoices({ jobId }: { jobId: string }) {
   const create = useCreateInvoice(jobId);
   const queryClient = useQueryClient();
   const [open, setOpen] = useState<string | null>(null);
-  const [warnings, setWarnings] = useState<{ id: string; list: string[] } | null>(null);
+  const [warnings, setWarnings] = useState<{ id: string; list: string[]; leftOut: string[] } | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const items = invoices.data?.items ?? [];
   const owed = items.reduce((s, i) => s + Math.max(0, i.account?.owedMinor ?? 0), 0);
@@ -42,10 +42,10 @@ export function JobInvoices({ jobId }: { jobId: string }) {
     create.mutate(
       { kind, from: 'job' },
       {
-        onSuccess: ({ warnings: list = [], ...draft }) => {
-          // The new draft is shown at once, with what could not be priced from the job.
+        onSuccess: ({ warnings: list = [], leftOut = [], ...draft }) => {
+          // The new draft is shown at once, with what could not be priced from the job and what was already invoiced.
           queryClient.setQueryData(invoiceQueryOptions(draft.id).queryKey, draft);
-          setWarnings({ id: draft.id, list });
+          setWarnings({ id: draft.id, list, leftOut });
           setOpen(draft.id);
         },
       },
@@ -120,7 +120,7 @@ export function JobInvoices({ jobId }: { jobId: string }) {
         </TableContainer>
       )}
 
-      <InvoiceDialog invoiceId={open} warnings={warnings?.id === open ? warnings.list : []} onClose={() => setOpen(null)} onOpen={setOpen} onNotice={setNotice} />
+      <InvoiceDialog invoiceId={open} warnings={warnings?.id === open ? warnings.list : []} leftOut={warnings?.id === open ? warnings.leftOut : []} onClose={() => setOpen(null)} onOpen={setOpen} onNotice={setNotice} />
       <Snackbar open={!!notice} autoHideDuration={5000} onClose={() => setNotice(null)} message={notice} />
     </Stack>
   );

@@ -1,6 +1,7 @@
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import DeleteOutlined from '@mui/icons-material/DeleteOutlined';
 import Alert from '@mui/material/Alert';
+import AlertTitle from '@mui/material/AlertTitle';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import IconButton from '@mui/material/IconButton';
@@ -44,6 +45,8 @@ export function lineEditorSchema(kind: InvoiceKind) {
     visitId: z.string().nullable(),
     priceItemId: z.string().nullable(),
     labourRateId: z.string().nullable(),
+    // Where a part line came from, kept through edits so the part uses stay invoiced once.
+    partUseIds: z.array(z.string()),
   });
   return z.object({
     lines: z.array(line).max(200, 'Lines: at most 200.'),
@@ -69,6 +72,7 @@ const valuesOf = (invoice: InvoiceDetail): LineEditorValues => ({
     visitId: l.visitId,
     priceItemId: l.priceItemId,
     labourRateId: l.labourRateId,
+    partUseIds: l.partUseIds ?? [],
   })),
   notes: invoice.notes ?? '',
   termDays: String(invoice.termDays),
@@ -85,12 +89,13 @@ const bodyOf = (v: LineEditorValues): { lines: LineInput[]; notes: string | null
     visitId: l.visitId,
     priceItemId: l.priceItemId,
     labourRateId: l.labourRateId,
+    ...(l.partUseIds.length ? { partUseIds: l.partUseIds } : {}),
   })),
   notes: v.notes.trim() || null,
   termDays: Number(v.termDays),
 });
 
-const blank = (vatRateCode: string): LineValues => ({ kind: 'fixed', description: '', quantity: '1', unit: 'each', unitPrice: '', vatRateCode, visitId: null, priceItemId: null, labourRateId: null });
+const blank = (vatRateCode: string): LineValues => ({ kind: 'fixed', description: '', quantity: '1', unit: 'each', unitPrice: '', vatRateCode, visitId: null, priceItemId: null, labourRateId: null, partUseIds: [] });
 
 /** A list to add a line from: picking one adds it and the list goes back to its prompt. */
 function AddFromList({ label, prompt, width, options, onPick }: { label: string; prompt: string; width: number; options: Array<{ id: string; label: string }>; onPick: (id: string) => void }) {
@@ -118,6 +123,8 @@ interface Props {
   invoice: InvoiceDetail;
   /** What could not be priced when the draft was built from the job. */
   warnings?: string[];
+  /** What the build left out because a live invoice already asks for it, per visit. */
+  leftOut?: string[];
   /** After a save; `thenIssue` when the office asked to issue it next. */
   onSaved?: (saved: InvoiceDetail, thenIssue: boolean) => void;
 }
@@ -126,7 +133,7 @@ interface Props {
  * A draft's lines: labour, parts and fixed-price items, each with its quantity, unit price before VAT and VAT rate,
  * and the totals per rate as they will be issued. Every refusal names the line's field.
  */
-export function LineEditor({ invoice, warnings = [], onSaved }: Props) {
+export function LineEditor({ invoice, warnings = [], leftOut = [], onSaved }: Props) {
   const credit = invoice.kind === 'credit-note';
   const update = useUpdateInvoice();
   const rates = useVatRates();
@@ -167,6 +174,17 @@ export function LineEditor({ invoice, warnings = [], onSaved }: Props) {
         <Alert severity="warning">
           <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
             {warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </Box>
+        </Alert>
+      )}
+      {leftOut.length > 0 && (
+        <Alert severity="info" role="status" aria-label="Left out">
+          <AlertTitle>Left out: already invoiced</AlertTitle>
+          A visit’s time and parts are invoiced once. To charge them again, credit that invoice in full first.
+          <Box component="ul" sx={{ m: 0, mt: 1, pl: 2.5 }}>
+            {leftOut.map((w) => (
               <li key={w}>{w}</li>
             ))}
           </Box>
@@ -243,7 +261,7 @@ export function LineEditor({ invoice, warnings = [], onSaved }: Props) {
             options={choices.items.map((c) => ({ id: c.id, label: `${c.name} (${moneyText(c.sellMinor)} / ${c.unit})` }))}
             onPick={(id) => {
               const item = choices.items.find((c) => c.id === id)!;
-              append({ kind: 'material', description: item.name, quantity: '1', unit: item.unit, unitPrice: moneyText(item.sellMinor ?? 0), vatRateCode: item.vatRateCode ?? defaultVat, visitId: null, priceItemId: item.id, labourRateId: null });
+              append({ kind: 'material', description: item.name, quantity: '1', unit: item.unit, unitPrice: moneyText(item.sellMinor ?? 0), vatRateCode: item.vatRateCode ?? defaultVat, visitId: null, priceItemId: item.id, labourRateId: null, partUseIds: [] });
             }}
           />
           <AddFromList
@@ -253,7 +271,7 @@ export function LineEditor({ invoice, warnings = [], onSaved }: Props) {
             options={choices.labour.map((c) => ({ id: c.id, label: `${c.name} (${moneyText(c.hourlyMinor)} / h)` }))}
             onPick={(id) => {
               const rate = choices.labour.find((c) => c.id === id)!;
-              append({ kind: 'labour', description: `Labour (${rate.name})`, quantity: '1', unit: 'h', unitPrice: moneyText(rate.hourlyMinor), vatRateCode: rate.vatRateCode, visitId: null, priceItemId: null, labourRateId: rate.id });
+              append({ kind: 'labour', description: `Labour (${rate.name})`, quantity: '1', unit: 'h', unitPrice: moneyText(rate.hourlyMinor), vatRateCode: rate.vatRateCode, visitId: null, priceItemId: null, labourRateId: rate.id, partUseIds: [] });
             }}
           />
         </Stack>
