@@ -1,4 +1,4 @@
-import { useCallback, useMemo } from 'react';
+import { useCallback, useEffect, useMemo, useRef } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import type { JobFilters } from './api/get-job-status-counts';
 import { JOB_SORTS, type JobQuery, type JobSort } from './api/get-jobs';
@@ -87,10 +87,22 @@ export function tableQueryOf(s: JobScreenState): JobQuery {
 export function useJobScreen() {
   const [params, setParams] = useSearchParams();
   const state = useMemo(() => readJobScreen(params), [params]);
+  // The router hands a function update the address as last rendered, not as last written, so two changes before
+  // the next render (both dates filled quickly, a sort that also sends the grid back to its first page) would
+  // lose the first. Each change starts from the last address written until the screen has rendered it.
+  const shown = useRef(params);
+  const written = useRef<URLSearchParams | null>(null);
+  useEffect(() => {
+    shown.current = params;
+    written.current = null;
+  }, [params]);
   /** A change of filters goes back to the first page; paging and sorting say where they go themselves. */
   const change = useCallback(
-    (changes: Partial<JobScreenState>) =>
-      setParams((current) => writeJobScreen({ ...readJobScreen(current), page: 1, ...changes }), { replace: true }),
+    (changes: Partial<JobScreenState>) => {
+      const next = writeJobScreen({ ...readJobScreen(written.current ?? shown.current), page: 1, ...changes });
+      written.current = next;
+      setParams(next, { replace: true });
+    },
     [setParams],
   );
   return [state, change] as const;

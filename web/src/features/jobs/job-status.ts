@@ -16,8 +16,8 @@ export const JOB_STATUS_HINTS: Record<JobStatus, string> = {
   enquiry: 'Asked about, not booked yet',
   booked: 'Visits booked',
   'on-site': 'Work under way',
-  paperwork: 'Certificates and reports to issue',
-  done: 'Issued and invoiced',
+  paperwork: 'Signed off: certificates, reports and invoices to issue',
+  done: 'Issued and paid',
   cancelled: 'Not going ahead',
 };
 

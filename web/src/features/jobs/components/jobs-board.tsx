@@ -3,6 +3,10 @@ import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogTitle from '@mui/material/DialogTitle';
 import CardContent from '@mui/material/CardContent';
 import IconButton from '@mui/material/IconButton';
 import LinearProgress from '@mui/material/LinearProgress';
@@ -13,7 +17,7 @@ import MenuItem from '@mui/material/MenuItem';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { JOB_STATUSES } from '@wiretrail/core';
+import { JOB_STATUSES, type JobWork, unmetFor } from '@wiretrail/core';
 import { type DragEvent, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
@@ -36,6 +40,54 @@ interface Props {
   onShowAll: (status: JobStatus) => void;
 }
 
+/** What a dragged card carries to the column it is dropped on: enough to ask before moving it there. */
+interface Dragged {
+  id: string;
+  status: string | null | undefined;
+  name: string;
+  work?: JobWork;
+}
+
+/** A move the office asked for that the job's work does not bear out, waiting for them to say so. */
+interface Asking {
+  job: Dragged;
+  to: JobStatus;
+  unmet: string[];
+}
+
+/**
+ * Asks before moving a job to a status its work has not reached (Done with an invoice unpaid, say), naming what is
+ * not so. The office has the last word: moving it anyway sets the status by hand, which stands until the work moves.
+ */
+export function MoveConfirmation({ asking, onMove, onCancel }: { asking: Asking | null; onMove: () => void; onCancel: () => void }) {
+  return (
+    <Dialog open={!!asking} onClose={onCancel} aria-labelledby="move-confirmation-title" maxWidth="xs" fullWidth>
+      {asking && (
+        <>
+          <DialogTitle id="move-confirmation-title">Move to {jobStatusWords(asking.to)}?</DialogTitle>
+          <DialogContent>
+            <Typography gutterBottom>{asking.job.name} has not reached {jobStatusWords(asking.to)} yet:</Typography>
+            <Box component="ul" aria-label="Not yet so" sx={{ m: 0, pl: 2.5 }}>
+              {asking.unmet.map((u) => (
+                <li key={u}>{u}</li>
+              ))}
+            </Box>
+            <Typography variant="body2" color="text.secondary" sx={{ mt: 1.5 }}>
+              It stays where you put it until the work moves again.
+            </Typography>
+          </DialogContent>
+          <DialogActions>
+            <Button onClick={onCancel}>Leave it</Button>
+            <Button variant="contained" onClick={onMove}>
+              Move anyway
+            </Button>
+          </DialogActions>
+        </>
+      )}
+    </Dialog>
+  );
+}
+
 function JobCard({ job, onMove, moving, personName }: { job: Job; onMove: (status: JobStatus) => void; moving: boolean; personName: (id: string) => string }) {
   const [anchor, setAnchor] = useState<HTMLElement | null>(null);
   const name = job.reference ? `${job.reference} ${job.title}` : job.title;
@@ -46,7 +98,7 @@ function JobCard({ job, onMove, moving, personName }: { job: Job; onMove: (statu
       variant="outlined"
       draggable
       onDragStart={(e: DragEvent) => {
-        e.dataTransfer.setData(DRAG_TYPE, JSON.stringify({ id: job.id, status: job.status }));
+        e.dataTransfer.setData(DRAG_TYPE, JSON.stringify({ id: job.id, status: job.status, name, work: job.work } satisfies Dragged));
         e.dataTransfer.effectAllowed = 'move';
       }}
       sx={{ cursor: 'grab', opacity: moving ? 0.5 : 1, '&:hover': { borderColor: 'primary.main' } }}
@@ -103,14 +155,21 @@ function Column({ status, filters, count, personName, onShowAll }: { status: Job
   const jobs = useJobs({ ...filters, status, sort: 'nextVisit', pageSize: COLUMN_SIZE });
   const move = useUpdateJob();
   const [over, setOver] = useState(false);
+  const [asking, setAsking] = useState<Asking | null>(null);
   const moveJob = (id: string, to: JobStatus) => move.mutate({ id, changes: { status: to } });
+  /** Moves at once when the work agrees, else asks first. */
+  const ask = (job: Dragged, to: JobStatus) => {
+    const unmet = job.work ? unmetFor(to, job.work) : [];
+    if (unmet.length) setAsking({ job, to, unmet });
+    else moveJob(job.id, to);
+  };
   const onDrop = (e: DragEvent) => {
     e.preventDefault();
     setOver(false);
     const raw = e.dataTransfer.getData(DRAG_TYPE);
     if (!raw) return;
-    const dragged = JSON.parse(raw) as { id: string; status: string };
-    if (dragged.status !== status) moveJob(dragged.id, status);
+    const dragged = JSON.parse(raw) as Dragged;
+    if (dragged.status !== status) ask(dragged, status);
   };
   const items = jobs.data?.items ?? [];
   const total = count ?? jobs.data?.total ?? 0;
@@ -158,13 +217,21 @@ function Column({ status, filters, count, personName, onShowAll }: { status: Job
         </Alert>
       )}
       {items.map((j) => (
-        <JobCard key={j.id} job={j} personName={personName} moving={move.isPending && move.variables?.id === j.id} onMove={(to) => moveJob(j.id, to)} />
+        <JobCard key={j.id} job={j} personName={personName} moving={move.isPending && move.variables?.id === j.id} onMove={(to) => ask({ id: j.id, status: j.status, name: j.reference ? `${j.reference} ${j.title}` : j.title, work: j.work }, to)} />
       ))}
       {jobs.isSuccess && items.length === 0 && (
         <Typography variant="body2" color="text.secondary" sx={{ px: 0.5, py: 2, textAlign: 'center' }}>
           No jobs here{Object.values(filters).some(Boolean) ? ' that match' : ''}.
         </Typography>
       )}
+      <MoveConfirmation
+        asking={asking}
+        onCancel={() => setAsking(null)}
+        onMove={() => {
+          if (asking) moveJob(asking.job.id, asking.to);
+          setAsking(null);
+        }}
+      />
       {total > items.length && (
         <Button size="small" onClick={() => onShowAll(status)}>
           All {total} in the table
