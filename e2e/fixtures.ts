@@ -1,4 +1,5 @@
 import { fileURLToPath } from 'node:url';
+import { v7 as uuidv7 } from 'uuid';
 import { type APIRequestContext, type Browser, type BrowserContext, type Page, test as base } from '@playwright/test';
 import { OfficeJobPage } from './pages/office-job-page.js';
 import { DEMO_PASSWORD, SignInPage } from './pages/sign-in-page.js';
@@ -117,4 +118,46 @@ export async function bookVisit(
   });
   if (!visit.ok()) throw new Error(`booking the visit answered ${visit.status()}: ${await visit.text()}`);
   return { jobId, visitId: ((await visit.json()) as { id: string }).id };
+}
+
+/**
+ * A technician's phone recording a visit done, through the sync API as the app does it: pulled first (the server
+ * takes no base version above what the device was sent), then the arrival, the departure and the parts used pushed.
+ */
+export async function recordVisitDone(
+  request: APIRequestContext,
+  opts: { technicianEmail: string; visitId: string; arrived: string; left: string; parts: Array<{ name: string; quantity: number }> },
+): Promise<void> {
+  const tech = await apiSession(request, opts.technicianEmail);
+  const headers = { authorization: `Bearer ${tech.accessToken}` };
+  const deviceId = `phone-e2e-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
+  const rows = new Map<string, Record<string, unknown>>();
+  for (let checkpoint = 0; ;) {
+    const res = await request.get(`/api/sync/pull?checkpoint=${checkpoint}&limit=1000&deviceId=${deviceId}`, { headers });
+    if (!res.ok()) throw new Error(`pull answered ${res.status()}`);
+    const page = (await res.json()) as { changes: PulledChange[]; checkpoint: number; hasMore: boolean };
+    for (const c of page.changes) if (c.row) rows.set(`${c.entity}:${c.id}`, c.row);
+    checkpoint = page.checkpoint;
+    if (!page.hasMore) break;
+  }
+  const visit = rows.get(`visit:${opts.visitId}`);
+  if (!visit) throw new Error(`the visit ${opts.visitId} did not reach ${opts.technicianEmail}'s phone`);
+  const items = [...rows.values()].filter((r) => typeof r.sellMinor === 'number' || (typeof r.name === 'string' && 'vatRateCode' in r));
+  let counter = 0;
+  const hlc = () => `${new Date().toISOString()}-${(counter++).toString(16).padStart(4, '0')}-${deviceId}`;
+  const mutations = [
+    { mutationId: uuidv7(), entity: 'visit', id: opts.visitId, baseVersion: visit.version, set: { status: 'finished', actualStart: opts.arrived, actualEnd: opts.left }, hlc: hlc() },
+    ...opts.parts.map((p) => {
+      const item = items.find((i) => i.name === p.name);
+      if (!item) throw new Error(`no price item called ${p.name}`);
+      return {
+        mutationId: uuidv7(), entity: 'materialLine', id: uuidv7(), baseVersion: 0,
+        set: { visitId: opts.visitId, siteId: visit.siteId, priceItemId: item.id, description: p.name, quantity: p.quantity, unit: item.unit ?? null }, hlc: hlc(),
+      };
+    }),
+  ];
+  const pushed = await request.post('/api/sync/push', { headers, data: { deviceId, mutations } });
+  if (!pushed.ok()) throw new Error(`push answered ${pushed.status()}: ${await pushed.text()}`);
+  const results = ((await pushed.json()) as { results: Array<{ status: string; error?: string }> }).results;
+  if (results.some((r) => r.status !== 'applied')) throw new Error(`push not applied: ${JSON.stringify(results)}`);
 }

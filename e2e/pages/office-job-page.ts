@@ -17,6 +17,37 @@ export class OfficeJobPage {
     await this.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Jobs' }).click();
   }
 
+  /** The Jobs board showing only jobs that match these words, as its search leaves it in the address. */
+  async openBoardFor(words: string): Promise<void> {
+    await this.page.goto(`/jobs?q=${encodeURIComponent(words)}`);
+    await expect(this.page.getByRole('heading', { level: 1, name: 'Jobs' })).toBeVisible();
+  }
+
+  /** The job's quotes and invoices, at its billing address. */
+  async openBilling(jobId: string): Promise<void> {
+    await this.page.goto(`/invoices/jobs/${jobId}`);
+    await expect(this.page.getByRole('heading', { name: 'Quotes and invoices' })).toBeVisible();
+  }
+
+  /** Builds a new invoice from the job's visits and gives its draft's dialog. */
+  async newInvoiceFromJob(): Promise<Locator> {
+    await this.page.getByRole('button', { name: 'New invoice' }).click();
+    const draft = this.page.getByRole('dialog', { name: /Draft invoice/ });
+    await expect(draft).toBeVisible();
+    return draft;
+  }
+
+  /** Issues the draft open in its dialog, answering the question, and gives the number it was issued under. */
+  async issueDraft(draft: Locator): Promise<string> {
+    await draft.getByRole('button', { name: 'Save and issue…' }).click();
+    await this.page.getByRole('dialog', { name: 'Issue this invoice?' }).getByRole('button', { name: 'Issue' }).click();
+    const issued = this.page.getByRole('dialog', { name: /^Invoice INV-\d{4}/ });
+    await expect(issued.getByText('Awaiting payment')).toBeVisible();
+    const number = (await issued.getByRole('heading').first().textContent())!.match(/INV-\d{4}/)![0];
+    await issued.getByRole('button', { name: 'Close' }).click();
+    return number;
+  }
+
   /** A job's card in one column of the board, by its reference. */
   boardCard(column: string, reference: RegExp): Locator {
     return this.page.getByRole('region', { name: column }).getByRole('article', { name: reference });
