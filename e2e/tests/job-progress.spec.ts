@@ -1,5 +1,5 @@
 import { OfficeJobPage } from '../pages/office-job-page.js';
-import { bookVisit, expect, PHONE, ROLE_USERS, signedInAtDesk, test } from '../fixtures.js';
+import { bookVisit, DESK, expect, PHONE, ROLE_USERS, signedInAtDesk, test } from '../fixtures.js';
 
 test.use({ viewport: PHONE, signedInAs: 'technician' });
 
@@ -42,4 +42,23 @@ test('a job moves to Paperwork when its visit is signed off', async ({ browser, 
   }).toPass({ timeout: 30_000 });
   await expect(board.boardCard('Booked', named)).toHaveCount(0);
   await desk.context.close();
+});
+
+test.describe('the jobs table at the desk', () => {
+  test.use({ viewport: DESK, signedInAs: 'office' });
+
+  test('keeps both visit dates filled in quick succession and its sort through a reload', async ({ page }) => {
+    await page.goto('/jobs?view=table');
+    await expect(page.getByRole('grid', { name: 'Jobs' })).toBeVisible();
+    await page.getByLabel('Visits from').fill('2026-01-01');
+    await page.getByLabel('Visits to').fill('2036-12-31');
+    await page.getByRole('columnheader', { name: 'Reference' }).click();
+    await expect(page).toHaveURL(/[?&]sort=reference/);
+    await expect(page).toHaveURL(/[?&]from=2026-01-01/);
+    await expect(page).toHaveURL(/[?&]to=2036-12-31/);
+    await page.reload();
+    await expect(page.getByRole('columnheader', { name: 'Reference' })).toHaveAttribute('aria-sort', 'ascending');
+    await expect(page.getByLabel('Visits from')).toHaveValue('2026-01-01');
+    await expect(page.getByLabel('Visits to')).toHaveValue('2036-12-31');
+  });
 });
