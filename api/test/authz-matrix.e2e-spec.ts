@@ -41,7 +41,7 @@ describe('authorisation matrix: every route × every role × own and other organ
   it('finds the routes of every feature', () => {
     const paths = routes.map((r) => `${r.method} ${r.path}`);
     for (const expected of [
-      'post /api/auth/sign-in', 'get /api/users', 'post /api/sync/push', 'get /api/sync/pull', 'get /api/conflicts', 'get /api/circuits', 'patch /api/visits/:id',
+      'post /api/auth/sign-in', 'get /api/users', 'post /api/sync/push', 'get /api/sync/pull', 'get /api/conflicts', 'get /api/circuits', 'patch /api/visits/:id', 'get /api/visits/:id/record',
       'post /api/jobs/:id/documents', 'get /api/jobs/:id/documents', 'get /api/documents/:id', 'get /api/documents/:id/pdf', 'post /api/documents/:id/send',
       'get /api/jobs/:id/held-changes', 'post /api/documents/:id/revisions',
       'post /api/jobs/:id/share-links', 'get /api/jobs/:id/share-links', 'post /api/share-links/:id/revoke',

@@ -45,6 +45,7 @@ export * from './contracts/shared-job.js';
 export * from './contracts/records.js';
 export * from './contracts/jobs.js';
 export * from './jobs/job-progress.js';
+export * from './contracts/visit-record.js';
 export * from './certification/certificate-defaults.js';
 export * from './certification/minor-works-declaration.js';
 export * from './text/typed-text.js';

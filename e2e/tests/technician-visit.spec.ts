@@ -1,6 +1,6 @@
 import type { Page, TestInfo } from '@playwright/test';
 import sharp from 'sharp';
-import { bookVisit, expect, officeRows, PHONE, ROLE_USERS, test } from '../fixtures.js';
+import { bookVisit, expect, officeRows, PHONE, ROLE_USERS, signedInAtDesk, test } from '../fixtures.js';
 
 // SCREEN_SCHEME=dark runs it in the dark theme, for the screenshots of a dark cupboard.
 test.use({ viewport: PHONE, colorScheme: process.env.SCREEN_SCHEME === 'dark' ? 'dark' : 'light', signedInAs: 'technician' });
@@ -18,6 +18,7 @@ async function shot(page: Page, testInfo: TestInfo, name: string): Promise<void>
 }
 
 test('a whole visit on a phone with no signal: cables, a moved socket, readings, a fused spur, photos and sign-off reach the office', async ({
+  browser,
   page,
   context,
   request,
@@ -28,7 +29,7 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   const title = `Move a lounge socket, add a spur for a heater, and patch the TV (${stamp})`;
   const goodCable = `TV-${stamp.slice(-4)}A`;
   const splitCable = `TV-${stamp.slice(-4)}B`;
-  const { visitId } = await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 14, endHour: 17 });
+  const { jobId, visitId } = await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 14, endHour: 17 });
 
   await visitPage.openToday();
   const card = visitPage.visitCard(title);
@@ -262,4 +263,24 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   const photos = live('photo', (r) => r.visitId === visitId);
   expect(photos).toHaveLength(2);
   expect(photos.find((p) => String(p.caption).startsWith('Moved socket'))).toMatchObject({ subjectType: 'pointChange', uploadState: 'ready' });
+
+  // At the desk, the visit's own page, opened from the job: every word the technician wrote, in time order.
+  const desk = await signedInAtDesk(browser, 'office');
+  await desk.page.goto(`/jobs/${jobId}`);
+  await desk.page.getByRole('table', { name: 'Visits of this job' }).getByRole('link').first().click();
+  await expect(desk.page.getByRole('heading', { level: 1, name: /^Visit of / })).toBeVisible();
+  const signOff = desk.page.getByRole('region', { name: 'Sign-off' });
+  await expect(signOff).toContainText(title);
+  await expect(signOff).toContainText('Zs high at the new socket; the ring will be checked at the board on the return visit.');
+  await expect(signOff.getByRole('img', { name: 'Signature of Sam Brannigan' })).toBeVisible();
+  const facts = desk.page.getByRole('region', { name: 'The visit' });
+  await expect(facts).toContainText('Sam Brannigan');
+  await expect(facts.getByText('Cautions read')).toBeVisible();
+  const timeline = desk.page.getByRole('list', { name: 'What was recorded, in time order' });
+  for (const line of ['Arrived on site', 'Safety cautions read before work on a circuit', `Heater spur finished (${stamp})`, `Cable ${goodCable}`, 'Point change: Moved', 'Readings: circuit 1 · Sockets, ground floor', 'Signed off']) {
+    await expect(timeline.getByText(line).first()).toBeVisible();
+  }
+  await expect(timeline.getByRole('button', { name: /^Open photo: Moved socket/ })).toBeVisible();
+  await expect(desk.page.getByRole('region', { name: 'Parts used' }).getByRole('row', { name: /2\.5 mm² twin and earth cable\s+6 m/ })).toBeVisible();
+  await desk.context.close();
 });

@@ -26,6 +26,24 @@ const SORTS: Record<JobSort, string> = {
   created: 'createdAt',
 };
 
+/**
+ * The next reference after the recent ones (newest first): the series most of them share, so that one reference typed
+ * by hand does not start a new one; one past the highest number in it, zero-padded as it is. With no numbered job the
+ * organisation starts at J-0001.
+ */
+export function nextReference(recent: string[]): string {
+  const numbered = recent.map((r) => /^(.*?)(\d+)$/.exec(r.trim())).filter((m): m is RegExpExecArray => m !== null);
+  if (numbered.length === 0) return 'J-0001';
+  const counts = new Map<string, number>();
+  for (const m of numbered) counts.set(m[1]!, (counts.get(m[1]!) ?? 0) + 1);
+  // Map keeps the order first seen, newest first, so a tie goes to the newer series.
+  const prefix = [...counts].reduce((best, entry) => (entry[1] > best[1] ? entry : best))[0];
+  const same = numbered.filter((m) => m[1] === prefix);
+  const width = Math.max(...same.map((m) => m[2]!.length));
+  const next = Math.max(...same.map((m) => Number(m[2]))) + 1;
+  return `${prefix}${String(next).padStart(width, '0')}`;
+}
+
 @Injectable()
 export class JobsService extends RecordsService<ListJobsQueryDto, 'job', JobListing> {
   protected readonly entity = 'job';
@@ -37,6 +55,19 @@ export class JobsService extends RecordsService<ListJobsQueryDto, 'job', JobList
 
   override findOne(user: AuthUser, id: string): Promise<JobListing> {
     return super.findOne(user, id);
+  }
+
+  /** A job made without a reference takes the next one in the organisation's own series ("LED-0045" → "LED-0046"). */
+  protected override async filledIn(em: EntityManager, user: AuthUser, set: Record<string, unknown>): Promise<Record<string, unknown>> {
+    if (typeof set.reference === 'string' && set.reference.trim()) return {};
+    const latest = await syncRepository(em, 'job')
+      .createQueryBuilder('j')
+      .select(['j.reference'])
+      .where('j.organisationId = :org AND j.reference IS NOT NULL', { org: user.organisationId })
+      .orderBy('j.createdAt', 'DESC')
+      .limit(50)
+      .getMany();
+    return { reference: nextReference(latest.map((j) => j.reference ?? '')) };
   }
 
   protected listing(q: ListJobsQueryDto): Listing {

@@ -182,10 +182,19 @@ export abstract class RecordsService<Q extends PageQueryDto, E extends SiteRecor
     const id = uuidv7();
     const { result, row } = await this.queue.run(async (em) => {
       await this.checkSameSite(em, user, set, set);
+      Object.assign(set, await this.filledIn(em, user, set));
       const [result] = await this.engine.applyAll(em, this.actor(user), [this.mutation(id, 0, set)]);
       return { result: result!, row: await this.saved(em, user, id) };
     });
     return this.answer(result, row);
+  }
+
+  /**
+   * Fields the server gives a new record that the office left out, such as a job's next reference. Runs inside the
+   * write, so two records made at once never get the same one.
+   */
+  protected async filledIn(_em: EntityManager, _user: AuthUser, _set: Record<string, unknown>): Promise<Record<string, unknown>> {
+    return {};
   }
 
   async update(user: AuthUser, id: string, dto: object): Promise<R> {

@@ -25,6 +25,12 @@ export class VisitsController {
     return this.visits.findOne(user, id);
   }
 
+  /** The visit with everything recorded on it, for the office's page of the visit. */
+  @Get(':id/record')
+  record(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string) {
+    return this.visits.record(user, id);
+  }
+
   @Post()
   create(@CurrentUser() user: AuthUser, @Body() dto: CreateVisitDto) {
     return this.visits.create(user, dto);

@@ -34,6 +34,7 @@ export const technicianScreens: RouteObject[] = [
 const officeScreens: RouteObject[] = [
   { path: paths.jobs.path, lazy: () => import('./routes/office/jobs') },
   { path: paths.job.path, lazy: () => import('./routes/office/job') },
+  { path: paths.visitRecord.path, lazy: () => import('./routes/office/visit') },
   { path: paths.cableAtDesk.path, lazy: () => import('./routes/office/cable') },
   { path: paths.schedule.path, lazy: () => import('./routes/office/schedule') },
   { path: paths.customers.path, lazy: () => import('./routes/office/customers') },

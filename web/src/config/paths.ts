@@ -18,6 +18,8 @@ export const paths = {
   /** Where a cable label's QR code points: sends a technician to the record on the phone, the office to the job's schedule. */
   cable: { path: '/cables/:cableId', href: (cableId: string) => `/cables/${encodeURIComponent(cableId)}` },
   cableOnSite: { path: '/cables/:cableId/on-site', href: (cableId: string) => `/cables/${encodeURIComponent(cableId)}/on-site` },
+  /** One visit at the desk: everything recorded on it, in time order. */
+  visitRecord: { path: '/jobs/:jobId/visits/:visitId', href: (jobId: string, visitId: string) => `/jobs/${encodeURIComponent(jobId)}/visits/${encodeURIComponent(visitId)}` },
   cableAtDesk: { path: '/cables/:cableId/desk', href: (cableId: string) => `/cables/${encodeURIComponent(cableId)}/desk` },
   sync: { path: '/sync', label: 'Sync' },
   me: { path: '/me', label: 'Me' },

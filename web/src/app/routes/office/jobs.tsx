@@ -1,16 +1,21 @@
 import TableRowsOutlined from '@mui/icons-material/TableRowsOutlined';
+import AddOutlined from '@mui/icons-material/AddOutlined';
 import ViewKanbanOutlined from '@mui/icons-material/ViewKanbanOutlined';
+import Button from '@mui/material/Button';
 import FormControlLabel from '@mui/material/FormControlLabel';
 import Stack from '@mui/material/Stack';
 import Switch from '@mui/material/Switch';
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import LinearProgress from '@mui/material/LinearProgress';
-import { lazy, Suspense, useCallback, useMemo } from 'react';
+import { lazy, Suspense, useCallback, useMemo, useState } from 'react';
+import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
+import { paths } from '@/config/paths';
 import { useJobStatusCounts } from '@/features/jobs/api/get-job-status-counts';
 import { JobFiltersBar } from '@/features/jobs/components/job-filters-bar';
 import { JobsBoard } from '@/features/jobs/components/jobs-board';
+import { NewJobDialog } from '@/features/jobs/components/new-job-dialog';
 import { filtersOf, useJobScreen } from '@/features/jobs/job-filters';
 import { useCustomers } from '@/features/sites/api/get-customers';
 import { useDirectory } from '@/lib/directory';
@@ -27,6 +32,8 @@ export function Component() {
   const technicians = useMemo(() => (directory.data ?? []).filter((p) => p.role === 'technician' && p.active).map((p) => ({ id: p.id, name: p.name })), [directory.data]);
   const personName = useCallback((id: string) => directory.data?.find((p) => p.id === id)?.name ?? 'Someone', [directory.data]);
   const total = counts.data?.total;
+  const navigate = useNavigate();
+  const [taking, setTaking] = useState(false);
   return (
     <>
       <PageHeader
@@ -38,6 +45,9 @@ export function Component() {
         }
         action={
           <Stack direction="row" sx={{ alignItems: 'center', gap: 2, flexWrap: 'wrap' }}>
+            <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setTaking(true)}>
+              New job
+            </Button>
             {state.view === 'board' && (
               <FormControlLabel
                 sx={{ whiteSpace: 'nowrap' }}
@@ -71,6 +81,7 @@ export function Component() {
           <JobsTable state={state} change={change} personName={personName} />
         </Suspense>
       )}
+      {taking && <NewJobDialog onClose={() => setTaking(false)} onCreated={(job) => navigate(paths.job.href(job.id))} />}
     </>
   );
 }

@@ -5,6 +5,7 @@ import Button from '@mui/material/Button';
 import ButtonBase from '@mui/material/ButtonBase';
 import LinearProgress from '@mui/material/LinearProgress';
 import Pagination from '@mui/material/Pagination';
+import Link from '@mui/material/Link';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
@@ -15,6 +16,8 @@ import { useOfficeTags } from '../api/get-photo-tags';
 import { dayAndTime, tagList, trailTime } from '../trail-time';
 import { PhotoViewer, type ViewerPhoto } from './photo-viewer';
 import { ServerPhotoImage } from '../components/server-photo-image';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
 
 /** Enough for a morning's work on one screen; the grid fetches thumbnails only as they scroll into view. */
 const PAGE_SIZE = 60;
@@ -202,6 +205,9 @@ export function JobPhotoTrail({ jobId, reference, areas, subjects, visits, perso
             <Typography component="span" color="text.secondary" sx={{ ml: 1 }}>
               {visitTechnicians(g.visitId)}
             </Typography>
+            <Link component={RouterLink} to={paths.visitRecord.href(jobId, g.visitId)} variant="body2" sx={{ ml: 1.5 }}>
+              The visit’s record
+            </Link>
           </Typography>
           {g.areas.map((a) => (
             <Box key={a.key} sx={{ mb: 2.5 }}>

@@ -18,6 +18,8 @@ import { z } from 'zod';
 import type { Person } from '@/lib/directory';
 import { type Job, type Visit, useSaveVisit } from '../api/schedule-data';
 import { dayKey, timeOf, toInstant } from './week';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
 
 const schema = z
   .object({
@@ -126,6 +128,11 @@ export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicia
           <span />
         )}
         <Stack direction="row" spacing={1}>
+          {visit && (
+            <Button component={RouterLink} to={paths.visitRecord.href(visit.jobId, visit.id)}>
+              Open the visit’s record
+            </Button>
+          )}
           <Button onClick={onClose}>Close</Button>
           <Button type="submit" form="visit-form" variant="contained" disabled={save.isPending}>
             {visit ? 'Save changes' : 'Book visit'}

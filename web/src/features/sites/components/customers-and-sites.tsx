@@ -2,6 +2,7 @@ import AddBusinessOutlined from '@mui/icons-material/AddBusinessOutlined';
 import AddHomeWorkOutlined from '@mui/icons-material/AddHomeWorkOutlined';
 import EditOutlined from '@mui/icons-material/EditOutlined';
 import PersonAddAltOutlined from '@mui/icons-material/PersonAddAltOutlined';
+import PostAddOutlined from '@mui/icons-material/PostAddOutlined';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
@@ -28,7 +29,8 @@ type Editing = { kind: 'customer'; customer?: Customer } | { kind: 'site'; site?
 const FIRST_PAGE: GridPaginationModel = { page: 0, pageSize: 25 };
 
 /** Who the office works for and where: sites with their supply, customers with their sites; each one added or changed here. */
-export function CustomersAndSites() {
+/** `onNewJob`, when given, offers a new job on each customer's and each site's row. */
+export function CustomersAndSites({ onNewJob }: { onNewJob?: (customerId: string, siteId?: string) => void } = {}) {
   const [tab, setTab] = useState<'sites' | 'customers'>('sites');
   const [search, setSearch] = useState('');
   const deferred = useDeferredValue(search.trim());
@@ -65,14 +67,23 @@ export function CustomersAndSites() {
     {
       field: 'actions',
       headerName: '',
-      width: 64,
+      width: onNewJob ? 112 : 64,
       sortable: false,
       renderCell: ({ row }) => (
-        <Tooltip title="Change the site's details">
-          <IconButton aria-label={`Change ${row.name ?? row.address}`} onClick={() => setEditing({ kind: 'site', site: row })}>
-            <EditOutlined />
-          </IconButton>
-        </Tooltip>
+        <Stack direction="row">
+          <Tooltip title="Change the site's details">
+            <IconButton aria-label={`Change ${row.name ?? row.address}`} onClick={() => setEditing({ kind: 'site', site: row })}>
+              <EditOutlined />
+            </IconButton>
+          </Tooltip>
+          {onNewJob && (
+            <Tooltip title="Take a new job at this site">
+              <IconButton aria-label={`New job at ${row.name ?? row.address}`} onClick={() => onNewJob(row.customerId, row.id)}>
+                <PostAddOutlined />
+              </IconButton>
+            </Tooltip>
+          )}
+        </Stack>
       ),
     },
   ];
@@ -103,7 +114,7 @@ export function CustomersAndSites() {
     {
       field: 'actions',
       headerName: '',
-      width: 112,
+      width: onNewJob ? 160 : 112,
       sortable: false,
       renderCell: ({ row }) => (
         <Stack direction="row">
@@ -117,6 +128,13 @@ export function CustomersAndSites() {
               <AddHomeWorkOutlined />
             </IconButton>
           </Tooltip>
+          {onNewJob && (
+            <Tooltip title="Take a new job for this customer">
+              <IconButton aria-label={`New job for ${row.name}`} onClick={() => onNewJob(row.id)}>
+                <PostAddOutlined />
+              </IconButton>
+            </Tooltip>
+          )}
         </Stack>
       ),
     },

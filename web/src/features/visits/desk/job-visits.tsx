@@ -2,6 +2,7 @@ import EventOutlined from '@mui/icons-material/EventOutlined';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Chip from '@mui/material/Chip';
+import Link from '@mui/material/Link';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Table from '@mui/material/Table';
@@ -37,33 +38,36 @@ export function JobVisits({ jobId, personName }: { jobId: string; personName: (i
       ) : (
         // Scrolls sideways on a narrow screen: a keyboard can reach it to scroll.
         <TableContainer tabIndex={0} role="region" aria-label="Visits of this job">
-        <Table size="small" aria-label="Visits of this job">
-          <TableHead>
-            <TableRow>
-              <TableCell>Planned</TableCell>
-              <TableCell>Technicians</TableCell>
-              <TableCell>Status</TableCell>
-              <TableCell>On site</TableCell>
-              <TableCell>Signed off</TableCell>
-            </TableRow>
-          </TableHead>
-          <TableBody>
-            {(visits.data?.items ?? []).map((v) => (
-              <TableRow key={v.id}>
-                <TableCell>
-                  {visitWhen(v.plannedStart)}
-                  {v.plannedEnd ? `–${time(v.plannedEnd)}` : ''}
-                </TableCell>
-                <TableCell>{v.technicianIds?.length ? v.technicianIds.map(personName).join(', ') : 'Nobody yet'}</TableCell>
-                <TableCell>
-                  <Chip size="small" variant="outlined" label={visitStatusWords(v.status)} />
-                </TableCell>
-                <TableCell>{v.actualStart ? `${time(v.actualStart)}${v.actualEnd ? `–${time(v.actualEnd)}` : ''}` : '—'}</TableCell>
-                <TableCell>{v.signedAt ? `${v.signedByName ?? 'Signed'}, ${visitWhen(v.signedAt)}` : '—'}</TableCell>
+          <Table size="small" aria-label="Visits of this job">
+            <TableHead>
+              <TableRow>
+                <TableCell>Planned</TableCell>
+                <TableCell>Technicians</TableCell>
+                <TableCell>Status</TableCell>
+                <TableCell>On site</TableCell>
+                <TableCell>Signed off</TableCell>
               </TableRow>
-            ))}
-          </TableBody>
-        </Table>
+            </TableHead>
+            <TableBody>
+              {(visits.data?.items ?? []).map((v) => (
+                <TableRow key={v.id}>
+                  <TableCell>
+                    {/* The visit's own page: everything the technician recorded on it. */}
+                    <Link component={RouterLink} to={paths.visitRecord.href(jobId, v.id)}>
+                      {visitWhen(v.plannedStart)}
+                      {v.plannedEnd ? `–${time(v.plannedEnd)}` : ''}
+                    </Link>
+                  </TableCell>
+                  <TableCell>{v.technicianIds?.length ? v.technicianIds.map(personName).join(', ') : 'Nobody yet'}</TableCell>
+                  <TableCell>
+                    <Chip size="small" variant="outlined" label={visitStatusWords(v.status)} />
+                  </TableCell>
+                  <TableCell>{v.actualStart ? `${time(v.actualStart)}${v.actualEnd ? `–${time(v.actualEnd)}` : ''}` : '—'}</TableCell>
+                  <TableCell>{v.signedAt ? `${v.signedByName ?? 'Signed'}, ${visitWhen(v.signedAt)}` : '—'}</TableCell>
+                </TableRow>
+              ))}
+            </TableBody>
+          </Table>
         </TableContainer>
       )}
     </Paper>
