@@ -62,5 +62,8 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}'],
     // Through Vite, so the hooks get the same Dexie build as the app (one Dexie, one set of live queries).
     server: { deps: { inline: ['dexie-react-hooks'] } },
+    // Screen tests render lazy screens over an in-memory database; `npm test` runs them beside the API's suites on
+    // two cores, where five seconds is not always enough for the first render. A test that hangs still fails.
+    testTimeout: 20_000,
   },
 });

@@ -308,6 +308,9 @@ describe('sync: push and pull', () => {
     const list = await t.http.get('/api/conflicts?entity=circuit').set(auth).expect(200);
     expect(list.body.total).toBeGreaterThanOrEqual(2);
     const conflict = list.body.items[0];
+    // Named in words, not by id: the circuit, its board, its site and the customer.
+    expect(conflict.subject.title).toMatch(/^Circuit \S+ · \S/);
+    expect(conflict.subject.context).toEqual([expect.stringMatching(/^board /), expect.any(String), expect.any(String)]);
     const settled = await t.http.post(`/api/conflicts/${conflict.id}/resolve`).set(auth).send({ choice: 'discarded' }).expect(200);
     expect(settled.body).toMatchObject({ resolvedById: office.user.id, resolution: { choice: 'discarded' } });
     await t.http.post(`/api/conflicts/${conflict.id}/resolve`).set(auth).send({ choice: 'kept' }).expect(409);
@@ -317,6 +320,16 @@ describe('sync: push and pull', () => {
     expect(phone.rows.get(`circuit:${conflict.rowId}`)!.description).toBe(conflict.discardedValue);
     const open = await t.http.get(`/api/conflicts?rowId=${conflict.rowId}`).set(auth).expect(200);
     expect(open.body.total).toBe(0);
+    // Settled ones stay listed, with who settled them and how.
+    const done = await t.http.get(`/api/conflicts?resolved=true&rowId=${conflict.rowId}`).set(auth).expect(200);
+    // The circuit is named as it now reads: its description is the value the office chose.
+    expect(done.body.items[0]).toMatchObject({ id: conflict.id, resolvedById: office.user.id, subject: { title: expect.stringContaining(String(conflict.discardedValue)), context: conflict.subject.context } });
+    // Typing an empty value clears an optional field: null is a value, not a missing one.
+    const other = (await t.http.get('/api/conflicts?entity=circuit').set(auth).expect(200)).body.items.find((c: { field: string }) => c.field === 'description');
+    expect(other).toBeTruthy();
+    await t.http.post(`/api/conflicts/${other.id}/resolve`).set(auth).send({ choice: 'value', value: null }).expect(200);
+    await phone.pullAll(t, tech2);
+    expect(phone.rows.get(`circuit:${other.rowId}`)!.description).toBeNull();
     await t.http.get('/api/conflicts').set({ authorization: `Bearer ${tech1.accessToken}` }).expect(403);
   });
 });

@@ -32,9 +32,17 @@ test('the office settles two offline edits of the same circuit, side by side', a
   await expect(card).toContainText(`Comms cabinet, 16 A radial (${stamp})`);
   await expect(card).toContainText('Aled Pryce');
   await expect(card).toContainText('Sam Brannigan');
+  // Which circuit, in words: where it is and whose it is, not a record id
+  await expect(card).toContainText(/board \S+ · Brightwater Dental, Harbour Yard · Brightwater Dental Practice/);
+  await expect(card).not.toContainText(/record [0-9a-f]{6}/);
   await page.screenshot({ path: 'test-results/conflicts-inbox.png' });
   await card.getByRole('button', { name: 'Use the other value' }).click();
   await expect(card).toHaveCount(0);
+  // Settled ones stay on record: what was chosen, who chose it
+  await page.getByRole('tab', { name: 'Settled' }).click();
+  const row = page.getByRole('table', { name: 'Settled conflicts' }).getByRole('row').filter({ hasText: stamp });
+  await expect(row).toContainText(`The other value: Comms cabinet, 16 A radial (${stamp})`);
+  await expect(row).toContainText('Dan Whitlow');
 
   const after = await (await request.get(`/api/circuits/${circuit.id}`, { headers: { authorization: `Bearer ${await tokenFor(request, 'office@larkfield.example')}` } })).json();
   expect(after.description).toBe(`Comms cabinet, 16 A radial (${stamp})`);

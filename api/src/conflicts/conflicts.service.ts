@@ -8,6 +8,7 @@ import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
 import { toConflictReply } from '../sync/sync.service.js';
+import { conflictSubjects } from './conflict-subjects.js';
 import type { ListConflictsQueryDto } from './dto/list-conflicts-query.dto.js';
 import type { ResolveConflictDto } from './dto/resolve-conflict.dto.js';
 
@@ -31,9 +32,10 @@ export class ConflictsService {
         ...(q.rowId ? { rowId: q.rowId } : {}),
         ...(rowIds ? { rowId: In(q.rowId ? rowIds.filter((id) => id === q.rowId) : rowIds) } : {}),
       };
-      return syncRepository(em, 'conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
+      const [found, count] = await syncRepository(em, 'conflict').findAndCount({ where, order: { version: 'DESC' }, skip: (q.page - 1) * q.pageSize, take: q.pageSize });
+      return [await this.named(em, user.organisationId, found), count] as const;
     });
-    return { items: rows.map(toConflictReply), total, page: q.page, pageSize: q.pageSize };
+    return { items: rows, total, page: q.page, pageSize: q.pageSize };
   }
 
   /**
@@ -57,9 +59,18 @@ export class ConflictsService {
   }
 
   async findOne(user: AuthUser, id: string): Promise<Conflict> {
-    const row = await this.queue.read((em) => syncRepository(em, 'conflict').findOneBy({ id, organisationId: user.organisationId }));
+    const row = await this.queue.read(async (em) => {
+      const found = await syncRepository(em, 'conflict').findOneBy({ id, organisationId: user.organisationId });
+      return found ? (await this.named(em, user.organisationId, [found]))[0]! : null;
+    });
     if (!row) throw new NotFoundException('No such conflict.');
-    return toConflictReply(row);
+    return row;
+  }
+
+  /** The replies, each naming in words the record it is about. */
+  private async named(em: EntityManager, organisationId: string, rows: SyncRecord<'conflict'>[]): Promise<Conflict[]> {
+    const subjects = await conflictSubjects(em, organisationId, rows);
+    return rows.map((r) => ({ ...toConflictReply(r), subject: subjects.get(`${r.entity}:${r.rowId}`) }));
   }
 
   /**
@@ -104,7 +115,7 @@ export class ConflictsService {
           resolution: { choice: dto.choice, ...(dto.choice === 'value' ? { value: dto.value } : {}) },
         },
       }]);
-      return toConflictReply((await syncRepository(em, 'conflict').findOneByOrFail({ id }))!);
+      return (await this.named(em, user.organisationId, [await syncRepository(em, 'conflict').findOneByOrFail({ id })]))[0]!;
     });
   }
 }

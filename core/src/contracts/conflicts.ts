@@ -27,8 +27,16 @@ export type ConflictFields<When = string> = {
   resolution: unknown;
 };
 
+/** Which record a conflict is about, in words: "Circuit 2 · Sockets, first floor", on "board Consumer unit", "Orchard Rise", "Hannah Greaves". */
+export interface ConflictSubject {
+  title: string;
+  context: string[];
+}
+
 /** A conflict as `GET /api/conflicts` and `POST /api/conflicts/:id/resolve` answer it. */
 export type Conflict = ConflictFields & {
+  /** Given by the office's list and answers; absent where only the stored row is at hand. */
+  subject?: ConflictSubject;
   id: string;
   version: number;
   fieldVersions?: Record<string, number>;

@@ -8,8 +8,9 @@ export class ResolveConflictDto {
   @IsIn(CHOICES, { message: `choice must be one of: ${CHOICES.join(', ')}` })
   choice: (typeof CHOICES)[number];
 
-  @ApiPropertyOptional({ description: "the new value, when choice is 'value'" })
-  @ValidateIf((o: ResolveConflictDto) => o.choice === 'value')
-  @IsDefined({ message: "value is needed when choice is 'value'" })
+  // null is a value: it clears an optional field. Only a value left out altogether is refused.
+  @ApiPropertyOptional({ description: "the new value, when choice is 'value'; null clears an optional field" })
+  @ValidateIf((o: ResolveConflictDto) => o.choice === 'value' && o.value === undefined)
+  @IsDefined({ message: 'value: type the value to keep, or choose one of the two.' })
   value?: unknown;
 }

@@ -9,7 +9,7 @@ import Typography from '@mui/material/Typography';
 import { useState } from 'react';
 import type { Conflict } from '../api/get-conflicts';
 import { type Resolution, useResolveConflict } from '../api/resolve-conflict';
-import { entityName, fieldName, parseTyped, REASONS, showValue, whenFromClock } from './conflict-words';
+import { entityName, fieldMessage, fieldName, parseTyped, REASONS, showValue, whenFromClock } from './conflict-words';
 
 function Side({ title, value, by, hlc, accent }: { title: string; value: unknown; by: string; hlc: string | null; accent: 'primary' | 'secondary' }) {
   const when = whenFromClock(hlc);
@@ -37,10 +37,16 @@ export function ConflictCard({ conflict, nameOf }: { conflict: Conflict; nameOf:
   const title = `${entityName(conflict.entity)} · ${fieldName(conflict.field)}`;
   return (
     <Paper component="article" aria-label={title} variant="outlined" sx={{ p: 2.5 }}>
-      <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'baseline', gap: 2, mb: 1 }}>
-        <Typography variant="h3">{title}</Typography>
-        <Chip size="small" label={`record ${conflict.rowId.slice(-6)}`} variant="outlined" />
+      <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'baseline', gap: 2, mb: 0.5, flexWrap: 'wrap' }}>
+        {/* The record in words, so that two conflicts about different circuits never read alike. */}
+        <Typography variant="h3">{conflict.subject?.title ?? entityName(conflict.entity)}</Typography>
+        <Chip size="small" label={fieldName(conflict.field)} variant="outlined" />
       </Stack>
+      {!!conflict.subject?.context.length && (
+        <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+          {conflict.subject.context.join(' · ')}
+        </Typography>
+      )}
       <Typography color="text.secondary" sx={{ mb: 2 }}>
         {REASONS[conflict.reason] ?? 'Two changes met; one was kept.'}
       </Typography>
@@ -48,7 +54,7 @@ export function ConflictCard({ conflict, nameOf }: { conflict: Conflict; nameOf:
         <Side title="Kept" value={conflict.keptValue} by={nameOf(conflict.keptById)} hlc={conflict.keptHlc} accent="primary" />
         <Side title="Not kept" value={conflict.discardedValue} by={nameOf(conflict.discardedById)} hlc={conflict.discardedHlc} accent="secondary" />
       </Box>
-      {resolve.isError && (
+      {resolve.isError && !typing && (
         <Alert severity="error" sx={{ mt: 2 }}>
           {resolve.error.message}
         </Alert>
@@ -66,7 +72,16 @@ export function ConflictCard({ conflict, nameOf }: { conflict: Conflict; nameOf:
             settle({ choice: 'value', value: parsed.value });
           }}
         >
-          <TextField size="small" label={`New ${fieldName(conflict.field).toLowerCase()}`} value={text} onChange={(e) => setText(e.target.value)} error={!!typedError} helperText={typedError} autoFocus />
+          {/* The server's refusal of a typed value belongs to the field, beside it. */}
+          <TextField
+            size="small"
+            label={`New ${fieldName(conflict.field).toLowerCase()}`}
+            value={text}
+            onChange={(e) => setText(e.target.value)}
+            error={!!typedError || resolve.isError}
+            helperText={typedError ?? (resolve.isError ? fieldMessage(resolve.error.message) : ' ')}
+            autoFocus
+          />
           <Button type="submit" variant="contained" disabled={resolve.isPending}>
             Save
           </Button>

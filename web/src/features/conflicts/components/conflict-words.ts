@@ -65,3 +65,9 @@ export function parseTyped(entity: string, field: string, text: string): { value
       return { value: trimmed };
   }
 }
+
+/** A server's refusal as words beside the field: "circuit.description: at most 500 characters" → "At most 500 characters". */
+export function fieldMessage(message: string): string {
+  const bare = message.replace(/^[\w.]+:\s*/, '');
+  return bare.charAt(0).toUpperCase() + bare.slice(1);
+}

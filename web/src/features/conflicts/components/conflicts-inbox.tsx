@@ -3,19 +3,37 @@ import Alert from '@mui/material/Alert';
 import LinearProgress from '@mui/material/LinearProgress';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
+import Tab from '@mui/material/Tab';
+import Tabs from '@mui/material/Tabs';
 import Typography from '@mui/material/Typography';
+import { useState } from 'react';
 import { useConflicts } from '../api/get-conflicts';
 import { useDirectory } from '@/lib/directory';
 import { ConflictCard } from './conflict-card';
+import { SettledConflicts } from './settled-conflicts';
 
-/** Every unsettled conflict (or one job's), newest first; settling one sends the chosen value to every device. */
+/** To settle, or already settled: every conflict (or one job's), newest first. */
 export function ConflictsInbox({ jobId }: { jobId?: string }) {
-  const conflicts = useConflicts(1, jobId);
+  const [tab, setTab] = useState<'open' | 'settled'>('open');
   const people = useDirectory();
-  if (conflicts.isPending) return <LinearProgress aria-label="Loading conflicts" />;
-  if (conflicts.isError) return <Alert severity="error">{conflicts.error.message}</Alert>;
   const names = new Map((people.data ?? []).map((p) => [p.id, p.name]));
   const nameOf = (id: string | null) => (id ? (names.get(id) ?? 'Someone in your team') : 'Unknown');
+  return (
+    <>
+      <Tabs value={tab} onChange={(_, v: 'open' | 'settled') => setTab(v)} aria-label="Conflicts" sx={{ mb: 2, borderBottom: 1, borderColor: 'divider' }}>
+        <Tab value="open" label="To settle" />
+        <Tab value="settled" label="Settled" />
+      </Tabs>
+      {tab === 'open' ? <OpenConflicts jobId={jobId} nameOf={nameOf} /> : <SettledConflicts jobId={jobId} nameOf={nameOf} />}
+    </>
+  );
+}
+
+/** Every unsettled conflict; settling one sends the chosen value to every device. */
+function OpenConflicts({ jobId, nameOf }: { jobId?: string; nameOf: (id: string | null) => string }) {
+  const conflicts = useConflicts(1, jobId);
+  if (conflicts.isPending) return <LinearProgress aria-label="Loading conflicts" />;
+  if (conflicts.isError) return <Alert severity="error">{conflicts.error.message}</Alert>;
   if (conflicts.data.items.length === 0) {
     return (
       <Paper variant="outlined" sx={{ p: 3, textAlign: 'center' }}>
