@@ -98,6 +98,19 @@ for (const [size, viewport] of [
         await officeJob.tab(tab);
         await expectNoAxeViolations(page, testInfo, `job ${tab}`);
       }
+      // A signed visit's own page: LED-0033's, with its sign-off, signature, notes and parts.
+      await page.goto('/jobs?search=LED-0033');
+      await page.getByRole('link', { name: /Extra double socket in the front bedroom/ }).first().click();
+      await page.getByRole('table', { name: 'Visits of this job' }).getByRole('link').first().click();
+      await expect(page.getByRole('img', { name: 'Signature of Aled Pryce' })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'visit record');
+      await page.goto('/jobs');
+      await page.getByRole('button', { name: 'New job' }).click();
+      const dialog = page.getByRole('dialog', { name: 'New job' });
+      await dialog.getByRole('button', { name: 'Take the job' }).click();
+      await expect(dialog.getByText('Choose who the job is for, or take a new customer.')).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'new job with its mistakes');
+      await dialog.getByRole('button', { name: 'Cancel' }).click();
       for (const [path, heading] of [
         ['/schedule', 'Schedule'],
         ['/customers', 'Customers & sites'],
@@ -110,6 +123,9 @@ for (const [size, viewport] of [
         await expect(page.getByRole('heading', { level: 1, name: heading })).toBeVisible();
         await expectNoAxeViolations(page, testInfo, heading);
       }
+      await page.goto('/conflicts');
+      await page.getByRole('tab', { name: 'Settled' }).click();
+      await expectNoAxeViolations(page, testInfo, 'settled conflicts');
     });
   });
 }
