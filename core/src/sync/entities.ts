@@ -196,6 +196,7 @@ const REGISTRY = {
       faultProtection: seen(oneOf(...FAULT_PROTECTION_METHODS)),
       // The visit on which this circuit was installed new: that work needs an installation certificate.
       newOnVisitId: seen(ref('visit')),
+      recordedAt: seen(when),
     },
   },
   job: {
@@ -232,9 +233,11 @@ const REGISTRY = {
       takenAt: seen(when), sha256: seen(str(64)), sizeBytes: seen(int(0)), width: seen(int(0)), height: seen(int(0)), uploadState: seen(str(20)),
     },
   },
+  // recordedAt, on the records a phone makes: when it was made there, set once by the phone. A trail sorts by it, since
+  // createdAt is the server's clock when the row arrived, which after a day offline is the moment of the next signal.
   note: {
     name: 'note', table: 'note', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId', appendOnly: true,
-    fields: { visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), text: seen(text(), true) },
+    fields: { visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), text: seen(text(), true), recordedAt: seen(when) },
   },
   cableRun: {
     name: 'cableRun', table: 'cable_run', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
@@ -248,6 +251,7 @@ const REGISTRY = {
       tdrNs: seen(num(0, 100_000)), linkKind: seen(oneOf(...LINK_KINDS)), testedAt: seen(when),
       // Cable runs belong to the site; this says on which visit it was last recorded, for that visit's trail.
       lastVisitId: seen(ref('visit')),
+      recordedAt: seen(when),
     },
   },
   pointChange: {
@@ -272,6 +276,7 @@ const REGISTRY = {
       // Sizing a new run: design current, how it is installed and the rating factors for ambient, grouping and insulation.
       designCurrentA: seen(num(0, 1000)), installationMethod: seen(oneOf(...INSTALLATION_METHODS)),
       ambientFactor: seen(num(0.01, 1.25)), groupingFactor: seen(num(0.01, 1)), insulationFactor: seen(num(0.01, 1)),
+      recordedAt: seen(when),
     },
   },
   testResult: {
@@ -288,6 +293,7 @@ const REGISTRY = {
       instrument: seen(str(200)), testedAt: seen(when),
       // What the phone's checks said, with the rule set's id; the server works them out again before issuing.
       verdicts: seen(json),
+      recordedAt: seen(when),
     },
   },
   document: {
@@ -320,6 +326,7 @@ const REGISTRY = {
     fields: {
       visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), priceItemId: seen(ref('priceItem')),
       description: seen(str(), true), quantity: seen(num(0.001, 100_000), true), unit: seen(str(20)),
+      recordedAt: seen(when),
     },
   },
   conflict: {

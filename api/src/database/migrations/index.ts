@@ -12,6 +12,7 @@ import { CertificateJudgment1796231000000 } from './1796231000000-CertificateJud
 import { PhotoSenders1796430000000 } from './1796430000000-PhotoSenders.js';
 import { CertificateContent1796471619935 } from './1796471619935-CertificateContent.js';
 import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefunds.js';
+import { RecordedAt1796490000000 } from './1796490000000-RecordedAt.js';
 import { BillOnce1796490500000 } from './1796490500000-BillOnce.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
@@ -30,5 +31,6 @@ export const MIGRATIONS = [
   PhotoSenders1796430000000,
   CertificateContent1796471619935,
   AttemptsAndRefunds1796481200000,
+  RecordedAt1796490000000,
   BillOnce1796490500000,
 ];

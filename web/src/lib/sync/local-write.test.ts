@@ -32,13 +32,24 @@ describe('local writes', () => {
       ['note', first, 0, USER.id],
       ['note', second, 0, USER.id],
     ]);
-    expect(outbox[0]!.set).toEqual({ visitId: VISIT, siteId: SITE, text: 'Isolated at the consumer unit, proved dead' });
+    // The phone's own time of recording travels with the row, so a trail keeps it whenever the row reaches the server.
+    expect(outbox[0]!.set).toEqual({ visitId: VISIT, siteId: SITE, text: 'Isolated at the consumer unit, proved dead', recordedAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT/) });
     const deviceId = (await db.getMeta('deviceIds'))?.[USER.id];
     expect(deviceId).toEqual(expect.any(String));
     expect(parseHlc(outbox[0]!.hlc)?.deviceId).toBe(deviceId);
     expect(compareHlc(outbox[0]!.hlc, outbox[1]!.hlc)).toBe(-1);
     expect(await db.getMeta('hlc')).toBe(outbox[1]!.hlc);
     expect(heard).toBe(2);
+  });
+
+  it('stamps when a record was made once, at creation, and never on a later edit', async () => {
+    const id = await createRecord('note', { visitId: VISIT, siteId: SITE, text: 'Floorboards lifted' });
+    const made = (await db.note.get(id))!.recordedAt;
+    expect(Date.parse(made!)).toBeLessThanOrEqual(Date.now());
+    const circuit = await createRecord('circuit', { siteId: SITE, boardId: SITE, number: '9', recordedAt: '2026-12-03T10:06:00.000Z' });
+    expect((await db.circuit.get(circuit))!.recordedAt).toBe('2026-12-03T10:06:00.000Z');
+    await saveRecord('circuit', circuit, { description: 'Garage sockets' });
+    expect((await db.outbox.orderBy('seq').last())!.set).toEqual({ description: 'Garage sockets' });
   });
 
   it('keeps nothing when the outbox entry cannot be written', async () => {

@@ -32,6 +32,11 @@ type Op =
 
 const listeners = new Set<() => void>();
 
+/** A record that keeps when it was made stamps it now, once, on this phone: the server's clock is the next signal's. */
+function stamped(entity: SyncEntityName, fields: Fields): Fields {
+  return 'recordedAt' in SYNC_ENTITIES[entity].fields && fields.recordedAt === undefined ? { ...fields, recordedAt: new Date().toISOString() } : fields;
+}
+
 /** The sync engine listens here to send soon after something is recorded. */
 export function subscribeLocalWrites(listener: () => void): () => void {
   listeners.add(listener);
@@ -51,7 +56,7 @@ export async function createRecords(items: { entity: SyncEntityName; fields: Fie
 
 /** New rows plus other local writes in the same transaction: everything is kept, or nothing. */
 export async function createRecordsWith(items: { entity: SyncEntityName; fields: Fields; id?: string }[], alongside?: Alongside): Promise<string[]> {
-  const ops: Op[] = items.map(({ entity, fields, id }) => ({ kind: 'create', entity, id: id ?? uuidv7(), fields }));
+  const ops: Op[] = items.map(({ entity, fields, id }) => ({ kind: 'create', entity, id: id ?? uuidv7(), fields: stamped(entity, fields) }));
   await write(ops, alongside);
   return ops.map((op) => op.id);
 }

@@ -6,6 +6,7 @@ import { PostgresCertificateJudgment1796431000000 } from './1796431000000-Postgr
 import { PostgresChecksBeforeWork1796432000000 } from './1796432000000-PostgresChecksBeforeWork.js';
 import { PostgresCertificateContent1796471619935 } from './1796471619935-PostgresCertificateContent.js';
 import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-PostgresAttemptsAndRefunds.js';
+import { PostgresRecordedAt1796490000001 } from './1796490000001-PostgresRecordedAt.js';
 import { PostgresBillOnce1796490500001 } from './1796490500001-PostgresBillOnce.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
@@ -18,5 +19,6 @@ export const POSTGRES_MIGRATIONS = [
   PostgresChecksBeforeWork1796432000000,
   PostgresCertificateContent1796471619935,
   PostgresAttemptsAndRefunds1796481200001,
+  PostgresRecordedAt1796490000001,
   PostgresBillOnce1796490500001,
 ];

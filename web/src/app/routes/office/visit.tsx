@@ -57,14 +57,14 @@ export function Component() {
     })),
     ...r.pointChanges.map((c) => ({
       id: c.id,
-      at: c.createdAt ?? '',
+      at: c.recordedAt ?? c.createdAt ?? '',
       title: `Point change: ${ACTION_WORDS[c.action] ?? c.action}, ${c.accessoryKind ?? 'point'}`,
       detail: [c.toDescription ?? c.fromDescription, c.circuitLabel ? `circuit ${c.circuitLabel}` : null].filter(Boolean).join(' · ') || null,
       by: c.createdByName,
     })),
     ...r.cables.map((c) => ({
       id: c.id,
-      at: c.testedAt ?? c.updatedAt ?? c.createdAt ?? '',
+      at: c.testedAt ?? c.recordedAt ?? c.updatedAt ?? c.createdAt ?? '',
       title: `Cable ${c.label}${c.medium ? ` · ${MEDIUM_WORDS[c.medium] ?? c.medium}` : ''}`,
       detail: [cableStatusWords(c.status ?? null), c.lengthM != null ? `${c.lengthM} m` : null].filter(Boolean).join(' · '),
       by: c.createdByName,

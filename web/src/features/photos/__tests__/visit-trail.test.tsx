@@ -92,6 +92,24 @@ describe('visit trail', () => {
     await waitFor(() => expect(within(list).getByRole('img', { name: 'Photo 1' }).getAttribute('src')).toMatch(/^blob:/));
   });
 
+  it('keeps the times the phone recorded things at after a sync, when the server says they all arrived at once', async () => {
+    // As pulled back after signing off at 10:18: the server's createdAt is the sync, recordedAt is the phone's own.
+    const arrived = today(10, 18);
+    await db.note.put({ id: '01900000-0000-7000-8000-0000000000e1', visitId: VISIT, siteId: SITE, text: 'Cables traced', recordedAt: today(10, 6), createdAt: arrived, ...base });
+    await db.pointChange.put({ id: '01900000-0000-7000-8000-0000000000e2', visitId: VISIT, siteId: SITE, action: 'move', accessoryKind: 'Twin socket-outlet', recordedAt: today(10, 12), createdAt: arrived, ...base });
+    await db.note.put({ id: '01900000-0000-7000-8000-0000000000e3', visitId: VISIT, siteId: SITE, text: 'Customer shown the new socket', recordedAt: today(10, 16), createdAt: arrived, ...base });
+    await db.visit.put({ ...visit, signedAt: today(10, 17) });
+    show({ ...visit, signedAt: today(10, 17) });
+    const list = await screen.findByRole('list', { name: 'Trail of this visit' });
+    await within(list).findByText('Customer shown the new socket');
+    const rows = within(list).getAllByRole('listitem').map((li) => li.textContent ?? '');
+    const at = (text: string) => rows.findIndex((r) => r.includes(text));
+    // Newest first, signing off last of all, each with the time it was recorded
+    expect([at('Signed off'), at('Customer shown the new socket'), at('Twin socket-outlet'), at('Cables traced')]).toEqual([0, 1, 2, 3]);
+    expect(rows[1]).toContain('10:16');
+    expect(rows[3]).toContain('10:06');
+  });
+
   it('shows a long trail twenty at a time', async () => {
     await db.photo.bulkPut(Array.from({ length: 45 }, (_, i) => photo(i + 1)));
     show(visit);

@@ -68,18 +68,19 @@ export async function getVisitTrail(visit: VisitRow): Promise<VisitTrail> {
   const window = visitWindow(visit);
   const items: TrailItem[] = [
     ...photos.map((photo) => ({ kind: 'photo' as const, id: photo.id, at: photo.takenAt ?? photo.createdAt ?? '', photo })),
-    ...notes.map((note) => ({ kind: 'note' as const, id: note.id, at: note.createdAt ?? '', note })),
-    ...changes.map((change) => ({ kind: 'pointChange' as const, id: change.id, at: change.createdAt ?? '', change })),
-    ...results.map((result) => ({ kind: 'testResult' as const, id: result.id, at: result.testedAt ?? result.updatedAt ?? result.createdAt ?? '', result })),
+    // By when each was made on the phone; the server's createdAt is when it arrived, which a sync makes the same for all.
+    ...notes.map((note) => ({ kind: 'note' as const, id: note.id, at: note.recordedAt ?? note.createdAt ?? '', note })),
+    ...changes.map((change) => ({ kind: 'pointChange' as const, id: change.id, at: change.recordedAt ?? change.createdAt ?? '', change })),
+    ...results.map((result) => ({ kind: 'testResult' as const, id: result.id, at: result.testedAt ?? result.recordedAt ?? result.updatedAt ?? result.createdAt ?? '', result })),
     // Cable runs outlive visits: the ones last recorded on this visit belong to its trail.
-    ...cables.filter((c) => c.lastVisitId === visit.id).map((cable) => ({ kind: 'cableRun' as const, id: cable.id, at: cable.updatedAt ?? cable.createdAt ?? '', cable })),
+    ...cables.filter((c) => c.lastVisitId === visit.id).map((cable) => ({ kind: 'cableRun' as const, id: cable.id, at: cable.testedAt ?? cable.recordedAt ?? cable.updatedAt ?? cable.createdAt ?? '', cable })),
     ...circuits
       .filter((c) => {
         const t = c.createdAt ? Date.parse(c.createdAt) : NaN;
         const by = c.createdById;
         return window !== null && t >= window[0] && t < window[1] && (!by || (visit.technicianIds ?? []).includes(by));
       })
-      .map((circuit) => ({ kind: 'circuit' as const, id: circuit.id, at: circuit.createdAt ?? '', circuit })),
+      .map((circuit) => ({ kind: 'circuit' as const, id: circuit.id, at: circuit.recordedAt ?? circuit.createdAt ?? '', circuit })),
     ...events(visit),
   ];
   items.sort((a, b) => b.at.localeCompare(a.at) || b.id.localeCompare(a.id));

@@ -43,8 +43,9 @@ export function visitTimeline(record: VisitRecord, more: TimelineEntry[] = []): 
   ].filter((e): e is TimelineEntry => e !== null);
   const entries: TimelineEntry[] = [
     ...moments,
-    ...record.notes.map((n) => ({ id: n.id, at: n.createdAt ?? '', title: 'Note', detail: n.text, by: n.createdByName })),
-    ...record.testResults.map((r) => ({ id: r.id, at: r.testedAt ?? r.createdAt ?? '', title: `Readings: circuit ${r.circuitLabel ?? 'not named'}`, detail: readingsLine(r), by: r.createdByName })),
+    // When each was made on the phone, not when it reached the server.
+    ...record.notes.map((n) => ({ id: n.id, at: n.recordedAt ?? n.createdAt ?? '', title: 'Note', detail: n.text, by: n.createdByName })),
+    ...record.testResults.map((r) => ({ id: r.id, at: r.testedAt ?? r.recordedAt ?? r.createdAt ?? '', title: `Readings: circuit ${r.circuitLabel ?? 'not named'}`, detail: readingsLine(r), by: r.createdByName })),
     ...more,
   ];
   return entries.sort((a, b) => a.at.localeCompare(b.at) || a.id.localeCompare(b.id));
