@@ -19,7 +19,9 @@ test('the office books a visit for a technician and their phone receives it', as
   await expect(dialog.getByText('The finish time must be after the start time.')).toBeVisible();
   await dialog.getByLabel('Finish').fill('17:45');
   await dialog.getByLabel('Aled Pryce').check();
-  await dialog.getByRole('button', { name: 'Book visit' }).click();
+  // Aled is at the practice until 17:00 today (LED-0042): the office is told before booking over it.
+  await expect(dialog.getByRole('alert').filter({ hasText: 'Aled Pryce is already booked 13:00–17:00 that day on LED-0042' })).toBeVisible();
+  await dialog.getByRole('button', { name: 'Book anyway' }).click();
   await expect(dialog).toHaveCount(0);
   await expect(grid.getByRole('row', { name: 'Aled Pryce' })).toContainText('16:30–17:45');
   await page.screenshot({ path: 'test-results/schedule-week.png' });
@@ -30,8 +32,16 @@ test('the office books a visit for a technician and their phone receives it', as
   const booked = pulled.changes.filter((c: { entity: string; row: { plannedEnd?: string; technicianIds?: string[] } | null }) => c.entity === 'visit' && c.row?.plannedEnd?.endsWith('T17:45:00.000Z') && c.row.technicianIds?.includes(user.id));
   expect(booked).toHaveLength(1);
 
-  // Cancelling shows it struck through, and the phone learns that too.
+  // Cancelling asks first, then shows it struck through; a cancelled visit can be restored.
   await grid.getByRole('row', { name: 'Aled Pryce' }).getByRole('button', { name: /16:30–17:45/ }).click();
   await page.getByRole('dialog', { name: 'Change visit' }).getByRole('button', { name: 'Cancel this visit' }).click();
+  const confirm = page.getByRole('dialog', { name: 'Cancel this visit?' });
+  await confirm.getByRole('button', { name: 'Keep the visit' }).click();
+  await expect(confirm).toHaveCount(0);
+  await page.getByRole('dialog', { name: 'Change visit' }).getByRole('button', { name: 'Cancel this visit' }).click();
+  await confirm.getByRole('button', { name: 'Cancel the visit' }).click();
   await expect(grid.getByRole('row', { name: 'Aled Pryce' })).toContainText('16:30–17:45 · cancelled');
+  await grid.getByRole('row', { name: 'Aled Pryce' }).getByRole('button', { name: /16:30–17:45 · cancelled/ }).click();
+  await page.getByRole('dialog', { name: 'Change visit' }).getByRole('button', { name: 'Restore this visit' }).click();
+  await expect(grid.getByRole('row', { name: 'Aled Pryce' }).getByRole('button', { name: /16:30–17:45/ })).not.toContainText('cancelled');
 });

@@ -13,7 +13,7 @@ import { useMemo, useState } from 'react';
 import { useDirectory } from '@/lib/directory';
 import { type Visit, useJobs, useWeekVisits } from '../api/schedule-data';
 import { VisitDialog } from './visit-dialog';
-import { addDays, dayKey, timeOf, weekStart } from './week';
+import { addDays, bookingDay, dayKey, timeOf, weekStart } from './week';
 
 const dayLabel = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
 const UNASSIGNED = 'unassigned';
@@ -53,7 +53,7 @@ export function ScheduleWeek() {
         </IconButton>
         <Button onClick={() => setMonday(weekStart(new Date()))}>This week</Button>
         <Box sx={{ flex: 1 }} />
-        <Button variant="contained" onClick={() => setEditing({ visit: null, date: dayKey(new Date()) })}>
+        <Button variant="contained" onClick={() => setEditing({ visit: null, date: bookingDay(monday) })}>
           Book a visit
         </Button>
       </Stack>
@@ -104,7 +104,7 @@ export function ScheduleWeek() {
         open={!!editing}
         onClose={() => setEditing(null)}
         visit={editing?.visit ?? null}
-        defaultDate={editing?.date ?? dayKey(new Date())}
+        defaultDate={editing?.date ?? bookingDay(monday)}
         jobs={jobs.data!.items}
         technicians={technicians}
       />

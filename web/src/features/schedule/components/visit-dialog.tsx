@@ -13,11 +13,13 @@ import FormLabel from '@mui/material/FormLabel';
 import MenuItem from '@mui/material/MenuItem';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
-import { Controller, useForm } from 'react-hook-form';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import type { Person } from '@/lib/directory';
-import { type Job, type Visit, useSaveVisit } from '../api/schedule-data';
-import { dayKey, timeOf, toInstant } from './week';
+import { type Job, type Visit, useSaveVisit, weekVisitsQueryOptions } from '../api/schedule-data';
+import { addDays, clashesOf, dayKey, timeOf, toInstant } from './week';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
 
@@ -45,6 +47,7 @@ interface Props {
 /** Books a visit, or changes or cancels one; the assigned technicians' phones receive it on their next sync. */
 export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicians }: Props) {
   const save = useSaveVisit();
+  const [cancelling, setCancelling] = useState(false);
   const { control, register, handleSubmit, formState } = useForm<Values>({
     resolver: zodResolver(schema),
     values: {
@@ -55,6 +58,21 @@ export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicia
       technicianIds: visit?.technicianIds ?? [],
     },
   });
+  // What the office should know before booking: a technician already out elsewhere then, or a time already gone.
+  const [date, start, end, technicianIds] = useWatch({ control, name: ['date', 'start', 'end', 'technicianIds'] });
+  const dayValid = /^\d{4}-\d{2}-\d{2}$/.test(date ?? '') && /^\d{2}:\d{2}$/.test(start ?? '') && /^\d{2}:\d{2}$/.test(end ?? '');
+  const dayStart = dayValid ? toInstant(date, '00:00') : '';
+  const sameDay = useQuery({ ...weekVisitsQueryOptions(dayStart, dayValid ? addDays(new Date(dayStart), 1).toISOString() : ''), enabled: open && dayValid });
+  const clashes = dayValid ? clashesOf(sameDay.data?.items ?? [], { id: visit?.id, technicianIds: technicianIds ?? [], start: toInstant(date, start), end: toInstant(date, end) }) : [];
+  const moved = !visit || toInstant(date, start) !== visit.plannedStart;
+  const inThePast = dayValid && moved && Date.parse(toInstant(date, start)) < Date.now();
+  const nameOf = (id: string) => technicians.find((t) => t.id === id)?.name ?? 'A technician';
+  const jobWords = (jobId: string) => {
+    const j = jobs.find((x) => x.id === jobId);
+    return j ? [j.reference, j.title].filter(Boolean).join(' ') : 'another job';
+  };
+  const warned = clashes.length > 0 || inThePast;
+
   const submit = handleSubmit((v) => {
     const job = jobs.find((j) => j.id === v.jobId);
     save.mutate(
@@ -74,6 +92,12 @@ export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicia
       <DialogContent>
         <Stack component="form" id="visit-form" noValidate spacing={2.5} sx={{ pt: 1 }} onSubmit={submit}>
           {save.isError && <Alert severity="error">{save.error.message}</Alert>}
+          {clashes.map((c) => (
+            <Alert key={`${c.technicianId}-${c.visit.id}`} severity="warning">
+              {nameOf(c.technicianId)} is already booked {timeOf(c.visit.plannedStart)}–{timeOf(c.visit.plannedEnd)} that day on {jobWords(c.visit.jobId)}.
+            </Alert>
+          ))}
+          {inThePast && <Alert severity="warning">That time has already passed: check the date before booking it.</Alert>}
           <Controller
             control={control}
             name="jobId"
@@ -121,8 +145,13 @@ export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicia
       </DialogContent>
       <DialogActions sx={{ px: 3, pb: 2, justifyContent: 'space-between' }}>
         {visit && visit.status !== 'cancelled' ? (
-          <Button color="error" disabled={save.isPending} onClick={() => save.mutate({ id: visit.id, changes: { status: 'cancelled' } }, { onSuccess: onClose })}>
+          <Button color="error" disabled={save.isPending} onClick={() => setCancelling(true)}>
             Cancel this visit
+          </Button>
+        ) : visit ? (
+          // A cancelled visit can be put back as it was planned; its phones receive it again.
+          <Button disabled={save.isPending} onClick={() => save.mutate({ id: visit.id, changes: { status: 'planned' } }, { onSuccess: onClose })}>
+            Restore this visit
           </Button>
         ) : (
           <span />
@@ -135,10 +164,29 @@ export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicia
           )}
           <Button onClick={onClose}>Close</Button>
           <Button type="submit" form="visit-form" variant="contained" disabled={save.isPending}>
-            {visit ? 'Save changes' : 'Book visit'}
+            {visit ? (warned ? 'Save anyway' : 'Save changes') : warned ? 'Book anyway' : 'Book visit'}
           </Button>
         </Stack>
       </DialogActions>
+      {visit && (
+        <Dialog open={cancelling} onClose={() => setCancelling(false)} aria-labelledby="cancel-visit-title">
+          <DialogTitle id="cancel-visit-title">Cancel this visit?</DialogTitle>
+          <DialogContent>
+            The technicians’ phones drop it at their next sync. It stays on the schedule, struck through, and can be restored.
+          </DialogContent>
+          <DialogActions>
+            <Button onClick={() => setCancelling(false)}>Keep the visit</Button>
+            <Button
+              color="error"
+              variant="contained"
+              disabled={save.isPending}
+              onClick={() => save.mutate({ id: visit.id, changes: { status: 'cancelled' } }, { onSuccess: () => (setCancelling(false), onClose()) })}
+            >
+              Cancel the visit
+            </Button>
+          </DialogActions>
+        </Dialog>
+      )}
     </Dialog>
   );
 }
