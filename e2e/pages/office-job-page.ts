@@ -63,7 +63,7 @@ export class OfficeJobPage {
     await expect(this.page.getByRole('heading', { level: 1, name: title })).toBeVisible();
   }
 
-  async tab(name: 'Photo trail' | 'Cable schedule' | 'Documents & links'): Promise<void> {
+  async tab(name: 'Overview' | 'Photo trail' | 'Cable schedule' | 'Points' | 'Circuits & tests' | 'Documents & links' | 'Quotes & invoices'): Promise<void> {
     await this.page.getByRole('tab', { name }).click();
   }
 

@@ -1,6 +1,6 @@
 import AxeBuilder from '@axe-core/playwright';
 import type { Page, TestInfo } from '@playwright/test';
-import { bookVisit, DESK, expect, PHONE, ROLE_USERS, test } from '../fixtures.js';
+import { apiSession, bookVisit, DESK, expect, PHONE, ROLE_USERS, SIGNED_OUT, test } from '../fixtures.js';
 
 /** WCAG 2.1 A and AA: what the public sector in the UK is held to, and what a paying customer may ask of us. */
 const WCAG_TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'];
@@ -77,8 +77,15 @@ for (const [size, viewport] of [
       await visitPage.section('Sign-off');
       await expectNoAxeViolations(page, testInfo, 'sign-off');
 
+      await visitPage.section('Cables');
+      await page.getByRole('link', { name: /Record a cable/ }).click();
+      await expect(visitPage.cableForm).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'cable form');
+
       await page.getByRole('link', { name: 'Sync', exact: true }).first().click();
       await expectNoAxeViolations(page, testInfo, 'sync');
+      await page.getByRole('link', { name: 'Me', exact: true }).first().click();
+      await expectNoAxeViolations(page, testInfo, 'me');
     });
   });
 
@@ -94,7 +101,7 @@ for (const [size, viewport] of [
       await page.getByRole('link', { name: /Move two lounge sockets/ }).first().click();
       await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
       await expectNoAxeViolations(page, testInfo, 'job photo trail');
-      for (const tab of ['Cable schedule', 'Documents & links'] as const) {
+      for (const tab of ['Photo trail', 'Cable schedule', 'Points', 'Circuits & tests', 'Documents & links', 'Quotes & invoices'] as const) {
         await officeJob.tab(tab);
         await expectNoAxeViolations(page, testInfo, `job ${tab}`);
       }
@@ -126,6 +133,38 @@ for (const [size, viewport] of [
       await page.goto('/conflicts');
       await page.getByRole('tab', { name: 'Settled' }).click();
       await expectNoAxeViolations(page, testInfo, 'settled conflicts');
+      await page.goto('/customers');
+      await page.getByRole('link', { name: 'Orchard Rise' }).first().click();
+      await expect(page.getByRole('heading', { level: 1, name: 'Orchard Rise' })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'site');
+      await page.goto('/invoices');
+      await page.getByRole('link', { name: /^Job’s billing/ }).first().click();
+      await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'job invoices');
     });
   });
 }
+
+test.describe('the screens anyone may reach', () => {
+  for (const [size, viewport] of [
+    ['phone', PHONE],
+    ['desk', DESK],
+  ] as const) {
+    test(`sign-in, and a customer's shared page of a job, pass WCAG 2.1 AA (${size})`, async ({ browser, request }, testInfo) => {
+      const context = await browser.newContext({ viewport, storageState: SIGNED_OUT });
+      const page = await context.newPage();
+      await page.goto('/sign-in');
+      await page.getByRole('button', { name: /Sign in/ }).click();
+      await expectNoAxeViolations(page, testInfo, 'sign-in with its mistakes');
+
+      const { accessToken } = await apiSession(request, ROLE_USERS.office);
+      const headers = { authorization: `Bearer ${accessToken}` };
+      const job = ((await (await request.get('/api/jobs?search=LED-0033', { headers })).json()) as { items: { id: string }[] }).items[0]!;
+      const link = (await (await request.post(`/api/jobs/${job.id}/share-links`, { headers, data: { days: 1, label: 'Accessibility check' } })).json()) as { url: string };
+      await page.goto(new URL(link.url).pathname);
+      await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'shared job');
+      await context.close();
+    });
+  }
+});

@@ -102,7 +102,7 @@ test('the office reviews a finished job, settles a conflict, issues the certific
     const phone = await customer.newPage();
     await phone.goto(new URL(link!).pathname);
     await expect(phone.getByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeVisible();
-    await expect(phone.getByRole('link', { name: `Download ${number} (PDF)` })).toBeVisible();
+    await expect(phone.getByRole('link', { name: `Download PDF of ${number}` })).toBeVisible();
     await expect(phone.getByRole('list', { name: 'Photos' }).getByRole('img').first()).toBeVisible();
     await phone.screenshot({ path: test.info().outputPath('customer-link.png'), fullPage: true });
   } finally {

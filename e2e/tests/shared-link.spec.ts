@@ -25,10 +25,11 @@ test('a customer opens a share link on a phone without an account, and sees a pl
   await expect(page.getByText('14 Orchard Rise, Wendmouth, WM2 4HD')).toBeVisible();
 
   const download = page.waitForEvent('download');
-  await page.getByRole('link', { name: `Download ${number} (PDF)` }).click();
+  await page.getByRole('link', { name: `Download PDF of ${number}` }).click();
   expect((await download).suggestedFilename()).toBe(`${number}.pdf`);
 
-  const photos = page.getByRole('list', { name: 'Photos' }).getByRole('img');
+  // The thumbnails say nothing their captions do not: they are named by the button around them.
+  const photos = page.getByRole('list', { name: 'Photos' }).locator('img');
   await expect(photos).toHaveCount(3);
   for (const img of await photos.all()) await expectDrawn(img);
   await page.getByRole('button', { name: 'Open photo: Box open before the accessory went on: ring in and out, CPCs sleeved' }).click();

@@ -103,7 +103,8 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
                     color={differs ? 'error' : 'primary'}
                     onClick={() => setPicking(pin)}
                     disabled={disabled}
-                    aria-label={`${endName} pin ${pin}: ${value ? colourWords(seen) : 'not recorded'}`}
+                    // Named by the words it shows, after the pin it is for.
+                    aria-label={`${endName} pin ${pin}: ${value ? colourWords(seen) : 'Tap to record'}${differs ? ', not as the scheme has it' : ''}`}
                     startIcon={value ? <ConductorSwatch colour={seen} size={22} /> : undefined}
                     sx={{ justifyContent: 'flex-start', width: '100%', textTransform: 'none', px: 1.5, ...(differs ? { borderWidth: 2, fontWeight: 700 } : {}) }}
                   >

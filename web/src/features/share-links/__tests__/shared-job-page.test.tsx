@@ -51,10 +51,11 @@ describe('SharedJobPage', () => {
     const calls = show({ status: 200, body: JOB });
     expect(await screen.findByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeTruthy();
     expect(screen.getByText('Work done; paperwork being finished')).toBeTruthy();
-    expect(screen.getByRole('link', { name: 'Download MW-0001 (PDF)' }).getAttribute('href')).toBe(JOB.documents[0]!.pdfUrl);
+    expect(screen.getByRole('link', { name: 'Download PDF of MW-0001' }).getAttribute('href')).toBe(JOB.documents[0]!.pdfUrl);
     const photos = screen.getByRole('list', { name: 'Photos' });
-    expect(within(photos).getAllByRole('img').map((i) => i.getAttribute('src'))).toEqual(JOB.photos.map((p) => p.thumbUrl));
-    fireEvent.click(within(photos).getByRole('button', { name: 'Open photo: Finished twin socket-outlet' }));
+    // The thumbnails are named by the button around them, by the caption they show.
+    expect(within(photos).getAllByRole('button').map((b) => b.querySelector('img')?.getAttribute('src'))).toEqual(JOB.photos.map((p) => p.thumbUrl));
+    fireEvent.click(within(photos).getByRole('button', { name: /^Open photo: Finished twin socket-outlet/ }));
     const viewer = await screen.findByRole('dialog', { name: 'Finished twin socket-outlet' });
     expect(within(viewer).getByRole('img').getAttribute('src')).toBe(JOB.photos[1]!.displayUrl);
     expect(screen.getByText(/This link works until 13 April 2026/)).toBeTruthy();
@@ -73,7 +74,7 @@ describe('SharedJobPage', () => {
     expect(within(list).getByRole('listitem', { name: 'Invoice INV-0001' }).textContent).toContain('Paid. Thank you.');
     expect(within(list).getByRole('listitem', { name: 'Quote QU-0001' }).textContent).toContain('This quote stands until 31 March 2026.');
     expect(within(list).getAllByRole('button', { name: 'Pay by card' })).toHaveLength(1);
-    expect(within(owed).getByRole('link', { name: 'Download invoice INV-0002 (PDF)' }).getAttribute('href')).toBe(INVOICES.items[1]!.pdfUrl);
+    expect(within(owed).getByRole('link', { name: 'Download PDF of invoice INV-0002' }).getAttribute('href')).toBe(INVOICES.items[1]!.pdfUrl);
     fireEvent.click(within(owed).getByRole('button', { name: 'Pay by card' }));
     await waitFor(() => expect(assign).toHaveBeenCalledWith('http://127.0.0.1:12111/checkout/cs_test_1'));
     expect(calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: `/api/shared/${TOKEN}/invoices/i1/checkout`, body: undefined });

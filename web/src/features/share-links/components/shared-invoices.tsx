@@ -81,7 +81,7 @@ export function SharedInvoices({ token, paidInvoiceId }: { token: string; paidIn
                 </Typography>
               </div>
               <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', rowGap: 1 }}>
-                <Button variant="outlined" startIcon={<DownloadOutlined />} href={i.pdfUrl} download={`${i.number}.pdf`} aria-label={`Download ${INVOICE_NAMES[i.kind].toLowerCase()} ${i.number} (PDF)`}>
+                <Button variant="outlined" startIcon={<DownloadOutlined />} href={i.pdfUrl} download={`${i.number}.pdf`} aria-label={`Download PDF of ${INVOICE_NAMES[i.kind].toLowerCase()} ${i.number}`}>
                   PDF
                 </Button>
                 {i.payByCard && (

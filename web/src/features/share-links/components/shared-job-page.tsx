@@ -17,6 +17,7 @@ import useMediaQuery from '@mui/material/useMediaQuery';
 import type { ReactNode } from 'react';
 import { useState } from 'react';
 import { Logo } from '@/components/logo';
+import { VisuallyHidden } from '@/components/visually-hidden';
 import { ApiError } from '@/lib/api-client';
 import { type SharedJob, useSharedJob } from '../api/get-shared-job';
 import { SharedInvoices } from './shared-invoices';
@@ -86,7 +87,7 @@ function Documents({ documents }: { documents: SharedJob['documents'] }) {
               {d.number} · issued {format(day, d.issuedAt)}
             </Typography>
           </div>
-          <Button variant="outlined" startIcon={<DownloadOutlined />} href={d.pdfUrl} download={`${d.number}.pdf`} aria-label={`Download ${d.number} (PDF)`}>
+          <Button variant="outlined" startIcon={<DownloadOutlined />} href={d.pdfUrl} download={`${d.number}.pdf`} aria-label={`Download PDF of ${d.number}`}>
             Download PDF
           </Button>
         </Paper>
@@ -107,10 +108,11 @@ function Photos({ photos }: { photos: SharedJob['photos'] }) {
           <Box component="li" key={p.id}>
             <ButtonBase
               onClick={() => setOpen(i)}
-              aria-label={`Open photo: ${p.caption || 'no caption'}`}
               sx={{ display: 'block', width: '100%', textAlign: 'left', borderRadius: 1.5, overflow: 'hidden', border: 1, borderColor: 'divider', bgcolor: 'background.paper', '&:focus-visible': { outline: '3px solid', outlineColor: 'primary.main' } }}
             >
-              <Box component="img" src={p.thumbUrl} alt={p.caption || 'Photo'} loading="lazy" sx={{ width: '100%', aspectRatio: '4 / 3', objectFit: 'cover', display: 'block', bgcolor: 'action.hover' }} />
+              {/* Named by its caption below; the thumbnail says nothing more. */}
+              <VisuallyHidden>Open photo: </VisuallyHidden>
+              <Box component="img" src={p.thumbUrl} alt="" loading="lazy" sx={{ width: '100%', aspectRatio: '4 / 3', objectFit: 'cover', display: 'block', bgcolor: 'action.hover' }} />
               <Box sx={{ p: 1 }}>
                 <Typography variant="body2" sx={{ fontWeight: 500, display: '-webkit-box', WebkitLineClamp: 3, WebkitBoxOrient: 'vertical', overflow: 'hidden' }}>
                   {p.caption || 'No caption'}

@@ -62,7 +62,8 @@ export function SiteCircuits({ siteId, extra, editable = false, title }: Props) 
       {circuits.data.items.length === 0 ? (
         <Alert severity="info">No circuits recorded for this site yet.</Alert>
       ) : (
-        <TableContainer component={Paper} variant="outlined">
+        // Scrolls sideways on a narrow screen: a keyboard can reach it to scroll.
+        <TableContainer component={Paper} variant="outlined" tabIndex={0} role="region" aria-label="Circuits, scrolling">
           <Table aria-label="Circuits" size="small">
             <TableHead>
               <TableRow>
