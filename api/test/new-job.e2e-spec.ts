@@ -23,6 +23,19 @@ describe('a new job from the desk', () => {
     expect((await create({ title: 'Quote for an EV charger', reference: 'EV-SURVEY-1' }).expect(201)).body.reference).toBe('EV-SURVEY-1');
   });
 
+  it('stores a new customer’s phone as it is dialled and a site’s postcode as Royal Mail writes it, and refuses text that is neither', async () => {
+    const customer = await t.http.post('/api/customers').set(bearer(office)).send({ name: 'Priya Natarajan', phone: '07700900871' }).expect(201);
+    expect(customer.body.phone).toBe('07700 900871');
+    const site = await t.http.post('/api/sites').set(bearer(office)).send({ customerId: customer.body.id, address: '3 Mill Lane, Wendmouth', postcode: 'wm41qt' }).expect(201);
+    expect(site.body.postcode).toBe('WM4 1QT');
+    const badPhone = await t.http.post('/api/customers').set(bearer(office)).send({ name: 'Someone', phone: 'call me maybe' }).expect(400);
+    expect(badPhone.body.message).toContain('phone is not a phone number, like 07700 900871 or 01632 960123');
+    const badPostcode = await t.http.patch(`/api/sites/${site.body.id}`).set(bearer(office)).send({ postcode: 'Wendmouth' }).expect(400);
+    expect(badPostcode.body.message).toContain('postcode is not a UK postcode, like WM4 1QT');
+    // Cleared by sending nothing
+    expect((await t.http.patch(`/api/sites/${site.body.id}`).set(bearer(office)).send({ postcode: null }).expect(200)).body.postcode).toBeNull();
+  });
+
   it('never gives two jobs made at once the same reference', async () => {
     const made = await Promise.all([1, 2, 3, 4].map((n) => create({ title: `Enquiry ${n}` }).expect(201)));
     const references = made.map((r) => r.body.reference as string);

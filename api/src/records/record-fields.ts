@@ -1,6 +1,7 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
+import { checkPhone, checkPostcode } from '@wiretrail/core';
 import { NormalisedText, VisibleText } from '../common/validators/typed-text.js';
 import {
   ArrayUnique,
@@ -147,4 +148,39 @@ export function DepartureEntriesField(o: FieldOptions = {}): PropertyDecorator {
       },
     }),
   );
+}
+
+/**
+ * Text checked and written one way by a core check ("wm41qt" → "WM4 1QT"), so the office's form, a phone's push
+ * and a REST call store the same thing. The check runs after trimming; an empty value clears the field.
+ */
+function CheckedTextField(max: number, name: string, check: (text: string) => { value: string } | { problem: string }, o: FieldOptions): PropertyDecorator {
+  return applyDecorators(
+    TextField(max, o),
+    Transform(({ value }: { value: unknown }) => {
+      if (typeof value !== 'string' || value.trim() === '') return value;
+      const checked = check(value);
+      return 'value' in checked ? checked.value : value;
+    }),
+    ValidateBy({
+      name,
+      validator: {
+        validate: (value: unknown) => typeof value !== 'string' || value.trim() === '' || 'value' in check(value),
+        defaultMessage: (args) => {
+          const checked = typeof args?.value === 'string' ? check(args.value) : null;
+          return `$property ${checked && 'problem' in checked ? checked.problem : 'is not valid'}`;
+        },
+      },
+    }),
+  );
+}
+
+/** A UK postcode, stored as Royal Mail writes it. */
+export function PostcodeField(o: FieldOptions = {}): PropertyDecorator {
+  return CheckedTextField(12, 'postcode', checkPostcode, o);
+}
+
+/** A phone number that can be dialled, stored as it is dialled in the UK. */
+export function PhoneField(o: FieldOptions = {}): PropertyDecorator {
+  return CheckedTextField(50, 'phone', checkPhone, o);
 }

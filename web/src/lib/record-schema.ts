@@ -1,4 +1,4 @@
-import { type FieldSpec, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
+import { checkPhone, checkPostcode, type FieldSpec, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
 import { z } from 'zod';
 
 /**
@@ -40,6 +40,26 @@ export function optionalText(entity: SyncEntityName, field: string, label: strin
 /** An e-mail address that may be left empty. */
 export function optionalEmail(entity: SyncEntityName, field: string, label: string) {
   return optionalText(entity, field, label).refine((v) => v === null || /^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(v), `${label} must be an e-mail address, like name@example.com.`);
+}
+
+function checkedText(entity: SyncEntityName, field: string, label: string, check: (text: string) => { value: string } | { problem: string }) {
+  return optionalText(entity, field, label).transform((v, ctx) => {
+    if (v === null) return null;
+    const checked = check(v);
+    if ('value' in checked) return checked.value;
+    ctx.addIssue({ code: 'custom', message: `${label} ${checked.problem}.` });
+    return z.NEVER;
+  });
+}
+
+/** A UK postcode that may be left empty, written as Royal Mail writes it; the server checks it the same way. */
+export function optionalPostcode(entity: SyncEntityName, field: string, label: string) {
+  return checkedText(entity, field, label, checkPostcode);
+}
+
+/** A phone number that may be left empty, written as it is dialled; the server checks it the same way. */
+export function optionalPhone(entity: SyncEntityName, field: string, label: string) {
+  return checkedText(entity, field, label, checkPhone);
 }
 
 /** A plain decimal as people type it: digits with a point or a comma, perhaps a sign. */

@@ -1,5 +1,5 @@
 import { CIRCUIT_KINDS, FAULT_PROTECTION_METHODS, PROTECTIVE_DEVICES } from '@wiretrail/core';
-import { ChoiceField, IdField, IntegerField, NumberField, TextField } from '../../records/record-fields.js';
+import { ChoiceField, DateTimeField, IdField, IntegerField, NumberField, TextField } from '../../records/record-fields.js';
 
 export class CreateCircuitDto {
   @IdField('site', { required: true })
@@ -64,4 +64,7 @@ export class CreateCircuitDto {
 
   @IdField('visit', { description: 'the visit on which the circuit was installed new (it then needs an installation certificate)' })
   newOnVisitId?: string | null;
+
+  @DateTimeField({ description: 'when the circuit was first recorded on a phone; set there, once' })
+  recordedAt?: string | null;
 }

@@ -1,4 +1,4 @@
-import { TextField } from '../../records/record-fields.js';
+import { PhoneField, TextField } from '../../records/record-fields.js';
 
 export class CreateCustomerDto {
   @TextField(200, { required: true, example: 'Hannah Greaves' })
@@ -7,7 +7,7 @@ export class CreateCustomerDto {
   @TextField(254, { example: 'hannah.greaves@example.com' })
   email?: string | null;
 
-  @TextField(50, { example: '07700 900412' })
+  @PhoneField({ example: '07700 900412' })
   phone?: string | null;
 
   @TextField(500, { example: '14 Orchard Rise, Wendmouth WM2 4HD' })

@@ -1,5 +1,5 @@
 import { BONDING_STATES, EARTHING_ARRANGEMENTS, EARTHING_CONDUCTOR_STATES } from '@wiretrail/core';
-import { ChoiceField, IdField, NumberField, TextField } from '../../records/record-fields.js';
+import { ChoiceField, IdField, NumberField, PostcodeField, TextField } from '../../records/record-fields.js';
 
 export class CreateSiteDto {
   @IdField('customer', { required: true })
@@ -11,7 +11,7 @@ export class CreateSiteDto {
   @TextField(500, { required: true, example: '14 Orchard Rise, Wendmouth' })
   address: string;
 
-  @TextField(12, { example: 'WM2 4HD' })
+  @PostcodeField({ example: 'WM2 4HD' })
   postcode?: string | null;
 
   @TextField(20_000, { example: 'Key safe by the back door' })

@@ -5,7 +5,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
-import { optionalEmail, optionalText, requiredText } from '@/lib/record-schema';
+import { optionalEmail, optionalPhone, optionalPostcode, optionalText, requiredText } from '@/lib/record-schema';
 import { type NewJob, useCreateJob, useCustomerChoices } from '../api/create-job';
 import type { Job } from '../api/get-jobs';
 
@@ -15,11 +15,11 @@ const schema = z
   .object({
     customerId: z.string(),
     customerName: z.string().trim().max(200, 'Name must be at most 200 characters.'),
-    customerPhone: optionalText('customer', 'phone', 'Phone'),
+    customerPhone: optionalPhone('customer', 'phone', 'Phone'),
     customerEmail: optionalEmail('customer', 'email', 'E-mail'),
     siteId: z.string(),
     siteAddress: z.string().trim().max(500, 'Address must be at most 500 characters.'),
-    sitePostcode: optionalText('site', 'postcode', 'Postcode'),
+    sitePostcode: optionalPostcode('site', 'postcode', 'Postcode'),
     siteAccessNotes: optionalText('site', 'accessNotes', 'Access notes'),
     title: requiredText('job', 'title', 'What the job is'),
     description: optionalText('job', 'description', 'Details'),

@@ -58,6 +58,19 @@ describe('the customer form', () => {
     expect(api.fetch).not.toHaveBeenCalled();
   });
 
+  it('names a phone number that cannot be dialled, and writes one that can as it is dialled', async () => {
+    const dialog = show(<CustomerDialog onClose={vi.fn()} />);
+    type(dialog, 'Name', 'Ada Fenwick');
+    type(dialog, 'Phone', 'call me maybe');
+    save(dialog, 'Add customer');
+    expect(await dialog.findByText('Phone is not a phone number, like 07700 900871 or 01632 960123.')).toBeTruthy();
+    expect(api.fetch).not.toHaveBeenCalled();
+    answer(201, { ...customer, id: 'new', name: 'Ada Fenwick' });
+    type(dialog, 'Phone', '+447700900123');
+    save(dialog, 'Add customer');
+    await waitFor(() => expect(sent()).toEqual({ url: '/api/customers', method: 'POST', body: { name: 'Ada Fenwick', phone: '07700 900123' } }));
+  });
+
   it('refuses a name longer than the registry allows (200 characters)', async () => {
     const dialog = show(<CustomerDialog onClose={vi.fn()} />);
     type(dialog, 'Name', 'x'.repeat(201));
@@ -106,6 +119,18 @@ describe('the site form', () => {
     save(dialog, 'Add site');
     expect(await dialog.findByText('Address must not be empty.')).toBeTruthy();
     expect(dialog.getByText('Choose the customer.')).toBeTruthy();
+  });
+
+  it('names text that is not a postcode, and writes a postcode as Royal Mail does', async () => {
+    const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={vi.fn()} />);
+    type(dialog, 'Postcode', 'Wendmouth');
+    save(dialog, 'Save changes');
+    expect(await dialog.findByText('Postcode is not a UK postcode, like WM4 1QT.')).toBeTruthy();
+    expect(api.fetch).not.toHaveBeenCalled();
+    answer(200, { ...site, postcode: 'WM4 1QT' });
+    type(dialog, 'Postcode', 'wm41qt');
+    save(dialog, 'Save changes');
+    await waitFor(() => expect(sent()).toEqual({ url: `/api/sites/${SITE_ID}`, method: 'PATCH', body: { postcode: 'WM4 1QT' } }));
   });
 
   it('sends only the changed Ze, read with a decimal comma, as a number', async () => {

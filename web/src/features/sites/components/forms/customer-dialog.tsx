@@ -2,14 +2,14 @@ import { z } from 'zod';
 import { FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
 import { useRecordForm } from '@/components/forms/use-record-form';
-import { optionalEmail, optionalText, requiredText, startingTexts } from '@/lib/record-schema';
+import { optionalEmail, optionalPhone, optionalText, requiredText, startingTexts } from '@/lib/record-schema';
 import type { Customer } from '../../api/get-customers';
 import { useSaveCustomer } from '../../api/save-record';
 
 export const customerSchema = z.object({
   name: requiredText('customer', 'name', 'Name'),
   email: optionalEmail('customer', 'email', 'E-mail'),
-  phone: optionalText('customer', 'phone', 'Phone'),
+  phone: optionalPhone('customer', 'phone', 'Phone'),
   address: optionalText('customer', 'address', 'Billing address'),
   notes: optionalText('customer', 'notes', 'Notes'),
 });

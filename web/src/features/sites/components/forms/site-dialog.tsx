@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
 import { useRecordForm } from '@/components/forms/use-record-form';
-import { choicesOf, optionalChoice, optionalNumber, optionalText, requiredId, requiredText, startingTexts } from '@/lib/record-schema';
+import { choicesOf, optionalChoice, optionalNumber, optionalPostcode, optionalText, requiredId, requiredText, startingTexts } from '@/lib/record-schema';
 import type { Customer } from '../../api/get-customers';
 import type { Site } from '../../api/get-sites';
 import { useSaveSite } from '../../api/save-record';
@@ -12,7 +12,7 @@ export const siteSchema = z.object({
   customerId: requiredId('the customer'),
   name: optionalText('site', 'name', 'Site name'),
   address: requiredText('site', 'address', 'Address'),
-  postcode: optionalText('site', 'postcode', 'Postcode'),
+  postcode: optionalPostcode('site', 'postcode', 'Postcode'),
   earthing: optionalChoice('site', 'earthing', 'Earthing arrangement'),
   zeOhm: optionalNumber('site', 'zeOhm', 'Ze', { unit: 'Ω', example: 0.35 }),
   pfcKa: optionalNumber('site', 'pfcKa', 'Prospective fault current', { unit: 'kA', example: 1.8 }),
