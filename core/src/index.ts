@@ -50,3 +50,4 @@ export * from './certification/certificate-defaults.js';
 export * from './certification/minor-works-declaration.js';
 export * from './text/typed-text.js';
 export * from './text/contact.js';
+export * from './certification/circuit-details-check.js';

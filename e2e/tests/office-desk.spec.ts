@@ -91,11 +91,11 @@ test('the office works the jobs board and table, reads a job’s cable schedule 
   await page.getByRole('grid', { name: 'Sites' }).getByRole('link', { name: 'Fernhill Close' }).click();
   await page.getByRole('button', { name: 'Change site details' }).click();
   const siteForm = page.getByRole('dialog', { name: /Change Fernhill Close/ });
-  await siteForm.getByLabel('Ze').fill('-1');
+  await siteForm.getByLabel('Ze (Ω)').fill('-1');
   await siteForm.getByRole('button', { name: 'Save changes' }).click();
   await expect(siteForm.getByText('Ze must be at least 0 Ω.')).toBeVisible();
   const ze = (21 + (parseInt(stamp, 36) % 300) / 10).toFixed(1);
-  await siteForm.getByLabel('Ze').fill(ze);
+  await siteForm.getByLabel('Ze (Ω)').fill(ze);
   await siteForm.getByRole('button', { name: 'Save changes' }).click();
   await expect(siteForm).toBeHidden();
   // Shown as a number, so 37.0 reads 37.

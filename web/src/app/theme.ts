@@ -49,6 +49,8 @@ export const theme = createTheme({
     MuiBottomNavigationAction: { styleOverrides: { label: { fontSize: '0.875rem', '&.Mui-selected': { fontSize: '0.875rem' } } } },
     MuiListItemButton: { styleOverrides: { root: { minHeight: 48 } } },
     MuiTextField: { defaultProps: { fullWidth: true } },
+    // Right-aligned cells hold figures: "-£208.68" must not break after its sign.
+    MuiTableCell: { styleOverrides: { alignRight: { whiteSpace: 'nowrap' } } },
     // The library lets the pager scroll sideways on a narrow screen, a region a keyboard cannot reach: it wraps instead.
     MuiTablePagination: { styleOverrides: { root: { overflow: 'visible' }, toolbar: { flexWrap: 'wrap' } } },
     // In sunlight a faint outline disappears: field borders and the chosen option of a toggle must stand out.

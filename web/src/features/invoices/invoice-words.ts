@@ -22,6 +22,12 @@ export function invoiceName(i: Pick<InvoiceSummary, 'kind' | 'number'>): string 
   return i.number ? `${INVOICE_NAMES[i.kind]} ${i.number}` : `Draft ${INVOICE_NAMES[i.kind].toLowerCase()}`;
 }
 
+/** As said within a sentence: "invoice INV-0004", "draft quote"; the number keeps its capitals. */
+export function invoiceNameInText(i: Pick<InvoiceSummary, 'kind' | 'number'>): string {
+  const kind = INVOICE_NAMES[i.kind].toLowerCase();
+  return i.number ? `${kind} ${i.number}` : `draft ${kind}`;
+}
+
 export type Standing = { label: string; color: 'default' | 'success' | 'warning' | 'error' | 'info'; detail?: string };
 
 /** Where an invoice stands, in words and a colour: paid, part paid, overdue by so many days, awaiting payment. */

@@ -105,7 +105,7 @@ export function Component() {
           {tab === 'overview' && (
             <Stack spacing={2}>
               <CustomerAndSite customerId={j.customerId} siteId={j.siteId} />
-              <JobVisits jobId={j.id} personName={(id) => personName(id) ?? 'Someone'} />
+              <JobVisits jobId={j.id} personName={(id) => personName(id) ?? (directory.isPending ? '…' : 'A former member of the team')} />
             </Stack>
           )}
           {tab === 'photos' && (

@@ -30,7 +30,8 @@ export function Component() {
   const directory = useDirectory();
   const customers = useCustomers();
   const technicians = useMemo(() => (directory.data ?? []).filter((p) => p.role === 'technician' && p.active).map((p) => ({ id: p.id, name: p.name })), [directory.data]);
-  const personName = useCallback((id: string) => directory.data?.find((p) => p.id === id)?.name ?? 'Someone', [directory.data]);
+  // While the team's names load a card says nothing yet, rather than "Someone".
+  const personName = useCallback((id: string) => directory.data?.find((p) => p.id === id)?.name ?? (directory.isPending ? '…' : 'A former member of the team'), [directory.data, directory.isPending]);
   const total = counts.data?.total;
   const navigate = useNavigate();
   const [taking, setTaking] = useState(false);

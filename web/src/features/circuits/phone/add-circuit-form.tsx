@@ -10,7 +10,7 @@ import { v7 as uuidv7 } from 'uuid';
 import { z } from 'zod';
 import type { BoardRow } from '@/lib/db';
 import { createRecords, type Fields } from '@/lib/sync/local-write';
-import { type CircuitDetails, CircuitDetailFields, circuitDetailFields, circuitDetailsOf, circuitDetailsSchema } from './circuit-fields';
+import { type CircuitDetails, CircuitDetailFields, checkCircuitDetails, circuitDetailFields, circuitDetailsOf, circuitDetailsSchema } from './circuit-fields';
 
 const NEW_BOARD = 'new';
 
@@ -22,6 +22,7 @@ export const addCircuitSchema = circuitDetailsSchema
     description: z.string().max(500, 'The description must be at most 500 characters.'),
   })
   .superRefine((v, ctx) => {
+    checkCircuitDetails(v, ctx);
     if (v.boardId === NEW_BOARD && !v.boardName.trim()) ctx.addIssue({ code: 'custom', path: ['boardName'], message: 'Name the board, for example "Consumer unit, hall".' });
   });
 type AddCircuitValues = z.infer<typeof addCircuitSchema>;

@@ -20,6 +20,7 @@ import {
   CircuitDetailFields,
   circuitDetailFields,
   circuitDetailsOf,
+  checkCircuitDetails,
   circuitDetailsSchema,
   FAULT_PROTECTION_WORDS,
 } from './circuit-fields';
@@ -62,7 +63,7 @@ export function CircuitDetailsForm({
   const [open, setOpen] = useState(incomplete);
   const [note, setNote] = useState('');
   const { register, handleSubmit, formState, control, setValue, getValues } = useForm<CircuitDetails>({
-    resolver: zodResolver(circuitDetailsSchema),
+    resolver: zodResolver(circuitDetailsSchema.superRefine(checkCircuitDetails)),
     defaultValues: circuitDetailsOf(circuit, visitId, earthing),
   });
   const [kind, deviceType, deviceRatingA, rcdRatingMa, rcdType, rcdStandard, deviceStandard, rcdRatedCurrentA, maxDisconnectionS] = useWatch({

@@ -18,6 +18,7 @@ import {
 import { type Control, Controller, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import { z } from 'zod';
 import type { CircuitRow } from '@/lib/db';
+import { circuitDetailProblems } from '@wiretrail/core';
 import { choicesOf, NativeChoice } from '@/components/forms/phone-inputs';
 import { readingField, readingText, usableReading } from '@/lib/readings';
 
@@ -50,6 +51,21 @@ export const circuitDetailsSchema = z.object({
   maxDisconnectionS: readingField('circuit', 'maxDisconnectionS', 'The maximum disconnection time', 's'),
 });
 export type CircuitDetails = z.infer<typeof circuitDetailsSchema>;
+
+/**
+ * What core says cannot be so in the details as typed (a 17 A type B breaker, an RCD of type Q, a cpc larger than
+ * its live conductors), each beside its field. Added where the schema is used, so the schema itself can be extended.
+ */
+export function checkCircuitDetails(v: Pick<CircuitDetails, 'deviceType' | 'deviceRatingA' | 'rcdType' | 'liveCsaMm2' | 'cpcCsaMm2'>, ctx: z.RefinementCtx): void {
+  const problems = circuitDetailProblems({
+    deviceType: v.deviceType || null,
+    deviceRatingA: usableReading(v.deviceRatingA),
+    rcdType: v.rcdType.trim() || null,
+    liveCsaMm2: usableReading(v.liveCsaMm2),
+    cpcCsaMm2: usableReading(v.cpcCsaMm2),
+  });
+  for (const [field, message] of Object.entries(problems)) ctx.addIssue({ code: 'custom', path: [field], message });
+}
 
 /**
  * The standard values offered for what a certificate states of a circuit, where nothing is recorded yet: the

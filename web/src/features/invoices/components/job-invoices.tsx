@@ -20,7 +20,7 @@ import { VisuallyHidden } from '@/components/visually-hidden';
 import { useCreateInvoice } from '../api/change-invoice';
 import { invoiceQueryOptions } from '../api/get-invoice';
 import { useJobInvoices } from '../api/get-job-invoices';
-import { dateWords, invoiceName } from '../invoice-words';
+import { dateWords, invoiceNameInText } from '../invoice-words';
 import { InvoiceDialog } from './invoice-dialog';
 import { MailChip, StandingChip } from './standing-chip';
 import { InvoiceNumberCell } from './invoice-number-cell';
@@ -109,7 +109,7 @@ export function JobInvoices({ jobId }: { jobId: string }) {
                   </TableCell>
                   <TableCell>{i.status === 'issued' ? <MailChip invoice={i} /> : '—'}</TableCell>
                   <TableCell align="right">
-                    <Button onClick={() => setOpen(i.id)} aria-label={i.number ? `Open ${i.number}` : `Edit the ${invoiceName(i).toLowerCase()} of ${dateWords(i.createdAt.slice(0, 10))}`}>
+                    <Button onClick={() => setOpen(i.id)} aria-label={i.number ? `Open ${i.number}` : `Edit the ${invoiceNameInText(i)} of ${dateWords(i.createdAt.slice(0, 10))}`}>
                       {i.status === 'draft' ? 'Edit' : 'Open'}
                     </Button>
                   </TableCell>

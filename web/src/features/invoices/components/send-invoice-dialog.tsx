@@ -13,7 +13,7 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import type { InvoiceDetail } from '../api/get-invoice';
 import { useSendInvoice } from '../api/change-invoice';
-import { invoiceName } from '../invoice-words';
+import { invoiceNameInText } from '../invoice-words';
 
 const sendSchema = z.object({
   to: z.string().trim().min(1, 'To: the e-mail address to send it to.').email('To: that is not an e-mail address.').max(254, 'To: at most 254 characters.'),
@@ -52,7 +52,7 @@ export function SendInvoiceDialog({ invoice, onClose, onSent }: { invoice: Invoi
   const e = formState.errors;
   return (
     <Dialog open={!!invoice} onClose={close} fullWidth maxWidth="sm" aria-labelledby="send-invoice-title">
-      <DialogTitle id="send-invoice-title">E-mail {invoice ? invoiceName(invoice).toLowerCase() : ''} to the customer</DialogTitle>
+      <DialogTitle id="send-invoice-title">E-mail {invoice ? invoiceNameInText(invoice) : ''} to the customer</DialogTitle>
       <DialogContent>
         <Stack component="form" id="send-invoice-form" noValidate spacing={2} sx={{ pt: 1 }} onSubmit={submit}>
           <Typography color="text.secondary">

@@ -103,12 +103,12 @@ describe('the customer form', () => {
 describe('the site form', () => {
   it('names each bad figure: a negative Ze, a Ze that is not a number, a fault current above 100 kA', async () => {
     const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={vi.fn()} />);
-    type(dialog, 'Ze', '-1');
-    type(dialog, 'Prospective fault current', '120');
+    type(dialog, 'Ze (Ω)', '-1');
+    type(dialog, 'Prospective fault current (kA)', '120');
     save(dialog, 'Save changes');
     expect(await dialog.findByText('Ze must be at least 0 Ω.')).toBeTruthy();
     expect(dialog.getByText('Prospective fault current must be at most 100 kA.')).toBeTruthy();
-    type(dialog, 'Ze', 'abc');
+    type(dialog, 'Ze (Ω)', 'abc');
     save(dialog, 'Save changes');
     expect(await dialog.findByText('Ze must be a number, like 0.35 Ω.')).toBeTruthy();
     expect(api.fetch).not.toHaveBeenCalled();
@@ -137,7 +137,7 @@ describe('the site form', () => {
     const onClose = vi.fn();
     answer(200, { ...site, zeOhm: 0.35 });
     const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={onClose} />);
-    type(dialog, 'Ze', '0,35');
+    type(dialog, 'Ze (Ω)', '0,35');
     save(dialog, 'Save changes');
     await waitFor(() => expect(onClose).toHaveBeenCalled());
     expect(sent()).toEqual({ url: `/api/sites/${SITE_ID}`, method: 'PATCH', body: { zeOhm: 0.35 } });
@@ -147,7 +147,7 @@ describe('the site form', () => {
     answer(200, { ...site, pfcKa: null });
     const onClose = vi.fn();
     const dialog = show(<SiteDialog site={site} customers={[customer]} onClose={onClose} />);
-    type(dialog, 'Prospective fault current', '');
+    type(dialog, 'Prospective fault current (kA)', '');
     save(dialog, 'Save changes');
     await waitFor(() => expect(onClose).toHaveBeenCalled());
     expect(sent().body).toEqual({ pfcKa: null });

@@ -1,5 +1,5 @@
 import Stack from '@mui/material/Stack';
-import { CIRCUIT_KIND_WORDS, CIRCUIT_KINDS, PROTECTIVE_DEVICE_WORDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import { CIRCUIT_KIND_WORDS, CIRCUIT_KINDS, circuitDetailProblems, PROTECTIVE_DEVICE_WORDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
 import { z } from 'zod';
 import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
@@ -20,7 +20,11 @@ export const circuitSchema = z.object({
   liveCsaMm2: optionalNumber('circuit', 'liveCsaMm2', 'Live conductor size', { unit: 'mm²', example: 2.5 }),
   cpcCsaMm2: optionalNumber('circuit', 'cpcCsaMm2', 'cpc size', { unit: 'mm²', example: 1.5 }),
   lengthM: optionalNumber('circuit', 'lengthM', 'Cable length', { unit: 'm', example: 20 }),
-});
+})
+  // What cannot be so (a 17 A type B breaker, an RCD of type Q, a cpc larger than its live conductors), beside its field.
+  .superRefine((v, ctx) => {
+    for (const [field, message] of Object.entries(circuitDetailProblems(v))) ctx.addIssue({ code: 'custom', path: [field], message });
+  });
 
 const KINDS = CIRCUIT_KINDS.map((k) => ({ value: k, label: CIRCUIT_KIND_WORDS[k] }));
 const DEVICES = PROTECTIVE_DEVICES.map((d) => ({ value: d, label: PROTECTIVE_DEVICE_WORDS[d] }));

@@ -35,10 +35,11 @@ export function SiteDialog({ site, customerId, customers, onClose }: { site?: Si
       <FormTextInput form={form} name="name" label="Site name" hint="Optional: how the office knows it, such as “Orchard Rise”." />
       <FormTextInput form={form} name="address" label="Address" multiline minRows={2} />
       <FormTextInput form={form} name="postcode" label="Postcode" sx={{ maxWidth: 200 }} />
-      <Stack direction="row" spacing={2}>
-        <FormSelectInput form={form} name="earthing" label="Earthing arrangement" options={EARTHING} emptyLabel="Not recorded" />
-        <FormTextInput form={form} name="zeOhm" label="Ze" hint="External earth fault loop impedance, Ω" inputMode="decimal" />
-        <FormTextInput form={form} name="pfcKa" label="Prospective fault current" hint="kA" inputMode="decimal" />
+      {/* The earthing on a line of its own, so that neither its label nor the fault current's is cut short. */}
+      <FormSelectInput form={form} name="earthing" label="Earthing arrangement" options={EARTHING} emptyLabel="Not recorded" />
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
+        <FormTextInput form={form} name="zeOhm" label="Ze (Ω)" hint="External earth fault loop impedance" inputMode="decimal" />
+        <FormTextInput form={form} name="pfcKa" label="Prospective fault current (kA)" hint="PFC at the origin" inputMode="decimal" />
       </Stack>
       <FormTextInput form={form} name="accessNotes" label="Access notes" hint="Keys, parking, pets, when to arrive: technicians see these on their phones." multiline minRows={2} />
     </RecordDialog>
