@@ -59,7 +59,8 @@ test('the office works the jobs board and table, reads a job’s cable schedule 
   await expect(page).toHaveURL(/sort=reference/);
   await grid.getByRole('columnheader', { name: 'Reference' }).click();
   await expect(page).toHaveURL(/dir=desc/);
-  const references = grid.getByRole('row').filter({ hasText: /LED-00\d\d/ });
+  // The demo's own jobs: other tests book Sam on jobs of their own, which now take the next reference too.
+  const references = grid.getByRole('row').filter({ hasText: /LED-004[12]/ });
   await expect(references).toHaveText([/LED-0042/, /LED-0041/]);
   await page.getByLabel('Search').fill('harbour');
   await expect(references).toHaveText([/LED-0042/]);
