@@ -55,8 +55,14 @@ test('the admin adds a technician, who sets their own password from the e-mailed
     await phone.close();
   }
 
-  // Deactivated, they can no longer sign in.
+  // Deactivated, after being asked, they can no longer sign in; the admin is told so.
   await page.getByRole('switch', { name: `Jo Newcombe ${stamp} can sign in` }).click();
+  const ask = page.getByRole('dialog', { name: `Stop Jo Newcombe ${stamp} signing in?` });
+  await ask.getByRole('button', { name: 'Leave it' }).click();
+  await expect(page.getByRole('switch', { name: `Jo Newcombe ${stamp} can sign in` })).toBeChecked();
+  await page.getByRole('switch', { name: `Jo Newcombe ${stamp} can sign in` }).click();
+  await ask.getByRole('button', { name: 'Yes, change it' }).click();
+  await expect(page.getByText(`Jo Newcombe ${stamp} can no longer sign in. Their records stay as they are.`)).toBeVisible();
   await expect(page.getByRole('switch', { name: `Jo Newcombe ${stamp} can sign in` })).not.toBeChecked();
   const refused = await request.post('/api/auth/sign-in', { data: { email, password: 'my-own-password-2' } });
   expect(refused.status()).toBe(401);

@@ -1,5 +1,9 @@
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogTitle from '@mui/material/DialogTitle';
 import LinearProgress from '@mui/material/LinearProgress';
 import MenuItem from '@mui/material/MenuItem';
 import Paper from '@mui/material/Paper';
@@ -21,6 +25,8 @@ import { useUsers } from '../api/get-users';
 import { useSendPasswordLink, useUpdatePerson } from '../api/manage-users';
 import { AddPersonDialog } from './add-person-dialog';
 
+const ROLE_WORDS: Record<Role, string> = { technician: 'a technician', office: 'office staff', admin: 'an admin' };
+
 /** The admin's view of everyone who signs in: role, active or not, and a password link when someone is locked out. */
 export function TeamTable() {
   const session = useSession();
@@ -29,6 +35,8 @@ export function TeamTable() {
   const sendLink = useSendPasswordLink();
   const [adding, setAdding] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
+  // A change to who may do what is asked about first, then said done.
+  const [asking, setAsking] = useState<{ id: string; changes: { role?: Role; active?: boolean }; question: string; done: string } | null>(null);
   if (users.isPending) return <LinearProgress aria-label="Loading the team" />;
   if (users.isError) return <Alert severity="error">{users.error.message}</Alert>;
   const failure = update.error ?? sendLink.error;
@@ -70,7 +78,10 @@ export function TeamTable() {
                         value={u.role}
                         disabled={me || update.isPending}
                         slotProps={{ htmlInput: { 'aria-label': `Role of ${u.name}` } }}
-                        onChange={(e) => update.mutate({ id: u.id, changes: { role: e.target.value as Role } })}
+                        onChange={(e) => {
+                          const role = e.target.value as Role;
+                          setAsking({ id: u.id, changes: { role }, question: `Make ${u.name} ${ROLE_WORDS[role]}?`, done: `${u.name} is now ${ROLE_WORDS[role]}.` });
+                        }}
                         sx={{ minWidth: 150 }}
                       >
                         <MenuItem value="technician">Technician</MenuItem>
@@ -84,7 +95,13 @@ export function TeamTable() {
                       checked={u.active}
                       disabled={me || update.isPending}
                       slotProps={{ input: { 'aria-label': `${u.name} can sign in` } }}
-                      onChange={(e) => update.mutate({ id: u.id, changes: { active: e.target.checked } })}
+                      onChange={(e) =>
+                        setAsking(
+                          e.target.checked
+                            ? { id: u.id, changes: { active: true }, question: `Let ${u.name} sign in again?`, done: `${u.name} can sign in again.` }
+                            : { id: u.id, changes: { active: false }, question: `Stop ${u.name} signing in?`, done: `${u.name} can no longer sign in. Their records stay as they are.` },
+                        )
+                      }
                     />
                   </TableCell>
                   <TableCell align="right">
@@ -103,6 +120,24 @@ export function TeamTable() {
         </Table>
       </TableContainer>
       <AddPersonDialog open={adding} onClose={() => setAdding(false)} />
+      <Dialog open={!!asking} onClose={() => setAsking(null)} aria-labelledby="team-change-title">
+        <DialogTitle id="team-change-title">{asking?.question}</DialogTitle>
+        <DialogContent>{asking?.changes.active === false ? 'They are signed out at their next request, on every device; what they recorded stays.' : 'It takes effect at their next request.'}</DialogContent>
+        <DialogActions>
+          <Button onClick={() => setAsking(null)}>Leave it</Button>
+          <Button
+            variant="contained"
+            disabled={update.isPending}
+            onClick={() => {
+              const a = asking!;
+              update.mutate({ id: a.id, changes: a.changes }, { onSuccess: () => setNotice(a.done) });
+              setAsking(null);
+            }}
+          >
+            Yes, change it
+          </Button>
+        </DialogActions>
+      </Dialog>
       <Snackbar open={!!notice} autoHideDuration={6000} onClose={() => setNotice(null)} message={notice} />
     </>
   );
