@@ -9,6 +9,7 @@ export interface ReceivedMail {
   id: number;
   receivedAt: string;
   from: string;
+  replyTo: string;
   /** The envelope's recipients. */
   to: string[];
   subject: string;

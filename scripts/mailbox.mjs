@@ -27,6 +27,7 @@ export async function startMailbox({ port = 0, host = '127.0.0.1', keep = 500 } 
             id: messages.length + 1,
             receivedAt: new Date().toISOString(),
             from: mail.from?.text ?? '',
+            replyTo: mail.replyTo?.text ?? '',
             to: session.envelope.rcptTo.map((r) => r.address),
             subject: mail.subject ?? '',
             text: mail.text ?? '',

@@ -45,6 +45,9 @@ describe('e-mailing an issued document', () => {
     const mail = mailbox.messages[0]!;
     expect(mail.to).toEqual(['hannah.greaves@example.com']);
     expect(mail.subject).toBe('Minor works certificate MW-0001 from Larkfield Electrical & Data');
+    // From the contractor by name, at the address the mail provider allows; a reply goes to their office.
+    expect(mail.from).toBe('"Larkfield Electrical & Data" <no-reply@wiretrail.local>');
+    expect(mail.replyTo).toBe('office@larkfield.example');
     expect(mail.text).toMatch(/^Hello Hannah Greaves,/);
     expect(mail.text).toContain('Attached is minor works certificate MW-0001 for the work at 14 Orchard Rise, Wendmouth, WM2 4HD');
     expect(mail.attachments).toHaveLength(1);

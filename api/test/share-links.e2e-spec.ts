@@ -104,7 +104,12 @@ describe('customer share links', () => {
     expect(done).toMatchObject({ id: revoked.id, state: 'revoked', revokedAt: expect.any(String) });
     for (const path of ['', `/photos/${photo!.id}/thumb`, `/documents/${orchardDocument}/pdf`]) {
       const res = await shared(token, path).expect(410);
-      expect(res.body).toEqual({ statusCode: 410, message: 'This link has been withdrawn by the contractor. Ask them for a new one if you still need it.', error: 'Gone' });
+      // The contractor's own contact, so the customer can ask for a new link; nothing of the job.
+      expect(res.body).toEqual({
+        statusCode: 410,
+        message: 'This link has been withdrawn by the contractor. Ask them for a new one if you still need it. Larkfield Electrical & Data: 01632 960 418 · office@larkfield.example.',
+        error: 'Gone',
+      });
     }
     // Revoking again changes nothing.
     expect((await t.http.post(`/api/share-links/${revoked.id}/revoke`).set(bearer(office)).expect(200)).body.revokedAt).toBe(done.revokedAt);
@@ -114,7 +119,7 @@ describe('customer share links', () => {
     // A day later.
     await t.dataSource.getRepository(ShareLink).update({ id: expiring.id }, { expiresAt: new Date(Date.now() - 1000) });
     const res = await shared(tokenOf(expiring.url)).expect(410);
-    expect(res.body.message).toBe('This link has expired. Ask the contractor for a new one if you still need it.');
+    expect(res.body.message).toBe('This link has expired. Ask the contractor for a new one if you still need it. Larkfield Electrical & Data: 01632 960 418 · office@larkfield.example.');
     await shared(tokenOf(expiring.url), `/photos/${photo!.id}/display`).expect(410);
     const states = (await t.http.get(`/api/jobs/${orchard.id}/share-links`).set(bearer(office)).expect(200)).body.items.map((l: { id: string; state: string }) => [l.id, l.state]);
     expect(states).toEqual(expect.arrayContaining([[revoked.id, 'revoked'], [expiring.id, 'expired']]));

@@ -103,7 +103,7 @@ test('the office reviews a finished job, settles a conflict, issues the certific
     await phone.goto(new URL(link!).pathname);
     await expect(phone.getByRole('heading', { level: 1, name: 'Extra double socket in the front bedroom' })).toBeVisible();
     await expect(phone.getByRole('link', { name: `Download PDF of ${number}` })).toBeVisible();
-    await expect(phone.getByRole('list', { name: 'Photos' }).getByRole('img').first()).toBeVisible();
+    await expect(phone.getByRole('list', { name: 'Photos' }).getByRole('button', { name: /^Open photo: / }).first()).toBeVisible();
     await phone.screenshot({ path: test.info().outputPath('customer-link.png'), fullPage: true });
   } finally {
     await customer.close();

@@ -5,6 +5,7 @@ import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { OutboxMessage } from './entities/outbox-message.entity.js';
 import { type MailAttachment, MailService } from './mail.service.js';
+import { Organisation } from '../organisations/entities/organisation.entity.js';
 
 /** What a feature that queues mail tells the outbox about its messages. */
 export interface OutboxPurpose {
@@ -150,7 +151,9 @@ export class MailOutbox implements OnApplicationBootstrap, OnModuleDestroy {
     try {
       if (!purpose) throw new Error(`Nothing in this server sends "${message.purpose}" mail.`);
       const attachments = await purpose.attachments(message);
-      await this.mail.send({ to: message.toAddress, subject: message.subject, text: message.text ?? '', html: message.html ?? undefined, attachments });
+      const org = await this.queue.read((em) => em.findOne(Organisation, { where: { id: message.organisationId }, select: { id: true, name: true, email: true } }));
+      const sender = org ? { name: org.name, replyTo: org.email } : undefined;
+      await this.mail.send({ to: message.toAddress, subject: message.subject, text: message.text ?? '', html: message.html ?? undefined, attachments, sender });
     } catch (err) {
       failure = err;
     }

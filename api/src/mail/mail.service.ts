@@ -11,10 +11,17 @@ export interface MailAttachment {
 
 export interface OutgoingMail {
   to: string;
+  /** Whose mail it is: shown as the sender's name, with the configured address, and answered to their own. */
+  sender?: { name: string; replyTo: string | null };
   subject: string;
   text: string;
   html?: string;
   attachments?: MailAttachment[];
+}
+
+/** The bare address of "Name <address>" or of an address alone. */
+export function addressOf(from: string): string {
+  return /<([^>]+)>/.exec(from)?.[1] ?? from.trim();
 }
 
 /**
@@ -40,8 +47,10 @@ export class MailService {
     });
   }
 
-  async send(mail: OutgoingMail): Promise<void> {
-    await this.transport.sendMail({ from: this.config.from, ...mail });
+  async send({ sender, ...mail }: OutgoingMail): Promise<void> {
+    // Sent from the address the provider lets us use, under the contractor's name, with replies going to their office.
+    const from = sender ? { name: sender.name, address: addressOf(this.config.from) } : this.config.from;
+    await this.transport.sendMail({ from, ...(sender?.replyTo ? { replyTo: sender.replyTo } : {}), ...mail });
     this.logger.log(`Sent "${mail.subject}" to ${mail.to}`);
   }
 }

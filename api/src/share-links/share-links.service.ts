@@ -170,7 +170,12 @@ export class ShareLinksService {
     const link = TOKEN.test(token) ? await em.findOneBy(ShareLink, { tokenHash: sha256(token) }) : null;
     if (!link) throw new NotFoundException(NOT_VALID);
     const state = stateOf(link);
-    if (state !== 'active') throw new GoneException(state === 'revoked' ? REVOKED : EXPIRED);
+    if (state !== 'active') {
+      // A link that once worked belongs to a customer of this contractor: say how to reach them for a new one.
+      const org = await em.findOne(Organisation, { where: { id: link.organisationId }, select: { id: true, name: true, phone: true, email: true } });
+      const contact = org ? ` ${org.name}: ${[org.phone, org.email].filter(Boolean).join(' · ') || 'ask them directly'}.` : '';
+      throw new GoneException(`${state === 'revoked' ? REVOKED : EXPIRED}${contact}`);
+    }
     return link;
   }
 
