@@ -64,7 +64,7 @@ describe('row types derived from the registry', () => {
     expectTypeOf<RowOf<'testResult'>['verdicts']>().toEqualTypeOf<unknown>();
     expectTypeOf<RowOf<'cableRun'>['wiremap']>().toEqualTypeOf<RecordedWiremap | null>();
     expectTypeOf<RowOf<'materialLine'>['quantity']>().toEqualTypeOf<number>();
-    expectTypeOf<DraftRowOf<'note'>>().toEqualTypeOf<{ id: string; visitId: string; siteId: string; text: string }>();
+    expectTypeOf<DraftRowOf<'note'>>().toEqualTypeOf<{ id: string; visitId: string; siteId: string; text: string; recordedAt?: string | null }>();
     expectTypeOf<DraftRowOf<'area'>['level']>().toEqualTypeOf<string | null | undefined>();
     expectTypeOf<keyof RowOf<'conflict'>>().toEqualTypeOf<'id'>();
   });
