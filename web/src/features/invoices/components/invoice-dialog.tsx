@@ -66,7 +66,9 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
   const fromQuote = useCreateInvoice(invoice.jobId);
   const [paying, setPaying] = useState(false);
   const [sending, setSending] = useState<InvoiceDetail | null>(null);
+  const [crediting, setCrediting] = useState(false);
   const a = invoice.account;
+  const raiseCredit = () => credit.mutate(invoice.id, { onSuccess: (c) => onOpen(c.id) });
   const failure = [download, credit, fromQuote].find((m) => m.isError)?.error;
   return (
     <Stack spacing={2.5}>
@@ -97,7 +99,8 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
           </Button>
         )}
         {invoice.kind === 'invoice' && (
-          <Button startIcon={<UndoOutlined />} onClick={() => credit.mutate(invoice.id, { onSuccess: (c) => onOpen(c.id) })} disabled={credit.isPending}>
+          // Money already taken is not given back by a credit note: the office is told before raising one.
+          <Button startIcon={<UndoOutlined />} onClick={() => (a && a.paidMinor > 0 ? setCrediting(true) : raiseCredit())} disabled={credit.isPending}>
             Raise a credit note
           </Button>
         )}
@@ -193,6 +196,27 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
         <TotalsTable byRate={invoice.byRate} netMinor={invoice.netMinor} vatMinor={invoice.vatMinor} grossMinor={invoice.grossMinor} credit={invoice.kind === 'credit-note'} />
       </Stack>
       <SendInvoiceDialog invoice={sending} onClose={() => setSending(null)} onSent={(to) => onNotice(`Queued for ${to}. The e-mail state follows it.`)} />
+      {a && (
+        <Dialog open={crediting} onClose={() => setCrediting(false)} aria-labelledby="credit-paid-title">
+          <DialogTitle id="credit-paid-title">Credit an invoice that has been paid?</DialogTitle>
+          <DialogContent>
+            {formatMoney(a.paidMinor)} has been paid on {invoice.number}. A credit note lowers what is owed; it does not give money back. What was paid beyond
+            what is then owed shows on the invoice as paid too much, to refund to the customer.
+          </DialogContent>
+          <DialogActions>
+            <Button onClick={() => setCrediting(false)}>Leave it</Button>
+            <Button
+              variant="contained"
+              onClick={() => {
+                setCrediting(false);
+                raiseCredit();
+              }}
+            >
+              Raise the credit note
+            </Button>
+          </DialogActions>
+        </Dialog>
+      )}
     </Stack>
   );
 }
