@@ -17,6 +17,7 @@ export * from './cabling/wiremap.js';
 export * from './cabling/link-length.js';
 export * from './sync/hlc.js';
 export * from './sync/entities.js';
+export * from './sync/voided-records.js';
 export * from './sync/protocol.js';
 export * from './sync/photos.js';
 export * from './sync/merge.js';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInputError } from '../check.js';
-import { checkLink, tdrLengthM } from './link-length.js';
+import { checkLink, readTdr, tdrLengthM } from './link-length.js';
 
 describe('tdrLengthM', () => {
   it('turns a round trip into a one-way length with c = 299 792 458 m/s', () => {
@@ -52,5 +52,31 @@ describe('checkLink', () => {
     expect(() => checkLink({ lengthM: -1, kind: 'channel' })).toThrow(InvalidInputError);
     expect(() => checkLink({ lengthM: Number.NaN, kind: 'channel' })).toThrow(/lengthM/);
     expect(() => checkLink({ lengthM: 10, kind: 'patch' as 'channel' })).toThrow(/kind/);
+  });
+});
+
+describe('readTdr', () => {
+  it('works out the length from the round trip and the NVP', () => {
+    // L = NVP × c × t / 2 (c = 299 792 458 m/s, SI definition of the metre): 0.69 × c × 400 ns / 2 = 41.37 m (D)
+    expect(readTdr({ nanoseconds: 400, nvp: 0.69 }).lengthM).toBeCloseTo(41.37, 2);
+    expect(readTdr({ nanoseconds: null, nvp: 0.69 })).toEqual({ lengthM: null, field: null, problem: null });
+  });
+
+  it('asks for the figure to be checked when no building holds such a cable', () => {
+    // 0.69 × c × 9 999 999 ns / 2 = 1 034 284 m (D), beyond the 1 000 m plausibility bound (common trade practice, M)
+    const r = readTdr({ nanoseconds: 9_999_999, nvp: 0.69 });
+    expect(r).toMatchObject({ lengthM: null, field: 'nanoseconds' });
+    expect(r.problem).toBe('A round trip of 9,999,999 ns at NVP 0.69 gives 1,034 km, longer than any cable in a building: check the figure.');
+    expect(readTdr({ nanoseconds: -5, nvp: 0.69 }).field).toBe('nanoseconds');
+  });
+
+  it('names the NVP as what is wrong when it is not above 0 and at most 1', () => {
+    // NVP is a fraction of c (ANSI/TIA-568 test parameters; physics: no cable carries a signal faster than light)
+    for (const nvp of [1.5, 0, -0.7]) {
+      const r = readTdr({ nanoseconds: 400, nvp });
+      expect(r).toMatchObject({ lengthM: null, field: 'nvp' });
+      expect(r.problem).toMatch(new RegExp(`^An NVP of ${nvp} is wrong: .*above 0 and at most 1`));
+    }
+    expect(readTdr({ nanoseconds: 400, nvp: 1 }).problem).toBeNull();
   });
 });

@@ -22,6 +22,51 @@ export function tdrLengthM(input: TdrInput, rules: RuleSet = DEFAULT_RULE_SET): 
   return (nvp * rules.cabling.speedOfLight.value * nanoseconds * 1e-9) / 2;
 }
 
+/**
+ * Beyond this a length from a TDR is a misread figure, not a cable in a house or small office: structured cabling
+ * stops at 100 m (ISO/IEC 11801-1:2017 channel), and coax, speaker or alarm runs in such buildings stay well under a
+ * kilometre. Common trade practice, from memory (M); a check, never a verdict on the cable.
+ */
+export const PLAUSIBLE_TDR_LENGTH_M = 1000;
+
+export interface TdrReading {
+  /** The length worked out, or null when the figures cannot give one. */
+  readonly lengthM: number | null;
+  /** What is wrong with the figures, naming the one at fault; null when they are fine. */
+  readonly problem: string | null;
+  readonly field: 'nanoseconds' | 'nvp' | null;
+}
+
+/**
+ * A TDR's round trip and the cable's NVP as typed: the length, or which figure is wrong. An NVP outside
+ * 0 < NVP ≤ 1 is named as the NVP (a cable cannot carry a signal faster than light, or at none); a length no
+ * building holds asks for the figure to be checked rather than judging a 1,034 km cable as too long.
+ */
+export function readTdr(input: { readonly nanoseconds: number | null; readonly nvp: number | null }, rules: RuleSet = DEFAULT_RULE_SET): TdrReading {
+  const { nanoseconds, nvp } = input;
+  if (nvp !== null && (!Number.isFinite(nvp) || nvp <= 0 || nvp > 1)) {
+    return {
+      lengthM: null,
+      field: 'nvp',
+      problem: `An NVP of ${Number.isFinite(nvp) ? nvp : 'that'} is wrong: it is the cable's speed as a fraction of the speed of light, above 0 and at most 1, like 0.69 (from the cable's datasheet).`,
+    };
+  }
+  if (nanoseconds !== null && (!Number.isFinite(nanoseconds) || nanoseconds < 0)) {
+    return { lengthM: null, field: 'nanoseconds', problem: 'A round trip cannot be negative: check the figure on the TDR.' };
+  }
+  if (nanoseconds === null || nvp === null) return { lengthM: null, field: null, problem: null };
+  const lengthM = tdrLengthM({ nanoseconds, nvp }, rules);
+  if (lengthM > PLAUSIBLE_TDR_LENGTH_M) {
+    const km = (lengthM / 1000).toLocaleString('en-GB', { maximumFractionDigits: 0 });
+    return {
+      lengthM: null,
+      field: 'nanoseconds',
+      problem: `A round trip of ${nanoseconds.toLocaleString('en-GB')} ns at NVP ${nvp} gives ${km} km, longer than any cable in a building: check the figure.`,
+    };
+  }
+  return { lengthM, field: null, problem: null };
+}
+
 export interface LinkInput {
   readonly lengthM: number;
   readonly kind: LinkKind;

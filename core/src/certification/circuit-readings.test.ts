@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_RULE_SET } from '../rules/uk-bs7671-2018-a2-2022.js';
 import { SYNC_ENTITIES } from '../sync/entities.js';
-import { CIRCUIT_READINGS, circuitReading, readingBounds } from './circuit-readings.js';
+import { CIRCUIT_READINGS, circuitReading, mayBeOverRange, overRangeLimit, readingBounds, readingWords } from './circuit-readings.js';
 import { circuitTestInput } from './circuit-records.js';
 import { assessCircuitTest } from './circuit-test.js';
 
@@ -21,7 +21,8 @@ describe('the catalogue of circuit readings', () => {
     const fields = CIRCUIT_READINGS.map((r) => r.field);
     expect(new Set(fields).size).toBe(fields.length);
     for (const f of fields) expect(SYNC_ENTITIES.testResult.fields[f], f).toBeDefined();
-    expect(Object.keys(circuitTestInput(RING, ALL, 'TN-C-S').readings).sort()).toEqual([...fields].sort());
+    // Beside the readings, whether an insulation reading was over the instrument's range.
+    expect(Object.keys(circuitTestInput(RING, ALL, 'TN-C-S').readings).sort()).toEqual([...fields, 'irLiveEarthOverRange', 'irLiveLiveOverRange'].sort());
   });
 
   it('names, for each reading, lines the circuit test really judges it on, in the unit they judge it in', () => {
@@ -47,5 +48,26 @@ describe('the catalogue of circuit readings', () => {
     expect(readingBounds('zsOhm')).toEqual({ min: 0, max: 2000, whole: false });
     expect(readingBounds('irTestVoltageV')).toEqual({ min: 50, max: 5000, whole: true });
     expect(readingBounds('polarity')).toBeNull();
+  });
+});
+
+describe('over-range readings', () => {
+  it('reads what a technician types off an over-range display', () => {
+    expect(overRangeLimit('>299')).toBe(299);
+    expect(overRangeLimit(' > 999 MΩ')).toBe(999);
+    expect(overRangeLimit('≥299')).toBe(299);
+    expect(overRangeLimit('>=2000')).toBe(2000);
+    expect(overRangeLimit('299')).toBeNull();
+    expect(overRangeLimit('>')).toBeNull();
+    expect(mayBeOverRange('irLiveEarthMOhm')).toBe(true);
+    expect(mayBeOverRange('zsOhm')).toBe(false);
+  });
+
+  it('prints a reading as the instrument showed it', () => {
+    expect(readingWords({ irLiveLiveMOhm: 299, irLiveLiveOverRange: true }, 'irLiveLiveMOhm')).toBe('>299 MΩ');
+    expect(readingWords({ irLiveLiveMOhm: 200, irLiveLiveOverRange: false }, 'irLiveLiveMOhm')).toBe('200 MΩ');
+    expect(readingWords({ zsOhm: 0.52 }, 'zsOhm')).toBe('0.52 Ω');
+    expect(readingWords({ polarity: 'correct' }, 'polarity')).toBe('correct');
+    expect(readingWords({}, 'zsOhm')).toBe('');
   });
 });

@@ -5,7 +5,7 @@
  */
 import type { RuleSet } from '../rules/rule-set.js';
 import { SYNC_ENTITIES } from '../sync/entities.js';
-import type { CircuitTestKey, ReadingField } from './circuit-test.js';
+import { OVER_RANGE_FLAGS, type CircuitTestKey, type OverRangeReading, type ReadingField } from './circuit-test.js';
 
 export interface CircuitReadingSpec {
   readonly field: ReadingField;
@@ -70,4 +70,27 @@ export function readingBounds(field: ReadingField): { readonly min?: number; rea
   const type = SYNC_ENTITIES.testResult.fields[field]?.type;
   if (!type || (type.kind !== 'number' && type.kind !== 'integer')) return null;
   return { min: type.min, max: type.max, whole: type.kind === 'integer' };
+}
+
+/** Whether a reading may be recorded as over the instrument's range (insulation resistance). */
+export function mayBeOverRange(field: ReadingField): field is OverRangeReading {
+  return Object.prototype.hasOwnProperty.call(OVER_RANGE_FLAGS, field);
+}
+
+/**
+ * What a technician types for an instrument showing over-range: ">299", "> 999", "≥299" or ">=299". Gives the
+ * instrument's limit, or null when the text is not of that form.
+ */
+export function overRangeLimit(text: string): number | null {
+  const m = /^\s*(?:>=?|≥)\s*(\d+(?:[.,]\d+)?)\s*(?:MΩ|M|Mohm)?\s*$/iu.exec(text);
+  return m ? Number(m[1]!.replace(',', '.')) : null;
+}
+
+/** A reading as the instrument showed it and a certificate prints it: "0.45 Ω", ">299 MΩ"; empty when not recorded. */
+export function readingWords(row: { readonly [field: string]: unknown }, field: ReadingField): string {
+  const value = row[field];
+  if (value === null || value === undefined || value === '') return '';
+  const { unit } = circuitReading(field);
+  const over = mayBeOverRange(field) && row[OVER_RANGE_FLAGS[field]] === true ? '>' : '';
+  return typeof value === 'number' ? `${over}${value}${unit ? ` ${unit}` : ''}` : String(value);
 }

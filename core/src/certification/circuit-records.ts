@@ -38,6 +38,8 @@ export function readingsOf(test: LooseRowOf<'testResult'>): CircuitReadings {
   const figures = Object.fromEntries(CIRCUIT_READING_FIELDS.map((f) => [f, numberOf(test[f])]));
   return {
     ...figures,
+    irLiveLiveOverRange: test.irLiveLiveOverRange === true,
+    irLiveEarthOverRange: test.irLiveEarthOverRange === true,
     polarity: oneOf<PolarityResult>(POLARITY_RESULTS, test.polarity),
     rcdButton: oneOf(RCD_BUTTON_RESULTS, test.rcdButton),
     afddButton: oneOf(TEST_BUTTON_RESULTS, test.afddButton),

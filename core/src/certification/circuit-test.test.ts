@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { assessCircuitTest, type CircuitReadings, type CircuitUnderTest } from './circuit-test.js';
+import { assessCircuitTest, type CircuitReadings, type CircuitUnderTest, impossibleReading } from './circuit-test.js';
 
 /** The demo's ground-floor ring: 32 A type B, 30 mA type A RCD, 2.5/1.5 mm² twin and earth. */
 const RING_B32: CircuitUnderTest = { kind: 'ring', deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 };
@@ -162,5 +162,25 @@ describe('assessCircuitTest', () => {
         return result.verdict !== 'pass' && result.missing.length > 0;
       }),
     );
+  });
+});
+
+describe('readings as instruments show them', () => {
+  it('passes insulation over the tester’s range against the Table 64 minimum', () => {
+    // BS 7671:2018+A2:2022 Table 64: 1.0 MΩ at 500 V DC; ">299 MΩ" is at least 299 MΩ.
+    const result = assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, irLiveLiveMOhm: 299, irLiveLiveOverRange: true } });
+    expect(result.verdict).toBe('pass');
+    expect(result.lines.find((l) => l.key === 'ir-live-live')!.result.note).toMatch(/^Over the instrument's range \(>299 MΩ\)/);
+  });
+
+  it('does not judge a figure no instrument shows, and never counts it as a fail', () => {
+    // The field registry stores Zs up to 2,000 Ω; a cold reading above the B32's 1.10 Ω would fail (Table 41.3, Appendix 3).
+    const result = assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, zsOhm: 25_000 } });
+    expect(result.failing).toEqual([]);
+    expect(result.verdict).toBe('check');
+    expect(result.notJudged.map((l) => l.key)).toEqual(['zs']);
+    expect(result.notJudged[0]!.result.note).toBe('Not judged: 25000 Ω is not a real Zs: check the figure.');
+    expect(impossibleReading('rcdTripMs', -3)).toBe('-3 ms is not a real RCD operating time: check the figure.');
+    expect(impossibleReading('zsOhm', 0.52)).toBeNull();
   });
 });

@@ -12,6 +12,7 @@ import { checkPolarity, checkR1R2, type PolarityResult } from '../electrical/pro
 import { checkRcd, maxZsForRcd } from '../electrical/rcd.js';
 import { r1r2Expected } from '../electrical/expected-r1r2.js';
 import { checkRing, type RingCheck } from '../electrical/ring-final-circuit.js';
+import { circuitReading, readingBounds } from './circuit-readings.js';
 
 /** The circuit as recorded (any field may still be unknown). */
 export interface CircuitUnderTest {
@@ -37,6 +38,9 @@ export interface CircuitReadings {
   readonly irLiveLiveMOhm?: Reading;
   readonly irLiveEarthMOhm?: Reading;
   readonly irTestVoltageV?: number | null;
+  /** The insulation tester showed over-range ('>299 MΩ'): the reading is its limit, a lower bound. */
+  readonly irLiveLiveOverRange?: boolean | null;
+  readonly irLiveEarthOverRange?: boolean | null;
   readonly polarity?: PolarityResult | null;
   readonly zsOhm?: Reading;
   readonly rcdTripMs?: Reading;
@@ -47,7 +51,12 @@ export interface CircuitReadings {
   readonly afddButton?: 'operates' | 'fails' | null;
 }
 
-export type ReadingField = keyof CircuitReadings;
+/** The over-range flags qualify a reading; they are not readings of their own. */
+export type OverRangeFlag = 'irLiveLiveOverRange' | 'irLiveEarthOverRange';
+export type ReadingField = Exclude<keyof CircuitReadings, OverRangeFlag>;
+/** The readings an instrument may show as over its range, and the flag that says it did. */
+export const OVER_RANGE_FLAGS = { irLiveLiveMOhm: 'irLiveLiveOverRange', irLiveEarthMOhm: 'irLiveEarthOverRange' } as const satisfies Partial<Record<ReadingField, OverRangeFlag>>;
+export type OverRangeReading = keyof typeof OVER_RANGE_FLAGS;
 
 export type CircuitTestKey =
   | 'ring-r1-rn'
@@ -80,6 +89,8 @@ export interface CircuitTestAssessment {
   readonly lines: readonly CircuitTestLine[];
   readonly missing: readonly CircuitTestLine[];
   readonly failing: readonly CircuitTestLine[];
+  /** Lines whose reading cannot be real (above what any instrument reads): shown as not judged, never as a fail. */
+  readonly notJudged: readonly CircuitTestLine[];
   readonly ring: RingCheck | null;
 }
 
@@ -91,6 +102,22 @@ export interface CircuitTestInput {
 }
 
 const given = (v: unknown): boolean => v !== null && v !== undefined;
+
+/**
+ * Why a figure cannot be a real reading (outside the field registry's bounds, which the server refuses to store), or
+ * null. Such a figure is a slip of the finger, so it is not judged: a fail would blame the circuit for a typo.
+ */
+export function impossibleReading(field: ReadingField, value: unknown): string | null {
+  if (typeof value !== 'number') return null;
+  const bounds = readingBounds(field);
+  if (!bounds) return null;
+  const { words, unit } = circuitReading(field);
+  const shown = `${value}${unit ? ` ${unit}` : ''}`;
+  if (!Number.isFinite(value) || (bounds.min !== undefined && value < bounds.min) || (bounds.max !== undefined && value > bounds.max) || (bounds.whole && !Number.isInteger(value))) {
+    return `${shown} is not a real ${words}: check the figure.`;
+  }
+  return null;
+}
 
 /** A check that could not be made; says why instead of guessing a limit. */
 function cannotJudge(note: string, source: string, unit = ''): CheckResult {
@@ -109,9 +136,16 @@ function guarded(run: () => CheckResult, source: string, unit: string): CheckRes
 export function assessCircuitTest(input: CircuitTestInput, rules: RuleSet = DEFAULT_RULE_SET): CircuitTestAssessment {
   const { circuit, readings: r } = input;
   const lines: CircuitTestLine[] = [];
+  const impossible = new Map<ReadingField, string>();
+  for (const [field, value] of Object.entries(r) as [ReadingField, unknown][]) {
+    const why = impossibleReading(field, value);
+    if (why) impossible.set(field, why);
+  }
   const add = (key: CircuitTestKey, label: string, fields: ReadingField[], isRequired: boolean, result: CheckResult) => {
     const missing = isRequired && fields.some((f) => !given(r[f]));
-    lines.push({ key, label, fields, required: isRequired, missing, result });
+    const refused = fields.flatMap((f) => impossible.get(f) ?? []);
+    const judged = refused.length ? cannotJudge(`Not judged: ${refused.join(' ')}`, result.source, result.unit) : result;
+    lines.push({ key, label, fields, required: isRequired, missing, result: judged });
   };
 
   let ring: RingCheck | null = null;
@@ -157,7 +191,8 @@ export function assessCircuitTest(input: CircuitTestInput, rules: RuleSet = DEFA
     ['ir-live-live', 'Insulation resistance, live to live', 'irLiveLiveMOhm'],
     ['ir-live-earth', 'Insulation resistance, live to earth', 'irLiveEarthMOhm'],
   ] as const) {
-    add(key, label, [field], true, guarded(() => insulationLine(r[field], r.irTestVoltageV, key === 'ir-live-earth', rules), rules.insulation.source, 'MΩ'));
+    const overRange = r[OVER_RANGE_FLAGS[field]] === true;
+    add(key, label, [field], true, guarded(() => insulationLine(r[field], overRange, r.irTestVoltageV, key === 'ir-live-earth', rules), rules.insulation.source, 'MΩ'));
   }
 
   add('polarity', 'Polarity', ['polarity'], true, checkPolarity({ result: r.polarity }, rules));
@@ -207,6 +242,7 @@ export function assessCircuitTest(input: CircuitTestInput, rules: RuleSet = DEFA
     lines,
     missing: lines.filter((l) => l.missing),
     failing: counted.filter((l) => l.result.verdict === 'fail'),
+    notJudged: lines.filter((l) => l.fields.some((f) => impossible.has(f))),
     ring,
   };
 }
@@ -218,8 +254,8 @@ function r2LeadLine(measured: Reading, rules: RuleSet): CheckResult {
   return { ...check, note: `R2 of ${check.value} Ω by the long lead shows the protective conductor is continuous.` };
 }
 
-function insulationLine(megaohms: Reading, testV: number | null | undefined, liveToEarth: boolean, rules: RuleSet): CheckResult {
-  const check = checkInsulation({ megaohms }, rules);
+function insulationLine(megaohms: Reading, overRange: boolean, testV: number | null | undefined, liveToEarth: boolean, rules: RuleSet): CheckResult {
+  const check = checkInsulation({ megaohms, overRange }, rules);
   if (!given(megaohms) || check.verdict === 'fail') return check;
   if (!given(testV)) {
     return { ...check, verdict: 'check', note: `${check.note} Record the test voltage used (${check.testVoltageV} V DC for this circuit).` };

@@ -196,4 +196,22 @@ export const MINOR_WORKS_CASES: readonly MinorWorksCase[] = [
     },
     { issuable: true, findings: [] },
   ),
+  visitCase(
+    14,
+    'a failing retest voided on site as typed on the wrong circuit leaves the sound test to be certified',
+    {
+      tests: [
+        tested('2026-03-14T10:05:00.000Z'),
+        tested('2026-03-14T10:40:00.000Z', { zsOhm: HIGH_ZS, voidedAt: '2026-03-14T10:45:00.000Z', voidReason: 'Typed against the wrong circuit' }),
+      ],
+    },
+    { issuable: true, findings: [] },
+  ),
+  visitCase(
+    15,
+    'insulation over the tester’s range (>299 MΩ) passes the 1.0 MΩ minimum',
+    // BS 7671:2018+A2:2022 Table 64: 1.0 MΩ at 500 V DC; the tester reads no higher than 299 MΩ, so the insulation is at least that.
+    { tests: [tested('2026-03-14T10:30:00.000Z', { irLiveLiveMOhm: 299, irLiveLiveOverRange: true, irLiveEarthMOhm: 999, irLiveEarthOverRange: true })] },
+    { issuable: true, findings: [] },
+  ),
 ];

@@ -10,6 +10,7 @@
 import { dayOf, ruleSetInForce } from '../rules/rules-in-force.js';
 import type { RuleSet } from '../rules/rule-set.js';
 import { type DepartureEntry, FINISHED_VISIT_STATUS } from '../sync/entities.js';
+import { isVoided } from '../sync/voided-records.js';
 import { circuitReading } from './circuit-readings.js';
 import { circuitName, circuitTestInput, type LooseRowOf, type TestResultRecord, textOf } from './circuit-records.js';
 import { assessCircuitTest, type CircuitTestAssessment, type CircuitTestKey } from './circuit-test.js';
@@ -175,7 +176,8 @@ export function judgeCircuitWork<V extends VisitRecord, T extends TestResultReco
   const judged = new Map(visits.map((v) => [v.id, v]));
   const circuitsById = new Map(records.circuits.map((c) => [c.id, c]));
   const visitOf = (row: { readonly visitId?: unknown }) => (typeof row.visitId === 'string' ? judged.get(row.visitId) : undefined);
-  const tests = records.tests.filter((t) => visitOf(t)).sort((a, b) => takenAt(a).localeCompare(takenAt(b)));
+  // A voided record was made by mistake: it is neither evidence nor a circuit altered.
+  const tests = records.tests.filter((t) => visitOf(t) && !isVoided(t)).sort((a, b) => takenAt(a).localeCompare(takenAt(b)));
   const findings: MinorWorksFinding[] = [];
 
   // Completed when last signed; a visit still being worked on is judged as if completed on its latest test.
@@ -212,7 +214,7 @@ export function judgeCircuitWork<V extends VisitRecord, T extends TestResultReco
     latest.set(t.circuitId, t);
   }
 
-  const altered = new Set(records.pointChanges.flatMap((p) => (visitOf(p) && typeof p.circuitId === 'string' ? [p.circuitId] : [])));
+  const altered = new Set(records.pointChanges.flatMap((p) => (visitOf(p) && !isVoided(p) && typeof p.circuitId === 'string' ? [p.circuitId] : [])));
   for (const id of altered) {
     if (latest.has(id)) continue;
     const what = circuitName(circuitsById.get(id) ?? { id });

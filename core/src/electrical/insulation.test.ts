@@ -38,3 +38,19 @@ describe('checkInsulation', () => {
     expect(() => checkInsulation({ megaohms: 50, nominalV: 3300 })).toThrow(/nominalV: .*Table 64 covers circuits up to 1000 V/);
   });
 });
+
+describe('checkInsulation over the instrument’s range', () => {
+  it('passes ">299 MΩ" and ">999 MΩ" against the 1.0 MΩ minimum, keeping the limit as a lower bound', () => {
+    // BS 7671:2018+A2:2022 Table 64, circuits up to and including 500 V: 1.0 MΩ at 500 V DC (C1). An over-range
+    // display means at least the range's top (common trade practice: recorded as ">299 MΩ").
+    const over = checkInsulation({ megaohms: 299, overRange: true });
+    expect(over).toMatchObject({ verdict: 'pass', value: 299, limit: 1, unit: 'MΩ', source: 'BS 7671:2018+A2:2022 Table 64' });
+    expect(over.note).toMatch(/^Over the instrument's range \(>299 MΩ\) at 500 V DC: above the 1\.0 MΩ minimum/);
+    expect(checkInsulation({ megaohms: 999, overRange: true }).verdict).toBe('pass');
+  });
+
+  it('cannot judge an over-range on a range that ends below the minimum', () => {
+    // Table 64: 1.0 MΩ; ">0.5 MΩ" says only that the insulation is above 0.5 MΩ.
+    expect(checkInsulation({ megaohms: 0.5, overRange: true })).toMatchObject({ verdict: 'check', value: 0.5 });
+  });
+});

@@ -10,6 +10,11 @@ export interface InsulationInput {
   readonly megaohms: Reading;
   /** Nominal voltage of the circuit (V); 50 V or less is taken as SELV or PELV. */
   readonly nominalV?: number;
+  /**
+   * The tester showed over-range ('>299 MΩ', '>999 MΩ'): `megaohms` is then the limit of its range, and the
+   * insulation is at least that. Common trade practice records it so, with the instrument's limit.
+   */
+  readonly overRange?: boolean;
 }
 
 export interface InsulationCheck extends CheckResult {
@@ -41,6 +46,18 @@ export function checkInsulation(input: InsulationInput, rules: RuleSet = DEFAULT
   const min = band.minimumMegaohms.toFixed(1);
   if (megaohms === null) {
     return { ...base, verdict: 'check', value: null, note: `Enter the insulation resistance measured at ${band.testVoltageV} V DC.` };
+  }
+  if (input.overRange) {
+    // A lower bound passes when the range itself reaches the minimum; below it, the display says nothing either way.
+    const reaches = megaohms >= band.minimumMegaohms;
+    return {
+      ...base,
+      verdict: reaches ? 'pass' : 'check',
+      value: megaohms,
+      note: reaches
+        ? `Over the instrument's range (>${megaohms} MΩ) at ${band.testVoltageV} V DC: above the ${min} MΩ minimum for ${band.circuit}.`
+        : `Over a range that ends at ${megaohms} MΩ says nothing against the ${min} MΩ minimum: measure on a range that reaches it.`,
+    };
   }
   const ok = megaohms >= band.minimumMegaohms;
   return {

@@ -64,8 +64,10 @@ describe('row types derived from the registry', () => {
     expectTypeOf<RowOf<'testResult'>['verdicts']>().toEqualTypeOf<unknown>();
     expectTypeOf<RowOf<'cableRun'>['wiremap']>().toEqualTypeOf<RecordedWiremap | null>();
     expectTypeOf<RowOf<'materialLine'>['quantity']>().toEqualTypeOf<number>();
-    expectTypeOf<DraftRowOf<'note'>>().toEqualTypeOf<{ id: string; visitId: string; siteId: string; text: string; recordedAt?: string | null }>();
+    expectTypeOf<DraftRowOf<'note'>>().toEqualTypeOf<{ id: string; visitId: string; siteId: string; text: string; recordedAt?: string | null; voidedAt?: string | null; voidReason?: string | null }>();
     expectTypeOf<DraftRowOf<'area'>['level']>().toEqualTypeOf<string | null | undefined>();
+    expectTypeOf<RowOf<'cableRun'>['voidReason']>().toEqualTypeOf<string | null>();
+    expectTypeOf<RowOf<'testResult'>['irLiveLiveOverRange']>().toEqualTypeOf<boolean | null>();
     expectTypeOf<keyof RowOf<'conflict'>>().toEqualTypeOf<'id'>();
   });
 

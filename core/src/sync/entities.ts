@@ -106,6 +106,13 @@ function seen(type: FieldType, required = false): FieldSpec {
   return { type, policy: 'observed', required, technician: true };
 }
 
+/**
+ * A record made by mistake on site is voided with a reason, never deleted: the office still sees it (struck through,
+ * with the reason), and no count, label or document takes it in. A technician voids only while the visit it was
+ * recorded on is not finished, and nobody voids what an issued document holds (the server's rule, void-rules.ts).
+ */
+const voidable = { voidedAt: seen(when), voidReason: seen(str(500)) } as const;
+
 export const EARTHING_ARRANGEMENTS = ['TN-C-S', 'TN-S', 'TT'] as const;
 export const JOB_STATUSES = ['enquiry', 'booked', 'on-site', 'paperwork', 'done', 'cancelled'] as const;
 export const VISIT_STATUSES = ['planned', 'on-site', 'finished', 'cancelled'] as const;
@@ -231,13 +238,14 @@ const REGISTRY = {
       visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), areaId: seen(ref('area')),
       subjectType: seen(oneOf(...PHOTO_SUBJECTS)), subjectId: seen(str(36)), caption: seen(str(500)), tags: seen(jsonOf<string[]>()),
       takenAt: seen(when), sha256: seen(str(64)), sizeBytes: seen(int(0)), width: seen(int(0)), height: seen(int(0)), uploadState: seen(str(20)),
+      ...voidable,
     },
   },
   // recordedAt, on the records a phone makes: when it was made there, set once by the phone. A trail sorts by it, since
   // createdAt is the server's clock when the row arrived, which after a day offline is the moment of the next signal.
   note: {
     name: 'note', table: 'note', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId', appendOnly: true,
-    fields: { visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), text: seen(text(), true), recordedAt: seen(when) },
+    fields: { visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), text: seen(text(), true), recordedAt: seen(when), ...voidable },
   },
   cableRun: {
     name: 'cableRun', table: 'cable_run', technicianWrite: 'site', technicianVisible: true, siteField: 'siteId', visitField: null,
@@ -252,6 +260,7 @@ const REGISTRY = {
       // Cable runs belong to the site; this says on which visit it was last recorded, for that visit's trail.
       lastVisitId: seen(ref('visit')),
       recordedAt: seen(when),
+      ...voidable,
     },
   },
   pointChange: {
@@ -277,6 +286,7 @@ const REGISTRY = {
       designCurrentA: seen(num(0, 1000)), installationMethod: seen(oneOf(...INSTALLATION_METHODS)),
       ambientFactor: seen(num(0.01, 1.25)), groupingFactor: seen(num(0.01, 1)), insulationFactor: seen(num(0.01, 1)),
       recordedAt: seen(when),
+      ...voidable,
     },
   },
   testResult: {
@@ -286,6 +296,8 @@ const REGISTRY = {
       // One field per reading, so two people filling in different readings never collide.
       r1Ohm: seen(num(0, 100)), rnOhm: seen(num(0, 100)), r2Ohm: seen(num(0, 100)), r1r2Ohm: seen(num(0, 100)),
       irLiveLiveMOhm: seen(num(0, 10_000)), irLiveEarthMOhm: seen(num(0, 10_000)), irTestVoltageV: seen(int(50, 5_000)),
+      // Over the tester's range ('>299 MΩ' on its display): the reading above is then the instrument's limit, a lower bound.
+      irLiveLiveOverRange: seen(bool), irLiveEarthOverRange: seen(bool),
       polarity: seen(oneOf(...POLARITY_RESULTS)), zsOhm: seen(num(0, 2_000)),
       rcdTripMs: seen(num(0, 10_000)), rcdTripMs5x: seen(num(0, 10_000)), rcdButton: seen(oneOf(...RCD_BUTTON_RESULTS)),
       // Protective conductor continuity by the long-lead method, recorded instead of R1+R2.
@@ -294,6 +306,7 @@ const REGISTRY = {
       // What the phone's checks said, with the rule set's id; the server works them out again before issuing.
       verdicts: seen(json),
       recordedAt: seen(when),
+      ...voidable,
     },
   },
   document: {
