@@ -1,4 +1,4 @@
-import { assessCableRun, type CableRunAssessment, judgeMinorWorks, type MinorWorksJudgement, type RuleSet } from '@wiretrail/core';
+import { assessCableRun, type CableRunAssessment, judgeMinorWorks, type MinorWorksJudgement, type RuleSet, unvoided } from '@wiretrail/core';
 import { type EntityManager, In } from 'typeorm';
 import { inTurn } from '../common/in-turn.js';
 import { type JobFile, jobVisits, live } from '../paperwork/job-file.js';
@@ -38,12 +38,14 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile): Promise<
   const org = file.organisation.id;
   const visits = await jobVisits(em, file);
   const visitIds = visits.map((v) => v.id);
-  const [tests, pointChanges, circuits, boards] = await inTurn(
+  const [allTests, allPointChanges, circuits, boards] = await inTurn(
     () => visitIds.length ? syncRepository(em, 'testResult').find({ where: { visitId: In(visitIds), ...live(org) } }) : [],
     () => visitIds.length ? syncRepository(em, 'pointChange').find({ where: { visitId: In(visitIds), ...live(org) } }) : [],
     () => syncRepository(em, 'circuit').find({ where: { siteId: file.site.id, ...live(org) } }),
     () => syncRepository(em, 'board').find({ where: { siteId: file.site.id, organisationId: org } }),
   );
+  // Records voided on site are neither judged nor printed, so the certificate does not hold them either.
+  const [tests, pointChanges] = [unvoided(allTests), unvoided(allPointChanges)];
   const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: file.site.earthing ?? null, boards });
   const recorded: RecordKey[] = [...tests.map((r) => ({ entity: 'testResult' as const, id: r.id })), ...pointChanges.map((r) => ({ entity: 'pointChange' as const, id: r.id }))];
   return { ...judgement, boards: new Map(boards.map((b) => [b.id, b])), recorded };
@@ -67,7 +69,8 @@ export async function loadCableSchedule(em: EntityManager, file: JobFile, rules:
     const visitIds = (await jobVisits(em, file)).map((v) => v.id);
     runs = visitIds.length ? await syncRepository(em, 'cableRun').find({ where: { ...where, lastVisitId: In(visitIds) } }) : [];
   }
-  return runs
+  // A cable voided on site (a typo'd label) is kept for the office, never printed.
+  return unvoided(runs)
     .sort((a, b) => a.label.localeCompare(b.label, 'en-GB', { numeric: true }))
     .map((run) => ({
       run,
@@ -105,7 +108,7 @@ export interface PhotoRecordContent {
 export async function loadPhotoRecord(em: EntityManager, file: JobFile): Promise<PhotoRecordContent> {
   const org = file.organisation.id;
   const visits = await jobVisits(em, file);
-  const all = visits.length ? await syncRepository(em, 'photo').find({ where: { visitId: In(visits.map((v) => v.id)), ...live(org) } }) : [];
+  const all = unvoided(visits.length ? await syncRepository(em, 'photo').find({ where: { visitId: In(visits.map((v) => v.id)), ...live(org) } }) : []);
   const hashes = [...new Set(all.map((p) => p.sha256).filter((h): h is string => typeof h === 'string'))];
   const held = hashes.length ? await em.find(PhotoBlob, { where: { organisationId: org, sha256: In(hashes) }, select: { sha256: true } }) : [];
   const have = new Set(held.map((b) => b.sha256));

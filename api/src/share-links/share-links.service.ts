@@ -1,7 +1,7 @@
 import { GoneException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { createHash, randomBytes } from 'node:crypto';
-import type { NewShareLink, SharedJob, ShareLinkState, ShareLinkView } from '@wiretrail/core';
+import { isVoided, type NewShareLink, type SharedJob, type ShareLinkState, type ShareLinkView } from '@wiretrail/core';
 import { type EntityManager, In, IsNull, Not } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
@@ -138,8 +138,9 @@ export class ShareLinksService {
           customerName: customer?.name ?? null,
           siteAddress: [site?.address, site?.postcode].filter((p) => typeof p === 'string' && p).join(', '),
         },
+        // A photo voided on site (the wrong board) is not the customer's to see.
         photos: photos
-          .filter((p) => held.has(p.sha256))
+          .filter((p) => held.has(p.sha256) && !isVoided(p))
           .map((p) => ({
             id: p.id,
             caption: p.caption ?? null,

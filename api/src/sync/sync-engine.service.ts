@@ -13,6 +13,8 @@ import {
   sameValue,
   SYNC_ENTITIES,
   type SyncEntityName,
+  touchesVoid,
+  voidRefusal,
 } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
@@ -271,6 +273,8 @@ export class SyncEngine {
     const rowSite = spec.siteField === 'siteId' ? textOrNull(set.siteId ?? existing?.siteId) : spec.siteField === 'id' ? m.id : null;
     await checkReferences(run.batch.em, actor.organisationId, m.entity, spec, set, run.batch.known, run.batch.sites, rowSite);
 
+    if (!isDelete && touchesVoid(set)) await this.checkVoid(run, actor, checked, existing);
+
     if (!existing) {
       if (isDelete) return { mutationId: m.mutationId, status: 'applied', version: 0, fieldVersions: {} };
       return this.create(run, actor, checked);
@@ -279,6 +283,25 @@ export class SyncEngine {
     if (lock) return this.lockedToConflicts(run, actor, checked, existing, lock);
     if (isDelete) return this.remove(run, actor, m, existing);
     return this.update(run, actor, checked, existing);
+  }
+
+  /**
+   * A void is refused outright rather than kept back as a conflict: the technician is told at once that the visit is
+   * finished or that an issued document prints the record, and nothing waits at the office to be taken by mistake.
+   * A row made voided (made and voided on a phone before it synced) is the phone's own business.
+   */
+  private async checkVoid(run: Run, actor: Actor, { mutation: m, spec, set }: CheckedMutation, existing: SyncRecord | null): Promise<void> {
+    let visitStatus: string | null = null;
+    let heldBy: string | null = null;
+    if (existing) {
+      // A cable run belongs to the site; the visit it was last recorded on is the one whose finish closes it.
+      const visitId = spec.visitField === 'visitId' ? existing.visitId : m.entity === 'cableRun' ? existing.lastVisitId : null;
+      const visit = typeof visitId === 'string' ? await run.batch.rowOf('visit', visitId) : null;
+      visitStatus = typeof visit?.status === 'string' ? visit.status : null;
+      heldBy = (await run.locks.lockOf(actor.role, spec, existing, Object.keys(set)))?.heldBy ?? null;
+    }
+    const refusal = voidRefusal({ entity: m.entity, set, row: existing as { voidedAt?: unknown; voidReason?: unknown } | null, visitStatus, byTechnician: actor.role === 'technician', heldBy });
+    if (refusal) throw new MutationRefused(refusal);
   }
 
   private async create(run: Run, actor: Actor, { mutation: m, spec, set }: CheckedMutation): Promise<MutationResult> {

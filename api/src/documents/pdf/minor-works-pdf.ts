@@ -2,6 +2,7 @@ import {
   type CertifiedCircuit,
   circuitName,
   circuitReading,
+  readingWords,
   type CircuitTestLine,
   EXISTING_INSTALLATION_REG,
   minorWorksDeclaration,
@@ -76,7 +77,8 @@ function conductorWords(c: Certified['circuit']): string {
 function readingsOfLine(line: CircuitTestLine, test: Certified['test']): string {
   const shown = line.fields.map((f) => {
     const spec = circuitReading(f);
-    const value = reading(test[f], spec.unit);
+    // As the instrument showed it: an insulation reading over its range prints as ">299 MΩ".
+    const value = readingWords(test, f);
     return value && line.fields.length > 1 ? `${spec.short} ${value}` : value;
   });
   const text = shown.filter(Boolean).join(' · ');
