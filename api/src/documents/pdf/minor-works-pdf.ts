@@ -12,7 +12,7 @@ import {
 import { MINOR_WORKS_TITLE } from '../../paperwork/document-titles.js';
 import type { JobFile } from '../../paperwork/job-file.js';
 import { INK, type Row } from '../../paperwork/pdf/document-layout.js';
-import { dateTimeWords, dateWords, joined, limitWords, reading, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
+import { dateTimeWords, dateWords, joined, limitWords, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
 import type { MinorWorksContent } from '../document-content.js';

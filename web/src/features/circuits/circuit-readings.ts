@@ -1,7 +1,7 @@
 import type { CircuitReadings, CircuitTestAssessment, ReadingField } from '@wiretrail/core';
 import { assessCircuitTest, circuitUnderTest, readingsOf } from '@wiretrail/core';
 import type { CircuitRow } from '@/lib/db';
-import { usableReading } from '@/lib/readings';
+import { instrumentReading, usableReading } from '@/lib/readings';
 
 /** The readings a form holds, as typed. */
 export interface TypedReadings {
@@ -26,8 +26,15 @@ export const NUMERIC_READINGS = ['r1Ohm', 'rnOhm', 'r2Ohm', 'r1r2Ohm', 'irLiveLi
 
 /** The typed readings as a test result stores them: blank and malformed figures are not recorded. */
 export function storedReadings(t: TypedReadings) {
+  const liveLive = instrumentReading(t.irLiveLiveMOhm);
+  const liveEarth = instrumentReading(t.irLiveEarthMOhm);
   return {
     ...Object.fromEntries(NUMERIC_READINGS.map((f) => [f, usableReading(t[f])])),
+    // ">299" typed off the tester: its range's top, marked over range.
+    irLiveLiveMOhm: liveLive.value,
+    irLiveLiveOverRange: liveLive.value === null ? null : liveLive.overRange,
+    irLiveEarthMOhm: liveEarth.value,
+    irLiveEarthOverRange: liveEarth.value === null ? null : liveEarth.overRange,
     irTestVoltageV: t.irTestVoltageV ? Number(t.irTestVoltageV) : null,
     polarity: t.polarity || null,
     rcdButton: t.rcdButton || null,

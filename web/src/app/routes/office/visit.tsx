@@ -14,7 +14,7 @@ import { PhotoViewer, type ViewerPhoto } from '@/features/photos/desk/photo-view
 import { ACTION_WORDS } from '@/features/points/point-words';
 import { useVisitRecord } from '@/features/visits/api/get-visit-record';
 import { VisitFacts, VisitParts, VisitSignOff, VisitTimeline } from '@/features/visits/desk/visit-record';
-import { type TimelineEntry, visitTimeline } from '@/features/visits/desk/visit-timeline';
+import { type TimelineEntry, visitTimeline, voidedOf } from '@/features/visits/desk/visit-timeline';
 import { whenSigned } from '@/features/visits/visit-format';
 
 /** One visit at the desk: everything the technician recorded on it, the sign-off and signature, in time order. */
@@ -49,6 +49,7 @@ export function Component() {
       title: 'Photo',
       detail: p.caption,
       by: p.createdByName,
+      voided: voidedOf(p),
       media: (
         <ButtonBase onClick={() => setOpen(i)} aria-label={`Open photo: ${p.caption ?? 'no caption'}`} sx={{ borderRadius: 1, overflow: 'hidden', flexShrink: 0 }}>
           <ServerPhotoImage photoId={p.id} variant="thumb" alt="" lazy sx={{ width: 96, height: 72, objectFit: 'cover', display: 'block' }} />
@@ -61,6 +62,7 @@ export function Component() {
       title: `Point change: ${ACTION_WORDS[c.action] ?? c.action}, ${c.accessoryKind ?? 'point'}`,
       detail: [c.toDescription ?? c.fromDescription, c.circuitLabel ? `circuit ${c.circuitLabel}` : null].filter(Boolean).join(' · ') || null,
       by: c.createdByName,
+      voided: voidedOf(c),
     })),
     ...r.cables.map((c) => ({
       id: c.id,
@@ -68,6 +70,7 @@ export function Component() {
       title: `Cable ${c.label}${c.medium ? ` · ${MEDIUM_WORDS[c.medium] ?? c.medium}` : ''}`,
       detail: [cableStatusWords(c.status ?? null), c.lengthM != null ? `${c.lengthM} m` : null].filter(Boolean).join(' · '),
       by: c.createdByName,
+      voided: voidedOf(c),
     })),
   ];
 

@@ -9,6 +9,7 @@ import { paths } from '@/config/paths';
 import { useSiteCables } from '@/features/cables/data/get-site-cables';
 import { LabelSheet } from '@/features/cables/phone/label-sheet';
 import { useVisit } from '@/features/visits/data/get-visit';
+import { unvoided } from '@wiretrail/core';
 
 /** A sheet of cable labels to print (or show to a label printer app); only the labels go to paper. */
 export function Component() {
@@ -16,6 +17,7 @@ export function Component() {
   const summary = useVisit(visitId);
   const site = useSiteCables(summary?.visit.siteId ?? '');
   if (!summary || !site) return null;
+  const printed = unvoided(site.cables).length;
   return (
     <>
       <GlobalStyles styles={{ '@media print': { 'header, nav, [data-print="hide"]': { display: 'none !important' }, body: { background: '#fff' }, main: { padding: '0 !important' } } }} />
@@ -25,7 +27,7 @@ export function Component() {
         </Button>
         <Typography variant="h1">Cable labels</Typography>
         <Typography color="text.secondary">
-          {summary.site?.name ?? summary.site?.address}: {site.cables.length} cables, a label for each end. Scanning a code opens that cable’s record.
+          {summary.site?.name ?? summary.site?.address}: {printed === 1 ? '1 cable' : `${printed} cables`}, a label for each end. Scanning a code opens that cable’s record.
         </Typography>
         <Button variant="contained" size="large" startIcon={<PrintOutlined />} onClick={() => window.print()}>
           Print labels

@@ -10,10 +10,11 @@ import Switch from '@mui/material/Switch';
 import Tooltip from '@mui/material/Tooltip';
 import Typography from '@mui/material/Typography';
 import type { GridColDef } from '@mui/x-data-grid';
-import { DEFAULT_RULE_SET, VERDICT_DISCLAIMER } from '@wiretrail/core';
+import { DEFAULT_RULE_SET, isVoided, unvoided, VERDICT_DISCLAIMER } from '@wiretrail/core';
 import { useState } from 'react';
 import { EmptyState } from '@/components/empty-state';
 import { RecordGrid } from '@/components/record-grid';
+import { VoidedMark, voidedSx } from '@/components/records/voided-mark';
 import { VerdictChip } from '@/components/verdicts/verdict-chip';
 import { type CableRun, useCableSchedule } from '../api/get-cable-runs';
 import { cableScheduleCsv, cableScheduleFileName, downloadCsv } from './cable-schedule-csv';
@@ -64,10 +65,14 @@ export function CableSchedule({ siteId, jobId, reference, siteName }: Props) {
       renderCell: ({ row }) => (
         <Stack direction="row" sx={{ alignItems: 'center', width: '100%' }}>
           <div style={{ flex: 1, minWidth: 0 }}>
-            <Typography sx={{ fontWeight: 500, overflowWrap: 'anywhere' }}>{row.label}</Typography>
-            <Typography variant="body2" color="text.secondary">
-              {cableStatusWords(row.status)}
-            </Typography>
+            <Typography sx={{ fontWeight: 500, overflowWrap: 'anywhere', ...voidedSx(row) }}>{row.label}</Typography>
+            {isVoided(row) ? (
+              <VoidedMark row={row} />
+            ) : (
+              <Typography variant="body2" color="text.secondary">
+                {cableStatusWords(row.status)}
+              </Typography>
+            )}
           </div>
           <Tooltip title="Correct the label or ends">
             <IconButton size="small" aria-label={`Correct ${row.label}`} onClick={() => setCorrecting(row)} sx={{ minWidth: 40, minHeight: 40 }}>
@@ -119,14 +124,14 @@ export function CableSchedule({ siteId, jobId, reference, siteName }: Props) {
     <Stack spacing={1.5} component="section" aria-label="Cable schedule">
       <Stack direction="row" sx={{ alignItems: 'center', gap: 2 }}>
         <Typography color="text.secondary" sx={{ flex: 1 }}>
-          {schedule.isSuccess ? `${runs.length} ${runs.length === 1 ? 'cable' : 'cables'}${onlyThisJob ? ' recorded on this job' : ' at this site'}.` : ' '}
+          {schedule.isSuccess ? `${unvoided(runs).length} ${unvoided(runs).length === 1 ? 'cable' : 'cables'}${onlyThisJob ? ' recorded on this job' : ' at this site'}.` : ' '}
         </Typography>
         <FormControlLabel control={<Switch checked={onlyThisJob} onChange={(e) => setOnlyThisJob(e.target.checked)} />} label="Only cables recorded on this job" />
         <Button
           variant="contained"
           startIcon={<DownloadOutlined />}
           disabled={!runs.length}
-          onClick={() => downloadCsv(cableScheduleCsv(runs), cableScheduleFileName(reference, siteName))}
+          onClick={() => downloadCsv(cableScheduleCsv(unvoided(runs)), cableScheduleFileName(reference, siteName))}
         >
           Export CSV
         </Button>

@@ -15,7 +15,7 @@ import {
   isTwistedPair,
   LINK_KINDS,
   roundTo,
-  tdrLengthM,
+  readTdr,
   TRACE_METHODS,
 } from '@wiretrail/core';
 import { useMemo, useState } from 'react';
@@ -71,10 +71,10 @@ export const cableSchema = z
       }
     }
     if (v.lengthMode === 'tdr') {
-      const nvp = parseNvp(v.nvp);
-      if (nvp !== null && (Number.isNaN(nvp) || nvp <= 0.01 || nvp > 1)) {
-        ctx.addIssue({ code: 'custom', path: ['nvp'], message: 'The NVP must be a fraction of the speed of light, like 0.69 (or 69 %).' });
-      }
+      const tdr = tdrOf(v);
+      if (tdr.problem && tdr.field === 'nvp') ctx.addIssue({ code: 'custom', path: ['nvp'], message: tdr.problem });
+      // A round trip that gives a length no building holds is a misread figure, not a cable that fails.
+      else if (tdr.problem) ctx.addIssue({ code: 'custom', path: ['tdrNs'], message: tdr.problem });
       if ((v.tdrNs.trim() === '') !== (v.nvp.trim() === '')) {
         ctx.addIssue({ code: 'custom', path: [v.tdrNs.trim() === '' ? 'tdrNs' : 'nvp'], message: 'Enter both the TDR time and the NVP to work out the length.' });
       }
@@ -106,13 +106,17 @@ function defaults(cable: CableRunRow | null): CableValues {
   };
 }
 
+/** The TDR figures as core reads them: an NVP that is neither a fraction nor a percentage is named as typed. */
+function tdrOf(v: Pick<CableValues, 'tdrNs' | 'nvp'>) {
+  const nvp = parseNvp(v.nvp);
+  return readTdr({ nanoseconds: usableReading(v.tdrNs), nvp: nvp !== null && Number.isNaN(nvp) ? parseReading(v.nvp.replace('%', '')) : nvp });
+}
+
 /** The length the form stands for: typed, or worked out from the TDR's round trip and the cable's NVP. */
 export function lengthFrom(v: Pick<CableValues, 'lengthMode' | 'lengthM' | 'tdrNs' | 'nvp'>): number | null {
   if (v.lengthMode === 'typed') return usableReading(v.lengthM);
-  const ns = usableReading(v.tdrNs);
-  const nvp = parseNvp(v.nvp);
-  if (ns === null || nvp === null || Number.isNaN(nvp) || nvp <= 0.01 || nvp > 1) return null;
-  return roundTo(tdrLengthM({ nanoseconds: ns, nvp }), 2);
+  const { lengthM } = tdrOf(v);
+  return lengthM === null ? null : roundTo(lengthM, 2);
 }
 
 interface Props {
@@ -284,7 +288,7 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
                 <TextField label="NVP" placeholder="0.69" {...register('nvp')} error={!!errors.nvp} helperText={errors.nvp?.message ?? 'From the cable’s datasheet.'} slotProps={{ htmlInput: { inputMode: 'decimal' } }} />
               </Stack>
               <Typography role="status" sx={{ fontWeight: 500 }}>
-                {lengthM !== null ? `Length ${lengthM} m (NVP × c × t ÷ 2)` : 'Enter the round trip time and the NVP.'}
+                {lengthM !== null ? `Length ${lengthM} m (NVP × c × t ÷ 2)` : (tdrOf(values).problem ?? 'Enter the round trip time and the NVP.')}
               </Typography>
             </Stack>
           )}

@@ -8,7 +8,8 @@ import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { assessCableRun, type Verdict } from '@wiretrail/core';
+import { assessCableRun, isVoided, unvoided, type Verdict, voidWords } from '@wiretrail/core';
+import { VOIDED_SX } from '@/components/records/voided-mark';
 import { Link as RouterLink } from 'react-router-dom';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import { paths } from '@/config/paths';
@@ -31,6 +32,7 @@ export function cableVerdict(c: CableRunRow): Verdict | null {
 export function CableList({ siteId, visitId, locked }: { siteId: string; visitId: string; locked: boolean }) {
   const data = useSiteCables(siteId);
   if (!data) return null;
+  const counted = unvoided(data.cables).length;
   return (
     <Stack spacing={1.5} component="section" aria-labelledby="cables-heading">
       <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'center' }}>
@@ -38,7 +40,7 @@ export function CableList({ siteId, visitId, locked }: { siteId: string; visitId
           Cables on this site
         </Typography>
         <Typography variant="body2" color="text.secondary">
-          {data.cables.length}
+          {counted}
         </Typography>
       </Stack>
       {!locked && (
@@ -54,13 +56,17 @@ export function CableList({ siteId, visitId, locked }: { siteId: string; visitId
         <Paper variant="outlined">
           <List aria-label="Cable runs" disablePadding>
             {data.cables.map((c) => {
-              const verdict = cableVerdict(c);
+              // A voided cable stays listed, struck through with its reason, and is judged no more.
+              const voided = isVoided(c);
+              const verdict = voided ? null : cableVerdict(c);
+              const where = `A: ${endWords(c, 'A', data.areaNames)} → B: ${endWords(c, 'B', data.areaNames)} · ${CABLE_STATUS_WORDS[c.status ?? 'unidentified']}`;
               return (
                 <ListItem key={c.id} disablePadding divider>
                   <ListItemButton component={RouterLink} to={paths.visitCable.href(visitId, c.id)} sx={{ gap: 1, alignItems: 'flex-start' }}>
                     <ListItemText
                       primary={`${c.label}${c.medium ? ` · ${MEDIUM_WORDS[c.medium] ?? c.medium}` : ''}`}
-                      secondary={`A: ${endWords(c, 'A', data.areaNames)} → B: ${endWords(c, 'B', data.areaNames)} · ${CABLE_STATUS_WORDS[c.status ?? 'unidentified']}`}
+                      secondary={voided ? `${voidWords(c)} · ${where}` : where}
+                      slotProps={voided ? { primary: { sx: VOIDED_SX } } : undefined}
                     />
                     {verdict && <VerdictChip verdict={verdict} />}
                   </ListItemButton>
@@ -71,7 +77,7 @@ export function CableList({ siteId, visitId, locked }: { siteId: string; visitId
         </Paper>
       )}
       {data.cables.length > 0 && <AidLine />}
-      {data.cables.length > 0 && (
+      {counted > 0 && (
         <Button component={RouterLink} to={paths.cableLabels.href(visitId)} startIcon={<QrCode2Outlined />} variant="outlined" size="large">
           Print labels with QR codes
         </Button>

@@ -1,5 +1,6 @@
 import Box from '@mui/material/Box';
 import Typography from '@mui/material/Typography';
+import { unvoided } from '@wiretrail/core';
 import QRCode from 'qrcode';
 import { useEffect, useState } from 'react';
 import { paths } from '@/config/paths';
@@ -19,11 +20,11 @@ function Qr({ text, label }: { text: string; label: string }) {
   return <Box role="img" aria-label={label} sx={{ width: 96, height: 96, flexShrink: 0, '& svg': { width: '100%', height: '100%' } }} dangerouslySetInnerHTML={svg ? { __html: svg } : undefined} />;
 }
 
-/** Two labels per cable, one for each end; each QR code opens the cable's record. */
+/** Two labels per cable, one for each end; each QR code opens the cable's record. A voided cable gets none. */
 export function LabelSheet({ cables, areaNames, origin }: { cables: CableRunRow[]; areaNames: Map<string, string>; origin: string }) {
   return (
     <Box component="ul" aria-label="Cable labels" sx={{ listStyle: 'none', p: 0, m: 0, display: 'grid', gridTemplateColumns: 'repeat(auto-fill, minmax(300px, 1fr))', gap: 1.5, '@media print': { gap: '4mm', gridTemplateColumns: 'repeat(2, 1fr)' } }}>
-      {cables.flatMap((c) =>
+      {unvoided(cables).flatMap((c) =>
         (['A', 'B'] as const).map((e) => (
           <Box
             component="li"

@@ -1,3 +1,4 @@
+import { isVoided } from '@wiretrail/core';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { type BoardRow, type CircuitRow, db, type PointChangeRow, type SiteRow, type TestResultRow } from '@/lib/db';
 
@@ -25,12 +26,13 @@ export async function getCircuitTests(visitId: string, siteId: string): Promise<
   boards.sort((a, b) => a.name.localeCompare(b.name, 'en-GB'));
   const known = new Set(boards.map((b) => b.id));
   const altered = new Map<string, PointChangeRow[]>();
-  for (const p of points) if (p.circuitId) altered.set(p.circuitId, [...(altered.get(p.circuitId) ?? []), p]);
+  for (const p of points) if (p.circuitId && !isVoided(p)) altered.set(p.circuitId, [...(altered.get(p.circuitId) ?? []), p]);
   return {
     site,
     boards: boards.map((board) => ({ board, circuits: circuits.filter((c) => c.boardId === board.id).sort(byNumber) })),
     loose: circuits.filter((c) => !known.has(c.boardId)).sort(byNumber),
-    results: new Map(results.filter((r) => r.circuitId).map((r) => [r.circuitId!, r])),
+    // A voided result was made by mistake: the circuit waits for its readings again.
+    results: new Map(results.filter((r) => r.circuitId && !isVoided(r)).map((r) => [r.circuitId!, r])),
     altered,
   };
 }

@@ -11,6 +11,8 @@ import { type TestResult, useJobTestResults } from '../api/get-test-results';
 import { overallResult } from '../overall-result';
 import { lineReadings, shortName } from './test-result-lines';
 import { VerdictChip } from '@/components/verdicts/verdict-chip';
+import { isVoided } from '@wiretrail/core';
+import { VoidedMark, voidedSx } from '@/components/records/voided-mark';
 
 /**
  * The lines of one group (ring, insulation, RCD…): each reading with its verdict, which opens to its limit and source.
@@ -60,11 +62,13 @@ export function JobTestResults({ jobId }: { jobId: string }) {
       valueGetter: (_v, row) => row.circuit?.label ?? 'No circuit given',
       renderCell: ({ row }) => (
         <Stack spacing={0.5} sx={{ alignItems: 'flex-start' }}>
-          <Typography sx={{ fontWeight: 500 }}>{row.circuit?.label ?? 'No circuit given'}</Typography>
+          <Typography sx={{ fontWeight: 500, ...voidedSx(row) }}>{row.circuit?.label ?? 'No circuit given'}</Typography>
+          <VoidedMark row={row} />
           <Typography variant="body2" color="text.secondary">
             {[row.testedAt ? new Date(row.testedAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' }) : null, row.instrument].filter(Boolean).join(' · ') || 'Time not recorded'}
           </Typography>
-          <VerdictChip what={`${row.circuit?.label ?? 'Circuit'}: all tests`} result={overallResult(row.assessment)} size="small" prefix="Overall" />
+          {/* A voided result judges nothing: it was made by mistake. */}
+          {!isVoided(row) && <VerdictChip what={`${row.circuit?.label ?? 'Circuit'}: all tests`} result={overallResult(row.assessment)} size="small" prefix="Overall" />}
         </Stack>
       ),
     },

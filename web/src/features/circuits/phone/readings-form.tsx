@@ -8,6 +8,7 @@ import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import {
   circuitReading,
+  mayBeOverRange,
   type CircuitTestAssessment,
   type CircuitTestKey,
   extendRing,
@@ -52,6 +53,9 @@ function defaults(result: TestResultRow | undefined): ReadingsValues {
   const typed = Object.fromEntries(NUMERIC_READINGS.map((f) => [f, readingText(result?.[f])])) as Record<(typeof NUMERIC_READINGS)[number], string>;
   return {
     ...typed,
+    // As the tester showed it.
+    irLiveLiveMOhm: result?.irLiveLiveOverRange && result.irLiveLiveMOhm != null ? `>${result.irLiveLiveMOhm}` : typed.irLiveLiveMOhm,
+    irLiveEarthMOhm: result?.irLiveEarthOverRange && result.irLiveEarthMOhm != null ? `>${result.irLiveEarthMOhm}` : typed.irLiveEarthMOhm,
     irTestVoltageV: result?.irTestVoltageV ? (String(result.irTestVoltageV) as ReadingsValues['irTestVoltageV']) : '500',
     polarity: result?.polarity ?? '',
     rcdButton: result?.rcdButton ?? '',
@@ -152,15 +156,19 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
   const radial = useMemo(() => radialExpectation(circuit), [circuit]);
 
   // The unit, and the label unless the group around it says the rest, are the catalogue's.
-  const reading = (name: (typeof NUMERIC_READINGS)[number], label = circuitReading(name).label) => (
-    <TextField
-      label={`${label} (${circuitReading(name).unit})`}
-      {...register(name)}
-      error={!!errors[name]}
-      helperText={errors[name]?.message ?? ' '}
-      slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' } }}
-    />
-  );
+  const reading = (name: (typeof NUMERIC_READINGS)[number], label = circuitReading(name).label) => {
+    // The tester's over-range display (">299") needs the ">" key, which a number pad lacks.
+    const over = mayBeOverRange(name);
+    return (
+      <TextField
+        label={`${label} (${circuitReading(name).unit})`}
+        {...register(name)}
+        error={!!errors[name]}
+        helperText={errors[name]?.message ?? (over ? 'Over range? Type it as shown, like >299' : ' ')}
+        slotProps={{ htmlInput: { inputMode: over ? 'text' : 'decimal', autoComplete: 'off' } }}
+      />
+    );
+  };
 
   async function save(v: ReadingsValues) {
     setError(null);
@@ -288,6 +296,11 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
               This circuit: {VERDICT_WORDS[assessment.verdict]}
               {assessment.failing.length > 0 ? ` — ${assessment.failing.length} failing` : ''}
             </Typography>
+            {assessment.notJudged.length > 0 && (
+              <Typography variant="body2" color="text.secondary">
+                Not judged: {assessment.notJudged.map((l) => `${l.label} (${l.result.note.replace(/^Not judged: /, '')})`).join('; ')}
+              </Typography>
+            )}
             {assessment.missing.length > 0 && (
               <Typography variant="body2" color="text.secondary">
                 Still to record: {assessment.missing.map((l) => l.label).join('; ')}.

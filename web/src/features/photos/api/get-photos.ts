@@ -22,6 +22,9 @@ export interface ServerPhoto {
   /** Given by servers that know it; otherwise the name comes from the team list. */
   createdByName?: string | null;
   visitPlannedStart: string | null;
+  /** Voided on site with its reason: kept for the office, struck through, never printed. */
+  voidedAt?: string | null;
+  voidReason?: string | null;
 }
 
 export interface PhotoPage {

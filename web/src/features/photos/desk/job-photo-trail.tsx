@@ -18,6 +18,7 @@ import { PhotoViewer, type ViewerPhoto } from './photo-viewer';
 import { ServerPhotoImage } from '../components/server-photo-image';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import { VoidedMark, voidedSx } from '@/components/records/voided-mark';
 
 /** Enough for a morning's work on one screen; the grid fetches thumbnails only as they scroll into view. */
 const PAGE_SIZE = 60;
@@ -227,9 +228,10 @@ export function JobPhotoTrail({ jobId, reference, areas, subjects, visits, perso
                       >
                         <ServerPhotoImage photoId={p.id} variant="thumb" alt={caption} lazy sx={{ width: '100%', aspectRatio: '4 / 3' }} />
                         <Box sx={{ p: 1 }}>
-                          <Typography variant="body2" sx={{ fontWeight: 500, display: '-webkit-box', WebkitLineClamp: 2, WebkitBoxOrient: 'vertical', overflow: 'hidden', minHeight: '2.86em' }}>
+                          <Typography variant="body2" sx={{ fontWeight: 500, display: '-webkit-box', WebkitLineClamp: 2, WebkitBoxOrient: 'vertical', overflow: 'hidden', minHeight: '2.86em', ...voidedSx(p) }}>
                             {caption}
                           </Typography>
+                          <VoidedMark row={p} />
                           <Typography variant="caption" color="text.secondary">
                             {trailTime(p.takenAt ?? p.createdAt)} · {who(p)}
                           </Typography>

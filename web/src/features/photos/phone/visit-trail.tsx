@@ -13,6 +13,9 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
 import { useState } from 'react';
+import { FINISHED_VISIT_STATUS, isVoided, type VoidableEntity } from '@wiretrail/core';
+import { VoidedMark, voidedSx } from '@/components/records/voided-mark';
+import { VoidRecord } from '@/components/records/void-record';
 import { AidLine } from '@/components/verdicts/verdict-chip';
 import { verdictWords } from '@/components/verdicts/verdict-words';
 import type { VisitRow } from '@/lib/db';
@@ -43,18 +46,29 @@ function IconTile({ children }: { children: ReactNode }) {
   );
 }
 
-function Row({ tile, title, lines, badge, wrap }: { tile: ReactNode; title: string; lines: string[]; badge?: ReactNode; wrap?: boolean }) {
+/** A record the technician may void from the trail: which it is, and how the dialog names it. */
+interface Voidable {
+  entity: VoidableEntity;
+  row: { readonly id: string; readonly voidedAt?: unknown; readonly voidReason?: unknown };
+  what: string;
+  locked: boolean;
+}
+
+function Row({ tile, title, lines, badge, wrap, voidable }: { tile: ReactNode; title: string; lines: string[]; badge?: ReactNode; wrap?: boolean; voidable?: Voidable }) {
+  const struck = voidable ? voidedSx(voidable.row) : undefined;
   return (
-    <ListItem divider sx={{ gap: 1.5, alignItems: 'flex-start', py: 1.25 }}>
+    <ListItem divider sx={{ gap: 1.5, alignItems: 'flex-start', py: 1.25 }} aria-label={voidable && isVoided(voidable.row) ? `${title} (void)` : undefined}>
       {tile}
       <Stack spacing={0.5} sx={{ minWidth: 0, flex: 1 }}>
-        <Typography sx={{ fontWeight: 500, overflowWrap: 'anywhere' }}>{title}</Typography>
+        <Typography sx={{ fontWeight: 500, overflowWrap: 'anywhere', ...struck }}>{title}</Typography>
         {lines.filter(Boolean).map((line) => (
-          <Typography key={line} variant="body2" color="text.secondary" sx={{ overflowWrap: 'anywhere', whiteSpace: wrap ? 'pre-wrap' : undefined }}>
+          <Typography key={line} variant="body2" color="text.secondary" sx={{ overflowWrap: 'anywhere', whiteSpace: wrap ? 'pre-wrap' : undefined, ...struck }}>
             {line}
           </Typography>
         ))}
+        {voidable && <VoidedMark row={voidable.row} />}
         {badge}
+        {voidable && <VoidRecord entity={voidable.entity} row={voidable.row} what={voidable.what} locked={voidable.locked} />}
       </Stack>
     </ListItem>
   );
@@ -66,9 +80,10 @@ interface EntryProps {
   subjectNames: Map<string, string>;
   states: PhotoStates | undefined;
   progress: UploadProgress;
+  locked: boolean;
 }
 
-function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryProps) {
+function TrailEntry({ item, areaNames, subjectNames, states, progress, locked }: EntryProps) {
   const when = trailTime(item.at);
   switch (item.kind) {
     case 'photo': {
@@ -82,11 +97,20 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
           title={caption}
           lines={[[when, where].filter(Boolean).join(' · '), tags]}
           badge={<Box><PhotoBadge look={photoBadge(p, states, progress)} /></Box>}
+          voidable={{ entity: 'photo', row: p, what: `the photo “${caption}”`, locked }}
         />
       );
     }
     case 'note':
-      return <Row tile={<IconTile><StickyNote2Outlined /></IconTile>} title={`Note · ${when}`} lines={[item.note.text.trim()]} wrap />;
+      return (
+        <Row
+          tile={<IconTile><StickyNote2Outlined /></IconTile>}
+          title={`Note · ${when}`}
+          lines={[item.note.text.trim()]}
+          wrap
+          voidable={{ entity: 'note', row: item.note, what: 'this note', locked }}
+        />
+      );
     case 'cableRun': {
       const c = item.cable;
       const verdict = verdictWords(c.verdict);
@@ -95,6 +119,7 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
           tile={<IconTile><CableOutlined /></IconTile>}
           title={`Cable ${c.label} · ${when}`}
           lines={[[c.medium, c.scheme, c.lengthM != null ? `${c.lengthM} m` : null, verdict ? `test: ${verdict}` : null].filter(Boolean).join(' · ')]}
+          voidable={{ entity: 'cableRun', row: c, what: `cable ${c.label}`, locked }}
         />
       );
     }
@@ -105,6 +130,7 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
           tile={<IconTile><SpeedOutlined /></IconTile>}
           title={`Test results${circuit ? `, ${circuit.toLowerCase()}` : ''} · ${when}`}
           lines={[readingsWords(item.result.verdicts)]}
+          voidable={{ entity: 'testResult', row: item.result, what: `the test results${circuit ? ` of ${circuit.toLowerCase()}` : ''}`, locked }}
         />
       );
     }
@@ -125,6 +151,7 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
           tile={<IconTile><PowerOutlined /></IconTile>}
           title={`${POINT_ACTION_WORDS[String(c.action)] ?? 'Point change'} · ${when}`}
           lines={[String(c.accessoryKind ?? ''), c.toDescription ?? c.fromDescription ?? '']}
+          voidable={{ entity: 'pointChange', row: c, what: `this point change${c.accessoryKind ? ` (${c.accessoryKind})` : ''}`, locked }}
         />
       );
     }
@@ -139,7 +166,9 @@ export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: 
   const progress = useUploadProgress();
   const [shown, setShown] = useState(PAGE);
   const items = trail?.items ?? [];
-  const photos = items.filter((i) => i.kind === 'photo').length;
+  // Voided photos stay in the trail, struck through, but are not counted.
+  const photos = items.filter((i) => i.kind === 'photo' && !isVoided(i.photo)).length;
+  const locked = visit.status === FINISHED_VISIT_STATUS;
   return (
     <Stack component="section" aria-labelledby="trail-heading" spacing={1.5}>
       <Stack direction="row" sx={{ alignItems: 'baseline', justifyContent: 'space-between' }}>
@@ -170,6 +199,7 @@ export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: 
                 subjectNames={trail!.subjectNames}
                 states={states}
                 progress={progress}
+                locked={locked}
               />
             ))}
           </List>

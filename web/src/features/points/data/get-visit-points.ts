@@ -1,3 +1,4 @@
+import { isVoided } from '@wiretrail/core';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { type AreaRow, type CircuitRow, db, type PointChangeRow, type SiteRow, type TestResultRow } from '@/lib/db';
 
@@ -25,7 +26,7 @@ const byNumber = (a: CircuitRow, b: CircuitRow) => a.number.localeCompare(b.numb
 export function latestRingReadings(results: TestResultRow[]): Map<string, RingBaseline> {
   const out = new Map<string, RingBaseline>();
   for (const r of results) {
-    if (!r.circuitId || r.r1Ohm == null || r.rnOhm == null || r.r2Ohm == null) continue;
+    if (!r.circuitId || isVoided(r) || r.r1Ohm == null || r.rnOhm == null || r.r2Ohm == null) continue;
     const at = r.testedAt ?? r.updatedAt ?? r.createdAt ?? '';
     const seen = out.get(r.circuitId);
     if (!seen || at > seen.at) out.set(r.circuitId, { r1: r.r1Ohm, rn: r.rnOhm, r2: r.r2Ohm, at, visitId: r.visitId });

@@ -12,6 +12,8 @@ import { paths } from '@/config/paths';
 import type { PointChangeRow } from '@/lib/db';
 import { useVisitPoints } from '../data/get-visit-points';
 import { ACTION_WORDS, CONNECTION_WORDS } from '../point-words';
+import { isVoided, voidWords } from '@wiretrail/core';
+import { VOIDED_SX } from '@/components/records/voided-mark';
 
 export function placeWords(p: PointChangeRow, side: 'from' | 'to', areaNames: Map<string, string>): string {
   const area = p[`${side}AreaId`];
@@ -50,7 +52,9 @@ export function PointList({ visitId, siteId, locked }: { visitId: string; siteId
                   <ListItemButton component={RouterLink} to={paths.visitPoint.href(visitId, p.id)}>
                     <ListItemText
                       primary={`${ACTION_WORDS[p.action] ?? p.action}: ${p.accessoryKind ?? 'point'}`}
+                      slotProps={isVoided(p) ? { primary: { sx: VOIDED_SX } } : undefined}
                       secondary={[
+                        isVoided(p) ? voidWords(p) : null,
                         from && to ? `${from} → ${to}` : from || to,
                         [p.circuitId ? circuitNames.get(p.circuitId) : null, p.connection ? CONNECTION_WORDS[p.connection] : null, p.fuseRatingA ? `${p.fuseRatingA}\u00a0A fuse` : null]
                           .filter(Boolean)

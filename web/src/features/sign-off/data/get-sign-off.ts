@@ -4,6 +4,7 @@ import {
   judgeCircuitWork,
   type MinorWorksFindingKind,
   type MinorWorksJudgement,
+  unvoided,
 } from '@wiretrail/core';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { type BoardRow, type CableRunRow, type CircuitRow, db, type PointChangeRow, type SiteRow, type TestResultRow, type VisitRow } from '@/lib/db';
@@ -32,9 +33,9 @@ export interface SignOffSummary {
 
 /** Everything recorded on the visit, judged again, with every fail and every missing reading in words. */
 export async function getSignOff(visit: VisitRow, signerName = ''): Promise<SignOffSummary> {
-  const [photos, notes, points, results, cables, circuits, site, siteBoards, signed] = await Promise.all([
-    db.photo.where('visitId').equals(visit.id).count(),
-    db.note.where('visitId').equals(visit.id).count(),
+  const [allPhotos, allNotes, allPoints, results, allCables, circuits, site, siteBoards, signed] = await Promise.all([
+    db.photo.where('visitId').equals(visit.id).toArray(),
+    db.note.where('visitId').equals(visit.id).toArray(),
     db.pointChange.where('visitId').equals(visit.id).toArray(),
     db.testResult.where('visitId').equals(visit.id).toArray(),
     db.cableRun.where('siteId').equals(visit.siteId).toArray(),
@@ -43,6 +44,8 @@ export async function getSignOff(visit: VisitRow, signerName = ''): Promise<Sign
     db.board.where('siteId').equals(visit.siteId).toArray(),
     db.visit.filter((v) => !!v.signedByPosition && v.signedByName === signerName).toArray(),
   ]);
+  // What was voided on site is not counted, judged or asked about; the judgment leaves out voided results itself.
+  const [photos, notes, points, cables] = [unvoided(allPhotos).length, unvoided(allNotes).length, unvoided(allPoints), unvoided(allCables)];
   const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing, boards: siteBoards });
   // A visit of data cabling alone has no circuit to certify: whether the job has one is the office's question.
   const problems: Problem[] = certificate.findings.flatMap((f) =>

@@ -9,6 +9,7 @@ import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
+import { VOIDED_SX } from '@/components/records/voided-mark';
 import type { VisitRecord } from '../api/get-visit-record';
 import { visitStatusWords, whenSigned } from '../visit-format';
 import type { TimelineEntry } from './visit-timeline';
@@ -156,14 +157,19 @@ export function VisitTimeline({ entries }: { entries: TimelineEntry[] }) {
       ) : (
         <Box component="ol" aria-label="What was recorded, in time order" sx={{ listStyle: 'none', p: 0, m: 0 }}>
           {entries.map((e) => (
-            <Box component="li" key={e.id} aria-label={e.title} sx={{ display: 'flex', gap: 2, py: 1.25, borderTop: 1, borderColor: 'divider', '&:first-of-type': { borderTop: 0 } }}>
+            <Box component="li" key={e.id} aria-label={e.voided ? `${e.title} (void)` : e.title} sx={{ display: 'flex', gap: 2, py: 1.25, borderTop: 1, borderColor: 'divider', '&:first-of-type': { borderTop: 0 } }}>
               <Typography variant="body2" color="text.secondary" sx={{ width: 48, flexShrink: 0, fontVariantNumeric: 'tabular-nums', pt: 0.25 }}>
                 {e.at ? time.format(new Date(e.at)) : '—'}
               </Typography>
               {e.media}
               <Box sx={{ minWidth: 0 }}>
-                <Typography sx={{ fontWeight: 500 }}>{e.title}</Typography>
-                {e.detail && <Typography sx={{ whiteSpace: 'pre-wrap', overflowWrap: 'anywhere' }}>{e.detail}</Typography>}
+                <Typography sx={{ fontWeight: 500, ...(e.voided ? VOIDED_SX : {}) }}>{e.title}</Typography>
+                {e.detail && <Typography sx={{ whiteSpace: 'pre-wrap', overflowWrap: 'anywhere', ...(e.voided ? VOIDED_SX : {}) }}>{e.detail}</Typography>}
+                {e.voided && (
+                  <Typography color="error" sx={{ fontWeight: 500, overflowWrap: 'anywhere' }}>
+                    {e.voided}
+                  </Typography>
+                )}
                 {e.by && (
                   <Typography variant="body2" color="text.secondary">
                     {e.by}

@@ -1,3 +1,4 @@
+import { isVoided, readingWords, voidWords } from '@wiretrail/core';
 import type { ReactNode } from 'react';
 import type { VisitRecord } from '../api/get-visit-record';
 
@@ -9,7 +10,12 @@ export interface TimelineEntry {
   detail?: string | null;
   by?: string | null;
   media?: ReactNode;
+  /** "Void: typed the wrong label" for a record voided on site: shown struck through, kept for the office. */
+  voided?: string | null;
 }
+
+/** The void words of a record voided on site, or null for one that counts. */
+export const voidedOf = (row: { readonly voidedAt?: unknown; readonly voidReason?: unknown }): string | null => (isVoided(row) ? voidWords(row) : null);
 
 const reading = (v: number | null | undefined, unit: string, label: string) => (v == null ? null : `${label} ${v} ${unit}`);
 
@@ -19,7 +25,7 @@ export function readingsLine(r: VisitRecord['testResults'][number]): string {
     [
       reading(r.r1r2Ohm, 'Ω', 'R1+R2'),
       reading(r.r2LeadOhm, 'Ω', 'R2'),
-      reading(r.irLiveEarthMOhm, 'MΩ', 'IR L–E'),
+      r.irLiveEarthMOhm == null ? null : `IR L–E ${readingWords(r, 'irLiveEarthMOhm')}`,
       r.polarity ? `polarity ${r.polarity}` : null,
       reading(r.zsOhm, 'Ω', 'Zs'),
       reading(r.rcdTripMs, 'ms', 'RCD'),
@@ -44,8 +50,8 @@ export function visitTimeline(record: VisitRecord, more: TimelineEntry[] = []): 
   const entries: TimelineEntry[] = [
     ...moments,
     // When each was made on the phone, not when it reached the server.
-    ...record.notes.map((n) => ({ id: n.id, at: n.recordedAt ?? n.createdAt ?? '', title: 'Note', detail: n.text, by: n.createdByName })),
-    ...record.testResults.map((r) => ({ id: r.id, at: r.testedAt ?? r.recordedAt ?? r.createdAt ?? '', title: `Readings: circuit ${r.circuitLabel ?? 'not named'}`, detail: readingsLine(r), by: r.createdByName })),
+    ...record.notes.map((n) => ({ id: n.id, at: n.recordedAt ?? n.createdAt ?? '', title: 'Note', detail: n.text, by: n.createdByName, voided: voidedOf(n) })),
+    ...record.testResults.map((r) => ({ id: r.id, at: r.testedAt ?? r.recordedAt ?? r.createdAt ?? '', title: `Readings: circuit ${r.circuitLabel ?? 'not named'}`, detail: readingsLine(r), by: r.createdByName, voided: voidedOf(r) })),
     ...more,
   ];
   return entries.sort((a, b) => a.at.localeCompare(b.at) || a.id.localeCompare(b.id));
