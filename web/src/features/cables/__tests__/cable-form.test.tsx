@@ -30,7 +30,7 @@ describe('recording a cable', () => {
     expect(within(f).getByText('The length cannot be negative.')).toBeTruthy();
     type(f, 'Length (m)', 'twelve');
     fireEvent.click(within(f).getByRole('button', { name: 'Save new cable' }));
-    expect(await within(f).findByText('The length must be a number, like 0.45.')).toBeTruthy();
+    expect(await within(f).findByText('The length must be a number, like 25 m.')).toBeTruthy();
     expect(await db.cableRun.count()).toBe(0);
   });
 
@@ -42,9 +42,32 @@ describe('recording a cable', () => {
     type(f, 'Round trip (ns)', '300');
     fireEvent.click(within(f).getByRole('button', { name: 'Save new cable' }));
     expect(await within(f).findByText('Enter both the TDR time and the NVP to work out the length.')).toBeTruthy();
-    type(f, 'NVP', '1.5');
+    // NVP is a fraction of c: above 0 and at most 1 (no cable carries a signal faster than light).
+    for (const nvp of ['1.5', '0', '-0.7']) {
+      type(f, 'NVP', nvp);
+      fireEvent.click(within(f).getByRole('button', { name: 'Save new cable' }));
+      expect(await within(f).findByText(`An NVP of ${nvp} is wrong: it is the cable's speed as a fraction of the speed of light, above 0 and at most 1, like 0.69 (from the cable's datasheet).`)).toBeTruthy();
+    }
+    expect(await db.cableRun.count()).toBe(0);
+  });
+
+  it('asks for a TDR figure to be checked when the length it gives is no cable in a building', async () => {
+    show(paths.visitCable.href(ids.visit, 'new'));
+    const f = await form();
+    type(f, 'Label', 'RC-08');
+    fireEvent.click(within(f).getByRole('button', { name: 'From a TDR reading' }));
+    // 0.69 × c × 90 000 ns / 2 = 9,309 m (D): above the 1,000 m plausibility bound (common trade practice, M).
+    type(f, 'Round trip (ns)', '90000');
+    type(f, 'NVP', '0.69');
+    const problem = 'A round trip of 90,000 ns at NVP 0.69 gives 9 km, longer than any cable in a building: check the figure.';
+    await waitFor(() => expect(within(f).getAllByText(problem).length).toBeGreaterThan(0));
     fireEvent.click(within(f).getByRole('button', { name: 'Save new cable' }));
-    expect(await within(f).findByText('The NVP must be a fraction of the speed of light, like 0.69 (or 69 %).')).toBeTruthy();
+    await waitFor(() => expect(within(f).getAllByText(problem).length).toBe(2));
+    // The registry's own bound on the round trip (100,000 ns) says so first.
+    type(f, 'Round trip (ns)', '9999999');
+    fireEvent.click(within(f).getByRole('button', { name: 'Save new cable' }));
+    expect(await within(f).findByText('The TDR time above 100000 ns is not a real reading; check the figure.')).toBeTruthy();
+    expect(await db.cableRun.count()).toBe(0);
   });
 
   it('works out a TDR length: L = NVP × c × t / 2 (TIA-568 field testing; c = 299 792 458 m/s, SI)', () => {

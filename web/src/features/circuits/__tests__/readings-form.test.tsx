@@ -31,7 +31,7 @@ describe('readings for a circuit', { timeout: 30_000 }, () => {
     type(f, 'Measured Zs (Ω)', '-1');
     expect(await within(f).findByText('Zs cannot be negative.', undefined, BUSY)).toBeTruthy();
     type(f, 'Measured Zs (Ω)', 'high');
-    expect(await within(f).findByText('Zs must be a number, like 0.45.', undefined, BUSY)).toBeTruthy();
+    expect(await within(f).findByText('Zs must be a number, like 0.45 Ω.', undefined, BUSY)).toBeTruthy();
     type(f, 'r1 (Ω)', '300');
     expect(await within(f).findByText('r1 above 100 Ω is not a real reading; check the figure.', undefined, BUSY)).toBeTruthy();
     fireEvent.click(within(f).getByRole('button', { name: 'Save readings' }));
@@ -80,6 +80,38 @@ describe('readings for a circuit', { timeout: 30_000 }, () => {
     type(f, 'Measured Zs (Ω)', '0.5');
     const summary = within(f).getByRole('status', { name: 'Circuit summary' });
     await waitFor(() => expect(summary.textContent).toContain('Still to record: Ring: r1 against rn; Ring: r2 against r1; R1+R2'), BUSY);
+    expect(summary.textContent).toContain('This circuit: Check');
+  });
+
+  it('takes an insulation tester’s over-range display, passes it against the minimum and keeps it as shown', async () => {
+    show(screenPath);
+    const f = await form();
+    type(f, 'Live to live (MΩ)', '>299');
+    type(f, 'Live to earth (MΩ)', '≥999');
+    // At least 299 MΩ against 1.0 MΩ at 500 V DC (BS 7671:2018+A2:2022 Table 64).
+    expect(await within(f).findByRole('button', { name: /^Insulation resistance, live to live: Pass · limit 1 MΩ/ }, BUSY)).toBeTruthy();
+    expect(within(f).getByRole('button', { name: /^Insulation resistance, live to earth: Pass · limit 1 MΩ/ })).toBeTruthy();
+    type(f, 'Live to earth (MΩ)', 'lots');
+    expect(await within(f).findByText("Live to earth must be a number, like 200 MΩ, or the tester's over-range display, like >299.", undefined, BUSY)).toBeTruthy();
+    type(f, 'Live to earth (MΩ)', '>999');
+    type(f, 'Time at 30 mA (ms)', 'quick');
+    // The example fits the reading: milliseconds, not ohms.
+    expect(await within(f).findByText('The RCD time must be a number, like 18 ms.', undefined, BUSY)).toBeTruthy();
+    type(f, 'Time at 30 mA (ms)', '24');
+    fireEvent.click(within(f).getByRole('button', { name: 'Save readings' }));
+    await waitFor(async () => expect(await db.testResult.count()).toBe(1), BUSY);
+    const [saved] = await db.testResult.toArray();
+    expect(saved).toMatchObject({ irLiveLiveMOhm: 299, irLiveLiveOverRange: true, irLiveEarthMOhm: 999, irLiveEarthOverRange: true });
+  });
+
+  it('leaves a figure no instrument shows unjudged in the circuit summary instead of failing the circuit', async () => {
+    show(screenPath);
+    const f = await form();
+    // Zs is stored up to 2,000 Ω (the field registry); 25,000 Ω is a slip of the finger, not a fail against 1.10 Ω.
+    type(f, 'Measured Zs (Ω)', '25000');
+    const summary = within(f).getByRole('status', { name: 'Circuit summary' });
+    await waitFor(() => expect(summary.textContent).toContain('Not judged: Earth fault loop impedance Zs (25000 Ω is not a real Zs: check the figure.)'), BUSY);
+    expect(summary.textContent).not.toContain('failing');
     expect(summary.textContent).toContain('This circuit: Check');
   });
 });

@@ -96,7 +96,7 @@ describe('Visit', () => {
     fireEvent.change(screen.getByLabelText('Kind'), { target: { value: 'radial' } });
     fireEvent.change(screen.getByLabelText('Rating (A)'), { target: { value: 'sixteen' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add circuit' }));
-    expect(await screen.findByText('The device rating must be a number, like 0.45.')).toBeTruthy();
+    expect(await screen.findByText('The device rating must be a number, like 32 A.')).toBeTruthy();
     // Details that cannot be so, each named beside its field: no type B breaker is made in 17 A (BS 7671:2018+A2:2022
     // Table 41.3 lists 6 A to 125 A), there is no RCD of type Q, and a cpc is not larger than its live conductors.
     fireEvent.change(screen.getByLabelText('Protective device'), { target: { value: 'B' } });
