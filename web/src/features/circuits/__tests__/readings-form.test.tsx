@@ -92,7 +92,7 @@ describe('readings for a circuit', { timeout: 30_000 }, () => {
     expect(await within(f).findByRole('button', { name: /^Insulation resistance, live to live: Pass · limit 1 MΩ/ }, BUSY)).toBeTruthy();
     expect(within(f).getByRole('button', { name: /^Insulation resistance, live to earth: Pass · limit 1 MΩ/ })).toBeTruthy();
     type(f, 'Live to earth (MΩ)', 'lots');
-    expect(await within(f).findByText("Live to earth must be a number, like 200 MΩ, or the tester's over-range display, like >299.", undefined, BUSY)).toBeTruthy();
+    expect(await within(f).findByText("Insulation live to earth must be a number, like 200 MΩ, or the tester's over-range display, like >299.", undefined, BUSY)).toBeTruthy();
     type(f, 'Live to earth (MΩ)', '>999');
     type(f, 'Time at 30 mA (ms)', 'quick');
     // The example fits the reading: milliseconds, not ohms.
