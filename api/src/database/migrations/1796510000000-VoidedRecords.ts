@@ -6,8 +6,8 @@ const VOIDABLE = ['photo', 'note', 'cable_run', 'point_change', 'test_result'];
  * Records made by mistake are voided with a reason, not deleted; an insulation reading may be over the tester's
  * range. Written by hand as ADD COLUMN: a rebuild of these tables would drop columns added beside these.
  */
-export class VoidedRecords1796500000000 implements MigrationInterface {
-    name = 'VoidedRecords1796500000000'
+export class VoidedRecords1796510000000 implements MigrationInterface {
+    name = 'VoidedRecords1796510000000'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         for (const table of VOIDABLE) {

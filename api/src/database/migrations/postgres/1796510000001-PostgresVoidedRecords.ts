@@ -3,8 +3,8 @@ import type { MigrationInterface, QueryRunner } from "typeorm";
 const VOIDABLE = ['photo', 'note', 'cable_run', 'point_change', 'test_result'];
 
 /** Records voided with a reason, and insulation over the tester's range (see the SQLite migration of the same name). */
-export class PostgresVoidedRecords1796500000001 implements MigrationInterface {
-    name = 'PostgresVoidedRecords1796500000001'
+export class PostgresVoidedRecords1796510000001 implements MigrationInterface {
+    name = 'PostgresVoidedRecords1796510000001'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         for (const table of VOIDABLE) {
