@@ -46,6 +46,7 @@ export * from './contracts/records.js';
 export * from './contracts/jobs.js';
 export * from './jobs/job-progress.js';
 export * from './contracts/visit-record.js';
+export * from './contracts/notifiable-work.js';
 export * from './certification/certificate-defaults.js';
 export * from './certification/minor-works-declaration.js';
 export * from './text/typed-text.js';
