@@ -53,3 +53,5 @@ export * from './text/typed-text.js';
 export * from './text/contact.js';
 export * from './certification/circuit-details-check.js';
 export * from './certification/notifiable-work.js';
+export * from './cabling/fibre-loss.js';
+export * from './cabling/link-performance.js';
