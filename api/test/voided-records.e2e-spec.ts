@@ -51,7 +51,8 @@ describe('records voided on site', () => {
     ]);
     expect(recorded.map((r) => r.status)).toEqual(recorded.map(() => 'applied'));
     await phone.pullAll(t, tech1);
-  });
+    // Booting the app with its migrations and demo data takes a while on a busy machine.
+  }, 120_000);
   afterAll(() => t.close());
 
   it('voids a record with its reason while the visit is open, and refuses a void without one', async () => {

@@ -109,8 +109,11 @@ test('a cable voided offline is left off the labels and the report, and the desk
     return pdfToText(await (await request.get(`/api/documents/${id}/pdf`, { headers })).body());
   };
   const report = await pdfOf('cabling-report');
-  expect(report).toContain(good);
-  expect(report).not.toContain(typo);
+  // A narrow column may break a label across lines: compare without the spaces.
+  const packed = report.replace(/\s+/g, '');
+  expect(report).toContain('1 cable recorded or tested on this job’s visits');
+  expect(packed).toContain(good);
+  expect(packed).not.toContain(typo);
   const certificate = await pdfOf('minor-works');
   expect(certificate).toContain('>299 MΩ');
 
