@@ -9,6 +9,7 @@ import { paymentsConfig } from '../config/payments.config.js';
 import { Invoice } from '../invoices/entities/invoice.entity.js';
 import { accountsOf, todayFor } from '../invoices/invoice-accounts.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
+import { CardRefunds, type CardRefundRequest, type CardRefundResult } from '../invoices/card-refunds.js';
 import { OwedChanges } from '../invoices/owed-changes.js';
 import { PaymentsService } from '../invoices/payments.service.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
@@ -49,9 +50,12 @@ export class CardPaymentsService implements OnModuleInit {
     @Inject(paymentsConfig.KEY) private readonly config: ConfigType<typeof paymentsConfig>,
     @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
     private readonly owedChanges: OwedChanges,
+    private readonly cardRefunds: CardRefunds,
   ) {}
 
   onModuleInit(): void {
+    // The office gives money back to a card only through the provider's SDK.
+    if (this.provider) this.cardRefunds.offer((request) => this.refundToCard(this.provider!, request));
     // A checkout offers a figure; once what is owed changes, that figure is wrong and the offer is withdrawn.
     this.owedChanges.listen((invoiceId) => this.inTurnFor(invoiceId, () => this.closeOpenCheckouts(invoiceId)));
   }
@@ -178,6 +182,20 @@ export class CardPaymentsService implements OnModuleInit {
     if (CHECKOUT_EVENTS.includes(event.type)) await this.refundDue((event.data.object as Stripe.Checkout.Session).id);
     if ('paidInvoiceId' in taken && taken.paidInvoiceId) await this.owedChanges.changed(taken.paidInvoiceId);
     return 'duplicate' in taken ? { received: true, duplicate: true } : { received: true };
+  }
+
+  /** A refund the office asked for, through the SDK; the provider's refusal comes back in words, not as an error. */
+  private async refundToCard(provider: Stripe, r: CardRefundRequest): Promise<CardRefundResult> {
+    try {
+      const refund = await provider.refunds.create(
+        { payment_intent: r.paymentReference, amount: r.amountMinor, reason: 'requested_by_customer', metadata: r.metadata },
+        { idempotencyKey: r.idempotencyKey },
+      );
+      return { made: true, reference: refund.id };
+    } catch (err) {
+      if (!(err instanceof Stripe.errors.StripeError)) throw err;
+      return { made: false, reason: reasonOf(err) };
+    }
   }
 
   /** Gives back to the card what a payment brought above what was owed, through the provider's SDK. */
