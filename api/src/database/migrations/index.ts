@@ -15,6 +15,7 @@ import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefu
 import { RecordedAt1796490000000 } from './1796490000000-RecordedAt.js';
 import { BillOnce1796490500000 } from './1796490500000-BillOnce.js';
 import { Refunds1796500000000 } from './1796500000000-Refunds.js';
+import { MailCopies1796500100000 } from './1796500100000-MailCopies.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -35,4 +36,5 @@ export const MIGRATIONS = [
   RecordedAt1796490000000,
   BillOnce1796490500000,
   Refunds1796500000000,
+  MailCopies1796500100000,
 ];

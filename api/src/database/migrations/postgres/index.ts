@@ -9,6 +9,7 @@ import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-Postgre
 import { PostgresRecordedAt1796490000001 } from './1796490000001-PostgresRecordedAt.js';
 import { PostgresBillOnce1796490500001 } from './1796490500001-PostgresBillOnce.js';
 import { PostgresRefunds1796500000001 } from './1796500000001-PostgresRefunds.js';
+import { PostgresMailCopies1796500100001 } from './1796500100001-PostgresMailCopies.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -23,4 +24,5 @@ export const POSTGRES_MIGRATIONS = [
   PostgresRecordedAt1796490000001,
   PostgresBillOnce1796490500001,
   PostgresRefunds1796500000001,
+  PostgresMailCopies1796500100001,
 ];
