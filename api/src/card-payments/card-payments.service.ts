@@ -60,10 +60,12 @@ export class CardPaymentsService implements OnModuleInit {
     this.owedChanges.listen((invoiceId) => this.inTurnFor(invoiceId, () => this.closeOpenCheckouts(invoiceId)));
   }
 
-  async checkout(token: string, invoiceId: string): Promise<{ url: string; amountMinor: number }> {
+  /** `origin` is the address the customer's request came to: where they return when PUBLIC_URL is not set. */
+  async checkout(token: string, invoiceId: string, origin: string | null = null): Promise<{ url: string; amountMinor: number }> {
     const link = await this.shareLinks.open(token);
     if (!this.provider) throw new ServiceUnavailableException(NOT_SET_UP);
-    return this.inTurnFor(invoiceId, () => this.startCheckout(this.provider!, token, link.organisationId, link.jobId, link.id, invoiceId));
+    const base = this.mail.publicUrlGiven || !origin ? this.mail.publicUrl : origin;
+    return this.inTurnFor(invoiceId, () => this.startCheckout(this.provider!, token, link.organisationId, link.jobId, link.id, invoiceId, base));
   }
 
   /** One thing at a time per invoice: opening a checkout, or withdrawing them after what is owed changed. */
@@ -102,7 +104,7 @@ export class CardPaymentsService implements OnModuleInit {
     }
   }
 
-  private async startCheckout(provider: Stripe, token: string, organisationId: string, jobId: string, shareLinkId: string, invoiceId: string) {
+  private async startCheckout(provider: Stripe, token: string, organisationId: string, jobId: string, shareLinkId: string, invoiceId: string, base: string) {
     const { invoice, owed, open, organisation, email } = await this.queue.read(async (em) => {
       const invoice = await em.findOneBy(Invoice, { id: invoiceId, organisationId, jobId, kind: 'invoice', status: 'issued' });
       if (!invoice) throw new NotFoundException('No such invoice on this job.');
@@ -128,7 +130,7 @@ export class CardPaymentsService implements OnModuleInit {
         if (session.status === 'open') await provider.checkout.sessions.expire(c.sessionId);
         await this.queue.run((em) => em.update(CardCheckout, { id: c.id }, { state: 'expired' }));
       }
-      const back = `${this.mail.publicUrl}/shared/${token}`;
+      const back = `${base}/shared/${token}`;
       const session = await provider.checkout.sessions.create({
         mode: 'payment',
         line_items: [

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsEmail, IsEmpty, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, ArrayUnique, IsArray, IsEmail, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateBy } from 'class-validator';
 import { SHARE_LINK_DAYS } from '../../share-links/dto/create-share-link.dto.js';
 
 export class SendDocumentDto {
@@ -27,8 +27,16 @@ export class SendDocumentDto {
   @IsOptional()
   @IsEmail({ require_tld: false }, { message: 'cc must be an e-mail address' })
   @MaxLength(254, { message: 'cc must be at most 254 characters' })
-  @ValidateIf((o: SendDocumentDto) => typeof o.cc === 'string' && typeof o.to === 'string' && o.cc.toLowerCase() === o.to.trim().toLowerCase())
-  @IsEmpty({ message: 'cc must be another address than to' })
+  @ValidateBy({
+    name: 'notTheSameAsTo',
+    validator: {
+      validate: (cc: unknown, args) => {
+        const to = (args?.object as { to?: unknown }).to;
+        return typeof cc !== 'string' || typeof to !== 'string' || cc.toLowerCase() !== to.trim().toLowerCase();
+      },
+      defaultMessage: () => 'cc must be another address than to',
+    },
+  })
   cc?: string;
 
   @ApiPropertyOptional({ example: 'Thank you for having us. Here is the paperwork for the new circuit.', description: 'the office’s own words, put before the letter’s' })
