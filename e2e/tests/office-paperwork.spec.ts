@@ -81,7 +81,7 @@ test('the office reviews a finished job, settles a conflict, issues the certific
 
   // E-mail it to the customer: the mail carries the PDF and a link to the job's record.
   const send = await job.openEmail(number);
-  await expect(send.getByLabel('To')).toHaveValue('hannah.greaves@example.com');
+  await expect(send.getByLabel('To', { exact: true })).toHaveValue('hannah.greaves@example.com');
   await send.getByRole('button', { name: 'Send' }).click();
   await expect(issued.getByRole('row', { name: new RegExp(number) })).toContainText('Sent', { timeout: 30_000 });
   await shot('job-documents-sent');
