@@ -8,8 +8,9 @@ import { PostgresCertificateContent1796471619935 } from './1796471619935-Postgre
 import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-PostgresAttemptsAndRefunds.js';
 import { PostgresRecordedAt1796490000001 } from './1796490000001-PostgresRecordedAt.js';
 import { PostgresBillOnce1796490500001 } from './1796490500001-PostgresBillOnce.js';
-import { PostgresRefunds1796500000001 } from './1796500000001-PostgresRefunds.js';
-import { PostgresMailCopies1796500100001 } from './1796500100001-PostgresMailCopies.js';
+import { PostgresNotifiableWork1796500000001 } from './1796500000001-PostgresNotifiableWork.js';
+import { PostgresRefunds1796500200001 } from './1796500200001-PostgresRefunds.js';
+import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCopies.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -23,6 +24,7 @@ export const POSTGRES_MIGRATIONS = [
   PostgresAttemptsAndRefunds1796481200001,
   PostgresRecordedAt1796490000001,
   PostgresBillOnce1796490500001,
-  PostgresRefunds1796500000001,
-  PostgresMailCopies1796500100001,
+  PostgresNotifiableWork1796500000001,
+  PostgresRefunds1796500200001,
+  PostgresMailCopies1796500300001,
 ];

@@ -1,14 +1,11 @@
 import type { MigrationInterface, QueryRunner } from "typeorm";
 
-/**
- * A copy-to address on outgoing mail, and the several documents one e-mail can carry. Written by hand as ADD COLUMN:
- * a rebuild of "outgoing_mail" would drop columns added beside these.
- */
-export class MailCopies1796500100000 implements MigrationInterface {
-    name = 'MailCopies1796500100000'
+/** A copy-to address on outgoing mail, and the several documents one e-mail can carry. */
+export class PostgresMailCopies1796500300001 implements MigrationInterface {
+    name = 'PostgresMailCopies1796500300001'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
-        await queryRunner.query(`ALTER TABLE "outgoing_mail" ADD COLUMN "ccAddress" varchar(254)`);
+        await queryRunner.query(`ALTER TABLE "outgoing_mail" ADD COLUMN "ccAddress" character varying(254)`);
         await queryRunner.query(`ALTER TABLE "outgoing_mail" ADD COLUMN "subjectIds" text`);
     }
 
