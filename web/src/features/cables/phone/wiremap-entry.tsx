@@ -125,15 +125,17 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
                       textTransform: 'none',
                       textAlign: 'left',
                       lineHeight: 1.25,
-                      overflowWrap: 'anywhere',
                       px: 1,
                       '& .MuiButton-startIcon': { ml: 0, mr: 0.75 },
                       // A locked wiremap still shows which pins are wrong, in either theme.
                       ...(differs ? { borderWidth: 2, fontWeight: 700, '&.Mui-disabled, [data-wt-scheme="dark"] &.Mui-disabled': { borderWidth: 2, borderColor: 'error.main', color: 'error.main' } } : {}),
                     }}
                   >
-                    {value ? <ColourName colour={seen} /> : 'Tap to record'}
-                    {differs ? ' ✕' : ''}
+                    {/* One flex item, so the words wrap as words (after the stripe's slash), not letter by letter. */}
+                    <Box component="span" sx={{ minWidth: 0 }}>
+                      {value ? <ColourName colour={seen} /> : 'Tap to record'}
+                      {differs ? ' ✕' : ''}
+                    </Box>
                   </Button>
                 </td>
               </tr>

@@ -154,7 +154,9 @@ export function WallDiagram({
       onChange={(e) => typeFigure(field, e.target.value)}
       error={problems[field] !== null}
       helperText={problems[field] ?? FIGURE_HELP[field]}
-      slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' } }}
+      // Labels always above the figure: an empty thickness would otherwise cut its label short on a narrow phone.
+      placeholder={field === 'thicknessMm' ? 'Not measured' : undefined}
+      slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' }, inputLabel: { shrink: true } }}
     />
   );
   const sy = (y: number) => H - y;
