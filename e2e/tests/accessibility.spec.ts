@@ -48,8 +48,14 @@ for (const [size, viewport] of [
       test.setTimeout(180_000);
       const title = `Accessible screens ${size} (${Date.now().toString(36)})`;
       await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 9, endHour: 12 });
+      const tomorrow = `Accessible arrival ${size} (${Date.now().toString(36)})`;
+      await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title: tomorrow, startHour: 9, endHour: 12, dayOffset: 1 });
       await visitPage.openToday();
       await expectNoAxeViolations(page, testInfo, 'today');
+      await visitPage.visitCard(tomorrow).getByRole('button', { name: 'I’m on site' }).click();
+      await expect(page.getByRole('dialog', { name: 'On site for a visit booked tomorrow?' })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'arrival at a visit booked for another day');
+      await page.getByRole('dialog').getByRole('button', { name: 'Not yet' }).click();
 
       await visitPage.openFromToday(title);
       await expectNoAxeViolations(page, testInfo, 'visit trail');
@@ -64,6 +70,9 @@ for (const [size, viewport] of [
       await expect(pointForm.getByRole('status', { name: 'Checks before the work' }).getByRole('listitem', { name: 'New cable' })).toContainText('Iz 13.5 A');
       // Bad input on purpose: the error it shows must be as readable as the rest
       await pointForm.getByLabel('r2 before (Ω)').fill('-1');
+      await pointForm.getByLabel('Check a new concealed cable route').check();
+      await pointForm.getByLabel('Wall width (mm)').fill('-10');
+      await expect(pointForm.getByText('Wall width cannot be negative.')).toBeVisible();
       await expectNoAxeViolations(page, testInfo, 'point form with checks');
       await page.goBack();
 
