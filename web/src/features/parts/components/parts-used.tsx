@@ -12,6 +12,8 @@ import Typography from '@mui/material/Typography';
 import { useMemo, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { parseReading, readingProblem, usableReading } from '@/lib/readings';
 import { createRecord, deleteRecord } from '@/lib/sync/local-write';
 import { useVisitParts } from '../data/get-parts';
@@ -49,6 +51,7 @@ export function partSchemaFor(unitOf: (priceItemId: string) => string | undefine
 }
 
 type PartValues = z.infer<ReturnType<typeof partSchemaFor>>;
+const EMPTY_PART: PartValues = { priceItemId: '', description: '', quantity: '1', unit: '' };
 
 const quantityWords = (q: number, unit?: string | null) => `${Number.isInteger(q) ? q : q.toFixed(3).replace(/0+$/, '')}${unit && unit !== 'each' ? `\u00a0${unit}` : ''}`;
 
@@ -59,7 +62,9 @@ export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId
   const items = useRef(parts?.items);
   items.current = parts?.items;
   const resolver = useMemo(() => zodResolver(partSchemaFor((id) => items.current?.get(id)?.unit)), []);
-  const { register, handleSubmit, formState, reset, control } = useForm<PartValues>({ resolver, defaultValues: { priceItemId: '', description: '', quantity: '1', unit: '' } });
+  const draftKey = locked ? null : `part.new.${visitId}`;
+  const { register, handleSubmit, formState, reset, control } = useForm<PartValues>({ resolver, defaultValues: startingValues(draftKey, EMPTY_PART) });
+  const draft = useFormDraft(draftKey, useWatch({ control }) as PartValues, EMPTY_PART, reset);
   const [error, setError] = useState<string | null>(null);
   const chosen = useWatch({ control, name: 'priceItemId' });
   const item = parts?.items.get(chosen);
@@ -75,7 +80,8 @@ export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId
         ...(picked ? { priceItemId: picked.id, description: picked.name, unit: picked.unit } : { description: v.description.trim(), ...(v.unit.trim() ? { unit: v.unit.trim() } : {}) }),
         quantity: usableReading(v.quantity)!,
       });
-      reset({ priceItemId: '', description: '', quantity: '1', unit: '' });
+      reset(EMPTY_PART);
+      draft.settle(EMPTY_PART);
     } catch (err) {
       setError((err as Error).message);
     }
@@ -113,6 +119,7 @@ export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId
         )}
         {!locked && (
           <Stack component="form" aria-label="Add a part" noValidate onSubmit={handleSubmit(add)} spacing={1.5}>
+            <DraftNotice draft={draft} />
             <TextField select label="Part" {...register('priceItemId')} error={!!errors.priceItemId} helperText={errors.priceItemId?.message} slotProps={{ select: { native: true }, inputLabel: { shrink: true } }}>
               <option value="">Choose…</option>
               {parts.catalogue.map((g) => (
