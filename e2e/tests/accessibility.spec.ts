@@ -165,6 +165,7 @@ for (const [size, viewport] of [
         ['/customers', 'Customers & sites'],
         ['/conflicts', 'Conflicts'],
         ['/invoices', 'Invoices'],
+        ['/notifiable-work', 'Notifications'],
         ['/price-list', 'Price list'],
         ['/team', 'Team'],
       ] as const) {
