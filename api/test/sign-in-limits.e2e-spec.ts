@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { AttemptCount } from '../src/auth/entities/attempt-count.entity.js';
 import { RefreshToken } from '../src/auth/entities/refresh-token.entity.js';
-import { addPerson, bearer, createTestApp, DEMO_PASSWORD, signIn, type TestApp } from './test-app.js';
+import { addPerson, createTestApp, DEMO_PASSWORD, signIn, type TestApp } from './test-app.js';
 
 /**
  * Sign-in limits as shipped (10 failures a minute per address, 5 per quarter hour per account, 30 failed refreshes
