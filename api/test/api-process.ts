@@ -53,6 +53,20 @@ export class ApiProcess {
     }
   }
 
+  /**
+   * The same, without blocking this process: for a store the API writes to that runs in this process (s3rver),
+   * which must go on answering while the demo photos are loaded.
+   */
+  async prepareBeside(): Promise<void> {
+    for (const script of ['dist/database/migrate-cli.js', 'dist/database/seed-cli.js']) {
+      const child = spawn(process.execPath, [script], { cwd: API_DIR, env: this.env, stdio: ['ignore', 'ignore', 'pipe'] });
+      let stderr = '';
+      child.stderr!.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
+      const status = await new Promise<number | null>((done) => child.on('close', done));
+      if (status !== 0) throw new Error(stderr);
+    }
+  }
+
   /** Where the API answers; uploads' addresses are relative to the origin. */
   get origin(): string {
     return `http://127.0.0.1:${this.port}`;

@@ -79,13 +79,14 @@ describe.each([onDisk, onS3()])('a killed server loses nothing and applies nothi
 
   beforeAll(async () => {
     api = await ApiProcess.create(await storage.open());
-    api.prepare();
+    await api.prepareBeside();
     await api.start();
     ({ headers } = await signInTo(api, 'tech1@larkfield.example'));
     const pulled = (await api.request('GET', '/api/sync/pull?checkpoint=0&limit=1000&deviceId=crash-look', { headers })).body as PullResponse;
     const job = pulled.changes.find((c) => c.entity === 'job' && c.row!.title === 'Move two lounge sockets and add a fused spur for an electric fire')!;
     visit = pulled.changes.find((c) => c.entity === 'visit' && c.row!.jobId === job.id)!.row!;
-  });
+    // The demo data's photos are rendered and stored before the first start.
+  }, 120_000);
 
   afterAll(async () => {
     await api.remove();
