@@ -91,7 +91,8 @@ export class ApiProcess {
     });
     this.child = child;
     this.starts++;
-    for (let i = 0; i < 200; i++) {
+    // Up to a minute: on a machine shared with other test runs a start can take far longer than its usual second.
+    for (const until = Date.now() + 60_000; Date.now() < until; ) {
       if (child.exitCode !== null) break;
       if (this.port === 0) {
         const named = /API listening on http:\/\/127\.0\.0\.1:(\d+)\/api/.exec(stdout);
