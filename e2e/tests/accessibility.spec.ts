@@ -156,6 +156,7 @@ for (const [size, viewport] of [
         ['/customers', 'Customers & sites'],
         ['/conflicts', 'Conflicts'],
         ['/invoices', 'Invoices'],
+        ['/notifiable-work', 'Notifications'],
         ['/price-list', 'Price list'],
         ['/team', 'Team'],
       ] as const) {
