@@ -6,8 +6,8 @@ import type { MigrationInterface, QueryRunner } from "typeorm";
  * person of the same id. Written by hand as ADD and DROP COLUMN: a rebuild of "user" would drop columns added beside
  * this one.
  */
-export class PeopleAndMemberships1796500000000 implements MigrationInterface {
-    name = 'PeopleAndMemberships1796500000000'
+export class PeopleAndMemberships1796500100000 implements MigrationInterface {
+    name = 'PeopleAndMemberships1796500100000'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`CREATE TABLE "person" ("id" varchar(36) PRIMARY KEY NOT NULL, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "email" varchar(254) NOT NULL, "passwordHash" varchar(300) NOT NULL)`);

@@ -15,7 +15,7 @@ import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefu
 import { RecordedAt1796490000000 } from './1796490000000-RecordedAt.js';
 import { BillOnce1796490500000 } from './1796490500000-BillOnce.js';
 import { NotifiableWork1796500000000 } from './1796500000000-NotifiableWork.js';
-import { PeopleAndMemberships1796500000000 } from './1796500000000-PeopleAndMemberships.js';
+import { PeopleAndMemberships1796500100000 } from './1796500100000-PeopleAndMemberships.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -36,5 +36,5 @@ export const MIGRATIONS = [
   RecordedAt1796490000000,
   BillOnce1796490500000,
   NotifiableWork1796500000000,
-  PeopleAndMemberships1796500000000,
+  PeopleAndMemberships1796500100000,
 ];

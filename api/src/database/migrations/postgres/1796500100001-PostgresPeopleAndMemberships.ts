@@ -5,8 +5,8 @@ import type { MigrationInterface, QueryRunner } from "typeorm";
  * "person", and each "user" row becomes that person's membership of one organisation. Every existing user becomes a
  * person of the same id.
  */
-export class PostgresPeopleAndMemberships1796500000001 implements MigrationInterface {
-    name = 'PostgresPeopleAndMemberships1796500000001'
+export class PostgresPeopleAndMemberships1796500100001 implements MigrationInterface {
+    name = 'PostgresPeopleAndMemberships1796500100001'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`CREATE TABLE "person" ("id" character varying(36) NOT NULL, "createdAt" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "updatedAt" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "email" character varying(254) NOT NULL, "passwordHash" character varying(300) NOT NULL, CONSTRAINT "PK_5fdaf670315c4b7e70cce85daa3" PRIMARY KEY ("id"))`);

@@ -9,7 +9,7 @@ import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-Postgre
 import { PostgresRecordedAt1796490000001 } from './1796490000001-PostgresRecordedAt.js';
 import { PostgresBillOnce1796490500001 } from './1796490500001-PostgresBillOnce.js';
 import { PostgresNotifiableWork1796500000001 } from './1796500000001-PostgresNotifiableWork.js';
-import { PostgresPeopleAndMemberships1796500000001 } from './1796500000001-PostgresPeopleAndMemberships.js';
+import { PostgresPeopleAndMemberships1796500100001 } from './1796500100001-PostgresPeopleAndMemberships.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -24,5 +24,5 @@ export const POSTGRES_MIGRATIONS = [
   PostgresRecordedAt1796490000001,
   PostgresBillOnce1796490500001,
   PostgresNotifiableWork1796500000001,
-  PostgresPeopleAndMemberships1796500000001,
+  PostgresPeopleAndMemberships1796500100001,
 ];
