@@ -9,6 +9,7 @@ import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
+import { mailTemplate } from '../mail/mail-template.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
 import { Person } from './entities/person.entity.js';
 import { User } from './entities/user.entity.js';
@@ -19,6 +20,28 @@ const WELCOME_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 const LINK_REFUSED = 'This password link is not valid any more. Ask your admin to send a new one.';
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 const PASSWORD_RESET_MAIL = 'password-reset';
+const RESET_SUBJECT = 'Set a new Wiretrail password';
+/** Both parts of the e-mail come from this one template. */
+const RESET_LETTER = mailTemplate<{ name: string; caller: string; url: string }>(`Hello {{name}},
+
+{{caller}} asked Wiretrail to let you set a new password. Open this link within an hour:
+
+{{link url}}
+
+If you did not expect this, ignore this e-mail; your password stays as it is.`);
+
+const WELCOME_NEW = mailTemplate<{ name: string; caller: string; organisation: string; url: string }>(`Hello {{name}},
+
+{{caller}} has added you to {{organisation}} on Wiretrail. Open this link within a week to set your password:
+
+{{link url}}
+
+Then sign in with this e-mail address and that password.`);
+const WELCOME_KNOWN = mailTemplate<{ name: string; caller: string; organisation: string }>(`Hello {{name}},
+
+{{caller}} has added you to {{organisation}} on Wiretrail. Sign in with this e-mail address and the password you already use, and choose {{organisation}}.
+
+If you have forgotten your password, ask {{caller}} for a password link.`);
 
 @Injectable()
 export class PasswordResetService implements OnModuleInit {
@@ -58,8 +81,8 @@ export class PasswordResetService implements OnModuleInit {
         subjectId: user.id,
         to: user.email,
         createdById: caller.id,
-        subject: 'Set a new Wiretrail password',
-        text: `Hello ${user.name},\n\n${caller.name} asked Wiretrail to let you set a new password. Open this link within an hour:\n\n${link}\n\nIf you did not expect this, ignore this e-mail; your password stays as it is.\n`,
+        subject: RESET_SUBJECT,
+        ...RESET_LETTER(RESET_SUBJECT, { name: user.name, caller: caller.name, url: link }),
       });
       return { user, reset };
     });
@@ -73,7 +96,9 @@ export class PasswordResetService implements OnModuleInit {
    */
   async welcome(em: EntityManager, caller: AuthUser, user: User, newPerson: boolean): Promise<void> {
     const organisation = await em.findOneByOrFail(Organisation, { id: caller.organisationId });
-    let text: string;
+    const subject = `You have been added to ${organisation.name} on Wiretrail`.slice(0, 200);
+    const words = { name: user.name, caller: caller.name, organisation: organisation.name };
+    let letter: ReturnType<typeof WELCOME_KNOWN>;
     if (newPerson) {
       const secret = randomBytes(32).toString('base64url');
       const reset = await em.save(em.create(PasswordReset, {
@@ -84,10 +109,10 @@ export class PasswordResetService implements OnModuleInit {
         usedAt: null,
         requestedById: caller.id,
       }));
-      const link = `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(`${reset.id}.${secret}`)}`;
-      text = `Hello ${user.name},\n\n${caller.name} has added you to ${organisation.name} on Wiretrail. Open this link within a week to set your password:\n\n${link}\n\nThen sign in with this e-mail address and that password.\n`;
+      const url = `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(`${reset.id}.${secret}`)}`;
+      letter = WELCOME_NEW(subject, { ...words, url });
     } else {
-      text = `Hello ${user.name},\n\n${caller.name} has added you to ${organisation.name} on Wiretrail. Sign in with this e-mail address and the password you already use, and choose ${organisation.name}.\n\nIf you have forgotten your password, ask ${caller.name} for a password link.\n`;
+      letter = WELCOME_KNOWN(subject, words);
     }
     await this.outbox.enqueue(em, {
       organisationId: caller.organisationId,
@@ -95,8 +120,8 @@ export class PasswordResetService implements OnModuleInit {
       subjectId: user.id,
       to: user.email,
       createdById: caller.id,
-      subject: `You have been added to ${organisation.name} on Wiretrail`.slice(0, 200),
-      text,
+      subject,
+      ...letter,
     });
   }
 

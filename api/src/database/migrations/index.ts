@@ -16,6 +16,8 @@ import { RecordedAt1796490000000 } from './1796490000000-RecordedAt.js';
 import { BillOnce1796490500000 } from './1796490500000-BillOnce.js';
 import { NotifiableWork1796500000000 } from './1796500000000-NotifiableWork.js';
 import { PeopleAndMemberships1796500100000 } from './1796500100000-PeopleAndMemberships.js';
+import { Refunds1796500200000 } from './1796500200000-Refunds.js';
+import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -37,4 +39,6 @@ export const MIGRATIONS = [
   BillOnce1796490500000,
   NotifiableWork1796500000000,
   PeopleAndMemberships1796500100000,
+  Refunds1796500200000,
+  MailCopies1796500300000,
 ];

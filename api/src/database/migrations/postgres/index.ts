@@ -10,6 +10,8 @@ import { PostgresRecordedAt1796490000001 } from './1796490000001-PostgresRecorde
 import { PostgresBillOnce1796490500001 } from './1796490500001-PostgresBillOnce.js';
 import { PostgresNotifiableWork1796500000001 } from './1796500000001-PostgresNotifiableWork.js';
 import { PostgresPeopleAndMemberships1796500100001 } from './1796500100001-PostgresPeopleAndMemberships.js';
+import { PostgresRefunds1796500200001 } from './1796500200001-PostgresRefunds.js';
+import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCopies.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -25,4 +27,6 @@ export const POSTGRES_MIGRATIONS = [
   PostgresBillOnce1796490500001,
   PostgresNotifiableWork1796500000001,
   PostgresPeopleAndMemberships1796500100001,
+  PostgresRefunds1796500200001,
+  PostgresMailCopies1796500300001,
 ];
