@@ -50,7 +50,7 @@ describe("the Team page's refusals", () => {
       { id: OFFICE_USER.id, email: OFFICE_USER.email, name: OFFICE_USER.name, role: 'office', active: true },
       { id: 'u2', email: 'tech1@larkfield.example', name: 'Sam Okafor', role: 'technician', active: true },
     ];
-    api.fetch.mockImplementation(async (url, init) => {
+    api.fetch.mockImplementation(async (_url, init) => {
       if (init?.method === 'PATCH') return refusal(403, 'Only an admin may change a role.', 'Forbidden');
       return json(200, { items: people, total: 2, page: 1, pageSize: 50 });
     });
