@@ -1,0 +1,90 @@
+import type { Locator, Page } from '@playwright/test';
+import { bookVisit, DESK, expect, test } from '../fixtures.js';
+import { typeInPicker } from '../pages/pickers.js';
+
+test.use({ viewport: DESK, signedInAs: 'office' });
+
+/** The cell of a row for another day than the one given ("Tuesday 8 December"), nearest first. */
+async function anotherDay(row: Locator, notDay: string): Promise<Locator> {
+  const cells = await row.getByRole('gridcell').all();
+  for (const c of cells) if (!(await c.getAttribute('aria-label'))!.endsWith(notDay)) return c;
+  throw new Error('no other day in the week');
+}
+
+async function dayOf(card: Locator): Promise<string> {
+  return (await card.locator('xpath=ancestor::*[@role="gridcell"][1]').getAttribute('aria-label'))!.split(', ')[1]!;
+}
+
+async function openSchedule(page: Page): Promise<Locator> {
+  await page.goto('/');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Schedule' }).click();
+  const grid = page.getByRole('grid', { name: 'Visits this week' });
+  await expect(grid.getByRole('row', { name: 'Sam Brannigan' })).toBeVisible();
+  return grid;
+}
+
+test("the office drags a visit to another technician's row and another day, sets its time, and the move is kept", async ({ page, request }) => {
+  test.setTimeout(60_000);
+  const title = `Garage socket (${Date.now().toString(36)})`;
+  await bookVisit(request, { technicianEmail: 'tech1@larkfield.example', siteName: 'Orchard Rise', title, startHour: 13, endHour: 15 });
+  const grid = await openSchedule(page);
+  const card = grid.getByRole('row', { name: 'Sam Brannigan' }).getByRole('button', { name: new RegExp(title.replace(/[()]/g, '\\$&')) });
+  const from = await dayOf(card);
+  const target = await anotherDay(grid.getByRole('row', { name: 'Aled Pryce' }), from);
+  const targetDay = (await target.getAttribute('aria-label'))!.split(', ')[1]!;
+
+  // A drag with the mouse, in steps, as a hand moves.
+  const a = (await card.boundingBox())!;
+  const b = (await target.boundingBox())!;
+  await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(a.x + a.width / 2 + 12, a.y + a.height / 2 + 12, { steps: 4 });
+  await page.mouse.move(b.x + b.width / 2, b.y + 20, { steps: 15 });
+  await page.mouse.up();
+
+  // Asked first, with the times to change and the warnings of booking.
+  const ask = page.getByRole('dialog', { name: 'Move this visit?' });
+  await expect(ask).toContainText(`from Sam Brannigan to Aled Pryce, on ${targetDay}`);
+  await typeInPicker(ask, 'Start', '07:15');
+  await typeInPicker(ask, 'Finish', '06:00');
+  await expect(ask.getByText('The finish time must be after the start time.')).toBeVisible();
+  await typeInPicker(ask, 'Finish', '08:45');
+  await page.screenshot({ path: 'test-results/schedule-move-ask.png' });
+  // A day already gone asks to move it anyway.
+  await ask.getByRole('button', { name: /^Move (visit|anyway)$/ }).click();
+  await expect(ask).toHaveCount(0);
+  await expect(page.getByRole('alert').filter({ hasText: 'moved to' })).toBeVisible();
+
+  await page.reload();
+  const moved = grid.getByRole('row', { name: 'Aled Pryce' }).getByRole('gridcell', { name: `Aled Pryce, ${targetDay}` }).getByRole('button', { name: new RegExp(title.replace(/[()]/g, '\\$&')) });
+  await expect(moved).toContainText('07:15–08:45');
+  await expect(grid.getByRole('row', { name: 'Sam Brannigan' }).getByRole('button', { name: new RegExp(title.replace(/[()]/g, '\\$&')) })).toHaveCount(0);
+});
+
+test('the same move by keyboard alone, and undone', async ({ page, request }) => {
+  test.setTimeout(60_000);
+  const title = `Loft light (${Date.now().toString(36)})`;
+  const named = new RegExp(title.replace(/[()]/g, '\\$&'));
+  await bookVisit(request, { technicianEmail: 'tech1@larkfield.example', siteName: 'Orchard Rise', title, startHour: 10, endHour: 11 });
+  const grid = await openSchedule(page);
+  const card = grid.getByRole('row', { name: 'Sam Brannigan' }).getByRole('button', { name: named });
+  const day = await dayOf(card);
+  await card.focus();
+  // M picks it up, Down carries it to the next row (Aled Pryce), Enter puts it there.
+  await page.keyboard.press('m');
+  await page.keyboard.press('ArrowDown');
+  await page.keyboard.press('Enter');
+  const ask = page.getByRole('dialog', { name: 'Move this visit?' });
+  await expect(ask).toContainText(`from Sam Brannigan to Aled Pryce, on ${day}`);
+  const move = ask.getByRole('button', { name: /^Move (visit|anyway)$/ });
+  await move.focus();
+  await page.keyboard.press('Enter');
+  await expect(ask).toHaveCount(0);
+  await expect(grid.getByRole('row', { name: 'Aled Pryce' }).getByRole('button', { name: named })).toBeVisible();
+  // Undo puts it back with Sam.
+  const undo = page.getByRole('button', { name: 'Undo' });
+  await undo.focus();
+  await page.keyboard.press('Enter');
+  await expect(grid.getByRole('row', { name: 'Sam Brannigan' }).getByRole('button', { name: named })).toBeVisible();
+  await expect(grid.getByRole('row', { name: 'Aled Pryce' }).getByRole('button', { name: named })).toHaveCount(0);
+});
