@@ -4,7 +4,7 @@ test.use({ viewport: DESK, signedInAs: 'office' });
 
 test('with done and cancelled shown, every column of the jobs board is on a 1440 px screen, and the board scrolls by keyboard', async ({ page }) => {
   await page.goto('/jobs');
-  await page.getByLabel('Show done and cancelled').check();
+  await page.getByLabel('Show done and cancelled').click();
   const cancelled = page.getByRole('region', { name: 'Cancelled' });
   await expect(cancelled).toBeVisible();
   const box = (await cancelled.boundingBox())!;

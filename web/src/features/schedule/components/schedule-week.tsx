@@ -109,6 +109,11 @@ export function ScheduleWeek() {
   const [dragged, setDragged] = useState<CardData | null>(null);
   const [moved, setMoved] = useState<{ id: string; before: VisitPlace; words: string } | null>(null);
   const save = useSaveVisit();
+  // The Enter or Space that puts a carried visit down reaches the card as a press too: it must not open it.
+  const putDownAt = useRef(0);
+  const open = (visit: Visit, date: string) => {
+    if (performance.now() - putDownAt.current > 500) setEditing({ visit, date });
+  };
   // The grid's rows and days in order, for the arrow keys to step through while a visit is carried.
   const layout = useRef<{ rows: string[]; days: string[] }>({ rows: [], days: [] });
   const keyboardCells: KeyboardCoordinateGetter = (event, { context }) => {
@@ -150,6 +155,7 @@ export function ScheduleWeek() {
   };
   const onDragEnd = ({ active, over }: DragEndEvent) => {
     setDragged(null);
+    putDownAt.current = performance.now();
     if (!over) return;
     const card = active.data.current as CardData;
     const target = over.data.current as CellData;
@@ -203,7 +209,10 @@ export function ScheduleWeek() {
         collisionDetection={collision}
         accessibility={{ announcements, screenReaderInstructions: { draggable: INSTRUCTIONS } }}
         onDragStart={({ active }) => setDragged(active.data.current as CardData)}
-        onDragCancel={() => setDragged(null)}
+        onDragCancel={() => {
+          setDragged(null);
+          putDownAt.current = performance.now();
+        }}
         onDragEnd={onDragEnd}
       >
         <Paper variant="outlined" sx={{ overflowX: 'auto' }}>
@@ -224,7 +233,7 @@ export function ScheduleWeek() {
                 {days.map((d) => (
                   <DayCell key={d.toISOString()} row={r.id} day={dayKey(d)} rowName={r.name}>
                     {cell(r.id, d).map((v) => (
-                      <VisitCard key={v.id} visit={v} row={r.id} day={dayKey(d)} job={jobById.get(v.jobId)} onOpen={() => setEditing({ visit: v, date: dayKey(d) })} />
+                      <VisitCard key={v.id} visit={v} row={r.id} day={dayKey(d)} job={jobById.get(v.jobId)} onOpen={() => open(v, dayKey(d))} />
                     ))}
                   </DayCell>
                 ))}
