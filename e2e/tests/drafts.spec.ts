@@ -41,6 +41,7 @@ test('half-typed forms survive a section switch, a reload and a closed tab, offl
   await expect(cable.getByLabel('Label')).toHaveValue(`RC-${stamp}`);
   await expect(cable.getByLabel('End A description')).toHaveValue('Patch panel port 7');
   await expect(cable.getByText('Back where you left off')).toBeVisible();
+  if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/cable-draft-restored.png` });
 
   // A sign-off half written and signed, then another section.
   await page.goto(visitUrl);
