@@ -22,6 +22,8 @@ interface Props {
 }
 
 const DAY = 'YYYY-MM-DD';
+// The calendar and clock buttons are tapped with a thumb, on the phone's sign-off too: 44 px each way (WCAG 2.5.5).
+const BUTTON = { sx: { minWidth: 44, minHeight: 44 } };
 const TIME = 'HH:mm';
 
 // Each input brings its own provider, so screens without a date (Today among them) never load the pickers.
@@ -46,7 +48,7 @@ export function DateInput({ label, value, onChange, onBlur, error, helperText, s
         maxDate={max ? dayjs(max) : undefined}
         disabled={disabled}
         sx={sx}
-        slotProps={{ textField: { name, size, error, helperText, onBlur } }}
+        slotProps={{ textField: { name, size, error, helperText, onBlur }, openPickerButton: BUTTON }}
       />
     </InGb>
   );
@@ -63,7 +65,7 @@ export function TimeInput({ label, value, onChange, onBlur, error, helperText, s
         onChange={(d) => onChange(textOf(d, TIME))}
         disabled={disabled}
         sx={sx}
-        slotProps={{ textField: { name, size, error, helperText, onBlur } }}
+        slotProps={{ textField: { name, size, error, helperText, onBlur }, openPickerButton: BUTTON }}
       />
     </InGb>
   );

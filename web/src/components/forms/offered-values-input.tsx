@@ -27,11 +27,15 @@ export function OfferedValuesInput({ label, value, onChange, onBlur, options, er
     <Autocomplete
       freeSolo
       autoHighlight={false}
+      // The list opens as the field is tapped; no small arrow or clear buttons for a gloved thumb to miss.
+      openOnFocus
+      forcePopupIcon={false}
+      disableClearable
       options={options as string[]}
-      value={value || null}
+      value={value}
       inputValue={value}
       onInputChange={(_, typed) => onChange(typed)}
-      onChange={(_, chosen) => onChange(chosen ?? '')}
+      onChange={(_, chosen) => onChange(chosen)}
       onBlur={onBlur}
       disabled={disabled}
       sx={sx}
