@@ -56,7 +56,6 @@ function VisitCard({ visit, row, day, job, onOpen }: { visit: Visit; row: string
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
     id: `${row}|${visit.id}|${day}`,
     data: { visit, fromRow: row, words } satisfies CardData,
-    disabled: visit.status === 'cancelled',
   });
   return (
     <ButtonBase ref={setNodeRef} {...attributes} {...listeners} aria-roledescription="movable visit" onClick={onOpen} sx={{ display: 'block', borderRadius: 1.5, opacity: isDragging ? 0.4 : 1, touchAction: 'none' }} component="div">
@@ -89,7 +88,6 @@ function DayCell({ row, day, rowName, children }: { row: string; day: string; ro
     <Box
       ref={setNodeRef}
       role="gridcell"
-      aria-label={`${rowName}, ${longDay.format(new Date(`${day}T00:00:00Z`))}`}
       sx={{ p: 0.75, minHeight: 84, borderBottom: 1, borderLeft: 1, borderColor: 'divider', display: 'grid', gap: 0.75, alignContent: 'start', bgcolor: isOver ? 'action.hover' : undefined, outline: isOver ? 2 : 0, outlineColor: 'primary.main', outlineOffset: -2 }}
     >
       {children}
@@ -110,9 +108,11 @@ export function ScheduleWeek() {
   const [moved, setMoved] = useState<{ id: string; before: VisitPlace; words: string } | null>(null);
   const save = useSaveVisit();
   // The Enter or Space that puts a carried visit down reaches the card as a press too: it must not open it.
+  // React hears that key before the drag does, so a visit being carried is never opened either.
   const putDownAt = useRef(0);
+  const carrying = useRef(false);
   const open = (visit: Visit, date: string) => {
-    if (performance.now() - putDownAt.current > 500) setEditing({ visit, date });
+    if (!carrying.current && performance.now() - putDownAt.current > 500) setEditing({ visit, date });
   };
   // The grid's rows and days in order, for the arrow keys to step through while a visit is carried.
   const layout = useRef<{ rows: string[]; days: string[] }>({ rows: [], days: [] });
@@ -155,10 +155,13 @@ export function ScheduleWeek() {
   };
   const onDragEnd = ({ active, over }: DragEndEvent) => {
     setDragged(null);
+    carrying.current = false;
     putDownAt.current = performance.now();
     if (!over) return;
     const card = active.data.current as CardData;
     const target = over.data.current as CellData;
+    // A cancelled visit is restored, not moved: it opens to do that.
+    if (card.visit.status === 'cancelled') return;
     if (target.row === card.fromRow && target.day === dayKey(card.visit.plannedStart!)) return;
     setMoving({ visit: card.visit, fromRow: card.fromRow, toRow: target.row, day: target.day });
   };
@@ -208,8 +211,12 @@ export function ScheduleWeek() {
         sensors={sensors}
         collisionDetection={collision}
         accessibility={{ announcements, screenReaderInstructions: { draggable: INSTRUCTIONS } }}
-        onDragStart={({ active }) => setDragged(active.data.current as CardData)}
+        onDragStart={({ active }) => {
+          carrying.current = true;
+          setDragged(active.data.current as CardData);
+        }}
         onDragCancel={() => {
+          carrying.current = false;
           setDragged(null);
           putDownAt.current = performance.now();
         }}
