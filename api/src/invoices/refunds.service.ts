@@ -1,4 +1,4 @@
-import { BadGatewayException, BadRequestException, ConflictException, Injectable, Logger, NotFoundException, type OnApplicationBootstrap } from '@nestjs/common';
+import { BadGatewayException, BadRequestException, ConflictException, Injectable, Logger, NotFoundException, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { formatMoney, type InvoiceDetail, isCalendarDate, refundProblems, toRefundMinor } from '@wiretrail/core';
 import { In, Not } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
@@ -12,6 +12,7 @@ import { accountsOf, detail, todayFor } from './invoice-accounts.js';
 import { OwedChanges } from './owed-changes.js';
 
 const keyOf = (refund: Pick<Refund, 'id'>) => `wiretrail-office-refund-${refund.id}`;
+const RETRY_AFTER_START_MS = 5_000;
 
 /**
  * Money the office gives back to a customer on an invoice, never more than the customer is owed there (paid above
@@ -19,7 +20,7 @@ const keyOf = (refund: Pick<Refund, 'id'>) => `wiretrail-office-refund-${refund.
  * in the same transaction as the check, then made through the provider after the commit.
  */
 @Injectable()
-export class RefundsService implements OnApplicationBootstrap {
+export class RefundsService implements OnApplicationBootstrap, OnModuleDestroy {
   private readonly logger = new Logger('Refunds');
 
   constructor(
@@ -28,14 +29,27 @@ export class RefundsService implements OnApplicationBootstrap {
     private readonly owedChanges: OwedChanges,
   ) {}
 
-  /** A card refund recorded just before the process stopped is asked for again; its key makes it once at the provider. */
-  async onApplicationBootstrap(): Promise<void> {
+  private retry: NodeJS.Timeout | null = null;
+
+  /**
+   * A card refund recorded just before the process stopped is asked for again soon after start (not during it, so
+   * the start never waits on the provider); its key makes it once at the provider.
+   */
+  onApplicationBootstrap(): void {
     if (!this.cards.available) return;
+    this.retry = setTimeout(() => void this.retryPending(), RETRY_AFTER_START_MS);
+    this.retry.unref();
+  }
+
+  onModuleDestroy(): void {
+    if (this.retry) clearTimeout(this.retry);
+  }
+
+  private async retryPending(): Promise<void> {
     try {
       const pending = await this.queue.read((em) => em.find(Refund, { where: { state: 'pending', method: 'card' } }));
       for (const refund of pending) await this.toCard(refund).catch(() => undefined);
     } catch (err) {
-      // A database not migrated yet (a first start) has no refunds waiting.
       this.logger.warn(`Card refunds left waiting were not looked for: ${err instanceof Error ? err.message : String(err)}`);
     }
   }

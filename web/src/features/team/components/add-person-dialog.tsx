@@ -8,6 +8,7 @@ import DialogTitle from '@mui/material/DialogTitle';
 import MenuItem from '@mui/material/MenuItem';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
+import Typography from '@mui/material/Typography';
 import { ROLES } from '@wiretrail/core';
 import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
@@ -19,7 +20,6 @@ const schema = z.object({
   name: z.string().trim().min(1, 'Enter their name.'),
   email: z.string().trim().min(1, 'Enter their e-mail address.').email('That is not an e-mail address.'),
   role: z.enum(ROLES, { message: 'Choose a role.' }),
-  password: z.string().min(10, 'The first password must be at least 10 characters; they can change it with a password link.'),
 });
 type Values = z.infer<typeof schema>;
 const LABELS: Record<keyof Values, string> = { name: 'Name', email: 'E-mail', role: 'Role', password: 'First password' };
@@ -28,7 +28,7 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
   const create = useCreatePerson();
   const { register, control, handleSubmit, formState, reset, setError } = useForm<Values>({
     resolver: zodResolver(schema),
-    defaultValues: { name: '', email: '', role: 'technician', password: '' },
+    defaultValues: { name: '', email: '', role: 'technician' },
   });
   const [refusal, setRefusal] = useState<string[]>([]);
   const close = () => {
@@ -72,7 +72,10 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
               </TextField>
             )}
           />
-          <TextField label="First password" type="password" autoComplete="new-password" {...register('password')} error={!!formState.errors.password} helperText={formState.errors.password?.message} />
+          <Typography variant="body2" color="text.secondary">
+            We e-mail them: a link to set their own password, or, if they already sign in to Wiretrail for another
+            contractor, a note to sign in as they do and choose you.
+          </Typography>
         </Stack>
       </DialogContent>
       <DialogActions sx={{ px: 3, pb: 2 }}>
