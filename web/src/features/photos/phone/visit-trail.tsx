@@ -6,6 +6,7 @@ import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
 import StickyNote2Outlined from '@mui/icons-material/StickyNote2Outlined';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
+import ButtonBase from '@mui/material/ButtonBase';
 import List from '@mui/material/List';
 import ListItem from '@mui/material/ListItem';
 import Paper from '@mui/material/Paper';
@@ -23,6 +24,7 @@ import { tagList, trailTime } from '../trail-time';
 import { LocalPhotoThumb } from './local-photo-thumb';
 import { PhotoBadge, photoBadge } from './photo-badge';
 import { PhotoCapture } from './photo-capture';
+import { TrailPhotoViewer } from './trail-photo-viewer';
 
 /** A visit with hundreds of photos stays quick: the trail shows this many at a time. */
 const PAGE = 20;
@@ -62,13 +64,14 @@ function Row({ tile, title, lines, badge, wrap }: { tile: ReactNode; title: stri
 
 interface EntryProps {
   item: TrailItem;
+  onOpenPhoto: (id: string) => void;
   areaNames: Map<string, string>;
   subjectNames: Map<string, string>;
   states: PhotoStates | undefined;
   progress: UploadProgress;
 }
 
-function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryProps) {
+function TrailEntry({ item, onOpenPhoto, areaNames, subjectNames, states, progress }: EntryProps) {
   const when = trailTime(item.at);
   switch (item.kind) {
     case 'photo': {
@@ -78,7 +81,11 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
       const tags = tagList(p.tags).join(', ');
       return (
         <Row
-          tile={<LocalPhotoThumb photo={p} alt={caption} />}
+          tile={
+            <ButtonBase onClick={() => onOpenPhoto(p.id)} aria-label={`Open photo: ${caption}`} sx={{ borderRadius: 1.5, flexShrink: 0 }}>
+              <LocalPhotoThumb photo={p} alt={caption} />
+            </ButtonBase>
+          }
           title={caption}
           lines={[[when, where].filter(Boolean).join(' · '), tags]}
           badge={<Box><PhotoBadge look={photoBadge(p, states, progress)} /></Box>}
@@ -132,14 +139,16 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress }: EntryPr
 }
 
 /** The top of a visit: the camera button, then everything recorded on the visit, newest first. */
-export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: string; extra?: ReactNode }) {
+export function VisitTrail({ visit, userId, locked = false, extra }: { visit: VisitRow; userId: string; locked?: boolean; extra?: ReactNode }) {
   const trail = useVisitTrail(visit);
   // Read once for the whole list, not once per photo.
   const states = usePhotoStates();
   const progress = useUploadProgress();
   const [shown, setShown] = useState(PAGE);
+  const [openId, setOpenId] = useState<string | null>(null);
   const items = trail?.items ?? [];
-  const photos = items.filter((i) => i.kind === 'photo').length;
+  const photoRows = items.flatMap((i) => (i.kind === 'photo' ? [i.photo] : []));
+  const photos = photoRows.length;
   return (
     <Stack component="section" aria-labelledby="trail-heading" spacing={1.5}>
       <Stack direction="row" sx={{ alignItems: 'baseline', justifyContent: 'space-between' }}>
@@ -166,6 +175,7 @@ export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: 
               <TrailEntry
                 key={`${item.kind}-${item.id}`}
                 item={item}
+                onOpenPhoto={setOpenId}
                 areaNames={trail!.areaNames}
                 subjectNames={trail!.subjectNames}
                 states={states}
@@ -176,6 +186,20 @@ export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: 
         </Paper>
       )}
       {items.some((i) => i.kind === 'cableRun' || i.kind === 'testResult') && <AidLine />}
+      {openId && photoRows.some((p) => p.id === openId) && (
+        <TrailPhotoViewer
+          photos={photoRows}
+          openId={openId}
+          onOpen={setOpenId}
+          onClose={() => setOpenId(null)}
+          visitId={visit.id}
+          siteId={visit.siteId}
+          userId={userId}
+          locked={locked}
+          states={states}
+          progress={progress}
+        />
+      )}
       {items.length > shown && (
         <Button variant="outlined" size="large" onClick={() => setShown((n) => n + PAGE)}>
           Show {Math.min(PAGE, items.length - shown)} more of {items.length - shown}
