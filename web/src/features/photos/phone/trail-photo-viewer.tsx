@@ -79,7 +79,7 @@ export function TrailPhotoViewer({ photos, openId, onOpen, onClose, visitId, sit
         <Box component="span" sx={{ flex: 1 }}>
           Photo {index + 1} of {photos.length}
         </Box>
-        <IconButton onClick={onClose} aria-label="Close" size="large">
+        <IconButton onClick={onClose} aria-label="Back to the trail" size="large">
           <Close />
         </IconButton>
       </DialogTitle>
