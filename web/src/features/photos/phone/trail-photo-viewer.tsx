@@ -75,14 +75,13 @@ export function TrailPhotoViewer({ photos, openId, onOpen, onClose, visitId, sit
   const refused = badge.color === 'error';
   return (
     <Dialog open fullScreen onClose={onClose} aria-labelledby={titleId} onKeyDown={keys}>
-      <DialogTitle id={titleId} sx={{ display: 'flex', alignItems: 'center', gap: 1, pr: 1 }}>
-        <Box component="span" sx={{ flex: 1 }}>
-          Photo {index + 1} of {photos.length}
-        </Box>
-        <IconButton onClick={onClose} aria-label="Back to the trail" size="large">
-          <Close />
-        </IconButton>
+      {/* The close button sits beside the title, not in it: the title names the dialog. */}
+      <DialogTitle id={titleId} sx={{ pr: 8 }}>
+        Photo {index + 1} of {photos.length}
       </DialogTitle>
+      <IconButton onClick={onClose} aria-label="Back to the trail" size="large" sx={{ position: 'absolute', top: 4, right: 4 }}>
+        <Close />
+      </IconButton>
       <DialogContent dividers sx={{ p: 0 }}>
         <Box
           onPointerDown={(e) => (swipeFrom.current = e.clientX)}
