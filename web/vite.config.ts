@@ -65,5 +65,6 @@ export default defineConfig({
     // Screen tests render lazy screens over an in-memory database; `npm test` runs them beside the API's suites on
     // two cores, where five seconds is not always enough for the first render. A test that hangs still fails.
     testTimeout: 20_000,
+    setupFiles: ['src/test-setup.ts'],
   },
 });

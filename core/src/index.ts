@@ -51,3 +51,4 @@ export * from './certification/minor-works-declaration.js';
 export * from './text/typed-text.js';
 export * from './text/contact.js';
 export * from './certification/circuit-details-check.js';
+export * from './certification/notifiable-work.js';

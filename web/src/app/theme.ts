@@ -48,6 +48,8 @@ export const theme = createTheme({
     MuiBottomNavigation: { styleOverrides: { root: { height: 68 } } },
     MuiBottomNavigationAction: { styleOverrides: { label: { fontSize: '0.875rem', '&.Mui-selected': { fontSize: '0.875rem' } } } },
     MuiListItemButton: { styleOverrides: { root: { minHeight: 48 } } },
+    // A switch or a check box is tapped by its whole label, which is as tall as a button.
+    MuiFormControlLabel: { styleOverrides: { root: { minHeight: 48 } } },
     MuiTextField: { defaultProps: { fullWidth: true } },
     // Right-aligned cells hold figures: "-£208.68" must not break after its sign.
     MuiTableCell: { styleOverrides: { alignRight: { whiteSpace: 'nowrap' } } },

@@ -46,7 +46,8 @@ export function SyncStatusChip() {
           fontWeight: 500,
           maxWidth: '100%',
           height: 'auto',
-          minHeight: 36,
+          // A thumb's width (WCAG 2.5.5): it opens the Sync page.
+          minHeight: 44,
           bgcolor: look.color === 'default' ? 'background.paper' : undefined,
           '& .MuiChip-label': { whiteSpace: 'normal', py: 0.5 },
         }}

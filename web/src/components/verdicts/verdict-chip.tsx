@@ -92,7 +92,8 @@ function JudgedChip({ what, result, size = 'medium', against = 'limit', prefix, 
         onClick={() => setOpen(true)}
         aria-label={`${what}: ${words}${limit}. Show how it was judged`}
         aria-haspopup="dialog"
-        sx={{ fontWeight: 500, minHeight: size === 'small' ? 32 : 40, maxWidth: '100%' }}
+        // A thumb's width on a phone (WCAG 2.5.5); a desk's table keeps its rows tight.
+        sx={{ fontWeight: 500, minHeight: { xs: 44, sm: size === 'small' ? 32 : 40 }, maxWidth: '100%' }}
       />
       <Dialog open={open} onClose={() => setOpen(false)} aria-labelledby="verdict-title" fullWidth maxWidth="xs">
         <DialogTitle id="verdict-title">

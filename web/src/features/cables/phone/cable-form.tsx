@@ -22,6 +22,8 @@ import { useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { v7 as uuidv7 } from 'uuid';
 import { z } from 'zod';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { choicesOf, NativeChoice, SaveBar } from '@/components/forms/phone-inputs';
 import type { AreaRow, CableRunRow } from '@/lib/db';
 import { parseReading, readingField, readingText, usableReading } from '@/lib/readings';
@@ -126,10 +128,17 @@ interface Props {
 
 /** Record a cable run: where each end is, how it was identified and terminated, its wiremap and length. */
 export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Props) {
-  const { register, control, handleSubmit, formState } = useForm<CableValues>({ resolver: zodResolver(cableSchema), defaultValues: defaults(cable) });
-  const [wiremap, setWiremap] = useState<Wiremap | null>(() => readWiremap(cable?.wiremap));
+  const draftKey = locked ? null : `cable.${cable?.id ?? `new.${visitId}`}`;
+  const recorded = { ...defaults(cable), wiremap: readWiremap(cable?.wiremap) };
+  const { wiremap: startWiremap, ...start } = startingValues(draftKey, recorded);
+  const { register, control, handleSubmit, formState, reset } = useForm<CableValues>({ resolver: zodResolver(cableSchema), defaultValues: start });
+  const [wiremap, setWiremap] = useState<Wiremap | null>(() => readWiremap(startWiremap));
   const [error, setError] = useState<string | null>(null);
   const values = useWatch({ control }) as CableValues;
+  const draft = useFormDraft(draftKey, { ...values, wiremap }, recorded, ({ wiremap: w, ...v }) => {
+    reset(v);
+    setWiremap(w);
+  });
   const twisted = isTwistedPair(values.medium);
   const lengthM = lengthFrom(values);
   const assessment = useMemo(
@@ -183,11 +192,13 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
       if (cable) {
         if (areaRows.length) await createRecords(areaRows);
         await saveRecord('cableRun', cable.id, fields);
+        draft.settle();
         onSaved(cable.id, fields.label as string);
       } else {
         const id = uuidv7();
         const created = Object.fromEntries(Object.entries({ siteId, ...fields }).filter(([, value]) => value !== null)) as Fields;
         await createRecords([...areaRows, { entity: 'cableRun', id, fields: created }]);
+        draft.settle();
         onSaved(id, fields.label as string);
       }
     } catch (err) {
@@ -200,6 +211,7 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
     <Box component="form" aria-label={cable ? `Cable ${cable.label}` : 'Record a cable'} noValidate onSubmit={handleSubmit(save)}>
       <Box component="fieldset" disabled={locked} sx={{ border: 0, p: 0, m: 0, minWidth: 0 }}>
         <Stack spacing={2}>
+          <DraftNotice draft={draft} />
           <TextField label="Label" {...register('label')} error={!!errors.label} helperText={errors.label?.message ?? 'As written on both ends, e.g. RC-03.'} slotProps={{ htmlInput: { autoCapitalize: 'characters' } }} />
           <NativeChoice label="Medium" {...register('medium')} options={choicesOf(CABLE_MEDIA, MEDIUM_WORDS)} />
           {(['A', 'B'] as const).map((e) => (

@@ -8,6 +8,8 @@ import { useState } from 'react';
 import { type Control, type FieldErrors, useForm, type UseFormRegister, useWatch } from 'react-hook-form';
 import { v7 as uuidv7 } from 'uuid';
 import { z } from 'zod';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import type { BoardRow } from '@/lib/db';
 import { createRecords, type Fields } from '@/lib/sync/local-write';
 import { type CircuitDetails, CircuitDetailFields, checkCircuitDetails, circuitDetailFields, circuitDetailsOf, circuitDetailsSchema } from './circuit-fields';
@@ -29,10 +31,13 @@ type AddCircuitValues = z.infer<typeof addCircuitSchema>;
 
 /** A circuit found on site, with what its tests need; with no board on the phone yet, the board is named here too. */
 export function AddCircuitForm({ siteId, visitId, boards, onAdded }: { siteId: string; visitId: string; boards: BoardRow[]; onAdded?: (circuitId: string) => void }) {
-  const { register, handleSubmit, formState, reset, control, setValue } = useForm<AddCircuitValues>({
+  const draftKey = `new-circuit.${visitId}`;
+  const recorded: AddCircuitValues = { boardId: boards[0]?.id ?? NEW_BOARD, boardName: '', number: '', description: '', ...circuitDetailsOf(null) };
+  const { register, handleSubmit, formState, reset, control, setValue, getValues } = useForm<AddCircuitValues>({
     resolver: zodResolver(addCircuitSchema),
-    defaultValues: { boardId: boards[0]?.id ?? NEW_BOARD, boardName: '', number: '', description: '', ...circuitDetailsOf(null) },
+    defaultValues: startingValues(draftKey, recorded),
   });
+  const draft = useFormDraft(draftKey, useWatch({ control }) as AddCircuitValues, recorded, reset);
   const [saved, setSaved] = useState('');
   const [error, setError] = useState<string | null>(null);
   const boardId = useWatch({ control, name: 'boardId' });
@@ -53,6 +58,8 @@ export function AddCircuitForm({ siteId, visitId, boards, onAdded }: { siteId: s
       await createRecords(items);
       reset({ ...v, boardId: targetBoard, boardName: '', number: '', description: '' });
       setValue('boardId', targetBoard);
+      // The next circuit starts from this one's details: that is a starting point, not something typed.
+      draft.settle(getValues());
       setSaved(`Circuit ${v.number.trim()} saved on this phone.`);
       onAdded?.(circuitId);
     } catch (err) {
@@ -65,6 +72,7 @@ export function AddCircuitForm({ siteId, visitId, boards, onAdded }: { siteId: s
     <Paper variant="outlined" component="form" aria-label="Add a circuit" onSubmit={handleSubmit(add)} noValidate sx={{ p: 2 }}>
       <Stack spacing={1.5}>
         <Typography variant="h3">Add a circuit</Typography>
+        <DraftNotice draft={draft} />
         {boards.length > 0 && (
           <TextField select label="Board" {...register('boardId')} slotProps={select}>
             {boards.map((b) => (

@@ -11,6 +11,8 @@ import ExpandMore from '@mui/icons-material/ExpandMore';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { circuitKindWords } from '@wiretrail/core';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import type { BoardRow, CircuitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
 import {
@@ -60,12 +62,15 @@ export function CircuitDetailsForm({
   earthing?: string | null;
 }) {
   const incomplete = !circuit.deviceType || circuit.deviceRatingA == null || circuit.liveCsaMm2 == null || circuit.cpcCsaMm2 == null || !circuit.faultProtection;
-  const [open, setOpen] = useState(incomplete);
+  const draftKey = locked ? null : `circuit.${circuit.id}`;
+  const recorded = circuitDetailsOf(circuit, visitId, earthing);
   const [note, setNote] = useState('');
-  const { register, handleSubmit, formState, control, setValue, getValues } = useForm<CircuitDetails>({
+  const { register, handleSubmit, formState, control, setValue, getValues, reset } = useForm<CircuitDetails>({
     resolver: zodResolver(circuitDetailsSchema.superRefine(checkCircuitDetails)),
-    defaultValues: circuitDetailsOf(circuit, visitId, earthing),
+    defaultValues: startingValues(draftKey, recorded),
   });
+  const draft = useFormDraft(draftKey, useWatch({ control }) as CircuitDetails, recorded, reset);
+  const [open, setOpen] = useState(incomplete || draft.restored);
   const [kind, deviceType, deviceRatingA, rcdRatingMa, rcdType, rcdStandard, deviceStandard, rcdRatedCurrentA, maxDisconnectionS] = useWatch({
     control,
     name: ['kind', 'deviceType', 'deviceRatingA', 'rcdRatingMa', 'rcdType', 'rcdStandard', 'deviceStandard', 'rcdRatedCurrentA', 'maxDisconnectionS'],
@@ -97,6 +102,7 @@ export function CircuitDetailsForm({
   async function save(v: CircuitDetails) {
     try {
       await saveRecord('circuit', circuit.id, circuitDetailFields(v, visitId, circuit));
+      draft.settle();
       setNote('Circuit details saved on this phone.');
       setOpen(false);
     } catch (err) {
@@ -116,6 +122,7 @@ export function CircuitDetailsForm({
       <AccordionDetails id="circuit-details">
         <Stack component="form" aria-label="Circuit details" noValidate onSubmit={handleSubmit(save)} spacing={1.5}>
           <fieldset disabled={locked} style={{ border: 0, padding: 0, margin: 0, minWidth: 0, display: 'grid', gap: 12 }}>
+            <DraftNotice draft={draft} />
             <CircuitDetailFields register={register} control={control} errors={formState.errors} />
             {board && (
               <FormControlLabel

@@ -21,6 +21,8 @@ import {
 import { type ReactNode, useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { SaveBar } from '@/components/forms/phone-inputs';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import { VERDICT_WORDS } from '@/components/verdicts/verdict-words';
@@ -141,8 +143,11 @@ function Group({ title, children }: { title: string; children: ReactNode }) {
 
 /** The readings for one circuit on this visit; each verdict shows as it is typed. */
 export function ReadingsForm({ visitId, siteId, circuit, result, earthing, extensions, locked, onSaved }: Props) {
-  const { register, control, handleSubmit, formState } = useForm<ReadingsValues>({ resolver: zodResolver(readingsSchema), defaultValues: defaults(result), mode: 'onChange' });
+  const draftKey = locked ? null : `readings.${result?.id ?? `new.${visitId}.${circuit.id}`}`;
+  const recorded = defaults(result);
+  const { register, control, handleSubmit, formState, reset } = useForm<ReadingsValues>({ resolver: zodResolver(readingsSchema), defaultValues: startingValues(draftKey, recorded), mode: 'onChange' });
   const values = useWatch({ control }) as ReadingsValues;
+  const draft = useFormDraft(draftKey, values, recorded, reset);
   const [error, setError] = useState<string | null>(null);
   const errors = formState.errors;
   const assessment = useMemo(() => assess(circuit, fromTyped(values), earthing), [circuit, values, earthing]);
@@ -174,6 +179,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
     try {
       if (result) await saveRecord('testResult', result.id, fields);
       else await createRecord('testResult', { visitId, siteId, circuitId: circuit.id, ...(Object.fromEntries(Object.entries(fields).filter(([, x]) => x !== null)) as Fields) });
+      draft.settle();
       onSaved();
     } catch (err) {
       setError((err as Error).message);
@@ -200,6 +206,7 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
     <Box component="form" aria-label={`Readings for circuit ${circuit.number}`} noValidate onSubmit={handleSubmit(save)}>
       <Box component="fieldset" disabled={locked} sx={{ border: 0, p: 0, m: 0, minWidth: 0 }}>
         <Stack spacing={2}>
+          <DraftNotice draft={draft} />
           {ring && (
             <Group title="Ring continuity, end to end">
               <Stack direction="row" spacing={1}>

@@ -12,6 +12,8 @@ import Typography from '@mui/material/Typography';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { readingField, usableReading } from '@/lib/readings';
 import { createRecord, deleteRecord } from '@/lib/sync/local-write';
 import { useVisitParts } from '../data/get-parts';
@@ -30,13 +32,16 @@ export const partSchema = z
     if (v.priceItemId === TYPED && !v.description.trim()) ctx.addIssue({ code: 'custom', path: ['description'], message: 'Say what the part is.' });
   });
 type PartValues = z.infer<typeof partSchema>;
+const EMPTY_PART: PartValues = { priceItemId: '', description: '', quantity: '1', unit: '' };
 
 const quantityWords = (q: number, unit?: string | null) => `${Number.isInteger(q) ? q : q.toFixed(3).replace(/0+$/, '')}${unit && unit !== 'each' ? `\u00a0${unit}` : ''}`;
 
 /** A quick parts list: pick from the organisation's price list (on the phone, so it works with no signal) or type a line. */
 export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId: string; locked: boolean }) {
   const parts = useVisitParts(visitId);
-  const { register, handleSubmit, formState, reset, control } = useForm<PartValues>({ resolver: zodResolver(partSchema), defaultValues: { priceItemId: '', description: '', quantity: '1', unit: '' } });
+  const draftKey = locked ? null : `part.new.${visitId}`;
+  const { register, handleSubmit, formState, reset, control } = useForm<PartValues>({ resolver: zodResolver(partSchema), defaultValues: startingValues(draftKey, EMPTY_PART) });
+  const draft = useFormDraft(draftKey, useWatch({ control }) as PartValues, EMPTY_PART, reset);
   const [error, setError] = useState<string | null>(null);
   const chosen = useWatch({ control, name: 'priceItemId' });
   const item = parts?.items.get(chosen);
@@ -52,7 +57,8 @@ export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId
         ...(picked ? { priceItemId: picked.id, description: picked.name, unit: picked.unit } : { description: v.description.trim(), ...(v.unit.trim() ? { unit: v.unit.trim() } : {}) }),
         quantity: usableReading(v.quantity)!,
       });
-      reset({ priceItemId: '', description: '', quantity: '1', unit: '' });
+      reset(EMPTY_PART);
+      draft.settle(EMPTY_PART);
     } catch (err) {
       setError((err as Error).message);
     }
@@ -90,6 +96,7 @@ export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId
         )}
         {!locked && (
           <Stack component="form" aria-label="Add a part" noValidate onSubmit={handleSubmit(add)} spacing={1.5}>
+            <DraftNotice draft={draft} />
             <TextField select label="Part" {...register('priceItemId')} error={!!errors.priceItemId} helperText={errors.priceItemId?.message} slotProps={{ select: { native: true }, inputLabel: { shrink: true } }}>
               <option value="">Choose…</option>
               {parts.catalogue.map((g) => (

@@ -27,6 +27,8 @@ import {
 import { useEffect, useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { choicesOf, NativeChoice, SaveBar } from '@/components/forms/phone-inputs';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import { BeforeWorkChecks } from '@/components/verdicts/before-work-checks';
@@ -197,10 +199,17 @@ interface Props {
 
 /** A point added, moved, taken out or replaced: where from and to, and how it joins its circuit. */
 export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselines, site, locked, onSaved }: Props) {
-  const { register, control, handleSubmit, formState, setValue, getValues } = useForm<PointValues>({ resolver: zodResolver(pointSchema), defaultValues: defaults(point) });
+  const draftKey = locked ? null : `point.${point?.id ?? `new.${visitId}`}`;
+  const recorded = { ...defaults(point), route: readRoute(point?.concealedRoute) };
+  const { route: startRoute, ...start } = startingValues(draftKey, recorded);
+  const { register, control, handleSubmit, formState, setValue, getValues, reset } = useForm<PointValues>({ resolver: zodResolver(pointSchema), defaultValues: start });
   const v = useWatch({ control }) as PointValues;
-  const [route, setRoute] = useState<ConcealedRoute | null>(() => readRoute(point?.concealedRoute));
+  const [route, setRoute] = useState<ConcealedRoute | null>(() => readRoute(startRoute));
   const [error, setError] = useState<string | null>(null);
+  const draft = useFormDraft(draftKey, { ...v, route }, recorded, ({ route: r, ...values }) => {
+    reset(values);
+    setRoute(r);
+  });
   const errors = formState.errors as Record<string, { message?: string } | undefined>;
   const circuit = circuits.find((c) => c.id === v.circuitId);
   const baseline = v.circuitId ? ringBaselines.get(v.circuitId) : undefined;
@@ -243,10 +252,13 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
     try {
       if (point) {
         await saveRecord('pointChange', point.id, fields);
+        draft.settle();
         onSaved(point.id);
       } else {
         const created = Object.fromEntries(Object.entries({ visitId, siteId, ...fields }).filter(([, x]) => x !== null)) as Fields;
-        onSaved(await createRecord('pointChange', created));
+        const id = await createRecord('pointChange', created);
+        draft.settle();
+        onSaved(id);
       }
     } catch (err) {
       setError((err as Error).message);
@@ -285,6 +297,7 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
     <Box component="form" aria-label={point ? 'Point change' : 'Record a point change'} noValidate onSubmit={handleSubmit(save)}>
       <Box component="fieldset" disabled={locked} sx={{ border: 0, p: 0, m: 0, minWidth: 0 }}>
         <Stack spacing={2}>
+          <DraftNotice draft={draft} />
           <Controller
             control={control}
             name="action"

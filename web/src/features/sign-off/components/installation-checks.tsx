@@ -5,8 +5,10 @@ import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { BONDING_STATES, EARTHING_CONDUCTOR_STATES, type FieldValue } from '@wiretrail/core';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { DraftNotice } from '@/components/forms/draft-notice';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { choicesOf, NativeChoice, SaveBar } from '@/components/forms/phone-inputs';
 import type { BoardRow, SiteRow } from '@/lib/db';
 import { readingField, readingText, usableReading } from '@/lib/readings';
@@ -56,7 +58,10 @@ function defaults(site: SiteRow | undefined, boards: BoardRow[]): InstallationVa
  * the site and its boards, so what was recorded on an earlier visit is carried here and only needs confirming.
  */
 export function InstallationChecks({ site, boards, locked }: { site: SiteRow | undefined; boards: BoardRow[]; locked: boolean }) {
-  const { register, control, handleSubmit, formState } = useForm<InstallationValues>({ resolver: zodResolver(installationSchema), defaultValues: defaults(site, boards) });
+  const draftKey = locked || !site ? null : `installation.${site.id}`;
+  const recorded = defaults(site, boards);
+  const { register, control, handleSubmit, formState, reset } = useForm<InstallationValues>({ resolver: zodResolver(installationSchema), defaultValues: startingValues(draftKey, recorded) });
+  const draft = useFormDraft(draftKey, useWatch({ control }) as InstallationValues, recorded, reset);
   const [error, setError] = useState<string | null>(null);
   const [note, setNote] = useState('');
   const errors = formState.errors;
@@ -76,6 +81,7 @@ export function InstallationChecks({ site, boards, locked }: { site: SiteRow | u
         const zdb = usableReading(v.zdb[b.id]);
         if (zdb !== (b.zdbOhm ?? null)) await saveRecord('board', b.id, { zdbOhm: zdb });
       }
+      draft.settle();
       setNote('Earthing, bonding and Zdb saved on this phone.');
     } catch (err) {
       setError((err as Error).message);
@@ -91,6 +97,7 @@ export function InstallationChecks({ site, boards, locked }: { site: SiteRow | u
       <fieldset disabled={locked} style={{ border: 0, padding: 0, margin: 0, minWidth: 0 }}>
         <Stack spacing={1.5}>
           <Typography variant="h3">Earthing and bonding</Typography>
+          <DraftNotice draft={draft} disabled={locked} />
           <Typography variant="body2" color="text.secondary">
             As found at the installation, for the certificate. Carried from the last visit to this site: check them again.
           </Typography>

@@ -1,10 +1,17 @@
 /**
  * What a technician has typed into the sign-off and not yet finished, kept on this phone per visit, so that leaving
- * the tab, another section or a reload loses nothing. The signature is never kept: signing is done at the end.
+ * the tab, another section or a reload loses nothing. A signature drawn and not yet finished with is kept too, as its
+ * strokes, so it can be drawn again in the box as it was; it means nothing until the visit is finished.
  */
+import type { PointGroup } from 'signature_pad';
 import type { SignOffValues } from './sign-off-form';
 
-export type SignOffDraft = Partial<Omit<SignOffValues, 'signatureSvg'>>;
+export type SignOffDraft = Partial<SignOffValues> & { signatureStrokes?: PointGroup[] };
+
+const isStroke = (g: unknown): g is PointGroup => {
+  const s = g as Partial<PointGroup> | null;
+  return !!s && typeof s === 'object' && Array.isArray(s.points) && s.points.every((p) => typeof p?.x === 'number' && typeof p?.y === 'number');
+};
 
 const keyOf = (visitId: string) => `wiretrail.sign-off-draft.${visitId}`;
 
@@ -33,6 +40,8 @@ export function readSignOffDraft(visitId: string): SignOffDraft | null {
       permittedExceptions: textOf('permittedExceptions'),
       riskAssessmentRef: textOf('riskAssessmentRef'),
       departureEntries: entries,
+      signatureSvg: textOf('signatureSvg') ?? null,
+      signatureStrokes: Array.isArray(draft.signatureStrokes) && draft.signatureStrokes.every(isStroke) ? (draft.signatureStrokes as PointGroup[]) : undefined,
     };
   } catch {
     // Storage may be unavailable (private mode) or hold something unreadable: start from the visit as recorded.
@@ -40,10 +49,9 @@ export function readSignOffDraft(visitId: string): SignOffDraft | null {
   }
 }
 
-export function writeSignOffDraft(visitId: string, values: Partial<SignOffValues>): void {
-  const { signatureSvg: _signature, ...kept } = values;
+export function writeSignOffDraft(visitId: string, values: SignOffDraft): void {
   try {
-    localStorage.setItem(keyOf(visitId), JSON.stringify(kept));
+    localStorage.setItem(keyOf(visitId), JSON.stringify(values));
   } catch {
     // A full or unavailable storage only loses the draft, never the form as it is on screen.
   }

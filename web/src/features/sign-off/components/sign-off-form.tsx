@@ -19,8 +19,9 @@ import {
   PERMITTED_EXCEPTIONS_REG,
   ruleSetInForce,
 } from '@wiretrail/core';
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
+import type { PointGroup } from 'signature_pad';
 import { z } from 'zod';
 import type { VisitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
@@ -126,8 +127,8 @@ export function SignOffForm({ visit, defaultDescription, signerName, signerPosit
       riskAssessmentRef: draft?.riskAssessmentRef ?? visit.riskAssessmentRef ?? '',
       signedByPosition: draft?.signedByPosition ?? visit.signedByPosition ?? signerPosition,
       signedByName: draft?.signedByName ?? visit.signedByName ?? signerName,
-      // Signing is the last act, so a signature is never kept in a draft.
-      signatureSvg: null,
+      // Drawn again from its strokes below; with no strokes to draw there is no signature to keep.
+      signatureSvg: draft?.signatureStrokes?.length ? (draft.signatureSvg ?? null) : null,
     },
   });
   const departures = useFieldArray({ control, name: 'departureEntries' });
@@ -137,8 +138,10 @@ export function SignOffForm({ visit, defaultDescription, signerName, signerPosit
   const permittedExceptions = useWatch({ control, name: 'permittedExceptions' });
   const declaration = declarationOn(new Date());
 
+  // The strokes behind the signature, kept beside the form so the box can draw them again after a reload.
+  const strokes = useRef<PointGroup[] | undefined>(draft?.signatureStrokes);
   useEffect(() => {
-    const subscription = watch((values) => writeSignOffDraft(visit.id, values as Partial<SignOffValues>));
+    const subscription = watch((values) => writeSignOffDraft(visit.id, { ...(values as Partial<SignOffValues>), signatureStrokes: strokes.current }));
     return () => subscription.unsubscribe();
   }, [watch, visit.id]);
 
@@ -232,7 +235,20 @@ export function SignOffForm({ visit, defaultDescription, signerName, signerPosit
         <Typography variant="body2" component="p" role="note" aria-label="Declaration">
           <strong>Declaration on the certificate.</strong> {declaration}
         </Typography>
-        <Controller control={control} name="signatureSvg" render={({ field }) => <SignatureBox onChange={field.onChange} error={errors.signatureSvg?.message} />} />
+        <Controller
+          control={control}
+          name="signatureSvg"
+          render={({ field }) => (
+            <SignatureBox
+              initialStrokes={strokes.current}
+              onChange={(svg, drawn) => {
+                strokes.current = drawn;
+                field.onChange(svg);
+              }}
+              error={errors.signatureSvg?.message}
+            />
+          )}
+        />
 
         {error && (
           <Alert severity="error" role="alert">

@@ -23,13 +23,27 @@ export function strokesToSvg(groups: PointGroup[], width: number, height: number
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${Math.round(width)} ${Math.round(height)}" width="${Math.round(width)}" height="${Math.round(height)}"><g fill="none" stroke="#14262b" stroke-width="2.5" stroke-linecap="round" stroke-linejoin="round">${paths}</g></svg>`;
 }
 
-/** A box to sign in with a finger; reports the signature as SVG after every stroke, or null once cleared. */
-export function SignatureBox({ onChange, disabled, error }: { onChange: (svg: string | null) => void; disabled?: boolean; error?: string }) {
+/**
+ * A box to sign in with a finger; reports the signature as SVG after every stroke, or null once cleared, with the
+ * strokes themselves so that a draft can draw them again (`initialStrokes`).
+ */
+export function SignatureBox({
+  onChange,
+  disabled,
+  error,
+  initialStrokes,
+}: {
+  onChange: (svg: string | null, strokes: PointGroup[] | undefined) => void;
+  disabled?: boolean;
+  error?: string;
+  initialStrokes?: PointGroup[];
+}) {
   const canvas = useRef<HTMLCanvasElement>(null);
   const pad = useRef<SignaturePad | null>(null);
   // The pad lives as long as the box; a new onChange from a re-render must not wipe the strokes.
   const report = useRef(onChange);
   report.current = onChange;
+  const initial = useRef(initialStrokes);
 
   const [drawable, setDrawable] = useState(true);
 
@@ -45,7 +59,8 @@ export function SignatureBox({ onChange, disabled, error }: { onChange: (svg: st
     el.height = HEIGHT * ratio;
     context.scale(ratio, ratio);
     const p = new SignaturePad(el, { penColor: '#14262b', backgroundColor: 'rgba(0,0,0,0)', minWidth: 1, maxWidth: 3 });
-    const ended = () => report.current(p.isEmpty() ? null : strokesToSvg(p.toData(), el.offsetWidth, HEIGHT));
+    const ended = () => (p.isEmpty() ? report.current(null, undefined) : report.current(strokesToSvg(p.toData(), el.offsetWidth, HEIGHT), p.toData()));
+    if (initial.current?.length) p.fromData(initial.current);
     p.addEventListener('endStroke', ended);
     pad.current = p;
     return () => {
@@ -76,7 +91,7 @@ export function SignatureBox({ onChange, disabled, error }: { onChange: (svg: st
           variant="outlined"
           onClick={() => {
             pad.current?.clear();
-            report.current(null);
+            report.current(null, undefined);
           }}
           disabled={disabled}
         >

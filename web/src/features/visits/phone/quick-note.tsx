@@ -2,13 +2,18 @@ import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { type FormEvent, useState } from 'react';
+import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { createRecord } from '@/lib/sync/local-write';
+
+const EMPTY_NOTE = { text: '' };
 
 /** A note in a few words: saved on the phone at once, sent when there is signal. */
 export function QuickNote({ visitId, siteId, disabled }: { visitId: string; siteId: string; disabled?: boolean }) {
-  const [text, setText] = useState('');
+  const draftKey = disabled ? null : `note.new.${visitId}`;
+  const [text, setText] = useState(() => startingValues(draftKey, EMPTY_NOTE).text);
   const [error, setError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
+  const draft = useFormDraft(draftKey, { text }, EMPTY_NOTE, () => setText(''));
 
   async function onSubmit(e: FormEvent) {
     e.preventDefault();
@@ -19,6 +24,7 @@ export function QuickNote({ visitId, siteId, disabled }: { visitId: string; site
     try {
       await createRecord('note', { visitId, siteId, text: text.trim() });
       setText('');
+      draft.settle(EMPTY_NOTE);
       setError(null);
       setSaved(true);
     } catch (err) {
@@ -40,7 +46,7 @@ export function QuickNote({ visitId, siteId, disabled }: { visitId: string; site
           setSaved(false);
         }}
         error={!!error}
-        helperText={error ?? (saved ? 'Saved on this phone.' : ' ')}
+        helperText={error ?? (saved ? 'Saved on this phone.' : draft.restored && text ? 'Not added yet: kept from before.' : ' ')}
         slotProps={{ htmlInput: { maxLength: 20_000 } }}
       />
       <Button type="submit" variant="outlined" size="large" disabled={disabled} sx={{ minHeight: 56, flexShrink: 0 }}>
