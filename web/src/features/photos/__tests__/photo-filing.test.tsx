@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, configure, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { db, type LocalRow, type PhotoRow, type VisitRow } from '@/lib/db';
 import { setSession } from '@/lib/session';
@@ -21,6 +21,9 @@ vi.mock('@/lib/photos/shrink-photo', () => ({
     };
   },
 }));
+
+// Photos are made ready and written through IndexedDB: on a busy two-core machine a second is not always enough.
+configure({ asyncUtilTimeout: 10_000 });
 
 const USER = { id: '01900000-0000-7000-8000-0000000000aa', email: 'tech1@larkfield.example', name: 'Sam Brannigan', role: 'technician' as const, organisationId: 'o1' };
 const SITE = '01900000-0000-7000-8000-000000000002';
