@@ -96,7 +96,7 @@ export async function officeRows(request: APIRequestContext): Promise<PulledChan
 /** The office books a job and a visit for a technician through the API, so a test has a visit of its own. */
 export async function bookVisit(
   request: APIRequestContext,
-  opts: { technicianEmail: string; siteName: string; title: string; startHour?: number; endHour?: number },
+  opts: { technicianEmail: string; siteName: string; title: string; startHour?: number; endHour?: number; /** Days from today; 0 unless said. */ dayOffset?: number },
 ): Promise<{ jobId: string; visitId: string }> {
   const { accessToken } = await apiSession(request, 'office@larkfield.example');
   const headers = { authorization: `Bearer ${accessToken}` };
@@ -109,6 +109,7 @@ export async function bookVisit(
   const jobId = ((await job.json()) as { id: string }).id;
   const at = (h: number) => {
     const d = new Date();
+    d.setDate(d.getDate() + (opts.dayOffset ?? 0));
     d.setHours(h, 0, 0, 0);
     return d.toISOString();
   };

@@ -26,6 +26,7 @@ import { storageConfig } from './config/storage.config.js';
 import { validateEnvironment } from './config/env.validation.js';
 import { databaseOptions } from './database/typeorm-options.js';
 import { ConflictsModule } from './conflicts/conflicts.module.js';
+import { NotifiableWorkModule } from './notifiable-work/notifiable-work.module.js';
 import { DocumentsModule } from './documents/documents.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InvoicesModule } from './invoices/invoices.module.js';
@@ -95,6 +96,7 @@ function webAppModules(): DynamicModule[] {
     PricingModule,
     InvoicesModule,
     CardPaymentsModule,
+    NotifiableWorkModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: JwtAuthGuard },

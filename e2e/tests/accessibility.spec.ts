@@ -81,8 +81,14 @@ for (const [size, viewport] of [
       };
       const title = `Accessible screens ${size} ${scheme} (${Date.now().toString(36)})`;
       await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 9, endHour: 12 });
+      const tomorrow = `Accessible arrival ${size} ${scheme} (${Date.now().toString(36)})`;
+      await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title: tomorrow, startHour: 9, endHour: 12, dayOffset: 1 });
       await visitPage.openToday();
       await check('today');
+      await visitPage.visitCard(tomorrow).getByRole('button', { name: 'I’m on site' }).click();
+      await expect(page.getByRole('dialog', { name: 'On site for a visit booked tomorrow?' })).toBeVisible();
+      await check('arrival at a visit booked for another day');
+      await page.getByRole('dialog').getByRole('button', { name: 'Not yet' }).click();
 
       await visitPage.openFromToday(title);
       await check('visit trail');
@@ -97,6 +103,9 @@ for (const [size, viewport] of [
       await expect(pointForm.getByRole('status', { name: 'Checks before the work' }).getByRole('listitem', { name: 'New cable' })).toContainText('Iz 13.5 A');
       // Bad input on purpose: the error it shows must be as readable as the rest
       await pointForm.getByLabel('r2 before (Ω)').fill('-1');
+      await pointForm.getByLabel('Check a new concealed cable route').check();
+      await pointForm.getByLabel('Wall width (mm)').fill('-10');
+      await expect(pointForm.getByText('Wall width cannot be negative.')).toBeVisible();
       await check('point form with checks');
       await page.goBack();
 
@@ -181,6 +190,7 @@ for (const [size, viewport] of [
         ['/customers', 'Customers & sites'],
         ['/conflicts', 'Conflicts'],
         ['/invoices', 'Invoices'],
+        ['/notifiable-work', 'Notifications'],
         ['/price-list', 'Price list'],
         ['/team', 'Team'],
       ] as const) {

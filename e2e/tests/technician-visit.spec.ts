@@ -40,7 +40,9 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await card.getByRole('button', { name: 'I’m on site' }).click();
   await expect(card.getByText('On site')).toBeVisible();
   await shot(page, testInfo, 'today');
-  await card.getByRole('link', { name: /^Open / }).click();
+  // Once on site the card's main button opens the visit; signing off sits beside it.
+  await expect(card.getByRole('link', { name: 'Sign off' })).toBeVisible();
+  await card.getByRole('link', { name: 'Open visit' }).click();
   await visitPage.expectVisit(title);
 
   // A data cable terminated T568B at both ends: the wiremap passes.
@@ -223,6 +225,8 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await visitPage.sign();
   await shot(page, testInfo, 'sign-off');
   await page.getByRole('button', { name: 'Finish visit' }).click();
+  // The time left was not typed: it is the time of finishing.
+  const finishedAt = Date.now();
   await page.getByRole('dialog', { name: /Finish with 2 problems listed/ }).getByRole('button', { name: 'Finish anyway' }).click();
   await expect(page.getByText(/Signed off .* by Sam Brannigan/)).toBeVisible();
   await expect(page.getByRole('img', { name: 'Signature of Sam Brannigan' })).toBeVisible();
@@ -260,6 +264,8 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
     ['Switched fused connection unit, white', 1, 'each'],
   ]);
   expect(Date.parse(String(visit.actualEnd))).toBeGreaterThanOrEqual(Date.parse(String(visit.actualStart)));
+  // To the minute, as the form keeps it.
+  expect(Math.abs(Date.parse(String(visit.actualEnd)) - finishedAt)).toBeLessThan(2 * 60_000);
   const photos = live('photo', (r) => r.visitId === visitId);
   expect(photos).toHaveLength(2);
   expect(photos.find((p) => String(p.caption).startsWith('Moved socket'))).toMatchObject({ subjectType: 'pointChange', uploadState: 'ready' });

@@ -19,8 +19,10 @@ import { ALL_SYNC_SCHEMAS } from '../sync/entities/sync-schemas.js';
 import { ShareLink } from '../share-links/entities/share-link.entity.js';
 import { User } from '../users/entities/user.entity.js';
 
+import { BuildingNotification } from '../notifiable-work/entities/building-notification.entity.js';
+
 /** For the migration CLI and scripts; the Nest app registers entities per feature module. */
 export const ALL_ENTITIES = [
   Organisation, User, RefreshToken, PasswordReset, AttemptCount, PhotoBlob, PhotoSender, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
-  VatRate, LabourRate, Invoice, InvoiceLine, Payment, CardCheckout, PaymentEvent, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
+  VatRate, LabourRate, Invoice, InvoiceLine, Payment, CardCheckout, PaymentEvent, BuildingNotification, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
 ];

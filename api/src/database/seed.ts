@@ -44,6 +44,8 @@ interface Scenario {
     phone?: string;
     email?: string;
     registrationNumber?: string;
+    nation?: string;
+    competentPersonScheme?: string;
     timeZone?: string;
     vatNumber?: string;
     paymentTermsDays?: number;
@@ -167,6 +169,7 @@ export async function seedDemoData(
           registrationNumber: o.registrationNumber ?? null, ...(o.timeZone ? { timeZone: o.timeZone } : {}),
           vatNumber: o.vatNumber ?? null, paymentTermsDays: o.paymentTermsDays ?? 30, quoteValidDays: o.quoteValidDays ?? 30,
           paymentTerms: o.paymentTerms ?? null, paymentInstructions: o.paymentInstructions ?? null,
+          ...(o.nation ? { nation: o.nation } : {}), competentPersonScheme: o.competentPersonScheme ?? null,
         }),
       );
       // Every organisation starts with the UK's VAT rates as its own data.

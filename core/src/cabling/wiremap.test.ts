@@ -75,14 +75,29 @@ describe('classifyWiremap', () => {
     expect(result.faults).toEqual([expect.objectContaining({ kind: 'short', pins: [4, 5] })]);
   });
 
-  it('calls other cross-connections miswired', () => {
+  it('calls two wires of different pairs traded at one end one crossed fault, not two miswires', () => {
+    // ANSI/TIA-568 wiremap: a conductor of one pair landing on a pin of another is a cross (C1); one swap is one fault
     // far end: white-orange and blue swapped between pins 1 and 4
     const farEnd = withPins(T568B, { 1: 'blue', 4: 'white-orange' });
     const result = classifyWiremap({ scheme: 'T568B', nearEnd: T568B, farEnd });
+    expect(result.verdict).toBe('fail');
     expect(result.map).toEqual([4, 2, 3, 1, 5, 6, 7, 8]);
+    expect(result.faults.map((f) => [f.kind, f.pins, f.end])).toEqual([['crossed', [1, 4], 'far']]);
+    expect(result.faults[0]?.note).toBe('The wires on pins 1 and 4 have traded places, crossing pair 1,2 with pair 4,5.');
+    // the same swap at the near end is found at the near end
+    const near = classifyWiremap({ scheme: 'T568B', nearEnd: farEnd, farEnd: T568B });
+    expect(near.faults.map((f) => [f.kind, f.pins, f.end])).toEqual([['crossed', [1, 4], 'near']]);
+  });
+
+  it('calls other cross-connections miswired', () => {
+    // far end: three wires rotated between pins 1, 4 and 7: no two simply traded places (ANSI/TIA-568 wiremap, C1)
+    const farEnd = withPins(T568B, { 1: 'white-brown', 4: 'white-orange', 7: 'blue' });
+    const result = classifyWiremap({ scheme: 'T568B', nearEnd: T568B, farEnd });
+    expect(result.map).toEqual([4, 2, 3, 7, 5, 6, 1, 8]);
     expect(result.faults.map((f) => [f.kind, f.pins, f.end])).toEqual([
       ['miswired', [1], 'far'],
       ['miswired', [4], 'far'],
+      ['miswired', [7], 'far'],
     ]);
   });
 

@@ -86,6 +86,7 @@ export function classifyWiremap(input: WiremapInput, rules: RuleSet = DEFAULT_RU
 
   const continuity: WiremapFault[] = [];
   const crossedSeen = new Set<string>();
+  const swapped = new Set<number>();
   for (const [p, q] of SIGNAL_PAIRS) {
     const mp = map[p - 1] ?? null;
     const mq = map[q - 1] ?? null;
@@ -121,8 +122,22 @@ export function classifyWiremap(input: WiremapInput, rules: RuleSet = DEFAULT_RU
     }
     const wrong = [p, q].filter((pin) => {
       const to = map[pin - 1] ?? null;
-      return to !== null && to !== pin;
+      return to !== null && to !== pin && !swapped.has(pin);
     });
+    // Two wires of different pairs traded places at one end: one fault, not a miswire at each pin.
+    for (const pin of [...wrong]) {
+      const to = map[pin - 1] ?? null;
+      if (to === null || swapped.has(pin) || map[to - 1] !== pin) continue;
+      swapped.add(pin);
+      swapped.add(to);
+      const pins = [pin, to].sort((x, y) => x - y);
+      continuity.push({
+        kind: 'crossed',
+        pins,
+        note: `The wires on pins ${pins[0]} and ${pins[1]} have traded places, crossing pair ${pairOf(pins[0]!)} with pair ${pairOf(pins[1]!)}.`,
+      });
+    }
+    wrong.splice(0, wrong.length, ...wrong.filter((pin) => !swapped.has(pin)));
     if (wrong.length > 0) {
       continuity.push({
         kind: 'miswired',
@@ -164,6 +179,11 @@ export function classifyWiremap(input: WiremapInput, rules: RuleSet = DEFAULT_RU
         : `The wiremap fails: ${faults.map(describeFault).join('; ')}.`;
 
   return { verdict, faults, map, source, note };
+}
+
+/** The signal pair a pin belongs to, as its pins: "1,2". */
+function pairOf(pin: number): string {
+  return (SIGNAL_PAIRS.find(([a, b]) => a === pin || b === pin) ?? [pin]).join(',');
 }
 
 function describeFault(fault: WiremapFault): string {

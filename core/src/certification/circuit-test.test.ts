@@ -96,9 +96,9 @@ describe('assessCircuitTest', () => {
   });
 
   it('never infers fault protection by the RCD from a TT supply: the device table applies until it is recorded', () => {
-    // 38.6 Ω is above 0.8 × 1.37 = 1.10 Ω for a B32 (BS 7671:2018+A2:2022 Table 41.3; Appendix 3, trade practice).
+    // 38.6 Ω is above the 1.37 Ω table maximum itself for a B32 (BS 7671:2018+A2:2022 Table 41.3, C1), so that is the limit named.
     const zs = assessCircuitTest({ circuit: RING_B32, readings: { ...PASSING, zsOhm: 38.6 }, earthing: 'TT' }).lines.find((l) => l.key === 'zs')!.result;
-    expect(zs).toMatchObject({ verdict: 'fail', limit: 1.1 });
+    expect(zs).toMatchObject({ verdict: 'fail', limit: 1.37 });
     expect(zs.note).toMatch(/record that as its method of fault protection/);
   });
 

@@ -172,11 +172,25 @@ describe('checkZs (80 % rule for readings taken cold)', () => {
     expect(checkZs({ measured: limit + 0.01, device, ratingA }).verdict).toBe('fail');
   });
 
-  it('fails a reading under the table value but over 80 % of it', () => {
-    // BS 7671:2018+A2:2022 Table 41.3 B32 1.37 Ω; Appendix 3 80 % rule
-    const result = checkZs({ measured: 1.3, device: 'B', ratingA: 32 });
-    expect(result.verdict).toBe('fail');
-    expect(result.note).toMatch(/80 %/);
+  it('fails a reading under the table value but over 80 % of it, and says it is the 80 % limit that is exceeded', () => {
+    // BS 7671:2018+A2:2022 Table 41.3 B32 1.37 Ω (C1); Appendix 3 80 % rule for readings taken cold: 1.10 Ω (D)
+    const result = checkZs({ measured: 1.25, device: 'B', ratingA: 32 });
+    expect(result).toMatchObject({ verdict: 'fail', value: 1.25, limit: 1.1 });
+    expect(result.note).toMatch(/^Zs 1\.25 Ω is above 1\.10 Ω, 80 % of the 1\.37 Ω maximum for a 32 A type B circuit-breaker \(80 % rule of thumb for readings taken cold, BS 7671:2018\+A2:2022 Appendix 3\), though not above the maximum itself/);
+    expect(result.source).toMatch(/Appendix 3/);
+  });
+
+  it('words a reading above the table maximum itself differently, and gives that maximum as the limit', () => {
+    // BS 7671:2018+A2:2022 Table 41.3 B32 1.37 Ω (C1): 1.45 Ω is above the table, not only above 80 % of it
+    const above = checkZs({ measured: 1.45, device: 'B', ratingA: 32 });
+    const between = checkZs({ measured: 1.25, device: 'B', ratingA: 32 });
+    expect(above).toMatchObject({ verdict: 'fail', value: 1.45, limit: 1.37, tabulatedMaxOhm: 1.37 });
+    expect(above.note).toMatch(/^Zs 1\.45 Ω is above the 1\.37 Ω maximum in BS 7671:2018\+A2:2022 Table 41\.3 for a 32 A type B circuit-breaker itself/);
+    expect(above.note).toMatch(/even cold/);
+    expect(above.source).toBe('BS 7671:2018+A2:2022 Table 41.3');
+    expect(above.note).not.toBe(between.note);
+    // exactly the table value is within it, so judged by the 80 % rule (Table 41.3, C1; Appendix 3)
+    expect(checkZs({ measured: 1.37, device: 'B', ratingA: 32 })).toMatchObject({ limit: 1.1 });
   });
 
   it('asks for a check when the reading is missing or 0 Ω', () => {

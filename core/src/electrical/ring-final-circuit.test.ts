@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInputError } from '../check.js';
-import { checkRing, crossConnectedReading, extendRing } from './ring-final-circuit.js';
+import { checkAgainstExtension, checkRing, crossConnectedReading, extendRing } from './ring-final-circuit.js';
 
 // The 50 m ring of 2.5/1.5 mm² twin and earth: D, derived by 50 m × 7.41 and 12.10 mΩ/m (IEC 60228:2004 Tables 1–2)
 const RING_50M = { r1: 0.3705, rn: 0.3705, r2: 0.605, liveCsaMm2: 2.5, cpcCsaMm2: 1.5 } as const;
@@ -145,5 +145,32 @@ describe('extendRing', () => {
     expect(() => extendRing({ ...RING_50M, addedRouteM: Number.POSITIVE_INFINITY })).toThrow(/addedRouteM/);
     expect(() => extendRing({ ...RING_50M, r1: null as unknown as number, addedRouteM: 5 })).toThrow(/r1/);
     expect(() => extendRing({ ...RING_50M, liveCsaMm2: 0, addedRouteM: 5 })).toThrow(InvalidInputError);
+  });
+});
+
+describe('checkAgainstExtension (common trade practice: an extension only adds resistance)', () => {
+  // Predicted after adding 10 m to the 50 m ring: r1 = rn = 0.4446 Ω, r2 = 0.726 Ω (IEC 60228:2004 Tables 1–2, D).
+  const predicted = extendRing({ ...RING_50M, addedRouteM: 10 });
+
+  it('passes readings at or a little above the prediction', () => {
+    expect(checkAgainstExtension({ r1: 0.44, rn: 0.45, r2: 0.73 }, predicted)).toMatchObject({ verdict: 'pass' });
+  });
+
+  it('asks for a check when a reading is lower than predicted by more than 0.05 Ω', () => {
+    // 0.05 Ω: the end-to-end tolerance of GN3 ring continuity step 1 (C1), used as the margin (common trade practice).
+    // r2 0.61 Ω is the ring's reading from before the extension: 0.116 Ω below the 0.726 Ω predicted.
+    const result = checkAgainstExtension({ r1: 0.44, rn: 0.44, r2: 0.61 }, predicted);
+    expect(result).toMatchObject({ verdict: 'check', value: 0.61, limit: 0.73, unit: 'Ω' });
+    expect(result.note).toMatch(/^r2 0\.61 Ω is lower than the 0\.73 Ω predicted after the extension/);
+    expect(result.note).toMatch(/check that the leads were nulled/);
+    expect(result.source).toMatch(/^Common trade practice/);
+    expect(result.source).toMatch(/Guidance Note 3/);
+    // 0.04 Ω below is within the margin (D)
+    expect(checkAgainstExtension({ r1: 0.41, rn: 0.41, r2: 0.69 }, predicted).verdict).toBe('pass');
+  });
+
+  it('waits for all three readings and refuses negative ones', () => {
+    expect(checkAgainstExtension({ r1: 0.44, rn: null, r2: 0.73 }, predicted)).toMatchObject({ verdict: 'check', value: null });
+    expect(() => checkAgainstExtension({ r1: -0.44, rn: 0.44, r2: 0.73 }, predicted)).toThrow(/r1/);
   });
 });

@@ -176,6 +176,45 @@ export function extendRing(input: RingExtensionInput, rules: RuleSet = DEFAULT_R
   };
 }
 
+export interface ExtendedRingReadings {
+  /** The end-to-end readings measured after the extension (Ω); null while not yet measured. */
+  readonly r1: Reading;
+  readonly rn: Reading;
+  readonly r2: Reading;
+}
+
+/**
+ * Compares the end-to-end readings taken after an extension with what it should have made them. An extension only
+ * adds cable, so a reading clearly lower than predicted asks for a look (common trade practice, not a limit in the
+ * standard): a lead not nulled, the wrong pair of ends, a parallel path, or before-readings that were not the ring's.
+ * "Clearly" is the 0.05 Ω the end-to-end readings are held to (GN3 step 1).
+ */
+export function checkAgainstExtension(measured: ExtendedRingReadings, predicted: RingExtension, rules: RuleSet = DEFAULT_RULE_SET): Finding {
+  const tolerance = rules.ring.endToEndTolerance;
+  const source = `Common trade practice (an extension only adds resistance); ${tolerance.value} Ω margin from ${tolerance.source}`;
+  const conductors = (['r1', 'rn', 'r2'] as const).map((name) => ({ name, value: optionalReading(name, measured[name]), expected: predicted[name] }));
+  const low = conductors.filter((c) => c.value !== null && c.expected - c.value > tolerance.value);
+  const base = { name: 'extension', unit: 'Ω', source };
+  if (low.length > 0) {
+    const worst = low.reduce((a, b) => (a.expected - a.value! >= b.expected - b.value! ? a : b));
+    return {
+      ...base,
+      verdict: 'check',
+      value: worst.value,
+      limit: roundTo(worst.expected, ROUNDING),
+      note: `${low.map((c) => `${c.name} ${fmt(c.value!)} Ω`).join(', ')} ${low.length === 1 ? 'is' : 'are'} lower than the ${low.map((c) => `${fmt(c.expected)} Ω`).join(', ')} predicted after the extension, which only adds cable: check that the leads were nulled, that the ends measured are this ring’s, for a parallel path, and that the readings before were right.`,
+    };
+  }
+  const missing = conductors.some((c) => c.value === null);
+  return {
+    ...base,
+    verdict: missing ? 'check' : 'pass',
+    value: null,
+    limit: null,
+    note: missing ? 'Enter r1, rn and r2 to compare them with the prediction.' : 'The end-to-end readings are no lower than the extension predicts.',
+  };
+}
+
 export interface CrossConnectedInput {
   /** End-to-end resistances of the two conductors joined for the test: r1 and r2 for step 3, r1 and rn for step 2. */
   readonly endToEndA: number;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InvalidInputError } from '../check.js';
-import { checkSafeZone, type SafeZoneInput } from './safe-zones.js';
+import { checkSafeZone, type SafeZoneInput, WALL_LIMITS } from './safe-zones.js';
 
 // A 3 m wide, 2.4 m high lounge wall with a double socket-outlet (146 × 86 mm plate) centred 450 mm up, 1.5 m along.
 const WALL = { widthMm: 3000, heightMm: 2400, thicknessMm: 100 };
@@ -26,7 +26,7 @@ describe('checkSafeZone', () => {
       ['rcd', 'pass'],
     ]);
     expect(result.segments).toEqual([
-      { from: { x: 1500, y: 2400 }, to: { x: 1500, y: 493 }, direction: 'vertical', inZone: true },
+      { from: { x: 1500, y: 2400 }, to: { x: 1500, y: 493 }, direction: 'vertical', inZone: true, acceptable: true },
     ]);
     expect(result.source).toMatch(/BS 7671:2018\+A2:2022 Reg 522\.6\.202/);
   });
@@ -168,6 +168,124 @@ describe('checkSafeZone', () => {
     };
     expect(checkSafeZone(input).verdict).toBe('pass');
     expect(checkSafeZone({ ...input, wall: { ...WALL, thicknessMm: 140 } }).verdict).toBe('fail');
+  });
+
+  it('says "within" 150 mm of the top and of a corner when a route leaves the zones', () => {
+    // BS 7671:2018+A2:2022 Reg 522.6.202(i): zones "within 150 mm from the top of the wall" and "within 150 mm of an angle" (C1)
+    const result = checkSafeZone({
+      ...DROP_FROM_CEILING,
+      route: [
+        { x: 700, y: 2400 },
+        { x: 700, y: 1200 },
+      ],
+    });
+    expect(result.verdict).toBe('fail');
+    expect(result.note).toMatch(/keep within 150 mm of the top of the wall, within 150 mm of a corner, or in line with the accessory/);
+    expect(result.note).not.toMatch(/keep to/);
+  });
+
+  it('gives a zone failure the figures of the route, not the depth', () => {
+    // BS 7671:2018+A2:2022 Reg 522.6.202: the 50 mm depth is met by a 25 mm cable; what fails is 1 part outside the zones (C1)
+    const result = checkSafeZone({
+      ...DROP_FROM_CEILING,
+      route: [
+        { x: 700, y: 2400 },
+        { x: 700, y: 1200 },
+      ],
+    });
+    expect(result).toMatchObject({ verdict: 'fail', value: 1, limit: 0, unit: 'part outside a zone' });
+    // without RCD protection but in the zones: the figures are the RCD's, 30 mA (Reg 522.6.202, C1)
+    expect(checkSafeZone({ ...DROP_FROM_CEILING, rcdProtected: false })).toMatchObject({ verdict: 'fail', value: null, limit: 30, unit: 'mA' });
+  });
+
+  it('marks every stretch acceptable when the cable is deep enough that the zones do not apply', () => {
+    // BS 7671:2018+A2:2022 Reg 522.6.202: 60 mm below the surface of a 150 mm wall is 90 mm from the other face (C1)
+    const result = checkSafeZone({
+      ...DROP_FROM_CEILING,
+      wall: { ...WALL, thicknessMm: 150 },
+      depthMm: 60,
+      route: [
+        { x: 700, y: 2400 },
+        { x: 700, y: 1200 },
+        { x: 1500, y: 1200 },
+      ],
+    });
+    expect(result).toMatchObject({ verdict: 'pass', zonesApply: false, fromOtherFaceMm: 90 });
+    expect(result.segments.map((s) => [s.inZone, s.acceptable])).toEqual([
+      [false, true],
+      [false, true],
+    ]);
+  });
+
+  it('holds a cable within 50 mm of the other face of a thin partition to the zones', () => {
+    // BS 7671:2018+A2:2022 Reg 522.6.202: "at a depth of less than 50 mm from a surface of the wall or partition" — either face (C1)
+    // A 75 mm stud partition (common trade size, from memory), cable 60 mm below this face: 15 mm from the back face.
+    const partition = { ...WALL, thicknessMm: 75 };
+    const across = [
+      { x: 700, y: 2400 },
+      { x: 700, y: 1200 },
+    ];
+    const result = checkSafeZone({ ...DROP_FROM_CEILING, wall: partition, depthMm: 60, route: across });
+    expect(result).toMatchObject({ verdict: 'fail', zonesApply: true, fromOtherFaceMm: 15 });
+    expect(result.note).toMatch(/15 mm from the other face of this 75 mm wall/);
+    expect(result.segments[0]).toMatchObject({ inZone: false, acceptable: false });
+    // In line with the socket, which is in line on both faces of a wall up to 100 mm thick (Reg 522.6.202, C1): passes.
+    expect(checkSafeZone({ ...DROP_FROM_CEILING, wall: partition, depthMm: 60 }).verdict).toBe('pass');
+    // And it needs the 30 mA RCD like any cable relying on the zones (Reg 522.6.202, C1).
+    expect(checkSafeZone({ ...DROP_FROM_CEILING, wall: partition, depthMm: 60, rcdProtected: false }).verdict).toBe('fail');
+    // 50 mm from the back face is not "less than 50 mm" (Reg 522.6.202, C1): a 110 mm wall, 60 mm deep.
+    expect(checkSafeZone({ ...DROP_FROM_CEILING, wall: { ...WALL, thicknessMm: 110 }, depthMm: 60, route: across }).verdict).toBe('pass');
+  });
+
+  it('judges the other face of a thick wall by the accessories on that face', () => {
+    // BS 7671:2018+A2:2022 Reg 522.6.202: zones reach the reverse side only through walls up to 100 mm thick (C1)
+    const thick = { ...WALL, thicknessMm: 140 };
+    const backSocket = { x: 2200, y: 1200, widthMm: 86, heightMm: 86, onReverseFace: true };
+    const down = [
+      { x: 2200, y: 2400 },
+      { x: 2200, y: 1243 },
+    ];
+    // 120 mm deep: 20 mm from the back face, in line with the socket there
+    expect(checkSafeZone({ ...DROP_FROM_CEILING, wall: thick, depthMm: 120, accessories: [SOCKET, backSocket], route: down }).verdict).toBe('pass');
+    // the front socket's zone does not reach the back of a 140 mm wall
+    const front = [
+      { x: 1500, y: 2400 },
+      { x: 1500, y: 493 },
+    ];
+    expect(checkSafeZone({ ...DROP_FROM_CEILING, wall: thick, depthMm: 120, accessories: [SOCKET, backSocket], route: front }).verdict).toBe('fail');
+  });
+
+  it('asks for the thickness before passing a cable 50 mm or more below this face', () => {
+    // BS 7671:2018+A2:2022 Reg 522.6.202: without the thickness, the distance from the other face is unknown (C1)
+    const result = checkSafeZone({
+      ...DROP_FROM_CEILING,
+      wall: { widthMm: 3000, heightMm: 2400 },
+      depthMm: 60,
+      route: [
+        { x: 700, y: 2400 },
+        { x: 700, y: 1200 },
+      ],
+    });
+    expect(result).toMatchObject({ verdict: 'check', zonesApply: false, fromOtherFaceMm: null });
+    expect(result.note).toMatch(/enter the wall’s thickness/);
+    expect(result.segments[0]).toMatchObject({ inZone: false, acceptable: null });
+  });
+
+  it('still needs the RCD at any depth in a metal-framed partition', () => {
+    // BS 7671:2018+A2:2022 Reg 522.6.203: metallic parts, irrespective of depth (C1)
+    const result = checkSafeZone({ ...DROP_FROM_CEILING, wall: { ...WALL, thicknessMm: 75, hasMetallicParts: true }, depthMm: 60, rcdProtected: false });
+    expect(result.verdict).toBe('fail');
+    expect(result.findings.map((f) => f.name)).toEqual(['metallic-wall', 'route-in-zones', 'rcd']);
+  });
+
+  it('refuses figures no wall has', () => {
+    // Plausibility bounds of our own (WALL_LIMITS), not from the standard.
+    const bad = (change: Partial<SafeZoneInput>) => () => checkSafeZone({ ...DROP_FROM_CEILING, ...change });
+    expect(bad({ wall: { ...WALL, thicknessMm: undefined }, depthMm: 99_999 })).toThrow(/depthMm: 99999 mm is deeper than any wall/);
+    expect(bad({ wall: { ...WALL, widthMm: 299 } })).toThrow(/wall\.widthMm: must be from 300 to 30000 mm/);
+    expect(bad({ wall: { ...WALL, heightMm: 10_001 } })).toThrow(/wall\.heightMm/);
+    expect(bad({ wall: { ...WALL, thicknessMm: 2_000 } })).toThrow(/wall\.thicknessMm/);
+    expect(WALL_LIMITS.depthMm.max).toBe(1_000);
   });
 
   it('rejects routes and walls outside physical sense', () => {

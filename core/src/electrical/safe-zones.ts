@@ -26,7 +26,10 @@ export interface WallPoint {
 export interface Wall {
   readonly widthMm: number;
   readonly heightMm: number;
-  /** Needed only when an accessory is on the reverse face. */
+  /**
+   * Needed when an accessory is on the reverse face, and to judge a cable 50 mm or more below this face, which may
+   * still be within 50 mm of the other one.
+   */
   readonly thicknessMm?: number;
   /** Metal studs, metal lath or similar inside the wall (fixings do not count). */
   readonly hasMetallicParts?: boolean;
@@ -85,21 +88,41 @@ export interface SafeZoneInput {
   readonly protection?: ConcealedCableProtection;
 }
 
+/**
+ * Plausibility bounds for what is typed about a wall: our own, not the standard's. Below the minimum a wall has no
+ * room for a zone drawing; above the maximum the figure is a slip of the finger (no room in a home or small office
+ * has a 30 m wall, and no wall is a metre thick).
+ */
+export const WALL_LIMITS = Object.freeze({
+  widthMm: { min: 300, max: 30_000 },
+  heightMm: { min: 300, max: 10_000 },
+  thicknessMm: { min: 25, max: 1_000 },
+  depthMm: { min: 0, max: 1_000 },
+});
+
 export type SegmentDirection = 'horizontal' | 'vertical' | 'diagonal' | 'point';
 
 export interface RouteSegment {
   readonly from: WallPoint;
   readonly to: WallPoint;
   readonly direction: SegmentDirection;
+  /** Within a zone of every face the cable is near (this face's zones when it is near neither). */
   readonly inZone: boolean;
+  /**
+   * Whether this stretch may be where it is: in a zone, or where the zones do not apply; null while that depends on
+   * what is not yet known (the thickness of the wall).
+   */
+  readonly acceptable: boolean | null;
 }
 
-/** `value` is the cable depth and `limit` the depth below which the zone rules apply (mm). */
+/** `value`, `limit` and `unit` are those of the finding that decided the verdict (the depth when all pass). */
 export interface SafeZoneCheck extends CheckResult {
   readonly findings: readonly Finding[];
   readonly segments: readonly RouteSegment[];
   /** False when the cable is deep enough, or protected well enough, that the zones do not matter. */
   readonly zonesApply: boolean;
+  /** Distance from the other face (mm) where the thickness is known. */
+  readonly fromOtherFaceMm: number | null;
 }
 
 interface Interval {
@@ -109,8 +132,12 @@ interface Interval {
 
 export function checkSafeZone(input: SafeZoneInput, rules: RuleSet = DEFAULT_RULE_SET): SafeZoneCheck {
   const zoneRules = rules.safeZones;
+  const maxDepth = zoneRules.maxDepthMm.value;
   const wall = readWall(input.wall);
   const depthMm = requireNonNegative('depthMm', input.depthMm);
+  if (depthMm > WALL_LIMITS.depthMm.max) {
+    throw new InvalidInputError('depthMm', `${depthMm} mm is deeper than any wall (at most ${WALL_LIMITS.depthMm.max} mm)`);
+  }
   if (wall.thicknessMm !== undefined && depthMm > wall.thicknessMm) {
     throw new InvalidInputError('depthMm', `${depthMm} mm is deeper than the ${wall.thicknessMm} mm wall`);
   }
@@ -123,14 +150,30 @@ export function checkSafeZone(input: SafeZoneInput, rules: RuleSet = DEFAULT_RUL
   const rcdRatedMa = requirePositive('rcdRatedMa', input.rcdRatedMa ?? 30);
   const rcdOk = input.rcdProtected && rcdRatedMa <= zoneRules.rcdMaxMa.value;
 
-  // Zones reach through a thin wall, so accessories on the far face count only then.
-  const throughWall = wall.thicknessMm !== undefined && wall.thicknessMm <= zoneRules.throughWallMaxThicknessMm.value;
-  const serving = accessories.filter((a) => !a.onReverseFace || throughWall);
-  const { columns, rows } = zoneBands(wall, serving, rules);
-  const segments = route.slice(1).map((to, i) => judgeSegment(route[i] as WallPoint, to, columns, rows));
+  // "Less than 50 mm from a surface": either face of the wall or partition, so the far face counts as well.
+  const fromOtherFaceMm = wall.thicknessMm === undefined ? null : wall.thicknessMm - depthMm;
+  const nearThisFace = depthMm < maxDepth;
+  const nearOtherFace = fromOtherFaceMm !== null && fromOtherFaceMm < maxDepth;
+  const otherFaceUnknown = !nearThisFace && fromOtherFaceMm === null;
 
-  const depthBase = { value: depthMm, limit: zoneRules.maxDepthMm.value, unit: 'mm' };
+  // Zones reach through a thin wall, so an accessory counts on the face it is on, and on both through a thin wall.
+  const throughWall = wall.thicknessMm !== undefined && wall.thicknessMm <= zoneRules.throughWallMaxThicknessMm.value;
+  const thisFace = zoneBands(wall, accessories.filter((a) => !a.onReverseFace || throughWall), rules);
+  // The ends that are angles on this face are taken to be angles on the other face too.
+  const otherFace = zoneBands(wall, accessories.filter((a) => a.onReverseFace || throughWall), rules);
+  const faces = [...(nearThisFace || !nearOtherFace ? [thisFace] : []), ...(nearOtherFace ? [otherFace] : [])];
+  const judged = route.slice(1).map((to, i) => {
+    const from = route[i] as WallPoint;
+    const onFaces = faces.map((f) => judgeSegment(from, to, f.columns, f.rows));
+    return { ...onFaces[0]!, inZone: onFaces.every((s) => s.inZone) };
+  });
+
+  const depthBase = { value: depthMm, limit: maxDepth, unit: 'mm' };
   const findings: Finding[] = [];
+  const settle = (zonesApply: boolean, source: string, undecided = false) => {
+    const segments = judged.map((s) => ({ ...s, acceptable: s.inZone || (!zonesApply && !undecided) ? true : undecided ? null : false }));
+    return summarise(findings, segments, zonesApply, depthBase, source, fromOtherFaceMm);
+  };
 
   if (protection !== 'none') {
     findings.push({
@@ -140,7 +183,7 @@ export function checkSafeZone(input: SafeZoneInput, rules: RuleSet = DEFAULT_RUL
       source: zoneRules.protectionMethodsSource,
       note: `The cable is protected by ${PROTECTION_WORDS[protection]}, so it may run anywhere in the wall at any depth.`,
     });
-    return summarise(findings, segments, false, depthBase, zoneRules.protectionMethodsSource);
+    return settle(false, zoneRules.protectionMethodsSource);
   }
 
   if (wall.hasMetallicParts) {
@@ -157,33 +200,48 @@ export function checkSafeZone(input: SafeZoneInput, rules: RuleSet = DEFAULT_RUL
     });
   }
 
-  const zonesApply = depthMm < zoneRules.maxDepthMm.value;
-  if (!zonesApply) {
+  if (otherFaceUnknown) {
+    findings.push({
+      name: 'depth',
+      verdict: 'check',
+      ...depthBase,
+      source: zoneRules.maxDepthMm.source,
+      note: `At ${depthMm} mm deep the cable is at least ${maxDepth} mm below this face; enter the wall’s thickness, since a cable less than ${maxDepth} mm from the other face is held to the zones as well.`,
+    });
+    return settle(false, zoneRules.maxDepthMm.source, true);
+  }
+
+  if (!nearThisFace && !nearOtherFace) {
     findings.push({
       name: 'depth',
       verdict: 'pass',
       ...depthBase,
       source: zoneRules.maxDepthMm.source,
-      note: `At ${depthMm} mm deep the cable is at least ${zoneRules.maxDepthMm.value} mm below the surface, so the zone rules do not apply.`,
+      note: `At ${depthMm} mm deep in a ${wall.thicknessMm} mm wall the cable is at least ${maxDepth} mm from both faces, so the zone rules do not apply.`,
     });
-    return summarise(findings, segments, false, depthBase, zoneRules.maxDepthMm.source);
+    return settle(false, zoneRules.maxDepthMm.source);
   }
 
-  const outside = segments.filter((s) => !s.inZone);
+  const outside = judged.filter((s) => !s.inZone);
   const diagonal = outside.some((s) => s.direction === 'diagonal');
+  const where = nearOtherFace
+    ? nearThisFace
+      ? `The cable is less than ${maxDepth} mm from both faces of this ${wall.thicknessMm} mm partition, so it must keep to the zones of both. `
+      : `The cable is ${fromOtherFaceMm} mm from the other face of this ${wall.thicknessMm} mm wall, so it must keep to the zones of that face. `
+    : '';
   findings.push({
     name: 'route-in-zones',
     verdict: outside.length === 0 ? 'pass' : 'fail',
     value: outside.length,
     limit: 0,
-    unit: 'segments outside a zone',
+    unit: outside.length === 1 ? 'part outside a zone' : 'parts outside a zone',
     source: zoneRules.maxDepthMm.source,
     note:
       outside.length === 0
-        ? 'Every part of the route runs horizontally or vertically within a permitted zone.'
+        ? `${where}Every part of the route runs horizontally or vertically within a permitted zone.`
         : diagonal
-          ? `${partsOutside(outside.length)} the zones, including a diagonal run, which is never in a zone.`
-          : `${partsOutside(outside.length)} the zones: keep to the top ${zoneRules.topOfWallBandMm.value} mm, ${zoneRules.angleBandMm.value} mm from a corner, or in line with the accessory.`,
+          ? `${where}${partsOutside(outside.length)} the zones, including a diagonal run, which is never in a zone.`
+          : `${where}${partsOutside(outside.length)} the zones: keep within ${zoneRules.topOfWallBandMm.value} mm of the top of the wall, within ${zoneRules.angleBandMm.value} mm of a corner, or in line with the accessory.`,
   });
   findings.push({
     name: 'rcd',
@@ -194,9 +252,9 @@ export function checkSafeZone(input: SafeZoneInput, rules: RuleSet = DEFAULT_RUL
     source: zoneRules.rcdMaxMa.source,
     note: rcdOk
       ? `The cable has ${zoneRules.rcdMaxMa.value} mA RCD protection, as a cable relying on the zones needs.`
-      : `A cable less than ${zoneRules.maxDepthMm.value} mm deep that relies on the zones also needs ${zoneRules.rcdMaxMa.value} mA RCD protection.`,
+      : `A cable less than ${maxDepth} mm from a face of the wall that relies on the zones also needs ${zoneRules.rcdMaxMa.value} mA RCD protection.`,
   });
-  return summarise(findings, segments, true, depthBase, zoneRules.maxDepthMm.source);
+  return settle(true, zoneRules.maxDepthMm.source);
 }
 
 function partsOutside(count: number): string {
@@ -209,17 +267,21 @@ function summarise(
   zonesApply: boolean,
   depthBase: { value: number; limit: number; unit: string },
   source: string,
+  fromOtherFaceMm: number | null,
 ): SafeZoneCheck {
   const verdict = worstVerdict(findings.map((f) => f.verdict));
   const first = findings.find((f) => f.verdict === verdict) ?? findings[0];
+  // The figures shown beside a failure are those of what failed: a route outside the zones is not a depth problem.
+  const figures = first && verdict !== 'pass' ? { value: first.value, limit: first.limit, unit: first.unit } : depthBase;
   return {
     verdict,
-    ...depthBase,
+    ...figures,
     source: [...new Set([source, ...findings.map((f) => f.source)])].join('; '),
     note: first?.note ?? '',
     findings,
     segments,
     zonesApply,
+    fromOtherFaceMm,
   };
 }
 
@@ -242,7 +304,9 @@ function zoneBands(
   return { columns, rows };
 }
 
-function judgeSegment(from: WallPoint, to: WallPoint, columns: Interval[], rows: Interval[]): RouteSegment {
+type JudgedSegment = Omit<RouteSegment, 'acceptable'>;
+
+function judgeSegment(from: WallPoint, to: WallPoint, columns: Interval[], rows: Interval[]): JudgedSegment {
   if (from.x === to.x && from.y === to.y) return { from, to, direction: 'point', inZone: true };
   if (from.x !== to.x && from.y !== to.y) return { from, to, direction: 'diagonal', inZone: false };
   if (from.x === to.x) {
@@ -283,13 +347,21 @@ interface ReadWall {
 function readWall(wall: Wall | undefined): ReadWall {
   if (typeof wall !== 'object' || wall === null) throw new InvalidInputError('wall', 'is required');
   return {
-    widthMm: requirePositive('wall.widthMm', wall.widthMm),
-    heightMm: requirePositive('wall.heightMm', wall.heightMm),
-    thicknessMm: wall.thicknessMm === undefined ? undefined : requirePositive('wall.thicknessMm', wall.thicknessMm),
+    widthMm: requireWithin('wall.widthMm', wall.widthMm, WALL_LIMITS.widthMm),
+    heightMm: requireWithin('wall.heightMm', wall.heightMm, WALL_LIMITS.heightMm),
+    thicknessMm: wall.thicknessMm === undefined ? undefined : requireWithin('wall.thicknessMm', wall.thicknessMm, WALL_LIMITS.thicknessMm),
     hasMetallicParts: wall.hasMetallicParts === true,
     angleAtLeft: wall.angleAtLeft !== false,
     angleAtRight: wall.angleAtRight !== false,
   };
+}
+
+function requireWithin(field: string, value: unknown, bounds: { readonly min: number; readonly max: number }): number {
+  const n = requirePositive(field, value);
+  if (n < bounds.min || n > bounds.max) {
+    throw new InvalidInputError(field, `must be from ${bounds.min} to ${bounds.max} mm, got ${n}`);
+  }
+  return n;
 }
 
 function readAccessories(accessories: readonly WallAccessory[] | undefined, wall: ReadWall): WallAccessory[] {

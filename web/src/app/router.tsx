@@ -42,6 +42,7 @@ const officeScreens: RouteObject[] = [
   { path: paths.conflicts.path, lazy: () => import('./routes/office/conflicts') },
   { path: paths.invoices.path, lazy: () => import('./routes/office/invoices') },
   { path: paths.jobInvoices.path, lazy: () => import('./routes/office/job-invoices') },
+  { path: paths.notifiableWork.path, lazy: () => import('./routes/office/notifiable-work') },
   { path: paths.priceList.path, lazy: () => import('./routes/office/price-list') },
   {
     element: <RequireRole roles={['admin']} />,

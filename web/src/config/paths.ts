@@ -32,6 +32,8 @@ export const paths = {
   invoices: { path: '/invoices', label: 'Invoices' },
   /** One job's quotes, invoices and credit notes, reached from the invoices screen. */
   jobInvoices: { path: '/invoices/jobs/:jobId', href: (jobId: string) => `/invoices/jobs/${encodeURIComponent(jobId)}` },
+  /** Work to notify under the Building Regulations, overdue first. */
+  notifiableWork: { path: '/notifiable-work', label: 'Notifications' },
   priceList: { path: '/price-list', label: 'Price list' },
   team: { path: '/team', label: 'Team' },
   account: { path: '/account', label: 'My account' },

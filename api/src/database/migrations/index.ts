@@ -14,6 +14,7 @@ import { CertificateContent1796471619935 } from './1796471619935-CertificateCont
 import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefunds.js';
 import { RecordedAt1796490000000 } from './1796490000000-RecordedAt.js';
 import { BillOnce1796490500000 } from './1796490500000-BillOnce.js';
+import { NotifiableWork1796500000000 } from './1796500000000-NotifiableWork.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -33,4 +34,5 @@ export const MIGRATIONS = [
   AttemptsAndRefunds1796481200000,
   RecordedAt1796490000000,
   BillOnce1796490500000,
+  NotifiableWork1796500000000,
 ];

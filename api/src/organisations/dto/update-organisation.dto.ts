@@ -1,6 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsEmail, IsOptional, IsString, IsTimeZone, MaxLength, MinLength } from 'class-validator';
+import { NATIONS } from '@wiretrail/core';
+import { ArrayMaxSize, ArrayUnique, IsArray, IsBoolean, IsEmail, IsIn, IsOptional, IsString, IsTimeZone, MaxLength, MinLength } from 'class-validator';
 
 export class UpdateOrganisationDto {
   @ApiPropertyOptional() @IsOptional() @IsString() @MinLength(1, { message: 'name must not be empty' }) @MaxLength(200)
@@ -37,6 +38,18 @@ export class UpdateOrganisationDto {
   @MinLength(1, { each: true, message: 'photoTags must not hold an empty tag' })
   @MaxLength(40, { each: true, message: 'each of photoTags must be at most 40 characters' })
   photoTags?: string[];
+
+  @ApiPropertyOptional({ enum: NATIONS, description: 'the nation whose Building Regulations decide what work is notifiable' })
+  @IsOptional() @IsIn(NATIONS, { message: `nation must be one of ${NATIONS.join(', ')}` })
+  nation?: string;
+
+  @ApiPropertyOptional({ description: 'the competent person scheme the contractor notifies through', example: 'Example Scheme Ltd' })
+  @IsOptional()
+  @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
+  @IsString({ message: 'competentPersonScheme must be text' })
+  @MinLength(1, { message: 'competentPersonScheme must not be empty' })
+  @MaxLength(100, { message: 'competentPersonScheme must be at most 100 characters' })
+  competentPersonScheme?: string;
 
   @ApiPropertyOptional({ description: 'keep location (GPS) metadata in the photo sizes the server makes; off by default' })
   @IsOptional() @IsBoolean({ message: 'keepPhotoLocation must be true or false' })

@@ -47,6 +47,14 @@ export class Organisation extends BaseRow {
   @Column({ type: 'varchar', length: 1000, nullable: true })
   paymentTerms: string | null;
 
+  /** Which nation's Building Regulations the contractor works under (NATIONS in core): decides what is notifiable. */
+  @Column({ type: 'varchar', length: 30, default: 'england' })
+  nation: string;
+
+  /** The competent person scheme the contractor notifies through, by name. */
+  @Column({ type: 'varchar', length: 100, nullable: true })
+  competentPersonScheme: string | null;
+
   /** How to pay other than by card: the bank account, who cheques are payable to. */
   @Column({ type: 'varchar', length: 1000, nullable: true })
   paymentInstructions: string | null;

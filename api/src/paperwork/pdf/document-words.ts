@@ -59,7 +59,8 @@ export function limitWords(line: CircuitTestLine): string {
       return 'correct';
     case 'zs':
       if (r.limit === null) return '';
-      return r.tabulatedMaxOhm ? `≤ ${figure(r.limit, r.unit)} (80 % of ${figure(r.tabulatedMaxOhm, r.unit)})` : `≤ ${figure(r.limit, r.unit)}`;
+      // A reading above the table itself is judged against the table, not its 80 %.
+      return r.tabulatedMaxOhm && r.limit !== r.tabulatedMaxOhm ? `≤ ${figure(r.limit, r.unit)} (80 % of ${figure(r.tabulatedMaxOhm, r.unit)})` : `≤ ${figure(r.limit, r.unit)}`;
     case 'rcd-1x':
     case 'rcd-5x':
       if (r.limit === null) return '';

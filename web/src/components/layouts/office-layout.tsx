@@ -1,4 +1,5 @@
 import CalendarMonthOutlined from '@mui/icons-material/CalendarMonthOutlined';
+import AssignmentTurnedInOutlined from '@mui/icons-material/AssignmentTurnedInOutlined';
 import CallSplitOutlined from '@mui/icons-material/CallSplitOutlined';
 import GroupsOutlined from '@mui/icons-material/GroupsOutlined';
 import HomeWorkOutlined from '@mui/icons-material/HomeWorkOutlined';
@@ -35,6 +36,7 @@ const NAV = [
   { ...paths.customers, icon: <HomeWorkOutlined />, adminOnly: false },
   { ...paths.conflicts, icon: <CallSplitOutlined />, adminOnly: false },
   { ...paths.invoices, icon: <ReceiptLongOutlined />, adminOnly: false },
+  { ...paths.notifiableWork, icon: <AssignmentTurnedInOutlined />, adminOnly: false },
   { ...paths.priceList, icon: <SellOutlined />, adminOnly: false },
   { ...paths.team, icon: <GroupsOutlined />, adminOnly: true },
 ];

@@ -8,6 +8,7 @@ import { PostgresCertificateContent1796471619935 } from './1796471619935-Postgre
 import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-PostgresAttemptsAndRefunds.js';
 import { PostgresRecordedAt1796490000001 } from './1796490000001-PostgresRecordedAt.js';
 import { PostgresBillOnce1796490500001 } from './1796490500001-PostgresBillOnce.js';
+import { PostgresNotifiableWork1796500000001 } from './1796500000001-PostgresNotifiableWork.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -21,4 +22,5 @@ export const POSTGRES_MIGRATIONS = [
   PostgresAttemptsAndRefunds1796481200001,
   PostgresRecordedAt1796490000001,
   PostgresBillOnce1796490500001,
+  PostgresNotifiableWork1796500000001,
 ];

@@ -76,7 +76,17 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
         <ToggleButton value="nearEnd">{endNames.nearEnd}</ToggleButton>
         <ToggleButton value="farEnd">{endNames.farEnd}</ToggleButton>
       </ToggleButtonGroup>
-      <Box component="table" sx={{ width: '100%', borderCollapse: 'collapse', '& td, & th': { py: 0.5, px: 0.5, textAlign: 'left' } }} aria-label={`${endName}: pins`}>
+      {/* Fixed columns: a striped colour's name wraps inside its own cell instead of pushing the next one over. */}
+      <Box
+        component="table"
+        sx={{ width: '100%', tableLayout: 'fixed', borderCollapse: 'collapse', '& td, & th': { py: 0.5, px: 0.5, textAlign: 'left', verticalAlign: 'middle' } }}
+        aria-label={`${endName}: pins`}
+      >
+        <colgroup>
+          <col style={{ width: 36 }} />
+          <col style={{ width: '42%' }} />
+          <col />
+        </colgroup>
         <thead>
           <tr>
             <Typography component="th" variant="caption" color="text.secondary">Pin</Typography>
@@ -92,9 +102,11 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
               <tr key={pin}>
                 <Typography component="td" sx={{ fontWeight: 500, width: 36 }}>{pin}</Typography>
                 <td>
-                  <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
+                  <Stack direction="row" spacing={1} sx={{ alignItems: 'center', minWidth: 0 }}>
                     <ConductorSwatch colour={expected[pin - 1]!} size={22} />
-                    <Typography variant="body2">{colourWords(expected[pin - 1]!)}</Typography>
+                    <Typography variant="body2" sx={{ minWidth: 0, overflowWrap: 'anywhere' }}>
+                      <ColourName colour={expected[pin - 1]!} />
+                    </Typography>
                   </Stack>
                 </td>
                 <td>
@@ -106,10 +118,24 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
                     // Named by the words it shows, after the pin it is for.
                     aria-label={`${endName} pin ${pin}: ${value ? colourWords(seen) : 'Tap to record'}${differs ? ', not as the scheme has it' : ''}`}
                     startIcon={value ? <ConductorSwatch colour={seen} size={22} /> : undefined}
-                    sx={{ justifyContent: 'flex-start', width: '100%', textTransform: 'none', px: 1.5, ...(differs ? { borderWidth: 2, fontWeight: 700 } : {}) }}
+                    sx={{
+                      justifyContent: 'flex-start',
+                      width: '100%',
+                      minWidth: 0,
+                      textTransform: 'none',
+                      textAlign: 'left',
+                      lineHeight: 1.25,
+                      px: 1,
+                      '& .MuiButton-startIcon': { ml: 0, mr: 0.75 },
+                      // A locked wiremap still shows which pins are wrong, in either theme.
+                      ...(differs ? { borderWidth: 2, fontWeight: 700, '&.Mui-disabled, [data-wt-scheme="dark"] &.Mui-disabled': { borderWidth: 2, borderColor: 'error.main', color: 'error.main' } } : {}),
+                    }}
                   >
-                    {value ? colourWords(seen) : 'Tap to record'}
-                    {differs ? ' ✕' : ''}
+                    {/* One flex item, so the words wrap as words (after the stripe's slash), not letter by letter. */}
+                    <Box component="span" sx={{ minWidth: 0 }}>
+                      {value ? <ColourName colour={seen} /> : 'Tap to record'}
+                      {differs ? ' ✕' : ''}
+                    </Box>
                   </Button>
                 </td>
               </tr>
@@ -175,6 +201,22 @@ export function WiremapEntry({ scheme, endNames, value, onChange, disabled }: Pr
         />
       )}
     </Stack>
+  );
+}
+
+/** A colour's name, which may break after the stripe's slash on a narrow screen: "white/ orange". */
+function ColourName({ colour }: { colour: ConductorColour | null }) {
+  const [first, ...rest] = colourWords(colour).split('/');
+  return (
+    <>
+      {first}
+      {rest.map((part) => (
+        <span key={part}>
+          /<wbr />
+          {part}
+        </span>
+      ))}
+    </>
   );
 }
 

@@ -4,7 +4,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { db } from '@/lib/db';
-import { addRing, at, ids, loadScreens, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
+import { addRing, at, base, ids, loadScreens, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
 
 const screenPath = paths.visitCircuit.href(ids.visit, ids.circuit);
 
@@ -72,6 +72,40 @@ describe('readings for a circuit', { timeout: 30_000 }, () => {
       lines: { 'ring-r1-rn': 'pass', 'ring-r2': 'pass', r1r2: 'pass', 'ir-live-live': 'pass', 'ir-live-earth': 'pass', polarity: 'pass', zs: 'pass', 'rcd-1x': 'pass' },
       missing: [],
     });
+  });
+
+  it('words a Zs above the table maximum apart from one above 80 % of it, naming the limit exceeded', async () => {
+    show(screenPath);
+    const f = await form();
+    // B32: 1.25 Ω is above 0.8 × 1.37 = 1.10 Ω (BS 7671:2018+A2:2022 Table 41.3 and Appendix 3), not above 1.37 Ω itself.
+    type(f, 'Measured Zs (Ω)', '1.25');
+    expect(await within(f).findByRole('button', { name: 'Earth fault loop impedance Zs: Fail · limit 1.10 Ω. Show how it was judged' }, BUSY)).toBeTruthy();
+    expect(within(f).getByText(/80 % rule of thumb for readings taken cold, BS 7671:2018\+A2:2022 Appendix 3\), though not above the maximum itself/)).toBeTruthy();
+    // 1.45 Ω is above the 1.37 Ω of Table 41.3 itself (BS 7671:2018+A2:2022, C1).
+    type(f, 'Measured Zs (Ω)', '1.45');
+    expect(await within(f).findByRole('button', { name: 'Earth fault loop impedance Zs: Fail · limit 1.37 Ω. Show how it was judged' }, BUSY)).toBeTruthy();
+    expect(within(f).getByText(/above the 1\.37 Ω maximum in BS 7671:2018\+A2:2022 Table 41\.3 for a 32 A type B circuit-breaker itself/)).toBeTruthy();
+  });
+
+  it('remarks on ring readings lower than this visit’s extension predicts', async () => {
+    // The 50 m 2.5/1.5 ring extended by 10 m: r1 = rn = 0.44 Ω, r2 = 0.73 Ω predicted (IEC 60228:2004 Tables 1–2, D).
+    await db.pointChange.put({
+      id: '01900000-0000-7000-8000-0000000000c1', visitId: ids.visit, siteId: ids.site, circuitId: ids.circuit, action: 'add', connection: 'ring-extension',
+      beforeR1Ohm: 0.3705, beforeRnOhm: 0.3705, beforeR2Ohm: 0.605, addedRouteM: 10, liveCsaMm2: 2.5, cpcCsaMm2: 1.5, ...base,
+    });
+    show(screenPath);
+    const f = await form();
+    expect(await within(f).findByText('Predicted after this visit’s extension: r1 0.44 Ω, rn 0.44 Ω, r2 0.73 Ω.', undefined, BUSY)).toBeTruthy();
+    type(f, 'r1 (Ω)', '0.44');
+    type(f, 'rn (Ω)', '0.44');
+    type(f, 'r2 (Ω)', '0.73');
+    await new Promise((r) => setTimeout(r, 50));
+    expect(within(f).queryByRole('status', { name: 'Readings against the extension' })).toBeNull();
+    // r2 as it was before the extension: 0.12 Ω lower than predicted (common trade practice: an extension only adds resistance)
+    type(f, 'r2 (Ω)', '0.61');
+    const remark = await within(f).findByRole('status', { name: 'Readings against the extension' }, BUSY);
+    expect(remark.textContent).toContain('r2 0.61 Ω is lower than the 0.73 Ω predicted after the extension');
+    expect(within(remark).getByRole('button', { name: 'Readings against the extension: Check · expect about 0.73 Ω. Show how it was judged' })).toBeTruthy();
   });
 
   it('lists what is still missing for the certificate', async () => {

@@ -7,6 +7,7 @@ import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import {
+  checkAgainstExtension,
   circuitReading,
   type CircuitTestAssessment,
   type CircuitTestKey,
@@ -27,7 +28,7 @@ import { SaveBar } from '@/components/forms/phone-inputs';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import { VERDICT_WORDS } from '@/components/verdicts/verdict-words';
 import type { CircuitRow, PointChangeRow, TestResultRow } from '@/lib/db';
-import { circuitReadingField, readingText } from '@/lib/readings';
+import { circuitReadingField, readingText, usableReading } from '@/lib/readings';
 import { createRecord, type Fields, saveRecord } from '@/lib/sync/local-write';
 import { assess, fromTyped, NUMERIC_READINGS, storedReadings, verdictSummary } from '../circuit-readings';
 
@@ -155,6 +156,8 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
   const rcd = circuit.rcdRatingMa != null;
   const predicted = useMemo(() => predictedAfter(extensions, circuit), [extensions, circuit]);
   const radial = useMemo(() => radialExpectation(circuit), [circuit]);
+  // Lower than the extension predicts is worth a second look before the readings are trusted.
+  const afterExtension = predicted ? checkAgainstExtension({ r1: usableReading(values.r1Ohm), rn: usableReading(values.rnOhm), r2: usableReading(values.r2Ohm) }, predicted) : null;
 
   // The unit, and the label unless the group around it says the rest, are the catalogue's.
   const reading = (name: (typeof NUMERIC_READINGS)[number], label = circuitReading(name).label) => (
@@ -218,6 +221,19 @@ export function ReadingsForm({ visitId, siteId, circuit, result, earthing, exten
                 <Typography variant="body2" color="text.secondary">
                   Predicted after this visit’s extension: r1 {ohms(predicted.r1)}, rn {ohms(predicted.rn)}, r2 {ohms(predicted.r2)}.
                 </Typography>
+              )}
+              {afterExtension?.verdict === 'check' && afterExtension.value !== null && (
+                <Stack spacing={0.25} role="status" aria-label="Readings against the extension">
+                  <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap', rowGap: 0.5 }}>
+                    <Typography variant="body2" sx={{ fontWeight: 500 }}>
+                      Against the extension
+                    </Typography>
+                    <VerdictChip what="Readings against the extension" result={afterExtension} size="small" against="expected" />
+                  </Stack>
+                  <Typography variant="body2" color="text.secondary">
+                    {afterExtension.note}
+                  </Typography>
+                </Stack>
               )}
               {assessment.ring?.expectedR1R2 != null && (
                 <Typography variant="body2">

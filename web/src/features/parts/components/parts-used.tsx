@@ -9,29 +9,48 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
-import { useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { DraftNotice } from '@/components/forms/draft-notice';
 import { startingValues, useFormDraft } from '@/components/forms/form-draft';
-import { readingField, usableReading } from '@/lib/readings';
+import { parseReading, readingProblem, usableReading } from '@/lib/readings';
 import { createRecord, deleteRecord } from '@/lib/sync/local-write';
 import { useVisitParts } from '../data/get-parts';
 
 const TYPED = 'typed';
 
-export const partSchema = z
-  .object({
-    priceItemId: z.string(),
-    description: z.string().max(200, 'The description must be at most 200 characters.'),
-    quantity: readingField('materialLine', 'quantity', 'The quantity', '', true),
-    unit: z.string().max(20, 'The unit must be at most 20 characters.'),
-  })
-  .superRefine((v, ctx) => {
-    if (!v.priceItemId) ctx.addIssue({ code: 'custom', path: ['priceItemId'], message: 'Pick the part from the price list, or choose “Something else”.' });
-    if (v.priceItemId === TYPED && !v.description.trim()) ctx.addIssue({ code: 'custom', path: ['description'], message: 'Say what the part is.' });
-  });
-type PartValues = z.infer<typeof partSchema>;
+/** Parts sold by the piece are counted: a price-list unit of "each", or a typed line with no unit. */
+export const isCounted = (unit: string | null | undefined) => !unit?.trim() || unit.trim().toLowerCase() === 'each';
+
+/** The form's rules, knowing the unit of each part on the price list: a counted part takes whole numbers only. */
+export function partSchemaFor(unitOf: (priceItemId: string) => string | undefined) {
+  return z
+    .object({
+      priceItemId: z.string(),
+      description: z.string().max(200, 'The description must be at most 200 characters.'),
+      quantity: z.string(),
+      unit: z.string().max(20, 'The unit must be at most 20 characters.'),
+    })
+    .superRefine((v, ctx) => {
+      const issue = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
+      if (!v.priceItemId) issue('priceItemId', 'Pick the part from the price list, or choose “Something else”.');
+      if (v.priceItemId === TYPED && !v.description.trim()) issue('description', 'Say what the part is.');
+      const unit = v.priceItemId === TYPED ? v.unit : unitOf(v.priceItemId);
+      const quantity = parseReading(v.quantity);
+      if (quantity === null) return issue('quantity', 'Enter the quantity.');
+      if (Number.isNaN(quantity)) return issue('quantity', isCounted(unit) ? 'The quantity must be a number, like 2.' : 'The quantity must be a number, like 12.5.');
+      if (isCounted(unit)) {
+        if (!Number.isInteger(quantity) || quantity < 1) return issue('quantity', 'Count whole parts: 1 or more.');
+      } else if (quantity <= 0) {
+        return issue('quantity', `The quantity must be more than 0 ${unit!.trim()}.`);
+      }
+      const beyond = readingProblem('materialLine', 'quantity', v.quantity, 'The quantity');
+      if (beyond) issue('quantity', beyond);
+    });
+}
+
+type PartValues = z.infer<ReturnType<typeof partSchemaFor>>;
 const EMPTY_PART: PartValues = { priceItemId: '', description: '', quantity: '1', unit: '' };
 
 const quantityWords = (q: number, unit?: string | null) => `${Number.isInteger(q) ? q : q.toFixed(3).replace(/0+$/, '')}${unit && unit !== 'each' ? `\u00a0${unit}` : ''}`;
@@ -39,8 +58,12 @@ const quantityWords = (q: number, unit?: string | null) => `${Number.isInteger(q
 /** A quick parts list: pick from the organisation's price list (on the phone, so it works with no signal) or type a line. */
 export function PartsUsed({ visitId, siteId, locked }: { visitId: string; siteId: string; locked: boolean }) {
   const parts = useVisitParts(visitId);
+  // Read at each check, so the price list that arrives after the first render decides what is counted.
+  const items = useRef(parts?.items);
+  items.current = parts?.items;
+  const resolver = useMemo(() => zodResolver(partSchemaFor((id) => items.current?.get(id)?.unit)), []);
   const draftKey = locked ? null : `part.new.${visitId}`;
-  const { register, handleSubmit, formState, reset, control } = useForm<PartValues>({ resolver: zodResolver(partSchema), defaultValues: startingValues(draftKey, EMPTY_PART) });
+  const { register, handleSubmit, formState, reset, control } = useForm<PartValues>({ resolver, defaultValues: startingValues(draftKey, EMPTY_PART) });
   const draft = useFormDraft(draftKey, useWatch({ control }) as PartValues, EMPTY_PART, reset);
   const [error, setError] = useState<string | null>(null);
   const chosen = useWatch({ control, name: 'priceItemId' });

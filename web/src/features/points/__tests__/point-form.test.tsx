@@ -77,5 +77,24 @@ describe('recording a point change', () => {
     fireEvent.click(within(f).getByRole('button', { name: 'Save new point change' }));
     await waitFor(async () => expect(await db.pointChange.count()).toBe(1));
     expect((await db.pointChange.toArray())[0]).toMatchObject({ action: 'add', loadW: 500, fuseRatingA: 3 });
+    // The new point change opens as itself, and says it was saved.
+    expect(await screen.findByText('Point change saved on this phone.')).toBeTruthy();
+  });
+
+  it('will not save while a figure in the wall drawing is refused', async () => {
+    show(paths.visitPoint.href(ids.visit, 'new'));
+    const f = await form();
+    fireEvent.click(within(f).getByRole('button', { name: 'New point' }));
+    type(f, 'Accessory', 'Twin socket-outlet');
+    type(f, 'Where it is: where on the wall', 'Left of the door');
+    fireEvent.click(within(f).getByLabelText('Check a new concealed cable route'));
+    type(f, 'Wall width (mm)', '-10');
+    expect(within(f).getByText('Wall width cannot be negative.')).toBeTruthy();
+    fireEvent.click(within(f).getByRole('button', { name: 'Save new point change' }));
+    expect(await within(f).findByText('A figure in the wall drawing cannot stand: put right the one marked, or switch the route check off.')).toBeTruthy();
+    expect(await db.pointChange.count()).toBe(0);
+    type(f, 'Wall width (mm)', '3000');
+    fireEvent.click(within(f).getByRole('button', { name: 'Save new point change' }));
+    await waitFor(async () => expect(await db.pointChange.count()).toBe(1));
   });
 });

@@ -206,9 +206,13 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
   const v = useWatch({ control }) as PointValues;
   const [route, setRoute] = useState<ConcealedRoute | null>(() => readRoute(startRoute));
   const [error, setError] = useState<string | null>(null);
+  const [figuresWrong, setFiguresWrong] = useState(false);
+  // The drawing keeps its typed figures; a route put back from a draft or discarded is a drawing afresh.
+  const [drawing, setDrawing] = useState(0);
   const draft = useFormDraft(draftKey, { ...v, route }, recorded, ({ route: r, ...values }) => {
     reset(values);
     setRoute(r);
+    setDrawing((n) => n + 1);
   });
   const errors = formState.errors as Record<string, { message?: string } | undefined>;
   const circuit = circuits.find((c) => c.id === v.circuitId);
@@ -248,6 +252,10 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
 
   async function save(values: PointValues) {
     setError(null);
+    if (route && figuresWrong) {
+      setError('A figure in the wall drawing cannot stand: put right the one marked, or switch the route check off.');
+      return;
+    }
     const fields = pointFields(values, route, fuse);
     try {
       if (point) {
@@ -476,7 +484,7 @@ export function PointForm({ visitId, siteId, point, circuits, areas, ringBaselin
             control={<Switch checked={route !== null} onChange={(e) => setRoute(e.target.checked ? (route ?? newRoute((circuit?.rcdRatingMa ?? 999) <= 30, circuit?.rcdRatingMa ?? 30)) : null)} />}
             label="Check a new concealed cable route"
           />
-          {route && <WallDiagram value={route} onChange={setRoute} disabled={locked} />}
+          {route && <WallDiagram key={drawing} value={route} onChange={setRoute} disabled={locked} onFiguresWrong={setFiguresWrong} />}
           <SaveBar error={error} locked={locked} label={point ? 'Save point change' : 'Save new point change'} />
         </Stack>
       </Box>

@@ -8,12 +8,15 @@ import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import { checkSafeZone, DEFAULT_RULE_SET, InvalidInputError, type SafeZoneCheck, type WallPoint } from '@wiretrail/core';
-import { type MouseEvent, useMemo, useRef, useState } from 'react';
+import { type MouseEvent, useEffect, useMemo, useRef, useState } from 'react';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
+import { parseReading } from '@/lib/readings';
+import { WALL_FIGURE_LABELS, type WallFigure, wallFigureProblem, type WallSoFar } from './wall-figures';
 
 /** What the point change stores in `concealedRoute`: the safe-zone check's own input. */
 export interface ConcealedRoute {
-  wall: { widthMm: number; heightMm: number; hasMetallicParts: boolean; angleAtLeft: boolean; angleAtRight: boolean };
+  /** No thickness in routes drawn before it was asked for: judged as unknown. */
+  wall: { widthMm: number; heightMm: number; thicknessMm?: number | null; hasMetallicParts: boolean; angleAtLeft: boolean; angleAtRight: boolean };
   accessory: { x: number; y: number; widthMm: number; heightMm: number } | null;
   route: WallPoint[];
   depthMm: number;
@@ -23,7 +26,8 @@ export interface ConcealedRoute {
 
 export function newRoute(rcdProtected: boolean, rcdRatedMa = 30): ConcealedRoute {
   // A single plate is about 86 mm square (common trade sizes, from memory); both are editable.
-  return { wall: { widthMm: 3600, heightMm: 2400, hasMetallicParts: false, angleAtLeft: true, angleAtRight: true }, accessory: null, route: [], depthMm: 25, rcdProtected, rcdRatedMa, };
+  // The thickness is left for the technician to measure: a guess would decide whether the far face's zones apply.
+  return { wall: { widthMm: 3600, heightMm: 2400, thicknessMm: null, hasMetallicParts: false, angleAtLeft: true, angleAtRight: true }, accessory: null, route: [], depthMm: 25, rcdProtected, rcdRatedMa };
 }
 
 export function readRoute(value: unknown): ConcealedRoute | null {
@@ -34,7 +38,8 @@ export function readRoute(value: unknown): ConcealedRoute | null {
 export function judgeRoute(r: ConcealedRoute): SafeZoneCheck | { error: string } | null {
   if (!r.accessory || r.route.length < 2) return null;
   try {
-    return checkSafeZone({ wall: r.wall, accessories: [r.accessory], route: r.route, depthMm: r.depthMm, rcdProtected: r.rcdProtected, rcdRatedMa: r.rcdRatedMa });
+    const { thicknessMm, ...wall } = r.wall;
+    return checkSafeZone({ wall: thicknessMm == null ? wall : { ...wall, thicknessMm }, accessories: [r.accessory], route: r.route, depthMm: r.depthMm, rcdProtected: r.rcdProtected, rcdRatedMa: r.rcdRatedMa });
   } catch (err) {
     if (err instanceof InvalidInputError) return { error: err.message };
     throw err;
@@ -43,12 +48,69 @@ export function judgeRoute(r: ConcealedRoute): SafeZoneCheck | { error: string }
 
 const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
 
+const FIGURES: readonly WallFigure[] = ['widthMm', 'heightMm', 'thicknessMm', 'depthMm'];
+
+function figuresOf(r: ConcealedRoute): Record<WallFigure, string> {
+  return { widthMm: String(r.wall.widthMm), heightMm: String(r.wall.heightMm), thicknessMm: r.wall.thicknessMm == null ? '' : String(r.wall.thicknessMm), depthMm: String(r.depthMm) };
+}
+
+/** How far the point (its plate included) and the route reach along and up the wall. */
+function reachOf(r: ConcealedRoute): WallSoFar['reachMm'] {
+  const xs = r.route.map((p) => p.x);
+  const ys = r.route.map((p) => p.y);
+  if (r.accessory) {
+    xs.push(r.accessory.x + r.accessory.widthMm / 2);
+    ys.push(r.accessory.y + r.accessory.heightMm / 2);
+  }
+  return { x: Math.ceil(Math.max(0, ...xs)), y: Math.ceil(Math.max(0, ...ys)) };
+}
+
+function soFarOf(r: ConcealedRoute): WallSoFar {
+  return { thicknessMm: r.wall.thicknessMm ?? null, depthMm: r.depthMm, reachMm: reachOf(r) };
+}
+
+function withFigure(r: ConcealedRoute, field: WallFigure, text: string): ConcealedRoute {
+  const n = parseReading(text);
+  if (field === 'depthMm') return { ...r, depthMm: n ?? r.depthMm };
+  return { ...r, wall: { ...r.wall, [field]: field === 'thicknessMm' ? n : (n ?? r.wall[field]) } };
+}
+
+const FIGURE_HELP: Readonly<Record<WallFigure, string>> = {
+  widthMm: ' ',
+  heightMm: ' ',
+  thicknessMm: 'Both faces count: measure it.',
+  depthMm: 'Below this face.',
+};
+
+/** A stretch of the route: green where it may run, red where it may not, amber while the wall's thickness is unknown. */
+function stretchColour(acceptable: boolean | null | undefined): string {
+  if (acceptable === false) return 'var(--mui-palette-error-main)';
+  if (acceptable === null) return 'var(--mui-palette-warning-main)';
+  return 'var(--mui-palette-success-main)';
+}
+
 /**
  * A wall seen from the room: tap where the point is, then tap along the new cable's route. The zones the cable
  * may run in are shaded; each stretch of the route turns green inside a zone and red outside.
  */
-export function WallDiagram({ value, onChange, disabled }: { value: ConcealedRoute; onChange: (v: ConcealedRoute) => void; disabled?: boolean }) {
+export function WallDiagram({
+  value,
+  onChange,
+  disabled,
+  onFiguresWrong,
+}: {
+  value: ConcealedRoute;
+  onChange: (v: ConcealedRoute) => void;
+  disabled?: boolean;
+  /** Told whether any typed figure is being refused, so the form does not save the last good ones as if typed. */
+  onFiguresWrong?: (wrong: boolean) => void;
+}) {
   const [mode, setMode] = useState<'point' | 'route'>(value.accessory ? 'route' : 'point');
+  const [typed, setTyped] = useState<Record<WallFigure, string>>(() => figuresOf(value));
+  const soFar = soFarOf(value);
+  const problems = Object.fromEntries(FIGURES.map((f) => [f, wallFigureProblem(f, typed[f], soFar)])) as Record<WallFigure, string | null>;
+  const wrong = FIGURES.some((f) => problems[f] !== null);
+  useEffect(() => onFiguresWrong?.(wrong), [wrong, onFiguresWrong]);
   const [straight, setStraight] = useState(true);
   const svg = useRef<SVGSVGElement>(null);
   const { wall, accessory, route } = value;
@@ -74,28 +136,40 @@ export function WallDiagram({ value, onChange, disabled }: { value: ConcealedRou
     onChange({ ...value, route: [...route, next] });
   }
 
-  const num = (label: string, v: number, set: (n: number) => void, unit = 'mm') => (
+  function typeFigure(field: WallFigure, text: string) {
+    const next = { ...typed, [field]: text };
+    setTyped(next);
+    // Every figure that can now stand is taken, so putting one right can free another it held back (depth and thickness).
+    let r = value;
+    for (const f of FIGURES) if (wallFigureProblem(f, next[f], soFarOf(r)) === null) r = withFigure(r, f, next[f]);
+    onChange(r);
+  }
+
+  const figure = (field: WallFigure) => (
     <TextField
-      label={`${label} (${unit})`}
+      label={`${WALL_FIGURE_LABELS[field]} (mm)`}
       size="small"
-      defaultValue={v}
+      value={typed[field]}
       disabled={disabled}
-      onBlur={(e) => {
-        const n = Number(e.target.value);
-        if (Number.isFinite(n) && n >= 0) set(n);
-        else e.target.value = String(v);
-      }}
-      slotProps={{ htmlInput: { inputMode: 'numeric' } }}
+      onChange={(e) => typeFigure(field, e.target.value)}
+      error={problems[field] !== null}
+      helperText={problems[field] ?? FIGURE_HELP[field]}
+      // Labels always above the figure: an empty thickness would otherwise cut its label short on a narrow phone.
+      placeholder={field === 'thicknessMm' ? 'Not measured' : undefined}
+      slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' }, inputLabel: { shrink: true } }}
     />
   );
   const sy = (y: number) => H - y;
   return (
     <Stack spacing={1.5}>
-      <Stack direction="row" spacing={1}>
-        {num('Wall width', W, (n) => onChange({ ...value, wall: { ...wall, widthMm: Math.max(n, 300) } }))}
-        {num('Wall height', H, (n) => onChange({ ...value, wall: { ...wall, heightMm: Math.max(n, 300) } }))}
-        {num('Depth', value.depthMm, (n) => onChange({ ...value, depthMm: n }))}
-      </Stack>
+      {/* Two across: three labels in one row are cut short on a phone. */}
+      <Box sx={{ display: 'grid', gridTemplateColumns: '1fr 1fr', columnGap: 1, rowGap: 0.5 }} role="group" aria-label="The wall and the cable">
+        {FIGURES.map((f) => (
+          <Box key={f} sx={{ minWidth: 0 }}>
+            {figure(f)}
+          </Box>
+        ))}
+      </Box>
       <ToggleButtonGroup exclusive fullWidth size="small" value={mode} onChange={(_, m) => m && setMode(m)} aria-label="What a tap on the wall does" disabled={disabled}>
         <ToggleButton value="point">Tap places the point</ToggleButton>
         <ToggleButton value="route">Tap adds to the route</ToggleButton>
@@ -115,8 +189,7 @@ export function WallDiagram({ value, onChange, disabled }: { value: ConcealedRou
           )}
           {route.slice(1).map((to, i) => {
             const from = route[i]!;
-            const ok = segments[i]?.inZone;
-            return <line key={i} x1={from.x} y1={sy(from.y)} x2={to.x} y2={sy(to.y)} stroke={ok === false ? 'var(--mui-palette-error-main)' : 'var(--mui-palette-success-main)'} strokeWidth={4} vectorEffect="non-scaling-stroke" strokeLinecap="round" />;
+            return <line key={i} data-acceptable={String(segments[i]?.acceptable ?? '')} x1={from.x} y1={sy(from.y)} x2={to.x} y2={sy(to.y)} stroke={stretchColour(segments[i]?.acceptable)} strokeWidth={4} vectorEffect="non-scaling-stroke" strokeLinecap="round" />;
           })}
           {route.map((p, i) => (
             <circle key={i} cx={p.x} cy={sy(p.y)} r={Math.max(W, H) / 90} fill="var(--mui-palette-secondary-main)" />
@@ -157,8 +230,14 @@ export function WallDiagram({ value, onChange, disabled }: { value: ConcealedRou
             <Typography variant="body2" sx={{ fontWeight: 500 }}>
               Concealed route
             </Typography>
-            <VerdictChip what="Concealed route" result={result} />
+            {/* Only an RCD's figure says something on the chip; a count of stretches reads better in the sentence below. */}
+            <VerdictChip what="Concealed route" result={result} against={result.unit === 'mA' ? 'limit' : 'none'} />
           </Stack>
+          {wrong && (
+            <Typography variant="body2" color="text.secondary">
+              Judged with the last figures that could stand: put right the one marked above.
+            </Typography>
+          )}
           {result.findings.filter((f) => f.verdict !== 'pass').map((f) => (
             <Typography key={f.name} variant="body2" color={f.verdict === 'fail' ? 'error' : 'text.secondary'}>
               {f.note}

@@ -46,6 +46,17 @@ describe('sign-off', () => {
     expect((await db.visit.get(ids.visit))!.status).toBe('planned');
   });
 
+  it('leaves the time left blank until typed, so that opening the tab does not fix it', async () => {
+    await db.visit.update(ids.visit, { status: 'on-site', actualStart: new Date(Date.now() - 60 * 60_000).toISOString() });
+    show(paths.visitSignOff.href(ids.visit));
+    const form = await screen.findByRole('form', { name: 'Sign off' });
+    expect((within(form).getByLabelText('Left') as HTMLInputElement).value).toBe('');
+    expect(within(form).getByText('Blank: the time you finish.')).toBeTruthy();
+    // Typing elsewhere keeps a draft, which must not freeze a time of leaving either.
+    fireEvent.change(within(form).getByLabelText('Observations'), { target: { value: 'All tidy.' } });
+    expect(JSON.parse(localStorage.getItem(`wiretrail.sign-off-draft.${ids.visit}`)!).leftAt).toBe('');
+  });
+
   it('keeps the signature as a small SVG of its strokes', () => {
     const svg = strokesToSvg([{ points: [{ x: 10.4, y: 20.6, pressure: 0.5, time: 0 }, { x: 30, y: 40, pressure: 0.5, time: 1 }], dotSize: 0, minWidth: 1, maxWidth: 3, penColor: '#000', velocityFilterWeight: 0.7, compositeOperation: 'source-over' }], 320, 180);
     expect(svg).toBe('<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 320 180" width="320" height="180"><g fill="none" stroke="#14262b" stroke-width="2.5" stroke-linecap="round" stroke-linejoin="round"><path d="M10 21L30 40"/></g></svg>');
@@ -54,6 +65,7 @@ describe('sign-off', () => {
       existingInstallationComments: '', permittedExceptions: '', riskAssessmentRef: '',
     };
     expect(signOffSchema.safeParse({ ...base, signatureSvg: svg }).success).toBe(true);
+    expect(signOffSchema.safeParse({ ...base, leftAt: '', signatureSvg: svg }).success).toBe(true);
     expect(signOffSchema.safeParse({ ...base, signatureSvg: 'x'.repeat(60_001) }).success).toBe(false);
     const backwards = signOffSchema.safeParse({ ...base, leftAt: '08:00', signatureSvg: svg });
     expect(backwards.error?.issues[0]).toMatchObject({ path: ['leftAt'], message: 'The time you left must be after the time you arrived.' });
@@ -123,7 +135,7 @@ describe('parts used', () => {
     fireEvent.change(within(form).getByLabelText('Part'), { target: { value: '01900000-0000-7000-8000-000000000040' } });
     fireEvent.change(within(form).getByLabelText(/Quantity/), { target: { value: '-2' } });
     fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
-    expect(await within(form).findByText('The quantity must be at least 0.001.')).toBeTruthy();
+    expect(await within(form).findByText('The quantity must be more than 0 m.')).toBeTruthy();
     fireEvent.change(within(form).getByLabelText(/Quantity/), { target: { value: '12.5' } });
     fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
     const list = await screen.findByRole('list', { name: 'Parts used on this visit' });
@@ -132,10 +144,22 @@ describe('parts used', () => {
     fireEvent.change(await within(form).findByLabelText('What it is'), { target: { value: 'Grommet strip, 1 m' } });
     fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
     expect(await within(list).findByText('Grommet strip, 1 m')).toBeTruthy();
+    // A part sold by the piece is counted in whole numbers, never "at least 0.001".
+    fireEvent.change(within(form).getByLabelText('Part'), { target: { value: '01900000-0000-7000-8000-000000000041' } });
+    for (const bad of ['0', '0.5', '-1']) {
+      fireEvent.change(within(form).getByLabelText(/Quantity/), { target: { value: bad } });
+      fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
+      expect(await within(form).findByText('Count whole parts: 1 or more.')).toBeTruthy();
+    }
+    expect(within(form).queryByText(/0\.001/)).toBeNull();
+    fireEvent.change(within(form).getByLabelText(/Quantity/), { target: { value: '2' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add part' }));
+    expect(await within(list).findByText('Twin switched socket-outlet')).toBeTruthy();
     const lines = await db.materialLine.toArray();
     expect(lines.map((l) => [l.description, l.quantity, l.unit ?? null])).toEqual([
       ['2.5 mm² twin and earth cable', 12.5, 'm'],
       ['Grommet strip, 1 m', 1, null],
+      ['Twin switched socket-outlet', 2, 'each'],
     ]);
   });
 });

@@ -56,7 +56,8 @@ function storedDepartures(visit: VisitRow): { regulation: string; instead: strin
 
 export const signOffSchema = z.object({
   arrivedAt: z.string().regex(CLOCK, 'Give the time you arrived, like 09:05.'),
-  leftAt: z.string().regex(CLOCK, 'Give the time you are leaving, like 12:30.'),
+  // Blank until typed: the time of finishing is taken when the visit is signed off, not when the form opened.
+  leftAt: z.string().refine((s) => s === '' || CLOCK.test(s), 'Give the time you left, like 12:30, or leave it blank for the time you finish.'),
   workDescription: text(20_000, 'The description of the work').refine((s) => s.trim().length > 0, 'Describe the work done and its extent.'),
   observations: text(20_000, 'The observations'),
   departureEntries: z.array(departureSchema),
@@ -114,11 +115,11 @@ export function declarationOn(day: Date): string {
  */
 export function SignOffForm({ visit, defaultDescription, signerName, signerPosition = '', problemCount }: Props) {
   const draft = readSignOffDraft(visit.id);
-  const { register, control, handleSubmit, formState, getValues, watch } = useForm<SignOffValues>({
+  const { register, control, handleSubmit, formState, getValues, watch, setError: setFieldError } = useForm<SignOffValues>({
     resolver: zodResolver(signOffSchema),
     defaultValues: {
       arrivedAt: draft?.arrivedAt ?? clock(new Date(visit.actualStart ?? visit.plannedStart ?? Date.now())),
-      leftAt: draft?.leftAt ?? clock(new Date()),
+      leftAt: draft?.leftAt ?? '',
       workDescription: draft?.workDescription ?? visit.workDescription ?? defaultDescription,
       observations: draft?.observations ?? visit.observations ?? '',
       departureEntries: draft?.departureEntries ?? storedDepartures(visit),
@@ -148,13 +149,19 @@ export function SignOffForm({ visit, defaultDescription, signerName, signerPosit
   async function finish(v: SignOffValues) {
     setConfirming(false);
     setError(null);
-    const now = new Date().toISOString();
+    const finishing = new Date();
+    const now = finishing.toISOString();
     const day = visit.actualStart ?? visit.plannedStart ?? now;
+    const leftAt = v.leftAt || clock(finishing);
+    if (!v.leftAt && leftAt < v.arrivedAt) {
+      setFieldError('leftAt', { message: `It is ${leftAt} now, before the ${v.arrivedAt} you arrived: correct the time you arrived.` });
+      return;
+    }
     try {
       await saveRecord('visit', visit.id, {
         status: FINISHED_VISIT_STATUS,
         actualStart: onDay(day, v.arrivedAt),
-        actualEnd: onDay(day, v.leftAt),
+        actualEnd: onDay(day, leftAt),
         signedAt: now,
         signedByName: v.signedByName.trim(),
         signatureSvg: v.signatureSvg,
@@ -180,7 +187,7 @@ export function SignOffForm({ visit, defaultDescription, signerName, signerPosit
       <Stack spacing={2}>
         <Stack direction="row" spacing={1.5}>
           <TextField label="Arrived" type="time" {...register('arrivedAt')} error={!!errors.arrivedAt} helperText={errors.arrivedAt?.message ?? 'Time on site starts here.'} slotProps={{ inputLabel: { shrink: true } }} />
-          <TextField label="Left" type="time" {...register('leftAt')} error={!!errors.leftAt} helperText={errors.leftAt?.message ?? ' '} slotProps={{ inputLabel: { shrink: true } }} />
+          <TextField label="Left" type="time" {...register('leftAt')} error={!!errors.leftAt} helperText={errors.leftAt?.message ?? 'Blank: the time you finish.'} slotProps={{ inputLabel: { shrink: true } }} />
         </Stack>
         <TextField label="Work done and its extent" multiline minRows={3} {...register('workDescription')} error={!!errors.workDescription} helperText={errors.workDescription?.message ?? 'As it should read on the certificate.'} />
         <TextField label="Observations" multiline minRows={2} {...register('observations')} error={!!errors.observations} helperText={errors.observations?.message ?? 'What you saw that the customer or the office should know.'} />

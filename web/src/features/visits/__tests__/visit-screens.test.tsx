@@ -27,14 +27,42 @@ describe('Today', () => {
     expect(within(card).getByRole('link', { name: 'Directions' }).getAttribute('href')).toContain(encodeURIComponent('14 Orchard Rise, Wendmouth, WM2 4HD'));
   });
 
-  it('records arrival with one tap, then offers sign-off', async () => {
+  it('records arrival at today’s visit with one tap, then opens the visit first and offers sign-off beside it', async () => {
     show(paths.today.path);
     fireEvent.click(await screen.findByRole('button', { name: 'I’m on site' }));
-    expect(await screen.findByRole('link', { name: 'Sign off' })).toBeTruthy();
+    expect((await screen.findByRole('link', { name: 'Open visit' })).getAttribute('href')).toBe(`/visits/${ids.visit}`);
+    expect(screen.getByRole('link', { name: 'Sign off' }).getAttribute('href')).toBe(`/visits/${ids.visit}/sign-off`);
+    expect(screen.queryByRole('dialog')).toBeNull();
     const visit = await db.visit.get(ids.visit);
     expect(visit).toMatchObject({ status: 'on-site' });
     expect(Date.parse(visit!.actualStart!)).toBeGreaterThan(Date.now() - 60_000);
     expect((await db.outbox.toArray()).map((e) => e.set)).toEqual([expect.objectContaining({ status: 'on-site', actualStart: visit!.actualStart })]);
+  });
+
+  it('takes a mistaken arrival back', async () => {
+    show(paths.today.path);
+    fireEvent.click(await screen.findByRole('button', { name: 'I’m on site' }));
+    expect(await screen.findByText(/^Arrival recorded at \d\d:\d\d\.$/)).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Undo' }));
+    expect(await screen.findByRole('button', { name: 'I’m on site' })).toBeTruthy();
+    const visit = await db.visit.get(ids.visit);
+    expect(visit).toMatchObject({ status: 'planned', actualStart: null });
+  });
+
+  it('asks before recording arrival at a visit booked for another day', async () => {
+    await db.visit.update(ids.visit, { plannedStart: at(9, 1), plannedEnd: at(12, 1) });
+    show(paths.today.path);
+    fireEvent.click(await screen.findByRole('button', { name: 'I’m on site' }));
+    const ask = await screen.findByRole('dialog', { name: 'On site for a visit booked tomorrow?' });
+    expect(ask.textContent).toContain('Move two lounge sockets is booked for Tomorrow, 09:00–12:00.');
+    fireEvent.click(within(ask).getByRole('button', { name: 'Not yet' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
+    expect(await db.visit.get(ids.visit)).toMatchObject({ status: 'planned' });
+    expect(await db.outbox.count()).toBe(0);
+    fireEvent.click(screen.getByRole('button', { name: 'I’m on site' }));
+    fireEvent.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'I’m on site now' }));
+    expect(await screen.findByRole('link', { name: 'Open visit' })).toBeTruthy();
+    expect(await db.visit.get(ids.visit)).toMatchObject({ status: 'on-site' });
   });
 
   it('says so when nothing is booked', async () => {

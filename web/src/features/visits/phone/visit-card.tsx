@@ -6,9 +6,15 @@ import CardActionArea from '@mui/material/CardActionArea';
 import CardActions from '@mui/material/CardActions';
 import CardContent from '@mui/material/CardContent';
 import Chip from '@mui/material/Chip';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogContentText from '@mui/material/DialogContentText';
+import DialogTitle from '@mui/material/DialogTitle';
+import Snackbar from '@mui/material/Snackbar';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { useState } from 'react';
+import { useId, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { VisuallyHidden } from '@/components/visually-hidden';
 import { paths } from '@/config/paths';
@@ -31,15 +37,43 @@ export async function recordArrival(visitId: string): Promise<void> {
   await saveRecord('visit', visitId, { status: 'on-site', actualStart: new Date().toISOString() });
 }
 
+/** A mistaken arrival taken back: the visit is planned again and its clock has not started. */
+export async function undoArrival(visitId: string, before: { status: string; actualStart: string | null }): Promise<void> {
+  await saveRecord('visit', visitId, { status: before.status, actualStart: before.actualStart });
+}
+
+/** How long the offer to take an arrival back stays on screen. */
+export const UNDO_ARRIVAL_MS = 15_000;
+
+const clockTime = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit' });
+
 /** One visit on Today: when, what, who and where, with arrival and finishing one tap away. */
 export function VisitCard({ summary }: { summary: VisitSummary }) {
   const { visit, job, customer, site } = summary;
   const [error, setError] = useState<string | null>(null);
+  const [asking, setAsking] = useState(false);
+  const [arrived, setArrived] = useState<{ at: string; before: { status: string; actualStart: string | null } } | null>(null);
+  const askId = useId();
   const title = job?.title ?? 'Visit';
   const status = visit.status ?? 'planned';
+  // A tap on another day's card is more likely a slip than an arrival: ask first.
+  const day = visit.plannedStart ? dayLabel(visit.plannedStart) : 'Today';
   async function arrive() {
+    setAsking(false);
+    setError(null);
+    const before = { status, actualStart: visit.actualStart ?? null };
     try {
       await recordArrival(visit.id);
+      setArrived({ at: clockTime.format(new Date()), before });
+    } catch (err) {
+      setError((err as Error).message);
+    }
+  }
+  async function undo() {
+    if (!arrived) return;
+    setArrived(null);
+    try {
+      await undoArrival(visit.id, arrived.before);
     } catch (err) {
       setError((err as Error).message);
     }
@@ -80,16 +114,48 @@ export function VisitCard({ summary }: { summary: VisitSummary }) {
           </Button>
         )}
         {status === 'planned' && (
-          <Button variant="contained" onClick={arrive} sx={{ flex: 1 }}>
+          <Button variant="contained" onClick={() => (day === 'Today' ? arrive() : setAsking(true))} sx={{ flex: 1 }}>
             I’m on site
           </Button>
         )}
         {status === 'on-site' && (
-          <Button variant="contained" color="secondary" component={RouterLink} to={paths.visitSignOff.href(visit.id)} sx={{ flex: 1 }}>
-            Sign off
-          </Button>
+          <>
+            <Button variant="contained" component={RouterLink} to={paths.visit.href(visit.id)} sx={{ flex: 1 }}>
+              Open visit
+            </Button>
+            <Button variant="outlined" color="secondary" component={RouterLink} to={paths.visitSignOff.href(visit.id)}>
+              Sign off
+            </Button>
+          </>
         )}
       </CardActions>
+      <Dialog open={asking} onClose={() => setAsking(false)} aria-labelledby={`${askId}-title`} aria-describedby={`${askId}-text`}>
+        <DialogTitle id={`${askId}-title`}>On site for a visit booked {day === 'Tomorrow' || day === 'Yesterday' ? day.toLowerCase() : `for ${day}`}?</DialogTitle>
+        <DialogContent>
+          <DialogContentText id={`${askId}-text`}>
+            {title} is booked for {day}, {timeWindow(visit.plannedStart, visit.plannedEnd)}. Arriving starts the clock on it now and tells the office you are there.
+          </DialogContentText>
+        </DialogContent>
+        <DialogActions>
+          <Button onClick={() => setAsking(false)} size="large">
+            Not yet
+          </Button>
+          <Button onClick={arrive} variant="contained" size="large">
+            I’m on site now
+          </Button>
+        </DialogActions>
+      </Dialog>
+      <Snackbar
+        open={arrived !== null}
+        autoHideDuration={UNDO_ARRIVAL_MS}
+        onClose={(_, reason) => reason !== 'clickaway' && setArrived(null)}
+        message={arrived ? `Arrival recorded at ${arrived.at}.` : ''}
+        action={
+          <Button color="inherit" size="small" onClick={undo} sx={{ color: 'secondary.light', fontWeight: 700 }}>
+            Undo
+          </Button>
+        }
+      />
       {error && (
         <Typography color="error" role="alert" variant="body2" sx={{ px: 2, pb: 2 }}>
           {error}

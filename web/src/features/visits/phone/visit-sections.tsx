@@ -26,10 +26,8 @@ export function VisitSections({ visitId }: { visitId: string }) {
   return (
     <Tabs
       value={current}
-      variant="scrollable"
-      scrollButtons="auto"
+      variant="fullWidth"
       aria-label="Parts of this visit"
-      allowScrollButtonsMobile
       sx={{
         mx: -2,
         mb: 2,
@@ -39,9 +37,8 @@ export function VisitSections({ visitId }: { visitId: string }) {
         top: 56,
         zIndex: 2,
         bgcolor: 'background.default',
-        // Five sections fit across a 390 px phone; narrower screens scroll, with arrows to say so.
-        '& .MuiTab-root': { minHeight: 52, minWidth: 0, px: 1.1, fontSize: '0.95rem' },
-        '& .MuiTabs-scrollButtons.Mui-disabled': { opacity: 0.3 },
+        // All five sections across even a 360 px phone: no scroll arrow hides Sign-off; a long name takes two lines.
+        '& .MuiTab-root': { minHeight: 52, minWidth: 0, px: 0.5, fontSize: { xs: '0.875rem', sm: '0.95rem' }, lineHeight: 1.2, whiteSpace: 'normal', textWrap: 'balance' },
       }}
     >
       {SECTIONS.map((s) => (

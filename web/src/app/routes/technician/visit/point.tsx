@@ -1,10 +1,12 @@
 import ArrowBack from '@mui/icons-material/ArrowBack';
+import Alert from '@mui/material/Alert';
 import PowerOutlined from '@mui/icons-material/PowerOutlined';
 import Button from '@mui/material/Button';
 import Divider from '@mui/material/Divider';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
+import { useState } from 'react';
+import { Link as RouterLink, useLocation, useNavigate, useParams } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
 import { paths } from '@/config/paths';
 import { PhotoCapture } from '@/features/photos/phone/photo-capture';
@@ -22,6 +24,9 @@ export function Component() {
   const data = useVisitPoints(visit.id, visit.siteId);
   const point = usePointChange(isNew ? null : pointId);
   const back = paths.visitPoints.href(visit.id);
+  // A new point change opens as itself once saved: say so here, as the list does after an edit.
+  const justSaved = (useLocation().state as { saved?: boolean } | null)?.saved === true;
+  const [dismissed, setDismissed] = useState(false);
   if (!data || point === undefined) return null;
   return (
     <CautionGate visit={visit} locked={locked}>
@@ -35,6 +40,11 @@ export function Component() {
       ) : (
         <Stack spacing={2}>
           <Typography variant="h2">{isNew ? 'Record a point change' : 'Point change'}</Typography>
+          {justSaved && !isNew && !dismissed && (
+            <Alert severity="success" role="status" onClose={() => setDismissed(true)}>
+              Point change saved on this phone.
+            </Alert>
+          )}
           <PointForm
             key={point?.id ?? 'new'}
             visitId={visit.id}
