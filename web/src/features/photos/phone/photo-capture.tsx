@@ -240,8 +240,7 @@ function PhotoDetailsDialog({ files: chosen, visitId, siteId, userId, preset, on
                     {many && (
                       <Button
                         variant="text"
-                        size="small"
-                        sx={{ alignSelf: 'flex-start' }}
+                        sx={{ alignSelf: 'flex-start', minHeight: 44 }}
                         aria-expanded={item.own !== null}
                         onClick={() => update(item.key, { own: item.own ? null : { ...shared } })}
                       >

@@ -84,7 +84,7 @@ export function PhotoFilingFields({ filing, onChange, choices, tagChoices, of, a
                 aria-pressed={on}
                 aria-disabled={disabled || undefined}
                 role="button"
-                sx={{ minHeight: 40, fontSize: '0.95rem', borderRadius: 5 }}
+                sx={{ minHeight: 44, fontSize: '0.95rem', borderRadius: 6 }}
               />
             );
           })}

@@ -92,10 +92,10 @@ export function TrailPhotoViewer({ photos, openId, onOpen, onClose, visitId, sit
           <LargePhoto key={photo.id} photo={photo} alt={caption} />
         </Box>
         <Stack direction="row" sx={{ justifyContent: 'space-between', alignItems: 'center', px: 1, py: 0.5 }}>
-          <Button startIcon={<ChevronLeft />} onClick={() => go(-1)} disabled={index <= 0} size="large">
+          <Button startIcon={<ChevronLeft />} onClick={() => go(-1)} disabled={index <= 0} size="large" sx={{ minHeight: 48 }}>
             Previous photo
           </Button>
-          <Button endIcon={<ChevronRight />} onClick={() => go(1)} disabled={index >= photos.length - 1} size="large">
+          <Button endIcon={<ChevronRight />} onClick={() => go(1)} disabled={index >= photos.length - 1} size="large" sx={{ minHeight: 48 }}>
             Next photo
           </Button>
         </Stack>
@@ -183,7 +183,7 @@ function PhotoEdit({ photo, visitId, siteId, locked }: { photo: PhotoRow; visitI
           {said}
         </Typography>
         {!locked && (
-          <Button type="submit" variant="contained" size="large" disabled={same}>
+          <Button type="submit" variant="contained" size="large" disabled={same} sx={{ minHeight: 48 }}>
             Save changes
           </Button>
         )}
@@ -246,14 +246,14 @@ function RefusedPhoto({ photo, userId, locked, onReplaced }: { photo: PhotoRow; 
           {busy ?? ''}
         </Typography>
         {asking ? (
-          <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', gap: 1 }}>
+          <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', gap: 1, '& .MuiButton-root': { minHeight: 44 } }}>
             <Button color="error" variant="contained" onClick={remove}>
               Remove it
             </Button>
             <Button onClick={() => setAsking(false)}>Keep it</Button>
           </Stack>
         ) : (
-          <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', gap: 1 }}>
+          <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', gap: 1, '& .MuiButton-root': { minHeight: 44 } }}>
             <Button component="label" htmlFor={inputId} variant="contained" startIcon={<PhotoCameraOutlined />} disabled={busy !== null}>
               Retake photo
             </Button>
