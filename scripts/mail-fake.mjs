@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 // Local stand-in for the outgoing mail service: accepts SMTP on 127.0.0.1 and keeps messages in memory,
-// readable as JSON at http://127.0.0.1:<MAIL_FAKE_HTTP_PORT>/messages (and cleared with DELETE).
+// readable as JSON at http://127.0.0.1:<MAIL_FAKE_HTTP_PORT>/messages (and cleared with DELETE): sender, To, Cc,
+// subject, the text and HTML parts, and the attachments.
 import { createServer } from 'node:http';
 import { startMailbox } from './mailbox.mjs';
 
@@ -9,7 +10,7 @@ const httpPort = Number(process.env.MAIL_FAKE_HTTP_PORT ?? 1080);
 const host = '127.0.0.1';
 const mailbox = await startMailbox({ port: smtpPort, host });
 
-// Attachments are listed by name, type and size; their bytes stay here.
+// Each message with its To and Cc, both parts, and its attachments listed by name, type and size (their bytes stay here).
 const listed = () => mailbox.messages.map((m) => ({ ...m, attachments: m.attachments.map(({ content: _content, ...a }) => a) }));
 
 const http = createServer((req, res) => {

@@ -10,8 +10,12 @@ export interface ReceivedMail {
   receivedAt: string;
   from: string;
   replyTo: string;
-  /** The envelope's recipients. */
+  /** The envelope's recipients: those in To and those in Cc. */
   to: string[];
+  /** The To header, as those it reached see it. */
+  toHeader: string;
+  /** The Cc header: who got a copy. */
+  cc: string;
   subject: string;
   text: string;
   html: string;

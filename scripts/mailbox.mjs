@@ -29,6 +29,9 @@ export async function startMailbox({ port = 0, host = '127.0.0.1', keep = 500 } 
             from: mail.from?.text ?? '',
             replyTo: mail.replyTo?.text ?? '',
             to: session.envelope.rcptTo.map((r) => r.address),
+            // The headers' To and Cc, as the people it reached see them (the envelope above has everyone).
+            toHeader: mail.to ? [mail.to].flat().map((a) => a.text).join(', ') : '',
+            cc: mail.cc ? [mail.cc].flat().map((a) => a.text).join(', ') : '',
             subject: mail.subject ?? '',
             text: mail.text ?? '',
             html: typeof mail.html === 'string' ? mail.html : '',

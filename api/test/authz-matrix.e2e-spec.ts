@@ -42,7 +42,7 @@ describe('authorisation matrix: every route × every role × own and other organ
     const paths = routes.map((r) => `${r.method} ${r.path}`);
     for (const expected of [
       'post /api/auth/sign-in', 'get /api/users', 'post /api/sync/push', 'get /api/sync/pull', 'get /api/conflicts', 'get /api/circuits', 'patch /api/visits/:id', 'get /api/visits/:id/record',
-      'post /api/jobs/:id/documents', 'get /api/jobs/:id/documents', 'get /api/documents/:id', 'get /api/documents/:id/pdf', 'post /api/documents/:id/send',
+      'post /api/jobs/:id/documents', 'get /api/jobs/:id/documents', 'get /api/documents/:id', 'get /api/documents/:id/pdf', 'post /api/documents/:id/send', 'post /api/jobs/:id/documents/send',
       'get /api/jobs/:id/held-changes', 'post /api/documents/:id/revisions',
       'post /api/jobs/:id/share-links', 'get /api/jobs/:id/share-links', 'post /api/share-links/:id/revoke',
       'get /api/shared/:token', 'get /api/shared/:token/photos/:photoId/thumb', 'get /api/shared/:token/photos/:photoId/display', 'get /api/shared/:token/documents/:documentId/pdf',
@@ -53,7 +53,7 @@ describe('authorisation matrix: every route × every role × own and other organ
       'get /api/billing-terms', 'patch /api/billing-terms',
       'get /api/jobs/:id/invoices', 'post /api/jobs/:id/invoices', 'get /api/invoices', 'get /api/invoices/aged-debt', 'get /api/invoices/:id', 'patch /api/invoices/:id',
       'delete /api/invoices/:id', 'post /api/invoices/:id/issue', 'post /api/invoices/:id/credit-note', 'get /api/invoices/:id/pdf', 'post /api/invoices/:id/send',
-      'post /api/invoices/:id/payments',
+      'post /api/invoices/:id/payments', 'post /api/invoices/:id/refunds',
       'get /api/shared/:token/invoices', 'get /api/shared/:token/invoices/:invoiceId/pdf', 'post /api/shared/:token/invoices/:invoiceId/checkout',
       'post /api/payments/webhook',
     ]) {

@@ -88,7 +88,7 @@ describe('paying an invoice by card', () => {
       expect(fake.events.at(-1)!.deliveries).toEqual([expect.objectContaining({ status: 200 })]);
 
       const after = await invoice(t, office, inv.id);
-      expect(after.account).toEqual({ paidMinor: 21_600, creditedMinor: 0, owedMinor: 0, state: 'paid', overdueDays: 0 });
+      expect(after.account).toEqual({ paidMinor: 21_600, creditedMinor: 0, refundedMinor: 0, owedMinor: 0, state: 'paid', overdueDays: 0 });
       expect(after.payments).toEqual([expect.objectContaining({ amountMinor: 21_600, method: 'card', receivedOn: after.issueDate, reference: expect.stringMatching(/^pi_/) })]);
       expect(await t.dataSource.getRepository(CardCheckout).findOneByOrFail({ sessionId })).toMatchObject({ state: 'complete', amountMinor: 21_600 });
       expect((await shared()).items.find((i: { id: string }) => i.id === inv.id)).toMatchObject({ owedMinor: 0, state: 'paid', payByCard: false });

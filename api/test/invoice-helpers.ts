@@ -22,7 +22,7 @@ export interface InvoiceBody {
   lines: Array<{ kind: string; description: string; quantity: string; unit: string | null; unitPriceMinor: number; vatRateCode: string; vatBasisPoints: number; netMinor: number; vatMinor: number; grossMinor: number; visitId: string | null; priceItemId: string | null; partUseIds: string[] }>;
   byRate: Array<{ basisPoints: number; netMinor: number; vatMinor: number }>;
   payments: Array<{ amountMinor: number; method: string; receivedOn: string; reference: string | null; refundMinor: number; refundedAt: string | null }>;
-  account: { paidMinor: number; creditedMinor: number; owedMinor: number; state: string; overdueDays: number } | null;
+  account: { paidMinor: number; creditedMinor: number; refundedMinor: number; owedMinor: number; state: string; overdueDays: number } | null;
   warnings?: string[];
   leftOut?: string[];
   emailState: string | null;

@@ -121,7 +121,7 @@ describe('quotes, invoices and credit notes', () => {
       expect(issued).toMatchObject({ status: 'issued', number: 'INV-0003', termDays: 30, netMinor: 17_390, vatMinor: 3_478, grossMinor: 20_868 });
       expect(issued.issueDate).toBe(await today());
       expect(issued.dueDate).toBe(addDays(issued.issueDate!, 30));
-      expect(issued.account).toEqual({ paidMinor: 0, creditedMinor: 0, owedMinor: 20_868, state: 'awaiting', overdueDays: 0 });
+      expect(issued.account).toEqual({ paidMinor: 0, creditedMinor: 0, refundedMinor: 0, owedMinor: 20_868, state: 'awaiting', overdueDays: 0 });
     });
 
     it('prints what a VAT invoice must show (VAT Regulations 1995 reg. 14(1); VATREC5010)', async () => {
@@ -234,7 +234,7 @@ describe('quotes, invoices and credit notes', () => {
       const part = (await pay(inv.id, { amountMinor: 5_000, method: 'cash', receivedOn: day, note: 'Paid to Sam on site' }).expect(201)).body;
       expect(part.account).toMatchObject({ paidMinor: 5_000, owedMinor: 9_400, state: 'part-paid' });
       const rest = (await pay(inv.id, { amountMinor: 9_400, method: 'cheque', receivedOn: day, reference: 'Cheque 100482' }).expect(201)).body;
-      expect(rest.account).toEqual({ paidMinor: 14_400, creditedMinor: 7_200, owedMinor: 0, state: 'paid', overdueDays: 0 });
+      expect(rest.account).toEqual({ paidMinor: 14_400, creditedMinor: 7_200, refundedMinor: 0, owedMinor: 0, state: 'paid', overdueDays: 0 });
       expect(rest.payments.map((p: { method: string; amountMinor: number; reference: string | null }) => [p.method, p.amountMinor, p.reference])).toEqual([['cash', 5_000, null], ['cheque', 9_400, 'Cheque 100482']]);
       expect((await pay(inv.id, { amountMinor: 1, method: 'cash', receivedOn: day }).expect(422)).body.message).toEqual([`Nothing is owed on ${inv.number}.`]);
     });

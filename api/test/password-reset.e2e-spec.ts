@@ -29,6 +29,10 @@ describe('password reset by e-mailed link', () => {
     expect(mail.subject).toBe('Set a new Wiretrail password');
     expect(mail.text).toContain('https://larkfield.wiretrail.example/reset-password?token=');
     const token = tokenFrom(mail.text);
+    // The HTML part comes from the same template: the same link, as a link.
+    // Handlebars escapes "=" as &#x3D;, which a mail reader reads back as "=".
+    expect(mail.html).toContain(`<a href="https://larkfield.wiretrail.example/reset-password?token&#x3D;${encodeURIComponent(token)}">`);
+    expect(mail.html).toContain('asked Wiretrail to let you set a new password. Open this link within an hour:');
 
     const short = await t.http.post('/api/auth/password-reset').send({ token, password: 'short' }).expect(400);
     expect(short.body.message).toContain('password must be at least 10 characters');

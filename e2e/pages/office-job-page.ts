@@ -91,6 +91,21 @@ export class OfficeJobPage {
     await this.page.getByRole('dialog', { name: 'Issue the minor works certificate?' }).getByRole('button', { name: 'Issue' }).click();
   }
 
+  /** Issues the job's photo record, confirming the question. */
+  async issuePhotoRecord(): Promise<void> {
+    await this.tab('Documents & links');
+    await this.page.getByRole('button', { name: 'Issue photo record' }).click();
+    await this.page.getByRole('dialog', { name: 'Issue the photo record?' }).getByRole('button', { name: 'Issue' }).click();
+  }
+
+  /** Opens an invoice, quote or credit note of the job's billing by its number, and gives its dialog. */
+  async openInvoice(number: string): Promise<Locator> {
+    await this.page.getByRole('table', { name: 'Quotes and invoices of this job' }).getByRole('button', { name: `Open ${number}` }).click();
+    const dialog = this.page.getByRole('dialog', { name: new RegExp(`^(Invoice|Quote|Credit note) ${number}`) });
+    await expect(dialog).toBeVisible();
+    return dialog;
+  }
+
   /** An issued document's row, by the words it shows. */
   documentRow(text: string): Locator {
     return this.issuedDocuments.getByRole('row').filter({ hasText: text }).first();

@@ -8,8 +8,10 @@ const MAIL_INBOX = `http://127.0.0.1:${Number(process.env.E2E_PORT ?? 3100) + 10
 
 interface CaughtMail {
   to: string[];
+  cc: string;
   subject: string;
   text: string;
+  html: string;
   attachments: { filename: string; contentType: string; size: number }[];
 }
 
@@ -79,7 +81,7 @@ test('the office reviews a finished job, settles a conflict, issues the certific
 
   // E-mail it to the customer: the mail carries the PDF and a link to the job's record.
   const send = await job.openEmail(number);
-  await expect(send.getByLabel('To')).toHaveValue('hannah.greaves@example.com');
+  await expect(send.getByLabel('To', { exact: true })).toHaveValue('hannah.greaves@example.com');
   await send.getByRole('button', { name: 'Send' }).click();
   await expect(issued.getByRole('row', { name: new RegExp(number) })).toContainText('Sent', { timeout: 30_000 });
   await shot('job-documents-sent');
@@ -108,4 +110,28 @@ test('the office reviews a finished job, settles a conflict, issues the certific
   } finally {
     await customer.close();
   }
+
+  // The photo record too, then both papers in one e-mail, with the office's own words and a copy to the landlord.
+  await job.issuePhotoRecord();
+  const photoRow = job.documentRow('Photo record');
+  await expect(photoRow).toBeVisible({ timeout: 20_000 });
+  const photoNumber = (await photoRow.getByRole('cell').first().innerText()).trim();
+  expect(photoNumber).toMatch(/^PR-\d{4}$/);
+  const both = await job.openEmail(photoNumber);
+  await both.getByRole('checkbox', { name: `Minor works certificate ${number}` }).check();
+  await both.getByLabel('Copy to (optional)').fill('lettings@greaves-lettings.example');
+  await both.getByLabel('Your message (optional)').fill(`Thank you for having us (${stamp}). Both papers are attached.`);
+  await both.getByRole('button', { name: 'Send' }).click();
+  await expect(issued.getByRole('row', { name: new RegExp(photoNumber) })).toContainText('Sent', { timeout: 30_000 });
+  let together: CaughtMail | undefined;
+  await expect
+    .poll(async () => {
+      const inbox = (await (await request.get(MAIL_INBOX)).json()) as CaughtMail[];
+      together = inbox.find((m) => m.subject.includes(photoNumber) && m.subject.includes(number));
+      return together?.cc;
+    })
+    .toBe('lettings@greaves-lettings.example');
+  expect(together!.attachments.map((a) => a.filename)).toEqual([`${photoNumber}.pdf`, `${number}.pdf`]);
+  expect(together!.text).toContain(`Thank you for having us (${stamp}). Both papers are attached.`);
+  expect(together!.html).toContain(`Thank you for having us (${stamp}). Both papers are attached.`);
 });

@@ -9,6 +9,7 @@ import { paymentsConfig } from '../config/payments.config.js';
 import { Invoice } from '../invoices/entities/invoice.entity.js';
 import { accountsOf, todayFor } from '../invoices/invoice-accounts.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
+import { CardRefunds, type CardRefundRequest, type CardRefundResult } from '../invoices/card-refunds.js';
 import { OwedChanges } from '../invoices/owed-changes.js';
 import { PaymentsService } from '../invoices/payments.service.js';
 import { Organisation } from '../organisations/entities/organisation.entity.js';
@@ -49,17 +50,22 @@ export class CardPaymentsService implements OnModuleInit {
     @Inject(paymentsConfig.KEY) private readonly config: ConfigType<typeof paymentsConfig>,
     @Inject(mailConfig.KEY) private readonly mail: ConfigType<typeof mailConfig>,
     private readonly owedChanges: OwedChanges,
+    private readonly cardRefunds: CardRefunds,
   ) {}
 
   onModuleInit(): void {
+    // The office gives money back to a card only through the provider's SDK.
+    if (this.provider) this.cardRefunds.offer((request) => this.refundToCard(this.provider!, request));
     // A checkout offers a figure; once what is owed changes, that figure is wrong and the offer is withdrawn.
     this.owedChanges.listen((invoiceId) => this.inTurnFor(invoiceId, () => this.closeOpenCheckouts(invoiceId)));
   }
 
-  async checkout(token: string, invoiceId: string): Promise<{ url: string; amountMinor: number }> {
+  /** `origin` is the address the customer's request came to: where they return when PUBLIC_URL is not set. */
+  async checkout(token: string, invoiceId: string, origin: string | null = null): Promise<{ url: string; amountMinor: number }> {
     const link = await this.shareLinks.open(token);
     if (!this.provider) throw new ServiceUnavailableException(NOT_SET_UP);
-    return this.inTurnFor(invoiceId, () => this.startCheckout(this.provider!, token, link.organisationId, link.jobId, link.id, invoiceId));
+    const base = this.mail.publicUrlGiven || !origin ? this.mail.publicUrl : origin;
+    return this.inTurnFor(invoiceId, () => this.startCheckout(this.provider!, token, link.organisationId, link.jobId, link.id, invoiceId, base));
   }
 
   /** One thing at a time per invoice: opening a checkout, or withdrawing them after what is owed changed. */
@@ -98,7 +104,7 @@ export class CardPaymentsService implements OnModuleInit {
     }
   }
 
-  private async startCheckout(provider: Stripe, token: string, organisationId: string, jobId: string, shareLinkId: string, invoiceId: string) {
+  private async startCheckout(provider: Stripe, token: string, organisationId: string, jobId: string, shareLinkId: string, invoiceId: string, base: string) {
     const { invoice, owed, open, organisation, email } = await this.queue.read(async (em) => {
       const invoice = await em.findOneBy(Invoice, { id: invoiceId, organisationId, jobId, kind: 'invoice', status: 'issued' });
       if (!invoice) throw new NotFoundException('No such invoice on this job.');
@@ -124,7 +130,7 @@ export class CardPaymentsService implements OnModuleInit {
         if (session.status === 'open') await provider.checkout.sessions.expire(c.sessionId);
         await this.queue.run((em) => em.update(CardCheckout, { id: c.id }, { state: 'expired' }));
       }
-      const back = `${this.mail.publicUrl}/shared/${token}`;
+      const back = `${base}/shared/${token}`;
       const session = await provider.checkout.sessions.create({
         mode: 'payment',
         line_items: [
@@ -178,6 +184,20 @@ export class CardPaymentsService implements OnModuleInit {
     if (CHECKOUT_EVENTS.includes(event.type)) await this.refundDue((event.data.object as Stripe.Checkout.Session).id);
     if ('paidInvoiceId' in taken && taken.paidInvoiceId) await this.owedChanges.changed(taken.paidInvoiceId);
     return 'duplicate' in taken ? { received: true, duplicate: true } : { received: true };
+  }
+
+  /** A refund the office asked for, through the SDK; the provider's refusal comes back in words, not as an error. */
+  private async refundToCard(provider: Stripe, r: CardRefundRequest): Promise<CardRefundResult> {
+    try {
+      const refund = await provider.refunds.create(
+        { payment_intent: r.paymentReference, amount: r.amountMinor, reason: 'requested_by_customer', metadata: r.metadata },
+        { idempotencyKey: r.idempotencyKey },
+      );
+      return { made: true, reference: refund.id };
+    } catch (err) {
+      if (!(err instanceof Stripe.errors.StripeError)) throw err;
+      return { made: false, reason: reasonOf(err) };
+    }
   }
 
   /** Gives back to the card what a payment brought above what was owed, through the provider's SDK. */

@@ -30,6 +30,8 @@ export const authConfig = registerAs('auth', () => ({
 export const mailConfig = registerAs('mail', () => ({
   /** Where links in e-mails point: the address people open Wiretrail at. */
   publicUrl: (process.env.PUBLIC_URL ?? `http://localhost:${process.env.PORT ?? 3000}`).replace(/\/$/, ''),
+  /** Whether PUBLIC_URL was given; without it, what answers a request is built from the address the request came to. */
+  publicUrlGiven: !!process.env.PUBLIC_URL,
   host: process.env.SMTP_HOST ?? '127.0.0.1',
   port: Number(process.env.SMTP_PORT ?? 1025),
   /** TLS from the first byte (port 465); otherwise STARTTLS is used whenever the server offers it. */

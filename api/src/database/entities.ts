@@ -3,6 +3,7 @@ import { PaymentEvent } from '../card-payments/entities/payment-event.entity.js'
 import { Invoice } from '../invoices/entities/invoice.entity.js';
 import { InvoiceLine } from '../invoices/entities/invoice-line.entity.js';
 import { Payment } from '../invoices/entities/payment.entity.js';
+import { Refund } from '../invoices/entities/refund.entity.js';
 import { AttemptCount } from '../auth/entities/attempt-count.entity.js';
 import { PasswordReset } from '../auth/entities/password-reset.entity.js';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
@@ -24,5 +25,5 @@ import { BuildingNotification } from '../notifiable-work/entities/building-notif
 /** For the migration CLI and scripts; the Nest app registers entities per feature module. */
 export const ALL_ENTITIES = [
   Organisation, User, RefreshToken, PasswordReset, AttemptCount, PhotoBlob, PhotoSender, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
-  VatRate, LabourRate, Invoice, InvoiceLine, Payment, CardCheckout, PaymentEvent, BuildingNotification, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
+  VatRate, LabourRate, Invoice, InvoiceLine, Payment, Refund, CardCheckout, PaymentEvent, BuildingNotification, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
 ];

@@ -3,7 +3,7 @@ import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import { type AuthUser, CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
-import { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
+import { SendDocumentDto, SendDocumentsDto } from '../paperwork/dto/send-document.dto.js';
 import { sendIssuedPdf } from '../paperwork/issued-pdf.js';
 import { DocumentsService } from './documents.service.js';
 import { IssueDocumentDto } from './dto/issue-document.dto.js';
@@ -64,5 +64,12 @@ export class DocumentsController {
   @HttpCode(202)
   send(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string, @Body() dto: SendDocumentDto) {
     return this.documents.send(user, id, dto);
+  }
+
+  /** Several of the job's issued documents in one e-mail, with the office's own message and a copy to another address. */
+  @Post('jobs/:id/documents/send')
+  @HttpCode(202)
+  sendSeveral(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) jobId: string, @Body() dto: SendDocumentsDto) {
+    return this.documents.sendAll(user, jobId, dto.documentIds, dto);
   }
 }

@@ -9,7 +9,8 @@ import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
-import { coveringLetter, theWork } from '../paperwork/covering-letter.js';
+import { type CoveringLetter, coveringLetter, theWork } from '../paperwork/covering-letter.js';
+import { mailTemplate } from '../mail/mail-template.js';
 import { CABLING_REPORT_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
 import { takeNextNumber } from '../paperwork/document-numbers.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
@@ -45,6 +46,14 @@ const KINDS: Record<DocumentKind, { prefix: string; title: string }> = {
 };
 
 export const DOCUMENT_MAIL = 'document';
+
+/** The letter that goes with one or several of a job's documents; both parts of the e-mail come from it. */
+const DOCUMENT_LETTER = mailTemplate<CoveringLetter & { papers: string[]; several: boolean; work: string; until: string; url: string }>(`{{#> covering}}
+{{#if several}}Attached are {{list papers}} for {{work}}.{{else}}Attached is {{list papers}} for {{work}}.{{/if}}
+
+You can also see the job's record, with its photos and documents, at this link until {{until}}:
+{{link url}}
+{{/covering}}`);
 
 /** What a document kind puts into the PDF, rendered inside the issuing transaction. */
 interface Rendered {
@@ -303,53 +312,94 @@ export class DocumentsService implements OnModuleInit {
    * sends it and writes sent or failed (with the reason) back to the document, so every device sees how it went.
    */
   async send(user: AuthUser, id: string, dto: SendDocumentDto): Promise<{ document: SyncedRow; shareLink: { id: string; expiresAt: string } }> {
-    const { row, link } = await this.queue.run(async (em) => {
-      const doc = await this.documentOf(em, user.organisationId, id);
-      if (!doc.issuedAt || !doc.pdfSha256) throw new ConflictException('Only an issued document can be e-mailed.');
-      const file = await loadJobFile(em, user.organisationId, doc.jobId);
-      const link = await this.shareLinks.createIn(em, user, file.job.id, { days: dto.linkDays, label: `E-mailed with ${doc.number} to ${dto.to}` });
+    const doc = await this.queue.read((em) => this.documentOf(em, user.organisationId, id));
+    const { documents, shareLink } = await this.sendAll(user, doc.jobId, [id], dto);
+    return { document: documents[0]!, shareLink };
+  }
+
+  /**
+   * Several issued documents of one job in one e-mail, in the order named, with the office's own message and a copy
+   * to another address if it gives them; each document's e-mail state follows the one message.
+   */
+  async sendAll(user: AuthUser, jobId: string, ids: string[], dto: SendDocumentDto): Promise<{ documents: SyncedRow[]; shareLink: { id: string; expiresAt: string } }> {
+    const { rows, link } = await this.queue.run(async (em) => {
+      const docs: SyncRecord<'document'>[] = [];
+      for (const id of ids) {
+        const doc = await syncRepository(em, 'document').findOneBy({ id, organisationId: user.organisationId, deletedAt: IsNull() });
+        if (!doc || doc.jobId !== jobId) throw new NotFoundException(`documentIds: ${id} is not a document of this job.`);
+        if (!doc.issuedAt || !doc.pdfSha256) throw new ConflictException(`documentIds: ${doc.number} is not issued, and only an issued document can be e-mailed.`);
+        docs.push(doc);
+      }
+      const file = await loadJobFile(em, user.organisationId, jobId);
+      const numbers = docs.map((d) => d.number).join(', ');
+      const link = await this.shareLinks.createIn(em, user, file.job.id, { days: dto.linkDays, label: `E-mailed with ${numbers} to ${dto.to}`.slice(0, 200) });
       await this.outbox.enqueue(em, {
         organisationId: user.organisationId,
         purpose: DOCUMENT_MAIL,
-        subjectId: doc.id,
+        subjectId: docs[0]!.id,
+        ...(docs.length > 1 ? { subjectIds: docs.map((d) => d.id) } : {}),
         to: dto.to,
+        cc: dto.cc ?? null,
         createdById: user.id,
-        ...this.letter(file, doc, dto.to, link.url, link.expiresAt),
+        ...this.letter(file, docs, dto, link.url, link.expiresAt),
       });
-      await this.engine.serverWrite(em, officeActor(user), 'document', [{ row: doc, changes: { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null } }]);
-      return { row: await syncRepository(em, 'document').findOneByOrFail({ id }), link };
+      await this.engine.serverWrite(
+        em,
+        officeActor(user),
+        'document',
+        docs.map((row) => ({ row, changes: { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null } })),
+      );
+      return { rows: await syncRepository(em, 'document').findBy({ id: In(docs.map((d) => d.id)) }), link };
     });
-    return { document: toSyncedRow(row), shareLink: { id: link.id, expiresAt: link.expiresAt } };
+    const byId = new Map(rows.map((r) => [r.id, r]));
+    return { documents: ids.map((id) => toSyncedRow(byId.get(id)!)), shareLink: { id: link.id, expiresAt: link.expiresAt } };
   }
 
-  private letter(file: JobFile, doc: SyncRecord<'document'>, to: string, url: string, expiresAt: string): { subject: string; text: string } {
+  private letter(file: JobFile, docs: SyncRecord<'document'>[], dto: SendDocumentDto, url: string, expiresAt: string): { subject: string; text: string; html: string } {
     const org = file.organisation;
-    const kind = KINDS[doc.kind].title;
-    const text = coveringLetter(file, to, [
-      `Attached is ${kind.toLowerCase()} ${doc.number} for ${theWork(file)}.`,
-      '',
-      `You can also see the job's record, with its photos and documents, at this link until ${dateWords(expiresAt, org.timeZone)}:`,
-      url,
-    ]);
-    return { subject: `${kind} ${doc.number} from ${org.name}`, text };
+    const papers = docs.map((d) => `${KINDS[d.kind].title.toLowerCase()} ${d.number}`);
+    const subject =
+      docs.length === 1
+        ? `${KINDS[docs[0]!.kind].title} ${docs[0]!.number} from ${org.name}`
+        : `${docs.map((d) => d.number).join(', ')} from ${org.name}`;
+    return {
+      subject,
+      ...DOCUMENT_LETTER(subject, {
+        ...coveringLetter(file, dto.to, dto.message),
+        papers,
+        several: docs.length > 1,
+        work: theWork(file),
+        until: dateWords(expiresAt, org.timeZone),
+        url,
+      }),
+    };
   }
 
+  /** Every document the message carries, each exactly as issued (checked by its fingerprint), in the order named. */
   private async attachment(message: OutboxMessage) {
-    const doc = await this.queue.read((em) => syncRepository(em, 'document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId }));
-    if (!doc?.pdfSha256) throw new Error('The document is no longer on the server.');
-    return [await issuedPdfAttachment(this.storage, doc)];
+    const ids = message.subjectIds?.length ? message.subjectIds : [message.subjectId ?? ''];
+    const docs = await this.queue.read((em) => syncRepository(em, 'document').findBy({ id: In(ids), organisationId: message.organisationId }));
+    const byId = new Map(docs.map((d) => [d.id, d]));
+    const attached = [];
+    for (const id of ids) {
+      const doc = byId.get(id);
+      if (!doc?.pdfSha256) throw new Error('A document of this e-mail is no longer on the server.');
+      attached.push(await issuedPdfAttachment(this.storage, doc));
+    }
+    return attached;
   }
 
-  /** Writes the outbox's news to the document row through the engine, so it is numbered and every device pulls it. */
+  /** Writes the outbox's news to each document the message carried, through the engine, so every device pulls it. */
   private async recordMailState(em: EntityManager, message: OutboxMessage): Promise<void> {
-    const doc = await syncRepository(em, 'document').findOneBy({ id: message.subjectId ?? '', organisationId: message.organisationId });
-    if (!doc) return;
     if (!(await isLatestMessage(em, message))) return;
+    const ids = message.subjectIds?.length ? message.subjectIds : [message.subjectId ?? ''];
+    const docs = await syncRepository(em, 'document').findBy({ id: In(ids), organisationId: message.organisationId });
+    if (!docs.length) return;
     const { emailedAt, ...state } = mailState(message, this.mail.maxAttempts);
     const set = { ...state, ...(emailedAt ? { emailedAt: emailedAt.toISOString() } : {}) };
     const sender = await em.findOneBy(User, { id: message.createdById, organisationId: message.organisationId });
     const actor = { id: message.createdById, organisationId: message.organisationId, role: sender?.role ?? 'office', email: sender?.email ?? '', name: sender?.name ?? '' };
-    await this.engine.serverWrite(em, officeActor(actor, 'mail-outbox'), 'document', [{ row: doc, changes: set }]);
+    await this.engine.serverWrite(em, officeActor(actor, 'mail-outbox'), 'document', docs.map((row) => ({ row, changes: set })));
   }
 
   private async documentOf(em: EntityManager, organisationId: string, id: string): Promise<SyncRecord<'document'>> {

@@ -5,6 +5,7 @@ import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.j
 import { Invoice } from './entities/invoice.entity.js';
 import { InvoiceLine } from './entities/invoice-line.entity.js';
 import { Payment } from './entities/payment.entity.js';
+import { Refund } from './entities/refund.entity.js';
 import { inTurn } from '../common/in-turn.js';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
@@ -20,9 +21,11 @@ export async function accountsOf(em: EntityManager, invoices: Invoice[], asOf: s
   const issued = invoices.filter((i) => i.kind === 'invoice' && i.status === 'issued');
   const ids = issued.map((i) => i.id);
   if (!ids.length) return new Map();
-  const [payments, credits] = await inTurn(
+  const [payments, credits, refunds] = await inTurn(
     () => em.find(Payment, { where: { invoiceId: In(ids) } }),
     () => em.find(Invoice, { where: { creditsInvoiceId: In(ids), status: 'issued', kind: 'credit-note' } }),
+    // A card refund on its way counts as given: the money is no longer the office's to give twice.
+    () => em.find(Refund, { where: { invoiceId: In(ids), state: In(['made', 'pending']) } }),
   );
   const sum = <T>(rows: T[], key: (r: T) => string, value: (r: T) => number) => {
     const m = new Map<string, number>();
@@ -33,12 +36,14 @@ export async function accountsOf(em: EntityManager, invoices: Invoice[], asOf: s
   const paid = sum(payments, (p) => p.invoiceId, (p) => p.amountMinor - p.refundMinor);
   // A credit note's total is negative; what it takes off the invoice is that, the other way round.
   const credited = sum(credits, (c) => c.creditsInvoiceId!, (c) => -c.grossMinor);
+  const refunded = sum(refunds, (r) => r.invoiceId, (r) => r.amountMinor);
   return new Map(
     issued.map((i) => {
       const paidMinor = paid.get(i.id) ?? 0;
       const creditedMinor = credited.get(i.id) ?? 0;
-      const standing = invoiceStanding({ grossMinor: i.grossMinor, creditedMinor, paidMinor, dueDate: i.dueDate!, asOf });
-      return [i.id, { paidMinor, creditedMinor, ...standing }];
+      const refundedMinor = refunded.get(i.id) ?? 0;
+      const standing = invoiceStanding({ grossMinor: i.grossMinor, creditedMinor, paidMinor, refundedMinor, dueDate: i.dueDate!, asOf });
+      return [i.id, { paidMinor, creditedMinor, refundedMinor, ...standing }];
     }),
   );
 }
@@ -87,11 +92,12 @@ export async function summarise(em: EntityManager, organisationId: string, invoi
 }
 
 export async function detail(em: EntityManager, invoice: Invoice, asOf: string): Promise<InvoiceDetail> {
-  const [[summary], lines, payments, credits] = await inTurn(
+  const [[summary], lines, payments, credits, refunds] = await inTurn(
     () => summarise(em, invoice.organisationId, [invoice], asOf),
     () => em.find(InvoiceLine, { where: { invoiceId: invoice.id }, order: { position: 'ASC' } }),
     () => em.find(Payment, { where: { invoiceId: invoice.id }, order: { receivedOn: 'ASC', createdAt: 'ASC' } }),
     () => em.find(Invoice, { where: { creditsInvoiceId: invoice.id, kind: 'credit-note' }, order: { createdAt: 'ASC' } }),
+    () => em.find(Refund, { where: { invoiceId: invoice.id }, order: { createdAt: 'ASC' } }),
   );
   return {
     ...summary!,
@@ -111,6 +117,10 @@ export async function detail(em: EntityManager, invoice: Invoice, asOf: string):
     payments: payments.map((p) => ({
       id: p.id, amountMinor: p.amountMinor, method: p.method, receivedOn: p.receivedOn, reference: p.reference, note: p.note, recordedById: p.recordedById, createdAt: p.createdAt.toISOString(),
       refundMinor: p.refundMinor, refundedAt: iso(p.refundedAt),
+    })),
+    refunds: refunds.map((r) => ({
+      id: r.id, amountMinor: r.amountMinor, method: r.method, paymentId: r.paymentId, refundedOn: r.refundedOn, reference: r.reference, note: r.note,
+      state: r.state, failure: r.failure, recordedById: r.recordedById, createdAt: r.createdAt.toISOString(),
     })),
     credits: credits.map((c) => ({ id: c.id, number: c.number, status: c.status, grossMinor: c.grossMinor, issueDate: c.issueDate })),
   };

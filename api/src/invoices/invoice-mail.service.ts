@@ -9,7 +9,8 @@ import { paymentsConfig } from '../config/payments.config.js';
 import type { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import type { MailAttachment } from '../mail/mail.service.js';
-import { coveringLetter, theWork } from '../paperwork/covering-letter.js';
+import { type CoveringLetter, coveringLetter, theWork } from '../paperwork/covering-letter.js';
+import { mailTemplate } from '../mail/mail-template.js';
 import { documentTitle } from '../paperwork/document-titles.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
 import { type IssuedFile, issuedPdfAttachment } from '../paperwork/issued-pdf.js';
@@ -26,6 +27,43 @@ import { detail, todayFor } from './invoice-accounts.js';
 export const INVOICE_MAIL = 'invoice';
 
 const day = (date: string | null, timeZone: string) => (date ? dateWords(`${date}T12:00:00Z`, timeZone) : '');
+
+interface InvoiceLetter extends CoveringLetter {
+  kind: { invoice: boolean; quote: boolean; credit: boolean };
+  number: string;
+  amount: string;
+  work: string;
+  due: string;
+  documents: string[];
+  card: boolean;
+  until: string;
+  url: string;
+  instructions: string | null;
+}
+
+/** The letter that goes with a quote, an invoice or a credit note; both parts of the e-mail come from it. */
+const INVOICE_LETTER = mailTemplate<InvoiceLetter>(`{{#> covering}}
+{{#if kind.invoice}}
+Attached is invoice {{number}} for {{amount}} for {{work}}. Please pay by {{due}}.
+{{/if}}
+{{#if kind.quote}}
+Attached is our quote {{number}} for {{amount}} for {{work}}. It stands until {{due}}.
+{{/if}}
+{{#if kind.credit}}
+Attached is credit note {{number}}, which takes {{amount}} off what is owed for {{work}}.
+{{/if}}
+{{#if documents.length}}
+
+The job’s documents are attached too: {{list documents}}.
+{{/if}}
+
+You can see the job's record, with its photos and documents{{#if card}}, and pay by card{{/if}}, at this link until {{until}}:
+{{link url}}
+{{#if instructions}}
+
+To pay by bank transfer or cheque: {{instructions}} Please give {{number}} as the reference.
+{{/if}}
+{{/covering}}`);
 
 /**
  * E-mails an issued quote, invoice or credit note through the mail outbox, with a new share link to the job's
@@ -66,8 +104,9 @@ export class InvoiceMailService implements OnModuleInit {
         purpose: INVOICE_MAIL,
         subjectId: invoice.id,
         to: dto.to,
+        cc: dto.cc ?? null,
         createdById: user.id,
-        ...this.letter(file, invoice, documents, dto.to, link.url, link.expiresAt),
+        ...this.letter(file, invoice, documents, dto, link.url, link.expiresAt),
       });
       Object.assign(invoice, { emailState: 'queued', emailedTo: dto.to, emailedAt: null, emailError: null });
       await em.save(invoice);
@@ -82,27 +121,26 @@ export class InvoiceMailService implements OnModuleInit {
     });
   }
 
-  private letter(file: JobFile, invoice: Invoice, documents: SyncRecord<'document'>[], to: string, url: string, expiresAt: string): { subject: string; text: string } {
+  private letter(file: JobFile, invoice: Invoice, documents: SyncRecord<'document'>[], dto: SendDocumentDto, url: string, expiresAt: string): { subject: string; text: string; html: string } {
     const org = file.organisation;
     const tz = org.timeZone;
-    const title = INVOICE_NAMES[invoice.kind];
-    const work = theWork(file);
-    const opening =
-      invoice.kind === 'invoice'
-        ? `Attached is invoice ${invoice.number} for ${formatMoney(invoice.grossMinor)} for ${work}. Please pay by ${day(invoice.dueDate, tz)}.`
-        : invoice.kind === 'quote'
-          ? `Attached is our quote ${invoice.number} for ${formatMoney(invoice.grossMinor)} for ${work}. It stands until ${day(invoice.dueDate, tz)}.`
-          : `Attached is credit note ${invoice.number}, which takes ${formatMoney(-invoice.grossMinor)} off what is owed for ${work}.`;
-    const card = invoice.kind === 'invoice' && this.payments.apiKey;
-    const text = coveringLetter(file, to, [
-      opening,
-      ...(documents.length ? ['', `The job’s documents are attached too: ${documents.map((d) => `${documentTitle(d.kind)} ${d.number}`).join(', ')}.`] : []),
-      '',
-      `You can see the job's record, with its photos and documents${card ? ', and pay by card' : ''}, at this link until ${dateWords(expiresAt, tz)}:`,
-      url,
-      ...(invoice.kind === 'invoice' && invoice.paymentInstructions ? ['', `To pay by bank transfer or cheque: ${invoice.paymentInstructions} Please give ${invoice.number} as the reference.`] : []),
-    ]);
-    return { subject: `${title} ${invoice.number} from ${org.name}`, text };
+    const subject = `${INVOICE_NAMES[invoice.kind]} ${invoice.number} from ${org.name}`;
+    return {
+      subject,
+      ...INVOICE_LETTER(subject, {
+        ...coveringLetter(file, dto.to, dto.message),
+        kind: { invoice: invoice.kind === 'invoice', quote: invoice.kind === 'quote', credit: invoice.kind === 'credit-note' },
+        number: invoice.number ?? '',
+        amount: formatMoney(Math.abs(invoice.grossMinor)),
+        work: theWork(file),
+        due: day(invoice.dueDate, tz),
+        documents: documents.map((d) => `${documentTitle(d.kind)} ${d.number}`),
+        card: invoice.kind === 'invoice' && !!this.payments.apiKey,
+        until: dateWords(expiresAt, tz),
+        url,
+        instructions: invoice.kind === 'invoice' ? invoice.paymentInstructions : null,
+      }),
+    };
   }
 
   /** The invoice's PDF and, with an invoice, the job's documents: each exactly as issued, checked by its fingerprint. */

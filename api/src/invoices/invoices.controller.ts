@@ -11,10 +11,12 @@ import { AgedDebtQueryDto } from './dto/aged-debt-query.dto.js';
 import { CreateInvoiceDto } from './dto/create-invoice.dto.js';
 import { ListInvoicesQueryDto } from './dto/list-invoices-query.dto.js';
 import { RecordPaymentDto } from './dto/record-payment.dto.js';
+import { RecordRefundDto } from './dto/record-refund.dto.js';
 import { UpdateInvoiceDto } from './dto/update-invoice.dto.js';
 import { InvoiceMailService } from './invoice-mail.service.js';
 import { InvoicesService } from './invoices.service.js';
 import { PaymentsService } from './payments.service.js';
+import { RefundsService } from './refunds.service.js';
 
 /** The office's quotes, invoices and credit notes, the payments it records, and who owes what. */
 @ApiTags('invoices')
@@ -25,6 +27,7 @@ export class InvoicesController {
   constructor(
     private readonly invoices: InvoicesService,
     private readonly payments: PaymentsService,
+    private readonly refunds: RefundsService,
     private readonly mail: InvoiceMailService,
     @Inject(INVOICE_STORAGE) private readonly storage: FileStorage,
   ) {}
@@ -95,5 +98,14 @@ export class InvoicesController {
   @Post('invoices/:id/payments')
   recordPayment(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string, @Body() dto: RecordPaymentDto) {
     return this.payments.record(user, id, dto);
+  }
+
+  /**
+   * Money given back to the customer, never more than they are owed on the invoice (409 with the reason): by hand,
+   * or to a card payment through the provider (502 when it does not make it). The same requestId records it once.
+   */
+  @Post('invoices/:id/refunds')
+  recordRefund(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) id: string, @Body() dto: RecordRefundDto) {
+    return this.refunds.record(user, id, dto);
   }
 }

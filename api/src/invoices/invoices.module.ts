@@ -11,6 +11,9 @@ import { StorageModule } from '../storage/storage.module.js';
 import { Invoice } from './entities/invoice.entity.js';
 import { InvoiceLine } from './entities/invoice-line.entity.js';
 import { Payment } from './entities/payment.entity.js';
+import { Refund } from './entities/refund.entity.js';
+import { CardRefunds } from './card-refunds.js';
+import { RefundsService } from './refunds.service.js';
 import { InvoiceMailService } from './invoice-mail.service.js';
 import { InvoicesController } from './invoices.controller.js';
 import { InvoicesService } from './invoices.service.js';
@@ -18,10 +21,10 @@ import { OwedChanges } from './owed-changes.js';
 import { PaymentsService } from './payments.service.js';
 import { SharedInvoicesController } from './shared-invoices.controller.js';
 
-/** Quotes, invoices and credit notes per job, payments against them, the aged debt, and their place on share pages. */
+/** Quotes, invoices and credit notes per job, payments against them and refunds, the aged debt, and their place on share pages. */
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Invoice, InvoiceLine, Payment, Organisation, VatRate, LabourRate]),
+    TypeOrmModule.forFeature([Invoice, InvoiceLine, Payment, Refund, Organisation, VatRate, LabourRate]),
     PaperworkModule,
     MailModule,
     ShareLinksModule,
@@ -29,7 +32,7 @@ import { SharedInvoicesController } from './shared-invoices.controller.js';
     JobsModule,
   ],
   controllers: [InvoicesController, SharedInvoicesController],
-  providers: [InvoicesService, PaymentsService, InvoiceMailService, OwedChanges],
-  exports: [InvoicesService, PaymentsService, OwedChanges],
+  providers: [InvoicesService, PaymentsService, RefundsService, CardRefunds, InvoiceMailService, OwedChanges],
+  exports: [InvoicesService, PaymentsService, OwedChanges, CardRefunds],
 })
 export class InvoicesModule {}

@@ -1,5 +1,5 @@
 import { ConflictException, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
-import { AGED_DEBT_BUCKETS, type AgedDebtInvoice, type AgedDebtReport, agedDebtBucket, agedDebtTotals, formatMoney, type InvoiceDetail, isCalendarDate } from '@wiretrail/core';
+import { AGED_DEBT_BUCKETS, type AgedDebtInvoice, type AgedDebtReport, agedDebtBucket, agedDebtTotals, formatMoney, type InvoiceDetail, type InvoiceSummary, isCalendarDate, toRefundMinor } from '@wiretrail/core';
 import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
@@ -20,6 +20,32 @@ export interface CardPaymentReport {
   checkoutSessionId: string;
   /** What was still owed when the news arrived: anything paid above it goes back to the card. */
   owedMinor: number;
+}
+
+/** Credit balances: what customers paid above what their invoices now ask for, still to go back, by customer, the most first. */
+function owedBack(summaries: InvoiceSummary[]): AgedDebtReport['owedToCustomers'] {
+  const byCustomer = new Map<string, AgedDebtReport['owedToCustomers']['customers'][number]>();
+  for (const i of summaries) {
+    const toRefund = i.account ? toRefundMinor(i.account) : 0;
+    if (toRefund <= 0) continue;
+    const key = i.customer?.id ?? 'none';
+    const entry = byCustomer.get(key) ?? { customerId: i.customer?.id ?? null, name: i.customer?.name ?? 'No customer', totalMinor: 0, invoices: [] };
+    entry.invoices.push({
+      id: i.id,
+      number: i.number!,
+      jobId: i.jobId,
+      jobReference: i.job.reference,
+      grossMinor: i.grossMinor,
+      paidMinor: i.account!.paidMinor,
+      creditedMinor: i.account!.creditedMinor,
+      refundedMinor: i.account!.refundedMinor,
+      toRefundMinor: toRefund,
+    });
+    entry.totalMinor += toRefund;
+    byCustomer.set(key, entry);
+  }
+  const customers = [...byCustomer.values()].sort((a, b) => b.totalMinor - a.totalMinor || a.name.localeCompare(b.name));
+  return { totalMinor: customers.reduce((s, c) => s + c.totalMinor, 0), customers };
 }
 
 /** Money in against invoices, and what is still owed, by whom and for how long. */
@@ -100,13 +126,17 @@ export class PaymentsService {
     return payment;
   }
 
-  /** What is owed on each issued invoice with money outstanding, grouped by customer, in buckets of how late it is. */
+  /**
+   * What is owed on each issued invoice with money outstanding, grouped by customer, in buckets of how late it is;
+   * and beside it what the contractor owes customers (credit balances still to refund).
+   */
   agedDebt(user: AuthUser, asOf?: string): Promise<AgedDebtReport> {
     if (asOf !== undefined && !isCalendarDate(asOf)) throw new UnprocessableEntityException(['asOf must be a date that exists, written YYYY-MM-DD.']);
     return this.queue.read(async (em) => {
       const day = asOf ?? (await todayFor(em, user.organisationId));
       const invoices = await em.find(Invoice, { where: { organisationId: user.organisationId, kind: 'invoice', status: 'issued' } });
-      const owing = (await summarise(em, user.organisationId, invoices, day)).filter((i) => i.account && i.account.owedMinor > 0);
+      const summaries = await summarise(em, user.organisationId, invoices, day);
+      const owing = summaries.filter((i) => i.account && i.account.owedMinor > 0);
       const byCustomer = new Map<string, { customerId: string | null; name: string; invoices: AgedDebtInvoice[] }>();
       for (const i of owing) {
         const key = i.customer?.id ?? 'none';
@@ -141,6 +171,7 @@ export class PaymentsService {
         buckets: AGED_DEBT_BUCKETS.map((b) => ({ key: b.key, label: b.label })),
         totals: agedDebtTotals(debts(customers.flatMap((c) => c.invoices)), day),
         customers,
+        owedToCustomers: owedBack(summaries),
       };
     });
   }

@@ -19,7 +19,10 @@ export interface NewOutboxMessage {
   organisationId: string;
   purpose: string;
   subjectId: string | null;
+  /** When it is about several subjects at once, all of them (`subjectId` is the first). */
+  subjectIds?: string[];
   to: string;
+  cc?: string | null;
   subject: string;
   text: string;
   html?: string;
@@ -80,6 +83,8 @@ export class MailOutbox implements OnApplicationBootstrap, OnModuleDestroy {
       purpose: m.purpose,
       subjectId: m.subjectId,
       toAddress: m.to,
+      ccAddress: m.cc ?? null,
+      subjectIds: m.subjectIds ?? null,
       subject: m.subject,
       text: m.text,
       html: m.html ?? null,
@@ -153,7 +158,7 @@ export class MailOutbox implements OnApplicationBootstrap, OnModuleDestroy {
       const attachments = await purpose.attachments(message);
       const org = await this.queue.read((em) => em.findOne(Organisation, { where: { id: message.organisationId }, select: { id: true, name: true, email: true } }));
       const sender = org ? { name: org.name, replyTo: org.email } : undefined;
-      await this.mail.send({ to: message.toAddress, subject: message.subject, text: message.text ?? '', html: message.html ?? undefined, attachments, sender });
+      await this.mail.send({ to: message.toAddress, cc: message.ccAddress ?? undefined, subject: message.subject, text: message.text ?? '', html: message.html ?? undefined, attachments, sender });
     } catch (err) {
       failure = err;
     }

@@ -11,6 +11,8 @@ export interface MailAttachment {
 
 export interface OutgoingMail {
   to: string;
+  /** Who gets a copy. */
+  cc?: string;
   /** Whose mail it is: shown as the sender's name, with the configured address, and answered to their own. */
   sender?: { name: string; replyTo: string | null };
   subject: string;

@@ -9,12 +9,22 @@ import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import { WriteQueue } from '../common/write-queue.js';
 import { mailConfig } from '../config/app.config.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
+import { mailTemplate } from '../mail/mail-template.js';
 import { User } from './entities/user.entity.js';
 
 const LINK_LIFETIME_MS = 60 * 60 * 1000;
 const LINK_REFUSED = 'This password link is not valid any more. Ask your admin to send a new one.';
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 const PASSWORD_RESET_MAIL = 'password-reset';
+const RESET_SUBJECT = 'Set a new Wiretrail password';
+/** Both parts of the e-mail come from this one template. */
+const RESET_LETTER = mailTemplate<{ name: string; caller: string; url: string }>(`Hello {{name}},
+
+{{caller}} asked Wiretrail to let you set a new password. Open this link within an hour:
+
+{{link url}}
+
+If you did not expect this, ignore this e-mail; your password stays as it is.`);
 
 @Injectable()
 export class PasswordResetService implements OnModuleInit {
@@ -54,8 +64,8 @@ export class PasswordResetService implements OnModuleInit {
         subjectId: user.id,
         to: user.email,
         createdById: caller.id,
-        subject: 'Set a new Wiretrail password',
-        text: `Hello ${user.name},\n\n${caller.name} asked Wiretrail to let you set a new password. Open this link within an hour:\n\n${link}\n\nIf you did not expect this, ignore this e-mail; your password stays as it is.\n`,
+        subject: RESET_SUBJECT,
+        ...RESET_LETTER(RESET_SUBJECT, { name: user.name, caller: caller.name, url: link }),
       });
       return { user, reset };
     });

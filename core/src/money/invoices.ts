@@ -21,6 +21,10 @@ export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
 export const OFFICE_PAYMENT_METHODS = ['cash', 'bank-transfer', 'cheque'] as const satisfies readonly PaymentMethod[];
 export type OfficePaymentMethod = (typeof OFFICE_PAYMENT_METHODS)[number];
 
+/** How money goes back to a customer: by hand (cash, transfer, cheque), or to a card payment through the provider. */
+export const REFUND_METHODS = ['cash', 'bank-transfer', 'cheque', 'card'] as const satisfies readonly PaymentMethod[];
+export type RefundMethod = (typeof REFUND_METHODS)[number];
+
 export type InvoiceEmailState = 'queued' | 'sent' | 'failed';
 
 /** What every new quote and invoice starts with: the VAT number, days to pay, days a quote stands, and the wording. */
@@ -51,6 +55,8 @@ export interface InvoiceLineInput {
 export interface InvoiceAccount {
   paidMinor: number;
   creditedMinor: number;
+  /** Given back to the customer by the office (refunds made or being made); taken off what was paid. */
+  refundedMinor: number;
   owedMinor: number;
   state: InvoiceState;
   overdueDays: number;
@@ -111,6 +117,23 @@ export interface PaymentView {
   refundedAt: string | null;
 }
 
+/** Money given back to the customer on an invoice. */
+export interface RefundView {
+  id: string;
+  amountMinor: number;
+  method: RefundMethod;
+  /** The card payment it went back to. */
+  paymentId: string | null;
+  refundedOn: string;
+  reference: string | null;
+  note: string | null;
+  /** A card refund is `pending` until the provider has made it; one the provider refused is `failed` and counts for nothing. */
+  state: 'made' | 'pending' | 'failed';
+  failure: string | null;
+  recordedById: string | null;
+  createdAt: string;
+}
+
 export interface InvoiceDetail extends InvoiceSummary {
   termDays: number;
   notes: string | null;
@@ -122,6 +145,7 @@ export interface InvoiceDetail extends InvoiceSummary {
   lines: InvoiceLineView[];
   byRate: Array<{ basisPoints: number; netMinor: number; vatMinor: number }>;
   payments: PaymentView[];
+  refunds: RefundView[];
   credits: Array<{ id: string; number: string | null; status: InvoiceStatus; grossMinor: number; issueDate: string | null }>;
 }
 
@@ -165,4 +189,22 @@ export interface AgedDebtReport {
   buckets: Array<{ key: AgedDebtBucket; label: string }>;
   totals: AgedDebtTotals;
   customers: Array<{ customerId: string | null; name: string; totals: AgedDebtTotals; oldestDays: number; invoices: AgedDebtInvoice[] }>;
+  /** Money the contractor owes customers: invoices paid above what they now ask for (credited after payment), still to refund. */
+  owedToCustomers: {
+    totalMinor: number;
+    customers: Array<{ customerId: string | null; name: string; totalMinor: number; invoices: OwedBackInvoice[] }>;
+  };
+}
+
+/** An invoice with money to give back. */
+export interface OwedBackInvoice {
+  id: string;
+  number: string;
+  jobId: string;
+  jobReference: string | null;
+  grossMinor: number;
+  paidMinor: number;
+  creditedMinor: number;
+  refundedMinor: number;
+  toRefundMinor: number;
 }

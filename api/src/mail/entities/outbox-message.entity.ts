@@ -22,6 +22,14 @@ export class OutboxMessage extends TenantRow {
   @Column({ type: 'varchar', length: 254 })
   toAddress: string;
 
+  /** Who gets a copy, seen by the one it is sent to. */
+  @Column({ type: 'varchar', length: 254, nullable: true })
+  ccAddress: string | null;
+
+  /** When one e-mail carries several of the purpose's subjects (a job's documents), all of them, in order. */
+  @Column({ type: 'simple-json', nullable: true })
+  subjectIds: string[] | null;
+
   @Column({ type: 'varchar', length: 300 })
   subject: string;
 

@@ -1,8 +1,23 @@
 import { formatMoney, INVOICE_NAMES } from '@wiretrail/core';
-import type { Account, InvoiceSummary, LineKind, PaymentMethod } from './api/get-invoice';
+import type { Account, InvoiceSummary, LineKind, PaymentMethod, Refund, RefundMethod } from './api/get-invoice';
 
 export const LINE_KIND_NAMES: Record<LineKind, string> = { labour: 'Labour', material: 'Part', fixed: 'Fixed price' };
 export const METHOD_NAMES: Record<PaymentMethod, string> = { card: 'Card (online)', cash: 'Cash', 'bank-transfer': 'Bank transfer', cheque: 'Cheque' };
+export const REFUND_METHOD_NAMES: Record<RefundMethod, string> = { card: 'Back to the card', cash: 'Cash', 'bank-transfer': 'Bank transfer', cheque: 'Cheque' };
+
+/** Where an invoice's money stands once paid and credited: still owed, owed back to the customer, or square. */
+export function balanceWords(a: Pick<Account, 'owedMinor' | 'refundedMinor'>): string {
+  if (a.owedMinor > 0) return `${formatMoney(a.owedMinor)} still owed`;
+  if (a.owedMinor < 0) return `${formatMoney(-a.owedMinor)} paid too much: to refund`;
+  return a.refundedMinor > 0 ? `Nothing owed and nothing left to refund (${formatMoney(a.refundedMinor)} refunded)` : 'Nothing owed';
+}
+
+/** A refund in the invoice's list: the state of one to a card, and why the provider refused one. */
+export function refundStateWords(r: Pick<Refund, 'state' | 'failure'>): string {
+  if (r.state === 'pending') return 'being made by the card payment service';
+  if (r.state === 'failed') return `not made: ${r.failure ?? 'the card payment service refused it'}`;
+  return '';
+}
 
 const day = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 
@@ -43,7 +58,9 @@ export function standingOf(i: Pick<InvoiceSummary, 'kind' | 'status' | 'lapsed'>
     case 'credited':
       return { label: 'Credited', color: 'default' };
     case 'overpaid':
-      return { label: 'Overpaid', color: 'warning', detail: `${formatMoney(-a.owedMinor)} to refund` };
+      return { label: 'Overpaid', color: 'warning', detail: [`${formatMoney(-a.owedMinor)} to refund`, a.refundedMinor > 0 && `${formatMoney(a.refundedMinor)} refunded so far`].filter(Boolean).join(' · ') };
+    case 'refunded':
+      return { label: 'Refunded', color: 'default', detail: `${formatMoney(a.refundedMinor)} given back` };
     case 'part-paid':
       return { label: late ? 'Part paid, overdue' : 'Part paid', color: late ? 'error' : 'warning', detail: [`${formatMoney(a.owedMinor)} owed`, late].filter(Boolean).join(' · ') };
     case 'awaiting':

@@ -14,14 +14,17 @@ const DOC: JobDocument = {
   coverage: null, supersedesId: null, revisionReason: null, supersededAt: null, supersededById: null,
 };
 
-function show(answer: (c: FakeCall) => FakeAnswer, defaultTo: string | null = 'hannah.greaves@example.com') {
+const PHOTOS: JobDocument = { ...DOC, id: '01900000-0000-7000-8000-000000000021', kind: 'photo-record', number: 'PR-0001' };
+const OLD: JobDocument = { ...DOC, id: '01900000-0000-7000-8000-000000000022', number: 'MW-0000', supersededAt: '2026-03-14T10:00:00.000Z', supersededById: DOC.id };
+
+function show(answer: (c: FakeCall) => FakeAnswer, defaultTo: string | null = 'hannah.greaves@example.com', others: JobDocument[] = []) {
   const api = fakeApi(answer);
   vi.stubGlobal('fetch', api.fetch);
   const onSent = vi.fn();
   const onClose = vi.fn();
   render(
     <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <SendDocumentDialog jobId={JOB} doc={DOC} defaultTo={defaultTo} customerName="Hannah Greaves" onClose={onClose} onSent={onSent} />
+      <SendDocumentDialog jobId={JOB} doc={DOC} others={others} defaultTo={defaultTo} customerName="Hannah Greaves" onClose={onClose} onSent={onSent} />
     </QueryClientProvider>,
   );
   return { calls: api.calls, onSent, onClose };
@@ -64,6 +67,33 @@ describe('SendDocumentDialog', () => {
     await waitFor(() => expect(onSent).toHaveBeenCalledWith('practice@brightwater-dental.example'));
     expect(calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: `/api/documents/${DOC.id}/send`, body: { to: 'practice@brightwater-dental.example', linkDays: 14 } });
     expect(onClose).toHaveBeenCalled();
+  });
+
+  it('sends the job’s other documents ticked in the same e-mail, with a message and a copy to another address', async () => {
+    const { calls, onSent } = show(
+      (c) => (c.method === 'POST' ? { status: 202, body: { documents: [DOC, PHOTOS], shareLink: { id: 'l', expiresAt: '' } } } : { status: 200, body: { items: [] } }),
+      'hannah.greaves@example.com',
+      [DOC, PHOTOS, OLD],
+    );
+    // Only the other current documents are offered: not this one again, nor one superseded.
+    expect(screen.getAllByRole('checkbox').map((c) => c.closest('label')?.textContent)).toEqual(['Photo record PR-0001']);
+    fireEvent.click(screen.getByRole('checkbox', { name: 'Photo record PR-0001' }));
+    fireEvent.input(screen.getByLabelText('Copy to (optional)'), { target: { value: 'Hannah.Greaves@example.com' } });
+    send();
+    expect(await screen.findByText('Copy to: another address than To.')).toBeTruthy();
+    fireEvent.input(screen.getByLabelText('Copy to (optional)'), { target: { value: 'not an address' } });
+    send();
+    expect(await screen.findByText('Copy to: that is not an e-mail address.')).toBeTruthy();
+    expect(calls.filter((c) => c.method === 'POST')).toEqual([]);
+    fireEvent.input(screen.getByLabelText('Copy to (optional)'), { target: { value: 'accounts@greaves-lettings.example' } });
+    fireEvent.input(screen.getByLabelText('Your message (optional)'), { target: { value: ' Thank you for having us. ' } });
+    send();
+    await waitFor(() => expect(onSent).toHaveBeenCalledWith('hannah.greaves@example.com'));
+    expect(calls.find((c) => c.method === 'POST')).toEqual({
+      method: 'POST',
+      path: `/api/jobs/${JOB}/documents/send`,
+      body: { documentIds: [DOC.id, PHOTOS.id], to: 'hannah.greaves@example.com', linkDays: 30, cc: 'accounts@greaves-lettings.example', message: 'Thank you for having us.' },
+    });
   });
 
   it("shows the server's refusal in its own words and stays open", async () => {

@@ -228,6 +228,7 @@ export function JobDocuments({ jobId }: { jobId: string }) {
       <SendDocumentDialog
         jobId={jobId}
         doc={sending}
+        others={items}
         defaultTo={recipient.email}
         customerName={recipient.name}
         onClose={() => setSending(null)}

@@ -5,6 +5,11 @@ import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
+import Checkbox from '@mui/material/Checkbox';
+import FormControl from '@mui/material/FormControl';
+import FormControlLabel from '@mui/material/FormControlLabel';
+import FormGroup from '@mui/material/FormGroup';
+import FormLabel from '@mui/material/FormLabel';
 import MenuItem from '@mui/material/MenuItem';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
@@ -18,16 +23,23 @@ import { kindName } from '../document-words';
 
 export const LINK_DAYS = [7, 14, 30, 60, 90] as const;
 
-export const sendSchema = z.object({
-  to: z.string().trim().min(1, 'To: enter the e-mail address to send it to.').email('To: that is not an e-mail address.').max(254, 'To: at most 254 characters.'),
-  linkDays: z.number({ message: 'Link works for: choose how many days.' }).int().min(1, 'Link works for: at least 1 day.').max(90, 'Link works for: at most 90 days.'),
-});
+export const sendSchema = z
+  .object({
+    to: z.string().trim().min(1, 'To: enter the e-mail address to send it to.').email('To: that is not an e-mail address.').max(254, 'To: at most 254 characters.'),
+    cc: z.union([z.literal(''), z.string().trim().email('Copy to: that is not an e-mail address.').max(254, 'Copy to: at most 254 characters.')]),
+    message: z.string().trim().max(2000, 'Your message: at most 2000 characters.'),
+    linkDays: z.number({ message: 'Link works for: choose how many days.' }).int().min(1, 'Link works for: at least 1 day.').max(90, 'Link works for: at most 90 days.'),
+    also: z.array(z.string()),
+  })
+  .refine((v) => !v.cc.trim() || v.cc.trim().toLowerCase() !== v.to.trim().toLowerCase(), { path: ['cc'], message: 'Copy to: another address than To.' });
 type Values = z.infer<typeof sendSchema>;
 
 interface Props {
   jobId: string;
   /** The document to send; the dialog is open while there is one. */
   doc: JobDocument | null;
+  /** The job's other issued documents, which can go in the same e-mail. */
+  others?: JobDocument[];
   /** Where it goes unless the office types another address: the customer's e-mail. */
   defaultTo: string | null;
   customerName?: string | null;
@@ -36,23 +48,28 @@ interface Props {
 }
 
 /** E-mails an issued document to the customer, with a link to the job's record that works for the days chosen. */
-export function SendDocumentDialog({ jobId, doc, defaultTo, customerName, onClose, onSent }: Props) {
+export function SendDocumentDialog({ jobId, doc, others = [], defaultTo, customerName, onClose, onSent }: Props) {
   const send = useSendDocument(jobId);
-  const { register, control, handleSubmit, formState, reset } = useForm<Values>({
-    resolver: zodResolver(sendSchema),
-    defaultValues: { to: defaultTo ?? '', linkDays: 30 },
-  });
-  // Each time it opens, it starts from the customer's address.
+  const blank = { to: defaultTo ?? '', cc: '', message: '', linkDays: 30, also: [] as string[] };
+  const { register, control, handleSubmit, formState, reset } = useForm<Values>({ resolver: zodResolver(sendSchema), defaultValues: blank });
+  // Each time it opens, it starts from the customer's address and this document alone.
   useEffect(() => {
-    if (doc) reset({ to: defaultTo ?? '', linkDays: 30 });
+    if (doc) reset({ to: defaultTo ?? '', cc: '', message: '', linkDays: 30, also: [] });
   }, [doc, defaultTo, reset]);
+  const offered = others.filter((o) => o.id !== doc?.id && o.issuedAt && !o.supersededAt);
   const close = () => {
     send.reset();
     onClose();
   };
   const submit = handleSubmit((v) =>
     send.mutate(
-      { documentId: doc!.id, to: v.to, linkDays: v.linkDays },
+      {
+        documentIds: [doc!.id, ...offered.filter((o) => v.also.includes(o.id)).map((o) => o.id)],
+        to: v.to,
+        linkDays: v.linkDays,
+        ...(v.cc.trim() ? { cc: v.cc.trim() } : {}),
+        ...(v.message.trim() ? { message: v.message.trim() } : {}),
+      },
       {
         onSuccess: () => {
           onSent?.(v.to);
@@ -67,11 +84,52 @@ export function SendDocumentDialog({ jobId, doc, defaultTo, customerName, onClos
       <DialogContent>
         <Stack component="form" id="send-document-form" noValidate spacing={2} sx={{ pt: 1 }} onSubmit={submit}>
           <Typography color="text.secondary">
-            The PDF goes as an attachment, with a link to the job’s record (its photos and documents) that stops working after the days you choose.
+            The PDF goes as an attachment (with any others you tick), with a link to the job’s record (its photos and documents) that stops working after the days you choose.
             {customerName && defaultTo ? ` ${customerName}’s address is filled in.` : ''}
           </Typography>
           {send.isError && <Alert severity="error">{send.error.message}</Alert>}
           <TextField label="To" type="email" autoComplete="email" {...register('to')} error={!!formState.errors.to} helperText={formState.errors.to?.message} />
+          <TextField
+            label="Copy to (optional)"
+            type="email"
+            autoComplete="off"
+            {...register('cc')}
+            error={!!formState.errors.cc}
+            helperText={formState.errors.cc?.message ?? 'Someone else who should have it, such as the landlord or the customer’s accounts.'}
+          />
+          {offered.length > 0 && (
+            <Controller
+              control={control}
+              name="also"
+              render={({ field }) => (
+                <FormControl component="fieldset">
+                  <FormLabel component="legend">Attach as well</FormLabel>
+                  <FormGroup>
+                    {offered.map((o) => (
+                      <FormControlLabel
+                        key={o.id}
+                        label={`${kindName(o.kind)} ${o.number}`}
+                        control={
+                          <Checkbox
+                            checked={field.value.includes(o.id)}
+                            onChange={(e) => field.onChange(e.target.checked ? [...field.value, o.id] : field.value.filter((id) => id !== o.id))}
+                          />
+                        }
+                      />
+                    ))}
+                  </FormGroup>
+                </FormControl>
+              )}
+            />
+          )}
+          <TextField
+            label="Your message (optional)"
+            multiline
+            minRows={3}
+            {...register('message')}
+            error={!!formState.errors.message}
+            helperText={formState.errors.message?.message ?? 'Goes after the greeting, before the list of what is attached.'}
+          />
           <Controller
             control={control}
             name="linkDays"

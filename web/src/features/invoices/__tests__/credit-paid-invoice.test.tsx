@@ -7,7 +7,7 @@ import { setSession } from '@/lib/session';
 import { InvoiceDialog } from '../components/invoice-dialog';
 import { DRAFT } from './invoice-fixtures';
 
-const account = (paidMinor: number) => ({ paidMinor, creditedMinor: 0, owedMinor: 11_700 - paidMinor, state: paidMinor ? ('part-paid' as const) : ('awaiting' as const), overdueDays: 0 });
+const account = (paidMinor: number) => ({ paidMinor, creditedMinor: 0, refundedMinor: 0, owedMinor: 11_700 - paidMinor, state: paidMinor ? ('part-paid' as const) : ('awaiting' as const), overdueDays: 0 });
 const issued = (paidMinor: number) => ({ ...DRAFT, status: 'issued' as const, number: 'INV-0003', issueDate: '2026-03-14', dueDate: '2026-04-13', issuedAt: '2026-03-14T10:00:00.000Z', account: account(paidMinor) });
 
 function show(paidMinor: number) {

@@ -46,6 +46,7 @@ export const DRAFT: InvoiceDetail = {
   ],
   byRate: [{ basisPoints: 2000, netMinor: 9_750, vatMinor: 1_950 }],
   payments: [],
+  refunds: [],
   credits: [],
 };
 

@@ -7,7 +7,7 @@ import { setSession } from '@/lib/session';
 import { PaymentForm } from '../components/payment-form';
 import { DRAFT } from './invoice-fixtures';
 
-const ISSUED = { ...DRAFT, status: 'issued' as const, number: 'INV-0003', account: { paidMinor: 0, creditedMinor: 0, owedMinor: 11_700, state: 'awaiting' as const, overdueDays: 0 } };
+const ISSUED = { ...DRAFT, status: 'issued' as const, number: 'INV-0003', account: { paidMinor: 0, creditedMinor: 0, refundedMinor: 0, owedMinor: 11_700, state: 'awaiting' as const, overdueDays: 0 } };
 
 function show(answer = { status: 201, body: ISSUED }) {
   const api = fakeApi(() => answer);

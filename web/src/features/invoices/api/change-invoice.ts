@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import type { InvoiceLineInput, OfficePaymentMethod } from '@wiretrail/core';
+import type { InvoiceLineInput, OfficePaymentMethod, RefundMethod } from '@wiretrail/core';
 import type { InvoiceDetail, InvoiceKind } from './get-invoice';
 
 /** Every change to an invoice changes lists, totals and the aged debt: all of ['invoices'] is asked for again. */
@@ -34,7 +34,14 @@ export const useRecordPayment = () =>
     api.post<InvoiceDetail>(`/invoices/${encodeURIComponent(id)}/payments`, body),
   );
 
+/** Money given back; the request id makes a second click (or a retry) record it, and refund a card, once. */
+export const useRecordRefund = () =>
+  useInvoiceMutation(
+    ({ id, ...body }: { id: string; amountMinor: number; method: RefundMethod; paymentId?: string; refundedOn?: string; reference?: string; note?: string; requestId: string }) =>
+      api.post<InvoiceDetail>(`/invoices/${encodeURIComponent(id)}/refunds`, body),
+  );
+
 export const useSendInvoice = () =>
-  useInvoiceMutation(({ id, to, linkDays }: { id: string; to: string; linkDays: number }) =>
-    api.post<{ invoice: InvoiceDetail; shareLink: { id: string; expiresAt: string } }>(`/invoices/${encodeURIComponent(id)}/send`, { to, linkDays }),
+  useInvoiceMutation(({ id, ...body }: { id: string; to: string; linkDays: number; cc?: string; message?: string }) =>
+    api.post<{ invoice: InvoiceDetail; shareLink: { id: string; expiresAt: string } }>(`/invoices/${encodeURIComponent(id)}/send`, body),
   );

@@ -13,6 +13,8 @@ export type {
   LineKind,
   PaymentMethod,
   PaymentView as Payment,
+  RefundMethod,
+  RefundView as Refund,
 } from '@wiretrail/core';
 
 /** While its e-mail is on its way, the invoice is asked for again every few seconds so the state moves on by itself. */

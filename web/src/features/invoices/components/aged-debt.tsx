@@ -14,7 +14,7 @@ import Typography from '@mui/material/Typography';
 import type { AgedDebtBucket } from '@wiretrail/core';
 import { formatMoney } from '@wiretrail/core';
 import { Link as RouterLink } from 'react-router-dom';
-import { useAgedDebt } from '../api/get-aged-debt';
+import { type AgedDebt as AgedDebtReport, useAgedDebt } from '../api/get-aged-debt';
 import { dateWords } from '../invoice-words';
 
 const TONE: Record<AgedDebtBucket, string> = {
@@ -102,6 +102,63 @@ export function AgedDebt({ jobLink }: { jobLink: (jobId: string) => string }) {
                   </TableCell>
                 </TableRow>
               ))}
+            </TableBody>
+          </Table>
+        </TableContainer>
+      )}
+      <OwedBack report={d} jobLink={jobLink} />
+    </Stack>
+  );
+}
+
+/** Credit balances: customers who paid more than their invoices now ask for, and what is to go back to each. */
+function OwedBack({ report, jobLink }: { report: AgedDebtReport; jobLink: (jobId: string) => string }) {
+  const owed = report.owedToCustomers;
+  return (
+    <Stack component="section" aria-labelledby="owed-back-heading" spacing={1.5} sx={{ pt: 1 }}>
+      <Stack direction="row" sx={{ alignItems: 'baseline', gap: 2, flexWrap: 'wrap' }}>
+        <Typography variant="h2" id="owed-back-heading">
+          Owed back to customers
+        </Typography>
+        <Typography color="text.secondary">paid above what their invoices now ask for, still to refund</Typography>
+      </Stack>
+      {owed.customers.length === 0 ? (
+        <Typography color="text.secondary">Nothing is owed back to anyone.</Typography>
+      ) : (
+        <TableContainer component={Paper} variant="outlined">
+          <Table size="small" aria-label="Owed back, by customer">
+            <TableHead>
+              <TableRow>
+                <TableCell>Customer and invoices</TableCell>
+                <TableCell align="right">To refund</TableCell>
+              </TableRow>
+            </TableHead>
+            <TableBody>
+              {owed.customers.map((c) => (
+                <TableRow key={c.customerId ?? c.name} sx={{ verticalAlign: 'top' }}>
+                  <TableCell>
+                    <Typography sx={{ fontWeight: 500 }}>{c.name}</Typography>
+                    {c.invoices.map((i) => (
+                      <Typography key={i.id} variant="body2" color="text.secondary">
+                        <Link component={RouterLink} to={jobLink(i.jobId)}>
+                          {i.number}
+                        </Link>
+                        {i.jobReference ? ` · ${i.jobReference}` : ''} · {formatMoney(i.paidMinor)} paid, {formatMoney(i.creditedMinor)} credited
+                        {i.refundedMinor ? `, ${formatMoney(i.refundedMinor)} refunded` : ''} · {formatMoney(i.toRefundMinor)} to refund
+                      </Typography>
+                    ))}
+                  </TableCell>
+                  <TableCell align="right" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums', whiteSpace: 'nowrap' }}>
+                    {formatMoney(c.totalMinor)}
+                  </TableCell>
+                </TableRow>
+              ))}
+              <TableRow>
+                <TableCell sx={{ fontWeight: 600 }}>Owed back in all</TableCell>
+                <TableCell align="right" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums', whiteSpace: 'nowrap' }}>
+                  {formatMoney(owed.totalMinor)}
+                </TableCell>
+              </TableRow>
             </TableBody>
           </Table>
         </TableContainer>

@@ -4,6 +4,7 @@ import ForwardToInboxOutlined from '@mui/icons-material/ForwardToInboxOutlined';
 import PaymentsOutlined from '@mui/icons-material/PaymentsOutlined';
 import ReceiptLongOutlined from '@mui/icons-material/ReceiptLongOutlined';
 import UndoOutlined from '@mui/icons-material/UndoOutlined';
+import CurrencyExchangeOutlined from '@mui/icons-material/CurrencyExchangeOutlined';
 import Alert from '@mui/material/Alert';
 import AlertTitle from '@mui/material/AlertTitle';
 import Box from '@mui/material/Box';
@@ -29,9 +30,10 @@ import { ApiError } from '@/lib/api-client';
 import { type InvoiceDetail, useInvoice } from '../api/get-invoice';
 import { useCreateInvoice, useDeleteInvoice, useIssueInvoice, useRaiseCreditNote } from '../api/change-invoice';
 import { useDownloadInvoice } from '../api/download-invoice';
-import { dateWords, invoiceName, METHOD_NAMES, refundWords } from '../invoice-words';
+import { balanceWords, dateWords, invoiceName, METHOD_NAMES, REFUND_METHOD_NAMES, refundStateWords, refundWords } from '../invoice-words';
 import { LineEditor } from './line-editor';
 import { PaymentForm } from './payment-form';
+import { RefundForm } from './refund-form';
 import { SendInvoiceDialog } from './send-invoice-dialog';
 import { MailChip, StandingChip } from './standing-chip';
 import { TotalsTable } from './totals-table';
@@ -65,6 +67,7 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
   const credit = useRaiseCreditNote();
   const fromQuote = useCreateInvoice(invoice.jobId);
   const [paying, setPaying] = useState(false);
+  const [refunding, setRefunding] = useState(false);
   const [sending, setSending] = useState<InvoiceDetail | null>(null);
   const [crediting, setCrediting] = useState(false);
   const a = invoice.account;
@@ -98,6 +101,11 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
             Record a payment
           </Button>
         )}
+        {invoice.kind === 'invoice' && a && a.owedMinor < 0 && (
+          <Button variant="outlined" startIcon={<CurrencyExchangeOutlined />} onClick={() => setRefunding(true)} disabled={refunding}>
+            Record a refund
+          </Button>
+        )}
         {invoice.kind === 'invoice' && (
           // Money already taken is not given back by a credit note: the office is told before raising one.
           <Button startIcon={<UndoOutlined />} onClick={() => (a && a.paidMinor > 0 ? setCrediting(true) : raiseCredit())} disabled={credit.isPending}>
@@ -125,6 +133,22 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
             onDone={(saved) => {
               setPaying(false);
               onNotice(saved.account?.owedMinor ? `Recorded. ${formatMoney(saved.account.owedMinor)} is still owed.` : `Recorded. ${saved.number} is paid.`);
+            }}
+          />
+        </Paper>
+      )}
+      {refunding && (
+        <Paper variant="outlined" sx={{ p: 2 }}>
+          <Typography variant="h3" sx={{ mb: 1.5 }}>
+            Record a refund
+          </Typography>
+          <RefundForm
+            invoice={invoice}
+            onCancel={() => setRefunding(false)}
+            onDone={(saved) => {
+              setRefunding(false);
+              const left = saved.account && saved.account.owedMinor < 0 ? -saved.account.owedMinor : 0;
+              onNotice(left ? `Refund recorded. ${formatMoney(left)} is still to refund.` : `Refund recorded. Nothing is left to refund on ${saved.number}.`);
             }}
           />
         </Paper>
@@ -179,6 +203,22 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
                   </TableBody>
                 </Table>
               )}
+              {invoice.refunds.length > 0 && (
+                <Table size="small" aria-label="Refunds given" sx={{ mt: 1 }}>
+                  <TableBody>
+                    {invoice.refunds.map((r) => (
+                      <TableRow key={r.id}>
+                        <TableCell>{dateWords(r.refundedOn)}</TableCell>
+                        <TableCell>Refund · {REFUND_METHOD_NAMES[r.method]}</TableCell>
+                        <TableCell sx={{ color: r.state === 'failed' ? 'error.main' : 'text.secondary' }}>{[r.reference, r.note, refundStateWords(r)].filter(Boolean).join(' · ')}</TableCell>
+                        <TableCell align="right" sx={{ textDecoration: r.state === 'failed' ? 'line-through' : undefined }}>
+                          −{formatMoney(r.amountMinor)}
+                        </TableCell>
+                      </TableRow>
+                    ))}
+                  </TableBody>
+                </Table>
+              )}
               {invoice.credits.length > 0 && (
                 <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
                   Credit notes: {invoice.credits.map((c) => (c.number ? `${c.number} (${formatMoney(-c.grossMinor)})` : 'one in draft')).join(', ')}
@@ -186,7 +226,7 @@ function IssuedView({ invoice, onOpen, onNotice }: { invoice: InvoiceDetail; onO
               )}
               {a && (
                 <Typography sx={{ mt: 1, fontWeight: 500 }}>
-                  {a.owedMinor > 0 ? `${formatMoney(a.owedMinor)} still owed` : a.owedMinor < 0 ? `${formatMoney(-a.owedMinor)} paid too much: to refund` : 'Nothing owed'}
+                  {balanceWords(a)}
                 </Typography>
               )}
             </Box>
