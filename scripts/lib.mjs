@@ -92,4 +92,5 @@ export const DEMO_SIGN_INS = [
   ['technician', 'tech1@larkfield.example'],
   ['technician', 'tech2@larkfield.example'],
   ['admin (second organisation)', 'admin@oakmere.example'],
+  ['technician for both (chooses at sign-in)', 'corin@valewiring.example'],
 ];

@@ -53,6 +53,20 @@ export class ApiProcess {
     }
   }
 
+  /**
+   * The same, without blocking this process: for a store the API writes to that runs in this process (s3rver),
+   * which must go on answering while the demo photos are loaded.
+   */
+  async prepareBeside(): Promise<void> {
+    for (const script of ['dist/database/migrate-cli.js', 'dist/database/seed-cli.js']) {
+      const child = spawn(process.execPath, [script], { cwd: API_DIR, env: this.env, stdio: ['ignore', 'ignore', 'pipe'] });
+      let stderr = '';
+      child.stderr!.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
+      const status = await new Promise<number | null>((done) => child.on('close', done));
+      if (status !== 0) throw new Error(stderr);
+    }
+  }
+
   /** Where the API answers; uploads' addresses are relative to the origin. */
   get origin(): string {
     return `http://127.0.0.1:${this.port}`;
@@ -77,7 +91,8 @@ export class ApiProcess {
     });
     this.child = child;
     this.starts++;
-    for (let i = 0; i < 200; i++) {
+    // Up to a minute: on a machine shared with other test runs a start can take far longer than its usual second.
+    for (const until = Date.now() + 60_000; Date.now() < until; ) {
       if (child.exitCode !== null) break;
       if (this.port === 0) {
         const named = /API listening on http:\/\/127\.0\.0\.1:(\d+)\/api/.exec(stdout);

@@ -18,8 +18,10 @@ describe('sign-in, refresh and sign-out', () => {
       name: 'Dan Whitlow',
       role: 'office',
       organisationId: expect.any(String),
+      organisationName: 'Larkfield Electrical & Data',
       active: true,
     });
+    expect(res.body.organisations).toEqual([{ id: res.body.user.organisationId, name: 'Larkfield Electrical & Data' }]);
     expect(res.body.user.passwordHash).toBeUndefined();
   });
 

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { JwtService } from '@nestjs/jwt';
 import { fillPath, type Route, routesOf } from './app-routes.js';
-import { createTestApp, signIn, type TestApp } from './test-app.js';
+import { createTestApp, signIn, signInTo, type TestApp } from './test-app.js';
 
 describe('authorisation matrix: every route × every role × own and other organisation × bad tokens', () => {
   let t: TestApp;
@@ -162,6 +162,38 @@ describe('authorisation matrix: every route × every role × own and other organ
       expect(JSON.stringify(res.body)).not.toContain(larkfieldOrg);
       for (const id of [...larkfieldIds.slice(0, 200), ...larkfieldBilling]) expect(JSON.stringify(res.body)).not.toContain(id);
     }
+  }, 120_000);
+
+  it('lets a person who works for both organisations read each only with a session of the one chosen', async () => {
+    const atOakmere = await signInTo(t, 'corin@valewiring.example', 'Oakmere Power & Data');
+    const atLarkfield = await signInTo(t, 'corin@valewiring.example', 'Larkfield Electrical & Data');
+    const oakmereOrg = atOakmere.user.organisationId;
+    const oakmereIds = ((await t.http.get('/api/sync/pull?checkpoint=0&limit=1000&deviceId=matrix-oakmere-admin').set('authorization', `Bearer ${tokens.otherAdmin}`)).body.changes as Array<{ id: string }>).map((c) => c.id);
+    expect(oakmereIds.length).toBeGreaterThan(3);
+    const failures: string[] = [];
+    const sampleIds = [...new Map(larkfieldChanges.map((c) => [c.entity, c.id])).values()];
+    const mine = routes.filter((x) => !x.isPublic && x.roles!.includes('technician'));
+    for (const [session, theirOrg, theirIds] of [[atOakmere, larkfieldOrg, [larkfieldOrg, ...sampleIds]], [atLarkfield, oakmereOrg, [oakmereOrg, ...oakmereIds]]] as const) {
+      for (const r of mine.filter((x) => x.path.includes(':'))) {
+        for (const id of theirIds) {
+          const res = await send(r, session.accessToken, id);
+          if (res.status < 400 || res.status >= 500) failures.push(`${session.user.organisationName} ${r.method} ${fillPath(r.path, id)} → ${res.status}`);
+          if (JSON.stringify(res.body).includes(theirOrg)) failures.push(`${r.method} ${r.path} leaked the other organisation's id`);
+        }
+      }
+      for (const r of mine.filter((x) => x.method === 'get' && !x.path.includes(':'))) {
+        const res = await t.http.get(r.path === '/api/sync/pull' ? `${r.path}?checkpoint=0&limit=1000&deviceId=matrix-corin-${session.user.id}` : r.path).set('authorization', `Bearer ${session.accessToken}`);
+        const body = JSON.stringify(res.body);
+        if (body.includes(theirOrg) || theirIds.some((id) => body.includes(id))) failures.push(`${session.user.organisationName} ${r.path} showed the other organisation's rows`);
+      }
+    }
+    expect(failures).toEqual([]);
+    // A token signed with our own key that pairs one membership with the other organisation opens nothing.
+    const jwt = t.app.get(JwtService);
+    const claims = JSON.parse(Buffer.from(atOakmere.accessToken.split('.')[1]!, 'base64url').toString());
+    const crossed = await jwt.signAsync({ sub: claims.sub, org: larkfieldOrg, role: claims.role, sid: claims.sid });
+    await t.http.get('/api/auth/me').set('authorization', `Bearer ${crossed}`).expect(401);
+    await t.http.get('/api/auth/me').set('authorization', `Bearer ${atOakmere.accessToken}`).expect(200);
   }, 120_000);
 
   it("gives Oakmere nothing of Larkfield's when its lists are filtered by Larkfield's sites, jobs and visits", async () => {

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { formatHlc, type Hlc, type Mutation, type MutationResult, tickHlc } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
 import { DeviceMirror, pullPage, type Session, withoutOfficeOnly } from './sync-helpers.js';
-import { createTestApp, signIn, type TestApp } from './test-app.js';
+import { addPerson, createTestApp, signIn, type TestApp } from './test-app.js';
 
 /**
  * Twenty technicians on overlapping jobs sync at the same moment, over HTTP, round after round. No request may fail
@@ -33,7 +33,7 @@ describe('twenty technicians syncing overlapping jobs at once', () => {
     const techs: Session[] = [];
     for (let i = 0; i < TECHNICIANS; i++) {
       const email = `load-tech-${i}@larkfield.example`;
-      await t.http.post('/api/users').set(auth).send({ email, name: `Load Tech ${i}`, role: 'technician', password: 'a-long-password' }).expect(201);
+      expect((await addPerson(t, admin, { email, name: `Load Tech ${i}`, role: 'technician' }, 'a-long-password')).status).toBe(201);
       techs.push(await signIn(t, email, 'a-long-password'));
     }
     for (const v of shared) {

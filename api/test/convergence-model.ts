@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../src/common/decorators/current-user.decorator.js';
 import { Organisation } from '../src/organisations/entities/organisation.entity.js';
+import { Person } from '../src/users/entities/person.entity.js';
 import { User } from '../src/users/entities/user.entity.js';
 
 /**
@@ -25,7 +26,10 @@ export async function organisationOfThree(db: DataSource, name: string): Promise
   const users: AuthUser[] = [];
   for (const [i, role] of (['admin', 'office', 'office'] as const).entries()) {
     const repo = db.getRepository(User);
-    const u = await repo.save(repo.create({ organisationId: org.id, email: `user-${i}-${uuidv7()}@convergence.example`, name: `User ${i}`, role, passwordHash: 'x', active: true, lastSignInAt: null }));
+    const email = `user-${i}-${uuidv7()}@convergence.example`;
+    const people = db.getRepository(Person);
+    const person = await people.save(people.create({ email, passwordHash: 'x' }));
+    const u = await repo.save(repo.create({ organisationId: org.id, personId: person.id, email, name: `User ${i}`, role, active: true, lastSignInAt: null }));
     users.push({ id: u.id, organisationId: org.id, role, email: u.email, name: u.name });
   }
   return users;

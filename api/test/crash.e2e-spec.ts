@@ -1,9 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { formatHlc, type Mutation, type MutationResult, type PullResponse, type SyncedRow } from '@wiretrail/core';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import S3rver from 's3rver';
 import { v7 as uuidv7 } from 'uuid';
 import { ApiProcess, signInTo } from './api-process.js';
-import { auditPhotoStore } from './photo-store-audit.js';
+import { auditPhotoStore, photosOnDisk, photosOnS3, type StoredPhotoFiles } from './photo-store-audit.js';
 import { noisyJpeg, sha256 } from './photo-helpers.js';
 import { seededRandom } from './seeded-random.js';
 
@@ -12,8 +15,9 @@ import { seededRandom } from './seeded-random.js';
  * started again on the same database, photo and upload directories. The phone does what the app does: resends
  * every batch it had no answer for, and carries each photo on from the offset the server reports (or starts it
  * again when the server no longer knows the upload). Nothing may be lost, applied twice, or stored half.
- * Runs the built server (dist/). `CRASH_KILLS` sets the number of kills (`npm run soak:crash -w api`),
- * `CRASH_SEED` repeats a run.
+ * Runs the built server (dist/), once with photos on the local disk and once on S3 (s3rver, a local S3 fake, which
+ * lives on in this process while the API dies). `CRASH_KILLS` sets the number of kills on disk, and a fifth as many
+ * on S3 (the disk run is what finds kills at awkward moments; the S3 run proves the store and the audit) (`npm run soak:crash -w api`); `CRASH_SEED` repeats a run.
  */
 const KILLS = Number(process.env.CRASH_KILLS ?? 50);
 const DEVICE = 'crash-phone';
@@ -26,23 +30,68 @@ interface PhotoOnPhone {
   location: string | null;
 }
 
-describe('a killed server loses nothing and applies nothing twice', () => {
+/** Where the killed server keeps its photos, and how the audit reads them behind its back. */
+interface CrashStorage {
+  name: string;
+  kills: number;
+  /** Starts what the store needs before the API does; answers the API's environment. */
+  open(): Promise<Record<string, string>>;
+  photos(api: ApiProcess): StoredPhotoFiles;
+  close(): Promise<void>;
+}
+
+const onDisk: CrashStorage = {
+  name: 'photos on the local disk',
+  kills: KILLS,
+  open: async () => ({}),
+  photos: (api) => photosOnDisk(join(api.directory, 'photos')),
+  close: async () => undefined,
+};
+
+function onS3(): CrashStorage {
+  const dir = mkdtempSync(join(tmpdir(), 'wiretrail-crash-s3-'));
+  const bucket = 'wiretrail-crash';
+  const s3 = new S3rver({ address: '127.0.0.1', port: 0, directory: dir, silent: true, configureBuckets: [{ name: bucket }] });
+  let endpoint = '';
+  let reader: ReturnType<typeof photosOnS3> | null = null;
+  return {
+    name: 'photos on S3',
+    kills: Math.ceil(KILLS / 5),
+    async open() {
+      endpoint = `http://127.0.0.1:${(await s3.run()).port}`;
+      return { PHOTO_STORAGE: 's3', S3_ENDPOINT: endpoint, S3_BUCKET: bucket, S3_REGION: 'us-east-1', S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' };
+    },
+    photos: () => (reader = photosOnS3({ endpoint, bucket, accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' })),
+    async close() {
+      reader?.close();
+      await s3.close();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+describe.each([onDisk, onS3()])('a killed server loses nothing and applies nothing twice, $name', (storage) => {
+  const KILLS = storage.kills;
   const random = seededRandom('CRASH_SEED');
   let api: ApiProcess;
   let headers: Record<string, string>;
   let visit: SyncedRow;
 
   beforeAll(async () => {
-    api = await ApiProcess.create();
-    api.prepare();
+    api = await ApiProcess.create(await storage.open());
+    await api.prepareBeside();
     await api.start();
     ({ headers } = await signInTo(api, 'tech1@larkfield.example'));
     const pulled = (await api.request('GET', '/api/sync/pull?checkpoint=0&limit=1000&deviceId=crash-look', { headers })).body as PullResponse;
     const job = pulled.changes.find((c) => c.entity === 'job' && c.row!.title === 'Move two lounge sockets and add a fused spur for an electric fire')!;
     visit = pulled.changes.find((c) => c.entity === 'visit' && c.row!.jobId === job.id)!.row!;
-  });
+    // The demo data's photos are rendered and stored before the first start.
+  }, 120_000);
 
-  afterAll(() => api.remove());
+  afterAll(async () => {
+    await api.remove();
+    await storage.close();
+  });
 
   it(`survives ${KILLS} kills at random moments of pushes and photo uploads`, async () => {
     // Photos of different weights, so that kills land while bytes travel and while the server sizes them.
@@ -210,11 +259,11 @@ describe('a killed server loses nothing and applies nothing twice', () => {
       const byId = new Map(rows.map((r) => [r.id, r]));
       for (const p of photos) expect(byId.get(p.id)).toMatchObject({ sha256: p.sha256, uploadState: 'ready', sizeBytes: p.bytes.length });
 
-      const audit = await auditPhotoStore(db, join(api.directory, 'photos'), join(api.directory, 'uploads'));
+      const audit = await auditPhotoStore(db, storage.photos(api), join(api.directory, 'uploads'));
       expect(audit.problems).toEqual([]);
       expect(audit.originals).toBeGreaterThanOrEqual(photos.length);
       console.log(
-        `crash: seed ${random.seed}; ${figures.kills} kills (${figures.duringPush} with a push outstanding, ${figures.duringUpload} with an upload outstanding), ` +
+        `crash, ${storage.name}: seed ${random.seed}; ${figures.kills} kills (${figures.duringPush} with a push outstanding, ${figures.duringUpload} with an upload outstanding), ` +
           `${figures.batches} batches (${figures.resent} resent), ${figures.mutations} mutations, ${photos.length} photos uploaded ` +
           `(${figures.resumed} resumed from the server's offset, ${figures.restarted} started again, ${figures.keptAtRestart} found already kept after a restart), ` +
           `${audit.originals} originals re-hashed, ${audit.readyRows} ready rows checked, ${audit.unfinishedUploads} abandoned uploads waiting to expire, ` +

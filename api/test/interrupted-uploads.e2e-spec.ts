@@ -4,7 +4,7 @@ import { appendFileSync } from 'node:fs';
 import type { Server } from 'node:http';
 import { join } from 'node:path';
 import { v7 as uuidv7 } from 'uuid';
-import { auditPhotoStore } from './photo-store-audit.js';
+import { auditPhotoStore, photosOnDisk } from './photo-store-audit.js';
 import { bearer, createUpload, cutPatch, noisyJpeg, patchUpload, settledOffset, sha256 } from './photo-helpers.js';
 import { seededRandom } from './seeded-random.js';
 import { DeviceMirror, mutation, push, type Session } from './sync-helpers.js';
@@ -96,7 +96,7 @@ describe('uploads cut off mid-chunk', () => {
     }
     const db = await openProbe(process.env);
     try {
-      const audit = await auditPhotoStore(db, join(t.directory, 'photos'), join(t.directory, 'uploads'));
+      const audit = await auditPhotoStore(db, photosOnDisk(join(t.directory, 'photos')), join(t.directory, 'uploads'));
       expect(audit.problems).toEqual([]);
       expect(audit.unfinishedUploads).toBe(0);
       console.log(

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import { AttemptCount } from '../src/auth/entities/attempt-count.entity.js';
 import { RefreshToken } from '../src/auth/entities/refresh-token.entity.js';
-import { bearer, createTestApp, DEMO_PASSWORD, signIn, type TestApp } from './test-app.js';
+import { addPerson, createTestApp, DEMO_PASSWORD, signIn, type TestApp } from './test-app.js';
 
 /**
  * Sign-in limits as shipped (10 failures a minute per address, 5 per quarter hour per account, 30 failed refreshes
@@ -23,7 +23,7 @@ describe('sign-in limits', () => {
     const admin = await signIn(t, 'admin@larkfield.example');
     const team = Array.from({ length: 30 }, (_, i) => `electrician${i + 1}@larkfield.example`);
     for (const [i, email] of team.entries()) {
-      await t.http.post('/api/users').set(bearer(admin)).send({ email, name: `Electrician ${i + 1}`, role: 'technician', password: 'office-morning-1' }).expect(201);
+      expect((await addPerson(t, admin, { email, name: `Electrician ${i + 1}`, role: 'technician' }, 'office-morning-1')).status).toBe(201);
     }
     const office = '198.51.100.20';
     const started = Date.now();

@@ -39,7 +39,9 @@ describe('sync: push and pull', () => {
     expect(paged.rows.size).toBe(officeView.rows.size);
     const oakmere = new DeviceMirror('oakmere-desk');
     await oakmere.pullAll(t, await signIn(t, 'admin@oakmere.example'));
-    expect(oakmere.rows.size).toBe(0);
+    // Oakmere's own four demo rows (the shared subcontractor's job), none of Larkfield's.
+    expect([...oakmere.rows.keys()].map((k) => k.split(':')[0]).sort()).toEqual(['customer', 'job', 'site', 'visit']);
+    for (const key of oakmere.rows.keys()) expect(officeView.rows.has(key)).toBe(false);
   });
 
   it('round-trips a row of every entity a device may write', async () => {

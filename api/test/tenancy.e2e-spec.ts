@@ -31,7 +31,12 @@ describe('organisations never see each other', () => {
     const res = await t.http.get('/api/users?search=larkfield').set(auth(oakmere)).expect(200);
     expect(res.body).toMatchObject({ total: 0, items: [] });
     const own = await t.http.get('/api/users').set(auth(oakmere)).expect(200);
-    expect(own.body.items.map((u: { email: string }) => u.email)).toEqual(['admin@oakmere.example']);
+    // The subcontractor both contractors share is in each list as that organisation's own membership.
+    expect(own.body.items.map((u: { email: string }) => u.email)).toEqual(['corin@valewiring.example', 'admin@oakmere.example']);
+    const lark = await t.http.get('/api/users?search=corin').set(auth(larkfield)).expect(200);
+    expect(lark.body.items).toHaveLength(1);
+    expect(lark.body.items[0].id).not.toBe(own.body.items[0].id);
+    expect(lark.body.items[0].organisationId).toBe(larkfield.user.organisationId);
   });
 
   it("answers 404 for another organisation's record and allows its own", async () => {

@@ -6,6 +6,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
+import { hashPassword } from '../src/auth/password.js';
+import { Person } from '../src/users/entities/person.entity.js';
 import { databaseEnvFor, dropDatabaseFor } from './test-database.js';
 
 export const DEMO_PASSWORD = 'wiretrail-demo';
@@ -57,9 +59,35 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
   };
 }
 
+export type SignedIn = { accessToken: string; refreshToken: string; user: { id: string; organisationId: string; organisationName: string; role: string }; organisations: Array<{ id: string; name: string }> };
+
+export const bearer = (s: { accessToken: string }) => ({ authorization: `Bearer ${s.accessToken}` });
+
 export async function signIn(t: TestApp, email: string, password = DEMO_PASSWORD) {
   const res = await t.http.post('/api/auth/sign-in').send({ email, password }).expect(200);
-  return res.body as { accessToken: string; refreshToken: string; user: { id: string; organisationId: string; role: string } };
+  if (!res.body.accessToken) throw new Error(`${email} works for several organisations: sign in with signInTo`);
+  return res.body as SignedIn;
+}
+
+/** Signs in someone who works for several organisations, choosing one by its name as the sign-in screen does. */
+export async function signInTo(t: TestApp, email: string, organisationName: string, password = DEMO_PASSWORD) {
+  const first = await t.http.post('/api/auth/sign-in').send({ email, password }).expect(200);
+  const choice = (first.body.chooseOrganisation ?? []) as Array<{ id: string; name: string }>;
+  const organisation = choice.find((o) => o.name === organisationName);
+  if (!organisation) throw new Error(`${email} was not offered ${organisationName}`);
+  const res = await t.http.post('/api/auth/sign-in').send({ email, password, organisationId: organisation.id }).expect(200);
+  return res.body as SignedIn;
+}
+
+/**
+ * Adds someone to the admin's team and gives them the password they would set from their welcome link (written
+ * behind the server's back, for tests about something else than the link).
+ */
+export async function addPerson(t: TestApp, admin: { accessToken: string }, person: { email: string; name: string; role: string }, password: string) {
+  const res = await t.http.post('/api/users').set(bearer(admin)).send(person);
+  if (res.status !== 201) return res;
+  await t.dataSource.getRepository(Person).update({ email: person.email.trim().toLowerCase() }, { passwordHash: await hashPassword(password) });
+  return res;
 }
 
 /** Several people signed in at once, in the order named. */
@@ -67,7 +95,6 @@ export function signInAll(t: TestApp, ...emails: string[]) {
   return Promise.all(emails.map((e) => signIn(t, e)));
 }
 
-export const bearer = (s: { accessToken: string }) => ({ authorization: `Bearer ${s.accessToken}` });
 
 /** An error body's message as one line, whether Nest gave one message or a list. */
 export const messagesOf = (body: { message: string | string[] }) => [body.message].flat().join(' | ');

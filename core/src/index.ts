@@ -44,6 +44,7 @@ export * from './contracts/conflicts.js';
 export * from './contracts/shared-job.js';
 export * from './contracts/records.js';
 export * from './contracts/jobs.js';
+export * from './contracts/sign-in.js';
 export * from './jobs/job-progress.js';
 export * from './contracts/visit-record.js';
 export * from './contracts/notifiable-work.js';

@@ -15,4 +15,11 @@ export class SignInPage {
     await this.page.getByLabel('Password').fill(password);
     await this.page.getByRole('button', { name: 'Sign in' }).click();
   }
+
+  /** For someone who works for several organisations: the choice shown once the password is right. */
+  async chooseOrganisation(name: string): Promise<void> {
+    const choice = this.page.getByRole('group', { name: /more than one organisation/ });
+    await expect(choice).toBeVisible();
+    await choice.getByRole('button', { name }).click();
+  }
 }

@@ -228,6 +228,13 @@ test.describe('the screens anyone may reach', () => {
       await page.goto('/sign-in');
       await page.getByRole('button', { name: /Sign in/ }).click();
       await expectNoAxeViolations(page, testInfo, 'sign-in with its mistakes');
+      // Someone who works for two organisations chooses one once the password is right.
+      await page.getByLabel('E-mail').fill('corin@valewiring.example');
+      await page.getByLabel('Password').fill('wiretrail-demo');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await expect(page.getByRole('group', { name: /more than one organisation/ })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'sign-in, choosing the organisation');
+      await page.getByRole('button', { name: 'Sign in as someone else' }).click();
 
       const { accessToken } = await apiSession(request, ROLE_USERS.office);
       const headers = { authorization: `Bearer ${accessToken}` };

@@ -18,7 +18,8 @@ test('the admin adds a technician, who sets their own password from the e-mailed
   await expect(dialog.getByText('Enter their name.')).toBeVisible();
   await dialog.getByLabel('Name').fill(`Jo Newcombe ${stamp}`);
   await dialog.getByLabel('E-mail').fill(email);
-  await dialog.getByLabel('First password').fill('temporary-password-1');
+  // Nobody sets another's password: the new person is e-mailed a link to set their own.
+  await expect(dialog.getByText(/We e-mail them: a link to set their own password/)).toBeVisible();
   await dialog.getByRole('button', { name: 'Add person' }).click();
   await expect(dialog).toHaveCount(0);
   const row = page.getByRole('row', { name: new RegExp(`Jo Newcombe ${stamp}`) });

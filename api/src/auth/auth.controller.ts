@@ -38,14 +38,14 @@ export class AuthController {
   @Post('sign-in')
   @HttpCode(200)
   signIn(@Body() dto: SignInDto, @Ip() address: string, @Headers('user-agent') userAgent?: string) {
-    return this.auth.signIn(dto.email, dto.password, address, userAgent);
+    return this.auth.signIn(dto.email, dto.password, address, userAgent, dto.organisationId);
   }
 
   @Public()
   @Post('refresh')
   @HttpCode(200)
   refresh(@Body() dto: RefreshTokenDto, @Ip() address: string, @Headers('user-agent') userAgent?: string) {
-    return this.auth.refresh(dto.refreshToken, address, userAgent);
+    return this.auth.refresh(dto.refreshToken, address, userAgent, dto.organisationId);
   }
 
   @Public()

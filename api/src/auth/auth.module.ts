@@ -4,6 +4,7 @@ import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { authConfig } from '../config/app.config.js';
+import { Person } from '../users/entities/person.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { UsersModule } from '../users/users.module.js';
 import { AuthController } from './auth.controller.js';
@@ -17,7 +18,7 @@ import { JwtStrategy } from './jwt.strategy.js';
   imports: [
     PassportModule,
     UsersModule,
-    TypeOrmModule.forFeature([User, RefreshToken, AttemptCount]),
+    TypeOrmModule.forFeature([Person, User, RefreshToken, AttemptCount]),
     JwtModule.registerAsync({
       imports: [ConfigModule.forFeature(authConfig)],
       inject: [authConfig.KEY],

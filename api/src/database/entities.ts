@@ -18,12 +18,13 @@ import { PhotoSender } from '../photos/entities/photo-sender.entity.js';
 import { SYNC_BOOKKEEPING } from '../sync/entities/sync-bookkeeping.entity.js';
 import { ALL_SYNC_SCHEMAS } from '../sync/entities/sync-schemas.js';
 import { ShareLink } from '../share-links/entities/share-link.entity.js';
+import { Person } from '../users/entities/person.entity.js';
 import { User } from '../users/entities/user.entity.js';
 
 import { BuildingNotification } from '../notifiable-work/entities/building-notification.entity.js';
 
 /** For the migration CLI and scripts; the Nest app registers entities per feature module. */
 export const ALL_ENTITIES = [
-  Organisation, User, RefreshToken, PasswordReset, AttemptCount, PhotoBlob, PhotoSender, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
+  Organisation, Person, User, RefreshToken, PasswordReset, AttemptCount, PhotoBlob, PhotoSender, DocumentCounter, PrintedRecord, OutboxMessage, ShareLink,
   VatRate, LabourRate, Invoice, InvoiceLine, Payment, Refund, CardCheckout, PaymentEvent, BuildingNotification, ...SYNC_BOOKKEEPING, ...ALL_SYNC_SCHEMAS,
 ];

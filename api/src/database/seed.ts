@@ -22,6 +22,7 @@ import { createInvoiceStorage, createPhotoStorage } from '../storage/file-stores
 import type { SyncRecord } from '../sync/entities/sync-schemas.js';
 import { ScopeService } from '../sync/scope.service.js';
 import { SyncEngine } from '../sync/sync-engine.service.js';
+import { Person } from '../users/entities/person.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { type DemoImage, renderDemoImages, storeDemoImage } from './demo-photos.js';
 
@@ -177,7 +178,9 @@ export async function seedDemoData(
       for (const l of o.labourRates ?? []) await em.save(em.create(LabourRate, { organisationId: org.id, ...l, isDefault: l.isDefault ?? false, active: true }));
       const users = new Map<string, string>();
       for (const u of o.users) {
-        const user = await em.save(em.create(User, { organisationId: org.id, email: u.email, name: u.name, role: u.role, passwordHash, active: true, lastSignInAt: null }));
+        // One person per address: a subcontractor listed under two contractors signs in once and chooses.
+        const person = (await em.findOneBy(Person, { email: u.email })) ?? (await em.save(em.create(Person, { email: u.email, passwordHash })));
+        const user = await em.save(em.create(User, { organisationId: org.id, personId: person.id, email: u.email, name: u.name, role: u.role, active: true, lastSignInAt: null }));
         users.set(u.email, user.id);
       }
       const admin = o.users.find((u) => u.role === 'admin');

@@ -35,9 +35,10 @@ export class UsersController {
     return this.users.findOne(caller.organisationId, id);
   }
 
+  /** Adds someone by e-mail; they are sent a link to set a password, or told to sign in with theirs. */
   @Post()
   create(@CurrentUser() caller: AuthUser, @Body() dto: CreateUserDto) {
-    return this.users.create(caller.organisationId, dto);
+    return this.users.create(caller, dto);
   }
 
   @Patch(':id')

@@ -2,14 +2,15 @@ import { BadRequestException, ConflictException, ForbiddenException, Injectable,
 import { InjectRepository } from '@nestjs/typeorm';
 import { Brackets, IsNull, Repository } from 'typeorm';
 import { RefreshToken } from '../auth/entities/refresh-token.entity.js';
-import { hashPassword } from '../auth/password.js';
 import { definedFields, refuseEmptied } from '../common/defined-fields.js';
 import { WriteQueue } from '../common/write-queue.js';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
 import type { ListUsersQueryDto } from './dto/list-users-query.dto.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
+import { Person } from './entities/person.entity.js';
 import { type PublicUser, toPublicUser, User } from './entities/user.entity.js';
+import { PasswordResetService } from './password-reset.service.js';
 import { textLike } from '../database/sql.js';
 
 export interface Page<T> {
@@ -24,6 +25,7 @@ export class UsersService {
   constructor(
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly queue: WriteQueue,
+    private readonly resets: PasswordResetService,
   ) {}
 
   async list(organisationId: string, q: ListUsersQueryDto): Promise<Page<PublicUser>> {
@@ -53,20 +55,31 @@ export class UsersService {
     return toPublicUser(user);
   }
 
-  async create(organisationId: string, dto: CreateUserDto): Promise<PublicUser> {
-    if (await this.users.existsBy({ email: dto.email })) {
-      throw new ConflictException('A user with that e-mail already exists.');
-    }
-    const user = this.users.create({
-      organisationId,
-      email: dto.email,
-      name: dto.name,
-      role: dto.role,
-      passwordHash: await hashPassword(dto.password),
-      active: true,
-      lastSignInAt: null,
+  /**
+   * Adds someone to the caller's organisation by e-mail. A person who already signs in for another organisation
+   * joins with the password they have; anyone else is sent a link to set one. The answer is the same either way:
+   * whether an address is known elsewhere is not this organisation's to learn.
+   */
+  async create(caller: AuthUser, dto: CreateUserDto): Promise<PublicUser> {
+    const user = await this.queue.run(async (em) => {
+      if (await em.existsBy(User, { organisationId: caller.organisationId, email: dto.email })) {
+        throw new ConflictException('Someone with that e-mail address is already in your team.');
+      }
+      const known = await em.findOneBy(Person, { email: dto.email });
+      // No password until the person sets one from their link: sign-in compares against a decoy meanwhile.
+      const person = known ?? (await em.save(em.create(Person, { email: dto.email, passwordHash: '' })));
+      const user = await em.save(em.create(User, {
+        organisationId: caller.organisationId,
+        personId: person.id,
+        email: dto.email,
+        name: dto.name,
+        role: dto.role,
+        active: true,
+        lastSignInAt: null,
+      }));
+      await this.resets.welcome(em, caller, user, !known);
+      return user;
     });
-    await this.queue.run((em) => em.save(user));
     return toPublicUser(user);
   }
 

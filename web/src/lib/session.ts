@@ -1,4 +1,4 @@
-import type { Role } from '@wiretrail/core';
+import type { OrganisationOption, Role } from '@wiretrail/core';
 import { useSyncExternalStore } from 'react';
 
 export interface SessionUser {
@@ -7,12 +7,16 @@ export interface SessionUser {
   name: string;
   role: Role;
   organisationId: string;
+  /** Absent from sessions kept before organisations were named in them. */
+  organisationName?: string;
 }
 
 export interface Session {
   accessToken: string;
   refreshToken: string;
   user: SessionUser;
+  /** Every organisation this person may sign in to; more than one offers a switch. */
+  organisations?: OrganisationOption[];
 }
 
 const KEY = 'wiretrail.session';

@@ -1,6 +1,6 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { IsEmail, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsOptional, IsString, IsUUID, MaxLength, MinLength } from 'class-validator';
 
 export class SignInDto {
   @ApiProperty({ example: 'office@larkfield.example' })
@@ -14,4 +14,9 @@ export class SignInDto {
   @MinLength(1, { message: 'password must not be empty' })
   @MaxLength(200)
   password: string;
+
+  @ApiPropertyOptional({ description: 'The organisation chosen, for a person who works for more than one' })
+  @IsOptional()
+  @IsUUID('all', { message: 'organisationId must be one of the organisations offered' })
+  organisationId?: string;
 }

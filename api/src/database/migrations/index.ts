@@ -15,6 +15,7 @@ import { AttemptsAndRefunds1796481200000 } from './1796481200000-AttemptsAndRefu
 import { RecordedAt1796490000000 } from './1796490000000-RecordedAt.js';
 import { BillOnce1796490500000 } from './1796490500000-BillOnce.js';
 import { NotifiableWork1796500000000 } from './1796500000000-NotifiableWork.js';
+import { PeopleAndMemberships1796500100000 } from './1796500100000-PeopleAndMemberships.js';
 import { Refunds1796500200000 } from './1796500200000-Refunds.js';
 import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 
@@ -37,6 +38,7 @@ export const MIGRATIONS = [
   RecordedAt1796490000000,
   BillOnce1796490500000,
   NotifiableWork1796500000000,
+  PeopleAndMemberships1796500100000,
   Refunds1796500200000,
   MailCopies1796500300000,
 ];

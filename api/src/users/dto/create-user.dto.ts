@@ -1,5 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsIn, IsString, MaxLength } from 'class-validator';
 import { type Role, ROLES } from '@wiretrail/core';
 import { NormalisedEmail, NormalisedText, SingleScriptEmail, VisibleText } from '../../common/validators/typed-text.js';
 
@@ -21,10 +21,4 @@ export class CreateUserDto {
   @ApiProperty({ enum: ROLES })
   @IsIn(ROLES, { message: `role must be one of: ${ROLES.join(', ')}` })
   role: Role;
-
-  @ApiProperty({ minLength: 10 })
-  @IsString()
-  @MinLength(10, { message: 'password must be at least 10 characters' })
-  @MaxLength(200)
-  password: string;
 }

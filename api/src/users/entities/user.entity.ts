@@ -4,14 +4,23 @@ import { TenantRow } from '../../common/entities.js';
 import { Organisation } from '../../organisations/entities/organisation.entity.js';
 import { TIMESTAMP } from '../../database/column-types.js';
 
+/**
+ * A person's membership of one organisation: their name, role and whether they may still sign in there. Every
+ * record names the membership (`user.id`), never the person, so each organisation sees only its own.
+ */
 @Entity('user')
+@Index(['organisationId', 'email'], { unique: true })
 export class User extends TenantRow {
   @ManyToOne(() => Organisation, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'organisationId' })
   organisation?: Relation<Organisation>;
 
-  /** Stored lower-cased; unique across organisations because sign-in is by e-mail alone. */
-  @Index({ unique: true })
+  /** The person who signs in with this membership (`person`). SQLite adds a NOT NULL column only with a default. */
+  @Index()
+  @Column({ type: 'varchar', length: 36, default: '' })
+  personId: string;
+
+  /** The person's address, kept beside the membership so the office lists and searches its own rows alone. */
   @Column({ type: 'varchar', length: 254 })
   email: string;
 
@@ -20,9 +29,6 @@ export class User extends TenantRow {
 
   @Column({ type: 'varchar', length: 20 })
   role: Role;
-
-  @Column({ type: 'varchar', length: 300, select: false })
-  passwordHash: string;
 
   @Column({ type: 'boolean', default: true })
   active: boolean;

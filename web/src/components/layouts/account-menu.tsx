@@ -7,9 +7,10 @@ import MenuItem from '@mui/material/MenuItem';
 import { useColorScheme } from '@mui/material/styles';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { paths } from '@/config/paths';
+import { homeFor, paths } from '@/config/paths';
 import { useSession } from '@/lib/session';
 import { signOut } from '@/lib/sign-out';
+import { switchOrganisation } from '@/lib/switch-organisation';
 
 export function AccountMenu() {
   const session = useSession();
@@ -17,6 +18,7 @@ export function AccountMenu() {
   const { mode, setMode } = useColorScheme();
   const [anchor, setAnchor] = useState<HTMLElement | null>(null);
   const close = () => setAnchor(null);
+  const others = (session?.organisations ?? []).filter((o) => o.id !== session?.user.organisationId);
   return (
     <>
       <IconButton color="inherit" aria-label="Account" onClick={(e) => setAnchor(e.currentTarget)}>
@@ -24,9 +26,24 @@ export function AccountMenu() {
       </IconButton>
       <Menu anchorEl={anchor} open={!!anchor} onClose={close}>
         <MenuItem disabled>
-          <ListItemText primary={session?.user.name} secondary={session?.user.email} />
+          <ListItemText primary={session?.user.name} secondary={[session?.user.email, session?.user.organisationName].filter(Boolean).join(' · ')} />
         </MenuItem>
         <Divider />
+        {others.map((o) => (
+          <MenuItem
+            key={o.id}
+            onClick={async () => {
+              close();
+              const next = await switchOrganisation(o.id).catch(async () => {
+                  await signOut();
+                  return null;
+                });
+              navigate(next ? homeFor(next.user.role) : paths.signIn.path, { replace: true });
+            }}
+          >
+            Work for {o.name}
+          </MenuItem>
+        ))}
         <MenuItem
           onClick={() => {
             setMode(mode === 'dark' ? 'light' : 'dark');

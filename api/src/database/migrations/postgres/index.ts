@@ -9,6 +9,7 @@ import { PostgresAttemptsAndRefunds1796481200001 } from './1796481200001-Postgre
 import { PostgresRecordedAt1796490000001 } from './1796490000001-PostgresRecordedAt.js';
 import { PostgresBillOnce1796490500001 } from './1796490500001-PostgresBillOnce.js';
 import { PostgresNotifiableWork1796500000001 } from './1796500000001-PostgresNotifiableWork.js';
+import { PostgresPeopleAndMemberships1796500100001 } from './1796500100001-PostgresPeopleAndMemberships.js';
 import { PostgresRefunds1796500200001 } from './1796500200001-PostgresRefunds.js';
 import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCopies.js';
 
@@ -25,6 +26,7 @@ export const POSTGRES_MIGRATIONS = [
   PostgresRecordedAt1796490000001,
   PostgresBillOnce1796490500001,
   PostgresNotifiableWork1796500000001,
+  PostgresPeopleAndMemberships1796500100001,
   PostgresRefunds1796500200001,
   PostgresMailCopies1796500300001,
 ];

@@ -12,9 +12,10 @@ import { DEFAULT_RULE_SET, VERDICT_DISCLAIMER } from '@wiretrail/core';
 import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { env } from '@/config/env';
-import { paths } from '@/config/paths';
+import { homeFor, paths } from '@/config/paths';
 import { useSession } from '@/lib/session';
 import { signOut } from '@/lib/sign-out';
+import { switchOrganisation } from '@/lib/switch-organisation';
 
 export function Component() {
   const session = useSession();
@@ -33,8 +34,31 @@ export function Component() {
             <ListItem>
               <ListItemText primary="Role" secondary="Technician" />
             </ListItem>
+            {session.user.organisationName && (
+              <ListItem>
+                <ListItemText primary="Working for" secondary={session.user.organisationName} />
+              </ListItem>
+            )}
           </List>
         </Paper>
+        {(session.organisations ?? [])
+          .filter((o) => o.id !== session.user.organisationId)
+          .map((o) => (
+            <Button
+              key={o.id}
+              variant="outlined"
+              size="large"
+              onClick={async () => {
+                const next = await switchOrganisation(o.id).catch(async () => {
+                  await signOut();
+                  return null;
+                });
+                navigate(next ? homeFor(next.user.role) : paths.signIn.path, { replace: true });
+              }}
+            >
+              Work for {o.name}
+            </Button>
+          ))}
         <Paper variant="outlined" sx={{ p: 2 }}>
           <Typography variant="h3" sx={{ mb: 1.5 }} id="theme-label">
             Screen

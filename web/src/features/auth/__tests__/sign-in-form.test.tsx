@@ -63,4 +63,41 @@ describe('SignInForm', () => {
     await waitFor(() => expect(onSignedIn).toHaveBeenCalledWith(session));
     expect(getSession()?.user.role).toBe('office');
   });
+
+  it('asks someone who works for several organisations to choose, then signs in to the one chosen', async () => {
+    const choice = { chooseOrganisation: [{ id: 'org-l', name: 'Larkfield Electrical & Data' }, { id: 'org-o', name: 'Oakmere Power & Data' }] };
+    const session = {
+      accessToken: 'a', refreshToken: 'r',
+      user: { id: 'u-o', email: 'corin@valewiring.example', name: 'Corin Vale', role: 'technician', organisationId: 'org-o', organisationName: 'Oakmere Power & Data' },
+      organisations: choice.chooseOrganisation,
+    };
+    const fetchMock = vi.fn(async (_url: string, init: RequestInit) =>
+      new Response(JSON.stringify(JSON.parse(init.body as string).organisationId ? session : choice), { status: 200 }));
+    vi.stubGlobal('fetch', fetchMock);
+    const onSignedIn = renderForm();
+    fireEvent.input(screen.getByLabelText('E-mail'), { target: { value: 'corin@valewiring.example' } });
+    fireEvent.input(screen.getByLabelText('Password'), { target: { value: 'wiretrail-demo' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    const group = await screen.findByRole('group', { name: /more than one organisation/ });
+    expect(group).toBeTruthy();
+    // No session until the choice is made.
+    expect(getSession()).toBeNull();
+    expect(onSignedIn).not.toHaveBeenCalled();
+    fireEvent.click(screen.getByRole('button', { name: 'Oakmere Power & Data' }));
+    await waitFor(() => expect(onSignedIn).toHaveBeenCalledWith(session));
+    const [, second] = fetchMock.mock.calls[1] as unknown as [string, RequestInit];
+    expect(JSON.parse(second.body as string)).toEqual({ email: 'corin@valewiring.example', password: 'wiretrail-demo', organisationId: 'org-o' });
+    expect(getSession()?.user.organisationName).toBe('Oakmere Power & Data');
+  });
+
+  it('goes back to the form, without the password, to sign in as someone else', async () => {
+    vi.stubGlobal('fetch', vi.fn(async () => new Response(JSON.stringify({ chooseOrganisation: [{ id: 'a', name: 'A' }, { id: 'b', name: 'B' }] }), { status: 200 })));
+    renderForm();
+    fireEvent.input(screen.getByLabelText('E-mail'), { target: { value: 'corin@valewiring.example' } });
+    fireEvent.input(screen.getByLabelText('Password'), { target: { value: 'wiretrail-demo' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Sign in as someone else' }));
+    expect((screen.getByLabelText('Password') as HTMLInputElement).value).toBe('');
+    expect((screen.getByLabelText('E-mail') as HTMLInputElement).value).toBe('corin@valewiring.example');
+  });
 });

@@ -1,6 +1,7 @@
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
 import { type FormEvent, useRef, useState } from 'react';
 // Only zod's e-mail pattern: signing in is on the way to every first screen, and two checks need no form library.
 import { regexes } from 'zod/v4/core';
@@ -9,7 +10,7 @@ import type { Session } from '@/lib/session';
 import { type SignInInput, useSignIn } from '../api/sign-in';
 import { AuthTextField } from './auth-text-field';
 
-type Problems = Partial<Record<keyof SignInInput, string>>;
+type Problems = Partial<Record<'email' | 'password', string>>;
 
 /** What is wrong with the form as typed; the e-mail address is checked (and sent) without surrounding spaces. */
 export function signInProblems({ email, password }: SignInInput): Problems {
@@ -34,7 +35,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (session: Session) => v
   const inputs = { email: useRef<HTMLInputElement>(null), password: useRef<HTMLInputElement>(null) };
   const signIn = useSignIn(onSignedIn);
 
-  function change(field: keyof SignInInput, value: string) {
+  function change(field: 'email' | 'password', value: string) {
     const next = { ...values, [field]: value };
     setValues(next);
     if (problems) setProblems(signInProblems(next));
@@ -47,6 +48,30 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (session: Session) => v
     const first = (['email', 'password'] as const).find((f) => found[f]);
     if (first) inputs[first].current?.focus();
     else void signIn.submit({ email: values.email.trim(), password: values.password });
+  }
+
+  if (signIn.choice) {
+    // The password was right; the person works for several organisations and says which one now.
+    return (
+      <Stack spacing={2} role="group" aria-labelledby="choose-organisation">
+        {signIn.isError && <Alert severity="error">{explain(signIn.error)}</Alert>}
+        <Typography id="choose-organisation" component="h2" variant="subtitle1">
+          You work for more than one organisation. Which one are you working for now?
+        </Typography>
+        {signIn.choice.map((organisation) => (
+          <Button
+            key={organisation.id}
+            variant="outlined"
+            size="large"
+            disabled={signIn.isPending}
+            onClick={() => void signIn.submit({ email: values.email.trim(), password: values.password, organisationId: organisation.id })}
+          >
+            {organisation.name}
+          </Button>
+        ))}
+        <Button onClick={() => { setValues({ ...values, password: '' }); signIn.startAgain(); }}>Sign in as someone else</Button>
+      </Stack>
+    );
   }
 
   return (

@@ -15,13 +15,17 @@ import type { InvoiceDetail } from '../api/get-invoice';
 import { useSendInvoice } from '../api/change-invoice';
 import { invoiceNameInText } from '../invoice-words';
 
-const sendSchema = z.object({
-  to: z.string().trim().min(1, 'To: the e-mail address to send it to.').email('To: that is not an e-mail address.').max(254, 'To: at most 254 characters.'),
-  linkDays: z
-    .string()
-    .regex(/^\d{1,2}$/, 'Link works for: a whole number of days.')
-    .refine((v) => Number(v) >= 1 && Number(v) <= 90, 'Link works for: from 1 to 90 days.'),
-});
+export const sendSchema = z
+  .object({
+    to: z.string().trim().min(1, 'To: the e-mail address to send it to.').email('To: that is not an e-mail address.').max(254, 'To: at most 254 characters.'),
+    cc: z.union([z.literal(''), z.string().trim().email('Copy to: that is not an e-mail address.').max(254, 'Copy to: at most 254 characters.')]),
+    message: z.string().trim().max(2000, 'Your message: at most 2000 characters.'),
+    linkDays: z
+      .string()
+      .regex(/^\d{1,2}$/, 'Link works for: a whole number of days.')
+      .refine((v) => Number(v) >= 1 && Number(v) <= 90, 'Link works for: from 1 to 90 days.'),
+  })
+  .refine((v) => !v.cc.trim() || v.cc.trim().toLowerCase() !== v.to.trim().toLowerCase(), { path: ['cc'], message: 'Copy to: another address than To.' });
 type Values = z.infer<typeof sendSchema>;
 
 /**
@@ -32,7 +36,7 @@ export function SendInvoiceDialog({ invoice, onClose, onSent }: { invoice: Invoi
   const send = useSendInvoice();
   const { register, handleSubmit, formState, reset } = useForm<Values>({ resolver: zodResolver(sendSchema) });
   useEffect(() => {
-    if (invoice) reset({ to: invoice.customer?.email ?? '', linkDays: '30' });
+    if (invoice) reset({ to: invoice.customer?.email ?? '', cc: '', message: '', linkDays: '30' });
   }, [invoice, reset]);
   const close = () => {
     send.reset();
@@ -40,7 +44,7 @@ export function SendInvoiceDialog({ invoice, onClose, onSent }: { invoice: Invoi
   };
   const submit = handleSubmit((v) =>
     send.mutate(
-      { id: invoice!.id, to: v.to, linkDays: Number(v.linkDays) },
+      { id: invoice!.id, to: v.to, linkDays: Number(v.linkDays), ...(v.cc.trim() ? { cc: v.cc.trim() } : {}), ...(v.message.trim() ? { message: v.message.trim() } : {}) },
       {
         onSuccess: () => {
           onSent?.(v.to);
@@ -61,6 +65,22 @@ export function SendInvoiceDialog({ invoice, onClose, onSent }: { invoice: Invoi
           </Typography>
           {send.isError && <Alert severity="error">{send.error.message}</Alert>}
           <TextField label="To" type="email" autoComplete="email" {...register('to')} error={!!e.to} helperText={e.to?.message} />
+          <TextField
+            label="Copy to (optional)"
+            type="email"
+            autoComplete="off"
+            {...register('cc')}
+            error={!!e.cc}
+            helperText={e.cc?.message ?? 'Someone else who should have it, such as the landlord or the customer’s accounts.'}
+          />
+          <TextField
+            label="Your message (optional)"
+            multiline
+            minRows={3}
+            {...register('message')}
+            error={!!e.message}
+            helperText={e.message?.message ?? 'Goes after the greeting, before what is attached.'}
+          />
           <TextField label="Link works for (days)" inputMode="numeric" {...register('linkDays')} error={!!e.linkDays} helperText={e.linkDays?.message} sx={{ maxWidth: 240 }} />
         </Stack>
       </DialogContent>

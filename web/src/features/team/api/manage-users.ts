@@ -7,7 +7,6 @@ export interface NewPerson {
   name: string;
   email: string;
   role: Role;
-  password: string;
 }
 
 function useTeamMutation<V>(fn: (v: V) => Promise<unknown>) {

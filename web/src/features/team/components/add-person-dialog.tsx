@@ -8,6 +8,7 @@ import DialogTitle from '@mui/material/DialogTitle';
 import MenuItem from '@mui/material/MenuItem';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
+import Typography from '@mui/material/Typography';
 import { ROLES } from '@wiretrail/core';
 import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
@@ -17,7 +18,6 @@ const schema = z.object({
   name: z.string().trim().min(1, 'Enter their name.'),
   email: z.string().trim().min(1, 'Enter their e-mail address.').email('That is not an e-mail address.'),
   role: z.enum(ROLES, { message: 'Choose a role.' }),
-  password: z.string().min(10, 'The first password must be at least 10 characters; they can change it with a password link.'),
 });
 type Values = z.infer<typeof schema>;
 
@@ -25,7 +25,7 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
   const create = useCreatePerson();
   const { register, control, handleSubmit, formState, reset } = useForm<Values>({
     resolver: zodResolver(schema),
-    defaultValues: { name: '', email: '', role: 'technician', password: '' },
+    defaultValues: { name: '', email: '', role: 'technician' },
   });
   const close = () => {
     reset();
@@ -51,7 +51,10 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
               </TextField>
             )}
           />
-          <TextField label="First password" type="password" autoComplete="new-password" {...register('password')} error={!!formState.errors.password} helperText={formState.errors.password?.message} />
+          <Typography variant="body2" color="text.secondary">
+            We e-mail them: a link to set their own password, or, if they already sign in to Wiretrail for another
+            contractor, a note to sign in as they do and choose you.
+          </Typography>
         </Stack>
       </DialogContent>
       <DialogActions sx={{ px: 3, pb: 2 }}>

@@ -1,0 +1,35 @@
+import type { MigrationInterface, QueryRunner } from "typeorm";
+
+/**
+ * One person (an e-mail address and a password) may belong to several organisations: the password moves to
+ * "person", and each "user" row becomes that person's membership of one organisation. Every existing user becomes a
+ * person of the same id.
+ */
+export class PostgresPeopleAndMemberships1796500100001 implements MigrationInterface {
+    name = 'PostgresPeopleAndMemberships1796500100001'
+
+    public async up(queryRunner: QueryRunner): Promise<void> {
+        await queryRunner.query(`CREATE TABLE "person" ("id" character varying(36) NOT NULL, "createdAt" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "updatedAt" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "email" character varying(254) NOT NULL, "passwordHash" character varying(300) NOT NULL, CONSTRAINT "PK_5fdaf670315c4b7e70cce85daa3" PRIMARY KEY ("id"))`);
+        await queryRunner.query(`CREATE UNIQUE INDEX "IDX_d2d717efd90709ebd3cb26b936" ON "person" ("email") `);
+        // One person per address (addresses were unique until now; after an undo one may be listed twice).
+        await queryRunner.query(`INSERT INTO "person" ("id", "createdAt", "updatedAt", "email", "passwordHash") SELECT "u"."id", "u"."createdAt", "u"."updatedAt", "u"."email", "u"."passwordHash" FROM "user" "u" WHERE "u"."id" = (SELECT MIN("o"."id") FROM "user" "o" WHERE "o"."email" = "u"."email")`);
+        await queryRunner.query(`ALTER TABLE "user" ADD COLUMN "personId" character varying(36) NOT NULL DEFAULT ''`);
+        await queryRunner.query(`UPDATE "user" SET "personId" = (SELECT "p"."id" FROM "person" "p" WHERE "p"."email" = "user"."email")`);
+        await queryRunner.query(`DROP INDEX "public"."IDX_e12875dfb3b1d92d7d7c5377e2"`);
+        await queryRunner.query(`ALTER TABLE "user" DROP COLUMN "passwordHash"`);
+        await queryRunner.query(`CREATE INDEX "IDX_6aac19005cea8e2119cbe7759e" ON "user" ("personId") `);
+        await queryRunner.query(`CREATE UNIQUE INDEX "IDX_8294ee7b3d4e25f5ed427426fd" ON "user" ("organisationId", "email") `);
+    }
+
+    /** Every membership keeps its person's password; an address in two organisations keeps its index, not unique. */
+    public async down(queryRunner: QueryRunner): Promise<void> {
+        await queryRunner.query(`ALTER TABLE "user" ADD COLUMN "passwordHash" character varying(300) NOT NULL DEFAULT ''`);
+        await queryRunner.query(`UPDATE "user" SET "passwordHash" = (SELECT "p"."passwordHash" FROM "person" "p" WHERE "p"."id" = "user"."personId")`);
+        await queryRunner.query(`DROP INDEX "public"."IDX_8294ee7b3d4e25f5ed427426fd"`);
+        await queryRunner.query(`DROP INDEX "public"."IDX_6aac19005cea8e2119cbe7759e"`);
+        await queryRunner.query(`ALTER TABLE "user" DROP COLUMN "personId"`);
+        await queryRunner.query(`CREATE INDEX "IDX_e12875dfb3b1d92d7d7c5377e2" ON "user" ("email") `);
+        await queryRunner.query(`DROP INDEX "public"."IDX_d2d717efd90709ebd3cb26b936"`);
+        await queryRunner.query(`DROP TABLE "person"`);
+    }
+}
