@@ -1,5 +1,6 @@
 import { OfficeJobPage } from '../pages/office-job-page.js';
 import { bookVisit, DESK, expect, PHONE, ROLE_USERS, signedInAtDesk, test } from '../fixtures.js';
+import { pickerInput, typeInPicker } from '../pages/pickers.js';
 
 test.use({ viewport: PHONE, signedInAs: 'technician' });
 
@@ -50,15 +51,15 @@ test.describe('the jobs table at the desk', () => {
   test('keeps both visit dates filled in quick succession and its sort through a reload', async ({ page }) => {
     await page.goto('/jobs?view=table');
     await expect(page.getByRole('grid', { name: 'Jobs' })).toBeVisible();
-    await page.getByLabel('Visits from').fill('2026-01-01');
-    await page.getByLabel('Visits to').fill('2036-12-31');
+    await typeInPicker(page, 'Visits from', '01/01/2026');
+    await typeInPicker(page, 'Visits to', '31/12/2036');
     await page.getByRole('columnheader', { name: 'Reference' }).click();
     await expect(page).toHaveURL(/[?&]sort=reference/);
     await expect(page).toHaveURL(/[?&]from=2026-01-01/);
     await expect(page).toHaveURL(/[?&]to=2036-12-31/);
     await page.reload();
     await expect(page.getByRole('columnheader', { name: 'Reference' })).toHaveAttribute('aria-sort', 'ascending');
-    await expect(page.getByLabel('Visits from')).toHaveValue('2026-01-01');
-    await expect(page.getByLabel('Visits to')).toHaveValue('2036-12-31');
+    await expect(pickerInput(page, 'Visits from')).toHaveValue('01/01/2026');
+    await expect(pickerInput(page, 'Visits to')).toHaveValue('31/12/2036');
   });
 });

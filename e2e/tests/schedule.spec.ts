@@ -1,4 +1,5 @@
 import { apiSession, DESK, expect, test } from '../fixtures.js';
+import { typeInPicker } from '../pages/pickers.js';
 
 test.use({ viewport: DESK, signedInAs: 'office' });
 
@@ -13,12 +14,12 @@ test('the office books a visit for a technician and their phone receives it', as
   const dialog = page.getByRole('dialog', { name: 'Book a visit' });
   await dialog.getByLabel('Job').click();
   await page.getByRole('option', { name: /LED-0044/ }).click();
-  await dialog.getByLabel('Start').fill('16:30');
-  await dialog.getByLabel('Finish').fill('15:00');
+  await typeInPicker(dialog, 'Start', '16:30');
+  await typeInPicker(dialog, 'Finish', '15:00');
   // Late in the day 16:30 has gone by, and the button asks to book anyway: either way the times are checked first.
   await dialog.getByRole('button', { name: /^Book (visit|anyway)$/ }).click();
   await expect(dialog.getByText('The finish time must be after the start time.')).toBeVisible();
-  await dialog.getByLabel('Finish').fill('17:45');
+  await typeInPicker(dialog, 'Finish', '17:45');
   await dialog.getByLabel('Aled Pryce').check();
   // Aled is at the practice until 17:00 today (LED-0042): the office is told before booking over it.
   await expect(dialog.getByRole('alert').filter({ hasText: 'Aled Pryce is already booked 13:00–17:00 that day on LED-0042' })).toBeVisible();

@@ -1,4 +1,6 @@
 import {
+  type CircuitDetailField,
+  circuitDetailProblems,
   type EntitySpec,
   fieldError,
   type FieldValue,
@@ -118,6 +120,35 @@ export function checkTechnicianWrite(scope: TechnicianScope | null, checked: Che
       return;
     }
   }
+}
+
+/** Which fields each of core's circuit-detail problems is about: a change to any of them asks the question again. */
+const CIRCUIT_DETAIL_INPUTS: Record<CircuitDetailField, readonly string[]> = {
+  deviceRatingA: ['deviceType', 'deviceRatingA'],
+  rcdType: ['rcdType'],
+  liveCsaMm2: ['liveCsaMm2'],
+  cpcCsaMm2: ['cpcCsaMm2', 'liveCsaMm2'],
+};
+
+/**
+ * What a record cannot be, by core's rules, whoever writes it (a phone's push or an office form): the same checks the
+ * forms make, on the row as it would be after the change. Only what the change touches is judged, so a row recorded
+ * before a rule existed can still be edited elsewhere.
+ */
+export function checkRecordRules({ mutation: m, set, isDelete }: CheckedMutation, existing: SyncRecord | null): void {
+  if (isDelete || m.entity !== 'circuit') return;
+  const after = { ...existing, ...set };
+  const num = (v: unknown) => (typeof v === 'number' ? v : null);
+  const text = (v: unknown) => (typeof v === 'string' ? v : null);
+  const problems = circuitDetailProblems({
+    deviceType: text(after.deviceType),
+    deviceRatingA: num(after.deviceRatingA),
+    rcdType: text(after.rcdType),
+    liveCsaMm2: num(after.liveCsaMm2),
+    cpcCsaMm2: num(after.cpcCsaMm2),
+  });
+  const touched = (Object.entries(problems) as [CircuitDetailField, string][]).filter(([field]) => CIRCUIT_DETAIL_INPUTS[field].some((f) => f in set));
+  if (touched.length) throw new MutationRefused(touched.map(([, message]) => message).join(' '));
 }
 
 const REQUIRED = new Map<SyncEntityName, string[]>();

@@ -19,7 +19,7 @@ import { v7 as uuidv7 } from 'uuid';
 import { AppliedMutation } from './entities/sync-bookkeeping.entity.js';
 import { type SyncRecord, textOrNull } from './entities/sync-schemas.js';
 import { selectMany } from './bulk-write.js';
-import { type CheckedMutation, checkDeviceClaims, checkMutation, checkNewRow, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
+import { type CheckedMutation, checkDeviceClaims, checkMutation, checkNewRow, checkRecordRules, checkTechnicianWrite, isMutationId, MutationRefused } from './mutation-checks.js';
 import { type Lock, type LockRule, RecordLocks } from './record-locks.js';
 import { checkReferences, preloadReferences, referencedIds } from './reference-checks.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
@@ -266,6 +266,7 @@ export class SyncEngine {
     if (device) checkDeviceClaims(actor, device, checked);
 
     checkTechnicianWrite(scope, checked, existing);
+    checkRecordRules(checked, existing);
     const refusal = judges.get(m.entity)?.(checked, existing);
     if (refusal) throw new MutationRefused(refusal);
     const rowSite = spec.siteField === 'siteId' ? textOrNull(set.siteId ?? existing?.siteId) : spec.siteField === 'id' ? m.id : null;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { circuitDetailProblems, standardRatings } from './circuit-details-check.js';
+import { CONDUCTOR_SIZES_MM2, circuitDetailProblems, RCD_TYPE_CHOICES, standardRatings } from './circuit-details-check.js';
 
 describe('a circuit’s details that cannot be so', () => {
   it('knows the ratings each device is made in from the maximum Zs tables', () => {
@@ -23,5 +23,11 @@ describe('a circuit’s details that cannot be so', () => {
     expect(circuitDetailProblems({ deviceType: 'B', deviceRatingA: 32, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5 })).toEqual({});
     expect(circuitDetailProblems({ rcdType: 'a s' })).toEqual({});
     expect(circuitDetailProblems({ deviceType: 'BS 1362', deviceRatingA: 13, liveCsaMm2: 6, cpcCsaMm2: 6 })).toEqual({});
+  });
+
+  it('takes every value the forms offer', () => {
+    // The offered lists must never be refused by the check they feed.
+    for (const rcdType of RCD_TYPE_CHOICES) expect(circuitDetailProblems({ rcdType })).toEqual({});
+    for (const size of CONDUCTOR_SIZES_MM2) expect(circuitDetailProblems({ liveCsaMm2: size, cpcCsaMm2: size })).toEqual({});
   });
 });

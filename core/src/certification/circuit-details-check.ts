@@ -10,6 +10,9 @@ export const CONDUCTOR_SIZES_MM2 = [1, 1.5, 2.5, 4, 6, 10, 16, 25, 35, 50, 70, 9
 /** RCD types by the residual current they detect (BS EN 61008-1 / 61009-1, with F and B from BS EN 62423), S where time-delayed. */
 const RCD_TYPE = /^(AC|A|F|B)( ?S)?$/;
 
+/** The RCD types a form offers, the usual first; each passes the check below. */
+export const RCD_TYPE_CHOICES = ['A', 'AC', 'F', 'B', 'A S', 'AC S', 'F S', 'B S'] as const;
+
 export type CircuitDetailField = 'deviceRatingA' | 'rcdType' | 'liveCsaMm2' | 'cpcCsaMm2';
 
 export interface CircuitDetailsToCheck {

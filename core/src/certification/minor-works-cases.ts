@@ -146,8 +146,10 @@ export const MINOR_WORKS_CASES: readonly MinorWorksCase[] = [
   visitCase(
     7,
     'a Zs that no table judges blocks the certificate until it is judged',
-    // BS 88-3 fuses come in 5, 16, 20, 32, 45 and 63 A (BS 7671:2018+A2:2022 Table 41.2, M): a 30 A one has no limit.
-    { circuits: [() => ({ ...COOKER, deviceType: 'BS 88-3', deviceRatingA: 30 })], tests: [tested('2026-03-14T10:30:00.000Z')] },
+    // Fault protection by an RCD whose rated residual current is not recorded: Table 41.5's 50 V / IΔn cannot be
+    // worked out (BS 7671:2018+A2:2022 Reg 411.5.3). A rating no table lists (a 30 A BS 88-3) is refused before it
+    // is saved, by core's circuit-details check on both sides.
+    { circuits: [() => ({ ...COOKER, faultProtection: 'rcd' })], tests: [tested('2026-03-14T10:30:00.000Z')] },
     { issuable: false, findings: [{ kind: 'unjudged', what: 'Circuit 4 (Cooker): Earth fault loop impedance Zs' }] },
   ),
   visitCase(

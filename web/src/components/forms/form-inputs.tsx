@@ -1,6 +1,7 @@
 import MenuItem from '@mui/material/MenuItem';
 import TextField, { type TextFieldProps } from '@mui/material/TextField';
 import { Controller, type FieldValues, get, type Path, type UseFormReturn } from 'react-hook-form';
+import { OfferedValuesInput } from './offered-values-input';
 
 // The inputs hold text; what the schema turns it into on submit is the form's business, hence the open output type.
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
@@ -47,6 +48,26 @@ export function FormSelectInput<T extends FieldValues>({
           ))}
         </TextField>
       )}
+    />
+  );
+}
+
+/** A text input bound to a form field that offers the standard values and still takes what is typed. */
+export function FormOfferedInput<T extends FieldValues>({
+  form,
+  name,
+  label,
+  hint,
+  options,
+  inputMode,
+  sx,
+}: { form: Form<T>; name: Path<T>; label: string; hint?: string; options: readonly string[]; inputMode?: 'decimal' | 'text'; sx?: TextFieldProps['sx'] }) {
+  const error = errorOf(form, name);
+  return (
+    <Controller
+      control={form.control}
+      name={name}
+      render={({ field }) => <OfferedValuesInput label={label} {...field} value={field.value ?? ''} options={options} error={!!error} helperText={error ?? hint} inputMode={inputMode} sx={sx} />}
     />
   );
 }

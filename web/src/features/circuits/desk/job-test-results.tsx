@@ -1,5 +1,6 @@
 import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
 import Alert from '@mui/material/Alert';
+import Box from '@mui/material/Box';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
@@ -31,7 +32,10 @@ function Lines({ result, keys }: { result: TestResult; keys: string[] }) {
           <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
             {lineReadings(l, result)}
           </Typography>
-          <VerdictChip what={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} size="small" against="none" plain />
+          {/* The chip keeps its width: the verdict is what the column is read for. */}
+          <Box sx={{ flexShrink: 0, display: 'flex' }}>
+            <VerdictChip what={`${result.circuit?.label ?? 'Circuit'}: ${l.label}`} result={l.result} size="small" against="none" plain />
+          </Box>
         </Stack>
       ))}
     </Stack>
@@ -68,7 +72,7 @@ export function JobTestResults({ jobId }: { jobId: string }) {
         </Stack>
       ),
     },
-    group('Ring', ['ring-r1-rn', 'ring-r2'], 190),
+    group('Ring', ['ring-r1-rn', 'ring-r2'], 240),
     group('R1+R2', ['r1r2'], 120),
     group('Insulation', ['ir-live-live', 'ir-live-earth'], 175),
     group('Polarity', ['polarity'], 130),

@@ -3,6 +3,7 @@ import TextField from '@mui/material/TextField';
 import {
   AFDD_STANDARD,
   CIRCUIT_KIND_WORDS,
+  CONDUCTOR_SIZES_MM2,
   CIRCUIT_KINDS,
   DEVICE_STANDARD_CHOICES,
   deviceStandardFor,
@@ -12,13 +13,16 @@ import {
   PROTECTIVE_DEVICES,
   RCBO_STANDARD,
   RCD_STANDARD_CHOICES,
+  RCD_TYPE_CHOICES,
   rcdStandardFor,
   standardDisconnectionTime,
+  standardRatings,
 } from '@wiretrail/core';
-import { type Control, Controller, type FieldErrors, type UseFormRegister } from 'react-hook-form';
+import { type Control, Controller, type FieldErrors, type UseFormRegister, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import type { CircuitRow } from '@/lib/db';
 import { circuitDetailProblems } from '@wiretrail/core';
+import { OfferedValuesInput } from '@/components/forms/offered-values-input';
 import { choicesOf, NativeChoice } from '@/components/forms/phone-inputs';
 import { readingField, readingText, usableReading } from '@/lib/readings';
 
@@ -145,9 +149,15 @@ export function circuitDetailFields(v: CircuitDetails, visitId?: string, current
   };
 }
 
+const SIZES = CONDUCTOR_SIZES_MM2.map(String);
+
+/** The ratings a device is made in, to offer once the device is known. */
+export const ratingsOffered = (deviceType: string): string[] => (deviceType ? (standardRatings(deviceType) ?? []).map(String) : []);
+
 /** Kind, protective device, RCD and cable sizes, for the add and edit forms alike. */
 export function CircuitDetailFields({ register, control, errors }: { register: UseFormRegister<CircuitDetails>; control: Control<CircuitDetails>; errors: FieldErrors<CircuitDetails> }) {
   const num = { htmlInput: { inputMode: 'decimal' as const } };
+  const deviceType = useWatch({ control, name: 'deviceType' });
   return (
     <>
       {/* Controlled, so the recorded choice shows and the standard values offered follow it. */}
@@ -159,15 +169,51 @@ export function CircuitDetailFields({ register, control, errors }: { register: U
           name="deviceType"
           render={({ field }) => <NativeChoice label="Protective device" {...field} emptyLabel="Not known" options={choicesOf(PROTECTIVE_DEVICES, PROTECTIVE_DEVICE_WORDS)} />}
         />
-        <TextField label="Rating (A)" {...register('deviceRatingA')} error={!!errors.deviceRatingA} helperText={errors.deviceRatingA?.message ?? ' '} slotProps={num} sx={{ maxWidth: 130 }} />
+        <Controller
+          control={control}
+          name="deviceRatingA"
+          render={({ field }) => (
+            <OfferedValuesInput
+              label="Rating (A)"
+              {...field}
+              options={ratingsOffered(deviceType)}
+              error={!!errors.deviceRatingA}
+              helperText={errors.deviceRatingA?.message ?? (deviceType ? 'The ratings it is made in, or type one.' : ' ')}
+              inputMode="decimal"
+              sx={{ minWidth: 150, maxWidth: { sm: 200 } }}
+            />
+          )}
+        />
       </Stack>
       <Stack direction="row" spacing={1.5}>
         <TextField label="RCD (mA)" {...register('rcdRatingMa')} error={!!errors.rcdRatingMa} helperText={errors.rcdRatingMa?.message ?? 'Blank if none.'} slotProps={num} />
-        <TextField label="RCD type" placeholder="A" {...register('rcdType')} error={!!errors.rcdType} helperText={errors.rcdType?.message ?? 'A, AC, F, B; S if delayed.'} />
+        <Controller
+          control={control}
+          name="rcdType"
+          render={({ field }) => (
+            <OfferedValuesInput label="RCD type" {...field} options={RCD_TYPE_CHOICES} error={!!errors.rcdType} helperText={errors.rcdType?.message ?? 'A, AC, F, B; S if delayed.'} sx={{ flex: 1 }} />
+          )}
+        />
       </Stack>
       <Stack direction="row" spacing={1.5}>
-        <TextField label="Live size (mm²)" {...register('liveCsaMm2')} error={!!errors.liveCsaMm2} helperText={errors.liveCsaMm2?.message ?? ' '} slotProps={num} />
-        <TextField label="Cpc size (mm²)" {...register('cpcCsaMm2')} error={!!errors.cpcCsaMm2} helperText={errors.cpcCsaMm2?.message ?? ' '} slotProps={num} />
+        {(['liveCsaMm2', 'cpcCsaMm2'] as const).map((name) => (
+          <Controller
+            key={name}
+            control={control}
+            name={name}
+            render={({ field }) => (
+              <OfferedValuesInput
+                label={name === 'liveCsaMm2' ? 'Live size (mm²)' : 'Cpc size (mm²)'}
+                {...field}
+                options={SIZES}
+                error={!!errors[name]}
+                helperText={errors[name]?.message ?? ' '}
+                inputMode="decimal"
+                sx={{ flex: 1 }}
+              />
+            )}
+          />
+        ))}
       </Stack>
       <TextField
         label="Cable length to the furthest point (m)"

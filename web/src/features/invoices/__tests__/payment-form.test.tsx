@@ -4,6 +4,7 @@ import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/re
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { fakeApi } from '@/lib/fake-api';
 import { setSession } from '@/lib/session';
+import { pickerInput, typeInPicker } from '@/testing/date-inputs';
 import { PaymentForm } from '../components/payment-form';
 import { DRAFT } from './invoice-fixtures';
 
@@ -35,7 +36,8 @@ describe('PaymentForm', () => {
   it('starts from what is owed, today and a bank transfer', () => {
     show();
     expect((screen.getByLabelText('Amount (£)') as HTMLInputElement).value).toBe('117.00');
-    expect((screen.getByLabelText('Received on') as HTMLInputElement).value).toBe('2026-03-20');
+    // Read and typed the British way; sent as ISO (below).
+    expect(pickerInput('Received on').value).toBe('20/03/2026');
     expect((screen.getByLabelText('How it was paid') as HTMLSelectElement).value).toBe('bank-transfer');
     expect(screen.getByText('£117.00 is owed')).toBeTruthy();
   });
@@ -50,7 +52,7 @@ describe('PaymentForm', () => {
     submit();
     expect(await screen.findByText('Amount: must be more than nothing.')).toBeTruthy();
     input('Amount (£)', '12.345');
-    input('Received on', '2026-03-21');
+    typeInPicker('Received on', '21/03/2026');
     submit();
     expect(await screen.findByText('Amount: pounds and pence, like 150.00.')).toBeTruthy();
     expect(screen.getByText('Received on: cannot be later than today.')).toBeTruthy();
@@ -64,7 +66,7 @@ describe('PaymentForm', () => {
     const { calls, onDone } = show();
     input('Amount (£)', '50');
     fireEvent.change(screen.getByLabelText('How it was paid'), { target: { value: 'cheque' } });
-    input('Received on', '2026-03-18');
+    typeInPicker('Received on', '18/03/2026');
     input('Reference', ' Cheque 100482 ');
     submit();
     await waitFor(() => expect(onDone).toHaveBeenCalled());

@@ -4,8 +4,9 @@ import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { formatMoney } from '@wiretrail/core';
-import { useForm } from 'react-hook-form';
+import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
+import { DateInput } from '@/components/forms/date-inputs';
 import { MONEY_TEXT, moneyText, penceOf } from '@/lib/money-text';
 import type { InvoiceDetail } from '../api/get-invoice';
 import { useRecordPayment } from '../api/change-invoice';
@@ -47,7 +48,7 @@ interface Props {
 export function PaymentForm({ invoice, today = localToday(), onDone, onCancel }: Props) {
   const owed = invoice.account?.owedMinor ?? 0;
   const record = useRecordPayment();
-  const { register, handleSubmit, formState } = useForm<Values>({
+  const { register, control, handleSubmit, formState } = useForm<Values>({
     resolver: zodResolver(paymentSchema(owed, today)),
     defaultValues: { amount: moneyText(owed), method: 'bank-transfer', receivedOn: today, reference: '', note: '' },
   });
@@ -70,7 +71,7 @@ export function PaymentForm({ invoice, today = localToday(), onDone, onCancel }:
             </option>
           ))}
         </TextField>
-        <TextField label="Received on" type="date" {...register('receivedOn')} error={!!e.receivedOn} helperText={e.receivedOn?.message} slotProps={{ inputLabel: { shrink: true }, htmlInput: { max: today } }} />
+        <Controller control={control} name="receivedOn" render={({ field }) => <DateInput label="Received on" {...field} max={today} error={!!e.receivedOn} helperText={e.receivedOn?.message} />} />
       </Stack>
       <Stack direction="row" spacing={2} sx={{ alignItems: 'flex-start' }}>
         <TextField label="Reference" {...register('reference')} error={!!e.reference} helperText={e.reference?.message ?? 'Cheque number, transfer reference'} />

@@ -5,9 +5,10 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { formatMoney, refundProblems, toRefundMinor } from '@wiretrail/core';
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { Controller, useForm } from 'react-hook-form';
 import { v7 as uuidv7 } from 'uuid';
 import { z } from 'zod';
+import { DateInput } from '@/components/forms/date-inputs';
 import { MONEY_TEXT, moneyText, penceOf } from '@/lib/money-text';
 import { useRecordRefund } from '../api/change-invoice';
 import type { InvoiceDetail } from '../api/get-invoice';
@@ -77,7 +78,7 @@ export function RefundForm({ invoice, today = localToday(), onDone, onCancel }: 
   const rooms = cardRooms(invoice);
   const [requestId] = useState(() => uuidv7());
   const record = useRecordRefund();
-  const { register, handleSubmit, formState, watch } = useForm<Values>({
+  const { register, control, handleSubmit, formState, watch } = useForm<Values>({
     resolver: zodResolver(refundSchema(toRefund, invoice.number ?? 'the invoice', rooms, today)),
     defaultValues: { amount: moneyText(toRefund), how: 'bank-transfer', refundedOn: today, reference: '', note: '' },
   });
@@ -114,7 +115,7 @@ export function RefundForm({ invoice, today = localToday(), onDone, onCancel }: 
           ))}
         </TextField>
         {!toCard && (
-          <TextField label="Refunded on" type="date" {...register('refundedOn')} error={!!e.refundedOn} helperText={e.refundedOn?.message} slotProps={{ inputLabel: { shrink: true }, htmlInput: { max: today } }} />
+          <Controller control={control} name="refundedOn" render={({ field }) => <DateInput label="Refunded on" {...field} max={today} error={!!e.refundedOn} helperText={e.refundedOn?.message} />} />
         )}
       </Stack>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ alignItems: 'flex-start' }}>

@@ -7,6 +7,7 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { JOB_STATUSES } from '@wiretrail/core';
 import { useEffect, useState } from 'react';
+import { DateInput } from '@/components/forms/date-inputs';
 import type { JobStatusCounts } from '../api/get-job-status-counts';
 import type { JobScreenState } from '../job-filters';
 import { jobStatusWords } from '../job-status';
@@ -88,17 +89,15 @@ export function JobFiltersBar({ state, change, technicians, customers, withStatu
           ['toDate', 'Visits to', toBeforeFrom],
         ] as const
       ).map(([key, label, wrong]) => (
-        <TextField
+        <DateInput
           key={key}
-          {...small}
-          type="date"
+          size="small"
           label={label}
           value={state[key]}
-          onChange={(e) => change({ [key]: e.target.value })}
+          onChange={(value) => change({ [key]: value })}
           error={wrong}
           helperText={wrong ? 'Visits to must not be before Visits from.' : undefined}
-          sx={{ width: 155 }}
-          slotProps={{ inputLabel: { shrink: true } }}
+          sx={{ width: 175 }}
         />
       ))}
       {filtered && (

@@ -8,8 +8,9 @@ import DialogTitle from '@mui/material/DialogTitle';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { type NotifiableJob, NOTIFICATION_STATE_WORDS, NOTIFICATION_STATES } from '@wiretrail/core';
-import { useForm, useWatch } from 'react-hook-form';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { DateInput } from '@/components/forms/date-inputs';
 import { useRecordNotification } from '../api/record-notification';
 
 const DAY = /^\d{4}-\d{2}-\d{2}$/;
@@ -88,17 +89,22 @@ export function RecordNotificationDialog({ job, onClose, today = localToday() }:
             {state !== 'to-notify' && (
               <>
                 <TextField label="Scheme reference" {...register('schemeRef')} error={!!e.schemeRef} helperText={e.schemeRef?.message ?? 'As the competent person scheme gave it.'} />
-                <TextField label="Notified on" type="date" {...register('notifiedOn')} error={!!e.notifiedOn} helperText={e.notifiedOn?.message ?? ' '} slotProps={{ inputLabel: { shrink: true }, htmlInput: { max: today } }} />
+                <Controller control={control} name="notifiedOn" render={({ field }) => <DateInput label="Notified on" {...field} max={today} error={!!e.notifiedOn} helperText={e.notifiedOn?.message ?? ' '} />} />
               </>
             )}
             {state === 'certificate-received' && (
-              <TextField
-                label="Certificate received on"
-                type="date"
-                {...register('certificateReceivedOn')}
-                error={!!e.certificateReceivedOn}
-                helperText={e.certificateReceivedOn?.message ?? 'The Building Regulations compliance certificate the customer receives.'}
-                slotProps={{ inputLabel: { shrink: true }, htmlInput: { max: today } }}
+              <Controller
+                control={control}
+                name="certificateReceivedOn"
+                render={({ field }) => (
+                  <DateInput
+                    label="Certificate received on"
+                    {...field}
+                    max={today}
+                    error={!!e.certificateReceivedOn}
+                    helperText={e.certificateReceivedOn?.message ?? 'The Building Regulations compliance certificate the customer receives.'}
+                  />
+                )}
               />
             )}
           </Stack>

@@ -17,6 +17,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
+import { DateInput, TimeInput } from '@/components/forms/date-inputs';
 import type { Person } from '@/lib/directory';
 import { type Job, type Visit, useSaveVisit, weekVisitsQueryOptions } from '../api/schedule-data';
 import { addDays, clashesOf, dayKey, timeOf, toInstant } from './week';
@@ -48,7 +49,7 @@ interface Props {
 export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicians }: Props) {
   const save = useSaveVisit();
   const [cancelling, setCancelling] = useState(false);
-  const { control, register, handleSubmit, formState } = useForm<Values>({
+  const { control, handleSubmit, formState } = useForm<Values>({
     resolver: zodResolver(schema),
     values: {
       jobId: visit?.jobId ?? '',
@@ -113,9 +114,9 @@ export function VisitDialog({ open, onClose, visit, defaultDate, jobs, technicia
             )}
           />
           <Stack direction="row" spacing={2}>
-            <TextField label="Date" type="date" {...register('date')} error={!!formState.errors.date} helperText={formState.errors.date?.message} slotProps={{ inputLabel: { shrink: true } }} />
-            <TextField label="Start" type="time" {...register('start')} error={!!formState.errors.start} helperText={formState.errors.start?.message} slotProps={{ inputLabel: { shrink: true } }} />
-            <TextField label="Finish" type="time" {...register('end')} error={!!formState.errors.end} helperText={formState.errors.end?.message} slotProps={{ inputLabel: { shrink: true } }} />
+            <Controller control={control} name="date" render={({ field }) => <DateInput label="Date" {...field} error={!!formState.errors.date} helperText={formState.errors.date?.message} />} />
+            <Controller control={control} name="start" render={({ field }) => <TimeInput label="Start" {...field} error={!!formState.errors.start} helperText={formState.errors.start?.message} />} />
+            <Controller control={control} name="end" render={({ field }) => <TimeInput label="Finish" {...field} error={!!formState.errors.end} helperText={formState.errors.end?.message} />} />
           </Stack>
           <Controller
             control={control}

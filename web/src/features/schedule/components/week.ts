@@ -57,3 +57,29 @@ export function bookingDay(monday: Date, today = new Date()): string {
   const inWeek = today >= monday && today < addDays(monday, 7);
   return dayKey(inWeek ? today : monday);
 }
+
+/** Who is on a visit and when: what moving it changes. */
+export interface VisitPlace {
+  technicianIds: string[];
+  plannedStart: string;
+  plannedEnd: string;
+}
+
+/** The row of the schedule that stands for visits with nobody on them. */
+export const UNASSIGNED = 'unassigned';
+
+/**
+ * Where a visit lands when it is moved from one technician's row to another's (or to Unassigned) and to another day:
+ * the technician whose row it left gives it up, the one whose row it reaches takes it, the others keep it, and its
+ * start and finish keep their time of day unless new ones are given.
+ */
+export function visitMovedTo(
+  visit: { technicianIds?: string[] | null; plannedStart: string | null; plannedEnd: string | null },
+  move: { fromRow: string; toRow: string; day: string; start?: string; end?: string },
+): VisitPlace {
+  const kept = (visit.technicianIds ?? []).filter((id) => id !== move.fromRow || move.fromRow === move.toRow);
+  const technicianIds = move.toRow === UNASSIGNED || kept.includes(move.toRow) ? kept : [...kept, move.toRow];
+  const start = move.start ?? (timeOf(visit.plannedStart) || '09:00');
+  const end = move.end ?? (timeOf(visit.plannedEnd) || start);
+  return { technicianIds, plannedStart: toInstant(move.day, start), plannedEnd: toInstant(move.day, end) };
+}

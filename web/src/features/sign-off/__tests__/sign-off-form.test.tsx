@@ -7,6 +7,7 @@ import { db } from '@/lib/db';
 import { addRing, base, ids, resetPhone, show, tidyUp } from '@/test/visit-fixtures';
 import { departureSchema, signOffSchema } from '../components/sign-off-form';
 import { strokesToSvg } from '../components/signature-pad';
+import { pickerInput } from '@/testing/date-inputs';
 
 beforeEach(async () => {
   localStorage.clear();
@@ -50,7 +51,7 @@ describe('sign-off', () => {
     await db.visit.update(ids.visit, { status: 'on-site', actualStart: new Date(Date.now() - 60 * 60_000).toISOString() });
     show(paths.visitSignOff.href(ids.visit));
     const form = await screen.findByRole('form', { name: 'Sign off' });
-    expect((within(form).getByLabelText('Left') as HTMLInputElement).value).toBe('');
+    expect(pickerInput('Left').value).toBe('');
     expect(within(form).getByText('Blank: the time you finish.')).toBeTruthy();
     // Typing elsewhere keeps a draft, which must not freeze a time of leaving either.
     fireEvent.change(within(form).getByLabelText('Observations'), { target: { value: 'All tidy.' } });

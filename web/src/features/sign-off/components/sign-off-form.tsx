@@ -23,6 +23,7 @@ import { useEffect, useRef, useState } from 'react';
 import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import type { PointGroup } from 'signature_pad';
 import { z } from 'zod';
+import { TimeInput } from '@/components/forms/date-inputs';
 import type { VisitRow } from '@/lib/db';
 import { saveRecord } from '@/lib/sync/local-write';
 import { clearSignOffDraft, readSignOffDraft, writeSignOffDraft } from './sign-off-draft';
@@ -186,8 +187,8 @@ export function SignOffForm({ visit, defaultDescription, signerName, signerPosit
     <Box component="form" aria-label="Sign off" noValidate onSubmit={submit}>
       <Stack spacing={2}>
         <Stack direction="row" spacing={1.5}>
-          <TextField label="Arrived" type="time" {...register('arrivedAt')} error={!!errors.arrivedAt} helperText={errors.arrivedAt?.message ?? 'Time on site starts here.'} slotProps={{ inputLabel: { shrink: true } }} />
-          <TextField label="Left" type="time" {...register('leftAt')} error={!!errors.leftAt} helperText={errors.leftAt?.message ?? 'Blank: the time you finish.'} slotProps={{ inputLabel: { shrink: true } }} />
+          <Controller control={control} name="arrivedAt" render={({ field }) => <TimeInput label="Arrived" {...field} error={!!errors.arrivedAt} helperText={errors.arrivedAt?.message ?? 'Time on site starts here.'} />} />
+          <Controller control={control} name="leftAt" render={({ field }) => <TimeInput label="Left" {...field} error={!!errors.leftAt} helperText={errors.leftAt?.message ?? 'Blank: the time you finish.'} />} />
         </Stack>
         <TextField label="Work done and its extent" multiline minRows={3} {...register('workDescription')} error={!!errors.workDescription} helperText={errors.workDescription?.message ?? 'As it should read on the certificate.'} />
         <TextField label="Observations" multiline minRows={2} {...register('observations')} error={!!errors.observations} helperText={errors.observations?.message ?? 'What you saw that the customer or the office should know.'} />

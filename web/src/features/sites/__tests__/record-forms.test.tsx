@@ -185,6 +185,33 @@ describe('the circuit form', () => {
     expect(options).toContain('BS 3036 semi-enclosed fuse');
   });
 
+  it("offers the ratings the chosen device is made in, the RCD types and the cable sizes, and still takes a typed value", async () => {
+    const dialog = show(<CircuitDialog siteId={SITE_ID} boards={[boards[0]!]} onClose={vi.fn()} />);
+    fireEvent.mouseDown(dialog.getByRole('combobox', { name: 'Protective device' }));
+    fireEvent.click(await screen.findByRole('option', { name: PROTECTIVE_DEVICE_WORDS.B }));
+    const offered = async (label: string) => {
+      fireEvent.mouseDown(dialog.getByRole('combobox', { name: label }));
+      const list = (await screen.findAllByRole('option')).map((o) => o.textContent);
+      fireEvent.keyDown(dialog.getByRole('combobox', { name: label }), { key: 'Escape' });
+      return list;
+    };
+    // BS 7671:2018+A2:2022 Table 41.3: type B circuit-breakers 6 A to 125 A
+    expect(await offered('Rating')).toEqual(['6', '10', '16', '20', '25', '32', '40', '50', '63', '80', '100', '125']);
+    expect(await offered('RCD type')).toEqual(['A', 'AC', 'F', 'B', 'A S', 'AC S', 'F S', 'B S']);
+    expect(await offered('cpc size')).toEqual(expect.arrayContaining(['1', '1.5', '2.5', '4', '6', '10', '16']));
+    // A value off the list is typed, and the check says why it cannot be so, beside its field.
+    type(dialog, 'Circuit number', '5');
+    type(dialog, 'Rating', '17');
+    type(dialog, 'RCD type', 'Q');
+    type(dialog, 'Live conductor size', '2.5');
+    type(dialog, 'cpc size', '4');
+    save(dialog, 'Add circuit');
+    expect(await dialog.findByText('Rating: this device is not made in 17 A. Choose one of 6, 10, 16, 20, 25, 32, 40, 50, 63, 80, 100, 125 A.')).toBeTruthy();
+    expect(dialog.getByText('RCD type must be AC, A, F or B, with S if it is time-delayed.')).toBeTruthy();
+    expect(dialog.getByText('Cpc size: 4 mm² is larger than the 2.5 mm² live conductors it runs with; check both sizes.')).toBeTruthy();
+    expect(api.fetch).not.toHaveBeenCalled();
+  });
+
   it('adds a circuit to the only board with its figures as numbers', async () => {
     const onClose = vi.fn();
     answer(201, { ...circuit, id: 'new', number: '5' });

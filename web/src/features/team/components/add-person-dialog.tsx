@@ -10,8 +10,10 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { ROLES } from '@wiretrail/core';
+import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
+import { serverFieldErrors } from '@/lib/server-field-errors';
 import { useCreatePerson } from '../api/manage-users';
 
 const schema = z.object({
@@ -20,14 +22,17 @@ const schema = z.object({
   role: z.enum(ROLES, { message: 'Choose a role.' }),
 });
 type Values = z.infer<typeof schema>;
+const LABELS: Record<keyof Values, string> = { name: 'Name', email: 'E-mail', role: 'Role', password: 'First password' };
 
 export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const create = useCreatePerson();
-  const { register, control, handleSubmit, formState, reset } = useForm<Values>({
+  const { register, control, handleSubmit, formState, reset, setError } = useForm<Values>({
     resolver: zodResolver(schema),
     defaultValues: { name: '', email: '', role: 'technician' },
   });
+  const [refusal, setRefusal] = useState<string[]>([]);
   const close = () => {
+    setRefusal([]);
     reset();
     create.reset();
     onClose();
@@ -36,8 +41,24 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
     <Dialog open={open} onClose={close} fullWidth maxWidth="xs" aria-labelledby="add-person-title">
       <DialogTitle id="add-person-title">Add a person</DialogTitle>
       <DialogContent>
-        <Stack component="form" id="add-person-form" noValidate spacing={2} sx={{ pt: 1 }} onSubmit={handleSubmit((v) => create.mutate(v, { onSuccess: close }))}>
-          {create.isError && <Alert severity="error">{create.error.message}</Alert>}
+        <Stack component="form" id="add-person-form" noValidate spacing={2} sx={{ pt: 1 }} onSubmit={handleSubmit((v) => {
+            setRefusal([]);
+            create.mutate(v, {
+              onSuccess: close,
+              // The server's refusal goes beside the field it is about; only what names no field goes above the form.
+              onError: (err) => {
+                const { byField, rest } = serverFieldErrors(err, LABELS, { email: /e-mail already/i });
+                for (const [field, message] of Object.entries(byField) as [keyof Values, string][]) setError(field, { message }, { shouldFocus: true });
+                setRefusal(rest);
+              },
+            });
+          })}
+        >
+          {refusal.length > 0 && (
+            <Alert severity="error" role="alert">
+              Not added: {refusal.join(' ')}
+            </Alert>
+          )}
           <TextField label="Name" {...register('name')} error={!!formState.errors.name} helperText={formState.errors.name?.message} />
           <TextField label="E-mail" type="email" {...register('email')} error={!!formState.errors.email} helperText={formState.errors.email?.message} />
           <Controller

@@ -4,6 +4,7 @@ import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
+import FormHelperText from '@mui/material/FormHelperText';
 import LinearProgress from '@mui/material/LinearProgress';
 import MenuItem from '@mui/material/MenuItem';
 import Paper from '@mui/material/Paper';
@@ -25,6 +26,8 @@ import { useUsers } from '../api/get-users';
 import { useSendPasswordLink, useUpdatePerson } from '../api/manage-users';
 import { AddPersonDialog } from './add-person-dialog';
 
+type Refused = { id: string; what: 'role' | 'active' | 'link'; message: string };
+
 const ROLE_WORDS: Record<Role, string> = { technician: 'a technician', office: 'office staff', admin: 'an admin' };
 
 /** The admin's view of everyone who signs in: role, active or not, and a password link when someone is locked out. */
@@ -35,11 +38,13 @@ export function TeamTable() {
   const sendLink = useSendPasswordLink();
   const [adding, setAdding] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
+  const [failure, setFailure] = useState<Refused | null>(null);
   // A change to who may do what is asked about first, then said done.
   const [asking, setAsking] = useState<{ id: string; changes: { role?: Role; active?: boolean }; question: string; done: string } | null>(null);
   if (users.isPending) return <LinearProgress aria-label="Loading the team" />;
   if (users.isError) return <Alert severity="error">{users.error.message}</Alert>;
-  const failure = update.error ?? sendLink.error;
+  // A refusal is shown beside the person and the control it is about, not in a banner above everyone.
+  const refusedFor = (id: string, what: Refused['what']) => (failure?.id === id && failure.what === what ? failure.message : undefined);
   return (
     <>
       <Stack direction="row" sx={{ justifyContent: 'flex-end', mb: 2 }}>
@@ -47,11 +52,6 @@ export function TeamTable() {
           Add a person
         </Button>
       </Stack>
-      {failure && (
-        <Alert severity="error" sx={{ mb: 2 }}>
-          {failure.message}
-        </Alert>
-      )}
       <TableContainer component={Paper} variant="outlined">
         <Table aria-label="Team">
           <TableHead>
@@ -78,6 +78,8 @@ export function TeamTable() {
                         value={u.role}
                         disabled={me || update.isPending}
                         slotProps={{ htmlInput: { 'aria-label': `Role of ${u.name}` } }}
+                        error={!!refusedFor(u.id, 'role')}
+                        helperText={refusedFor(u.id, 'role')}
                         onChange={(e) => {
                           const role = e.target.value as Role;
                           setAsking({ id: u.id, changes: { role }, question: `Make ${u.name} ${ROLE_WORDS[role]}?`, done: `${u.name} is now ${ROLE_WORDS[role]}.` });
@@ -94,7 +96,7 @@ export function TeamTable() {
                     <Switch
                       checked={u.active}
                       disabled={me || update.isPending}
-                      slotProps={{ input: { 'aria-label': `${u.name} can sign in` } }}
+                      slotProps={{ input: { 'aria-label': `${u.name} can sign in`, 'aria-describedby': refusedFor(u.id, 'active') ? `active-refused-${u.id}` : undefined } }}
                       onChange={(e) =>
                         setAsking(
                           e.target.checked
@@ -103,15 +105,31 @@ export function TeamTable() {
                         )
                       }
                     />
+                    {refusedFor(u.id, 'active') && (
+                      <FormHelperText error id={`active-refused-${u.id}`} role="alert">
+                        {refusedFor(u.id, 'active')}
+                      </FormHelperText>
+                    )}
                   </TableCell>
                   <TableCell align="right">
                     <Button
                       size="small"
                       disabled={!u.active || sendLink.isPending}
-                      onClick={() => sendLink.mutate(u.id, { onSuccess: (r) => setNotice(`A password link is on its way to ${r.sentTo}. It works for an hour.`) })}
+                      onClick={() => {
+                        setFailure(null);
+                        sendLink.mutate(u.id, {
+                          onSuccess: (r) => setNotice(`A password link is on its way to ${r.sentTo}. It works for an hour.`),
+                          onError: (err) => setFailure({ id: u.id, what: 'link', message: `Password link not sent: ${err.message}` }),
+                        });
+                      }}
                     >
                       Send password link
                     </Button>
+                    {refusedFor(u.id, 'link') && (
+                      <FormHelperText error role="alert" sx={{ textAlign: 'right' }}>
+                        {refusedFor(u.id, 'link')}
+                      </FormHelperText>
+                    )}
                   </TableCell>
                 </TableRow>
               );
@@ -130,7 +148,14 @@ export function TeamTable() {
             disabled={update.isPending}
             onClick={() => {
               const a = asking!;
-              update.mutate({ id: a.id, changes: a.changes }, { onSuccess: () => setNotice(a.done) });
+              setFailure(null);
+              update.mutate(
+                { id: a.id, changes: a.changes },
+                {
+                  onSuccess: () => setNotice(a.done),
+                  onError: (err) => setFailure({ id: a.id, what: a.changes.role ? 'role' : 'active', message: `${a.changes.role ? 'Role' : 'Signing in'} not changed: ${err.message}` }),
+                },
+              );
               setAsking(null);
             }}
           >

@@ -1,7 +1,7 @@
 import Stack from '@mui/material/Stack';
-import { CIRCUIT_KIND_WORDS, CIRCUIT_KINDS, circuitDetailProblems, PROTECTIVE_DEVICE_WORDS, PROTECTIVE_DEVICES } from '@wiretrail/core';
+import { CIRCUIT_KIND_WORDS, CIRCUIT_KINDS, CONDUCTOR_SIZES_MM2, circuitDetailProblems, PROTECTIVE_DEVICE_WORDS, PROTECTIVE_DEVICES, RCD_TYPE_CHOICES, standardRatings } from '@wiretrail/core';
 import { z } from 'zod';
-import { FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
+import { FormOfferedInput, FormSelectInput, FormTextInput } from '@/components/forms/form-inputs';
 import { RecordDialog } from '@/components/forms/record-dialog';
 import { useRecordForm } from '@/components/forms/use-record-form';
 import { optionalChoice, optionalNumber, optionalText, requiredId, requiredText, startingTexts } from '@/lib/record-schema';
@@ -28,6 +28,7 @@ export const circuitSchema = z.object({
 
 const KINDS = CIRCUIT_KINDS.map((k) => ({ value: k, label: CIRCUIT_KIND_WORDS[k] }));
 const DEVICES = PROTECTIVE_DEVICES.map((d) => ({ value: d, label: PROTECTIVE_DEVICE_WORDS[d] }));
+const SIZES = CONDUCTOR_SIZES_MM2.map(String);
 
 /** Adds a circuit to one of the site's boards, or changes one; the checks judge test results against what is recorded here. */
 export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: string; circuit?: Circuit; boards: Board[]; onClose: () => void }) {
@@ -37,6 +38,8 @@ export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: st
     onUnchanged: onClose,
     onChanges: (changes) => save.mutate({ id: circuit?.id, values: circuit ? changes : { siteId, ...changes } }, { onSuccess: onClose }),
   });
+  const deviceType = form.watch('deviceType');
+  const ratings = deviceType ? (standardRatings(deviceType) ?? []).map(String) : [];
   return (
     <RecordDialog open title={circuit ? `Change circuit ${circuit.number}` : 'Add a circuit'} submitLabel={circuit ? 'Save changes' : 'Add circuit'} onSubmit={submit} onClose={onClose} pending={save.isPending} error={save.error}>
       <Stack direction="row" spacing={2}>
@@ -47,15 +50,15 @@ export function CircuitDialog({ siteId, circuit, boards, onClose }: { siteId: st
       <FormSelectInput form={form} name="kind" label="Kind of circuit" options={KINDS} emptyLabel="Not recorded" />
       <Stack direction="row" spacing={2}>
         <FormSelectInput form={form} name="deviceType" label="Protective device" options={DEVICES} emptyLabel="Not recorded" />
-        <FormTextInput form={form} name="deviceRatingA" label="Rating" hint="A" inputMode="decimal" sx={{ maxWidth: 160 }} />
+        <FormOfferedInput form={form} name="deviceRatingA" label="Rating" hint={deviceType ? 'A; the ratings it is made in, or type one' : 'A'} options={ratings} inputMode="decimal" sx={{ minWidth: 160, maxWidth: 220 }} />
       </Stack>
       <Stack direction="row" spacing={2}>
         <FormTextInput form={form} name="rcdRatingMa" label="RCD rating" hint="mA; empty if no RCD" inputMode="decimal" />
-        <FormTextInput form={form} name="rcdType" label="RCD type" hint="As marked: A, AC, F, B; S if time-delayed" />
+        <FormOfferedInput form={form} name="rcdType" label="RCD type" hint="As marked: A, AC, F, B; S if time-delayed" options={RCD_TYPE_CHOICES} sx={{ flex: 1 }} />
       </Stack>
       <Stack direction="row" spacing={2}>
-        <FormTextInput form={form} name="liveCsaMm2" label="Live conductor size" hint="mm²" inputMode="decimal" />
-        <FormTextInput form={form} name="cpcCsaMm2" label="cpc size" hint="mm²" inputMode="decimal" />
+        <FormOfferedInput form={form} name="liveCsaMm2" label="Live conductor size" hint="mm²" options={SIZES} inputMode="decimal" sx={{ flex: 1 }} />
+        <FormOfferedInput form={form} name="cpcCsaMm2" label="cpc size" hint="mm²" options={SIZES} inputMode="decimal" sx={{ flex: 1 }} />
       </Stack>
       <FormTextInput form={form} name="lengthM" label="Cable length" hint="m to the furthest point; a radial's R1+R2 is checked against it" inputMode="decimal" />
     </RecordDialog>
