@@ -41,6 +41,8 @@ export function configureApp<A extends NestExpressApplication>(app: A): A {
           // Plain http on localhost and LAN addresses must not be upgraded.
           upgradeInsecureRequests: null,
           'img-src': ["'self'", 'data:', 'blob:'],
+          // The photo shrinker and the service worker are scripts of our own origin; nothing else may start a worker.
+          'worker-src': ["'self'"],
         },
       },
       // HSTS makes sense only behind TLS, which a deployment's proxy adds.

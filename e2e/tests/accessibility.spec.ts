@@ -1,5 +1,6 @@
 import AxeBuilder from '@axe-core/playwright';
 import type { Page, TestInfo } from '@playwright/test';
+import { cameraJpeg, exifToday } from '../camera-photos.js';
 import { apiSession, bookVisit, DESK, expect, PHONE, ROLE_USERS, SIGNED_OUT, test } from '../fixtures.js';
 
 /** WCAG 2.1 A and AA: what the public sector in the UK is held to, and what a paying customer may ask of us. */
@@ -127,6 +128,34 @@ for (const [size, viewport] of [
       await check('sync');
       await page.getByRole('link', { name: 'Me', exact: true }).first().click();
       await check('me');
+    });
+
+    test(`the photo form filing each photo on its own, and a photo opened from the trail, pass WCAG 2.1 AA (${size}, ${scheme})`, async ({
+      page,
+      request,
+      technicianVisit: visitPage,
+    }, testInfo) => {
+      test.setTimeout(120_000);
+      const check = async (screen: string) => {
+        await expectNoAxeViolations(page, testInfo, `${screen} ${scheme}`);
+        if (size === 'phone') await expectTapTargets(page, `${screen} (${scheme})`);
+      };
+      const title = `Accessible photos ${size} ${scheme} (${Date.now().toString(36)})`;
+      await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 9, endHour: 12 });
+      await visitPage.openToday();
+      await visitPage.openFromToday(title);
+      const files = await Promise.all([1, 2].map(async (n) => ({ name: `IMG_50${n}.jpg`, mimeType: 'image/jpeg', buffer: await cameraJpeg(`Photo ${n}`, '#6b7f5a', exifToday(9, n)) })));
+      await page.getByLabel('Take or add photos').setInputFiles(files);
+      const form = visitPage.photoForm;
+      await form.getByRole('button', { name: 'File photo 2 on its own' }).click();
+      await expect(form.getByRole('img', { name: 'Photo 2' })).toBeVisible({ timeout: 60_000 });
+      await check('photo form, filed one by one');
+      await form.getByLabel('Caption for photo 1').fill('Socket before moving');
+      await form.getByRole('button', { name: 'Save 2 photos' }).click();
+      await expect(form).toBeHidden({ timeout: 60_000 });
+      await visitPage.trail.getByRole('button', { name: 'Open photo: Socket before moving' }).click();
+      await expect(page.getByRole('dialog', { name: /^Photo \d of 2$/ }).getByRole('img', { name: 'Socket before moving' })).toBeVisible();
+      await check('photo viewer');
     });
   });
   }

@@ -13,7 +13,7 @@ const BATCHES = 3;
 const BATCH = 6;
 
 /** A 4000 × 3000 photo-like JPEG: noise keeps it as large as a camera's. */
-async function twelveMegapixels(seed) {
+export async function twelveMegapixels(seed) {
   const width = 4000;
   const height = 3000;
   const raw = Buffer.alloc(width * height * 3);
@@ -29,7 +29,7 @@ async function twelveMegapixels(seed) {
  * The same photo with its number in a JPEG comment (COM) segment after the JFIF header: other bytes and another
  * hash, so the server never finds it already held, and exactly the same pixels to decode.
  */
-function numbered(jpeg, n) {
+export function numbered(jpeg, n) {
   const text = Buffer.from(`bench photo ${n}`);
   const marker = Buffer.alloc(4);
   marker.writeUInt16BE(0xfffe, 0);

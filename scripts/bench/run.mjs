@@ -8,11 +8,12 @@ import { ensureBuilt, printTable } from './harness.mjs';
 import { benchWeb } from './web.mjs';
 import { benchApiLoad } from './api-load.mjs';
 import { benchPhotos } from './photos.mjs';
+import { benchPhonePhoto } from './phone-photo.mjs';
 import { benchSyncPull } from './sync-pull.mjs';
 import { benchSyncPush } from './sync-push.mjs';
 
 const only = process.argv.slice(2);
-const suites = { 'sync-push': benchSyncPush, 'sync-pull': benchSyncPull, 'api-load': benchApiLoad, photos: benchPhotos, web: benchWeb };
+const suites = { 'sync-push': benchSyncPush, 'sync-pull': benchSyncPull, 'api-load': benchApiLoad, photos: benchPhotos, 'phone-photo': benchPhonePhoto, web: benchWeb };
 
 ensureBuilt();
 const results = [];

@@ -1,6 +1,6 @@
 import type { PHOTO_SUBJECTS } from '@wiretrail/core';
-import { db, type PhotoBlobRow } from '@/lib/db';
-import { createRecordsWith, type Fields, LocalWriteError } from '@/lib/sync/local-write';
+import { db, type PhotoBlobRow, type PhotoRow } from '@/lib/db';
+import { type Alongside, deleteRecordWith, type Fields, LocalWriteError, replaceRecordsWith } from '@/lib/sync/local-write';
 import { exifDateTaken, jpegSize, sha256Hex } from './photo-bytes';
 import type { ShrinkPhoto } from './shrink-photo';
 
@@ -46,9 +46,10 @@ export async function preparePhoto(file: File, shrink: ShrinkPhoto): Promise<Pre
 
 /**
  * Keeps the photo on the phone: its bytes (keyed by hash), its thumbnail, the photo row and the row's outbox entry,
- * all in one transaction. Returns the new photo's id.
+ * all in one transaction. Returns the new photo's id. With `replaces`, the new photo takes that one's place (taken
+ * again after the server refused it): the old row is deleted in the same transaction and its bytes freed.
  */
-export async function savePhoto(photo: PreparedPhoto, details: PhotoDetails, userId: string): Promise<string> {
+export async function savePhoto(photo: PreparedPhoto, details: PhotoDetails, userId: string, replaces?: PhotoRow): Promise<string> {
   const fields: Fields = {
     visitId: details.visitId,
     siteId: details.siteId,
@@ -70,9 +71,10 @@ export async function savePhoto(photo: PreparedPhoto, details: PhotoDetails, use
   }
   const thumbSize = jpegSize(photo.thumb);
   try {
-    const [id] = await createRecordsWith([{ entity: 'photo', fields }], {
-      tables: [db.photoBlobs, db.photoThumbs],
+    const [id] = await replaceRecordsWith([{ entity: 'photo', fields }], replaces ? [{ entity: 'photo', id: replaces.id }] : [], {
+      tables: [db.photoBlobs, db.photoThumbs, db.photo],
       write: async () => {
+        if (replaces) await freeBytesOf(replaces, photo.sha256);
         // The same picture chosen twice: one copy of its bytes serves both photos.
         if (!(await db.photoBlobs.get(photo.sha256))) {
           const blob: PhotoBlobRow = {
@@ -94,6 +96,25 @@ export async function savePhoto(photo: PreparedPhoto, details: PhotoDetails, use
     if (err instanceof LocalWriteError && err.reason === 'quota') throw new LocalWriteError(OUT_OF_SPACE, 'quota');
     throw err;
   }
+}
+
+/** Drops a photo's bytes and thumbnail from the phone when no other photo row shows them. */
+async function freeBytesOf(photo: PhotoRow, keep?: string): Promise<void> {
+  const sha = photo.sha256;
+  if (!sha || sha === keep) return;
+  const others = await db.photo.where('sha256').equals(sha).filter((p) => p.id !== photo.id).count();
+  if (others > 0) return;
+  await db.photoBlobs.delete(sha);
+  await db.photoThumbs.delete(sha);
+}
+
+/**
+ * Removes a photo the server refused, with its bytes: nothing of it is on the server to keep, and the technician
+ * has said it is not wanted.
+ */
+export async function removeRefusedPhoto(photo: PhotoRow): Promise<void> {
+  const alongside: Alongside = { tables: [db.photoBlobs, db.photoThumbs, db.photo], write: () => freeBytesOf(photo) };
+  await deleteRecordWith('photo', photo.id, alongside);
 }
 
 /** Prepares and keeps one photo. */

@@ -1,7 +1,5 @@
 import { PHONE_PHOTO_LONG_EDGE, PHOTO_VARIANTS } from '@wiretrail/core';
-// Served from our own origin (and kept by the service worker), so the compression worker also starts offline;
-// the library would otherwise fetch its worker script from a public CDN.
-import workerScriptUrl from 'browser-image-compression/dist/browser-image-compression.js?url';
+import type { ShrinkAnswer, ShrinkRequest } from './shrink-worker';
 
 export interface ShrunkPhoto {
   /** The photo as it is kept and sent: JPEG, long edge at most PHONE_PHOTO_LONG_EDGE. */
@@ -16,29 +14,47 @@ export type ShrinkPhoto = (file: File) => Promise<ShrunkPhoto>;
 
 const FULL_QUALITY = 0.85;
 const THUMB_QUALITY = 0.7;
-/**
- * When the scaled photo comes out heavier than the file chosen (an already small, well-compressed photo), the library
- * lowers the quality step by step; a few steps are enough, and each one re-encodes the whole photo.
- */
-const MAX_STEPS = 4;
+
+let worker: Worker | null = null;
+let lastId = 0;
+const pending = new Map<number, { resolve: (p: ShrunkPhoto) => void; reject: (e: Error) => void }>();
 
 /**
- * Scales a photo down on the phone with browser-image-compression (loaded only when the first photo is taken).
- * The library draws the photo upright (the browser applies the EXIF orientation while decoding) and, with
- * preserveExif, copies the camera's EXIF block with Orientation set to 1; so the server's auto-rotate finds it
- * already upright, and date and camera details travel with it.
+ * One worker for the session, started with the first photo: a same-origin script (the content security policy
+ * allows workers from our own origin only), kept by the service worker so it also starts offline.
  */
-export const shrinkPhoto: ShrinkPhoto = async (file) => {
-  const { default: imageCompression } = await import('browser-image-compression');
-  const common = { useWebWorker: true, libURL: new URL(workerScriptUrl, globalThis.location?.href).href, fileType: 'image/jpeg', maxIteration: MAX_STEPS };
-  let full: Blob;
-  try {
-    full = await imageCompression(file, { ...common, maxWidthOrHeight: PHONE_PHOTO_LONG_EDGE, initialQuality: FULL_QUALITY, preserveExif: true });
-  } catch {
-    // Copying EXIF throws on a few files (an Orientation tag of an unexpected type): keep the photo without it.
-    full = await imageCompression(file, { ...common, maxWidthOrHeight: PHONE_PHOTO_LONG_EDGE, initialQuality: FULL_QUALITY });
-  }
-  const upright = new File([full], 'photo.jpg', { type: 'image/jpeg', lastModified: file.lastModified });
-  const thumb = await imageCompression(upright, { ...common, maxWidthOrHeight: PHOTO_VARIANTS.thumb, initialQuality: THUMB_QUALITY });
-  return { bytes: await full.arrayBuffer(), mime: 'image/jpeg', thumb: await thumb.arrayBuffer(), thumbMime: 'image/jpeg' };
-};
+function shrinker(): Worker {
+  if (worker) return worker;
+  const started = new Worker(new URL('./shrink-worker.ts', import.meta.url), { type: 'module', name: 'photo-shrinker' });
+  started.addEventListener('message', (event: MessageEvent<ShrinkAnswer>) => {
+    const answer = event.data;
+    const waiting = pending.get(answer.id);
+    pending.delete(answer.id);
+    if (!waiting) return;
+    if ('error' in answer) waiting.reject(new Error(answer.error));
+    else waiting.resolve({ bytes: answer.bytes, mime: 'image/jpeg', thumb: answer.thumb, thumbMime: 'image/jpeg' });
+  });
+  started.addEventListener('error', (event) => {
+    // The worker could not start (or died): the photos it held fail and the next photo starts a fresh one.
+    event.preventDefault();
+    const reason = new Error(event.message || 'the photo worker could not start');
+    for (const waiting of pending.values()) waiting.reject(reason);
+    pending.clear();
+    started.terminate();
+    if (worker === started) worker = null;
+  });
+  worker = started;
+  return started;
+}
+
+/**
+ * Scales a photo down in a worker: drawn upright (the browser applies the EXIF orientation while decoding), long
+ * edge PHONE_PHOTO_LONG_EDGE, with the camera's EXIF kept and its Orientation set to 1, plus a thumbnail.
+ */
+export const shrinkPhoto: ShrinkPhoto = (file) =>
+  new Promise((resolve, reject) => {
+    const id = ++lastId;
+    pending.set(id, { resolve, reject });
+    const request: ShrinkRequest = { id, file, longEdge: PHONE_PHOTO_LONG_EDGE, thumbEdge: PHOTO_VARIANTS.thumb, quality: FULL_QUALITY, thumbQuality: THUMB_QUALITY };
+    shrinker().postMessage(request);
+  });

@@ -61,6 +61,25 @@ export async function createRecordsWith(items: { entity: SyncEntityName; fields:
   return ops.map((op) => op.id);
 }
 
+/**
+ * New rows that take the place of others (a photo taken again) plus other local writes: the new rows are kept and
+ * the old ones deleted together, or nothing happens.
+ */
+export async function replaceRecordsWith(
+  items: { entity: SyncEntityName; fields: Fields; id?: string }[],
+  replaced: { entity: SyncEntityName; id: string }[],
+  alongside?: Alongside,
+): Promise<string[]> {
+  const created: Op[] = items.map(({ entity, fields, id }) => ({ kind: 'create', entity, id: id ?? uuidv7(), fields: stamped(entity, fields) }));
+  await write([...created, ...replaced.map(({ entity, id }): Op => ({ kind: 'delete', entity, id }))], alongside);
+  return created.map((op) => op.id);
+}
+
+/** Deletes a row together with other local writes (a refused photo and its bytes). */
+export async function deleteRecordWith(entity: SyncEntityName, id: string, alongside: Alongside): Promise<void> {
+  await write([{ kind: 'delete', entity, id }], alongside);
+}
+
 export async function saveRecord(entity: SyncEntityName, id: string, changes: Fields): Promise<void> {
   await write([{ kind: 'save', entity, id, changes }]);
 }

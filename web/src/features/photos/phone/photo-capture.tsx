@@ -1,23 +1,26 @@
 import PhotoCameraOutlined from '@mui/icons-material/PhotoCameraOutlined';
+import ImageNotSupportedOutlined from '@mui/icons-material/ImageNotSupportedOutlined';
 import PhotoLibraryOutlined from '@mui/icons-material/PhotoLibraryOutlined';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button, { type ButtonProps } from '@mui/material/Button';
-import Chip from '@mui/material/Chip';
 import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
 import LinearProgress from '@mui/material/LinearProgress';
+import Skeleton from '@mui/material/Skeleton';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
-import { type ChangeEvent, type CSSProperties, type FormEvent, useEffect, useId, useMemo, useState } from 'react';
-import { addPhoto, type PhotoSubjectType } from '@/lib/photos/add-photo';
+import { type ChangeEvent, type CSSProperties, type FormEvent, useEffect, useId, useState } from 'react';
+import { type PhotoSubjectType, type PreparedPhoto, preparePhoto, savePhoto } from '@/lib/photos/add-photo';
 import { shrinkPhoto } from '@/lib/photos/shrink-photo';
 import { LocalWriteError } from '@/lib/sync/local-write';
+import { useObjectUrl } from '@/lib/use-object-url';
 import { useCaptureChoices } from '../data/get-capture-choices';
 import { usePhoneTags } from '../data/get-phone-photo-tags';
+import { NO_SUBJECT, type PhotoFiling, PhotoFilingFields, subjectOf } from './photo-filing-fields';
 
 /** Keeps the real file input reachable by its label (and by assistive technology) while the big button shows. */
 const hiddenInput: CSSProperties = {
@@ -103,10 +106,25 @@ function PickPhotosButton({ label, capture, onChoose, ...button }: Omit<ButtonPr
   );
 }
 
-function FilePreview({ file, alt }: { file: File; alt: string }) {
-  const url = useMemo(() => URL.createObjectURL(file), [file]);
-  useEffect(() => () => URL.revokeObjectURL(url), [url]);
-  return <Box component="img" src={url} alt={alt} sx={{ width: 72, height: 72, objectFit: 'cover', borderRadius: 1.5, flexShrink: 0, bgcolor: 'action.hover' }} />;
+/**
+ * The photo's own thumbnail once it is ready: a 72 px preview of the camera's file would make the page decode all
+ * twelve megapixels beside the worker.
+ */
+function PreparedPreview({ photo, alt }: { photo: Promise<PreparedPhoto> | undefined; alt: string }) {
+  const [thumb, setThumb] = useState<ArrayBuffer | null>(null);
+  const [failed, setFailed] = useState(false);
+  useEffect(() => {
+    let live = true;
+    photo?.then((p) => live && setThumb(p.thumb)).catch(() => live && setFailed(true));
+    return () => {
+      live = false;
+    };
+  }, [photo]);
+  const url = useObjectUrl(thumb ? alt : null, thumb);
+  const box = { width: 72, height: 72, borderRadius: 1.5, flexShrink: 0, bgcolor: 'action.hover' };
+  if (url) return <Box component="img" src={url} alt={alt} sx={{ ...box, objectFit: 'cover' }} />;
+  if (failed) return <Box role="img" aria-label={`${alt}: could not be read`} sx={{ ...box, display: 'grid', placeItems: 'center' }}><ImageNotSupportedOutlined color="disabled" /></Box>;
+  return <Skeleton variant="rectangular" sx={box} aria-label={`${alt}: getting ready`} />;
 }
 
 interface DialogProps extends Props {
@@ -114,38 +132,65 @@ interface DialogProps extends Props {
   onClose: (saved: number) => void;
 }
 
-const NO_SUBJECT = '';
+interface Chosen {
+  key: string;
+  file: File;
+  caption: string;
+  /** Its own area, subject and tags; null while it follows the ones for every photo. */
+  own: PhotoFiling | null;
+}
+
+const keyOf = (file: File, i: number) => `${file.name}-${file.lastModified}-${i}`;
+
+/**
+ * Starts making each photo ready (scaled in the worker, hashed) as soon as it is chosen, one after another, so that
+ * the technician types while the phone works and saving only has to write.
+ */
+function usePreparedPhotos(files: File[]) {
+  const [ready, setReady] = useState(0);
+  const [prepared] = useState(() => {
+    const map = new Map<File, Promise<PreparedPhoto>>();
+    let previous: Promise<unknown> = Promise.resolve();
+    for (const file of files) {
+      const next = previous.then(() => preparePhoto(file, shrinkPhoto));
+      // A photo that cannot be read is reported when it is saved; the next one is still prepared.
+      next.then(() => setReady((n) => n + 1)).catch(() => setReady((n) => n + 1));
+      previous = next.catch(() => undefined);
+      map.set(file, next);
+    }
+    return map;
+  });
+  return { ready, prepared };
+}
 
 function PhotoDetailsDialog({ files: chosen, visitId, siteId, userId, preset, onClose }: DialogProps) {
   const choices = useCaptureChoices(visitId, siteId);
   const tags = usePhoneTags();
-  const [files, setFiles] = useState(chosen);
-  const [captions, setCaptions] = useState<string[]>(() => chosen.map(() => ''));
-  const [areaId, setAreaId] = useState(preset?.areaId ?? '');
-  const [subject, setSubject] = useState<string>(preset?.subject ?? NO_SUBJECT);
-  const [picked, setPicked] = useState<string[]>([]);
+  const { ready, prepared } = usePreparedPhotos(chosen);
+  const [items, setItems] = useState<Chosen[]>(() => chosen.map((file, i) => ({ key: keyOf(file, i), file, caption: '', own: null })));
+  const [shared, setShared] = useState<PhotoFiling>({ areaId: preset?.areaId ?? '', subject: preset?.subject ?? NO_SUBJECT, tags: [] });
   const [saving, setSaving] = useState<number | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [savedCount, setSavedCount] = useState(0);
 
-  const many = files.length > 1;
-  const toggle = (tag: string) => setPicked((p) => (p.includes(tag) ? p.filter((t) => t !== tag) : [...p, tag]));
+  const many = items.length > 1;
+  const update = (key: string, change: Partial<Chosen>) => setItems((list) => list.map((item) => (item.key === key ? { ...item, ...change } : item)));
 
   async function save(e: FormEvent) {
     e.preventDefault();
-    const [subjectType, subjectId] = subject ? (subject.split(':') as [PhotoSubjectType, string]) : [null, null];
     let done = 0;
     setError(null);
-    for (let i = 0; i < files.length; i++) {
+    for (let i = 0; i < items.length; i++) {
+      const item = items[i]!;
+      const filing = item.own ?? shared;
       setSaving(i);
       try {
-        await addPhoto(files[i]!, { visitId, siteId, areaId: areaId || null, subjectType, subjectId, caption: captions[i], tags: picked }, userId, shrinkPhoto);
+        const photo = await (prepared.get(item.file) ?? preparePhoto(item.file, shrinkPhoto));
+        await savePhoto(photo, { visitId, siteId, areaId: filing.areaId || null, ...subjectOf(filing.subject), caption: item.caption, tags: filing.tags }, userId);
         done++;
       } catch (err) {
         // What was saved stays saved; the rest stay in the form to try again.
-        const left = files.slice(i);
-        setFiles(left);
-        setCaptions((c) => c.slice(i));
+        setItems((list) => list.slice(i));
         setSavedCount((n) => n + done);
         setSaving(null);
         const reason =
@@ -158,12 +203,13 @@ function PhotoDetailsDialog({ files: chosen, visitId, siteId, userId, preset, on
     onClose(savedCount + done);
   }
 
-  const title = saving !== null ? `Saving photo ${saving + 1} of ${files.length}…` : many ? `Add ${files.length} photos` : 'Add one photo';
+  const title = saving !== null ? `Saving photo ${saving + 1} of ${items.length}…` : many ? `Add ${items.length} photos` : 'Add one photo';
+  const preparing = Math.min(ready, chosen.length) < chosen.length;
   return (
     <Dialog open fullScreen onClose={() => saving === null && onClose(savedCount)} aria-labelledby="photo-details-title">
       <Box component="form" onSubmit={save} noValidate aria-label="Photo details" sx={{ display: 'flex', flexDirection: 'column', minHeight: '100%' }}>
         <DialogTitle id="photo-details-title">{title}</DialogTitle>
-        {saving !== null && <LinearProgress variant="determinate" value={(saving / files.length) * 100} aria-label="Saving photos" />}
+        {saving !== null && <LinearProgress variant="determinate" value={(saving / items.length) * 100} aria-label="Saving photos" />}
         <DialogContent dividers sx={{ flex: 1 }}>
           <Stack spacing={2.5}>
             {error && (
@@ -171,59 +217,55 @@ function PhotoDetailsDialog({ files: chosen, visitId, siteId, userId, preset, on
                 {error}
               </Alert>
             )}
-            <Stack spacing={1.5} component="ul" sx={{ listStyle: 'none', p: 0, m: 0 }} aria-label="Chosen photos">
-              {files.map((file, i) => (
-                <Stack key={`${file.name}-${file.lastModified}-${i}`} component="li" direction="row" spacing={1.5} sx={{ alignItems: 'center' }}>
-                  <FilePreview file={file} alt={many ? `Photo ${i + 1}` : 'The photo'} />
-                  <TextField
-                    label={many ? `Caption for photo ${i + 1}` : 'Caption'}
-                    placeholder="What it shows, e.g. chase to the new socket"
-                    value={captions[i] ?? ''}
-                    onChange={(e) => setCaptions((c) => c.map((v, j) => (j === i ? e.target.value : v)))}
-                    slotProps={{ htmlInput: { maxLength: 500 } }}
-                    size="small"
-                  />
-                </Stack>
-              ))}
+            <Typography variant="body2" color="text.secondary" role="status">
+              {preparing ? `Getting photos ready on this phone: ${ready} of ${chosen.length}. Carry on filling in.` : ''}
+            </Typography>
+            <Stack spacing={2} component="ul" sx={{ listStyle: 'none', p: 0, m: 0 }} aria-label="Chosen photos">
+              {items.map((item, i) => {
+                const name = many ? `photo ${i + 1}` : undefined;
+                return (
+                  <Stack key={item.key} component="li" spacing={1.5} aria-label={many ? `Photo ${i + 1}` : 'The photo'}>
+                    <Stack direction="row" spacing={1.5} sx={{ alignItems: 'center' }}>
+                      <PreparedPreview photo={prepared.get(item.file)} alt={many ? `Photo ${i + 1}` : 'The photo'} />
+                      <TextField
+                        label={many ? `Caption for photo ${i + 1}` : 'Caption'}
+                        placeholder="What it shows, e.g. chase to the new socket"
+                        value={item.caption}
+                        onChange={(e) => update(item.key, { caption: e.target.value })}
+                        slotProps={{ htmlInput: { maxLength: 500 } }}
+                        size="small"
+                        fullWidth
+                      />
+                    </Stack>
+                    {many && (
+                      <Button
+                        variant="text"
+                        sx={{ alignSelf: 'flex-start', minHeight: 44 }}
+                        aria-expanded={item.own !== null}
+                        onClick={() => update(item.key, { own: item.own ? null : { ...shared } })}
+                      >
+                        {item.own ? `File photo ${i + 1} like the others` : `File photo ${i + 1} on its own`}
+                      </Button>
+                    )}
+                    {item.own && (
+                      <Box sx={{ pl: 1.5, borderLeft: 3, borderColor: 'divider' }}>
+                        <PhotoFilingFields filing={item.own} onChange={(own) => update(item.key, { own })} choices={choices} tagChoices={tags} of={name} />
+                      </Box>
+                    )}
+                  </Stack>
+                );
+              })}
             </Stack>
-            <TextField select label="Area" value={areaId} onChange={(e) => setAreaId(e.target.value)} slotProps={{ select: { native: true }, inputLabel: { shrink: true } }} helperText={many ? 'For all these photos.' : ' '}>
-              <option value="">Not given</option>
-              {choices?.areas.map((a) => (
-                <option key={a.id} value={a.id}>
-                  {a.name}
-                </option>
-              ))}
-            </TextField>
-            <TextField select label="Shows" value={subject} onChange={(e) => setSubject(e.target.value)} slotProps={{ select: { native: true }, inputLabel: { shrink: true } }} helperText="A circuit, cable run or point change, if the photo is of one.">
-              <option value={NO_SUBJECT}>Nothing in particular</option>
-              {choices?.subjects.map((s) => (
-                <option key={`${s.type}:${s.id}`} value={`${s.type}:${s.id}`}>
-                  {s.label}
-                </option>
-              ))}
-            </TextField>
-            <Box component="fieldset" sx={{ border: 0, p: 0, m: 0 }}>
-              <Typography component="legend" variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-                Tags
-              </Typography>
-              <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 1 }}>
-                {tags.map((tag) => {
-                  const on = picked.includes(tag);
-                  return (
-                    <Chip
-                      key={tag}
-                      label={tag}
-                      color={on ? 'primary' : 'default'}
-                      variant={on ? 'filled' : 'outlined'}
-                      onClick={() => toggle(tag)}
-                      aria-pressed={on}
-                      role="button"
-                      sx={{ minHeight: 40, fontSize: '0.95rem', borderRadius: 5 }}
-                    />
-                  );
-                })}
+            {(!many || items.some((item) => !item.own)) && (
+              <Stack spacing={1}>
+                {many && (
+                  <Typography variant="subtitle2" component="h3">
+                    {items.every((item) => !item.own) ? 'For all these photos' : 'For the other photos'}
+                  </Typography>
+                )}
+                <PhotoFilingFields filing={shared} onChange={setShared} choices={choices} tagChoices={tags} areaHelp={many ? 'Each photo can be filed on its own above, now or later from the trail.' : ' '} />
               </Stack>
-            </Box>
+            )}
           </Stack>
         </DialogContent>
         <DialogActions sx={{ p: 2, gap: 1, pb: 'calc(16px + env(safe-area-inset-bottom))' }}>
@@ -231,7 +273,7 @@ function PhotoDetailsDialog({ files: chosen, visitId, siteId, userId, preset, on
             Cancel
           </Button>
           <Button type="submit" variant="contained" size="large" disabled={saving !== null} sx={{ flex: 1 }}>
-            {many ? `Save ${files.length} photos` : 'Save photo'}
+            {many ? `Save ${items.length} photos` : 'Save photo'}
           </Button>
         </DialogActions>
       </Box>

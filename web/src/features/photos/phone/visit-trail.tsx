@@ -6,6 +6,7 @@ import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
 import StickyNote2Outlined from '@mui/icons-material/StickyNote2Outlined';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
+import ButtonBase from '@mui/material/ButtonBase';
 import List from '@mui/material/List';
 import ListItem from '@mui/material/ListItem';
 import Paper from '@mui/material/Paper';
@@ -26,6 +27,7 @@ import { tagList, trailTime } from '../trail-time';
 import { LocalPhotoThumb } from './local-photo-thumb';
 import { PhotoBadge, photoBadge } from './photo-badge';
 import { PhotoCapture } from './photo-capture';
+import { TrailPhotoViewer } from './trail-photo-viewer';
 
 /** A visit with hundreds of photos stays quick: the trail shows this many at a time. */
 const PAGE = 20;
@@ -76,6 +78,7 @@ function Row({ tile, title, lines, badge, wrap, voidable }: { tile: ReactNode; t
 
 interface EntryProps {
   item: TrailItem;
+  onOpenPhoto: (id: string) => void;
   areaNames: Map<string, string>;
   subjectNames: Map<string, string>;
   states: PhotoStates | undefined;
@@ -83,7 +86,7 @@ interface EntryProps {
   locked: boolean;
 }
 
-function TrailEntry({ item, areaNames, subjectNames, states, progress, locked }: EntryProps) {
+function TrailEntry({ item, onOpenPhoto, areaNames, subjectNames, states, progress, locked }: EntryProps) {
   const when = trailTime(item.at);
   switch (item.kind) {
     case 'photo': {
@@ -93,7 +96,11 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress, locked }:
       const tags = tagList(p.tags).join(', ');
       return (
         <Row
-          tile={<LocalPhotoThumb photo={p} alt={caption} />}
+          tile={
+            <ButtonBase onClick={() => onOpenPhoto(p.id)} aria-label={`Open photo: ${caption}`} sx={{ borderRadius: 1.5, flexShrink: 0 }}>
+              <LocalPhotoThumb photo={p} alt={caption} />
+            </ButtonBase>
+          }
           title={caption}
           lines={[[when, where].filter(Boolean).join(' · '), tags]}
           badge={<Box><PhotoBadge look={photoBadge(p, states, progress)} /></Box>}
@@ -159,16 +166,19 @@ function TrailEntry({ item, areaNames, subjectNames, states, progress, locked }:
 }
 
 /** The top of a visit: the camera button, then everything recorded on the visit, newest first. */
-export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: string; extra?: ReactNode }) {
+export function VisitTrail({ visit, userId, locked = false, extra }: { visit: VisitRow; userId: string; locked?: boolean; extra?: ReactNode }) {
   const trail = useVisitTrail(visit);
   // Read once for the whole list, not once per photo.
   const states = usePhotoStates();
   const progress = useUploadProgress();
   const [shown, setShown] = useState(PAGE);
+  const [openId, setOpenId] = useState<string | null>(null);
   const items = trail?.items ?? [];
+  const photoRows = items.flatMap((i) => (i.kind === 'photo' ? [i.photo] : []));
   // Voided photos stay in the trail, struck through, but are not counted.
-  const photos = items.filter((i) => i.kind === 'photo' && !isVoided(i.photo)).length;
-  const locked = visit.status === FINISHED_VISIT_STATUS;
+  const photos = photoRows.filter((p) => !isVoided(p)).length;
+  // The route says when the visit is locked; a finished visit is, wherever the trail is shown.
+  const closed = locked || visit.status === FINISHED_VISIT_STATUS;
   return (
     <Stack component="section" aria-labelledby="trail-heading" spacing={1.5}>
       <Stack direction="row" sx={{ alignItems: 'baseline', justifyContent: 'space-between' }}>
@@ -195,17 +205,32 @@ export function VisitTrail({ visit, userId, extra }: { visit: VisitRow; userId: 
               <TrailEntry
                 key={`${item.kind}-${item.id}`}
                 item={item}
+                onOpenPhoto={setOpenId}
                 areaNames={trail!.areaNames}
                 subjectNames={trail!.subjectNames}
                 states={states}
                 progress={progress}
-                locked={locked}
+                locked={closed}
               />
             ))}
           </List>
         </Paper>
       )}
       {items.some((i) => i.kind === 'cableRun' || i.kind === 'testResult') && <AidLine />}
+      {openId && photoRows.some((p) => p.id === openId) && (
+        <TrailPhotoViewer
+          photos={photoRows}
+          openId={openId}
+          onOpen={setOpenId}
+          onClose={() => setOpenId(null)}
+          visitId={visit.id}
+          siteId={visit.siteId}
+          userId={userId}
+          locked={locked}
+          states={states}
+          progress={progress}
+        />
+      )}
       {items.length > shown && (
         <Button variant="outlined" size="large" onClick={() => setShown((n) => n + PAGE)}>
           Show {Math.min(PAGE, items.length - shown)} more of {items.length - shown}

@@ -22,7 +22,7 @@ const schema = z.object({
   role: z.enum(ROLES, { message: 'Choose a role.' }),
 });
 type Values = z.infer<typeof schema>;
-const LABELS: Record<keyof Values, string> = { name: 'Name', email: 'E-mail', role: 'Role', password: 'First password' };
+const LABELS: Record<keyof Values, string> = { name: 'Name', email: 'E-mail', role: 'Role' };
 
 export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const create = useCreatePerson();

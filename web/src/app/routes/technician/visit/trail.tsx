@@ -3,7 +3,7 @@ import { QuickNote } from '@/features/visits/phone/quick-note';
 import { useVisitContext } from '../visit-context';
 
 export function Component() {
-  const { summary, userId } = useVisitContext();
+  const { summary, userId, locked } = useVisitContext();
   const { visit } = summary;
-  return <VisitTrail visit={visit} userId={userId} extra={<QuickNote visitId={visit.id} siteId={visit.siteId} />} />;
+  return <VisitTrail visit={visit} userId={userId} locked={locked} extra={<QuickNote visitId={visit.id} siteId={visit.siteId} />} />;
 }
