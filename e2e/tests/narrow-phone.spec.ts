@@ -30,7 +30,7 @@ test('a visit booked for tomorrow asks before arrival, and an arrival can be tak
   await card.getByRole('button', { name: 'I’m on site' }).click();
   const ask = page.getByRole('dialog', { name: 'On site for a visit booked tomorrow?' });
   await expect(ask).toContainText('is booked for Tomorrow, 09:00–11:00');
-  await page.screenshot({ path: '/tmp/wall/arrive-tomorrow.png' });
+  if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/arrive-tomorrow.png` });
   await ask.getByRole('button', { name: 'Not yet' }).click();
   await expect(ask).toBeHidden();
   await expect(card.getByText('Planned')).toBeVisible();
@@ -40,7 +40,7 @@ test('a visit booked for tomorrow asks before arrival, and an arrival can be tak
   await expect(card.getByText('On site')).toBeVisible();
   await expect(card.getByRole('link', { name: 'Open visit' })).toBeVisible();
   await expect(page.getByText(/^Arrival recorded at \d\d:\d\d\.$/)).toBeVisible();
-  await page.screenshot({ path: '/tmp/wall/arrived-undo.png' });
+  if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/arrived-undo.png` });
   await page.getByRole('button', { name: 'Undo' }).click();
   await expect(card.getByText('Planned')).toBeVisible();
   await expect(card.getByRole('button', { name: 'I’m on site' })).toBeVisible();
@@ -60,7 +60,7 @@ test('at 360 px every section tab shows, Sign-off included, and the pin buttons 
   expect(await tabs.evaluate((el) => el.querySelectorAll('.MuiTabs-scrollButtons').length)).toBe(0);
   await visitPage.section('Sign-off');
   await expect(page.getByRole('tab', { name: 'Sign-off', selected: true })).toBeVisible();
-  await page.screenshot({ path: '/tmp/wall/tabs-360.png' });
+  if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/tabs-360.png` });
 
   await visitPage.section('Cables');
   await page.getByRole('link', { name: 'Record a cable' }).click();
@@ -87,7 +87,7 @@ test('at 360 px every section tab shows, Sign-off included, and the pin buttons 
     expect(fits, `pin ${pin}`).toEqual({ overflow: 0, inCell: true, clear: true });
   }
   await expectNoSidewaysScroll(page);
-  await page.screenshot({ path: '/tmp/wall/pins-360.png', fullPage: true });
+  if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/pins-360.png`, fullPage: true });
 });
 
 test.describe('in the dark theme', () => {
@@ -141,7 +141,7 @@ test.describe('in the dark theme', () => {
     ]);
     expect(wrongBorder).toBe(error);
     expect(rightBorder).not.toBe(error);
-    await page.screenshot({ path: '/tmp/wall/locked-dark.png', fullPage: true });
+    if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/locked-dark.png`, fullPage: true });
   });
 });
 
@@ -169,5 +169,5 @@ test('the wall drawing names its figures in full and answers a bad one with a me
   await expect(figures.getByText('Cable depth above 1000 mm is not a real depth; check the figure.')).toBeVisible();
   await expectNoSidewaysScroll(page);
   await figures.scrollIntoViewIfNeeded();
-  await page.screenshot({ path: '/tmp/wall/wall-figures-360.png' });
+  if (process.env.SCREENSHOT_DIR) await page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/wall-figures-360.png` });
 });

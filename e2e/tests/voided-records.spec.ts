@@ -123,6 +123,6 @@ test('a cable voided offline is left off the labels and the report, and the desk
   const line = desk.page.getByRole('list', { name: 'What was recorded, in time order' }).getByRole('listitem', { name: new RegExp(`^Cable ${typo}.*\\(void\\)$`) });
   await expect(line).toContainText(`Void: ${reason}`);
   await expect(line.getByText(new RegExp(`^Cable ${typo}`))).toHaveCSS('text-decoration-line', 'line-through');
-  await desk.page.screenshot({ path: '/tmp/void/desk-visit.png', fullPage: true });
+  if (process.env.SCREENSHOT_DIR) await desk.page.screenshot({ path: `${process.env.SCREENSHOT_DIR}/desk-visit.png`, fullPage: true });
   await desk.context.close();
 });
