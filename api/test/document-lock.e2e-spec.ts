@@ -184,7 +184,7 @@ describe('the lock of issued documents', () => {
     expect(held).toMatchObject({ status: 'merged', heldBy: 'MW-0002' });
     const res = await revise(current.id, { reason: 'Zs measured again', take: held!.conflictIds });
     expect(res.status).toBe(422);
-    // BS 7671:2018+A2:2022 Table 41.3, type B 32 A at 0.4 s: 1.37 Ω, × 0.8 (Appendix 3, trade practice for cold readings) = 1.10 Ω; 1.52 Ω fails.
+    // BS 7671:2018+A3:2024 Table 41.3, type B 32 A at 0.4 s: 1.37 Ω; 1.52 Ω fails even against the table's own maximum.
     expect((res.body.message as string[]).join(' ')).toMatch(/Circuit 2 \(Sockets, first floor and landing\).*Zs/);
     expect((await documentRow(current.id)).supersededAt).toBeNull();
     expect((await t.http.get(`/api/test-results/${result.id}`).set(bearer(office)).expect(200)).body.zsOhm).toBe(0.63);

@@ -205,8 +205,8 @@ describe('issuing documents', () => {
       const res = await issue(office, job.id, 'minor-works').expect(422);
       expectErrorBody(res.body, 422);
       const messages = (res.body.message as string[]).join('\n');
-      // BS 7671:2018+A2:2022 Table 41.3, type B 32 A: 1.37 Ω × 0.8 = 1.10 Ω, and 1.52 Ω is above it.
-      expect(messages).toMatch(/Circuit 1 \(Sockets, ground floor\): Earth fault loop impedance Zs fails\. Zs 1\.52 Ω is above 1\.10 Ω/);
+      // BS 7671:2018+A3:2024 Table 41.3, type B 32 A: 1.37 Ω, and 1.52 Ω is above even the table's own maximum.
+      expect(messages).toMatch(/Circuit 1 \(Sockets, ground floor\): Earth fault loop impedance Zs fails\. Zs 1\.52 Ω is above the 1\.37 Ω maximum in BS 7671:2018\+A3:2024 Table 41\.3/);
       expect(messages).toMatch(/a departure from the standard never stands in for a test result/);
     });
 
@@ -226,13 +226,13 @@ describe('issuing documents', () => {
       const result = await current('testResult', resultId);
       const pushed = await push(t, office, 'office-desk-2', [
         mutation('visit', visitId, { departures: note, departureEntries }, { baseVersion: visit.version, deviceId: 'office-desk-2' }),
-        // BS 7671:2018+A3:2024 Table 41.3, type B 32 A: 1.37 Ω × 0.8 = 1.10 Ω (Appendix 3, trade practice); 1.52 Ω is above it.
+        // BS 7671:2018+A3:2024 Table 41.3, type B 32 A: 1.37 Ω; 1.52 Ω is above even the table's own maximum.
         mutation('testResult', resultId, { zsOhm: 1.52, rcdTripMs: 25 }, { baseVersion: result.version, deviceId: 'office-desk-2' }),
       ]);
       expect(pushed.map((r) => r.status)).toEqual(['applied', 'applied']);
       const res = await issue(office, job.id, 'minor-works').expect(422);
       expect(res.body.message).toEqual([
-        expect.stringMatching(/^Circuit 1 \(Sockets, ground floor\): Earth fault loop impedance Zs fails\. Zs 1\.52 Ω is above 1\.10 Ω/),
+        expect.stringMatching(/^Circuit 1 \(Sockets, ground floor\): Earth fault loop impedance Zs fails\. Zs 1\.52 Ω is above the 1\.37 Ω maximum in BS 7671:2018\+A3:2024 Table 41\.3/),
         'Record the missing readings, put right what fails and test the circuit again: a departure from the standard never stands in for a test result.',
       ]);
     });

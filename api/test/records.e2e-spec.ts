@@ -335,16 +335,21 @@ describe('office records: customers, sites, areas, boards, circuits, jobs and vi
       expect(messages(foreign.body)).toMatch(/area.siteId points at a site that does not exist/);
       const outsider = await t.http.patch(`/api/visits/${seed.orchardToday!.id}`).set(as(office)).send({ technicianIds: [oakmere.user.id] }).expect(400);
       expect(messages(outsider.body)).toMatch(/visit.technicianIds points at a user that does not exist/);
+      const before = (await list(oakmere, '/api/jobs')).total;
       const jobs = await t.http.post('/api/jobs').set(as(oakmere)).send({ siteId: seed.orchard!.id, customerId: seed.greaves!.id, title: 'Poached' }).expect(400);
       expectErrorBody(jobs.body, 400);
-      expect((await list(oakmere, '/api/jobs')).total).toBe(0);
+      expect((await list(oakmere, '/api/jobs')).total).toBe(before);
     });
   });
 
   describe('organisations never see each other', () => {
     it.each(RESOURCES)("Oakmere sees none of Larkfield's %s and gets 404 for their ids", async (resource) => {
-      expect(await list(oakmere, `/api/${resource}`)).toEqual({ items: [], total: 0, page: 1, pageSize: 50 });
-      expect((await list(oakmere, `/api/${resource}?search=a`)).total).toBe(0);
+      // Oakmere has rows of its own (the demo's subcontractor works for both): none of them is one of Larkfield's.
+      const larkfield = new Set((await list(office, `/api/${resource}?pageSize=200`)).items.map((r) => r.id));
+      for (const query of ['?pageSize=200', '?search=a&pageSize=200']) {
+        const theirs = (await list(oakmere, `/api/${resource}${query}`)).items.map((r) => r.id);
+        expect(theirs.filter((id) => larkfield.has(id))).toEqual([]);
+      }
       const id = seed[resource]!.id;
       const theirs = await t.http.get(`/api/${resource}/${id}`).set(as(oakmere)).expect(404);
       const none = await t.http.get(`/api/${resource}/${NOBODY}`).set(as(oakmere)).expect(404);

@@ -228,10 +228,11 @@ describe('cable runs, point changes and test results for the office', () => {
     });
 
     it('works the verdicts out again from the circuit as it is recorded now', async () => {
-      // The office corrects the lighting circuit to a B10: 0.8 × 4.37 Ω = 3.50 Ω (Table 41.3, B10; Appendix 3), so 5.2 Ω fails.
+      // The office corrects the lighting circuit to a B10: 4.37 Ω (BS 7671:2018+A3:2024 Table 41.3, B10), so 5.2 Ω fails
+      // against the table's own maximum, not only its 80 % (3.50 Ω, Appendix 3).
       await t.http.patch(`/api/circuits/${ids.orchardC3}`).set(as(office)).send({ deviceRatingA: 10 }).expect(200);
       const light = await get<TestResultRow>(office, `/api/test-results/${ids.lightTest}`);
-      expect(lineOf(light, 'zs').result).toMatchObject({ verdict: 'fail', limit: 3.5 });
+      expect(lineOf(light, 'zs').result).toMatchObject({ verdict: 'fail', limit: 4.37 });
       await t.http.patch(`/api/circuits/${ids.orchardC3}`).set(as(office)).send({ deviceRatingA: 6 }).expect(200);
     });
 
