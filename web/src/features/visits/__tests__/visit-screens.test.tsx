@@ -122,25 +122,25 @@ describe('Visit', () => {
     fireEvent.change(screen.getByLabelText('Circuit number'), { target: { value: '5' } });
     fireEvent.change(screen.getByLabelText('Description'), { target: { value: 'Electric fire, fused spur' } });
     fireEvent.change(screen.getByLabelText('Kind'), { target: { value: 'radial' } });
-    fireEvent.change(screen.getByLabelText('Rating (A)'), { target: { value: 'sixteen' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Rating (A)' }), { target: { value: 'sixteen' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add circuit' }));
     expect(await screen.findByText('The device rating must be a number, like 32 A.')).toBeTruthy();
     // Details that cannot be so, each named beside its field: no type B breaker is made in 17 A (BS 7671:2018+A2:2022
     // Table 41.3 lists 6 A to 125 A), there is no RCD of type Q, and a cpc is not larger than its live conductors.
     fireEvent.change(screen.getByLabelText('Protective device'), { target: { value: 'B' } });
-    fireEvent.change(screen.getByLabelText('Rating (A)'), { target: { value: '17' } });
-    fireEvent.change(screen.getByLabelText('RCD type'), { target: { value: 'Q' } });
-    fireEvent.change(screen.getByLabelText('Live size (mm²)'), { target: { value: '2.5' } });
-    fireEvent.change(screen.getByLabelText('Cpc size (mm²)'), { target: { value: '4' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Rating (A)' }), { target: { value: '17' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'RCD type' }), { target: { value: 'Q' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Live size (mm²)' }), { target: { value: '2.5' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Cpc size (mm²)' }), { target: { value: '4' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add circuit' }));
     expect(await screen.findByText('Rating: this device is not made in 17 A. Choose one of 6, 10, 16, 20, 25, 32, 40, 50, 63, 80, 100, 125 A.')).toBeTruthy();
     expect(screen.getByText('RCD type must be AC, A, F or B, with S if it is time-delayed.')).toBeTruthy();
     expect(screen.getByText('Cpc size: 4 mm² is larger than the 2.5 mm² live conductors it runs with; check both sizes.')).toBeTruthy();
     expect(await db.outbox.count()).toBe(0);
-    fireEvent.change(screen.getByLabelText('Rating (A)'), { target: { value: '16' } });
-    fireEvent.change(screen.getByLabelText('RCD type'), { target: { value: '' } });
-    fireEvent.change(screen.getByLabelText('Live size (mm²)'), { target: { value: '' } });
-    fireEvent.change(screen.getByLabelText('Cpc size (mm²)'), { target: { value: '' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Rating (A)' }), { target: { value: '16' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'RCD type' }), { target: { value: '' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Live size (mm²)' }), { target: { value: '' } });
+    fireEvent.change(screen.getByRole('combobox', { name: 'Cpc size (mm²)' }), { target: { value: '' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add circuit' }));
 
     const list = await screen.findByRole('list', { name: 'Circuits on this site' });
