@@ -32,6 +32,10 @@ test("the office drags a visit to another technician's row and another day, sets
   // Corin Vale's row, next to Aled's and with nothing booked at Larkfield, so both are on screen for the drag.
   const target = grid.getByRole('row', { name: 'Corin Vale' }).getByRole('gridcell').nth(day);
   await card.scrollIntoViewIfNeeded();
+  // The card and the row it goes to both well inside the window, clear of the edges where a drag scrolls the page.
+  const [c0, t0] = [(await card.boundingBox())!, (await target.boundingBox())!];
+  const middle = (c0.y + c0.height / 2 + t0.y + t0.height / 2) / 2;
+  await page.evaluate((by) => window.scrollBy(0, by), middle - page.viewportSize()!.height / 2);
 
   // A drag with the mouse, in steps, as a hand moves.
   const a = (await card.boundingBox())!;

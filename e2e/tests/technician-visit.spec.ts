@@ -218,6 +218,8 @@ test('a whole visit on a phone with no signal: cables, a moved socket, readings,
   await addPart.getByLabel('Part').selectOption({ label: '2.5 mm² twin and earth cable' });
   await addPart.getByLabel(/Quantity/).fill('6');
   await addPart.getByRole('button', { name: 'Add part' }).click();
+  // The form empties once the part is kept: choose the next one after that, not while it is being saved.
+  await expect(page.getByRole('list', { name: 'Parts used on this visit' }).getByRole('listitem')).toHaveCount(1);
   await addPart.getByLabel('Part').selectOption({ label: 'Switched fused connection unit, white' });
   await addPart.getByRole('button', { name: 'Add part' }).click();
   await expect(page.getByRole('list', { name: 'Parts used on this visit' }).getByRole('listitem')).toHaveCount(2);
