@@ -35,7 +35,8 @@ test("the office drags a visit to another technician's row and another day, sets
   // The card and the row it goes to both well inside the window, clear of the edges where a drag scrolls the page.
   const [c0, t0] = [(await card.boundingBox())!, (await target.boundingBox())!];
   const middle = (c0.y + c0.height / 2 + t0.y + t0.height / 2) / 2;
-  await page.evaluate((by) => window.scrollBy(0, by), middle - page.viewportSize()!.height / 2);
+  // Never so far that the card goes under the sticky bars at the top.
+  await page.evaluate((by) => window.scrollBy(0, by), Math.min(middle - page.viewportSize()!.height / 2, c0.y - 220));
 
   // A drag with the mouse, in steps, as a hand moves.
   const a = (await card.boundingBox())!;
@@ -45,6 +46,9 @@ test("the office drags a visit to another technician's row and another day, sets
   // Where the row is once the card is lifted: the rows may close up behind it.
   const b = (await target.boundingBox())!;
   await page.mouse.move(b.x + b.width / 2, b.y + b.height / 2, { steps: 15 });
+  // Had the page scrolled under the drag, finish on the row where it is now.
+  const b2 = (await target.boundingBox())!;
+  await page.mouse.move(b2.x + b2.width / 2, b2.y + b2.height / 2, { steps: 3 });
   await page.mouse.up();
 
   // Asked first, with the times to change and the warnings of booking.
