@@ -12,6 +12,8 @@ export * from './electrical/rcd.js';
 export * from './electrical/voltage-drop.js';
 export * from './electrical/fused-connection-unit.js';
 export * from './electrical/safe-zones.js';
+export * from './electrical/hidden-routes.js';
+export * from './electrical/hidden-routes-map.js';
 export * from './cabling/pin-schemes.js';
 export * from './cabling/wiremap.js';
 export * from './cabling/link-length.js';
