@@ -59,3 +59,4 @@ export * from './certification/circuit-details-check.js';
 export * from './certification/notifiable-work.js';
 export * from './cabling/fibre-loss.js';
 export * from './cabling/link-performance.js';
+export * from './contracts/hidden-routes.js';

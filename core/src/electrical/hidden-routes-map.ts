@@ -5,7 +5,7 @@
 import type { MarkedRoute } from './hidden-routes.js';
 
 export interface MarkedPhotoEntry {
-  readonly photo: { readonly id: string; readonly areaId?: string | null; readonly takenAt?: string | null; readonly createdAt?: string | null };
+  readonly photo: { readonly id: string; readonly areaId?: string | null; readonly takenAt?: string | null; readonly createdAt?: string | Date | null };
   readonly markup: { readonly id: string; readonly wallName?: string | null; readonly areaId?: string | null; readonly routes?: readonly MarkedRoute[] | null };
 }
 
@@ -27,7 +27,10 @@ export function routeIsTied(route: Pick<MarkedRoute, 'cableRunId' | 'circuitId'>
   return 'cableRunId' in tie ? route.cableRunId === tie.cableRunId : route.circuitId === tie.circuitId;
 }
 
-const when = (e: MarkedPhotoEntry) => e.photo.takenAt ?? e.photo.createdAt ?? '';
+const when = (e: MarkedPhotoEntry) => {
+  const made = e.photo.createdAt;
+  return e.photo.takenAt ?? (made instanceof Date ? made.toISOString() : made) ?? '';
+};
 
 /**
  * Groups marked photos by area and wall (areas by name, the photos with no area last) with each wall's photos newest

@@ -338,3 +338,15 @@ export function routeTieWords(
   if (route.cableRunId) return cables.get(route.cableRunId)?.label ? `Cable ${cables.get(route.cableRunId)!.label}` : 'A cable no longer recorded';
   return 'Not tied to a cable or circuit';
 }
+
+/** The colours routes are drawn in, in the order drawn, the same on the phone, the desk and paper; dark enough on a photo's light plaster. */
+export const ROUTE_COLOURS = ['#d81b60', '#1565c0', '#2e7d32', '#e65100', '#6a1b9a', '#00838f', '#5d4037', '#283593'] as const;
+export const routeColour = (index: number): string => ROUTE_COLOURS[index % ROUTE_COLOURS.length]!;
+
+/** A datum in words: "from the left-hand corner". */
+export const DATUM_WORDS: Readonly<Record<DatumKind, string>> = {
+  'left-corner': 'from the left-hand corner',
+  'right-corner': 'from the right-hand corner',
+  floor: 'up from the floor',
+  ceiling: 'down from the ceiling',
+};
