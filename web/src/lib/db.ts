@@ -51,6 +51,8 @@ export type DocumentRow = LocalRowOf<'document'>;
 export type ConflictRow = LocalRowOf<'conflict'>;
 export type PriceItemRow = LocalRowOf<'priceItem'>;
 export type MaterialLineRow = LocalRowOf<'materialLine'>;
+/** Routes drawn over a photo: the photo itself never changes. */
+export type PhotoMarkupRow = LocalRowOf<'photoMarkup'>;
 
 /** A change made on this phone and not yet acknowledged by the server, in the order it was made. */
 export interface OutboxEntry extends Mutation {
@@ -152,7 +154,7 @@ export interface MetaEntry<K extends MetaKey = MetaKey> {
 }
 
 /** Indexed fields only: the rest of each row is stored but not indexed. Tables as first shipped (version 1). */
-const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine'>, string> = {
+const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine' | 'photoMarkup'>, string> = {
   customer: 'id',
   site: 'id, customerId',
   area: 'id, siteId',
@@ -186,6 +188,7 @@ export class WiretrailDb extends Dexie {
   declare conflict: Table<ConflictRow, string>;
   declare priceItem: Table<PriceItemRow, string>;
   declare materialLine: Table<MaterialLineRow, string>;
+  declare photoMarkup: Table<PhotoMarkupRow, string>;
   declare outbox: Table<OutboxEntry, number>;
   declare failed: Table<FailedEntry, number>;
   declare meta: Table<MetaEntry, MetaKey>;
@@ -211,6 +214,10 @@ export class WiretrailDb extends Dexie {
     this.version(3).stores({
       priceItem: 'id, category',
       materialLine: 'id, visitId, siteId',
+    });
+    // Routes drawn over photos, found by their photo and by site for the map of hidden routes.
+    this.version(4).stores({
+      photoMarkup: 'id, photoId, visitId, siteId',
     });
   }
 
