@@ -13,7 +13,7 @@ import { DEFAULT_RULE_SET } from '../rules/uk-bs7671-2018-a2-2022.js';
 import { checkSafeZone, type ConcealedCableProtection, type SafeZoneCheck, WALL_LIMITS, type WallAccessory, type WallPoint } from './safe-zones.js';
 
 // Types, not interfaces, so that they are plain JSON values a synced row and a mutation may carry.
-export type PhotoPoint = { readonly x: number; readonly y: number };
+export type PhotoPoint = { x: number; y: number };
 
 /** The fixed lines a dimension is measured from: a corner (an angle with the next wall), the floor or the ceiling. */
 export const DATUM_KINDS = ['left-corner', 'right-corner', 'floor', 'ceiling'] as const;
@@ -23,32 +23,32 @@ export const CONCEALED_PROTECTIONS = ['none', 'earthed-metallic-covering', 'eart
 
 /** One cable's route as drawn: straight runs between the points, each tied to the cable run or circuit it is. */
 export type MarkedRoute = {
-  readonly id: string;
-  readonly points: readonly PhotoPoint[];
-  readonly cableRunId?: string | null;
-  readonly circuitId?: string | null;
+  id: string;
+  points: PhotoPoint[];
+  cableRunId?: string | null;
+  circuitId?: string | null;
   /** Depth of the cable below the finished surface (mm), as measured in the open chase. */
-  readonly depthMm?: number | null;
-  readonly protection?: ConcealedCableProtection | null;
+  depthMm?: number | null;
+  protection?: ConcealedCableProtection | null;
 };
 
 /** A dimension from a datum: where the datum's line is on the photo, the point measured to, and the typed distance. */
 export type DatumMark = {
-  readonly id: string;
-  readonly datum: DatumKind;
+  id: string;
+  datum: DatumKind;
   /** The datum's line on the photo: its x for a corner, its y for the floor or the ceiling. */
-  readonly lineAt: number;
-  readonly to: PhotoPoint;
-  readonly mm: number;
+  lineAt: number;
+  to: PhotoPoint;
+  mm: number;
 };
 
 /** A socket box, switch or other accessory the routes serve, drawn as its plate's outline on the photo. */
 export type MarkedAccessory = {
-  readonly id: string;
-  readonly centre: PhotoPoint;
-  readonly widthPx: number;
-  readonly heightPx: number;
-  readonly label?: string | null;
+  id: string;
+  centre: PhotoPoint;
+  widthPx: number;
+  heightPx: number;
+  label?: string | null;
 };
 
 /** What the check of a markup needs: the drawing, and the wall's figures as typed. */

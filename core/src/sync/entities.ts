@@ -351,7 +351,7 @@ const REGISTRY = {
       photoId: seen(ref('photo'), true), visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), areaId: seen(ref('area')),
       wallName: seen(str(100)),
       wallWidthMm: seen(num(300, 30_000)), wallHeightMm: seen(num(300, 10_000)), wallThicknessMm: seen(num(25, 1_000)),
-      routes: seen(jsonOf<readonly MarkedRoute[]>()), datums: seen(jsonOf<readonly DatumMark[]>()), accessories: seen(jsonOf<readonly MarkedAccessory[]>()),
+      routes: seen(jsonOf<MarkedRoute[]>()), datums: seen(jsonOf<DatumMark[]>()), accessories: seen(jsonOf<MarkedAccessory[]>()),
       recordedAt: seen(when),
       ...voidable,
     },

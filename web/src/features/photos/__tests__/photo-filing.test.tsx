@@ -8,6 +8,7 @@ import { setSession } from '@/lib/session';
 import { resetUploadProgress } from '@/lib/photos/upload-progress';
 import { fakeJpeg } from '@/lib/photos/test-photos';
 import { VisitTrail } from '../phone/visit-trail';
+import { MemoryRouter } from 'react-router-dom';
 
 // The worker is the browser's; here each file "scales" to a small JPEG of its own, seeded by its size.
 vi.mock('@/lib/photos/shrink-photo', () => ({
@@ -55,7 +56,10 @@ function show(locked = false) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false, queryFn: () => Promise.reject(new Error('offline')) } } });
   render(
     <QueryClientProvider client={client}>
-      <VisitTrail visit={visit} userId={USER.id} locked={locked} />
+      {/* The viewer links to the photo's cable routes. */}
+      <MemoryRouter>
+        <VisitTrail visit={visit} userId={USER.id} locked={locked} />
+      </MemoryRouter>
     </QueryClientProvider>,
   );
 }

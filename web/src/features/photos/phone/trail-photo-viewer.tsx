@@ -14,6 +14,8 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { type ChangeEvent, type FormEvent, type KeyboardEvent, type PointerEvent, useId, useRef, useState } from 'react';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import type { PhotoRow } from '@/lib/db';
 import { preparePhoto, removeRefusedPhoto, savePhoto } from '@/lib/photos/add-photo';
 import { shrinkPhoto } from '@/lib/photos/shrink-photo';
@@ -108,6 +110,9 @@ export function TrailPhotoViewer({ photos, openId, onOpen, onClose, visitId, sit
               <PhotoBadge look={badge} />
             </Box>
           </Stack>
+          <Button component={RouterLink} to={paths.visitPhotoRoutes.href(visitId, photo.id)} variant="outlined" size="large" sx={{ minHeight: 48, alignSelf: 'flex-start' }}>
+            {locked ? 'Cable routes and drilling check' : 'Mark cable routes'}
+          </Button>
           {refused && <RefusedPhoto key={`refused-${photo.id}`} photo={photo} userId={userId} locked={locked} onReplaced={onOpen} />}
           <PhotoEdit key={photo.id} photo={photo} visitId={visitId} siteId={siteId} locked={locked} />
         </Stack>
