@@ -12,8 +12,16 @@ test.use({ viewport: PHONE, signedInAs: 'technician' });
 
 /** A finger on the photo: down, along and up, at fractions of the shown photo. */
 async function stroke(page: Page, drawing: Locator, from: [number, number], to: [number, number]): Promise<void> {
-  await drawing.scrollIntoViewIfNeeded();
-  const box = (await drawing.boundingBox())!;
+  // Mid-screen, clear of the bar at the top and the navigation at the bottom.
+  await drawing.evaluate((el) => el.scrollIntoView({ block: 'center', behavior: 'instant' }));
+  // Measured once the page has stopped moving, so the finger lands where it is aimed.
+  let box = (await drawing.boundingBox())!;
+  await expect.poll(async () => {
+    const now = (await drawing.boundingBox())!;
+    const still = now.y === box.y && now.x === box.x;
+    box = now;
+    return still;
+  }).toBe(true);
   const at = ([fx, fy]: [number, number]) => [box.x + fx * box.width, box.y + fy * box.height] as const;
   await page.mouse.move(...at(from));
   await page.mouse.down();
@@ -160,7 +168,7 @@ test('offline on a phone, two routes drawn over a photographed chase reach the o
     const marked = atDesk.getByRole('article', { name: caption });
     await expect(marked).toContainText('Cable OR-01', { timeout: 20_000 });
     await expect(marked).toContainText('Cable OR-02');
-    await expect.poll(() => marked.getByRole('img', { name: caption }).evaluate((el) => (el as HTMLImageElement).naturalWidth), { timeout: 20_000 }).toBeGreaterThan(0);
+    await expect.poll(() => marked.getByRole('img', { name: caption, exact: true }).evaluate((el) => (el as HTMLImageElement).naturalWidth), { timeout: 20_000 }).toBeGreaterThan(0);
     await desk.page.screenshot({ path: testInfo.outputPath('desk-site-map.png'), fullPage: true });
 
     const job = new OfficeJobPage(desk.page);
