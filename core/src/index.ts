@@ -59,3 +59,4 @@ export * from './cabling/fibre-loss.js';
 export * from './cabling/link-performance.js';
 export * from './cabling/link-test.js';
 export * from './cabling/segregation.js';
+export * from './contracts/link-tests.js';
