@@ -59,6 +59,7 @@ const LINK_WORDS: Record<string, string> = { 'permanent-link': 'Permanent link',
 const MEDIUM_WORDS: Record<string, string> = { coax: 'Coax', speaker: 'Speaker', fibre: 'Fibre', other: 'Other' };
 
 const PERFORMANCE_WORDS: Record<Verdict, string> = { pass: 'Pass', fail: 'Fail', check: 'To check' };
+const RECORD_PERFORMANCE_WORDS: Record<Verdict, string> = { pass: 'within the limits as reported', fail: 'outside the limits', check: 'to check' };
 
 /** The report's title: a certification only when every link has passing results to a named limit set. */
 export function cablingReportTitle(cables: readonly ScheduledCable[]): string {
@@ -160,7 +161,8 @@ export async function cablingReportPdf({ issue, file, cables, rules, coverage }:
         ...(a.missing.length ? [`Still to record: ${a.missing.join(', ')}.`] : []),
         ...a.problems,
         ...a.notes,
-        ...(!certification && c.performance ? [`Performance (${c.performance.against ?? 'no limit set named'}): ${PERFORMANCE_WORDS[c.performance.verdict]}. ${parameterLine(c)}`] : []),
+        // Not "Pass": in a record that certifies nothing, that word would read as a category certification.
+        ...(!certification && c.performance ? [`Performance results (${c.performance.against ?? 'no limit set named'}): ${RECORD_PERFORMANCE_WORDS[c.performance.verdict]}. ${parameterLine(c)}`] : []),
       ];
       return {
         cells: [
