@@ -86,21 +86,24 @@ export class LinkTestsService {
       const labels: string[] = [];
       const now = new Date().toISOString();
       for (const r of rows) {
-        if (!r.row) continue;
-        const found = byLabel.get(r.row.cableLabel.toLowerCase()) ?? [];
+        // Every row's label is looked up, its other cells' problems or not, so that one pass names everything.
+        const label = (parsed.data[r.line - 2]?.cable_label ?? '').trim();
+        if (!label) continue;
+        const found = byLabel.get(label.toLowerCase()) ?? [];
         if (found.length !== 1) {
           problems.push({
             line: r.line,
             column: 'cable_label',
-            message: found.length ? `Two cables on this site are labelled "${r.row.cableLabel}": correct one of the labels first.` : `No cable labelled "${r.row.cableLabel}" on this job’s site.`,
+            message: found.length ? `Two cables on this site are labelled "${label}": correct one of the labels first.` : `No cable labelled "${label}" on this job’s site.`,
           });
           continue;
         }
+        if (!r.row) continue;
         const cable = found[0]!;
         mutations.push(officeMutation('linkTest', uuidv7(), 0, { ...r.row.fields, visitId, siteId: cable.siteId, cableRunId: cable.id, recordedAt: now }));
         labels.push(cable.label);
       }
-      if (problems.length) throw new UnprocessableEntityException(problems.sort((a, b) => a.line - b.line).map(words));
+      if (problems.length) throw new UnprocessableEntityException(problems.sort((a, b) => a.line - b.line || (a.column === 'cable_label' ? -1 : 0) - (b.column === 'cable_label' ? -1 : 0)).map(words));
       await this.apply(em, user, mutations);
       return { imported: mutations.length, cableLabels: labels, visitId };
     });
