@@ -130,7 +130,7 @@ for (const [size, viewport] of [
       await page.getByRole('link', { name: 'Performance results' }).click();
       await expect(page.getByRole('form', { name: 'Performance results of OR-01' })).toBeVisible();
       // Bad input on purpose: the errors must be as readable as the rest.
-      await page.getByRole('region', { name: 'NEXT' }).getByLabel('Margin (dB)').fill('lots');
+      await page.getByRole('region', { name: 'NEXT', exact: true }).getByLabel('Margin (dB)').fill('lots');
       await page.getByRole('button', { name: 'Save new results' }).click();
       await expect(page.getByRole('alert')).toContainText('Not saved');
       await check('performance results');
