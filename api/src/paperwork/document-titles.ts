@@ -1,8 +1,10 @@
 import type { DOCUMENT_KINDS } from '@wiretrail/core';
 
 export const MINOR_WORKS_TITLE = 'Minor works certificate';
-// Wiremap and length are what a cable's record holds; a performance test would be another document.
+// Wiremap and length are what a cable's record holds; only passing performance results to a named limit set on
+// every link make the same kind of document a certification, and then it carries that title.
 export const CABLING_REPORT_TITLE = 'Wiremap and length record';
+export const CABLING_CERTIFICATION_TITLE = 'Cabling certification report';
 export const PHOTO_RECORD_TITLE = 'Photo record';
 export const HIDDEN_ROUTES_TITLE = 'Hidden routes record';
 

@@ -51,6 +51,7 @@ export type DocumentRow = LocalRowOf<'document'>;
 export type ConflictRow = LocalRowOf<'conflict'>;
 export type PriceItemRow = LocalRowOf<'priceItem'>;
 export type MaterialLineRow = LocalRowOf<'materialLine'>;
+export type LinkTestRow = LocalRowOf<'linkTest'>;
 /** Routes drawn over a photo: the photo itself never changes. */
 export type PhotoMarkupRow = LocalRowOf<'photoMarkup'>;
 
@@ -154,7 +155,7 @@ export interface MetaEntry<K extends MetaKey = MetaKey> {
 }
 
 /** Indexed fields only: the rest of each row is stored but not indexed. Tables as first shipped (version 1). */
-const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine' | 'photoMarkup'>, string> = {
+const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine' | 'linkTest' | 'photoMarkup'>, string> = {
   customer: 'id',
   site: 'id, customerId',
   area: 'id, siteId',
@@ -188,6 +189,7 @@ export class WiretrailDb extends Dexie {
   declare conflict: Table<ConflictRow, string>;
   declare priceItem: Table<PriceItemRow, string>;
   declare materialLine: Table<MaterialLineRow, string>;
+  declare linkTest: Table<LinkTestRow, string>;
   declare photoMarkup: Table<PhotoMarkupRow, string>;
   declare outbox: Table<OutboxEntry, number>;
   declare failed: Table<FailedEntry, number>;
@@ -215,8 +217,12 @@ export class WiretrailDb extends Dexie {
       priceItem: 'id, category',
       materialLine: 'id, visitId, siteId',
     });
-    // Routes drawn over photos, found by their photo and by site for the map of hidden routes.
+    // Links' performance results, found by their cable.
     this.version(4).stores({
+      linkTest: 'id, visitId, siteId, cableRunId',
+    });
+    // Routes drawn over photos, found by their photo and by site for the map of hidden routes.
+    this.version(5).stores({
       photoMarkup: 'id, photoId, visitId, siteId',
     });
   }

@@ -19,6 +19,7 @@ import { PeopleAndMemberships1796500100000 } from './1796500100000-PeopleAndMemb
 import { Refunds1796500200000 } from './1796500200000-Refunds.js';
 import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 import { VoidedRecords1796510000000 } from './1796510000000-VoidedRecords.js';
+import { LinkPerformance1796530000000 } from './1796530000000-LinkPerformance.js';
 import { PhotoMarkup1796540000000 } from './1796540000000-PhotoMarkup.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
@@ -44,5 +45,6 @@ export const MIGRATIONS = [
   Refunds1796500200000,
   MailCopies1796500300000,
   VoidedRecords1796510000000,
+  LinkPerformance1796530000000,
   PhotoMarkup1796540000000,
 ];

@@ -109,6 +109,7 @@ export const SYNC_SCHEMAS: { readonly [E in SyncEntityName]: EntitySchema<SyncRe
   conflict: buildSchema('conflict'),
   priceItem: buildSchema('priceItem'),
   materialLine: buildSchema('materialLine'),
+  linkTest: buildSchema('linkTest'),
   photoMarkup: buildSchema('photoMarkup'),
 };
 
