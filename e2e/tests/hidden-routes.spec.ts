@@ -192,7 +192,8 @@ test('offline on a phone, two routes drawn over a photographed chase reach the o
     const counts = await Promise.all(
       pages.map(async (f) => {
         const png = await sharp(join(dir, f)).toBuffer();
-        await testInfo.attach(f, { body: png, contentType: 'image/png' });
+        // Kept beside the run's screenshots, to be looked at.
+        writeFileSync(testInfo.outputPath(`record-${f}`), png);
         // Route 1 is drawn in #d81b60, route 2 in #1565c0 (core's ROUTE_COLOURS).
         return [await pixelsNear(png, '#d81b60'), await pixelsNear(png, '#1565c0')] as const;
       }),

@@ -70,7 +70,7 @@ const dateOf = (p: MapPhoto) => {
  * labelled with its cable or circuit, and a filter to show only what one cable or circuit runs through.
  */
 export function HiddenRoutesMap({ entries, areas, cables, circuits, usePhotoSource, open }: Props) {
-  const [filter, setFilter] = useState('');
+  const [filter, setFilter] = useState('all');
   const used = new Set(entries.flatMap((e) => (e.markup.routes ?? []).map((r) => (r.circuitId ? `circuit:${r.circuitId}` : r.cableRunId ? `cable:${r.cableRunId}` : ''))));
   const choices = tieChoices(cables, circuits).filter((c) => used.has(c.value));
   const picked = tieOf(filter);
@@ -85,7 +85,7 @@ export function HiddenRoutesMap({ entries, areas, cables, circuits, usePhotoSour
   return (
     <Stack spacing={3}>
       <TextField select label="Show" value={filter} onChange={(e) => setFilter(e.target.value)} sx={{ maxWidth: 420 }}>
-        <MenuItem value="">Every cable and circuit</MenuItem>
+        <MenuItem value="all">Every cable and circuit</MenuItem>
         {choices.map((c) => (
           <MenuItem key={c.value} value={c.value}>
             Only {c.label}
