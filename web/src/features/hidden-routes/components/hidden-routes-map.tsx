@@ -16,8 +16,8 @@ import {
 import { type ReactNode, useState } from 'react';
 import { VerdictChip } from '@/components/verdicts/verdict-chip';
 import { photoSizeOf, shapeOf, tieChoices, tieOf } from '../hidden-routes-words';
-import { MarkedPhotoFrame } from './marked-photo-frame';
-import { MarkupOverlay } from './markup-overlay';
+import { MarkedPhotoFrame } from '@/components/photo-markup/marked-photo-frame';
+import { MarkupOverlay } from '@/components/photo-markup/markup-overlay';
 
 export interface MapPhoto {
   id: string;

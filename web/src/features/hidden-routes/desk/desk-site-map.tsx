@@ -13,8 +13,8 @@ import { useObjectUrl } from '@/lib/use-object-url';
 import { usePhotoDisplay } from '../api/get-photo-display';
 import { useSiteHiddenRoutes } from '../api/get-site-hidden-routes';
 import { HiddenRoutesMap, type MapEntry, type MapPhoto } from '../components/hidden-routes-map';
-import { MarkedPhotoFrame } from '../components/marked-photo-frame';
-import { MarkupOverlay } from '../components/markup-overlay';
+import { MarkedPhotoFrame } from '@/components/photo-markup/marked-photo-frame';
+import { MarkupOverlay } from '@/components/photo-markup/markup-overlay';
 import { RouteLegend } from '../components/route-legend';
 import { photoSizeOf, shapeOf } from '../hidden-routes-words';
 
