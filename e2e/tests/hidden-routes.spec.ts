@@ -34,6 +34,8 @@ const tap = (page: Page, drawing: Locator, at: [number, number]) => stroke(page,
 async function chooseOption(page: Page, label: string, option: string): Promise<void> {
   await page.getByRole('combobox', { name: label }).click();
   await page.getByRole('listbox').getByRole('option', { name: option }).click();
+  // The list's backdrop takes taps until the list has gone.
+  await expect(page.getByRole('listbox')).toBeHidden();
 }
 
 /** How many pixels of the image are close to a colour: a drawn route shows as its own colour. */
