@@ -11,7 +11,7 @@ import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { type CoveringLetter, coveringLetter, theWork } from '../paperwork/covering-letter.js';
 import { mailTemplate } from '../mail/mail-template.js';
-import { CABLING_CERTIFICATION_TITLE, CABLING_REPORT_TITLE, HIDDEN_ROUTES_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
+import { CABLING_REPORT_TITLE, documentTitle, HIDDEN_ROUTES_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
 import { takeNextNumber } from '../paperwork/document-numbers.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
 import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
@@ -49,6 +49,7 @@ const KINDS: Record<DocumentKind, { prefix: string; title: string }> = {
 };
 
 export const DOCUMENT_MAIL = 'document';
+
 
 /** The letter that goes with one or several of a job's documents; both parts of the e-mail come from it. */
 const DOCUMENT_LETTER = mailTemplate<CoveringLetter & { papers: string[]; several: boolean; work: string; until: string; url: string }>(`{{#> covering}}
@@ -390,11 +391,10 @@ export class DocumentsService implements OnModuleInit {
 
   private letter(file: JobFile, docs: SyncRecord<'document'>[], dto: SendDocumentDto, url: string, expiresAt: string): { subject: string; text: string; html: string } {
     const org = file.organisation;
-    // A cabling report's title says whether it certifies its links; the row keeps it ahead of the job's title.
-    const papers = docs.map((d) => `${(d.kind === 'cabling-report' && d.title?.startsWith(CABLING_CERTIFICATION_TITLE) ? CABLING_CERTIFICATION_TITLE : KINDS[d.kind].title).toLowerCase()} ${d.number}`);
+    const papers = docs.map((d) => `${documentTitle(d.kind, d.title).toLowerCase()} ${d.number}`);
     const subject =
       docs.length === 1
-        ? `${KINDS[docs[0]!.kind].title} ${docs[0]!.number} from ${org.name}`
+        ? `${documentTitle(docs[0]!.kind, docs[0]!.title)} ${docs[0]!.number} from ${org.name}`
         : `${docs.map((d) => d.number).join(', ')} from ${org.name}`;
     return {
       subject,

@@ -16,7 +16,11 @@ export const DOCUMENT_TITLES: Record<(typeof DOCUMENT_KINDS)[number], string> = 
   'hidden-routes': HIDDEN_ROUTES_TITLE,
 };
 
-/** The title of a stored document row's kind; a kind this version does not know reads as plain "Document". */
-export function documentTitle(kind: unknown): string {
+/**
+ * The title of a stored document row by its kind, and for a cabling report by its own title, which says whether it
+ * certifies its links; a kind this version does not know reads as plain "Document".
+ */
+export function documentTitle(kind: unknown, rowTitle?: string | null): string {
+  if (kind === 'cabling-report' && rowTitle?.startsWith(CABLING_CERTIFICATION_TITLE)) return CABLING_CERTIFICATION_TITLE;
   return Object.entries(DOCUMENT_TITLES).find(([k]) => k === kind)?.[1] ?? 'Document';
 }

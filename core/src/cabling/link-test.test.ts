@@ -3,7 +3,7 @@ import { judgeLinkTest, LINK_TEST_CSV_COLUMNS, LINK_TEST_CSV_HEADER, linkTestCsv
 
 describe('a copper link test as recorded', () => {
   // A worked example: a 90 m Category 6 permanent link whose return loss is 1.2 dB below the limit line (invented
-  // figures); delay 432 ns ≤ 498 ns, skew 18 ns ≤ 44 ns, loop 17.8 Ω ≤ 21 Ω, longest pair 90.4 m > 90 m? no: 89.6 m ≤ 90 m
+  // figures); delay 432 ns ≤ 498 ns, skew 18 ns ≤ 44 ns, loop 17.8 Ω ≤ 21 Ω, longest pair 89.6 m ≤ 90 m
   // (ANSI/TIA-568.2-D permanent link limits, from memory).
   const cat6 = {
     medium: 'copper' as const,
@@ -26,6 +26,11 @@ describe('a copper link test as recorded', () => {
     ]);
     // 90 m permanent link length limit (ANSI/TIA-568.2-D, from memory).
     expect(j.checks.find((c) => c.name === 'pairLength')).toMatchObject({ verdict: 'pass', value: 89.6, limit: 90 });
+  });
+
+  it('judges the longest pair of a channel against 100 m (ANSI/TIA-568.2-D channel, from memory)', () => {
+    const channel = { medium: 'copper' as const, limitSet: 'tia-cat6-channel' as const, pair12LengthM: 99.2, pair36LengthM: 100.6 };
+    expect(judgeLinkTest(channel).checks).toEqual([expect.objectContaining({ name: 'pairLength', verdict: 'fail', value: 100.6, limit: 100 })]);
   });
 
   it('a negative unbalance margin fails, as PoE would find it', () => {

@@ -11,7 +11,7 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import type { GridColDef } from '@mui/x-data-grid';
-import { type JudgedLinkTest, LINK_TEST_CSV_HEADER, linkTestAgainstWords, unvoided } from '@wiretrail/core';
+import { checkWords, type JudgedLinkTest, LINK_TEST_CSV_HEADER, linkTestAgainstWords, parameterWords, unvoided } from '@wiretrail/core';
 import { type ChangeEvent, useRef, useState } from 'react';
 import { RecordGrid } from '@/components/record-grid';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
@@ -90,6 +90,20 @@ export function LinkTestResults({ jobId, siteId, reference }: { jobId: string; s
     { field: 'cableLabel', headerName: 'Cable', width: 100 },
     { field: 'against', headerName: 'Tested to', flex: 1.4, minWidth: 200, valueGetter: (_v, row) => linkTestAgainstWords(row) },
     { field: 'tester', headerName: 'Tester', flex: 1, minWidth: 160, valueGetter: (_v, row) => [row.testerMake, row.testerModel, row.testerSerial && `serial ${row.testerSerial}`].filter(Boolean).join(' ') || '—' },
+    {
+      field: 'parameters',
+      headerName: 'Worst margins and values',
+      flex: 2,
+      minWidth: 240,
+      sortable: false,
+      // Every reported parameter, as the report prints it: fails first, so the reason a link fails is read at once.
+      valueGetter: (_v, row) =>
+        [...row.judgement.checks]
+          .sort((a, b) => Number(b.verdict === 'fail') - Number(a.verdict === 'fail'))
+          .map((c) => `${'budget' in c ? c.name : parameterWords(c.name)} ${checkWords(c)}${c.verdict === 'fail' ? ' (fail)' : ''}`)
+          .concat(row.judgement.inspections.map((c) => `${c.name}: ${c.note}`))
+          .join('; ') || 'No results reported',
+    },
     { field: 'testedAt', headerName: 'Tested', width: 110, valueGetter: (_v, row) => (row.testedAt ? testedDay(row.testedAt) : '—') },
     {
       field: 'verdict',
