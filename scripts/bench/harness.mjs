@@ -14,8 +14,11 @@ export function ensureBuilt() {
   }
 }
 
-/** Starts the built API (serving the built web app) on a fresh SQLite file with the demo data. */
-export async function startApi({ port }) {
+/**
+ * Starts the built API (serving the built web app) on a fresh SQLite file with the demo data; `database` points it
+ * at another (DB_TYPE and DATABASE_URL), and `prepare` runs on the migrated, seeded database before it starts.
+ */
+export async function startApi({ port, database = {}, prepare }) {
   const dir = mkdtempSync(join(tmpdir(), 'wiretrail-bench-'));
   const env = {
     ...process.env,
@@ -26,11 +29,13 @@ export async function startApi({ port }) {
     JWT_SECRET: 'bench-secret-long-enough-for-signing-tokens-here',
     SIGN_IN_RATE_LIMIT: '100000',
     WEB_DIST: join(root, 'web/dist'),
+    ...database,
   };
   for (const script of ['api/dist/database/migrate-cli.js', 'api/dist/database/seed-cli.js']) {
     const r = spawnSync(process.execPath, [script], { cwd: root, env, encoding: 'utf8' });
     if (r.status !== 0) throw new Error(r.stderr);
   }
+  const prepared = prepare ? await prepare(env) : undefined;
   // BENCH_API_NODE_ARGS='--cpu-prof --cpu-prof-dir=data/prof' profiles the API while a benchmark runs.
   const nodeArgs = (process.env.BENCH_API_NODE_ARGS ?? '').split(' ').filter(Boolean);
   const child = spawn(process.execPath, [...nodeArgs, 'api/dist/main.js'], { cwd: root, env, stdio: 'ignore' });
@@ -45,6 +50,8 @@ export async function startApi({ port }) {
   }
   return {
     base,
+    env,
+    prepared,
     pid: child.pid,
     databasePath: env.DATABASE_PATH,
     /** Peak resident memory of the API process so far (VmHWM), in MB. */
