@@ -1,6 +1,6 @@
 // Shared by the benchmarks: a real API process on a throwaway database, timing, and the results table.
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, openSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { root } from '../lib.mjs';
@@ -38,7 +38,9 @@ export async function startApi({ port, database = {}, prepare }) {
   const prepared = prepare ? await prepare(env) : undefined;
   // BENCH_API_NODE_ARGS='--cpu-prof --cpu-prof-dir=data/prof' profiles the API while a benchmark runs.
   const nodeArgs = (process.env.BENCH_API_NODE_ARGS ?? '').split(' ').filter(Boolean);
-  const child = spawn(process.execPath, [...nodeArgs, 'api/dist/main.js'], { cwd: root, env, stdio: 'ignore' });
+  // BENCH_API_LOG=<file> keeps what the API prints, to see why a benchmark's requests failed.
+  const output = process.env.BENCH_API_LOG ? openSync(process.env.BENCH_API_LOG, 'a') : 'ignore';
+  const child = spawn(process.execPath, [...nodeArgs, 'api/dist/main.js'], { cwd: root, env, stdio: ['ignore', output, output] });
   const base = `http://127.0.0.1:${port}`;
   for (let i = 0; i < 200; i++) {
     try {

@@ -4,7 +4,9 @@ import { ChangeLogCompaction } from './change-log-compaction.js';
 
 /** The schedule only: what a run removes is tested on both databases in test/change-log-compaction.e2e-spec.ts. */
 describe('ChangeLogCompaction schedule', () => {
-  afterEach(() => jest.useRealTimers());
+  afterEach(() => {
+    jest.useRealTimers();
+  });
 
   const scheduled = (compactionIntervalMinutes: number) => {
     const compaction = new ChangeLogCompaction({} as WriteQueue, { retentionDays: 90, compactionIntervalMinutes });
