@@ -41,6 +41,10 @@ export async function startApi({ port, database = {}, prepare }) {
   // BENCH_API_LOG=<file> keeps what the API prints, to see why a benchmark's requests failed.
   const output = process.env.BENCH_API_LOG ? openSync(process.env.BENCH_API_LOG, 'a') : 'ignore';
   const child = spawn(process.execPath, [...nodeArgs, 'api/dist/main.js'], { cwd: root, env, stdio: ['ignore', output, output] });
+  let stopping = false;
+  child.once('exit', (code, signal) => {
+    if (!stopping) console.error(`The API process ended during the benchmark (exit ${code ?? signal}).`);
+  });
   const base = `http://127.0.0.1:${port}`;
   for (let i = 0; i < 200; i++) {
     try {
@@ -63,6 +67,8 @@ export async function startApi({ port, database = {}, prepare }) {
       return kb / 1024;
     },
     async stop() {
+      stopping = true;
+      if (child.exitCode !== null || child.signalCode !== null) return rmSync(dir, { recursive: true, force: true });
       child.kill('SIGTERM');
       await new Promise((r) => child.once('exit', r));
       rmSync(dir, { recursive: true, force: true });

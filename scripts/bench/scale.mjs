@@ -3,13 +3,27 @@
 // driver alone, in the bench process, with no HTTP, no Nest and no checks. BENCH_SCALE sizes the data (1 is the full
 // five years; 0.1 by default, which generates in well under a minute on 2 cores).
 import { spawnSync } from 'node:child_process';
+import { createHash, randomUUID } from 'node:crypto';
+import sharp from 'sharp';
 import autocannon from 'autocannon';
 import { root } from '../lib.mjs';
 import { canStartPostgres, startPostgres } from '../postgres.mjs';
 import { median, SAMPLES, signIn, startApi, timed } from './harness.mjs';
+import { numbered, uploadOne } from './photos.mjs';
 
 const SCALE = Number(process.env.BENCH_SCALE ?? 0.1);
 const p95 = (values) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.ceil(values.length * 0.95) - 1)];
+
+/** A photo-like JPEG (blurred noise, as the photos benchmark makes): a phone's picture after its shrink. */
+async function photoLike(width, height) {
+  const raw = Buffer.alloc(width * height * 3);
+  let x = 7;
+  for (let i = 0; i < raw.length; i++) {
+    x = (x * 1103515245 + 12345) >>> 0;
+    raw[i] = (x >>> 24) & 0x7f;
+  }
+  return sharp(raw, { raw: { width, height, channels: 3 } }).blur(1.2).jpeg({ quality: 88 }).toBuffer();
+}
 
 /** The database read directly, for the floors and the query plans: `?` marks on both. */
 async function rawClient(env) {
@@ -193,10 +207,10 @@ async function onDatabase(label, database, port) {
       for (const [k, [sql, params]] of Object.entries(plansOf)) plans[k] = await raw.plan(sql, params);
       row(`${name}, median of ${SAMPLES}`, median(measured), median(floors));
     };
-    const openConflicts = `SELECT * FROM "conflict" WHERE "organisationId" = ? AND "resolvedAt" IS NULL AND "deletedAt" IS NULL ORDER BY "createdAt" DESC LIMIT 50`;
+    const openConflicts = `SELECT * FROM "conflict" WHERE "organisationId" = ? AND "resolvedAt" IS NULL AND "deletedAt" IS NULL ORDER BY "version" DESC LIMIT 50`;
     await simple('conflicts inbox, first page', () => getJson(api.base, office.accessToken, '/conflicts?page=1&pageSize=50'), () => raw.query(openConflicts, [org]), { 'conflicts inbox': [openConflicts, [org]] });
     const owed = `SELECT * FROM "invoice" WHERE "organisationId" = ? AND "kind" = 'invoice' AND "status" = 'issued'`;
-    await simple(`aged debt over ${data.counts ? Math.round(20_000 * SCALE).toLocaleString('en-GB') : ''} invoices`, () => getJson(api.base, office.accessToken, '/invoices/aged-debt'), async () => {
+    await simple(`aged debt over ${Math.round(20_000 * SCALE).toLocaleString('en-GB')} invoices`, () => getJson(api.base, office.accessToken, '/invoices/aged-debt'), async () => {
       const invoices = await raw.query(owed, [org]);
       await raw.query(`SELECT * FROM "payment" WHERE "organisationId" = ?`, [org]);
       return invoices;
@@ -220,6 +234,29 @@ async function onDatabase(label, database, port) {
       for (const t of ['area', 'board', 'circuit']) await raw.query(`SELECT * FROM "${t}" WHERE "siteId" = ? AND "deletedAt" IS NULL`, [site]);
       return raw.query(siteRuns, [site, org]);
     }, { 'site page: the cable schedule': [siteRuns, [site, org]] });
+
+    // A photo record of 50 photos on one of tech1's jobs: small real images sent over tus as the phone sends them,
+    // their rows pushed by the phone, then issued by the office. Once: a job's photo record is issued once.
+    const visit = scopeRows.find((c) => c.entity === 'visit' && c.row?.status === 'planned')?.row;
+    const photoDevice = `scalephotos${label.toLowerCase()}`;
+    const base = await photoLike(1600, 1200);
+    const mutations = [];
+    for (let i = 0; i < 50; i++) {
+      const bytes = numbered(base, i);
+      await uploadOne(api.base, tech.accessToken, bytes);
+      mutations.push({
+        mutationId: randomUUID(), entity: 'photo', id: randomUUID(), baseVersion: 0,
+        set: { visitId: visit.id, siteId: visit.siteId, caption: `Containment run ${i + 1}`, sha256: createHash('sha256').update(bytes).digest('hex'), sizeBytes: bytes.length, width: 1600, height: 1200, takenAt: new Date().toISOString() },
+        hlc: `${new Date().toISOString()}-${i.toString(16).padStart(4, '0')}-${photoDevice}`,
+      });
+    }
+    const pushed = await fetch(`${api.base}/api/sync/push`, { method: 'POST', headers: { authorization: `Bearer ${tech.accessToken}`, 'content-type': 'application/json' }, body: JSON.stringify({ deviceId: photoDevice, mutations }) });
+    if (!pushed.ok) throw new Error(`the photo rows were refused: ${pushed.status}`);
+    const issue = await timed(async () => {
+      const res = await fetch(`${api.base}/api/jobs/${visit.jobId}/documents`, { method: 'POST', headers: { authorization: `Bearer ${office.accessToken}`, 'content-type': 'application/json' }, body: JSON.stringify({ kind: 'photo-record' }) });
+      if (!res.ok) throw new Error(`issuing the photo record answered ${res.status}: ${await res.text()}`);
+    });
+    out.push({ name: `scale (${label}): issuing a photo record of 50 photos (1600 × 1200), once`, measuredMs: issue.ms, display: `${issue.ms.toFixed(0)} ms`, targetDisplay: '< 3 s', ok: issue.ms < 3000 });
 
     // Memory under 100 connections on this data: the jobs table, the conflicts inbox and a technician's pull, mixed.
     const d = devices[0];
@@ -245,7 +282,7 @@ async function onDatabase(label, database, port) {
   }
 }
 
-export async function benchScale({ port = 3606 } = {}) {
+export async function benchScale({ port = Number(process.env.BENCH_SCALE_PORT ?? 3606) } = {}) {
   process.stdout.write(`  scale ${SCALE} of the full five years (BENCH_SCALE)\n`);
   const results = await onDatabase('SQLite', {}, port);
   if (!canStartPostgres()) return [...results, { name: 'scale (PostgreSQL)', measuredMs: 0, display: 'not run: no PostgreSQL server programs here' }];
