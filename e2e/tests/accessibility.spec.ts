@@ -123,6 +123,17 @@ for (const [size, viewport] of [
       await page.getByRole('link', { name: /Record a cable/ }).click();
       await expect(visitPage.cableForm).toBeVisible();
       await check('cable form');
+      await page.goBack();
+      await page.getByRole('list', { name: 'Cable runs' }).getByRole('link', { name: /^OR-01/ }).click();
+      await expect(page.getByRole('region', { name: 'Before tracing' })).toBeVisible();
+      await check('cable with its trace log and tracing cautions');
+      await page.getByRole('link', { name: 'Performance results' }).click();
+      await expect(page.getByRole('form', { name: 'Performance results of OR-01' })).toBeVisible();
+      // Bad input on purpose: the errors must be as readable as the rest.
+      await page.getByRole('region', { name: 'NEXT', exact: true }).getByLabel('Margin (dB)').fill('lots');
+      await page.getByRole('button', { name: 'Save new results' }).click();
+      await expect(page.getByRole('alert')).toContainText('Not saved');
+      await check('performance results');
 
       await page.getByRole('link', { name: 'Sync', exact: true }).first().click();
       await check('sync');
@@ -176,6 +187,11 @@ for (const [size, viewport] of [
         await officeJob.tab(tab);
         await expectNoAxeViolations(page, testInfo, `job ${tab}`);
       }
+      await officeJob.tab('Cable schedule');
+      await page.getByRole('button', { name: 'Record results' }).click();
+      await expect(page.getByRole('dialog', { name: 'Record a link’s results' })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'record a link’s results');
+      await page.getByRole('dialog').getByRole('button', { name: 'Cancel' }).click();
       // A signed visit's own page: LED-0033's, with its sign-off, signature, notes and parts.
       await page.goto('/jobs?search=LED-0033');
       await page.getByRole('link', { name: /Extra double socket in the front bedroom/ }).first().click();
