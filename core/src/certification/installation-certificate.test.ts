@@ -10,6 +10,7 @@ import {
   type InstallationParticulars,
   judgeInstallationCertificate,
   particularsProblems,
+  readParticulars,
   scheduleMaxZs,
 } from './installation-certificate.js';
 import { judgeMinorWorks } from './minor-works.js';
@@ -149,5 +150,15 @@ describe('judgeInstallationCertificate', () => {
       'origin.electrodeOhm: a TT installation needs its earth electrode’s resistance to earth.',
     ]);
     expect(judgeInstallationCertificate(records, tt).problems).toHaveLength(4);
+  });
+});
+
+describe('readParticulars', () => {
+  it('keeps what the certificate has, and counts a figure sent as text as not given', () => {
+    const p = particulars();
+    expect(readParticulars(JSON.parse(JSON.stringify({ ...p, extra: 'dropped' })))).toEqual({ particulars: p, problems: [] });
+    const sent = { ...p, supply: { ...p.supply, zeOhm: '0.24' } };
+    expect(readParticulars(sent).problems).toEqual(['supply.zeOhm: give Ze as measured or enquired, in Ω.']);
+    expect(readParticulars('nothing').particulars).toBeNull();
   });
 });

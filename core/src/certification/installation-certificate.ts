@@ -199,8 +199,11 @@ export const WORK_EXTENT_WORDS: Record<WorkExtent, string> = {
 export const LIVE_CONDUCTORS = ['single-phase 2-wire', 'two-phase 3-wire', 'three-phase 3-wire', 'three-phase 4-wire'] as const;
 export type LiveConductors = (typeof LIVE_CONDUCTORS)[number];
 
-/** What the phone does not record and the office gives at issue: the work's extent, who answers for it, the supply and the origin. */
-export interface InstallationParticulars {
+/**
+ * What the phone does not record and the office gives at issue: the work's extent, who answers for it, the supply and
+ * the origin. A type, not an interface, so that it is a plain JSON value the document row may keep.
+ */
+export type InstallationParticulars = {
   extent: WorkExtent;
   /** The extent of the work covered, in words. */
   extentWords: string;
@@ -237,7 +240,7 @@ export interface InstallationParticulars {
     electrodeType: string;
     electrodeOhm: number | null;
   };
-}
+};
 
 /**
  * Particulars as the office would start from: the site's earthing, Ze and PFC as last recorded on site, the signer as
@@ -331,13 +334,13 @@ export function particularsProblems(p: InstallationParticulars): string[] {
 
 // ─── The judgment ────────────────────────────────────────────────────────────
 
-export interface ScheduledCircuit<Test extends TestResultRecord = TestResultRecord, Circuit extends CircuitRecord = CircuitRecord> {
+export interface ScheduledCircuit<Visit extends VisitRecord = VisitRecord, Test extends TestResultRecord = TestResultRecord, Circuit extends CircuitRecord = CircuitRecord> {
   readonly circuit: Circuit;
   readonly board: BoardRecord;
   /** Installed new on the visits judged (the rest of the board is existing). */
   readonly isNew: boolean;
   /** The latest test on the visits judged, and its assessment; null where untested. */
-  readonly tested: CertifiedCircuit<VisitRecord, Test, Circuit> | null;
+  readonly tested: CertifiedCircuit<Visit, Test, Circuit> | null;
   readonly maxZs: ReturnType<typeof scheduleMaxZs>;
 }
 
@@ -346,7 +349,7 @@ export interface InstallationJudgement<Visit extends VisitRecord = VisitRecord, 
   readonly choice: CertificateChoice;
   /** The boards with a new circuit or replaced on the visits judged. */
   readonly boards: BoardRecord[];
-  readonly schedule: ScheduledCircuit<Test, Circuit>[];
+  readonly schedule: ScheduledCircuit<Visit, Test, Circuit>[];
   readonly inspections: InspectionMarks;
   /** The instruments the scheduled circuits were tested with. */
   readonly instruments: string[];
@@ -395,7 +398,7 @@ export function judgeInstallationCertificate<V extends VisitRecord, T extends Te
   ]);
   const boards = records.boards.filter((b) => concerned.has(b.id)).sort((a, b) => textOf(a.name).localeCompare(textOf(b.name), 'en-GB'));
   const tested = new Map(base.circuits.map((c) => [c.circuit.id, c]));
-  const schedule: ScheduledCircuit<T, C>[] = [];
+  const schedule: ScheduledCircuit<V, T, C>[] = [];
   for (const board of boards) {
     const ofBoard = records.circuits
       .filter((c) => c.boardId === board.id)
@@ -428,4 +431,66 @@ export function judgeInstallationCertificate<V extends VisitRecord, T extends Te
   const problems = findings.map((f) => f.sentence);
   if (findings.some((f) => f.kind === 'missing' || f.kind === 'unjudged' || f.kind === 'fail')) problems.push(READINGS_ADVICE);
   return { ...base, findings, problems, issuable: problems.length === 0, choice, boards, schedule, inspections, instruments };
+}
+
+/**
+ * Particulars as they arrive over the wire, kept to the fields the certificate has and their kinds (a figure that is
+ * not a number counts as not given), then checked: `particulars` is null when the value is not an object at all.
+ */
+export function readParticulars(value: unknown): { particulars: InstallationParticulars | null; problems: string[] } {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return { particulars: null, problems: ['particulars: give the certificate’s particulars (supply, origin and who answers for the work).'] };
+  const v = value as Record<string, unknown>;
+  const part = (key: string): Record<string, unknown> => (typeof v[key] === 'object' && v[key] !== null && !Array.isArray(v[key]) ? (v[key] as Record<string, unknown>) : {});
+  const words = (o: Record<string, unknown>, key: string, max = 200) => (typeof o[key] === 'string' ? (o[key] as string).trim().slice(0, max) : '');
+  const figure = (o: Record<string, unknown>, key: string) => (typeof o[key] === 'number' && Number.isFinite(o[key]) ? (o[key] as number) : null);
+  const s = part('supply');
+  const o = part('origin');
+  const particulars: InstallationParticulars = {
+    extent: WORK_EXTENTS.find((e) => e === v.extent) ?? ('' as WorkExtent),
+    extentWords: words(v, 'extentWords', 2000),
+    designedBy: words(v, 'designedBy'),
+    constructedBy: words(v, 'constructedBy'),
+    inspectedBy: words(v, 'inspectedBy'),
+    nextInspectionYears: figure(v, 'nextInspectionYears') ?? 0,
+    existingInstallationComments: words(v, 'existingInstallationComments', 20_000),
+    supply: {
+      system: EARTHING_ARRANGEMENTS.find((e) => e === s.system) ?? ('' as InstallationParticulars['supply']['system']),
+      liveConductors: LIVE_CONDUCTORS.find((e) => e === s.liveConductors) ?? ('' as LiveConductors),
+      nominalVoltageV: figure(s, 'nominalVoltageV') ?? 0,
+      frequencyHz: figure(s, 'frequencyHz') ?? 0,
+      pfcKa: figure(s, 'pfcKa'),
+      zeOhm: figure(s, 'zeOhm'),
+      deviceStandard: words(s, 'deviceStandard', 40),
+      deviceType: words(s, 'deviceType', 60),
+      deviceRatingA: figure(s, 'deviceRatingA'),
+    },
+    origin: {
+      mainSwitchStandard: words(o, 'mainSwitchStandard', 40),
+      mainSwitchRatingA: figure(o, 'mainSwitchRatingA'),
+      mainSwitchPoles: figure(o, 'mainSwitchPoles'),
+      mainSwitchRcdMa: figure(o, 'mainSwitchRcdMa'),
+      earthingConductorCsaMm2: figure(o, 'earthingConductorCsaMm2'),
+      earthingConductorContinuity: o.earthingConductorContinuity === true,
+      bondingCsaMm2: figure(o, 'bondingCsaMm2'),
+      bondingContinuity: o.bondingContinuity === true,
+      electrodeType: words(o, 'electrodeType', 60),
+      electrodeOhm: figure(o, 'electrodeOhm'),
+    },
+  };
+  return { particulars, problems: particularsProblems(particulars) };
+}
+
+/**
+ * What those who answer for the design, the construction and the inspection and testing of new work declare (the
+ * information of the model form's declarations, BS 7671:2018+A2:2022 Appendix 6, in our words), for the edition in
+ * force on the completion date. One person may sign for all three.
+ */
+export function installationDeclaration(edition: string, completedOn: string): string {
+  const family = edition.split('+')[0]!.split(':')[0]!.trim();
+  const inForce = completedOn ? `${edition}, in force on ${completedOn}` : edition;
+  return (
+    'Those signing below, for the design, the construction, and the inspection and testing of the installation work described on this certificate, ' +
+    `certify that they exercised reasonable skill and care in it; that it was designed, constructed, inspected and tested in accordance with ${inForce}; ` +
+    `and that, to the best of their knowledge and belief, it complies with ${family} except for the departures recorded on this certificate.`
+  );
 }

@@ -19,6 +19,7 @@ import { PeopleAndMemberships1796500100000 } from './1796500100000-PeopleAndMemb
 import { Refunds1796500200000 } from './1796500200000-Refunds.js';
 import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 import { VoidedRecords1796510000000 } from './1796510000000-VoidedRecords.js';
+import { InstallationCertificate1796520000000 } from './1796520000000-InstallationCertificate.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -43,4 +44,5 @@ export const MIGRATIONS = [
   Refunds1796500200000,
   MailCopies1796500300000,
   VoidedRecords1796510000000,
+  InstallationCertificate1796520000000,
 ];

@@ -13,6 +13,7 @@ import { PostgresPeopleAndMemberships1796500100001 } from './1796500100001-Postg
 import { PostgresRefunds1796500200001 } from './1796500200001-PostgresRefunds.js';
 import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCopies.js';
 import { PostgresVoidedRecords1796510000001 } from './1796510000001-PostgresVoidedRecords.js';
+import { PostgresInstallationCertificate1796520000001 } from './1796520000001-PostgresInstallationCertificate.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -31,4 +32,5 @@ export const POSTGRES_MIGRATIONS = [
   PostgresRefunds1796500200001,
   PostgresMailCopies1796500300001,
   PostgresVoidedRecords1796510000001,
+  PostgresInstallationCertificate1796520000001,
 ];
