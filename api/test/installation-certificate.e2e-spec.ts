@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import { INSPECTION_ITEMS, type InstallationCertificatePreview } from '@wiretrail/core';
+import { INSPECTION_ITEMS, type InspectionMarks, type InstallationCertificatePreview } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
 import { CIRCUIT_DETAIL_COLUMNS, TEST_RESULT_COLUMNS } from '../src/documents/pdf/installation-certificate-pdf.js';
 import { bearer, downloadPdf, jobByReference, pdfText } from './document-helpers.js';
@@ -7,7 +7,7 @@ import { DeviceMirror, mutation, push, type Session } from './sync-helpers.js';
 import { createTestApp, signIn, type TestApp } from './test-app.js';
 
 const SIGNATURE = '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 300 100"><path d="M10 80 L 290 40" fill="none" stroke="#111" stroke-width="3"/></svg>';
-const ALL_DONE = Object.fromEntries(INSPECTION_ITEMS.map((i) => [i.id, { state: 'done' }]));
+const ALL_DONE: InspectionMarks = Object.fromEntries(INSPECTION_ITEMS.map((i) => [i.id, { state: 'done' as const }]));
 // Readings that pass on the Orchard Rise board (TN-C-S, B-type breakers, 30 mA RCDs):
 // insulation 299 MΩ at 500 V against 1.0 MΩ (BS 7671:2018+A2:2022 Table 64); RCD 20 ms against 300 ms (Reg 643.8);
 // Zs against 80 % of Table 41.3 (Appendix 3, trade practice): B32 1.37 → 1.10 Ω, B20 2.19 → 1.75 Ω, B6 7.28 → 5.82 Ω;
@@ -29,7 +29,7 @@ describe('installation certificate', () => {
   let orchard: { siteId: string; customerId: string };
 
   /** A job at Orchard Rise whose visit the technician recorded and signed; `readings` by circuit number, `newCircuit` added on the visit. */
-  async function signedJob(reference: string, o: { newCircuit: boolean; zsOfNew?: number; marks?: Record<string, unknown> }): Promise<{ jobId: string; visitId: string; device: string }> {
+  async function signedJob(reference: string, o: { newCircuit: boolean; zsOfNew?: number; marks?: InspectionMarks }): Promise<{ jobId: string; visitId: string; device: string }> {
     const job = (await t.http.post('/api/jobs').set(bearer(office)).send({ siteId: orchard.siteId, customerId: orchard.customerId, reference, title: `Work for ${reference}`, status: 'on-site' }).expect(201)).body;
     const visitId = (await t.http.post('/api/visits').set(bearer(office)).send({ jobId: job.id, siteId: orchard.siteId, technicianIds: [tech1.user.id], plannedStart: new Date().toISOString(), status: 'on-site' }).expect(201)).body.id;
     const device = `tech1-${reference}`;

@@ -139,6 +139,14 @@ describe('judgeInstallationCertificate', () => {
     );
   });
 
+  it('judges a visit not yet signed when the phone asks before signing, as the server will once it is', () => {
+    const unsigned = { ...records, visits: [{ ...SIGNED, status: 'on-site', signedAt: null, signatureSvg: null }] };
+    expect(judgeInstallationCertificate(unsigned, null).findings.map((f) => f.kind)).toEqual(['not-signed']);
+    const before = judgeInstallationCertificate(unsigned, null, undefined, { beforeSigning: true });
+    expect(before.problems).toEqual([]);
+    expect(before.schedule).toHaveLength(2);
+  });
+
   it('checks the particulars the office gives, naming each field', () => {
     const p = particulars();
     expect(particularsProblems(p)).toEqual([]);

@@ -12,7 +12,7 @@ import { maxZs } from '../electrical/earth-fault-loop.js';
 import { maxZsForRcd } from '../electrical/rcd.js';
 import type { DisconnectionTimeS, ProtectiveDevice, RuleSet } from '../rules/rule-set.js';
 import { EARTHING_ARRANGEMENTS, INSPECTION_MARK_STATES, type InspectionMark, type InspectionMarks } from '../sync/entities.js';
-import { type CertifiedCircuit, judgeMinorWorks, READINGS_ADVICE, type MinorWorksFinding, type MinorWorksJudgement, type MinorWorksRecords } from './minor-works.js';
+import { type CertifiedCircuit, judgeCircuitWork, judgeMinorWorks, READINGS_ADVICE, type MinorWorksFinding, type MinorWorksJudgement, type MinorWorksRecords } from './minor-works.js';
 import { circuitName, type LooseRowOf, type TestResultRecord, textOf } from './circuit-records.js';
 
 type VisitRecord = LooseRowOf<'visit'>;
@@ -378,8 +378,10 @@ export function judgeInstallationCertificate<V extends VisitRecord, T extends Te
   records: MinorWorksRecords<V, T, C> & { readonly boards: readonly BoardRecord[] },
   particulars: InstallationParticulars | null,
   rules?: RuleSet,
+  /** The phone's sign-off judges its own visit before it is signed; the server only ever judges signed visits. */
+  o: { readonly beforeSigning?: boolean } = {},
 ): InstallationJudgement<V, T, C> {
-  const base = judgeMinorWorks(records, rules);
+  const base = o.beforeSigning ? judgeCircuitWork(records, rules) : judgeMinorWorks(records, rules);
   const visitIds = base.visits.map((v) => v.id);
   const choice = certificateThatApplies({ visitIds, circuits: records.circuits, boards: records.boards });
   const empty = { choice, boards: [], schedule: [], inspections: {}, instruments: [] };
