@@ -4,6 +4,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { PartsUsed } from '@/features/parts/components/parts-used';
 import { useSignOff } from '@/features/sign-off/data/get-sign-off';
+import { InspectionSchedule } from '@/features/sign-off/components/inspection-schedule';
 import { InstallationChecks } from '@/features/sign-off/components/installation-checks';
 import { SignOffForm } from '@/features/sign-off/components/sign-off-form';
 import { SignOffSummaryView } from '@/features/sign-off/components/sign-off-summary';
@@ -26,6 +27,7 @@ export function Component() {
         boards={signOff.boards}
         locked={locked}
       />
+      {signOff.choice.kind === 'installation-certificate' && <InspectionSchedule visit={visit} locked={locked} />}
       {locked ? (
         <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-label="Signed">
           <Stack spacing={1}>
