@@ -28,7 +28,7 @@ import { takeNextNumber } from '../paperwork/document-numbers.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
 import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import { fingerprint, issuedPdfAttachment } from '../paperwork/issued-pdf.js';
-import { type JobFile, loadJobFile } from '../paperwork/job-file.js';
+import { type JobFile, jobVisits, loadJobFile } from '../paperwork/job-file.js';
 import { isLatestMessage, mailState } from '../paperwork/mail-state.js';
 import { dateWords } from '../paperwork/pdf/document-words.js';
 import type { Issue } from '../paperwork/pdf/job-heading.js';
@@ -315,7 +315,8 @@ export class DocumentsService implements OnModuleInit {
     return this.queue.read(async (em) => {
       const file = await loadJobFile(em, user.organisationId, jobId);
       const content = await loadInstallationCertificate(em, file, null);
-      const visitIds = content.visits.map((v) => v.id);
+      // What the work needs follows from what was recorded on any of the job's visits, signed or not yet.
+      const visitIds = (await jobVisits(em, file)).map((v) => v.id);
       const circuits = await syncRepository(em, 'circuit').find({ where: { siteId: file.site.id, organisationId: user.organisationId, deletedAt: IsNull() } });
       const boards = await syncRepository(em, 'board').find({ where: { siteId: file.site.id, organisationId: user.organisationId, deletedAt: IsNull() } });
       const choice = certificateThatApplies({ visitIds, circuits, boards });

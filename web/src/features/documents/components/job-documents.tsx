@@ -238,6 +238,11 @@ export function JobDocuments({ jobId }: { jobId: string }) {
           )}
         </DialogContent>
         <DialogActions sx={{ px: 3, pb: 2 }}>
+          {confirming === 'installation-certificate' && showProblems && particulars && particularsProblems(particulars).length > 0 && (
+            <Typography role="status" color="error" variant="body2" sx={{ mr: 'auto' }}>
+              {particularsProblems(particulars).length === 1 ? '1 particular to complete, marked above.' : `${particularsProblems(particulars).length} particulars to complete, marked above.`}
+            </Typography>
+          )}
           <Button onClick={() => setConfirming(null)}>Cancel</Button>
           <Button variant="contained" onClick={() => confirming && start(confirming)}>
             Issue
