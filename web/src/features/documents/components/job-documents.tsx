@@ -176,7 +176,7 @@ export function JobDocuments({ jobId }: { jobId: string }) {
                     )}
                     {d.signerName && (
                       <Typography variant="body2" color="text.secondary">
-                        {d.kind === 'minor-works' ? `Signed by ${d.signerName}` : `Issued by ${d.signerName}`}
+                        {d.kind === 'minor-works' || d.kind === 'installation-certificate' ? `Signed by ${d.signerName}` : `Issued by ${d.signerName}`}
                       </Typography>
                     )}
                   </TableCell>
