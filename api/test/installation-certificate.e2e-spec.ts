@@ -118,6 +118,10 @@ describe('installation certificate', () => {
     // The signed certificate never changes: its circuit is held, and a second one takes the next number.
     const again = await t.http.post(`/api/jobs/${jobId}/documents`).set(bearer(office)).send({ kind: 'installation-certificate', particulars: seen.defaults }).expect(201);
     expect(again.body.number).toBe('EIC-0002');
+    // A revision keeps the particulars the office gave, and names the one it supersedes.
+    const revised = await t.http.post(`/api/documents/${again.body.id}/revisions`).set(bearer(office)).send({ reason: 'Main switch rating corrected.' }).expect(201);
+    expect(revised.body).toMatchObject({ number: 'EIC-0003', supersedesId: again.body.id, particulars: { supply: { system: 'TN-C-S', zeOhm: 0.28 } } });
+    expect(await pdfText((await downloadPdf(t, office, revised.body.id)).bytes)).toContain('Main switch rating corrected.');
   });
 
   it('refuses the installation certificate on a plain alteration, with the reason, and an inspection left unmarked', async () => {
