@@ -95,7 +95,9 @@ describe('notifiable work', () => {
     expect(res.body.items.length).toBeGreaterThan(0);
     for (const item of res.body.items) expect(item.verdict).toMatchObject({ covered: false, notifiable: null, dueBy: null, note: expect.stringContaining('check locally') });
     await t.http.patch(`/api/organisations/${admin.user.organisationId}`).set(bearer(admin)).send({ nation: 'wales-ish' }).expect(400);
-    await t.http.patch(`/api/organisations/${admin.user.organisationId}`).set(bearer(admin)).send({ nation: 'england' }).expect(200);
+    // An admin who leaves the scheme clears it.
+    await t.http.patch(`/api/organisations/${admin.user.organisationId}`).set(bearer(admin)).send({ nation: 'england', competentPersonScheme: null }).expect(200);
+    expect((await t.http.get('/api/notifiable-work').set(bearer(office)).expect(200)).body).toMatchObject({ nation: 'england', scheme: null });
   });
 
   it('is the office’s: technicians are refused, and another organisation sees none of it', async () => {

@@ -95,6 +95,24 @@ describe('customer share links', () => {
     await shared(token, `/photos/${orchardPhoto!.id}/original`).expect(404);
   });
 
+  it('stops showing a photo voided on site, even to someone who kept its address', async () => {
+    const token = tokenOf((await make(orchard.id).expect(201)).body.url);
+    const view = (await shared(token).expect(200)).body;
+    const photo = view.photos[1] as { id: string; thumbUrl: string; displayUrl: string };
+    await t.http.get(photo.thumbUrl).expect(200);
+    // As the row stands once the phone's void has synced.
+    const setVoid = (voidedAt: string | null, voidReason: string | null) =>
+      t.dataSource.createQueryBuilder().update('photo').set({ voidedAt, voidReason }).where('id = :id', { id: photo.id }).execute();
+    await setVoid(new Date().toISOString(), 'Wrong board photographed');
+    try {
+      const after = (await shared(token).expect(200)).body;
+      expect(after.photos.map((p: { id: string }) => p.id)).not.toContain(photo.id);
+      for (const url of [photo.thumbUrl, photo.displayUrl]) expectErrorBody((await t.http.get(url).expect(404)).body, 404);
+    } finally {
+      await setVoid(null, null);
+    }
+  });
+
   it('stops working when revoked or expired, and says only that', async () => {
     const revoked = (await make(orchard.id).expect(201)).body;
     const token = tokenOf(revoked.url);

@@ -251,7 +251,8 @@ export class PhotosService implements OnModuleInit {
     const { row, blob } = await this.queue.read(async (em) => {
       const row = await syncRepository(em, 'photo')
         .createQueryBuilder('p')
-        .where('p.id = :id AND p.organisationId = :org AND p.deletedAt IS NULL', { id, org: organisationId })
+        // A photo voided on site is not the customer's to see, even by someone who kept its address.
+        .where('p.id = :id AND p.organisationId = :org AND p.deletedAt IS NULL AND p.voidedAt IS NULL', { id, org: organisationId })
         .andWhere('p.visitId IN (SELECT "v"."id" FROM "visit" AS "v" WHERE "v"."organisationId" = :org AND "v"."jobId" = :jobId AND "v"."deletedAt" IS NULL)', { jobId })
         .getOne();
       const blob = row && typeof row.sha256 === 'string' ? await em.findOneBy(PhotoBlob, { organisationId, sha256: row.sha256 }) : null;

@@ -80,18 +80,14 @@ export function AgedDebt({ jobLink }: { jobLink: (jobId: string) => string }) {
             <TableBody>
               {d.customers.map((c) => (
                 <TableRow key={c.customerId ?? c.name} sx={{ verticalAlign: 'top' }}>
-                  <TableCell>
-                    <Typography sx={{ fontWeight: 500 }}>{c.name}</Typography>
-                    {c.invoices.map((i) => (
-                      <Typography key={i.id} variant="body2" color="text.secondary">
-                        <Link component={RouterLink} to={jobLink(i.jobId)}>
-                          {i.number}
-                        </Link>
-                        {i.jobReference ? ` · ${i.jobReference}` : ''} · {formatMoney(i.owedMinor)} of {formatMoney(i.grossMinor)}
-                        {i.overdueDays ? ` · ${i.overdueDays} ${i.overdueDays === 1 ? 'day' : 'days'} overdue` : ` · due ${dateWords(i.dueDate)}`}
-                      </Typography>
-                    ))}
-                  </TableCell>
+                  <CustomerInvoicesCell
+                    name={c.name}
+                    invoices={c.invoices}
+                    jobLink={jobLink}
+                    standing={(i) =>
+                      `${formatMoney(i.owedMinor)} of ${formatMoney(i.grossMinor)} · ${i.overdueDays ? `${i.overdueDays} ${i.overdueDays === 1 ? 'day' : 'days'} overdue` : `due ${dateWords(i.dueDate)}`}`
+                    }
+                  />
                   {d.buckets.map((b) => (
                     <TableCell key={b.key} align="right" sx={{ fontVariantNumeric: 'tabular-nums', color: c.totals[b.key] ? TONE[b.key] : 'text.disabled' }}>
                       {money(c.totals[b.key])}
@@ -136,18 +132,14 @@ function OwedBack({ report, jobLink }: { report: AgedDebtReport; jobLink: (jobId
             <TableBody>
               {owed.customers.map((c) => (
                 <TableRow key={c.customerId ?? c.name} sx={{ verticalAlign: 'top' }}>
-                  <TableCell>
-                    <Typography sx={{ fontWeight: 500 }}>{c.name}</Typography>
-                    {c.invoices.map((i) => (
-                      <Typography key={i.id} variant="body2" color="text.secondary">
-                        <Link component={RouterLink} to={jobLink(i.jobId)}>
-                          {i.number}
-                        </Link>
-                        {i.jobReference ? ` · ${i.jobReference}` : ''} · {formatMoney(i.paidMinor)} paid, {formatMoney(i.creditedMinor)} credited
-                        {i.refundedMinor ? `, ${formatMoney(i.refundedMinor)} refunded` : ''} · {formatMoney(i.toRefundMinor)} to refund
-                      </Typography>
-                    ))}
-                  </TableCell>
+                  <CustomerInvoicesCell
+                    name={c.name}
+                    invoices={c.invoices}
+                    jobLink={jobLink}
+                    standing={(i) =>
+                      `${formatMoney(i.paidMinor)} paid, ${formatMoney(i.creditedMinor)} credited${i.refundedMinor ? `, ${formatMoney(i.refundedMinor)} refunded` : ''} · ${formatMoney(i.toRefundMinor)} to refund`
+                    }
+                  />
                   <TableCell align="right" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums', whiteSpace: 'nowrap' }}>
                     {formatMoney(c.totalMinor)}
                   </TableCell>
@@ -164,5 +156,29 @@ function OwedBack({ report, jobLink }: { report: AgedDebtReport; jobLink: (jobId
         </TableContainer>
       )}
     </Stack>
+  );
+}
+
+interface InvoiceLine {
+  id: string;
+  jobId: string;
+  number: string;
+  jobReference?: string | null;
+}
+
+/** A customer's name over one line per invoice, each opening its job; `standing` says where that invoice stands. */
+function CustomerInvoicesCell<I extends InvoiceLine>({ name, invoices, jobLink, standing }: { name: string; invoices: I[]; jobLink: (jobId: string) => string; standing: (invoice: I) => string }) {
+  return (
+    <TableCell>
+      <Typography sx={{ fontWeight: 500 }}>{name}</Typography>
+      {invoices.map((i) => (
+        <Typography key={i.id} variant="body2" color="text.secondary">
+          <Link component={RouterLink} to={jobLink(i.jobId)}>
+            {i.number}
+          </Link>
+          {i.jobReference ? ` · ${i.jobReference}` : ''} · {standing(i)}
+        </Typography>
+      ))}
+    </TableCell>
   );
 }

@@ -64,6 +64,24 @@ describe('recording a notification', () => {
     await waitFor(() => expect(patch).toHaveBeenCalledWith('/notifiable-work/01900000-0000-7000-8000-000000000001', { state: 'notified', schemeRef: 'NT-884213', notifiedOn: '2026-12-05' }));
     await waitFor(() => expect(onClose).toHaveBeenCalled());
   });
+
+  it('clears a scheme emptied by the admin, and refuses a name over 100 characters', async () => {
+    const patch = vi.spyOn(api, 'patch').mockResolvedValue({});
+    render(
+      <QueryClientProvider client={new QueryClient()}>
+        <NotificationSettings organisationId="org-1" nation="wales" scheme="Example Scheme" onClose={vi.fn()} />
+      </QueryClientProvider>,
+    );
+    const form = await screen.findByRole('form', { name: 'Rules and scheme' });
+    const field = within(form).getByLabelText('Competent person scheme');
+    fireEvent.change(field, { target: { value: 'x'.repeat(101) } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
+    expect(await within(form).findByText('Scheme: at most 100 characters.')).toBeTruthy();
+    expect(patch).not.toHaveBeenCalled();
+    fireEvent.change(field, { target: { value: '  ' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
+    await waitFor(() => expect(patch).toHaveBeenCalledWith('/organisations/org-1', { nation: 'wales', competentPersonScheme: null }));
+  });
 });
 
 describe('the rules and scheme', () => {
@@ -81,5 +99,23 @@ describe('the rules and scheme', () => {
     fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
     await waitFor(() => expect(patch).toHaveBeenCalledWith('/organisations/org-1', { nation: 'wales', competentPersonScheme: 'Example Scheme' }));
     await waitFor(() => expect(onClose).toHaveBeenCalled());
+  });
+
+  it('clears a scheme emptied by the admin, and refuses a name over 100 characters', async () => {
+    const patch = vi.spyOn(api, 'patch').mockResolvedValue({});
+    render(
+      <QueryClientProvider client={new QueryClient()}>
+        <NotificationSettings organisationId="org-1" nation="wales" scheme="Example Scheme" onClose={vi.fn()} />
+      </QueryClientProvider>,
+    );
+    const form = await screen.findByRole('form', { name: 'Rules and scheme' });
+    const field = within(form).getByLabelText('Competent person scheme');
+    fireEvent.change(field, { target: { value: 'x'.repeat(101) } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
+    expect(await within(form).findByText('Scheme: at most 100 characters.')).toBeTruthy();
+    expect(patch).not.toHaveBeenCalled();
+    fireEvent.change(field, { target: { value: '  ' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
+    await waitFor(() => expect(patch).toHaveBeenCalledWith('/organisations/org-1', { nation: 'wales', competentPersonScheme: null }));
   });
 });
