@@ -82,10 +82,13 @@ export async function loadInstallationCertificate(em: EntityManager, file: JobFi
   return { ...judgeInstallationCertificate({ ...records, boards: records.boards.filter((b) => !b.deletedAt) }, particulars), recorded };
 }
 
-/** What an installation certificate prints, which its lock holds: the site, the visits, what they recorded, every scheduled circuit and its board. */
-export function installationCertificatePrints(file: JobFile, content: InstallationCertificateContent): RecordKey[] {
+/**
+ * What an installation certificate prints, which its lock holds: the visits, what they recorded, every scheduled
+ * circuit and its board. The supply and the origin are the office's particulars, kept on the document itself, so the
+ * site's own record stays free to change.
+ */
+export function installationCertificatePrints(content: InstallationCertificateContent): RecordKey[] {
   return [
-    { entity: 'site', id: file.site.id },
     ...content.visits.map((v) => ({ entity: 'visit' as const, id: v.id })),
     ...content.recorded,
     ...content.boards.map((b) => ({ entity: 'board' as const, id: b.id })),

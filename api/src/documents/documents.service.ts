@@ -249,7 +249,7 @@ export class DocumentsService implements OnModuleInit {
             visitId: signer.id,
             signerName: signer.signedByName as string,
           }),
-          printed: installationCertificatePrints(file, content),
+          printed: installationCertificatePrints(content),
           notices: [],
           particulars,
         };

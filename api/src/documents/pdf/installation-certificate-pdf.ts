@@ -17,7 +17,7 @@ import { dateTimeWords, dateWords, joined, VERDICT_INK, VERDICT_WORDS } from '..
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
 import type { InstallationCertificateContent } from '../document-content.js';
-import { BONDING_WORDS, buttonRows, EARTHING_CONDUCTOR_WORDS, stateWords, testRows } from './minor-works-pdf.js';
+import { buttonRows, testRows } from './minor-works-pdf.js';
 
 export interface InstallationCertificatePdf {
   issue: Issue;
@@ -181,14 +181,12 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
 
   layout.heading('Particulars at the origin');
   const o = p.origin;
-  const { site } = file;
   layout.fields(
     [
       ['Main switch', joined([o.mainSwitchStandard, o.mainSwitchRatingA === null ? '' : `${o.mainSwitchRatingA} A`, o.mainSwitchPoles === null ? '' : `${o.mainSwitchPoles} poles`], ', ')],
       ['Main switch as an RCD', o.mainSwitchRcdMa === null ? 'Not an RCD' : `${o.mainSwitchRcdMa} mA`],
-      ['Earthing conductor', `${unit(o.earthingConductorCsaMm2, 'mm²')}, continuity ${yes(o.earthingConductorContinuity).toLowerCase()}; ${stateWords(EARTHING_CONDUCTOR_WORDS, site.earthingConductor).toLowerCase()}`],
+      ['Earthing conductor', `${unit(o.earthingConductorCsaMm2, 'mm²')}, continuity ${yes(o.earthingConductorContinuity).toLowerCase()}`],
       ['Main protective bonding conductors', `${unit(o.bondingCsaMm2, 'mm²')}, continuity ${yes(o.bondingContinuity).toLowerCase()}`],
-      ['Bonding to water, gas, oil, steel', ['bondingWater', 'bondingGas', 'bondingOil', 'bondingSteel'].map((k) => stateWords(BONDING_WORDS, site[k as 'bondingWater'])).join('; ')],
       ['Earth electrode', s.system === 'TT' ? joined([o.electrodeType, o.electrodeOhm === null ? '' : `${o.electrodeOhm} Ω`], ', ') : 'None (not a TT system)'],
     ],
     3,
