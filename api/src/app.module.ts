@@ -12,6 +12,7 @@ import { JobsModule } from './jobs/jobs.module.js';
 import { SitesModule } from './sites/sites.module.js';
 import { VisitsModule } from './visits/visits.module.js';
 import { CableRunsModule } from './cable-runs/cable-runs.module.js';
+import { LinkTestsModule } from './link-tests/link-tests.module.js';
 import { PointChangesModule } from './point-changes/point-changes.module.js';
 import { TestResultsModule } from './test-results/test-results.module.js';
 import { AuthModule } from './auth/auth.module.js';
@@ -88,6 +89,7 @@ function webAppModules(): DynamicModule[] {
     JobsModule,
     VisitsModule,
     CableRunsModule,
+    LinkTestsModule,
     PointChangesModule,
     TestResultsModule,
     PhotosModule,

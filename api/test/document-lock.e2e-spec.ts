@@ -229,7 +229,7 @@ describe('the lock of issued documents', () => {
     expect(text).toContain('Wiremap and length record');
     expect(text).toContain('1 cable recorded or tested on this job’s visits: 0 correct, 1 with a fault, 0 to check.');
     expect(text).toContain('Fault found on RC-03');
-    expect(text).toContain('It is not a performance test of the links');
+    expect(text).toContain('It is not a certification to any category or class');
     // The cables already at the site, recorded on no visit of this job, are not on this customer's report.
     expect(text).not.toContain('RC-01');
     expect(text).not.toMatch(/\bPass\b/);

@@ -59,3 +59,6 @@ export * from './cabling/fibre-loss.js';
 export * from './cabling/link-performance.js';
 export * from './certification/installation-certificate.js';
 export * from './contracts/installation-certificate.js';
+export * from './cabling/link-test.js';
+export * from './cabling/segregation.js';
+export * from './contracts/link-tests.js';

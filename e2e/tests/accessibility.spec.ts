@@ -141,6 +141,17 @@ for (const [size, viewport] of [
       await page.getByRole('link', { name: /Record a cable/ }).click();
       await expect(visitPage.cableForm).toBeVisible();
       await check('cable form');
+      await page.goBack();
+      await page.getByRole('list', { name: 'Cable runs' }).getByRole('link', { name: /^OR-01/ }).click();
+      await expect(page.getByRole('region', { name: 'Before tracing' })).toBeVisible();
+      await check('cable with its trace log and tracing cautions');
+      await page.getByRole('link', { name: 'Performance results' }).click();
+      await expect(page.getByRole('form', { name: 'Performance results of OR-01' })).toBeVisible();
+      // Bad input on purpose: the errors must be as readable as the rest.
+      await page.getByRole('region', { name: 'NEXT', exact: true }).getByLabel('Margin (dB)').fill('lots');
+      await page.getByRole('button', { name: 'Save new results' }).click();
+      await expect(page.getByRole('alert')).toContainText('Not saved');
+      await check('performance results');
 
       await page.getByRole('link', { name: 'Sync', exact: true }).first().click();
       await check('sync');
@@ -194,6 +205,11 @@ for (const [size, viewport] of [
         await officeJob.tab(tab);
         await expectNoAxeViolations(page, testInfo, `job ${tab}`);
       }
+      await officeJob.tab('Cable schedule');
+      await page.getByRole('button', { name: 'Record results' }).click();
+      await expect(page.getByRole('dialog', { name: 'Record a link’s results' })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'record a link’s results');
+      await page.getByRole('dialog').getByRole('button', { name: 'Cancel' }).click();
       // The installation certificate's issue dialog for the garden office radial, with its particulars refused as they stand.
       await page.goto('/jobs?search=LED-0045');
       await page.getByRole('link', { name: /Outside socket for the garden office/ }).first().click();

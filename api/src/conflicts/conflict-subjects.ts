@@ -28,8 +28,9 @@ export async function conflictSubjects(em: EntityManager, organisationId: string
   for (const c of conflicts) byEntity.set(c.entity, [...(byEntity.get(c.entity) ?? []), c.rowId]);
   for (const [entity, ids] of byEntity) if (entity !== 'conflict') await load(entity as Named, ids);
   const all = (entity: Named) => [...cache].filter(([k, v]) => k.startsWith(`${entity}:`) && v).map(([, v]) => v as SyncRecord);
+  await load('cableRun', all('linkTest').map((r) => (r as SyncRecord<'linkTest'>).cableRunId));
   await load('circuit', [...all('testResult'), ...all('pointChange')].map((r) => (r as SyncRecord<'testResult'>).circuitId));
-  await load('visit', [...all('testResult'), ...all('pointChange'), ...all('photo'), ...all('note'), ...all('materialLine')].map((r) => (r as SyncRecord<'note'>).visitId));
+  await load('visit', [...all('testResult'), ...all('pointChange'), ...all('photo'), ...all('note'), ...all('materialLine'), ...all('linkTest')].map((r) => (r as SyncRecord<'note'>).visitId));
   await load('board', all('circuit').map((r) => (r as SyncRecord<'circuit'>).boardId));
   await load('job', all('visit').map((r) => (r as SyncRecord<'visit'>).jobId));
   await load('site', [...all('circuit'), ...all('board'), ...all('area'), ...all('cableRun'), ...all('job'), ...all('visit')].map((r) => (r as SyncRecord<'board'>).siteId));
@@ -108,6 +109,11 @@ export async function conflictSubjects(em: EntityManager, organisationId: string
       case 'materialLine': {
         const r = get('materialLine', rowId);
         return { title: r ? `Part used: ${r.description}` : 'A part used', context: r ? visitWords(r.visitId) : [] };
+      }
+      case 'linkTest': {
+        const r = get('linkTest', rowId);
+        const cable = r ? get('cableRun', r.cableRunId) : null;
+        return { title: cable ? `Performance results of cable ${cable.label}` : 'Performance results of a link', context: r ? visitWords(r.visitId) : [] };
       }
       case 'priceItem': {
         const r = get('priceItem', rowId);

@@ -4,7 +4,9 @@ import {
   type InstallationJudgement,
   type InstallationParticulars,
   judgeInstallationCertificate,
+  judgeLinkTest,
   judgeMinorWorks,
+  type LinkTestJudgement,
   type MinorWorksJudgement,
   type RuleSet,
   unvoided,
@@ -99,6 +101,14 @@ export function installationCertificatePrints(content: InstallationCertificateCo
 export interface ScheduledCable {
   run: SyncRecord<'cableRun'>;
   assessment: CableRunAssessment;
+  /** The link's latest performance test and core's verdict on it; null where none was recorded. */
+  linkTest: SyncRecord<'linkTest'> | null;
+  performance: LinkTestJudgement | null;
+}
+
+/** A cabling report is a certification only when every link has passing results to a named limit set (or a fibre budget). */
+export function certifiesEveryLink(cables: readonly ScheduledCable[]): boolean {
+  return cables.length > 0 && cables.every((c) => c.performance?.certifiable === true && c.performance.verdict === 'pass');
 }
 
 /**
@@ -114,24 +124,44 @@ export async function loadCableSchedule(em: EntityManager, file: JobFile, rules:
     const visitIds = (await jobVisits(em, file)).map((v) => v.id);
     runs = visitIds.length ? await syncRepository(em, 'cableRun').find({ where: { ...where, lastVisitId: In(visitIds) } }) : [];
   }
+  const kept = unvoided(runs);
+  const tests = kept.length ? unvoided(await syncRepository(em, 'linkTest').find({ where: { cableRunId: In(kept.map((r) => r.id)), ...live(file.organisation.id) } })) : [];
+  // The latest test of each link stands: a link tested again after a repair is judged on the new results.
+  const latest = new Map<string, SyncRecord<'linkTest'>>();
+  const when = (t: SyncRecord<'linkTest'>) => `${t.testedAt ?? t.recordedAt ?? ''}|${t.createdAt.toISOString()}`;
+  for (const t of tests) if (!latest.has(t.cableRunId) || when(t) > when(latest.get(t.cableRunId)!)) latest.set(t.cableRunId, t);
   // A cable voided on site (a typo'd label) is kept for the office, never printed.
-  return unvoided(runs)
+  return kept
     .sort((a, b) => a.label.localeCompare(b.label, 'en-GB', { numeric: true }))
-    .map((run) => ({
-      run,
-      assessment: assessCableRun({ medium: run.medium, scheme: run.scheme, wiremap: run.wiremap, lengthM: run.lengthM, linkKind: run.linkKind }, rules),
-    }));
+    .map((run) => {
+      const linkTest = latest.get(run.id) ?? null;
+      return {
+        run,
+        assessment: assessCableRun({ medium: run.medium, scheme: run.scheme, wiremap: run.wiremap, lengthM: run.lengthM, linkKind: run.linkKind }, rules),
+        linkTest,
+        performance: linkTest ? judgeLinkTest(linkTest) : null,
+      };
+    });
 }
 
 /** Each failing cable named, with what fails, for the office to see as the report is issued. */
 export function cableNotices(cables: ScheduledCable[]): string[] {
-  return cables
+  const performance = cables
+    .filter((c) => c.performance?.verdict === 'fail')
+    .map((c) => `${c.run.label} fails its performance test: ${c.performance!.checks.filter((k) => k.verdict === 'fail').map((k) => k.note).concat(c.performance!.inspections.filter((k) => k.verdict === 'fail').map((k) => k.note)).join(' ')}`);
+  const untested = cables.filter((c) => !c.performance?.certifiable).map((c) => String(c.run.label));
+  const certification = certifiesEveryLink(cables)
+    ? []
+    : untested.length && untested.length < cables.length
+      ? [`Issued as a wiremap and length record: ${untested.join(', ')} ${untested.length === 1 ? 'has' : 'have'} no performance results to a named limit set.`]
+      : [];
+  return [...certification, ...performance, ...cables
     .filter((c) => c.assessment.verdict === 'fail')
     .map((c) => {
       const a = c.assessment;
       const why = [...(a.wiremap?.faults ?? []).map((f) => f.note), ...(a.length && a.length.verdict === 'fail' ? [a.length.note] : []), ...a.problems];
       return `${c.run.label} fails: ${why.length ? why.join(' ') : 'see the report.'}`;
-    });
+    })];
 }
 
 /** A photo whose bytes are on the server. */

@@ -23,7 +23,7 @@ import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { type CoveringLetter, coveringLetter, theWork } from '../paperwork/covering-letter.js';
 import { mailTemplate } from '../mail/mail-template.js';
-import { CABLING_REPORT_TITLE, INSTALLATION_CERTIFICATE_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
+import { CABLING_REPORT_TITLE, documentTitle, INSTALLATION_CERTIFICATE_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
 import { takeNextNumber } from '../paperwork/document-numbers.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
 import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
@@ -53,7 +53,7 @@ import type { DocumentKind } from './dto/issue-document.dto.js';
 import { DOCUMENT_LOCK } from './document-lock.js';
 import type { ReviseDocumentDto } from './dto/revise-document.dto.js';
 import { heldChangesOf } from './held-changes.js';
-import { cablingReportPdf } from './pdf/cabling-report-pdf.js';
+import { cablingReportPdf, cablingReportTitle } from './pdf/cabling-report-pdf.js';
 import { installationCertificatePdf } from './pdf/installation-certificate-pdf.js';
 import { minorWorksPdf } from './pdf/minor-works-pdf.js';
 import { photoRecordPdf } from './pdf/photo-record-pdf.js';
@@ -68,6 +68,7 @@ const KINDS: Record<DocumentKind, { prefix: string; title: string }> = {
 };
 
 export const DOCUMENT_MAIL = 'document';
+
 
 /** The letter that goes with one or several of a job's documents; both parts of the e-mail come from it. */
 const DOCUMENT_LETTER = mailTemplate<CoveringLetter & { papers: string[]; several: boolean; work: string; until: string; url: string }>(`{{#> covering}}
@@ -87,6 +88,8 @@ interface Rendered {
 /** A document checked and ready to number: how to render it, the records it prints (which its lock holds), and what to tell the office. */
 interface Prepared {
   render: (issue: Issue) => Promise<Rendered>;
+  /** The document's title where its content decides it (a cabling report that certifies every link). */
+  title?: string;
   printed: RecordKey[];
   notices: string[];
   /** An installation certificate's particulars as checked, kept on its row for its revisions. */
@@ -215,7 +218,7 @@ export class DocumentsService implements OnModuleInit {
       kind,
       visitId: rendered.visitId,
       number,
-      title: `${KINDS[kind].title}: ${file.job.title}`.slice(0, 200),
+      title: `${prepared.title ?? KINDS[kind].title}: ${file.job.title}`.slice(0, 200),
       signerName: rendered.signerName,
       pdfSha256: fingerprint(rendered.pdf),
       pdfBytes: rendered.pdf.length,
@@ -281,7 +284,9 @@ export class DocumentsService implements OnModuleInit {
         }
         return {
           render: async (issue) => ({ pdf: await cablingReportPdf({ issue, file, cables, rules, coverage }), visitId: null, signerName: issue.issuedBy }),
-          printed: cables.map((c) => ({ entity: 'cableRun', id: c.run.id })),
+          title: cablingReportTitle(cables),
+          // The performance results printed are held with their cables.
+          printed: [...cables.map((c) => ({ entity: 'cableRun' as const, id: c.run.id })), ...cables.flatMap((c) => (c.linkTest ? [{ entity: 'linkTest' as const, id: c.linkTest.id }] : []))],
           notices: cableNotices(cables),
         };
       }
@@ -435,10 +440,10 @@ export class DocumentsService implements OnModuleInit {
 
   private letter(file: JobFile, docs: SyncRecord<'document'>[], dto: SendDocumentDto, url: string, expiresAt: string): { subject: string; text: string; html: string } {
     const org = file.organisation;
-    const papers = docs.map((d) => `${KINDS[d.kind].title.toLowerCase()} ${d.number}`);
+    const papers = docs.map((d) => `${documentTitle(d.kind, d.title).toLowerCase()} ${d.number}`);
     const subject =
       docs.length === 1
-        ? `${KINDS[docs[0]!.kind].title} ${docs[0]!.number} from ${org.name}`
+        ? `${documentTitle(docs[0]!.kind, docs[0]!.title)} ${docs[0]!.number} from ${org.name}`
         : `${docs.map((d) => d.number).join(', ')} from ${org.name}`;
     return {
       subject,

@@ -19,6 +19,8 @@ const describe = (entity: SyncEntityName, row: SyncRecord | undefined, circuits:
       return `Test of ${circuit(typeof row?.circuitId === 'string' ? circuits.get(row.circuitId) : undefined).replace(/^C/, 'c')}`;
     case 'pointChange':
       return 'A point change';
+    case 'linkTest':
+      return 'A link’s performance results';
     case 'visit':
       return 'The visit';
     case 'photo':

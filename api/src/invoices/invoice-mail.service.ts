@@ -134,7 +134,7 @@ export class InvoiceMailService implements OnModuleInit {
         amount: formatMoney(Math.abs(invoice.grossMinor)),
         work: theWork(file),
         due: day(invoice.dueDate, tz),
-        documents: documents.map((d) => `${documentTitle(d.kind)} ${d.number}`),
+        documents: documents.map((d) => `${documentTitle(d.kind, d.title)} ${d.number}`),
         card: invoice.kind === 'invoice' && !!this.payments.apiKey,
         until: dateWords(expiresAt, tz),
         url,

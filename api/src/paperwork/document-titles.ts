@@ -1,8 +1,10 @@
 import type { DOCUMENT_KINDS } from '@wiretrail/core';
 
 export const MINOR_WORKS_TITLE = 'Minor works certificate';
-// Wiremap and length are what a cable's record holds; a performance test would be another document.
+// Wiremap and length are what a cable's record holds; only passing performance results to a named limit set on
+// every link make the same kind of document a certification, and then it carries that title.
 export const CABLING_REPORT_TITLE = 'Wiremap and length record';
+export const CABLING_CERTIFICATION_TITLE = 'Cabling certification report';
 export const PHOTO_RECORD_TITLE = 'Photo record';
 export const INSTALLATION_CERTIFICATE_TITLE = 'Electrical installation certificate';
 
@@ -14,7 +16,11 @@ export const DOCUMENT_TITLES: Record<(typeof DOCUMENT_KINDS)[number], string> = 
   'installation-certificate': INSTALLATION_CERTIFICATE_TITLE,
 };
 
-/** The title of a stored document row's kind; a kind this version does not know reads as plain "Document". */
-export function documentTitle(kind: unknown): string {
+/**
+ * The title of a stored document row by its kind, and for a cabling report by its own title, which says whether it
+ * certifies its links; a kind this version does not know reads as plain "Document".
+ */
+export function documentTitle(kind: unknown, rowTitle?: string | null): string {
+  if (kind === 'cabling-report' && rowTitle?.startsWith(CABLING_CERTIFICATION_TITLE)) return CABLING_CERTIFICATION_TITLE;
   return Object.entries(DOCUMENT_TITLES).find(([k]) => k === kind)?.[1] ?? 'Document';
 }

@@ -10,6 +10,8 @@ import {
   isUuid,
   type Mutation,
   normaliseText,
+  type LinkTestFacts,
+  linkTestProblems,
   SYNC_ENTITIES,
   type SyncEntityName,
 } from '@wiretrail/core';
@@ -136,7 +138,14 @@ const CIRCUIT_DETAIL_INPUTS: Record<CircuitDetailField, readonly string[]> = {
  * before a rule existed can still be edited elsewhere.
  */
 export function checkRecordRules({ mutation: m, set, isDelete }: CheckedMutation, existing: SyncRecord | null): void {
-  if (isDelete || m.entity !== 'circuit') return;
+  if (isDelete) return;
+  if (m.entity === 'linkTest') {
+    // A new test is judged whole; a change only on what it touches, so an old row's gap never blocks an unrelated edit.
+    const wrong = linkTestProblems({ ...existing, ...set } as LinkTestFacts).filter((p) => !existing || p.field in set || (p.field === 'firstLossDb' && 'firstWavelengthNm' in set));
+    if (wrong.length) throw new MutationRefused(wrong.map((p) => p.message).join(' '));
+    return;
+  }
+  if (m.entity !== 'circuit') return;
   const after = { ...existing, ...set };
   const num = (v: unknown) => (typeof v === 'number' ? v : null);
   const text = (v: unknown) => (typeof v === 'string' ? v : null);

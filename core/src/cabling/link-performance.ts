@@ -34,7 +34,16 @@ export const LIMIT_SET_WORDS: Record<LimitSet, string> = {
 export const MARGIN_PARAMETERS = ['insertionLoss', 'next', 'psNext', 'acrF', 'psAcrF', 'returnLoss', 'acrN', 'psAcrN'] as const;
 export type MarginParameter = (typeof MARGIN_PARAMETERS)[number];
 
-export const PARAMETER_WORDS: Record<MarginParameter | 'propagationDelay' | 'delaySkew' | 'dcLoopResistance', string> = {
+/** DC resistance unbalance for PoE, judged by the tester's margin to the set's limit (Ω); a negative margin fails. */
+export const UNBALANCE_PARAMETERS = ['unbalanceWithinPair', 'unbalanceBetweenPairs'] as const;
+export type UnbalanceParameter = (typeof UNBALANCE_PARAMETERS)[number];
+
+/** The four pairs by their pins, as a tester lists the length of each. */
+export const PAIR_NAMES = ['1,2', '3,6', '4,5', '7,8'] as const;
+
+export type PerformanceParameter = MarginParameter | UnbalanceParameter | 'propagationDelay' | 'delaySkew' | 'dcLoopResistance' | 'pairLength';
+
+export const PARAMETER_WORDS: Record<PerformanceParameter, string> = {
   insertionLoss: 'Insertion loss',
   next: 'NEXT',
   psNext: 'PS NEXT',
@@ -46,6 +55,9 @@ export const PARAMETER_WORDS: Record<MarginParameter | 'propagationDelay' | 'del
   propagationDelay: 'Propagation delay',
   delaySkew: 'Delay skew',
   dcLoopResistance: 'DC loop resistance',
+  unbalanceWithinPair: 'DC resistance unbalance within a pair',
+  unbalanceBetweenPairs: 'DC resistance unbalance between pairs',
+  pairLength: 'Length per pair',
 };
 
 interface Sourced {
@@ -54,7 +66,7 @@ interface Sourced {
 }
 
 /** The standard's own limits for what is judged here, by link kind; the same in both families of standard (from memory). */
-function ownLimits(set: LimitSet): { delayNs: Sourced; skewNs: Sourced; loopOhm: Sourced } {
+function ownLimits(set: LimitSet): { delayNs: Sourced; skewNs: Sourced; loopOhm: Sourced; lengthM: Sourced } {
   const channel = set.endsWith('-channel');
   const std = set.startsWith('tia') ? TIA : ISO;
   const kind = channel ? 'channel' : 'permanent link';
@@ -62,6 +74,7 @@ function ownLimits(set: LimitSet): { delayNs: Sourced; skewNs: Sourced; loopOhm:
     delayNs: { value: channel ? 555 : 498, source: `${std}, ${kind} propagation delay at 10 MHz (from memory)` },
     skewNs: { value: channel ? 50 : 44, source: `${std}, ${kind} delay skew (from memory)` },
     loopOhm: { value: channel ? 25 : 21, source: `${std}, ${kind} DC loop resistance (from memory)` },
+    lengthM: { value: channel ? 100 : 90, source: `${std}, ${kind} length (from memory)` },
   };
 }
 
@@ -73,11 +86,15 @@ export interface LinkPerformanceInput {
   readonly delaySkewNs?: number | null;
   /** The highest pair's DC loop resistance, Ω. */
   readonly dcLoopResistanceOhm?: number | null;
+  /** Worst margin of each DC resistance unbalance the tester reported, Ω. */
+  readonly unbalanceMarginsOhm?: Partial<Record<UnbalanceParameter, number | null>>;
+  /** Each pair's length as the tester measured it, m, in the order of PAIR_NAMES; a pair not reported is null. */
+  readonly pairLengthsM?: readonly (number | null)[];
   /** Parameters the tester marked as within its accuracy of the limit. */
-  readonly withinAccuracy?: readonly (MarginParameter | 'propagationDelay' | 'delaySkew' | 'dcLoopResistance')[];
+  readonly withinAccuracy?: readonly PerformanceParameter[];
 }
 
-export type ParameterCheck = CheckResult & { readonly name: keyof typeof PARAMETER_WORDS; readonly marginDb: number | null; readonly withinAccuracy: boolean };
+export type ParameterCheck = CheckResult & { readonly name: PerformanceParameter; readonly marginDb: number | null; readonly withinAccuracy: boolean };
 
 export interface LinkPerformance {
   readonly verdict: Verdict;
@@ -110,6 +127,24 @@ export function judgeLinkPerformance(input: LinkPerformanceInput): LinkPerforman
       withinAccuracy: close.has(name),
     });
   }
+  for (const name of UNBALANCE_PARAMETERS) {
+    const m = input.unbalanceMarginsOhm?.[name];
+    if (m === undefined || m === null) continue;
+    const margin = requireFinite(name, m);
+    const ok = margin >= 0;
+    checks.push({
+      name,
+      verdict: ok ? 'pass' : 'fail',
+      value: margin,
+      limit: 0,
+      unit: 'Ω',
+      source: `${setWords}: DC resistance unbalance limit as the tester applied it`,
+      note: `${PARAMETER_WORDS[name]}: worst margin ${margin > 0 ? '+' : ''}${roundTo(margin, 3)} Ω${ok ? '' : ', over the limit'}${close.has(name) ? ' (within the tester’s accuracy)' : ''}.`,
+      // A margin in ohms, not decibels: kept apart so nothing adds it to the dB margins.
+      marginDb: null,
+      withinAccuracy: close.has(name),
+    });
+  }
   const own = ownLimits(input.limitSet);
   const against = (name: 'propagationDelay' | 'delaySkew' | 'dcLoopResistance', reading: number | null | undefined, limit: Sourced, unit: string) => {
     if (reading === undefined || reading === null) return;
@@ -131,6 +166,25 @@ export function judgeLinkPerformance(input: LinkPerformanceInput): LinkPerforman
   against('propagationDelay', input.propagationDelayNs, own.delayNs, 'ns');
   against('delaySkew', input.delaySkewNs, own.skewNs, 'ns');
   against('dcLoopResistance', input.dcLoopResistanceOhm, own.loopOhm, 'Ω');
+  const pairs = (input.pairLengthsM ?? []).map((l, i) => (l === null || l === undefined ? null : { pair: PAIR_NAMES[i] ?? String(i + 1), lengthM: requireFinite('pairLength', l) }));
+  const measured = pairs.filter((p) => p !== null);
+  if (measured.some((p) => p.lengthM < 0)) throw new InvalidInputError('pairLength', 'cannot be negative');
+  if (measured.length) {
+    // The longest pair is the one the length limit bites on; the others are listed for the record.
+    const longest = measured.reduce((a, b) => (b.lengthM > a.lengthM ? b : a));
+    const ok = longest.lengthM <= own.lengthM.value;
+    checks.push({
+      name: 'pairLength',
+      verdict: ok ? 'pass' : 'fail',
+      value: longest.lengthM,
+      limit: own.lengthM.value,
+      unit: 'm',
+      source: own.lengthM.source,
+      note: `Longest pair ${longest.pair} at ${roundTo(longest.lengthM, 1)} m ${ok ? 'within' : 'over'} the ${own.lengthM.value} m limit (pairs ${measured.map((p) => `${p.pair}: ${roundTo(p.lengthM, 1)} m`).join(', ')}).${close.has('pairLength') ? ' (within the tester’s accuracy)' : ''}`,
+      marginDb: null,
+      withinAccuracy: close.has('pairLength'),
+    });
+  }
   // Nothing reported is nothing proven: a link with no results is to be checked, never a pass.
   const verdict = checks.length ? worstVerdict(checks.map((c) => c.verdict)) : 'check';
   return { verdict, limitSet: input.limitSet, checks, anyWithinAccuracy: checks.some((c) => c.withinAccuracy) };

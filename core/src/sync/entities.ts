@@ -5,10 +5,12 @@
 import { INSTALLATION_METHODS, POINT_LOCATIONS, RCD_CIRCUIT_KINDS } from '../electrical/before-work-choices.js';
 import { isBlankText } from '../text/typed-text.js';
 import type { RecordedWiremap } from '../cabling/cable-test.js';
+import { LIMIT_SETS } from '../cabling/link-performance.js';
+import { FIBRE_MODES } from '../cabling/fibre-loss.js';
 
 export const SYNC_ENTITY_NAMES = [
   'customer', 'site', 'area', 'board', 'circuit', 'job', 'visit', 'photo', 'note', 'cableRun', 'pointChange', 'testResult', 'document', 'conflict',
-  'priceItem', 'materialLine',
+  'priceItem', 'materialLine', 'linkTest',
 ] as const;
 export type SyncEntityName = (typeof SYNC_ENTITY_NAMES)[number];
 /** Rows a field may point at: synced entities, and users (technicians on a visit). */
@@ -145,6 +147,26 @@ export type InspectionMarks = { readonly [itemId: string]: InspectionMark };
 export const CABLE_MEDIA = ['Cat5e', 'Cat6', 'Cat6A', 'coax', 'speaker', 'HDMI', 'fibre', 'other'] as const;
 export const CABLE_STATUSES = ['unidentified', 'traced', 'terminated', 'tested'] as const;
 export const TRACE_METHODS = ['tone-and-probe', 'continuity', 'tdr', 'visual'] as const;
+/** A link's performance test is of copper (to a limit set) or of fibre (a Tier 1 loss budget). */
+export const LINK_TEST_MEDIA = ['copper', 'fibre'] as const;
+export const FIBRE_POLARITY_RESULTS = ['correct', 'reversed'] as const;
+/** Each end face as inspected through a scope: clean as found, clean once cleaned, or still dirty or damaged. */
+export const END_FACE_RESULTS = ['clean', 'cleaned', 'dirty-or-damaged'] as const;
+/** What runs beside a data cable, for the separation it needs (BS EN 50174-2). */
+export const POWER_CABLE_KINDS = ['unscreened', 'screened'] as const;
+export const DATA_CABLE_KINDS = ['unscreened-twisted-pair', 'screened-twisted-pair', 'coax', 'fibre'] as const;
+export const SEGREGATION_CONTAINMENTS = ['none', 'open-metallic', 'perforated-metallic', 'solid-metallic'] as const;
+/** Euroclasses of reaction to fire for cables (BS EN 13501-6), as printed on the drum. */
+export const CABLE_FIRE_CLASSES = ['Aca', 'B1ca', 'B2ca', 'Cca', 'Dca', 'Eca', 'Fca'] as const;
+/** One entry of a cable's trace log: what was put where, what was heard, and what the cable turned out to be. */
+// A type, not an interface, so that it is a plain JSON value a mutation may carry.
+export type TraceEntry = {
+  readonly at: string;
+  readonly connectedAt: string;
+  readonly heardAt: string;
+  readonly turnedOut: string;
+  readonly visitId?: string;
+};
 export const POINT_ACTIONS = ['add', 'move', 'remove', 'replace'] as const;
 export const POINT_CONNECTIONS = ['ring-extension', 'unfused-spur', 'fused-spur', 'radial'] as const;
 export const PHOTO_SUBJECTS = ['cableRun', 'pointChange', 'circuit'] as const;
@@ -232,6 +254,8 @@ const REGISTRY = {
       actualStart: seen(when), actualEnd: seen(when), status: seen(oneOf(...VISIT_STATUSES)),
       // Shown once per visit before work on a circuit; kept as evidence that the cautions were read.
       cautionsReadAt: seen(when),
+      // The same for tracing an unknown cable, which may be live.
+      tracingCautionReadAt: seen(when),
       // Sign-off on site: what was done, what was seen, where the work departs from the standard, and who signed.
       workDescription: seen(text()), observations: seen(text()),
       // Free text from before departures were structured: kept and shown, but it waives nothing.
@@ -272,6 +296,12 @@ const REGISTRY = {
       tdrNs: seen(num(0, 100_000)), linkKind: seen(oneOf(...LINK_KINDS)), testedAt: seen(when),
       // Cable runs belong to the site; this says on which visit it was last recorded, for that visit's trail.
       lastVisitId: seen(ref('visit')),
+      // Tone and probe, step by step, for a cable nobody could name.
+      traceLog: seen(jsonOf<readonly TraceEntry[]>()),
+      // Run beside power: what power, in what containment and how far side by side, for the separation it needs.
+      besidePower: seen(bool), powerCableKind: seen(oneOf(...POWER_CABLE_KINDS)), dataCableKind: seen(oneOf(...DATA_CABLE_KINDS)),
+      containment: seen(oneOf(...SEGREGATION_CONTAINMENTS)), parallelRunM: seen(num(0, 10_000)), separationMm: seen(num(0, 10_000)),
+      fireClass: seen(oneOf(...CABLE_FIRE_CLASSES)),
       recordedAt: seen(when),
       ...voidable,
     },
@@ -355,6 +385,35 @@ const REGISTRY = {
       visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), priceItemId: seen(ref('priceItem')),
       description: seen(str(), true), quantity: seen(num(0.001, 100_000), true), unit: seen(str(20)),
       recordedAt: seen(when),
+    },
+  },
+  linkTest: {
+    // A link's performance results as a field tester reported them, typed on the phone or the desk or imported.
+    name: 'linkTest', table: 'link_test', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
+    fields: {
+      visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), cableRunId: seen(ref('cableRun'), true),
+      medium: seen(oneOf(...LINK_TEST_MEDIA), true), limitSet: seen(oneOf(...LIMIT_SETS)),
+      testerMake: seen(str(100)), testerModel: seen(str(100)), testerSerial: seen(str(100)), calibratedOn: seen(str(10)), adapter: seen(str(100)),
+      // Per parameter the worst value and its margin to the limit line, one field each so two people never collide.
+      insertionLossDb: seen(num(-200, 200)), insertionLossMarginDb: seen(num(-200, 200)),
+      nextDb: seen(num(-200, 200)), nextMarginDb: seen(num(-200, 200)),
+      psNextDb: seen(num(-200, 200)), psNextMarginDb: seen(num(-200, 200)),
+      acrFDb: seen(num(-200, 200)), acrFMarginDb: seen(num(-200, 200)),
+      psAcrFDb: seen(num(-200, 200)), psAcrFMarginDb: seen(num(-200, 200)),
+      returnLossDb: seen(num(-200, 200)), returnLossMarginDb: seen(num(-200, 200)),
+      acrNDb: seen(num(-200, 200)), acrNMarginDb: seen(num(-200, 200)),
+      psAcrNDb: seen(num(-200, 200)), psAcrNMarginDb: seen(num(-200, 200)),
+      propagationDelayNs: seen(num(0, 100_000)), delaySkewNs: seen(num(0, 10_000)), dcLoopResistanceOhm: seen(num(0, 10_000)),
+      unbalanceWithinPairOhm: seen(num(0, 1000)), unbalanceWithinPairMarginOhm: seen(num(-1000, 1000)),
+      unbalanceBetweenPairsOhm: seen(num(0, 1000)), unbalanceBetweenPairsMarginOhm: seen(num(-1000, 1000)),
+      pair12LengthM: seen(num(0, 10_000)), pair36LengthM: seen(num(0, 10_000)), pair45LengthM: seen(num(0, 10_000)), pair78LengthM: seen(num(0, 10_000)),
+      withinAccuracy: seen(jsonOf<string[]>()),
+      // Fibre: the budget's figures, the loss at each wavelength, polarity and the end faces as inspected.
+      fibreMode: seen(oneOf(...FIBRE_MODES)), fibreLengthM: seen(num(0, 100_000)), connectorPairs: seen(int(0, 100)), splices: seen(int(0, 100)),
+      firstWavelengthNm: seen(int(0, 2000)), firstLossDb: seen(num(0, 100)), secondWavelengthNm: seen(int(0, 2000)), secondLossDb: seen(num(0, 100)),
+      polarity: seen(oneOf(...FIBRE_POLARITY_RESULTS)), endFaces: seen(oneOf(...END_FACE_RESULTS)),
+      testedAt: seen(when), recordedAt: seen(when),
+      ...voidable,
     },
   },
   conflict: {

@@ -17,6 +17,7 @@ export const technicianScreens: RouteObject[] = [
         { index: true, lazy: () => import('./routes/technician/visit/trail') },
         { path: paths.visitCables.path, lazy: () => import('./routes/technician/visit/cables') },
         { path: paths.visitCable.path, lazy: () => import('./routes/technician/visit/cable') },
+        { path: paths.visitCableResults.path, lazy: () => import('./routes/technician/visit/cable-results') },
         { path: paths.visitPoints.path, lazy: () => import('./routes/technician/visit/points') },
         { path: paths.visitPoint.path, lazy: () => import('./routes/technician/visit/point') },
         { path: paths.visitCircuits.path, lazy: () => import('./routes/technician/visit/circuits') },

@@ -8,6 +8,7 @@ export const paths = {
   today: { path: '/today', label: 'Today' },
   visit: { path: '/visits/:visitId', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}` },
   visitCables: { path: 'cables', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/cables` },
+  visitCableResults: { path: 'cables/:cableId/results', href: (visitId: string, cableId: string) => `/visits/${encodeURIComponent(visitId)}/cables/${encodeURIComponent(cableId)}/results` },
   visitCable: { path: 'cables/:cableId', href: (visitId: string, cableId: string | 'new') => `/visits/${encodeURIComponent(visitId)}/cables/${encodeURIComponent(cableId)}` },
   visitPoints: { path: 'points', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/points` },
   visitPoint: { path: 'points/:pointId', href: (visitId: string, pointId: string | 'new') => `/visits/${encodeURIComponent(visitId)}/points/${encodeURIComponent(pointId)}` },

@@ -51,6 +51,7 @@ export type DocumentRow = LocalRowOf<'document'>;
 export type ConflictRow = LocalRowOf<'conflict'>;
 export type PriceItemRow = LocalRowOf<'priceItem'>;
 export type MaterialLineRow = LocalRowOf<'materialLine'>;
+export type LinkTestRow = LocalRowOf<'linkTest'>;
 
 /** A change made on this phone and not yet acknowledged by the server, in the order it was made. */
 export interface OutboxEntry extends Mutation {
@@ -152,7 +153,7 @@ export interface MetaEntry<K extends MetaKey = MetaKey> {
 }
 
 /** Indexed fields only: the rest of each row is stored but not indexed. Tables as first shipped (version 1). */
-const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine'>, string> = {
+const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine' | 'linkTest'>, string> = {
   customer: 'id',
   site: 'id, customerId',
   area: 'id, siteId',
@@ -186,6 +187,7 @@ export class WiretrailDb extends Dexie {
   declare conflict: Table<ConflictRow, string>;
   declare priceItem: Table<PriceItemRow, string>;
   declare materialLine: Table<MaterialLineRow, string>;
+  declare linkTest: Table<LinkTestRow, string>;
   declare outbox: Table<OutboxEntry, number>;
   declare failed: Table<FailedEntry, number>;
   declare meta: Table<MetaEntry, MetaKey>;
@@ -211,6 +213,10 @@ export class WiretrailDb extends Dexie {
     this.version(3).stores({
       priceItem: 'id, category',
       materialLine: 'id, visitId, siteId',
+    });
+    // Links' performance results, found by their cable.
+    this.version(4).stores({
+      linkTest: 'id, visitId, siteId, cableRunId',
     });
   }
 

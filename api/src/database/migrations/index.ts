@@ -20,6 +20,7 @@ import { Refunds1796500200000 } from './1796500200000-Refunds.js';
 import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 import { VoidedRecords1796510000000 } from './1796510000000-VoidedRecords.js';
 import { InstallationCertificate1796520000000 } from './1796520000000-InstallationCertificate.js';
+import { LinkPerformance1796530000000 } from './1796530000000-LinkPerformance.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -45,4 +46,5 @@ export const MIGRATIONS = [
   MailCopies1796500300000,
   VoidedRecords1796510000000,
   InstallationCertificate1796520000000,
+  LinkPerformance1796530000000,
 ];

@@ -109,6 +109,7 @@ export const SYNC_SCHEMAS: { readonly [E in SyncEntityName]: EntitySchema<SyncRe
   conflict: buildSchema('conflict'),
   priceItem: buildSchema('priceItem'),
   materialLine: buildSchema('materialLine'),
+  linkTest: buildSchema('linkTest'),
 };
 
 export const ALL_SYNC_SCHEMAS = SYNC_ENTITY_NAMES.map((n) => SYNC_SCHEMAS[n]);

@@ -29,6 +29,9 @@ export class CreateVisitDto {
   @DateTimeField({ description: 'when the safety cautions were read on site' })
   cautionsReadAt?: string | null;
 
+  @DateTimeField({ description: 'when the cautions for tracing an unknown cable were read on site' })
+  tracingCautionReadAt?: string | null;
+
   @TextField(20_000, { description: 'description and extent of the work, as signed' })
   workDescription?: string | null;
 

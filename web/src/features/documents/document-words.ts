@@ -15,9 +15,10 @@ export const DOCUMENT_KINDS: Array<{ kind: DocumentKind; name: string; issue: st
   },
   {
     kind: 'cabling-report',
-    name: 'Wiremap and length record',
-    issue: 'Issue wiremap and length record',
-    about: 'The cables recorded or tested on this job’s visits, or the site’s whole schedule: each cable’s ends, wiremap and length.',
+    name: 'Cabling report',
+    issue: 'Issue cabling report',
+    about:
+      'The cables recorded or tested on this job’s visits, or the site’s whole schedule. A cabling certification report when every link has passing performance results to a named limit set; otherwise the wiremap and length record, which says it certifies no category or class.',
   },
   {
     kind: 'photo-record',
@@ -28,6 +29,12 @@ export const DOCUMENT_KINDS: Array<{ kind: DocumentKind; name: string; issue: st
 ];
 
 export const kindName = (kind: DocumentKind) => DOCUMENT_KINDS.find((k) => k.kind === kind)?.name ?? kind;
+
+/** An issued document's name: a cabling report is named by what it turned out to be, as its title says. */
+export function documentName(d: { kind: DocumentKind; title?: string | null }): string {
+  if (d.kind === 'cabling-report') return d.title?.startsWith('Cabling certification report') ? 'Cabling certification report' : 'Wiremap and length record';
+  return kindName(d.kind);
+}
 
 const stamp = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 

@@ -14,6 +14,7 @@ import { PostgresRefunds1796500200001 } from './1796500200001-PostgresRefunds.js
 import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCopies.js';
 import { PostgresVoidedRecords1796510000001 } from './1796510000001-PostgresVoidedRecords.js';
 import { PostgresInstallationCertificate1796520000001 } from './1796520000001-PostgresInstallationCertificate.js';
+import { PostgresLinkPerformance1796530000001 } from './1796530000001-PostgresLinkPerformance.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -33,4 +34,5 @@ export const POSTGRES_MIGRATIONS = [
   PostgresMailCopies1796500300001,
   PostgresVoidedRecords1796510000001,
   PostgresInstallationCertificate1796520000001,
+  PostgresLinkPerformance1796530000001,
 ];

@@ -14,6 +14,7 @@ import { PageHeader } from '@/components/page-header';
 import { SafetyCaution } from '@/components/safety-caution';
 import { paths } from '@/config/paths';
 import { CableSchedule } from '@/features/cables/desk/cable-schedule';
+import { LinkTestResults } from '@/features/cables/desk/link-test-results';
 import { JobConflictsNotice } from '@/features/conflicts/components/job-conflicts-notice';
 import { HeldChanges } from '@/features/documents/components/held-changes';
 import { JobDocuments } from '@/features/documents/components/job-documents';
@@ -111,7 +112,12 @@ export function Component() {
           {tab === 'photos' && (
             <JobPhotoTrail jobId={j.id} reference={j.reference} areas={areaChoices} subjects={subjects} visits={visits.data?.items ?? []} personName={personName} />
           )}
-          {tab === 'cables' && <CableSchedule siteId={j.siteId} jobId={j.id} reference={j.reference} siteName={siteName} />}
+          {tab === 'cables' && (
+            <Stack spacing={3}>
+              <CableSchedule siteId={j.siteId} jobId={j.id} reference={j.reference} siteName={siteName} />
+              <LinkTestResults jobId={j.id} siteId={j.siteId} reference={j.reference} />
+            </Stack>
+          )}
           {tab === 'points' && (
             <>
               <SafetyCaution />

@@ -10,7 +10,8 @@ import { CorrectCableRunDialog } from '../desk/correct-cable-run-dialog';
 const run = {
   id: '01900000-0000-7000-8000-0000000000c1', version: 4, siteId: 's1', label: 'RC-02', medium: 'Cat6', endAAreaId: 'a1', endADescription: 'Patch panel port 2',
   endATermination: null, endBAreaId: 'a2', endBDescription: 'Unlabelled, behind the X-ray unit', endBTermination: null, status: 'unidentified', traceMethod: null,
-  lengthM: null, nvp: null, tdrNs: null, scheme: null, linkKind: null, verdict: null, testedAt: null, lastVisitId: null, recordedAt: null, voidedAt: null, voidReason: null, endAAreaName: 'Comms cupboard',
+  lengthM: null, nvp: null, tdrNs: null, scheme: null, linkKind: null, verdict: null, testedAt: null, lastVisitId: null, recordedAt: null, voidedAt: null, voidReason: null,
+  traceLog: null, besidePower: null, powerCableKind: null, dataCableKind: null, containment: null, parallelRunM: null, separationMm: null, fireClass: null, endAAreaName: 'Comms cupboard',
   endBAreaName: 'Surgery 1', assessment: assessCableRun({ medium: 'Cat6' }),
 } satisfies CableRun;
 

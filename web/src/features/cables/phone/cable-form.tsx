@@ -1,5 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
+import Checkbox from '@mui/material/Checkbox';
+import FormControlLabel from '@mui/material/FormControlLabel';
 import Divider from '@mui/material/Divider';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
@@ -9,7 +12,14 @@ import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import {
   assessCableRun,
+  BS6701_MINIMUM_FIRE_CLASS,
+  CABLE_FIRE_CLASSES,
   CABLE_MEDIA,
+  DATA_CABLE_KINDS,
+  meetsFireMinimum,
+  POWER_CABLE_KINDS,
+  SEGREGATION_CONTAINMENTS,
+  segregationMm,
   CABLE_STATUSES,
   type FieldValue,
   isTwistedPair,
@@ -64,11 +74,17 @@ export const cableSchema = z
     tdrNs: readingField('cableRun', 'tdrNs', 'The TDR time', 'ns'),
     nvp: z.string(),
     linkKind: z.enum(LINK_KINDS),
+    fireClass: z.enum(['', ...CABLE_FIRE_CLASSES]),
+    besidePower: z.boolean(),
+    powerCableKind: z.enum(POWER_CABLE_KINDS),
+    dataCableKind: z.enum(DATA_CABLE_KINDS),
+    containment: z.enum(SEGREGATION_CONTAINMENTS),
+    parallelRunM: readingField('cableRun', 'parallelRunM', 'The length side by side', 'm'),
   })
   .superRefine((v, ctx) => {
     for (const e of ['A', 'B'] as const) {
-      const area = (v as Record<string, string>)[`end${e}AreaId`];
-      if (area === NEW_AREA && !(v as Record<string, string>)[`end${e}NewArea`]!.trim()) {
+      const area = v[`end${e}AreaId` as const];
+      if (area === NEW_AREA && !v[`end${e}NewArea` as const].trim()) {
         ctx.addIssue({ code: 'custom', path: [`end${e}NewArea`], message: `Name the new area for end ${e}, for example "Loft".` });
       }
     }
@@ -105,8 +121,34 @@ function defaults(cable: CableRunRow | null): CableValues {
     tdrNs: readingText(cable?.tdrNs),
     nvp: readingText(cable?.nvp),
     linkKind: cable?.linkKind ?? 'permanent-link',
+    fireClass: cable?.fireClass ?? '',
+    besidePower: cable?.besidePower ?? false,
+    powerCableKind: cable?.powerCableKind ?? 'unscreened',
+    dataCableKind: cable?.dataCableKind ?? (cable?.medium === 'fibre' ? 'fibre' : cable?.medium === 'coax' ? 'coax' : 'unscreened-twisted-pair'),
+    containment: cable?.containment ?? 'none',
+    parallelRunM: readingText(cable?.parallelRunM),
   };
 }
+
+/** The separation a data run beside power needs, or null until the length side by side is typed. */
+export function separationFor(v: Pick<CableValues, 'besidePower' | 'powerCableKind' | 'dataCableKind' | 'containment' | 'parallelRunM'>) {
+  const run = usableReading(v.parallelRunM);
+  return v.besidePower && run !== null ? segregationMm({ powerCableKind: v.powerCableKind, dataCableKind: v.dataCableKind, containment: v.containment, parallelRunM: run }) : null;
+}
+
+export const POWER_WORDS: Record<(typeof POWER_CABLE_KINDS)[number], string> = { unscreened: 'Unscreened (twin and earth, flex)', screened: 'Screened or armoured' };
+export const DATA_KIND_WORDS: Record<(typeof DATA_CABLE_KINDS)[number], string> = {
+  'unscreened-twisted-pair': 'Unscreened twisted pair (U/UTP)',
+  'screened-twisted-pair': 'Screened twisted pair (F/UTP, S/FTP)',
+  coax: 'Coax',
+  fibre: 'Fibre (all-dielectric)',
+};
+export const CONTAINMENT_WORDS: Record<(typeof SEGREGATION_CONTAINMENTS)[number], string> = {
+  none: 'None between them',
+  'open-metallic': 'Open metal tray',
+  'perforated-metallic': 'Perforated metal tray',
+  'solid-metallic': 'Solid metal divider or trunking',
+};
 
 /** The TDR figures as core reads them: an NVP that is neither a fraction nor a percentage is named as typed. */
 function tdrOf(v: Pick<CableValues, 'tdrNs' | 'nvp'>) {
@@ -150,8 +192,15 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
     [values.medium, values.scheme, values.linkKind, twisted, wiremap, lengthM],
   );
   const errors = formState.errors as Record<string, { message?: string } | undefined>;
+  const separation = useMemo(() => {
+    try {
+      return separationFor(values);
+    } catch {
+      return null;
+    }
+  }, [values]);
   const areaName = (e: 'A' | 'B') => {
-    const id = (values as Record<string, string>)[`end${e}AreaId`];
+    const id = values[`end${e}AreaId` as const];
     return areas.find((a) => a.id === id)?.name;
   };
   const endNames = { nearEnd: `End A${areaName('A') ? ` (${areaName('A')})` : ''}`, farEnd: `End B${areaName('B') ? ` (${areaName('B')})` : ''}` };
@@ -160,10 +209,10 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
     setError(null);
     const areaRows: { entity: 'area'; id: string; fields: Fields }[] = [];
     const areaFor = (e: 'A' | 'B'): string | null => {
-      const id = (v as Record<string, string>)[`end${e}AreaId`]!;
+      const id = v[`end${e}AreaId` as const];
       if (id !== NEW_AREA) return id || null;
       const newId = uuidv7();
-      areaRows.push({ entity: 'area', id: newId, fields: { siteId, name: (v as Record<string, string>)[`end${e}NewArea`]!.trim() } });
+      areaRows.push({ entity: 'area', id: newId, fields: { siteId, name: v[`end${e}NewArea` as const].trim() } });
       return newId;
     };
     const text = (s: string) => s.trim() || null;
@@ -187,6 +236,13 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
       tdrNs: v.lengthMode === 'tdr' ? usableReading(v.tdrNs) : null,
       nvp: v.lengthMode === 'tdr' ? parseNvp(v.nvp) : null,
       linkKind: twisted ? v.linkKind : null,
+      fireClass: v.fireClass || null,
+      besidePower: v.besidePower,
+      powerCableKind: v.besidePower ? v.powerCableKind : null,
+      dataCableKind: v.besidePower ? v.dataCableKind : null,
+      containment: v.besidePower ? v.containment : null,
+      parallelRunM: v.besidePower ? usableReading(v.parallelRunM) : null,
+      separationMm: separationFor(v)?.minimumMm ?? null,
       verdict: recorded ? assessment.verdict : null,
       lastVisitId: visitId,
     };
@@ -233,7 +289,7 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
                   ))}
                   <option value={NEW_AREA}>A new area…</option>
                 </TextField>
-                {(values as Record<string, string>)[`end${e}AreaId`] === NEW_AREA && (
+                {values[`end${e}AreaId` as const] === NEW_AREA && (
                   <TextField label={`New area for end ${e}`} {...register(`end${e}NewArea`)} error={!!errors[`end${e}NewArea`]} helperText={errors[`end${e}NewArea`]?.message ?? ' '} />
                 )}
                 <TextField
@@ -307,6 +363,39 @@ export function CableForm({ siteId, visitId, cable, areas, locked, onSaved }: Pr
           {twisted && (
             <NativeChoice label="Measured as" {...register('linkKind')} options={choicesOf(LINK_KINDS, LINK_KIND_WORDS)} />
           )}
+          <Divider />
+          <Typography variant="h3">Beside power and fire class</Typography>
+          <Controller
+            control={control}
+            name="besidePower"
+            render={({ field }) => <FormControlLabel control={<Checkbox checked={field.value} onChange={(e) => field.onChange(e.target.checked)} />} label="Runs beside a power cable" />}
+          />
+          {values.besidePower && (
+            <Stack spacing={1.5}>
+              <NativeChoice label="Power cable" {...register('powerCableKind')} options={choicesOf(POWER_CABLE_KINDS, POWER_WORDS)} />
+              <NativeChoice label="This data cable" {...register('dataCableKind')} options={choicesOf(DATA_CABLE_KINDS, DATA_KIND_WORDS)} />
+              <NativeChoice label="Between them" {...register('containment')} options={choicesOf(SEGREGATION_CONTAINMENTS, CONTAINMENT_WORDS)} />
+              <TextField label="Side by side for (m)" {...register('parallelRunM')} error={!!errors.parallelRunM} helperText={errors.parallelRunM?.message ?? ' '} slotProps={{ htmlInput: { inputMode: 'decimal' } }} />
+              {separation && (
+                <Alert severity={separation.minimumMm > 0 ? 'warning' : 'info'} role="status" aria-label="Separation from power">
+                  {separation.minimumMm > 0 ? `Keep at least ${separation.minimumMm} mm from the power cable. ` : 'No separation distance. '}
+                  {separation.note} Source: {separation.source}. The regulations in force, local codes and a competent person decide.
+                </Alert>
+              )}
+            </Stack>
+          )}
+          <NativeChoice
+            label="Fire class of the cable"
+            {...register('fireClass')}
+            emptyLabel="Not recorded"
+            options={CABLE_FIRE_CLASSES.map((c) => ({ value: c, label: c }))}
+            helperText={
+              values.fireClass && !meetsFireMinimum(values.fireClass)
+                ? `Below ${BS6701_MINIMUM_FIRE_CLASS.value}, the least for installed cable (${BS6701_MINIMUM_FIRE_CLASS.source}).`
+                : `As printed on the cable; at least ${BS6701_MINIMUM_FIRE_CLASS.value} (${BS6701_MINIMUM_FIRE_CLASS.source}).`
+            }
+            error={!!values.fireClass && !meetsFireMinimum(values.fireClass)}
+          />
           <CableVerdicts assessment={assessment} />
           <SaveBar error={error} locked={locked} label={cable ? 'Save cable' : 'Save new cable'} />
         </Stack>

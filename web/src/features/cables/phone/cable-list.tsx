@@ -8,13 +8,14 @@ import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { assessCableRun, isVoided, unvoided, type Verdict, voidWords } from '@wiretrail/core';
+import { assessCableRun, isVoided, judgeLinkTest, unvoided, type Verdict, voidWords } from '@wiretrail/core';
 import { VOIDED_SX } from '@/components/records/voided-mark';
 import { Link as RouterLink } from 'react-router-dom';
 import { AidLine, VerdictChip } from '@/components/verdicts/verdict-chip';
 import { paths } from '@/config/paths';
 import type { CableRunRow } from '@/lib/db';
 import { useSiteCables } from '../data/get-site-cables';
+import { useSiteLinkTests } from '../data/get-link-tests';
 import { CABLE_STATUS_WORDS, MEDIUM_WORDS } from '../cable-words';
 import { readWiremap } from './wiremap-entry';
 
@@ -31,6 +32,7 @@ export function cableVerdict(c: CableRunRow): Verdict | null {
 /** The site's cable runs, each with where its ends are and how its test went; they stay with the site from visit to visit. */
 export function CableList({ siteId, visitId, locked }: { siteId: string; visitId: string; locked: boolean }) {
   const data = useSiteCables(siteId);
+  const tests = useSiteLinkTests(siteId);
   if (!data) return null;
   const counted = unvoided(data.cables).length;
   return (
@@ -68,7 +70,10 @@ export function CableList({ siteId, visitId, locked }: { siteId: string; visitId
                       secondary={voided ? `${voidWords(c)} · ${where}` : where}
                       slotProps={voided ? { primary: { sx: VOIDED_SX } } : undefined}
                     />
-                    {verdict && <VerdictChip verdict={verdict} />}
+                    <Stack spacing={0.5} sx={{ alignItems: 'flex-end' }}>
+                      {verdict && <VerdictChip verdict={verdict} />}
+                      {!voided && tests?.get(c.id) && <VerdictChip verdict={judgeLinkTest(tests.get(c.id)!).verdict} prefix="Performance" />}
+                    </Stack>
                   </ListItemButton>
                 </ListItem>
               );

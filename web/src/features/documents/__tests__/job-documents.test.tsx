@@ -96,8 +96,8 @@ describe('JobDocuments', () => {
     const table = await screen.findByRole('table', { name: 'Issued documents' });
     expect(within(table).getByText('Superseded by MW-0002')).toBeTruthy();
     expect(within(table).getByText('Revision of MW-0001: Breaker is 20 A')).toBeTruthy();
-    fireEvent.click(screen.getByRole('button', { name: 'Issue wiremap and length record' }));
-    const confirm = screen.getByRole('dialog', { name: 'Issue the wiremap and length record?' });
+    fireEvent.click(screen.getByRole('button', { name: 'Issue cabling report' }));
+    const confirm = screen.getByRole('dialog', { name: 'Issue the cabling report?' });
     fireEvent.click(within(confirm).getByLabelText(/The site’s whole cable schedule/));
     fireEvent.click(within(confirm).getByRole('button', { name: 'Issue' }));
     expect(await screen.findByText('CR-0001 records a fault')).toBeTruthy();

@@ -32,7 +32,7 @@ import { useDownloadDocument } from '../api/download-document';
 import { type DocumentCoverage, type DocumentKind, type JobDocument, useJobDocuments } from '../api/get-job-documents';
 import { useJobRecipient } from '../api/get-job-recipient';
 import { useIssueDocument } from '../api/issue-document';
-import { COVERAGES, DOCUMENT_KINDS, issuedTime, kindName } from '../document-words';
+import { COVERAGES, DOCUMENT_KINDS, documentName, issuedTime, kindName } from '../document-words';
 import { CertificateChoice } from './certificate-choice';
 import { EmailStateChip } from './email-state-chip';
 import { SendDocumentDialog } from './send-document-dialog';
@@ -168,7 +168,7 @@ export function JobDocuments({ jobId }: { jobId: string }) {
                     )}
                   </TableCell>
                   <TableCell>
-                    {kindName(d.kind)}
+                    {documentName(d)}
                     {d.supersedesId && (
                       <Typography variant="body2" color="text.secondary">
                         Revision of {numberOf(d.supersedesId)}: {d.revisionReason}

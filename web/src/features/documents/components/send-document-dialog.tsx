@@ -19,7 +19,7 @@ import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import type { JobDocument } from '../api/get-job-documents';
 import { useSendDocument } from '../api/send-document';
-import { kindName } from '../document-words';
+import { documentName } from '../document-words';
 
 export const LINK_DAYS = [7, 14, 30, 60, 90] as const;
 
@@ -80,7 +80,7 @@ export function SendDocumentDialog({ jobId, doc, others = [], defaultTo, custome
   );
   return (
     <Dialog open={!!doc} onClose={close} fullWidth maxWidth="sm" aria-labelledby="send-document-title">
-      <DialogTitle id="send-document-title">E-mail {doc ? `${kindName(doc.kind).toLowerCase()} ${doc.number}` : ''} to the customer</DialogTitle>
+      <DialogTitle id="send-document-title">E-mail {doc ? `${documentName(doc).toLowerCase()} ${doc.number}` : ''} to the customer</DialogTitle>
       <DialogContent>
         <Stack component="form" id="send-document-form" noValidate spacing={2} sx={{ pt: 1 }} onSubmit={submit}>
           <Typography color="text.secondary">
@@ -108,7 +108,7 @@ export function SendDocumentDialog({ jobId, doc, others = [], defaultTo, custome
                     {offered.map((o) => (
                       <FormControlLabel
                         key={o.id}
-                        label={`${kindName(o.kind)} ${o.number}`}
+                        label={`${documentName(o)} ${o.number}`}
                         control={
                           <Checkbox
                             checked={field.value.includes(o.id)}

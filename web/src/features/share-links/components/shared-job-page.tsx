@@ -83,7 +83,7 @@ function Documents({ documents }: { documents: SharedJob['documents'] }) {
       {documents.map((d) => (
         <Paper component="li" key={d.id} variant="outlined" sx={{ p: 1.5, display: 'flex', gap: 2, alignItems: 'center', justifyContent: 'space-between', flexWrap: 'wrap' }}>
           <div>
-            <Typography sx={{ fontWeight: 500 }}>{KIND_NAMES[d.kind] ?? d.kind}</Typography>
+            <Typography sx={{ fontWeight: 500 }}>{d.kind === 'cabling-report' && d.title?.startsWith('Cabling certification report') ? 'Cabling certification report' : (KIND_NAMES[d.kind] ?? d.kind)}</Typography>
             <Typography variant="body2" color="text.secondary">
               {d.number} · issued {format(day, d.issuedAt)}
             </Typography>

@@ -7,6 +7,10 @@ import { paths } from '@/config/paths';
 import { useCable, useSiteCables } from '@/features/cables/data/get-site-cables';
 import { CableForm } from '@/features/cables/phone/cable-form';
 import { TracingCaution } from '@/features/cables/phone/tracing-caution';
+import { TraceLog } from '@/features/cables/phone/trace-log';
+import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
+import Divider from '@mui/material/Divider';
+import Stack from '@mui/material/Stack';
 import CableOutlined from '@mui/icons-material/CableOutlined';
 import { useVisitContext } from '../visit-context';
 
@@ -43,6 +47,15 @@ export function Component() {
             locked={locked}
             onSaved={(_id, label) => navigate(back, { state: { saved: label } })}
           />
+          {cable && (
+            <Stack spacing={2} sx={{ mt: 3 }}>
+              <Divider />
+              <Button component={RouterLink} to={paths.visitCableResults.href(summary.visit.id, cable.id)} variant="outlined" size="large" startIcon={<SpeedOutlined />}>
+                Performance results
+              </Button>
+              <TraceLog cable={cable} visit={summary.visit} locked={locked} />
+            </Stack>
+          )}
         </>
       )}
     </>
