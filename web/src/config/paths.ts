@@ -14,6 +14,8 @@ export const paths = {
   visitPoint: { path: 'points/:pointId', href: (visitId: string, pointId: string | 'new') => `/visits/${encodeURIComponent(visitId)}/points/${encodeURIComponent(pointId)}` },
   visitCircuits: { path: 'tests', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/tests` },
   visitCircuit: { path: 'tests/:circuitId', href: (visitId: string, circuitId: string) => `/visits/${encodeURIComponent(visitId)}/tests/${encodeURIComponent(circuitId)}` },
+  /** The schedule of circuits an installation certificate carries, one card per circuit. */
+  visitSchedule: { path: 'schedule', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/schedule` },
   /** A photo with the cable routes drawn over it, and its drilling check. */
   visitPhotoRoutes: { path: 'photos/:photoId/routes', href: (visitId: string, photoId: string) => `/visits/${encodeURIComponent(visitId)}/photos/${encodeURIComponent(photoId)}/routes` },
   /** The visit's site's map of hidden routes, on the phone. */
