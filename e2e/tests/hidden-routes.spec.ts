@@ -105,7 +105,11 @@ test('offline on a phone, two routes drawn over a photographed chase reach the o
   await page.getByLabel('Distance (mm)').fill('1200');
   await page.getByRole('button', { name: 'Add distance' }).click();
   await chooseOption(page, 'Measured from', 'Floor');
-  await tap(page, drawing, [0.5, 0.98]);
+  // The first tap after the list closes can land before the page takes taps again: tapped until the photo shows it.
+  await expect(async () => {
+    await tap(page, drawing, [0.5, 0.98]);
+    await expect(page.getByText('Now tap the point you measured to: the cable, or the edge of a box.')).toBeVisible({ timeout: 2_000 });
+  }).toPass({ timeout: 30_000 });
   await tap(page, drawing, [0.5, 0.4]);
   await page.getByLabel('Distance (mm)').fill('1100');
   await page.getByRole('button', { name: 'Add distance' }).click();
