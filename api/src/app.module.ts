@@ -19,7 +19,7 @@ import { AuthModule } from './auth/auth.module.js';
 import { CardPaymentsModule } from './card-payments/card-payments.module.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
-import { appConfig, authConfig, mailConfig } from './config/app.config.js';
+import { appConfig, authConfig, mailConfig, syncConfig } from './config/app.config.js';
 import { databaseConfig } from './config/database.config.js';
 import { paymentsConfig } from './config/payments.config.js';
 import { photosConfig } from './config/photos.config.js';
@@ -65,7 +65,7 @@ function webAppModules(): DynamicModule[] {
       cache: true,
       ignoreEnvFile: process.env.NODE_ENV === 'test',
       validate: validateEnvironment,
-      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig, storageConfig, paymentsConfig],
+      load: [appConfig, authConfig, databaseConfig, mailConfig, photosConfig, storageConfig, paymentsConfig, syncConfig],
     }),
     TypeOrmModule.forRootAsync({
       inject: [databaseConfig.KEY],

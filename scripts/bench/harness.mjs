@@ -1,6 +1,6 @@
 // Shared by the benchmarks: a real API process on a throwaway database, timing, and the results table.
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, openSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { root } from '../lib.mjs';
@@ -14,8 +14,11 @@ export function ensureBuilt() {
   }
 }
 
-/** Starts the built API (serving the built web app) on a fresh SQLite file with the demo data. */
-export async function startApi({ port }) {
+/**
+ * Starts the built API (serving the built web app) on a fresh SQLite file with the demo data; `database` points it
+ * at another (DB_TYPE and DATABASE_URL), and `prepare` runs on the migrated, seeded database before it starts.
+ */
+export async function startApi({ port, database = {}, prepare }) {
   const dir = mkdtempSync(join(tmpdir(), 'wiretrail-bench-'));
   const env = {
     ...process.env,
@@ -26,14 +29,22 @@ export async function startApi({ port }) {
     JWT_SECRET: 'bench-secret-long-enough-for-signing-tokens-here',
     SIGN_IN_RATE_LIMIT: '100000',
     WEB_DIST: join(root, 'web/dist'),
+    ...database,
   };
   for (const script of ['api/dist/database/migrate-cli.js', 'api/dist/database/seed-cli.js']) {
     const r = spawnSync(process.execPath, [script], { cwd: root, env, encoding: 'utf8' });
     if (r.status !== 0) throw new Error(r.stderr);
   }
+  const prepared = prepare ? await prepare(env) : undefined;
   // BENCH_API_NODE_ARGS='--cpu-prof --cpu-prof-dir=data/prof' profiles the API while a benchmark runs.
   const nodeArgs = (process.env.BENCH_API_NODE_ARGS ?? '').split(' ').filter(Boolean);
-  const child = spawn(process.execPath, [...nodeArgs, 'api/dist/main.js'], { cwd: root, env, stdio: 'ignore' });
+  // BENCH_API_LOG=<file> keeps what the API prints, to see why a benchmark's requests failed.
+  const output = process.env.BENCH_API_LOG ? openSync(process.env.BENCH_API_LOG, 'a') : 'ignore';
+  const child = spawn(process.execPath, [...nodeArgs, 'api/dist/main.js'], { cwd: root, env, stdio: ['ignore', output, output] });
+  let stopping = false;
+  child.once('exit', (code, signal) => {
+    if (!stopping) console.error(`The API process ended during the benchmark (exit ${code ?? signal}).`);
+  });
   const base = `http://127.0.0.1:${port}`;
   for (let i = 0; i < 200; i++) {
     try {
@@ -45,6 +56,8 @@ export async function startApi({ port }) {
   }
   return {
     base,
+    env,
+    prepared,
     pid: child.pid,
     databasePath: env.DATABASE_PATH,
     /** Peak resident memory of the API process so far (VmHWM), in MB. */
@@ -54,6 +67,8 @@ export async function startApi({ port }) {
       return kb / 1024;
     },
     async stop() {
+      stopping = true;
+      if (child.exitCode !== null || child.signalCode !== null) return rmSync(dir, { recursive: true, force: true });
       child.kill('SIGTERM');
       await new Promise((r) => child.once('exit', r));
       rmSync(dir, { recursive: true, force: true });

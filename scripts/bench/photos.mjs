@@ -41,7 +41,7 @@ export function numbered(jpeg, n) {
 const sha256 = (b) => createHash('sha256').update(b).digest('hex');
 const meta = (o) => Object.entries(o).map(([k, v]) => `${k} ${Buffer.from(v).toString('base64')}`).join(',');
 
-async function uploadOne(base, token, bytes) {
+export async function uploadOne(base, token, bytes) {
   const headers = { authorization: `Bearer ${token}`, 'tus-resumable': '1.0.0' };
   const created = await fetch(`${base}/api/uploads`, { method: 'POST', headers: { ...headers, 'upload-length': String(bytes.length), 'upload-metadata': meta({ sha256: sha256(bytes), filetype: 'image/jpeg', filename: 'bench.jpg' }) } });
   if (created.status !== 201) throw new Error(`create answered ${created.status}`);

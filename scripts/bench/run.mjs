@@ -11,9 +11,10 @@ import { benchPhotos } from './photos.mjs';
 import { benchPhonePhoto } from './phone-photo.mjs';
 import { benchSyncPull } from './sync-pull.mjs';
 import { benchSyncPush } from './sync-push.mjs';
+import { benchScale } from './scale.mjs';
 
 const only = process.argv.slice(2);
-const suites = { 'sync-push': benchSyncPush, 'sync-pull': benchSyncPull, 'api-load': benchApiLoad, photos: benchPhotos, 'phone-photo': benchPhonePhoto, web: benchWeb };
+const suites = { 'sync-push': benchSyncPush, 'sync-pull': benchSyncPull, 'api-load': benchApiLoad, photos: benchPhotos, 'phone-photo': benchPhonePhoto, web: benchWeb, scale: benchScale };
 
 ensureBuilt();
 const results = [];

@@ -24,11 +24,21 @@ import { DataSource, type EntityManager } from 'typeorm';
 @Injectable()
 export class WriteQueue {
   private readonly jobs: Job[] = [];
+  private readonly rollbackListeners: Array<() => void> = [];
   private running = false;
   private readonly postgres: boolean;
 
   constructor(private readonly dataSource: DataSource) {
     this.postgres = dataSource.options.type === 'postgres';
+  }
+
+  /** Tells a cache of what transactions read that some work was rolled back, and what it saw may never have been. */
+  onRollback(listener: () => void): void {
+    this.rollbackListeners.push(listener);
+  }
+
+  private rolledBack(): void {
+    for (const listener of this.rollbackListeners) listener();
   }
 
   run<T>(work: (em: EntityManager) => Promise<T>): Promise<T> {
@@ -95,6 +105,7 @@ export class WriteQueue {
             await em.query('RELEASE SAVEPOINT write_queue_job');
           } catch (error) {
             await em.query('ROLLBACK TO SAVEPOINT write_queue_job');
+            this.rolledBack();
             await em.query('RELEASE SAVEPOINT write_queue_job');
             outcomes.push({ ok: false, error });
           }
@@ -102,6 +113,7 @@ export class WriteQueue {
       });
     } catch (error) {
       // Not committed: nothing in the group happened, and each is told so (a lone write gets its own error).
+      this.rolledBack();
       for (const job of group) job.reject(error);
       return;
     }

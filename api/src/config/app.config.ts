@@ -46,3 +46,13 @@ export const mailConfig = registerAs('mail', () => ({
   retryBaseMs: Number(process.env.MAIL_RETRY_BASE_MS ?? 30_000),
   maxAttempts: Number(process.env.MAIL_MAX_ATTEMPTS ?? 6),
 }));
+
+export const syncConfig = registerAs('sync', () => ({
+  /**
+   * Days a deletion stays in the change log (and a mutation's replay record after its device has heard back). A
+   * device that has not synced for longer starts again from nothing, keeping the changes it has not sent.
+   */
+  retentionDays: Number(process.env.SYNC_RETENTION_DAYS ?? 90),
+  /** How often the API process compacts the change log; 0 leaves it to `POST /api/sync/compaction`. */
+  compactionIntervalMinutes: Number(process.env.SYNC_COMPACTION_INTERVAL_MINUTES ?? 360),
+}));

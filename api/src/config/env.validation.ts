@@ -86,6 +86,12 @@ export class EnvironmentVariables {
   MAIL_MAX_ATTEMPTS = 6;
 
   @Type(() => Number) @IsInt() @Min(1)
+  SYNC_RETENTION_DAYS = 90;
+
+  @Type(() => Number) @IsInt() @Min(0)
+  SYNC_COMPACTION_INTERVAL_MINUTES = 360;
+
+  @Type(() => Number) @IsInt() @Min(1)
   SHARE_RATE_LIMIT = 300;
 
   @Type(() => Number) @IsInt() @Min(1000)

@@ -276,15 +276,23 @@ export class DocumentsService implements OnModuleInit {
   private async printablePhotos(organisationId: string, jobId: string): Promise<Map<string, Buffer>> {
     const hashes = await this.queue.read(async (em) => (await loadPhotoRecord(em, await loadJobFile(em, organisationId, jobId))).photos.map((p) => p.photo.sha256));
     const images = new Map<string, Buffer>();
-    for (const sha of new Set(hashes)) images.set(sha, await this.printable(organisationId, sha));
+    // A few at a time: sharp works in its own threads, so the cores share a photo record of fifty.
+    const queue = [...new Set(hashes)];
+    const worker = async () => {
+      for (let sha = queue.shift(); sha !== undefined; sha = queue.shift()) images.set(sha, await this.printable(organisationId, sha));
+    };
+    await Promise.all([worker(), worker(), worker(), worker()]);
     return images;
   }
 
-  /** The server-made display size, as a JPEG (PDFs carry JPEG and PNG, not WebP), small enough for a page of six. */
+  /**
+   * The server-made display size, as a JPEG (PDFs carry JPEG and PNG, not WebP), small enough for a page of six.
+   * Plain libjpeg, not mozjpeg: a tenth larger, three times quicker, and fifty photos had taken twenty seconds.
+   */
   private async printable(organisationId: string, sha: string): Promise<Buffer> {
     try {
       const display = await this.photoStorage.get(photoKey(organisationId, sha, 'display'));
-      return await sharp(display).resize({ width: 1100, height: 1100, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 78, mozjpeg: true }).toBuffer();
+      return await sharp(display).resize({ width: 1100, height: 1100, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 78 }).toBuffer();
     } catch (err) {
       if (err instanceof StoredFileMissing) throw new ConflictException('A photo of this job is missing from storage; it cannot be printed.');
       throw err;

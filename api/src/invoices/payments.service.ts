@@ -135,7 +135,10 @@ export class PaymentsService {
     return this.queue.read(async (em) => {
       const day = asOf ?? (await todayFor(em, user.organisationId));
       const invoices = await em.find(Invoice, { where: { organisationId: user.organisationId, kind: 'invoice', status: 'issued' } });
-      const summaries = await summarise(em, user.organisationId, invoices, day);
+      // Years of settled invoices owe nothing either way: only the rest need their jobs and customers read.
+      const accounts = await accountsOf(em, invoices, day);
+      const unsettled = invoices.filter((i) => (accounts.get(i.id)?.owedMinor ?? 0) !== 0);
+      const summaries = await summarise(em, user.organisationId, unsettled, day);
       const owing = summaries.filter((i) => i.account && i.account.owedMinor > 0);
       const byCustomer = new Map<string, { customerId: string | null; name: string; invoices: AgedDebtInvoice[] }>();
       for (const i of owing) {

@@ -29,8 +29,8 @@ export class SyncBatch {
   /** `entity:id` of the rows in `inserts`. */
   private readonly pending = new Set<string>();
   /** The change log's entry per `entity:rowId`, the latest. */
-  private readonly changes = new Map<string, { entity: SyncEntityName; rowId: string; organisationId: string; seq: number; siteId: string | null; deleted: boolean }>();
-  private appliedRows: AppliedRecord[] = [];
+  private readonly changes = new Map<string, { entity: SyncEntityName; rowId: string; organisationId: string; seq: number; siteId: string | null; deleted: boolean; changedAt: Date }>();
+  private appliedRows: Array<AppliedRecord & { appliedAt: Date }> = [];
   private seq: { value: number } | null = null;
 
   constructor(readonly em: EntityManager) {}
@@ -109,12 +109,13 @@ export class SyncBatch {
   recordChange(entity: SyncEntityName, row: SyncRecord, seq: number, deleted = false): void {
     const spec = SYNC_ENTITIES[entity];
     const siteId = spec.siteField === 'id' ? row.id : spec.siteField === 'siteId' && typeof row.siteId === 'string' ? row.siteId : null;
-    this.changes.set(`${entity}:${row.id}`, { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted });
+    this.changes.set(`${entity}:${row.id}`, { entity, rowId: row.id, organisationId: row.organisationId, seq, siteId, deleted, changedAt: this.now });
   }
 
   /** A mutation applied (or refused for good): a replay of its id gets the same answer, in this batch and after. */
   recordApplied(record: AppliedRecord): void {
-    this.appliedRows.push(record);
+    // Stamped here to the millisecond, not by the database's clock: compaction compares it with the device's last pull.
+    this.appliedRows.push({ ...record, appliedAt: this.now });
     this.applied.set(record.mutationId, record);
   }
 

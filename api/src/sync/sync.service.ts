@@ -22,6 +22,7 @@ import { WriteQueue } from '../common/write-queue.js';
 import { SyncChange, SyncDevice } from './entities/sync-bookkeeping.entity.js';
 import { SYNC_SCHEMAS, type SyncRecord, textOrNull } from './entities/sync-schemas.js';
 import { insertMany, selectMany } from './bulk-write.js';
+import { ChangeLogCompaction } from './change-log-compaction.js';
 import { ScopeService, type TechnicianScope } from './scope.service.js';
 import { SERVER_DEVICE_IDS, SyncEngine, versionsOf } from './sync-engine.service.js';
 
@@ -131,6 +132,8 @@ export class SyncService {
 
       let sitesThen: string[] | null = sitesNow;
       if (checkpoint > 0) {
+        // Deletions this device has not seen may be compacted away: it starts again, keeping what it has not sent.
+        if (checkpoint < (await ChangeLogCompaction.floorOf(em, user.organisationId))) return { changes: [], checkpoint: 0, hasMore: true, reset: true };
         const known = device && device.userId === user.id && device.organisationId === user.organisationId;
         if (known && checkpoint === device.checkpoint) sitesThen = device.scope;
         else if (known && checkpoint === device.previousCheckpoint) sitesThen = device.previousScope;

@@ -20,6 +20,8 @@ import { Refunds1796500200000 } from './1796500200000-Refunds.js';
 import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 import { VoidedRecords1796510000000 } from './1796510000000-VoidedRecords.js';
 import { LinkPerformance1796530000000 } from './1796530000000-LinkPerformance.js';
+import { ChangeLogCompaction1796550000000 } from './1796550000000-ChangeLogCompaction.js';
+import { ListIndexes1796550000010 } from './1796550000010-ListIndexes.js';
 
 /** Every migration in order; listed explicitly so the app, the CLI and Jest load the same set. */
 export const MIGRATIONS = [
@@ -45,4 +47,6 @@ export const MIGRATIONS = [
   MailCopies1796500300000,
   VoidedRecords1796510000000,
   LinkPerformance1796530000000,
+  ChangeLogCompaction1796550000000,
+  ListIndexes1796550000010,
 ];

@@ -10,6 +10,7 @@ import { TIMESTAMP } from '../../database/column-types.js';
  */
 @Entity('invoice')
 @Index('IDX_invoice_job', ['organisationId', 'jobId'])
+@Index('IDX_invoice_standing', ['organisationId', 'kind', 'status'])
 @Index('IDX_invoice_number', ['organisationId', 'kind', 'number'], { unique: true })
 export class Invoice extends TenantRow {
   @Column({ type: 'varchar', length: 36 })

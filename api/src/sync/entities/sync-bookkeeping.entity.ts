@@ -9,6 +9,7 @@ import { TIMESTAMP, NOW } from '../../database/column-types.js';
 @Entity('sync_change')
 @Index('IDX_sync_change_org_seq', ['organisationId', 'seq'])
 @Index('IDX_sync_change_site', ['siteId'])
+@Index('IDX_sync_change_tombstone', ['deleted', 'changedAt'])
 export class SyncChange {
   @PrimaryColumn({ type: 'varchar', length: 40 })
   entity: SyncEntityName;
@@ -27,6 +28,10 @@ export class SyncChange {
 
   @Column({ type: 'boolean', default: false })
   deleted: boolean;
+
+  /** When the entry was last written: a tombstone older than the retention period is compacted away. */
+  @Column({ type: TIMESTAMP, nullable: true })
+  changedAt: Date | null;
 }
 
 /** One counter for the whole server: the sequence every change is stamped with. */
@@ -41,6 +46,7 @@ export class SyncCounter {
 
 /** A mutation applied (or refused) once; a replay gets this stored result and changes nothing. */
 @Entity('applied_mutation')
+@Index('IDX_applied_mutation_applied', ['appliedAt'])
 export class AppliedMutation {
   @PrimaryColumn({ type: 'varchar', length: 64 })
   mutationId: string;
@@ -93,4 +99,20 @@ export class SyncDevice {
   lastPullAt: Date | null;
 }
 
-export const SYNC_BOOKKEEPING = [SyncChange, SyncCounter, AppliedMutation, SyncDevice];
+/**
+ * How far an organisation's change log has been compacted: tombstones up to `throughSeq` are gone, so a device
+ * whose checkpoint is below it may have missed a deletion and starts again from nothing (pull's `reset`).
+ */
+@Entity('sync_compaction')
+export class SyncCompaction {
+  @PrimaryColumn({ type: 'varchar', length: 36 })
+  organisationId: string;
+
+  @Column({ type: 'integer' })
+  throughSeq: number;
+
+  @Column({ type: TIMESTAMP })
+  compactedAt: Date;
+}
+
+export const SYNC_BOOKKEEPING = [SyncChange, SyncCounter, AppliedMutation, SyncDevice, SyncCompaction];

@@ -77,12 +77,25 @@ const CONFLICT_COLUMNS: Record<string, EntitySchemaColumnOptions> = {
   resolution: { type: 'simple-json', nullable: true },
 };
 
+/**
+ * Indexes for the office's lists, where their query plans showed whole-table scans on five years of data
+ * (`npm run bench -- scale`): a page of jobs reads its visits and documents by job, the jobs table filters by
+ * status in date order, and the conflicts inbox reads the open ones newest first.
+ */
+const LIST_INDEXES: Partial<Record<SyncEntityName, Array<{ name: string; columns: string[] }>>> = {
+  job: [{ name: 'IDX_job_status_created', columns: ['organisationId', 'status', 'createdAt'] }],
+  visit: [{ name: 'IDX_visit_job', columns: ['jobId'] }],
+  document: [{ name: 'IDX_document_job', columns: ['jobId'] }],
+  conflict: [{ name: 'IDX_conflict_open', columns: ['organisationId', 'resolvedAt', 'version'] }],
+};
+
 function buildSchema(name: SyncEntityName): EntitySchema<SyncRecord> {
   const spec = SYNC_ENTITIES[name];
   const own = Object.fromEntries(Object.entries(spec.fields).map(([field, f]) => [field, columnFor(f.type, !!f.required)]));
   const indices = [{ name: `IDX_${spec.table}_organisation_version`, columns: ['organisationId', 'version'] }];
   if (spec.siteField === 'siteId') indices.push({ name: `IDX_${spec.table}_site`, columns: ['siteId'] });
   if (spec.visitField === 'visitId') indices.push({ name: `IDX_${spec.table}_visit`, columns: ['visitId'] });
+  indices.push(...(LIST_INDEXES[name] ?? []));
   return new EntitySchema<SyncRecord>({
     name,
     tableName: spec.table,

@@ -38,6 +38,9 @@ class FakeServer implements SyncTransport {
   resetNextPull = false;
   /** Rows that leave the device's scope on its next pull. */
   evicted = new Set<string>();
+  /** Compacted up to here: a pull from an older checkpoint is told to start again, as the real server does. */
+  floor = 0;
+  resetsSent = 0;
 
   private key = (entity: string, id: string) => `${entity}:${id}`;
   private writer = new Map<string, string>();
@@ -93,6 +96,22 @@ class FakeServer implements SyncTransport {
     this.rows.set(k, { entity, row, seq: version, deleted: false });
   }
 
+  /** A deletion at the office. */
+  remove(entity: SyncEntityName, id: string): void {
+    const r = this.rows.get(this.key(entity, id))!;
+    r.seq = r.row.version = ++this.seq;
+    r.deleted = true;
+  }
+
+  /** The tombstones leave the log once past the retention period. */
+  compact(): void {
+    for (const [k, r] of this.rows) {
+      if (!r.deleted) continue;
+      this.rows.delete(k);
+      this.floor = Math.max(this.floor, r.seq);
+    }
+  }
+
   evict(entity: SyncEntityName, id: string): void {
     this.evicted.add(this.key(entity, id));
     this.rows.get(this.key(entity, id))!.seq = ++this.seq;
@@ -109,8 +128,9 @@ class FakeServer implements SyncTransport {
       this.duringPull = null;
       await run();
     }
-    if (this.resetNextPull) {
+    if (this.resetNextPull || (checkpoint > 0 && checkpoint < this.floor)) {
       this.resetNextPull = false;
+      this.resetsSent++;
       return { changes: [], checkpoint: 0, hasMore: false, reset: true };
     }
     const after = [...this.rows.entries()].filter(([, r]) => r.seq > checkpoint).sort((a, b) => a[1].seq - b[1].seq);
@@ -468,6 +488,52 @@ describe('sync engine: pull', () => {
     expect(await db.outbox.count()).toBe(1);
     await makeEngine().syncNow();
     expect(server.row('note', pendingNote)?.text).toBe('typed during the reset');
+  });
+
+  it('keeps every edit made offline past the retention period, sends it, and starts again without the rows deleted meanwhile', async () => {
+    const loft = '01900000-0000-7000-8000-0000000000f3';
+    const hall = '01900000-0000-7000-8000-0000000000f4';
+    server.edit('area', loft, { siteId: SITE, name: 'Loft' });
+    server.edit('area', hall, { siteId: SITE, name: 'Hall' });
+    await makeEngine().syncNow();
+    expect(await db.area.count()).toBe(2);
+
+    // Months out of signal: everything recorded waits on the phone.
+    server.offline = true;
+    await saveRecord('circuit', circuitId, { description: 'Sockets downstairs, extended to the garage', lengthM: 31 });
+    const noted = await note('Garage spur added from the ring');
+    const garage = await createRecord('area', { siteId: SITE, name: 'Garage' });
+    await saveRecord('area', hall, { level: 'Ground' });
+    await expect(makeEngine().syncNow()).resolves.toBe('offline');
+    expect(await db.outbox.count()).toBe(4);
+
+    // Meanwhile the office deletes the loft, edits the circuit, and the tombstone is compacted away.
+    server.remove('area', loft);
+    server.edit('circuit', circuitId, { kind: 'radial' });
+    server.compact();
+    server.offline = false;
+    let typedDuringReset = '';
+    server.duringPull = async () => {
+      typedDuringReset = await note('Typed while the phone started again');
+    };
+    await expect(makeEngine().syncNow()).resolves.toBe('done');
+
+    expect(server.resetsSent).toBe(1);
+    // Every edit made offline reached the server, beside the office's own change.
+    expect(server.row('circuit', circuitId)).toMatchObject({ description: 'Sockets downstairs, extended to the garage', lengthM: 31, kind: 'radial' });
+    expect(server.row('note', noted)?.text).toBe('Garage spur added from the ring');
+    expect(server.row('area', garage)?.name).toBe('Garage');
+    expect(server.row('area', hall)).toMatchObject({ name: 'Hall', level: 'Ground' });
+    // The phone started again: the loft it never heard was deleted is gone, its own rows are there.
+    expect(await db.area.get(loft)).toBeUndefined();
+    expect(await db.area.get(garage)).toMatchObject({ name: 'Garage' });
+    expect(await db.circuit.get(circuitId)).toMatchObject({ description: 'Sockets downstairs, extended to the garage', kind: 'radial' });
+    // What was typed while it started again is kept and goes with the next round.
+    expect(await db.note.get(typedDuringReset)).toMatchObject({ text: 'Typed while the phone started again' });
+    expect(await db.outbox.count()).toBe(1);
+    await makeEngine().syncNow();
+    expect(server.row('note', typedDuringReset)?.text).toBe('Typed while the phone started again');
+    expect(await db.outbox.count()).toBe(0);
   });
 
   it('clears the rows of a different user who used this phone before, but not the outbox', async () => {

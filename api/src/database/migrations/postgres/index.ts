@@ -14,6 +14,8 @@ import { PostgresRefunds1796500200001 } from './1796500200001-PostgresRefunds.js
 import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCopies.js';
 import { PostgresVoidedRecords1796510000001 } from './1796510000001-PostgresVoidedRecords.js';
 import { PostgresLinkPerformance1796530000001 } from './1796530000001-PostgresLinkPerformance.js';
+import { PostgresChangeLogCompaction1796550000001 } from './1796550000001-PostgresChangeLogCompaction.js';
+import { PostgresListIndexes1796550000011 } from './1796550000011-PostgresListIndexes.js';
 
 /** Every PostgreSQL migration in order; the SQLite set is ../index.ts. A schema change adds one to each. */
 export const POSTGRES_MIGRATIONS = [
@@ -33,4 +35,6 @@ export const POSTGRES_MIGRATIONS = [
   PostgresMailCopies1796500300001,
   PostgresVoidedRecords1796510000001,
   PostgresLinkPerformance1796530000001,
+  PostgresChangeLogCompaction1796550000001,
+  PostgresListIndexes1796550000011,
 ];
