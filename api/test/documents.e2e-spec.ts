@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import { T568A, T568B, VERDICT_DISCLAIMER } from '@wiretrail/core';
+import { DOCUMENT_KINDS, T568A, T568B, VERDICT_DISCLAIMER } from '@wiretrail/core';
 import { v7 as uuidv7 } from 'uuid';
 import { bearer, downloadPdf, jobByReference, pdfText, sha256 } from './document-helpers.js';
 import { DeviceMirror, mutation, push, type Session } from './sync-helpers.js';
@@ -314,7 +314,7 @@ describe('issuing documents', () => {
     await t.http.get(`/api/documents/${certificate.id}`).set(bearer(tech2)).expect(403);
     await issue(tech2, orchard.id, 'photo-record').expect(403);
     const bad = await issue(office, orchard.id, 'invoice').expect(400);
-    expect(bad.body.message).toEqual(['kind must be one of: minor-works, cabling-report, photo-record']);
+    expect(bad.body.message).toEqual([`kind must be one of: ${DOCUMENT_KINDS.join(', ')}`]);
     const list = (await t.http.get(`/api/jobs/${orchard.id}/documents`).set(bearer(office)).expect(200)).body.items as Array<{ issuedAt: string }>;
     // Newest first.
     expect(list.map((d) => d.issuedAt)).toEqual([...list.map((d) => d.issuedAt)].sort().reverse());

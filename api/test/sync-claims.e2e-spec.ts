@@ -132,7 +132,12 @@ describe('sync: claims a device cannot back up, and what a technician receives',
     });
 
     it('sends no job without a visit of theirs (an enquiry), and brings it once they are given a visit for it', async () => {
-      const enquiry = officeView.one('job', (r) => r.status === 'enquiry');
+      // An enquiry at a site of Aled's (Fernhill Close), with no visit yet.
+      const fernhill = officeView.one('site', (r) => r.name === 'Fernhill Close');
+      const enquiry = { id: uuidv7(), siteId: fernhill.id, title: 'Lights for the garden room' };
+      await catchUp(t, office, 'claims-desk');
+      const [asked] = await push(t, office, 'claims-desk', [mutation('job', enquiry.id, { siteId: fernhill.id, customerId: fernhill.customerId as string, title: enquiry.title, status: 'enquiry' })]);
+      expect(asked!.status).toBe('applied');
       const phone = new DeviceMirror('claims-tech2-enquiry');
       await phone.pullAll(t, tech2);
       expect(phone.find('site', (r) => r.id === enquiry.siteId)).toHaveLength(1);

@@ -57,6 +57,8 @@ export * from './certification/circuit-details-check.js';
 export * from './certification/notifiable-work.js';
 export * from './cabling/fibre-loss.js';
 export * from './cabling/link-performance.js';
+export * from './certification/installation-certificate.js';
+export * from './contracts/installation-certificate.js';
 export * from './cabling/link-test.js';
 export * from './cabling/segregation.js';
 export * from './contracts/link-tests.js';

@@ -80,7 +80,17 @@ for (const [size, viewport] of [
         if (size === 'phone') await expectTapTargets(page, `${screen} (${scheme})`);
       };
       const title = `Accessible screens ${size} ${scheme} (${Date.now().toString(36)})`;
-      await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 9, endHour: 12 });
+      const booked = await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title, startHour: 9, endHour: 12 });
+      // A circuit installed new on this visit, so the sign-off shows the installation certificate's schedule of inspections.
+      const office = await apiSession(request, ROLE_USERS.office);
+      const headers = { authorization: `Bearer ${office.accessToken}` };
+      const orchard = ((await (await request.get('/api/sites?search=Orchard%20Rise', { headers })).json()) as { items: { id: string }[] }).items[0]!;
+      const board = ((await (await request.get(`/api/boards?siteId=${orchard.id}`, { headers })).json()) as { items: { id: string }[] }).items[0]!;
+      const added = await request.post('/api/circuits', {
+        headers,
+        data: { siteId: orchard.id, boardId: board.id, number: `N${Date.now().toString(36).slice(-4)}`, description: `New radial ${size} ${scheme}`, kind: 'radial', newOnVisitId: booked.visitId },
+      });
+      expect(added.ok(), await added.text()).toBe(true);
       const tomorrow = `Accessible arrival ${size} ${scheme} (${Date.now().toString(36)})`;
       await bookVisit(request, { technicianEmail: ROLE_USERS.technician, siteName: 'Orchard Rise', title: tomorrow, startHour: 9, endHour: 12, dayOffset: 1 });
       await visitPage.openToday();
@@ -115,9 +125,17 @@ for (const [size, viewport] of [
       await expect(page.getByRole('form', { name: 'Readings for circuit 1' })).toBeVisible();
       await check('circuit readings');
       await page.goBack();
+      await page.getByRole('link', { name: 'Schedule of circuits, card by card' }).click();
+      await expect(page.getByRole('region', { name: 'Schedule of circuits' })).toBeVisible();
+      await check('board schedule');
+      await page.goBack();
 
       await visitPage.section('Sign-off');
-      await check('sign-off');
+      const inspections = page.getByRole('region', { name: 'Schedule of inspections' });
+      await inspections.getByRole('group', { name: /^Isolation, switching off/ }).getByRole('button', { name: 'Limitation' }).click();
+      // Bad input on purpose: a limitation with no note.
+      await expect(inspections.getByText('Say what limited the inspection of this item.')).toBeVisible();
+      await check('sign-off with the schedule of inspections');
 
       await visitPage.section('Cables');
       await page.getByRole('link', { name: /Record a cable/ }).click();
@@ -192,6 +210,17 @@ for (const [size, viewport] of [
       await expect(page.getByRole('dialog', { name: 'Record a link’s results' })).toBeVisible();
       await expectNoAxeViolations(page, testInfo, 'record a link’s results');
       await page.getByRole('dialog').getByRole('button', { name: 'Cancel' }).click();
+      // The installation certificate's issue dialog for the garden office radial, with its particulars refused as they stand.
+      await page.goto('/jobs?search=LED-0045');
+      await page.getByRole('link', { name: /Outside socket for the garden office/ }).first().click();
+      await officeJob.tab('Documents & links');
+      await page.getByRole('button', { name: 'Issue installation certificate' }).click();
+      const issueDialog = page.getByRole('dialog', { name: 'Issue the electrical installation certificate?' });
+      await expect(issueDialog.getByLabel('Ze (Ω)')).toBeVisible();
+      await issueDialog.getByRole('button', { name: 'Issue' }).click();
+      await expect(issueDialog.getByText('a TT installation needs its earth electrode’s resistance to earth.')).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'installation certificate issue dialog');
+      await issueDialog.getByRole('button', { name: 'Cancel' }).click();
       // A signed visit's own page: LED-0033's, with its sign-off, signature, notes and parts.
       await page.goto('/jobs?search=LED-0033');
       await page.getByRole('link', { name: /Extra double socket in the front bedroom/ }).first().click();

@@ -91,9 +91,10 @@ test('the office works the jobs board and table, reads a job’s cable schedule 
 
   // The site: its Ze corrected, after a value the form refuses, and a circuit added.
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Customers & sites' }).click();
-  await page.getByRole('grid', { name: 'Sites' }).getByRole('link', { name: 'Fernhill Close' }).click();
+  // Brightwater's practice: Fernhill Close's board is the demo's installation certificate, whose schedule every circuit joins.
+  await page.getByRole('grid', { name: 'Sites' }).getByRole('link', { name: 'Brightwater Dental, Harbour Yard' }).click();
   await page.getByRole('button', { name: 'Change site details' }).click();
-  const siteForm = page.getByRole('dialog', { name: /Change Fernhill Close/ });
+  const siteForm = page.getByRole('dialog', { name: /Change Brightwater Dental, Harbour Yard/ });
   await siteForm.getByLabel('Ze (Ω)').fill('-1');
   await siteForm.getByRole('button', { name: 'Save changes' }).click();
   await expect(siteForm.getByText('Ze must be at least 0 Ω.')).toBeVisible();

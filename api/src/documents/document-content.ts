@@ -1,4 +1,16 @@
-import { assessCableRun, type CableRunAssessment, judgeLinkTest, judgeMinorWorks, type LinkTestJudgement, type MinorWorksJudgement, type RuleSet, unvoided } from '@wiretrail/core';
+import {
+  assessCableRun,
+  type CableRunAssessment,
+  type InstallationJudgement,
+  type InstallationParticulars,
+  judgeInstallationCertificate,
+  judgeLinkTest,
+  judgeMinorWorks,
+  type LinkTestJudgement,
+  type MinorWorksJudgement,
+  type RuleSet,
+  unvoided,
+} from '@wiretrail/core';
 import { type EntityManager, In } from 'typeorm';
 import { inTurn } from '../common/in-turn.js';
 import { type JobFile, jobVisits, live } from '../paperwork/job-file.js';
@@ -30,11 +42,8 @@ export function minorWorksPrints(file: JobFile, content: MinorWorksContent): Rec
   ];
 }
 
-/**
- * The records behind a minor works certificate, judged against the rule set in force on the day the work was
- * completed; see judgeMinorWorks for when it may be issued.
- */
-export async function loadMinorWorks(em: EntityManager, file: JobFile): Promise<MinorWorksContent> {
+/** The records behind a certificate: the job's visits, what they recorded (voided records left out), the site's circuits and boards. */
+async function loadCircuitWork(em: EntityManager, file: JobFile) {
   const org = file.organisation.id;
   const visits = await jobVisits(em, file);
   const visitIds = visits.map((v) => v.id);
@@ -46,9 +55,47 @@ export async function loadMinorWorks(em: EntityManager, file: JobFile): Promise<
   );
   // Records voided on site are neither judged nor printed, so the certificate does not hold them either.
   const [tests, pointChanges] = [unvoided(allTests), unvoided(allPointChanges)];
-  const judgement = judgeMinorWorks({ visits, tests, pointChanges, circuits, earthing: file.site.earthing ?? null, boards });
   const recorded: RecordKey[] = [...tests.map((r) => ({ entity: 'testResult' as const, id: r.id })), ...pointChanges.map((r) => ({ entity: 'pointChange' as const, id: r.id }))];
-  return { ...judgement, boards: new Map(boards.map((b) => [b.id, b])), recorded };
+  return { records: { visits, tests, pointChanges, circuits, earthing: file.site.earthing ?? null, boards }, recorded };
+}
+
+/**
+ * The records behind a minor works certificate, judged against the rule set in force on the day the work was
+ * completed; see judgeMinorWorks for when it may be issued.
+ */
+export async function loadMinorWorks(em: EntityManager, file: JobFile): Promise<MinorWorksContent> {
+  const { records, recorded } = await loadCircuitWork(em, file);
+  const judgement = judgeMinorWorks(records);
+  return { ...judgement, boards: new Map(records.boards.map((b) => [b.id, b])), recorded };
+}
+
+export interface InstallationCertificateContent extends InstallationJudgement<SyncRecord<'visit'>, SyncRecord<'testResult'>, SyncRecord<'circuit'>> {
+  /** Every reading and point change recorded on the job's visits, held with the certificate. */
+  recorded: RecordKey[];
+}
+
+/**
+ * The records behind an electrical installation certificate, judged with the office's particulars (null to see what
+ * the records alone still lack); see judgeInstallationCertificate.
+ */
+export async function loadInstallationCertificate(em: EntityManager, file: JobFile, particulars: InstallationParticulars | null): Promise<InstallationCertificateContent> {
+  const { records, recorded } = await loadCircuitWork(em, file);
+  // A board deleted since is not scheduled.
+  return { ...judgeInstallationCertificate({ ...records, boards: records.boards.filter((b) => !b.deletedAt) }, particulars), recorded };
+}
+
+/**
+ * What an installation certificate prints, which its lock holds: the visits, what they recorded, every scheduled
+ * circuit and its board. The supply and the origin are the office's particulars, kept on the document itself, so the
+ * site's own record stays free to change.
+ */
+export function installationCertificatePrints(content: InstallationCertificateContent): RecordKey[] {
+  return [
+    ...content.visits.map((v) => ({ entity: 'visit' as const, id: v.id })),
+    ...content.recorded,
+    ...content.boards.map((b) => ({ entity: 'board' as const, id: b.id })),
+    ...content.schedule.map(({ circuit }) => ({ entity: 'circuit' as const, id: circuit.id })),
+  ];
 }
 
 export interface ScheduledCable {

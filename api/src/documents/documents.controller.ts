@@ -25,7 +25,13 @@ export class DocumentsController {
   /** Refused with 422 and every reason (naming the circuit and reading) when the records cannot support it yet. */
   @Post('jobs/:id/documents')
   issue(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) jobId: string, @Body() dto: IssueDocumentDto) {
-    return this.documents.issue(user, jobId, dto.kind, dto.coverage);
+    return this.documents.issue(user, jobId, dto.kind, dto.coverage, dto.particulars);
+  }
+
+  /** Which certificate the job's signed work needs, the particulars to start from, and what the records still lack. */
+  @Get('jobs/:id/installation-certificate')
+  installationPreview(@CurrentUser() user: AuthUser, @Param('id', new ParseUUIDPipe()) jobId: string) {
+    return this.documents.installationPreview(user, jobId);
   }
 
   /** Changes that the job's issued documents keep back, each beside the value as issued. */

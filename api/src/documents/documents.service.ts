@@ -1,6 +1,18 @@
 import { ConflictException, Inject, Injectable, Logger, NotFoundException, type OnModuleInit, UnprocessableEntityException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
-import { DEFAULT_RULE_SET, type DocumentCoverage, type HeldChange, type IssuedDocument, isSyncEntity, type SyncedRow } from '@wiretrail/core';
+import {
+  certificateThatApplies,
+  DEFAULT_RULE_SET,
+  defaultParticulars,
+  type DocumentCoverage,
+  type HeldChange,
+  type InstallationCertificatePreview,
+  type InstallationParticulars,
+  type IssuedDocument,
+  isSyncEntity,
+  readParticulars,
+  type SyncedRow,
+} from '@wiretrail/core';
 import { type EntityManager, In, IsNull } from 'typeorm';
 import { v7 as uuidv7 } from 'uuid';
 import type { AuthUser } from '../common/decorators/current-user.decorator.js';
@@ -11,12 +23,12 @@ import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { type CoveringLetter, coveringLetter, theWork } from '../paperwork/covering-letter.js';
 import { mailTemplate } from '../mail/mail-template.js';
-import { CABLING_REPORT_TITLE, documentTitle, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
+import { CABLING_REPORT_TITLE, documentTitle, INSTALLATION_CERTIFICATE_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
 import { takeNextNumber } from '../paperwork/document-numbers.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
 import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
 import { fingerprint, issuedPdfAttachment } from '../paperwork/issued-pdf.js';
-import { type JobFile, loadJobFile } from '../paperwork/job-file.js';
+import { type JobFile, jobVisits, loadJobFile } from '../paperwork/job-file.js';
 import { isLatestMessage, mailState } from '../paperwork/mail-state.js';
 import { dateWords } from '../paperwork/pdf/document-words.js';
 import type { Issue } from '../paperwork/pdf/job-heading.js';
@@ -28,12 +40,21 @@ import { type SyncRecord, syncRepository } from '../sync/entities/sync-schemas.j
 import { type Actor, type RecordKey, SyncEngine } from '../sync/sync-engine.service.js';
 import { toPulledRow, toSyncedRow } from '../sync/sync.service.js';
 import { User } from '../users/entities/user.entity.js';
-import { cableNotices, loadCableSchedule, loadMinorWorks, loadPhotoRecord, minorWorksPrints } from './document-content.js';
+import {
+  cableNotices,
+  installationCertificatePrints,
+  loadCableSchedule,
+  loadInstallationCertificate,
+  loadMinorWorks,
+  loadPhotoRecord,
+  minorWorksPrints,
+} from './document-content.js';
 import type { DocumentKind } from './dto/issue-document.dto.js';
 import { DOCUMENT_LOCK } from './document-lock.js';
 import type { ReviseDocumentDto } from './dto/revise-document.dto.js';
 import { heldChangesOf } from './held-changes.js';
 import { cablingReportPdf, cablingReportTitle } from './pdf/cabling-report-pdf.js';
+import { installationCertificatePdf } from './pdf/installation-certificate-pdf.js';
 import { minorWorksPdf } from './pdf/minor-works-pdf.js';
 import { photoRecordPdf } from './pdf/photo-record-pdf.js';
 import { signatureImage } from './signature-image.js';
@@ -43,6 +64,7 @@ const KINDS: Record<DocumentKind, { prefix: string; title: string }> = {
   'minor-works': { prefix: 'MW', title: MINOR_WORKS_TITLE },
   'cabling-report': { prefix: 'CR', title: CABLING_REPORT_TITLE },
   'photo-record': { prefix: 'PR', title: PHOTO_RECORD_TITLE },
+  'installation-certificate': { prefix: 'EIC', title: INSTALLATION_CERTIFICATE_TITLE },
 };
 
 export const DOCUMENT_MAIL = 'document';
@@ -70,6 +92,8 @@ interface Prepared {
   title?: string;
   printed: RecordKey[];
   notices: string[];
+  /** An installation certificate's particulars as checked, kept on its row for its revisions. */
+  particulars?: InstallationParticulars;
 }
 
 
@@ -110,10 +134,10 @@ export class DocumentsService implements OnModuleInit {
     });
   }
 
-  async issue(user: AuthUser, jobId: string, kind: DocumentKind, coverage?: DocumentCoverage): Promise<IssuedAnswer> {
+  async issue(user: AuthUser, jobId: string, kind: DocumentKind, coverage?: DocumentCoverage, particulars?: unknown): Promise<IssuedAnswer> {
     // Photos are made print-ready before the transaction: their bytes never change, and the write queue should not wait on them.
     const images = kind === 'photo-record' ? await this.printablePhotos(user.organisationId, jobId) : new Map<string, Buffer>();
-    const { row, notices } = await this.queue.run((em) => this.issueIn(em, user, jobId, kind, images, coverage ?? null, null));
+    const { row, notices } = await this.queue.run((em) => this.issueIn(em, user, jobId, kind, images, coverage ?? null, null, particulars));
     this.logger.log(`Issued ${row.number} for job ${jobId}`);
     return { ...toPulledRow(row), notices };
   }
@@ -135,7 +159,8 @@ export class DocumentsService implements OnModuleInit {
       const revision: Revision = { old, reason: dto.reason.trim(), id: uuidv7() };
       await this.engine.serverWrite(em, actor, 'document', [{ row: old, changes: { supersededAt: new Date().toISOString(), supersededById: revision.id } }]);
       await this.takeChanges(em, actor, old, dto.take ?? []);
-      return this.issueIn(em, user, old.jobId, old.kind as DocumentKind, images, (old.coverage as DocumentCoverage | null) ?? null, revision);
+      // A revised installation certificate keeps the particulars the office gave, unless it gives them again.
+      return this.issueIn(em, user, old.jobId, old.kind as DocumentKind, images, (old.coverage as DocumentCoverage | null) ?? null, revision, dto.particulars ?? old.particulars);
     });
     this.logger.log(`Issued ${row.number}, superseding ${first.number}`);
     return { ...toPulledRow(row), notices };
@@ -172,12 +197,13 @@ export class DocumentsService implements OnModuleInit {
 
   private async issueIn(
     em: EntityManager, user: AuthUser, jobId: string, kind: DocumentKind, images: Map<string, Buffer>, coverage: DocumentCoverage | null, revision: Revision | null,
+    particulars?: unknown,
   ): Promise<{ row: SyncRecord; notices: string[] }> {
     const file = await loadJobFile(em, user.organisationId, jobId);
     const issuedAt = new Date();
     const id = revision?.id ?? uuidv7();
     // Numbered last, after every refusal, and in this transaction: a refused issue uses no number.
-    const prepared = await this.prepare(em, kind, file, images, coverage ?? 'job');
+    const prepared = await this.prepare(em, kind, file, images, coverage ?? 'job', particulars);
     const number = await takeNextNumber(em, user.organisationId, kind, KINDS[kind].prefix);
     const supersedes = revision ? { number: revision.old.number ?? '', reason: revision.reason } : undefined;
     const rendered = await prepared.render({ number, issuedAt, issuedBy: user.name, supersedes });
@@ -199,6 +225,7 @@ export class DocumentsService implements OnModuleInit {
       issuedAt: issuedAt.toISOString(),
       issuedById: user.id,
       ...(kind === 'cabling-report' ? { coverage: coverage ?? 'job' } : {}),
+      ...(prepared.particulars ? { particulars: prepared.particulars } : {}),
       ...(revision ? { supersedesId: revision.old.id, revisionReason: revision.reason } : {}),
     };
     const row = await this.engine.serverCreate(em, officeActor(user), 'document', id, set);
@@ -206,9 +233,30 @@ export class DocumentsService implements OnModuleInit {
   }
 
   /** Loads and checks what the document needs (refusing with every reason at once), and returns how to render it. */
-  private async prepare(em: EntityManager, kind: DocumentKind, file: JobFile, images: Map<string, Buffer>, coverage: DocumentCoverage): Promise<Prepared> {
+  private async prepare(em: EntityManager, kind: DocumentKind, file: JobFile, images: Map<string, Buffer>, coverage: DocumentCoverage, given?: unknown): Promise<Prepared> {
     const rules = DEFAULT_RULE_SET;
     switch (kind) {
+      case 'installation-certificate': {
+        const read = readParticulars(given);
+        const content = await loadInstallationCertificate(em, file, read.particulars);
+        // The records' reasons first, then what the office's particulars lack.
+        const problems = read.particulars ? content.problems : [...content.problems, ...read.problems];
+        if (problems.length || !content.rules || !read.particulars) throw new UnprocessableEntityException(problems);
+        const signer = content.visits[content.visits.length - 1]!;
+        const signature = await signatureImage(signer.signatureSvg as string);
+        const inForce = content.rules;
+        const particulars = read.particulars;
+        return {
+          render: async (issue) => ({
+            pdf: await installationCertificatePdf({ issue, file, content, rules: inForce, signature, particulars }),
+            visitId: signer.id,
+            signerName: signer.signedByName as string,
+          }),
+          printed: installationCertificatePrints(content),
+          notices: [],
+          particulars,
+        };
+      }
       case 'minor-works': {
         const content = await loadMinorWorks(em, file);
         if (content.problems.length || !content.rules) throw new UnprocessableEntityException(content.problems);
@@ -262,6 +310,36 @@ export class DocumentsService implements OnModuleInit {
         };
       }
     }
+  }
+
+  /**
+   * What the office's issue dialog starts from: which certificate the job's signed work needs and why, the
+   * particulars as the site's records and the signer give them, and what the records still lack.
+   */
+  installationPreview(user: AuthUser, jobId: string): Promise<InstallationCertificatePreview> {
+    return this.queue.read(async (em) => {
+      const file = await loadJobFile(em, user.organisationId, jobId);
+      const content = await loadInstallationCertificate(em, file, null);
+      // What the work needs follows from what was recorded on any of the job's visits, signed or not yet.
+      const visitIds = (await jobVisits(em, file)).map((v) => v.id);
+      const circuits = await syncRepository(em, 'circuit').find({ where: { siteId: file.site.id, organisationId: user.organisationId, deletedAt: IsNull() } });
+      const boards = await syncRepository(em, 'board').find({ where: { siteId: file.site.id, organisationId: user.organisationId, deletedAt: IsNull() } });
+      const choice = certificateThatApplies({ visitIds, circuits, boards });
+      const signer = content.visits.at(-1);
+      const comments = content.visits.map((v) => (typeof v.existingInstallationComments === 'string' ? v.existingInstallationComments.trim() : '')).filter(Boolean);
+      return {
+        choice,
+        defaults: defaultParticulars({
+          site: file.site,
+          signer: signer?.signedByName ?? '',
+          choice,
+          boardReplaced: boards.some((b) => visitIds.includes(b.replacedOnVisitId ?? '')),
+          existingComments: comments,
+        }),
+        problems: content.problems,
+        circuits: content.schedule.map((s) => `${s.board.name}: circuit ${s.circuit.number}${s.circuit.description ? ` (${s.circuit.description})` : ''}`),
+      };
+    });
   }
 
   /** Changes kept back by the job's standing documents, each beside the value as issued. */

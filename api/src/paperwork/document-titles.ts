@@ -6,12 +6,14 @@ export const MINOR_WORKS_TITLE = 'Minor works certificate';
 export const CABLING_REPORT_TITLE = 'Wiremap and length record';
 export const CABLING_CERTIFICATION_TITLE = 'Cabling certification report';
 export const PHOTO_RECORD_TITLE = 'Photo record';
+export const INSTALLATION_CERTIFICATE_TITLE = 'Electrical installation certificate';
 
 /** What each kind of document is called: on its PDF, in the e-mail it goes with, and where an invoice lists it. */
 export const DOCUMENT_TITLES: Record<(typeof DOCUMENT_KINDS)[number], string> = {
   'minor-works': MINOR_WORKS_TITLE,
   'cabling-report': CABLING_REPORT_TITLE,
   'photo-record': PHOTO_RECORD_TITLE,
+  'installation-certificate': INSTALLATION_CERTIFICATE_TITLE,
 };
 
 /**

@@ -54,7 +54,14 @@ function samples(type: FieldType, field = ''): { good: unknown[]; bad: unknown[]
     case 'datetime':
       return { good: ['2026-03-14T09:26:53.589Z'], bad: ['2026-03-14', 'soon'] };
     case 'json':
-      // The one JSON field the office writes: the visit's departures (BS 7671 Regs 120.3, 133.1.3, 133.5).
+      // The schedule of inspections, by item.
+      if (field === 'inspectionMarks') {
+        return {
+          good: [{}, { intake: { state: 'done' }, isolation: { state: 'limitation', note: 'Isolator behind stored furniture' } }],
+          bad: ['done', [], { intake: { state: 'maybe' } }, { intake: 'done' }, { intake: { state: 'limitation', note: 42 } }, { intake: { state: 'done', extra: 1 } }],
+        };
+      }
+      // The other JSON field the office writes: the visit's departures (BS 7671 Regs 120.3, 133.1.3, 133.5).
       return {
         good: [[], [{ regulation: '522.6.202', instead: 'Earthed metal conduit', noLessSafe: 'Mechanical protection in place of the zones' }]],
         bad: ['a departure', [{ regulation: 42, instead: 'x', noLessSafe: 'y' }], [{ regulation: 'x', instead: 'y' }], [{ regulation: 'x', instead: 'y', noLessSafe: 'z', extra: 1 }]],
@@ -76,7 +83,7 @@ describe.each(Object.entries(DTOS))('the %s DTO', (entity, dto) => {
   });
 
   it.each(Object.entries(spec.fields))('limits %s as the registry does', async (field, f) => {
-    const { good, bad } = samples(f.type, (entity === 'customer' && field === 'phone') || (entity === 'site' && field === 'postcode') ? field : '');
+    const { good, bad } = samples(f.type, (entity === 'customer' && field === 'phone') || (entity === 'site' && field === 'postcode') || f.type.kind === 'json' ? field : '');
     for (const value of good) expect([value, await problems(dto, field, value)]).toEqual([value, []]);
     for (const value of bad) {
       const found = await problems(dto, field, value);

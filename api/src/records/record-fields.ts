@@ -1,7 +1,7 @@
 import { applyDecorators } from '@nestjs/common';
 import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { checkPhone, checkPostcode } from '@wiretrail/core';
+import { checkPhone, checkPostcode, INSPECTION_MARK_STATES } from '@wiretrail/core';
 import { NormalisedText, VisibleText } from '../common/validators/typed-text.js';
 import {
   ArrayUnique,
@@ -145,6 +145,33 @@ export function DepartureEntriesField(o: FieldOptions = {}): PropertyDecorator {
               }),
           ),
         defaultMessage: () => `$property must be a list of departures, each with regulation, instead and noLessSafe as text of at most ${DEPARTURE_PART_MAX} characters`,
+      },
+    }),
+  );
+}
+
+const INSPECTION_NOTE_MAX = 500;
+
+/** The schedule of inspections as a visit records it: by item, its state (done, not applicable, limitation) and a note. */
+export function InspectionMarksField(o: FieldOptions = {}): PropertyDecorator {
+  return applyDecorators(
+    ...presence(o, { type: 'object', additionalProperties: { type: 'object', properties: { state: { type: 'string', enum: [...INSPECTION_MARK_STATES] }, note: { type: 'string' } } } }),
+    ValidateBy({
+      name: 'inspectionMarks',
+      validator: {
+        validate: (value: unknown) =>
+          typeof value === 'object' &&
+          value !== null &&
+          !Array.isArray(value) &&
+          Object.keys(value).length <= 200 &&
+          Object.entries(value).every(([id, mark]: [string, unknown]) => {
+            if (id.length > 60 || typeof mark !== 'object' || mark === null || Array.isArray(mark)) return false;
+            if (!Object.keys(mark).every((k) => k === 'state' || k === 'note')) return false;
+            const state: unknown = Object.getOwnPropertyDescriptor(mark, 'state')?.value;
+            const note: unknown = Object.getOwnPropertyDescriptor(mark, 'note')?.value;
+            return (INSPECTION_MARK_STATES as readonly unknown[]).includes(state) && (note === undefined || note === null || (typeof note === 'string' && note.length <= INSPECTION_NOTE_MAX));
+          }),
+        defaultMessage: () => `$property must map each inspection item to its state (${INSPECTION_MARK_STATES.join(', ')}) and a note of at most ${INSPECTION_NOTE_MAX} characters`,
       },
     }),
   );

@@ -51,7 +51,13 @@ export type MinorWorksFindingKind =
   | 'missing'
   | 'unjudged'
   | 'fail'
-  | 'departure-incomplete';
+  | 'departure-incomplete'
+  // An installation certificate's own: the work is minor works, a new circuit's details, the inspections, instruments, particulars.
+  | 'not-installation-work'
+  | 'details-missing'
+  | 'inspection'
+  | 'instruments'
+  | 'particulars';
 
 /** A departure as the certificate prints it, with the visit that recorded it. */
 export interface RecordedDeparture extends DepartureEntry {
@@ -88,7 +94,7 @@ export interface MinorWorksJudgement<Visit extends VisitRecord = VisitRecord, Te
   readonly rules: RuleSet | null;
 }
 
-const READINGS_ADVICE =
+export const READINGS_ADVICE =
   'Record the missing readings, put right what fails and test the circuit again: a departure from the standard never stands in for a test result.';
 
 /** A departure's three parts, in the words a refusal uses. */

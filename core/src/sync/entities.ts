@@ -135,6 +135,15 @@ export type DepartureEntry = {
   readonly instead: string;
   readonly noLessSafe: string;
 };
+/** How one item of the schedule of inspections was found: inspected, not applicable, or inspected only in part. */
+export const INSPECTION_MARK_STATES = ['done', 'not-applicable', 'limitation'] as const;
+/** One item's mark on the schedule of inspections; a limitation says what limited it. */
+export type InspectionMark = {
+  readonly state: (typeof INSPECTION_MARK_STATES)[number];
+  readonly note?: string | null;
+};
+/** The schedule of inspections as a visit recorded it, by item id (core's INSPECTION_ITEMS). */
+export type InspectionMarks = { readonly [itemId: string]: InspectionMark };
 export const CABLE_MEDIA = ['Cat5e', 'Cat6', 'Cat6A', 'coax', 'speaker', 'HDMI', 'fibre', 'other'] as const;
 export const CABLE_STATUSES = ['unidentified', 'traced', 'terminated', 'tested'] as const;
 export const TRACE_METHODS = ['tone-and-probe', 'continuity', 'tdr', 'visual'] as const;
@@ -161,7 +170,7 @@ export type TraceEntry = {
 export const POINT_ACTIONS = ['add', 'move', 'remove', 'replace'] as const;
 export const POINT_CONNECTIONS = ['ring-extension', 'unfused-spur', 'fused-spur', 'radial'] as const;
 export const PHOTO_SUBJECTS = ['cableRun', 'pointChange', 'circuit'] as const;
-export const DOCUMENT_KINDS = ['minor-works', 'cabling-report', 'photo-record'] as const;
+export const DOCUMENT_KINDS = ['minor-works', 'cabling-report', 'photo-record', 'installation-certificate'] as const;
 export const DOCUMENT_EMAIL_STATES = ['queued', 'sent', 'failed'] as const;
 /** What a cabling report covers: the cables recorded or tested on the job's visits, or the site's whole schedule. */
 export const DOCUMENT_COVERAGES = ['job', 'site'] as const;
@@ -225,6 +234,8 @@ const REGISTRY = {
       faultProtection: seen(oneOf(...FAULT_PROTECTION_METHODS)),
       // The visit on which this circuit was installed new: that work needs an installation certificate.
       newOnVisitId: seen(ref('visit')),
+      // The schedule of an installation certificate also states the type of wiring and the device's breaking capacity.
+      wiringType: seen(str(40)), deviceBreakingKa: seen(num(0.5, 100)),
       recordedAt: seen(when),
     },
   },
@@ -254,6 +265,8 @@ const REGISTRY = {
       // The certificate's declaration names the signer's position; the existing installation is commented on,
       // and a permitted exception (no fault protection where the regulations allow it) names its risk assessment.
       signedByPosition: seen(str(100)), existingInstallationComments: seen(text()), permittedExceptions: seen(text()), riskAssessmentRef: seen(str(200)),
+      // The schedule of inspections of an installation certificate, tapped item by item on site.
+      inspectionMarks: seen(jsonOf<InspectionMarks>()),
     },
   },
   photo: {
@@ -353,6 +366,8 @@ const REGISTRY = {
       supersededAt: office(when), supersededById: office(ref('document')),
       // A cabling report covers the job's cables, or the site's whole schedule when the office chose it at issue.
       coverage: office(oneOf(...DOCUMENT_COVERAGES)),
+      // What the office filled in on issuing an installation certificate (supply, origin, responsibilities), kept for its revisions.
+      particulars: office(json),
     },
   },
   priceItem: {

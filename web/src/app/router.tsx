@@ -22,6 +22,7 @@ export const technicianScreens: RouteObject[] = [
         { path: paths.visitPoint.path, lazy: () => import('./routes/technician/visit/point') },
         { path: paths.visitCircuits.path, lazy: () => import('./routes/technician/visit/circuits') },
         { path: paths.visitCircuit.path, lazy: () => import('./routes/technician/visit/circuit') },
+        { path: paths.visitSchedule.path, lazy: () => import('./routes/technician/visit/schedule') },
         { path: paths.visitSignOff.path, lazy: () => import('./routes/technician/visit/sign-off') },
       ],
     },

@@ -14,6 +14,8 @@ export const paths = {
   visitPoint: { path: 'points/:pointId', href: (visitId: string, pointId: string | 'new') => `/visits/${encodeURIComponent(visitId)}/points/${encodeURIComponent(pointId)}` },
   visitCircuits: { path: 'tests', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/tests` },
   visitCircuit: { path: 'tests/:circuitId', href: (visitId: string, circuitId: string) => `/visits/${encodeURIComponent(visitId)}/tests/${encodeURIComponent(circuitId)}` },
+  /** The schedule of circuits an installation certificate carries, one card per circuit. */
+  visitSchedule: { path: 'schedule', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/schedule` },
   visitSignOff: { path: 'sign-off', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/sign-off` },
   cableLabels: { path: '/visits/:visitId/labels', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/labels` },
   /** Where a cable label's QR code points: sends a technician to the record on the phone, the office to the job's schedule. */

@@ -65,6 +65,12 @@ export class CreateCircuitDto {
   @IdField('visit', { description: 'the visit on which the circuit was installed new (it then needs an installation certificate)' })
   newOnVisitId?: string | null;
 
+  @TextField(40, { example: 'SWA', description: 'type of wiring, as the schedule of an installation certificate states it' })
+  wiringType?: string | null;
+
+  @NumberField(0.5, 100, { example: 6, description: 'the protective device\'s rated breaking capacity, kA' })
+  deviceBreakingKa?: number | null;
+
   @DateTimeField({ description: 'when the circuit was first recorded on a phone; set there, once' })
   recordedAt?: string | null;
 }

@@ -19,6 +19,7 @@ import { PeopleAndMemberships1796500100000 } from './1796500100000-PeopleAndMemb
 import { Refunds1796500200000 } from './1796500200000-Refunds.js';
 import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 import { VoidedRecords1796510000000 } from './1796510000000-VoidedRecords.js';
+import { InstallationCertificate1796520000000 } from './1796520000000-InstallationCertificate.js';
 import { LinkPerformance1796530000000 } from './1796530000000-LinkPerformance.js';
 import { ChangeLogCompaction1796550000000 } from './1796550000000-ChangeLogCompaction.js';
 import { ListIndexes1796550000010 } from './1796550000010-ListIndexes.js';
@@ -46,6 +47,7 @@ export const MIGRATIONS = [
   Refunds1796500200000,
   MailCopies1796500300000,
   VoidedRecords1796510000000,
+  InstallationCertificate1796520000000,
   LinkPerformance1796530000000,
   ChangeLogCompaction1796550000000,
   ListIndexes1796550000010,

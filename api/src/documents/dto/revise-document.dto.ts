@@ -1,3 +1,5 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import { IsObject, IsOptional } from 'class-validator';
 import { IdListField, TextField } from '../../records/record-fields.js';
 
 export class ReviseDocumentDto {
@@ -6,4 +8,9 @@ export class ReviseDocumentDto {
 
   @IdListField('conflict', { description: 'changes kept back by the document’s lock to make before the revision is issued' })
   take?: string[];
+
+  @ApiPropertyOptional({ type: 'object', additionalProperties: true, description: 'for an installation certificate: particulars given again (else those of the document revised)' })
+  @IsOptional()
+  @IsObject({ message: 'particulars must be an object' })
+  particulars?: Record<string, unknown>;
 }

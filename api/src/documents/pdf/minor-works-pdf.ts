@@ -26,20 +26,20 @@ export interface MinorWorksPdf {
   signature: Buffer;
 }
 
-type Certified = CertifiedCircuit<SyncRecord<'visit'>, SyncRecord<'testResult'>, SyncRecord<'circuit'>>;
+export type Certified = CertifiedCircuit<SyncRecord<'visit'>, SyncRecord<'testResult'>, SyncRecord<'circuit'>>;
 const KIND_WORDS: Record<string, string> = { ring: 'Ring final', radial: 'Radial', lighting: 'Lighting', other: 'Other' };
 
 const text = (v: unknown): string => (typeof v === 'string' ? v.trim() : '');
 const number = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
 
-function deviceWords(c: Certified['circuit']): string {
+export function deviceWords(c: Certified['circuit']): string {
   const type = text(c.deviceType);
   const rating = number(c.deviceRatingA) === null ? '' : `${c.deviceRatingA} A`;
   const kind = !type ? '' : /^[BCD]$/.test(type) ? `Type ${type} circuit-breaker` : `${type} fuse`;
   return joined([kind, rating, text(c.deviceStandard)], ', ') || 'Not recorded';
 }
 
-function rcdWords(c: Certified['circuit']): string {
+export function rcdWords(c: Certified['circuit']): string {
   if (number(c.rcdRatingMa) === null) return 'None';
   const rated = number(c.rcdRatedCurrentA);
   return joined(
@@ -53,14 +53,14 @@ const FAULT_PROTECTION_WORDS: Record<string, string> = {
   'overcurrent-device': 'Automatic disconnection by the protective device',
   rcd: 'Automatic disconnection by the RCD',
 };
-const faultProtectionWords = (c: Certified['circuit']): string => FAULT_PROTECTION_WORDS[text(c.faultProtection)] ?? 'Not recorded';
+export const faultProtectionWords = (c: Certified['circuit']): string => FAULT_PROTECTION_WORDS[text(c.faultProtection)] ?? 'Not recorded';
 
-const BONDING_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present', none: 'No such service' };
-const EARTHING_CONDUCTOR_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present' };
-const stateWords = (words: Record<string, string>, v: unknown) => words[text(v)] ?? 'Not recorded';
+export const BONDING_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present', none: 'No such service' };
+export const EARTHING_CONDUCTOR_WORDS: Record<string, string> = { adequate: 'Present and adequate', inadequate: 'Present, not adequate', absent: 'Not present' };
+export const stateWords = (words: Record<string, string>, v: unknown) => words[text(v)] ?? 'Not recorded';
 
 /** The test buttons' lines are printed even where nothing was tried, so the certificate says why there is no result. */
-function buttonRows(c: Certified): Row[] {
+export function buttonRows(c: Certified): Row[] {
   const rows: Row[] = [];
   const keys = new Set(c.assessment.lines.map((l) => l.key));
   if (!keys.has('rcd-button')) rows.push({ cells: [{ text: 'RCD test button', weight: 'medium' }, number(c.circuit.rcdRatingMa) === null ? 'No RCD' : 'Not tried', '', ''] });
@@ -86,7 +86,7 @@ function readingsOfLine(line: CircuitTestLine, test: Certified['test']): string 
   return text;
 }
 
-function testRows(c: Certified): Row[] {
+export function testRows(c: Certified): Row[] {
   return c.assessment.lines.map((line) => ({
     cells: [
       { text: line.label + (line.required ? '' : ' (optional)'), weight: 'medium' },

@@ -1,5 +1,5 @@
-import { type DepartureEntry, VISIT_STATUSES } from '@wiretrail/core';
-import { ChoiceField, DateTimeField, DepartureEntriesField, IdField, IdListField, TextField } from '../../records/record-fields.js';
+import { type DepartureEntry, type InspectionMarks, VISIT_STATUSES } from '@wiretrail/core';
+import { ChoiceField, DateTimeField, DepartureEntriesField, IdField, InspectionMarksField, IdListField, TextField } from '../../records/record-fields.js';
 
 export class CreateVisitDto {
   @IdField('job', { required: true })
@@ -58,6 +58,9 @@ export class CreateVisitDto {
 
   @TextField(200, { description: 'the risk assessment behind a permitted exception' })
   riskAssessmentRef?: string | null;
+
+  @InspectionMarksField({ description: 'the schedule of inspections of an installation certificate, by item: done, not applicable, or a limitation with its note' })
+  inspectionMarks?: InspectionMarks | null;
 
   @DateTimeField()
   signedAt?: string | null;

@@ -8,6 +8,12 @@ export const DOCUMENT_KINDS: Array<{ kind: DocumentKind; name: string; issue: st
     about: 'For the circuits altered and tested on the job’s signed visits, with every reading judged again.',
   },
   {
+    kind: 'installation-certificate',
+    name: 'Electrical installation certificate',
+    issue: 'Issue installation certificate',
+    about: 'For a new circuit or a replaced board: every circuit of the board scheduled with its readings judged again, the inspections, the supply and the origin.',
+  },
+  {
     kind: 'cabling-report',
     name: 'Cabling report',
     issue: 'Issue cabling report',

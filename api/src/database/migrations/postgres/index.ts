@@ -13,6 +13,7 @@ import { PostgresPeopleAndMemberships1796500100001 } from './1796500100001-Postg
 import { PostgresRefunds1796500200001 } from './1796500200001-PostgresRefunds.js';
 import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCopies.js';
 import { PostgresVoidedRecords1796510000001 } from './1796510000001-PostgresVoidedRecords.js';
+import { PostgresInstallationCertificate1796520000001 } from './1796520000001-PostgresInstallationCertificate.js';
 import { PostgresLinkPerformance1796530000001 } from './1796530000001-PostgresLinkPerformance.js';
 import { PostgresChangeLogCompaction1796550000001 } from './1796550000001-PostgresChangeLogCompaction.js';
 import { PostgresListIndexes1796550000011 } from './1796550000011-PostgresListIndexes.js';
@@ -34,6 +35,7 @@ export const POSTGRES_MIGRATIONS = [
   PostgresRefunds1796500200001,
   PostgresMailCopies1796500300001,
   PostgresVoidedRecords1796510000001,
+  PostgresInstallationCertificate1796520000001,
   PostgresLinkPerformance1796530000001,
   PostgresChangeLogCompaction1796550000001,
   PostgresListIndexes1796550000011,

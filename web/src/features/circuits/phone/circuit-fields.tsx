@@ -53,6 +53,9 @@ export const circuitDetailsSchema = z.object({
   referenceMethod: z.string().max(20, 'The reference method must be at most 20 characters.'),
   pointsServed: readingField('circuit', 'pointsServed', 'The number of points served'),
   maxDisconnectionS: readingField('circuit', 'maxDisconnectionS', 'The maximum disconnection time', 's'),
+  // An installation certificate's schedule also states these.
+  wiringType: z.string().max(40, 'The type of wiring must be at most 40 characters.'),
+  deviceBreakingKa: readingField('circuit', 'deviceBreakingKa', 'The breaking capacity', 'kA'),
 });
 export type CircuitDetails = z.infer<typeof circuitDetailsSchema>;
 
@@ -112,6 +115,8 @@ export function circuitDetailsOf(c: CircuitRow | null, visitId?: string, earthin
     referenceMethod: c?.referenceMethod ?? '',
     pointsServed: readingText(c?.pointsServed),
     maxDisconnectionS: readingText(c?.maxDisconnectionS),
+    wiringType: c?.wiringType ?? '',
+    deviceBreakingKa: readingText(c?.deviceBreakingKa),
   };
   if (!c) return recorded;
   const offers = certificateOffers(recorded, earthing);
@@ -146,10 +151,16 @@ export function circuitDetailFields(v: CircuitDetails, visitId?: string, current
     referenceMethod: v.referenceMethod.trim() || null,
     pointsServed: usableReading(v.pointsServed),
     maxDisconnectionS: usableReading(v.maxDisconnectionS),
+    wiringType: v.wiringType.trim() || null,
+    deviceBreakingKa: usableReading(v.deviceBreakingKa),
   };
 }
 
 const SIZES = CONDUCTOR_SIZES_MM2.map(String);
+/** Types of wiring a schedule usually names (common trade practice): offered, never assumed. */
+const WIRING_TYPES = ['Twin and earth', 'SWA', 'Singles in conduit', 'Singles in trunking', 'MICC', 'FP200'];
+/** Breaking capacities printed on domestic circuit-breakers and RCBOs (kA; common trade practice). */
+const BREAKING_CAPACITIES = ['6', '10', '16'];
 
 /** The ratings a device is made in, to offer once the device is known. */
 export const ratingsOffered = (deviceType: string): string[] => (deviceType ? (standardRatings(deviceType) ?? []).map(String) : []);
@@ -293,6 +304,30 @@ export function CertificateDetailFields({
       <Stack direction="row" spacing={1.5}>
         <TextField label="Reference method" placeholder="C" {...register('referenceMethod')} error={!!errors.referenceMethod} helperText={errors.referenceMethod?.message ?? 'How the cable is installed, as in Appendix 4.'} />
         <TextField label="Points served" {...register('pointsServed')} error={!!errors.pointsServed} helperText={errors.pointsServed?.message ?? ' '} slotProps={{ htmlInput: { inputMode: 'numeric' } }} sx={{ maxWidth: 130 }} />
+      </Stack>
+      <Stack direction="row" spacing={1.5}>
+        <Controller
+          control={control}
+          name="wiringType"
+          render={({ field }) => (
+            <OfferedValuesInput label="Type of wiring" {...field} options={WIRING_TYPES} error={!!errors.wiringType} helperText={errors.wiringType?.message ?? 'Twin and earth, SWA, singles in conduit…'} sx={{ flex: 1 }} />
+          )}
+        />
+        <Controller
+          control={control}
+          name="deviceBreakingKa"
+          render={({ field }) => (
+            <OfferedValuesInput
+              label="Breaking capacity (kA)"
+              {...field}
+              options={BREAKING_CAPACITIES}
+              error={!!errors.deviceBreakingKa}
+              helperText={errors.deviceBreakingKa?.message ?? 'As printed on the device.'}
+              inputMode="decimal"
+              sx={{ maxWidth: 170 }}
+            />
+          )}
+        />
       </Stack>
       <TextField label="Maximum disconnection time (s)" {...register('maxDisconnectionS')} error={!!errors.maxDisconnectionS} helperText={hint('maxDisconnectionS', 'Allowed by the regulations for this circuit.', 'From Table 41.1 for this circuit and supply: check it applies.')} slotProps={num} />
     </>

@@ -1,4 +1,5 @@
 import ChevronRight from '@mui/icons-material/ChevronRight';
+import Button from '@mui/material/Button';
 import Chip from '@mui/material/Chip';
 import List from '@mui/material/List';
 import ListItem from '@mui/material/ListItem';
@@ -79,6 +80,9 @@ export function CircuitList({ visitId, siteId, locked }: { visitId: string; site
           </List>
         </Paper>
       )}
+      <Button component={RouterLink} to={paths.visitSchedule.href(visitId)} variant="outlined" sx={{ alignSelf: 'flex-start' }}>
+        Schedule of circuits, card by card
+      </Button>
       {!locked && <AddCircuitForm siteId={siteId} visitId={visitId} boards={data.boards.map((b) => b.board)} />}
     </Stack>
   );

@@ -24,8 +24,8 @@ import TableContainer from '@mui/material/TableContainer';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
-import { VERDICT_DISCLAIMER } from '@wiretrail/core';
-import { useState } from 'react';
+import { type InstallationParticulars, particularsProblems, VERDICT_DISCLAIMER } from '@wiretrail/core';
+import { useCallback, useState } from 'react';
 import { VisuallyHidden } from '@/components/visually-hidden';
 import { ApiError } from '@/lib/api-client';
 import { useDownloadDocument } from '../api/download-document';
@@ -33,6 +33,7 @@ import { type DocumentCoverage, type DocumentKind, type JobDocument, useJobDocum
 import { useJobRecipient } from '../api/get-job-recipient';
 import { useIssueDocument } from '../api/issue-document';
 import { COVERAGES, DOCUMENT_KINDS, documentName, issuedTime, kindName } from '../document-words';
+import { CertificateChoice } from './certificate-choice';
 import { EmailStateChip } from './email-state-chip';
 import { SendDocumentDialog } from './send-document-dialog';
 
@@ -47,18 +48,28 @@ export function JobDocuments({ jobId }: { jobId: string }) {
   const [sending, setSending] = useState<JobDocument | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [coverage, setCoverage] = useState<DocumentCoverage>('job');
+  // An installation certificate's particulars, as the office fills them in on the issue dialog.
+  const [particulars, setParticulars] = useState<InstallationParticulars | null>(null);
+  const [showProblems, setShowProblems] = useState(false);
+  const onParticulars = useCallback((p: InstallationParticulars) => setParticulars(p), []);
   // What the office should know of a document just issued: each cable that fails, by name.
   const [issuedNotices, setIssuedNotices] = useState<{ number: string; notices: string[] } | null>(null);
 
   const start = (kind: DocumentKind) => {
+    if (kind === 'installation-certificate' && (!particulars || particularsProblems(particulars).length)) {
+      setShowProblems(true);
+      return;
+    }
     setConfirming(null);
     setRefused(null);
     setIssuedNotices(null);
     issue.mutate(
-      { kind, coverage },
+      { kind, coverage, ...(kind === 'installation-certificate' && particulars ? { particulars } : {}) },
       {
         onSuccess: (doc) => {
           setNotice(`${doc.number} issued.`);
+          setParticulars(null);
+          setShowProblems(false);
           if (doc.notices?.length) setIssuedNotices({ number: doc.number, notices: doc.notices });
         },
         onError: (err) => setRefused({ kind, messages: err instanceof ApiError ? err.messages : [err.message] }),
@@ -78,7 +89,7 @@ export function JobDocuments({ jobId }: { jobId: string }) {
       </Stack>
 
       <Paper variant="outlined" sx={{ p: 2 }}>
-        <Box role="group" aria-label="Issue a document" sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: 'repeat(3, minmax(0, 1fr))' } }}>
+        <Box role="group" aria-label="Issue a document" sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: 'repeat(2, minmax(0, 1fr))', lg: 'repeat(4, minmax(0, 1fr))' } }}>
           {DOCUMENT_KINDS.map((k) => (
             <Stack key={k.kind} spacing={0.75} sx={{ alignItems: 'flex-start' }}>
               <Button variant="outlined" startIcon={<DescriptionOutlined />} disabled={issue.isPending} onClick={() => setConfirming(k.kind)}>
@@ -165,7 +176,7 @@ export function JobDocuments({ jobId }: { jobId: string }) {
                     )}
                     {d.signerName && (
                       <Typography variant="body2" color="text.secondary">
-                        {d.kind === 'minor-works' ? `Signed by ${d.signerName}` : `Issued by ${d.signerName}`}
+                        {d.kind === 'minor-works' || d.kind === 'installation-certificate' ? `Signed by ${d.signerName}` : `Issued by ${d.signerName}`}
                       </Typography>
                     )}
                   </TableCell>
@@ -190,13 +201,22 @@ export function JobDocuments({ jobId }: { jobId: string }) {
         </TableContainer>
       )}
 
-      <Dialog open={!!confirming} onClose={() => setConfirming(null)} aria-labelledby="issue-document-title">
+      <Dialog
+        open={!!confirming}
+        onClose={() => setConfirming(null)}
+        aria-labelledby="issue-document-title"
+        maxWidth={confirming === 'installation-certificate' ? 'md' : 'sm'}
+        fullWidth={confirming === 'installation-certificate'}
+      >
         <DialogTitle id="issue-document-title">{confirming && `Issue the ${kindName(confirming).toLowerCase()}?`}</DialogTitle>
         <DialogContent>
           <DialogContentText>
             It gets the next number and cannot be changed afterwards. Every record it prints locks, the site’s earthing, boards and circuits
             included: any later change waits beside the issued value for review, and a correction is a revision with a new number.
           </DialogContentText>
+          {(confirming === 'minor-works' || confirming === 'installation-certificate') && (
+            <CertificateChoice jobId={jobId} kind={confirming} particulars={particulars} onParticulars={onParticulars} showProblems={showProblems} />
+          )}
           {confirming === 'cabling-report' && (
             <RadioGroup aria-label="Cables to report" value={coverage} onChange={(_, v) => setCoverage(v as DocumentCoverage)} sx={{ mt: 2 }}>
               {COVERAGES.map((c) => (
@@ -218,6 +238,11 @@ export function JobDocuments({ jobId }: { jobId: string }) {
           )}
         </DialogContent>
         <DialogActions sx={{ px: 3, pb: 2 }}>
+          {confirming === 'installation-certificate' && showProblems && particulars && particularsProblems(particulars).length > 0 && (
+            <Typography role="status" color="error" variant="body2" sx={{ mr: 'auto' }}>
+              {particularsProblems(particulars).length === 1 ? '1 particular to complete, marked above.' : `${particularsProblems(particulars).length} particulars to complete, marked above.`}
+            </Typography>
+          )}
           <Button onClick={() => setConfirming(null)}>Cancel</Button>
           <Button variant="contained" onClick={() => confirming && start(confirming)}>
             Issue

@@ -26,6 +26,7 @@ const KIND_NAMES: Record<string, string> = {
   'minor-works': 'Minor works certificate',
   'cabling-report': 'Wiremap and length record',
   'photo-record': 'Photo record',
+  'installation-certificate': 'Electrical installation certificate',
 };
 const STATUS_WORDS: Record<string, string> = {
   enquiry: 'Enquiry',

@@ -9,6 +9,7 @@ import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
+import { CERTIFICATE_WORDS } from '@wiretrail/core';
 import { AidLine } from '@/components/verdicts/verdict-chip';
 import type { Problem, SignOffSummary } from '../data/get-sign-off';
 
@@ -23,6 +24,11 @@ const KIND_WORDS: Record<Problem['kind'], string> = {
   'board-replaced': 'Needs an installation certificate',
   'departure-incomplete': 'Incomplete departure',
   'no-rules': 'No standard for that date',
+  'not-installation-work': 'Not installation work',
+  'details-missing': 'Details missing',
+  inspection: 'Inspection',
+  instruments: 'Test instruments',
+  particulars: 'Particulars',
 };
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -40,6 +46,14 @@ export function SignOffSummaryView({ summary, signed = false }: { summary: SignO
           {[plural(counts.photos, 'photo'), plural(counts.notes, 'note'), plural(counts.cables, 'cable'), plural(counts.points, 'point change'), plural(counts.circuits, 'circuit tested', 'circuits tested')].join(' · ')}
         </Typography>
       </Paper>
+      {summary.choice && (counts.circuits > 0 || summary.choice.kind === 'installation-certificate') && (
+        <Paper variant="outlined" sx={{ p: 1.5 }} component="section" aria-label="Certificate for this work">
+          <Typography sx={{ fontWeight: 500 }}>Certificate for this work: {CERTIFICATE_WORDS[summary.choice.kind].toLowerCase()}</Typography>
+          <Typography variant="body2" color="text.secondary">
+            {summary.choice.sentence}
+          </Typography>
+        </Paper>
+      )}
       {problems.length === 0 && counts.circuits === 0 ? (
         // Nothing judged is not a pass: a tick here would read as one.
         <Stack direction="row" spacing={1} sx={{ alignItems: 'center', color: 'text.secondary' }} role="status">

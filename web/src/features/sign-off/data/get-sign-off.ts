@@ -1,7 +1,10 @@
 import {
   assessCableRun,
   type CableRunAssessment,
+  type CertificateChoice,
+  certificateThatApplies,
   judgeCircuitWork,
+  judgeInstallationCertificate,
   type MinorWorksFindingKind,
   type MinorWorksJudgement,
   unvoided,
@@ -18,7 +21,9 @@ export interface Problem {
 
 export interface SignOffSummary {
   counts: { photos: number; notes: number; cables: number; points: number; circuits: number };
-  /** The visit's circuit work judged as the server will judge it before it issues a certificate. */
+  /** Which certificate the visit's work needs (an installation certificate for a new circuit or a replaced board), and why. */
+  choice: CertificateChoice;
+  /** The visit's circuit work judged as the server will judge it before it issues that certificate. */
   certificate: MinorWorksJudgement<VisitRow, TestResultRow, CircuitRow>;
   cables: { cable: CableRunRow; assessment: CableRunAssessment }[];
   points: PointChangeRow[];
@@ -46,7 +51,10 @@ export async function getSignOff(visit: VisitRow, signerName = ''): Promise<Sign
   ]);
   // What was voided on site is not counted, judged or asked about; the judgment leaves out voided results itself.
   const [photos, notes, points, cables] = [unvoided(allPhotos).length, unvoided(allNotes).length, unvoided(allPoints), unvoided(allCables)];
-  const certificate = judgeCircuitWork({ visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing, boards: siteBoards });
+  const choice = certificateThatApplies({ visitIds: [visit.id], circuits, boards: siteBoards });
+  const records = { visits: [visit], tests: results, pointChanges: points, circuits, earthing: site?.earthing, boards: siteBoards };
+  // The same judgment the server makes before issuing the certificate that applies, made before signing.
+  const certificate = choice.kind === 'installation-certificate' ? judgeInstallationCertificate(records, null, undefined, { beforeSigning: true }) : judgeCircuitWork(records);
   // A visit of data cabling alone has no circuit to certify: whether the job has one is the office's question.
   const problems: Problem[] = certificate.findings.flatMap((f) =>
     f.kind === 'not-signed' || f.kind === 'nothing-tested' ? [] : [{ kind: f.kind, what: f.what, detail: f.detail }],
@@ -67,6 +75,7 @@ export async function getSignOff(visit: VisitRow, signerName = ''): Promise<Sign
   const lastSigned = signed.sort((a, b) => (b.signedAt ?? '').localeCompare(a.signedAt ?? ''))[0];
   return {
     counts: { photos, notes, cables: mine.length, points: points.length, circuits: certificate.circuits.length },
+    choice,
     certificate,
     cables: mine,
     points,

@@ -29,7 +29,7 @@ const boards: Board[] = [
 const areas: Area[] = [{ id: '01900000-0000-7000-8000-000000000008', siteId: SITE_ID, name: 'Lounge', level: 'Ground' }];
 const circuit: Circuit = {
   id: '01900000-0000-7000-8000-000000000009', siteId: SITE_ID, boardId: boards[0]!.id, number: '1', description: 'Sockets, ground floor', kind: 'ring',
-  deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5, lengthM: null, faultProtection: null, newOnVisitId: null, recordedAt: null,
+  deviceType: 'B', deviceRatingA: 32, rcdRatingMa: 30, rcdType: 'A', liveCsaMm2: 2.5, cpcCsaMm2: 1.5, lengthM: null, faultProtection: null, newOnVisitId: null, wiringType: null, deviceBreakingKa: null, recordedAt: null,
   deviceStandard: null, rcdStandard: null, rcdRatedCurrentA: null, afddStandard: null, referenceMethod: null, pointsServed: null, maxDisconnectionS: null,
 };
 

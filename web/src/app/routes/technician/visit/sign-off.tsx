@@ -1,9 +1,13 @@
 import Box from '@mui/material/Box';
+import Button from '@mui/material/Button';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import { PartsUsed } from '@/features/parts/components/parts-used';
 import { useSignOff } from '@/features/sign-off/data/get-sign-off';
+import { InspectionSchedule } from '@/features/sign-off/components/inspection-schedule';
 import { InstallationChecks } from '@/features/sign-off/components/installation-checks';
 import { SignOffForm } from '@/features/sign-off/components/sign-off-form';
 import { SignOffSummaryView } from '@/features/sign-off/components/sign-off-summary';
@@ -26,6 +30,14 @@ export function Component() {
         boards={signOff.boards}
         locked={locked}
       />
+      {signOff.choice.kind === 'installation-certificate' && (
+        <>
+          <Button component={RouterLink} to={paths.visitSchedule.href(visit.id)} variant="outlined" sx={{ alignSelf: 'flex-start' }}>
+            Schedule of circuits, card by card
+          </Button>
+          <InspectionSchedule visit={visit} locked={locked} />
+        </>
+      )}
       {locked ? (
         <Paper variant="outlined" sx={{ p: 2 }} component="section" aria-label="Signed">
           <Stack spacing={1}>
