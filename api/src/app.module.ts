@@ -33,6 +33,7 @@ import { HealthModule } from './health/health.module.js';
 import { InvoicesModule } from './invoices/invoices.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { PhotosModule } from './photos/photos.module.js';
+import { HiddenRoutesModule } from './hidden-routes/hidden-routes.module.js';
 import { PricingModule } from './pricing/pricing.module.js';
 import { ShareLinksModule } from './share-links/share-links.module.js';
 import { SyncModule } from './sync/sync.module.js';
@@ -93,6 +94,7 @@ function webAppModules(): DynamicModule[] {
     PointChangesModule,
     TestResultsModule,
     PhotosModule,
+    HiddenRoutesModule,
     DocumentsModule,
     ShareLinksModule,
     PricingModule,

@@ -315,6 +315,7 @@ describe('issuing documents', () => {
     await issue(tech2, orchard.id, 'photo-record').expect(403);
     const bad = await issue(office, orchard.id, 'invoice').expect(400);
     expect(bad.body.message).toEqual([`kind must be one of: ${DOCUMENT_KINDS.join(', ')}`]);
+    expect(DOCUMENT_KINDS).toEqual(expect.arrayContaining(['minor-works', 'cabling-report', 'photo-record', 'installation-certificate', 'hidden-routes']));
     const list = (await t.http.get(`/api/jobs/${orchard.id}/documents`).set(bearer(office)).expect(200)).body.items as Array<{ issuedAt: string }>;
     // Newest first.
     expect(list.map((d) => d.issuedAt)).toEqual([...list.map((d) => d.issuedAt)].sort().reverse());

@@ -109,6 +109,13 @@ export class OfficeJobPage {
     await this.page.getByRole('dialog', { name: 'Issue the photo record?' }).getByRole('button', { name: 'Issue' }).click();
   }
 
+  /** Issues the site's hidden routes record from the job, confirming the question. */
+  async issueHiddenRoutesRecord(): Promise<void> {
+    await this.tab('Documents & links');
+    await this.page.getByRole('button', { name: 'Issue hidden routes record' }).click();
+    await this.page.getByRole('dialog', { name: 'Issue the hidden routes record?' }).getByRole('button', { name: 'Issue' }).click();
+  }
+
   /** Opens an invoice, quote or credit note of the job's billing by its number, and gives its dialog. */
   async openInvoice(number: string): Promise<Locator> {
     await this.page.getByRole('table', { name: 'Quotes and invoices of this job' }).getByRole('button', { name: `Open ${number}` }).click();

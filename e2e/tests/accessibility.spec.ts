@@ -185,6 +185,14 @@ for (const [size, viewport] of [
       await visitPage.trail.getByRole('button', { name: 'Open photo: Socket before moving' }).click();
       await expect(page.getByRole('dialog', { name: /^Photo \d of 2$/ }).getByRole('img', { name: 'Socket before moving' })).toBeVisible();
       await check('photo viewer');
+      await page.getByRole('dialog').getByRole('link', { name: 'Mark cable routes' }).click();
+      await expect(page.getByRole('img', { name: /drawn$/ })).toBeVisible();
+      await check('photo cable routes');
+      await page.getByRole('button', { name: 'Drilling check' }).click();
+      await check('photo drilling check');
+      await page.getByRole('link', { name: 'Hidden routes on this site' }).click();
+      await expect(page.getByRole('heading', { name: 'Hidden routes on this site' })).toBeVisible();
+      await check('hidden routes on the phone');
     });
   });
   }
@@ -254,6 +262,9 @@ for (const [size, viewport] of [
       await page.getByRole('link', { name: 'Orchard Rise' }).first().click();
       await expect(page.getByRole('heading', { level: 1, name: 'Orchard Rise' })).toBeVisible();
       await expectNoAxeViolations(page, testInfo, 'site');
+      await page.getByRole('link', { name: 'Hidden routes' }).click();
+      await expect(page.getByRole('heading', { level: 1, name: /^Hidden routes: / })).toBeVisible();
+      await expectNoAxeViolations(page, testInfo, 'site hidden routes');
       await page.goto('/invoices');
       await page.getByRole('link', { name: /^Job’s billing/ }).first().click();
       await expect(page.getByRole('heading', { level: 1 })).toBeVisible();

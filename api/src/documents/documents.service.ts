@@ -23,7 +23,7 @@ import { OutboxMessage } from '../mail/entities/outbox-message.entity.js';
 import { MailOutbox } from '../mail/mail-outbox.service.js';
 import { type CoveringLetter, coveringLetter, theWork } from '../paperwork/covering-letter.js';
 import { mailTemplate } from '../mail/mail-template.js';
-import { CABLING_REPORT_TITLE, documentTitle, INSTALLATION_CERTIFICATE_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
+import { CABLING_REPORT_TITLE, documentTitle, HIDDEN_ROUTES_TITLE, INSTALLATION_CERTIFICATE_TITLE, MINOR_WORKS_TITLE, PHOTO_RECORD_TITLE } from '../paperwork/document-titles.js';
 import { takeNextNumber } from '../paperwork/document-numbers.js';
 import type { SendDocumentDto } from '../paperwork/dto/send-document.dto.js';
 import { PrintedRecord } from '../paperwork/entities/printed-record.entity.js';
@@ -57,6 +57,8 @@ import { cablingReportPdf, cablingReportTitle } from './pdf/cabling-report-pdf.j
 import { installationCertificatePdf } from './pdf/installation-certificate-pdf.js';
 import { minorWorksPdf } from './pdf/minor-works-pdf.js';
 import { photoRecordPdf } from './pdf/photo-record-pdf.js';
+import { hiddenRoutesOnPaper, hiddenRoutesPdf } from './pdf/hidden-routes-pdf.js';
+import { loadSiteHiddenRoutes } from '../hidden-routes/site-hidden-routes.js';
 import { signatureImage } from './signature-image.js';
 import sharp from 'sharp';
 
@@ -65,6 +67,7 @@ const KINDS: Record<DocumentKind, { prefix: string; title: string }> = {
   'cabling-report': { prefix: 'CR', title: CABLING_REPORT_TITLE },
   'photo-record': { prefix: 'PR', title: PHOTO_RECORD_TITLE },
   'installation-certificate': { prefix: 'EIC', title: INSTALLATION_CERTIFICATE_TITLE },
+  'hidden-routes': { prefix: 'HR', title: HIDDEN_ROUTES_TITLE },
 };
 
 export const DOCUMENT_MAIL = 'document';
@@ -136,7 +139,7 @@ export class DocumentsService implements OnModuleInit {
 
   async issue(user: AuthUser, jobId: string, kind: DocumentKind, coverage?: DocumentCoverage, particulars?: unknown): Promise<IssuedAnswer> {
     // Photos are made print-ready before the transaction: their bytes never change, and the write queue should not wait on them.
-    const images = kind === 'photo-record' ? await this.printablePhotos(user.organisationId, jobId) : new Map<string, Buffer>();
+    const images = await this.printablePhotos(user.organisationId, jobId, kind);
     const { row, notices } = await this.queue.run((em) => this.issueIn(em, user, jobId, kind, images, coverage ?? null, null, particulars));
     this.logger.log(`Issued ${row.number} for job ${jobId}`);
     return { ...toPulledRow(row), notices };
@@ -150,7 +153,7 @@ export class DocumentsService implements OnModuleInit {
    */
   async revise(user: AuthUser, id: string, dto: ReviseDocumentDto): Promise<IssuedAnswer> {
     const first = await this.row(user, id);
-    const images = first.kind === 'photo-record' ? await this.printablePhotos(user.organisationId, first.jobId) : new Map<string, Buffer>();
+    const images = await this.printablePhotos(user.organisationId, first.jobId, first.kind);
     const { row, notices } = await this.queue.run(async (em) => {
       const old = await this.documentOf(em, user.organisationId, id);
       if (!old.issuedAt) throw new ConflictException(`${old.number} was never issued, so there is nothing to revise.`);
@@ -309,6 +312,27 @@ export class DocumentsService implements OnModuleInit {
           notices: [],
         };
       }
+      case 'hidden-routes': {
+        const content = await loadSiteHiddenRoutes(em, file.organisation.id, file.site.id, true);
+        if (!content.entries.length) {
+          throw new UnprocessableEntityException([
+            content.waiting
+              ? 'None of this site’s marked photos has reached the office yet. Issue the record once the phones have sent them.'
+              : 'No photo of this site has a route drawn on it, so there are no hidden routes to record.',
+          ]);
+        }
+        for (const { photo } of content.entries) {
+          const sha = photo.sha256 as string;
+          if (!images.has(sha)) images.set(sha, await this.printable(file.organisation.id, sha));
+        }
+        const checked = hiddenRoutesOnPaper(content, rules);
+        return {
+          render: async (issue) => ({ pdf: await hiddenRoutesPdf({ issue, file, content: checked, images }), visitId: null, signerName: issue.issuedBy }),
+          // The record holds the markups and the photos under them; the ties' cables and circuits may change their names.
+          printed: content.entries.flatMap(({ photo, markup }) => [{ entity: 'photoMarkup' as const, id: markup.id }, { entity: 'photo' as const, id: photo.id }]),
+          notices: checked.notices,
+        };
+      }
     }
   }
 
@@ -351,8 +375,13 @@ export class DocumentsService implements OnModuleInit {
     });
   }
 
-  private async printablePhotos(organisationId: string, jobId: string): Promise<Map<string, Buffer>> {
-    const hashes = await this.queue.read(async (em) => (await loadPhotoRecord(em, await loadJobFile(em, organisationId, jobId))).photos.map((p) => p.photo.sha256));
+  private async printablePhotos(organisationId: string, jobId: string, kind: DocumentKind): Promise<Map<string, Buffer>> {
+    if (kind !== 'photo-record' && kind !== 'hidden-routes') return new Map();
+    const hashes = await this.queue.read(async (em) => {
+      const file = await loadJobFile(em, organisationId, jobId);
+      if (kind === 'photo-record') return (await loadPhotoRecord(em, file)).photos.map((p) => p.photo.sha256);
+      return (await loadSiteHiddenRoutes(em, organisationId, file.site.id, true)).entries.map((e) => e.photo.sha256 ?? '');
+    });
     const images = new Map<string, Buffer>();
     // A few at a time: sharp works in its own threads, so the cores share a photo record of fifty.
     const queue = [...new Set(hashes)];

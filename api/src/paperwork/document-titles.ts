@@ -7,6 +7,7 @@ export const CABLING_REPORT_TITLE = 'Wiremap and length record';
 export const CABLING_CERTIFICATION_TITLE = 'Cabling certification report';
 export const PHOTO_RECORD_TITLE = 'Photo record';
 export const INSTALLATION_CERTIFICATE_TITLE = 'Electrical installation certificate';
+export const HIDDEN_ROUTES_TITLE = 'Hidden routes record';
 
 /** What each kind of document is called: on its PDF, in the e-mail it goes with, and where an invoice lists it. */
 export const DOCUMENT_TITLES: Record<(typeof DOCUMENT_KINDS)[number], string> = {
@@ -14,6 +15,7 @@ export const DOCUMENT_TITLES: Record<(typeof DOCUMENT_KINDS)[number], string> = 
   'cabling-report': CABLING_REPORT_TITLE,
   'photo-record': PHOTO_RECORD_TITLE,
   'installation-certificate': INSTALLATION_CERTIFICATE_TITLE,
+  'hidden-routes': HIDDEN_ROUTES_TITLE,
 };
 
 /**

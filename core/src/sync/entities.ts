@@ -5,12 +5,13 @@
 import { INSTALLATION_METHODS, POINT_LOCATIONS, RCD_CIRCUIT_KINDS } from '../electrical/before-work-choices.js';
 import { isBlankText } from '../text/typed-text.js';
 import type { RecordedWiremap } from '../cabling/cable-test.js';
+import type { DatumMark, MarkedAccessory, MarkedRoute } from '../electrical/hidden-routes.js';
 import { LIMIT_SETS } from '../cabling/link-performance.js';
 import { FIBRE_MODES } from '../cabling/fibre-loss.js';
 
 export const SYNC_ENTITY_NAMES = [
   'customer', 'site', 'area', 'board', 'circuit', 'job', 'visit', 'photo', 'note', 'cableRun', 'pointChange', 'testResult', 'document', 'conflict',
-  'priceItem', 'materialLine', 'linkTest',
+  'priceItem', 'materialLine', 'linkTest', 'photoMarkup',
 ] as const;
 export type SyncEntityName = (typeof SYNC_ENTITY_NAMES)[number];
 /** Rows a field may point at: synced entities, and users (technicians on a visit). */
@@ -170,7 +171,7 @@ export type TraceEntry = {
 export const POINT_ACTIONS = ['add', 'move', 'remove', 'replace'] as const;
 export const POINT_CONNECTIONS = ['ring-extension', 'unfused-spur', 'fused-spur', 'radial'] as const;
 export const PHOTO_SUBJECTS = ['cableRun', 'pointChange', 'circuit'] as const;
-export const DOCUMENT_KINDS = ['minor-works', 'cabling-report', 'photo-record', 'installation-certificate'] as const;
+export const DOCUMENT_KINDS = ['minor-works', 'cabling-report', 'photo-record', 'installation-certificate', 'hidden-routes'] as const;
 export const DOCUMENT_EMAIL_STATES = ['queued', 'sent', 'failed'] as const;
 /** What a cabling report covers: the cables recorded or tested on the job's visits, or the site's whole schedule. */
 export const DOCUMENT_COVERAGES = ['job', 'site'] as const;
@@ -413,6 +414,19 @@ const REGISTRY = {
       firstWavelengthNm: seen(int(0, 2000)), firstLossDb: seen(num(0, 100)), secondWavelengthNm: seen(int(0, 2000)), secondLossDb: seen(num(0, 100)),
       polarity: seen(oneOf(...FIBRE_POLARITY_RESULTS)), endFaces: seen(oneOf(...END_FACE_RESULTS)),
       testedAt: seen(when), recordedAt: seen(when),
+      ...voidable,
+    },
+  },
+  photoMarkup: {
+    // Routes drawn over a photo of an open wall, kept beside the photo (which never changes). Made on the photo's visit
+    // and editable until it is finished; each drawn part is a field of its own, so two people editing different parts merge.
+    name: 'photoMarkup', table: 'photo_markup', technicianWrite: 'visit', technicianVisible: true, siteField: 'siteId', visitField: 'visitId',
+    fields: {
+      photoId: seen(ref('photo'), true), visitId: seen(ref('visit'), true), siteId: seen(ref('site'), true), areaId: seen(ref('area')),
+      wallName: seen(str(100)),
+      wallWidthMm: seen(num(300, 30_000)), wallHeightMm: seen(num(300, 10_000)), wallThicknessMm: seen(num(25, 1_000)),
+      routes: seen(jsonOf<MarkedRoute[]>()), datums: seen(jsonOf<DatumMark[]>()), accessories: seen(jsonOf<MarkedAccessory[]>()),
+      recordedAt: seen(when),
       ...voidable,
     },
   },

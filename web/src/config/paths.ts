@@ -16,6 +16,10 @@ export const paths = {
   visitCircuit: { path: 'tests/:circuitId', href: (visitId: string, circuitId: string) => `/visits/${encodeURIComponent(visitId)}/tests/${encodeURIComponent(circuitId)}` },
   /** The schedule of circuits an installation certificate carries, one card per circuit. */
   visitSchedule: { path: 'schedule', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/schedule` },
+  /** A photo with the cable routes drawn over it, and its drilling check. */
+  visitPhotoRoutes: { path: 'photos/:photoId/routes', href: (visitId: string, photoId: string) => `/visits/${encodeURIComponent(visitId)}/photos/${encodeURIComponent(photoId)}/routes` },
+  /** The visit's site's map of hidden routes, on the phone. */
+  visitHiddenRoutes: { path: 'hidden-routes', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/hidden-routes` },
   visitSignOff: { path: 'sign-off', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/sign-off` },
   cableLabels: { path: '/visits/:visitId/labels', href: (visitId: string) => `/visits/${encodeURIComponent(visitId)}/labels` },
   /** Where a cable label's QR code points: sends a technician to the record on the phone, the office to the job's schedule. */
@@ -31,6 +35,8 @@ export const paths = {
   schedule: { path: '/schedule', label: 'Schedule' },
   customers: { path: '/customers', label: 'Customers & sites' },
   site: { path: '/sites/:siteId', href: (siteId: string) => `/sites/${encodeURIComponent(siteId)}` },
+  /** The office's map of a site's hidden routes. */
+  siteHiddenRoutes: { path: '/sites/:siteId/hidden-routes', href: (siteId: string) => `/sites/${encodeURIComponent(siteId)}/hidden-routes` },
   conflicts: { path: '/conflicts', label: 'Conflicts', href: (jobId?: string) => (jobId ? `/conflicts?jobId=${encodeURIComponent(jobId)}` : '/conflicts') },
   invoices: { path: '/invoices', label: 'Invoices' },
   /** One job's quotes, invoices and credit notes, reached from the invoices screen. */

@@ -52,6 +52,8 @@ export type ConflictRow = LocalRowOf<'conflict'>;
 export type PriceItemRow = LocalRowOf<'priceItem'>;
 export type MaterialLineRow = LocalRowOf<'materialLine'>;
 export type LinkTestRow = LocalRowOf<'linkTest'>;
+/** Routes drawn over a photo: the photo itself never changes. */
+export type PhotoMarkupRow = LocalRowOf<'photoMarkup'>;
 
 /** A change made on this phone and not yet acknowledged by the server, in the order it was made. */
 export interface OutboxEntry extends Mutation {
@@ -153,7 +155,7 @@ export interface MetaEntry<K extends MetaKey = MetaKey> {
 }
 
 /** Indexed fields only: the rest of each row is stored but not indexed. Tables as first shipped (version 1). */
-const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine' | 'linkTest'>, string> = {
+const ENTITY_INDEXES: Record<Exclude<SyncEntityName, 'priceItem' | 'materialLine' | 'linkTest' | 'photoMarkup'>, string> = {
   customer: 'id',
   site: 'id, customerId',
   area: 'id, siteId',
@@ -188,6 +190,7 @@ export class WiretrailDb extends Dexie {
   declare priceItem: Table<PriceItemRow, string>;
   declare materialLine: Table<MaterialLineRow, string>;
   declare linkTest: Table<LinkTestRow, string>;
+  declare photoMarkup: Table<PhotoMarkupRow, string>;
   declare outbox: Table<OutboxEntry, number>;
   declare failed: Table<FailedEntry, number>;
   declare meta: Table<MetaEntry, MetaKey>;
@@ -217,6 +220,10 @@ export class WiretrailDb extends Dexie {
     // Links' performance results, found by their cable.
     this.version(4).stores({
       linkTest: 'id, visitId, siteId, cableRunId',
+    });
+    // Routes drawn over photos, found by their photo and by site for the map of hidden routes.
+    this.version(5).stores({
+      photoMarkup: 'id, photoId, visitId, siteId',
     });
   }
 

@@ -21,6 +21,7 @@ import { MailCopies1796500300000 } from './1796500300000-MailCopies.js';
 import { VoidedRecords1796510000000 } from './1796510000000-VoidedRecords.js';
 import { InstallationCertificate1796520000000 } from './1796520000000-InstallationCertificate.js';
 import { LinkPerformance1796530000000 } from './1796530000000-LinkPerformance.js';
+import { PhotoMarkup1796540000000 } from './1796540000000-PhotoMarkup.js';
 import { ChangeLogCompaction1796550000000 } from './1796550000000-ChangeLogCompaction.js';
 import { ListIndexes1796550000010 } from './1796550000010-ListIndexes.js';
 
@@ -49,6 +50,7 @@ export const MIGRATIONS = [
   VoidedRecords1796510000000,
   InstallationCertificate1796520000000,
   LinkPerformance1796530000000,
+  PhotoMarkup1796540000000,
   ChangeLogCompaction1796550000000,
   ListIndexes1796550000010,
 ];

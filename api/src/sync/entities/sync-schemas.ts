@@ -123,6 +123,7 @@ export const SYNC_SCHEMAS: { readonly [E in SyncEntityName]: EntitySchema<SyncRe
   priceItem: buildSchema('priceItem'),
   materialLine: buildSchema('materialLine'),
   linkTest: buildSchema('linkTest'),
+  photoMarkup: buildSchema('photoMarkup'),
 };
 
 export const ALL_SYNC_SCHEMAS = SYNC_ENTITY_NAMES.map((n) => SYNC_SCHEMAS[n]);

@@ -26,6 +26,12 @@ export const DOCUMENT_KINDS: Array<{ kind: DocumentKind; name: string; issue: st
     issue: 'Issue photo record',
     about: 'The job’s photos with their captions, areas and times.',
   },
+  {
+    kind: 'hidden-routes',
+    name: 'Hidden routes record',
+    issue: 'Issue hidden routes record',
+    about: 'Every marked photo of the site, large, with the cable routes, their cables or circuits, the measured distances and depths drawn over it.',
+  },
 ];
 
 export const kindName = (kind: DocumentKind) => DOCUMENT_KINDS.find((k) => k.kind === kind)?.name ?? kind;

@@ -15,6 +15,7 @@ import { PostgresMailCopies1796500300001 } from './1796500300001-PostgresMailCop
 import { PostgresVoidedRecords1796510000001 } from './1796510000001-PostgresVoidedRecords.js';
 import { PostgresInstallationCertificate1796520000001 } from './1796520000001-PostgresInstallationCertificate.js';
 import { PostgresLinkPerformance1796530000001 } from './1796530000001-PostgresLinkPerformance.js';
+import { PostgresPhotoMarkup1796540000001 } from './1796540000001-PostgresPhotoMarkup.js';
 import { PostgresChangeLogCompaction1796550000001 } from './1796550000001-PostgresChangeLogCompaction.js';
 import { PostgresListIndexes1796550000011 } from './1796550000011-PostgresListIndexes.js';
 
@@ -37,6 +38,7 @@ export const POSTGRES_MIGRATIONS = [
   PostgresVoidedRecords1796510000001,
   PostgresInstallationCertificate1796520000001,
   PostgresLinkPerformance1796530000001,
+  PostgresPhotoMarkup1796540000001,
   PostgresChangeLogCompaction1796550000001,
   PostgresListIndexes1796550000011,
 ];

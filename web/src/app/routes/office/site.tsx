@@ -39,6 +39,9 @@ export function Component() {
             <Button variant="contained" onClick={() => setTaking(true)}>
               New job here
             </Button>
+            <Button variant="outlined" component={RouterLink} to={paths.siteHiddenRoutes.href(siteId)}>
+              Hidden routes
+            </Button>
             <Button variant="outlined" startIcon={<EditOutlined />} onClick={() => setEditing(true)}>
               Change site details
             </Button>

@@ -3,7 +3,7 @@ import { parseHlc, SYNC_ENTITIES, type SyncEntityName } from '@wiretrail/core';
 const ENTITY_NAMES: Record<string, string> = {
   customer: 'Customer', site: 'Site', area: 'Area', board: 'Board', circuit: 'Circuit', job: 'Job', visit: 'Visit',
   photo: 'Photo', note: 'Note', cableRun: 'Cable run', pointChange: 'Point change', testResult: 'Test result', document: 'Document',
-  priceItem: 'Price list item', materialLine: 'Part used', linkTest: 'Performance results',
+  priceItem: 'Price list item', materialLine: 'Part used', linkTest: 'Performance results', photoMarkup: 'Routes on a photo',
 };
 
 export function entityName(entity: string): string {

@@ -8,6 +8,7 @@ import { setSession } from '@/lib/session';
 import { resetUploadProgress } from '@/lib/photos/upload-progress';
 import { fakeJpeg } from '@/lib/photos/test-photos';
 import { VisitTrail } from '../phone/visit-trail';
+import { MemoryRouter } from 'react-router-dom';
 
 // The worker is the browser's; here each file "scales" to a small JPEG of its own, seeded by its size.
 vi.mock('@/lib/photos/shrink-photo', () => ({
@@ -55,7 +56,10 @@ function show(locked = false) {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false, queryFn: () => Promise.reject(new Error('offline')) } } });
   render(
     <QueryClientProvider client={client}>
-      <VisitTrail visit={visit} userId={USER.id} locked={locked} />
+      {/* The viewer links to the photo's cable routes. */}
+      <MemoryRouter>
+        <VisitTrail visit={visit} userId={USER.id} locked={locked} />
+      </MemoryRouter>
     </QueryClientProvider>,
   );
 }
@@ -139,6 +143,25 @@ describe('a photo opened from the trail', () => {
     expect(change).toMatchObject({ entity: 'photo', id: photo(2).id, set: { caption: 'Chase to the new socket', areaId: HALL, tags: ['route'] } });
     // Fields left as they were are not sent.
     expect(Object.keys(change!.set!)).not.toContain('subjectType');
+  });
+
+  it('shows the cable routes drawn on it over the photo, and leads to them', async () => {
+    await db.photo.put(photo(1, { width: 1600, height: 1200 }));
+    await db.photoBlobs.put({ sha256: sha(1), mime: 'image/jpeg', bytes: new ArrayBuffer(8), size: 8, createdAt: visit.plannedStart!, userId: USER.id, state: 'waiting' });
+    await db.photoMarkup.put({
+      id: '01900000-0000-7000-8000-0000000000e1', photoId: photo(1).id, visitId: VISIT, siteId: SITE, ...base,
+      routes: [
+        { id: 'r1', points: [{ x: 850, y: 10 }, { x: 850, y: 852 }], cableRunId: '01900000-0000-7000-8000-0000000000b1' },
+        { id: 'r2', points: [{ x: 100, y: 40 }, { x: 1500, y: 40 }], circuitId: '01900000-0000-7000-8000-0000000000c3' },
+      ],
+    });
+    show();
+    fireEvent.click(await screen.findByRole('button', { name: 'Open photo: Photo 1' }));
+    const viewer = await screen.findByRole('dialog', { name: 'Photo 1 of 1' });
+    const drawn = await within(viewer).findByRole('img', { name: 'Photo 1: 2 cable routes drawn over it' });
+    expect(drawn.querySelectorAll('polyline')).toHaveLength(4);
+    expect(within(viewer).getByRole('img', { name: 'Photo 1' })).toBeTruthy();
+    expect(within(viewer).getByRole('link', { name: 'Mark cable routes' }).getAttribute('href')).toBe(`/visits/${VISIT}/photos/${photo(1).id}/routes`);
   });
 
   it('cannot be changed once the visit is finished', async () => {

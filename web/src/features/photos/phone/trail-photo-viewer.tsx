@@ -14,7 +14,11 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { type ChangeEvent, type FormEvent, type KeyboardEvent, type PointerEvent, useId, useRef, useState } from 'react';
-import type { PhotoRow } from '@/lib/db';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { MarkedPhotoFrame } from '@/components/photo-markup/marked-photo-frame';
+import { MarkupOverlay } from '@/components/photo-markup/markup-overlay';
+import type { PhotoMarkupRow, PhotoRow } from '@/lib/db';
 import { preparePhoto, removeRefusedPhoto, savePhoto } from '@/lib/photos/add-photo';
 import { shrinkPhoto } from '@/lib/photos/shrink-photo';
 import type { UploadProgress } from '@/lib/photos/upload-progress';
@@ -23,7 +27,9 @@ import { useObjectUrl } from '@/lib/use-object-url';
 import { ServerPhotoImage } from '../components/server-photo-image';
 import { useCaptureChoices } from '../data/get-capture-choices';
 import { usePhoneTags } from '../data/get-phone-photo-tags';
+import { usePhotoFile } from '../api/get-photo-file';
 import { usePhotoBytes } from '../data/get-photo-bytes';
+import { usePhotoRoutes } from '../data/get-photo-routes';
 import type { PhotoStates } from '../data/get-photo-states';
 import { tagList, trailTime } from '../trail-time';
 import { PhotoBadge, photoBadge } from './photo-badge';
@@ -108,6 +114,9 @@ export function TrailPhotoViewer({ photos, openId, onOpen, onClose, visitId, sit
               <PhotoBadge look={badge} />
             </Box>
           </Stack>
+          <Button component={RouterLink} to={paths.visitPhotoRoutes.href(visitId, photo.id)} variant="outlined" size="large" sx={{ minHeight: 48, alignSelf: 'flex-start' }}>
+            {locked ? 'Cable routes and drilling check' : 'Mark cable routes'}
+          </Button>
           {refused && <RefusedPhoto key={`refused-${photo.id}`} photo={photo} userId={userId} locked={locked} onReplaced={onOpen} />}
           <PhotoEdit key={photo.id} photo={photo} visitId={visitId} siteId={siteId} locked={locked} />
         </Stack>
@@ -116,14 +125,30 @@ export function TrailPhotoViewer({ photos, openId, onOpen, onClose, visitId, sit
   );
 }
 
-/** The photo as kept on this phone, or the server's display size once the phone has freed its own copy. */
+/** The photo as kept on this phone, or the server's display size once the phone has freed its own copy; with the routes drawn over it, if any. */
 function LargePhoto({ photo, alt }: { photo: PhotoRow; alt: string }) {
   const kept = usePhotoBytes(photo.sha256);
   const url = useObjectUrl(kept ? (photo.sha256 ?? null) : null, kept?.bytes, kept?.mime);
+  const routes = usePhotoRoutes(photo.id);
   const sx = { width: '100%', height: '100%', objectFit: 'contain', display: 'block' } as const;
+  if (routes) return <PhotoWithRoutes photo={photo} alt={alt} keptUrl={url} keptGone={kept === null} markup={routes} />;
   if (kept === null) return <ServerPhotoImage photoId={photo.id} variant="display" alt={alt} sx={{ width: '100%', height: '100%', bgcolor: 'transparent' }} />;
   if (!url) return <Skeleton variant="rectangular" sx={{ width: '100%', height: '100%' }} aria-label={`Loading ${alt}`} />;
   return <Box component="img" src={url} alt={alt} sx={sx} />;
+}
+
+/** The photo in its own shape with the routes drawn on it laid exactly over it. */
+function PhotoWithRoutes({ photo, alt, keptUrl, keptGone, markup }: { photo: PhotoRow; alt: string; keptUrl: string | null; keptGone: boolean; markup: PhotoMarkupRow }) {
+  const server = usePhotoFile(photo.id, 'display', keptGone && photo.uploadState === 'ready');
+  const serverUrl = useObjectUrl(server.data ? `${photo.id}/display` : null, server.data);
+  const width = photo.width && photo.width > 0 ? photo.width : 1600;
+  const height = photo.height && photo.height > 0 ? photo.height : 1200;
+  const routes = markup.routes ?? [];
+  return (
+    <MarkedPhotoFrame width={width} height={height} src={keptUrl ?? serverUrl} alt={alt} maxHeight="45vh">
+      <MarkupOverlay width={width} height={height} routes={routes} datums={markup.datums ?? []} accessories={markup.accessories ?? []} label={`${alt}: ${routes.length === 1 ? '1 cable route' : `${routes.length} cable routes`} drawn over it`} />
+    </MarkedPhotoFrame>
+  );
 }
 
 function PhotoEdit({ photo, visitId, siteId, locked }: { photo: PhotoRow; visitId: string; siteId: string; locked: boolean }) {

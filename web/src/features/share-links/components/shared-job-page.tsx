@@ -27,6 +27,7 @@ const KIND_NAMES: Record<string, string> = {
   'cabling-report': 'Wiremap and length record',
   'photo-record': 'Photo record',
   'installation-certificate': 'Electrical installation certificate',
+  'hidden-routes': 'Hidden routes record',
 };
 const STATUS_WORDS: Record<string, string> = {
   enquiry: 'Enquiry',

@@ -11,7 +11,7 @@ import { dismissFailedChange, useFailedChanges } from '../data/get-failed-change
 const ENTITY_WORDS: Record<SyncEntityName, string> = {
   customer: 'Customer', site: 'Site', area: 'Area', board: 'Board', circuit: 'Circuit', job: 'Job', visit: 'Visit', photo: 'Photo',
   note: 'Note', cableRun: 'Cable run', pointChange: 'Point change', testResult: 'Test result', document: 'Document', conflict: 'Conflict',
-  priceItem: 'Price list item', materialLine: 'Part used', linkTest: 'Performance results',
+  priceItem: 'Price list item', materialLine: 'Part used', linkTest: 'Performance results', photoMarkup: 'Routes on a photo',
 };
 
 const when = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
