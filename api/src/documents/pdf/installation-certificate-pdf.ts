@@ -261,9 +261,8 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
   layout.heading('Design, construction, inspection and testing');
   layout.paragraph(installationDeclaration(rules.edition, completedOn), 'medium');
   const same = p.designedBy === p.constructedBy && p.constructedBy === p.inspectedBy;
-  const top = layout.y;
-  const half = layout.width / 2 - 10;
-  layout.fields(
+  const signedFor = same ? 'for design, construction, and inspection and testing' : 'for the inspection and testing';
+  layout.signedBeside(
     [
       ['Design', p.designedBy],
       ['Construction', p.constructedBy],
@@ -271,20 +270,9 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
       ['Signed on site', `${String(signer.signedByName)}, ${dateTimeWords(signer.signedAt, tz)}`],
       ['For', file.organisation.name],
     ],
-    1,
-    layout.left,
-    half,
+    signature,
+    `Signature of ${String(signer.signedByName)} ${signedFor}, drawn on the phone at sign-off`,
   );
-  const below = layout.y;
-  const boxX = layout.left + half + 20;
-  const { doc } = layout;
-  doc.rect(boxX, top, half, 86).lineWidth(0.5).strokeColor(INK.rule).stroke();
-  doc.image(signature, boxX + 8, top + 6, { fit: [half - 16, 64], align: 'center', valign: 'center' });
-  layout.font('regular', 7.5, INK.muted);
-  const signedFor = same ? 'for design, construction, and inspection and testing' : 'for the inspection and testing';
-  doc.text(`Signature of ${String(signer.signedByName)} ${signedFor}, drawn on the phone at sign-off`, boxX + 8, top + 72, { width: half - 16, align: 'center' });
-  layout.y = Math.max(below, top + 92);
-  doc.x = layout.left;
 
   const verdicts = content.schedule.filter((x) => x.tested).map((x) => `${text(x.circuit.number)}: ${VERDICT_WORDS[x.tested!.assessment.verdict]}`);
   layout.paragraph(`Verdicts by circuit: ${verdicts.join(', ')}. Limits applied are those of ${rules.edition}.`, 'regular', VERDICT_INK.pass, 7.5);

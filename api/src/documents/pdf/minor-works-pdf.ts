@@ -218,28 +218,16 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   layout.heading('Declaration');
   layout.paragraph(minorWorksDeclaration(rules.edition, completedOn), 'medium');
   layout.ensure(120);
-  const top = layout.y;
-  const half = layout.width / 2 - 10;
-  layout.fields(
+  layout.signedBeside(
     [
       ['Work done and tested by', String(signer.signedByName)],
       ['Position', text(signer.signedByPosition) || 'Not given'],
       ['Signed on site', dateTimeWords(signer.signedAt, tz)],
       ['For', file.organisation.name],
     ],
-    1,
-    layout.left,
-    half,
+    signature,
+    `Signature of ${String(signer.signedByName)}, drawn on the phone at sign-off`,
   );
-  const below = layout.y;
-  const boxX = layout.left + half + 20;
-  const { doc } = layout;
-  doc.rect(boxX, top, half, 86).lineWidth(0.5).strokeColor(INK.rule).stroke();
-  doc.image(signature, boxX + 8, top + 6, { fit: [half - 16, 64], align: 'center', valign: 'center' });
-  layout.font('regular', 7.5, INK.muted);
-  doc.text(`Signature of ${String(signer.signedByName)}, drawn on the phone at sign-off`, boxX + 8, top + 72, { width: half - 16, align: 'center' });
-  layout.y = Math.max(below, top + 92);
-  doc.x = layout.left;
 
   // The verdicts' caution belongs to the app's screens; a signed certificate is the signer's declaration.
   layout.paragraph(`Limits applied are those of ${rules.edition}.`, 'regular', INK.muted, 7.5);
