@@ -17,7 +17,7 @@ import { dateTimeWords, dateWords, joined, VERDICT_INK, VERDICT_WORDS } from '..
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
 import type { InstallationCertificateContent } from '../document-content.js';
-import { buttonRows, testRows } from './minor-works-pdf.js';
+import { judgedReadings } from './minor-works-pdf.js';
 
 export interface InstallationCertificatePdf {
   issue: Issue;
@@ -238,22 +238,7 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
 
   for (const sc of content.schedule) {
     if (!sc.tested) continue;
-    const c = sc.tested;
-    layout.heading(`Test results judged: ${circuitName(sc.circuit)}`);
-    layout.paragraph(
-      joined([`Tested ${dateTimeWords(c.test.testedAt ?? c.test.createdAt, tz) || 'on the signed visit'}`, text(c.test.instrument) ? `with ${text(c.test.instrument)}` : '', `overall: ${VERDICT_WORDS[c.assessment.verdict]}`], ', ') + '.',
-      'regular',
-      INK.muted,
-    );
-    layout.table(
-      [
-        { header: 'Test', width: 2.2 },
-        { header: 'Reading', width: 1.6 },
-        { header: 'Limit', width: 2 },
-        { header: 'Verdict', width: 0.7 },
-      ],
-      [...testRows(c), ...buttonRows(c)],
-    );
+    judgedReadings(layout, `Test results judged: ${circuitName(sc.circuit)}`, sc.tested, tz);
   }
 
   const signer = visits[visits.length - 1]!;

@@ -11,7 +11,7 @@ import {
 } from '@wiretrail/core';
 import { MINOR_WORKS_TITLE } from '../../paperwork/document-titles.js';
 import type { JobFile } from '../../paperwork/job-file.js';
-import { INK, type Row } from '../../paperwork/pdf/document-layout.js';
+import { type DocumentLayout, INK, type Row } from '../../paperwork/pdf/document-layout.js';
 import { dateTimeWords, dateWords, joined, limitWords, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
@@ -99,6 +99,25 @@ export function testRows(c: Certified): Row[] {
 }
 
 /** A certificate for an alteration or addition to an existing circuit, in Wiretrail's own layout. */
+/** One circuit's readings as judged: when and with what it was tested, then each test beside its limit and verdict. */
+export function judgedReadings(layout: DocumentLayout, heading: string, c: Certified, tz: string): void {
+  layout.heading(heading);
+  layout.paragraph(
+    joined([`Tested ${dateTimeWords(c.test.testedAt ?? c.test.createdAt, tz) || 'on the signed visit'}`, text(c.test.instrument) ? `with ${text(c.test.instrument)}` : '', `overall: ${VERDICT_WORDS[c.assessment.verdict]}`], ', ') + '.',
+    'regular',
+    INK.muted,
+  );
+  layout.table(
+    [
+      { header: 'Test', width: 2.2 },
+      { header: 'Reading', width: 1.6 },
+      { header: 'Limit', width: 2 },
+      { header: 'Verdict', width: 0.7 },
+    ],
+    [...testRows(c), ...buttonRows(c)],
+  );
+}
+
 export async function minorWorksPdf({ issue, file, content, rules, signature }: MinorWorksPdf): Promise<Buffer> {
   const tz = file.organisation.timeZone;
   const layout = await startJobDocument({ title: MINOR_WORKS_TITLE, subtitle: 'An alteration or addition to an existing circuit, inspected and tested', issue, file });
@@ -164,30 +183,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     );
   }
 
-  for (const c of circuits) {
-    layout.heading(`Test results: ${circuitName(c.circuit)}`);
-    layout.paragraph(
-      joined(
-        [
-          `Tested ${dateTimeWords(c.test.testedAt ?? c.test.createdAt, tz) || 'on the signed visit'}`,
-          typeof c.test.instrument === 'string' && c.test.instrument ? `with ${c.test.instrument}` : '',
-          `overall: ${VERDICT_WORDS[c.assessment.verdict]}`,
-        ],
-        ', ',
-      ) + '.',
-      'regular',
-      INK.muted,
-    );
-    layout.table(
-      [
-        { header: 'Test', width: 2.2 },
-        { header: 'Reading', width: 1.6 },
-        { header: 'Limit', width: 2 },
-        { header: 'Verdict', width: 0.7 },
-      ],
-      [...testRows(c), ...buttonRows(c)],
-    );
-  }
+  for (const c of circuits) judgedReadings(layout, `Test results: ${circuitName(c.circuit)}`, c, tz);
 
   layout.heading('Observations');
   // Free text typed where departures used to go is kept as an observation: it departs from nothing.
