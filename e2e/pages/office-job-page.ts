@@ -91,6 +91,17 @@ export class OfficeJobPage {
     await this.page.getByRole('dialog', { name: 'Issue the minor works certificate?' }).getByRole('button', { name: 'Issue' }).click();
   }
 
+  /** Issues the job's cabling report of this job's cables, confirming the question, and gives the new document's id. */
+  async issueCablingReport(jobId: string): Promise<string> {
+    await this.tab('Documents & links');
+    const issued = this.page.waitForResponse((r) => r.url().endsWith(`/api/jobs/${jobId}/documents`) && r.request().method() === 'POST');
+    await this.page.getByRole('button', { name: 'Issue cabling report' }).click();
+    await this.page.getByRole('dialog', { name: 'Issue the cabling report?' }).getByRole('button', { name: 'Issue' }).click();
+    const res = await issued;
+    expect(res.status()).toBe(201);
+    return ((await res.json()) as { id: string }).id;
+  }
+
   /** Issues the job's photo record, confirming the question. */
   async issuePhotoRecord(): Promise<void> {
     await this.tab('Documents & links');

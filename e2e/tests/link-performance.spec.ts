@@ -92,16 +92,7 @@ test('a link’s results typed offline on the phone, a CSV imported at the desk,
   const results = desk.page.getByRole('grid', { name: 'Performance results' });
   await expect(results.getByRole('row', { name: new RegExp(typed) })).toContainText('Pass');
 
-  const issueReport = async (): Promise<string> => {
-    await job.tab('Documents & links');
-    const issued = desk.page.waitForResponse((r) => r.url().endsWith(`/api/jobs/${jobId}/documents`) && r.request().method() === 'POST');
-    await desk.page.getByRole('button', { name: 'Issue cabling report' }).click();
-    await desk.page.getByRole('dialog', { name: 'Issue the cabling report?' }).getByRole('button', { name: 'Issue' }).click();
-    const res = await issued;
-    expect(res.status()).toBe(201);
-    return ((await res.json()) as { id: string }).id;
-  };
-  const record = await documentText(request, await issueReport());
+  const record = await documentText(request, await job.issueCablingReport(jobId));
   expect(record).toContain('Wiremap and length record');
   expect(record).toContain('It is not a certification to any category or class');
   expect(record).not.toContain('Cabling certification report');
@@ -127,7 +118,7 @@ test('a link’s results typed offline on the phone, a CSV imported at the desk,
   await expect(results.getByRole('row', { name: new RegExp(imported) })).toContainText('Pass');
 
   // Every link now passes to a named limit set: the report is a certification, and says what each was tested with.
-  const certificate = await documentText(request, await issueReport());
+  const certificate = await documentText(request, await job.issueCablingReport(jobId));
   for (const expected of [
     'Cabling certification report',
     'All 2 links in this report have performance results to a named limit set, and each passes it.',

@@ -17,7 +17,7 @@ import { dateTimeWords, dateWords, joined, VERDICT_INK, VERDICT_WORDS } from '..
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
 import type { InstallationCertificateContent } from '../document-content.js';
-import { buttonRows, testRows } from './minor-works-pdf.js';
+import { judgedReadings } from './minor-works-pdf.js';
 
 export interface InstallationCertificatePdf {
   issue: Issue;
@@ -238,22 +238,7 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
 
   for (const sc of content.schedule) {
     if (!sc.tested) continue;
-    const c = sc.tested;
-    layout.heading(`Test results judged: ${circuitName(sc.circuit)}`);
-    layout.paragraph(
-      joined([`Tested ${dateTimeWords(c.test.testedAt ?? c.test.createdAt, tz) || 'on the signed visit'}`, text(c.test.instrument) ? `with ${text(c.test.instrument)}` : '', `overall: ${VERDICT_WORDS[c.assessment.verdict]}`], ', ') + '.',
-      'regular',
-      INK.muted,
-    );
-    layout.table(
-      [
-        { header: 'Test', width: 2.2 },
-        { header: 'Reading', width: 1.6 },
-        { header: 'Limit', width: 2 },
-        { header: 'Verdict', width: 0.7 },
-      ],
-      [...testRows(c), ...buttonRows(c)],
-    );
+    judgedReadings(layout, `Test results judged: ${circuitName(sc.circuit)}`, sc.tested, tz);
   }
 
   const signer = visits[visits.length - 1]!;
@@ -261,9 +246,8 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
   layout.heading('Design, construction, inspection and testing');
   layout.paragraph(installationDeclaration(rules.edition, completedOn), 'medium');
   const same = p.designedBy === p.constructedBy && p.constructedBy === p.inspectedBy;
-  const top = layout.y;
-  const half = layout.width / 2 - 10;
-  layout.fields(
+  const signedFor = same ? 'for design, construction, and inspection and testing' : 'for the inspection and testing';
+  layout.signedBeside(
     [
       ['Design', p.designedBy],
       ['Construction', p.constructedBy],
@@ -271,20 +255,9 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
       ['Signed on site', `${String(signer.signedByName)}, ${dateTimeWords(signer.signedAt, tz)}`],
       ['For', file.organisation.name],
     ],
-    1,
-    layout.left,
-    half,
+    signature,
+    `Signature of ${String(signer.signedByName)} ${signedFor}, drawn on the phone at sign-off`,
   );
-  const below = layout.y;
-  const boxX = layout.left + half + 20;
-  const { doc } = layout;
-  doc.rect(boxX, top, half, 86).lineWidth(0.5).strokeColor(INK.rule).stroke();
-  doc.image(signature, boxX + 8, top + 6, { fit: [half - 16, 64], align: 'center', valign: 'center' });
-  layout.font('regular', 7.5, INK.muted);
-  const signedFor = same ? 'for design, construction, and inspection and testing' : 'for the inspection and testing';
-  doc.text(`Signature of ${String(signer.signedByName)} ${signedFor}, drawn on the phone at sign-off`, boxX + 8, top + 72, { width: half - 16, align: 'center' });
-  layout.y = Math.max(below, top + 92);
-  doc.x = layout.left;
 
   const verdicts = content.schedule.filter((x) => x.tested).map((x) => `${text(x.circuit.number)}: ${VERDICT_WORDS[x.tested!.assessment.verdict]}`);
   layout.paragraph(`Verdicts by circuit: ${verdicts.join(', ')}. Limits applied are those of ${rules.edition}.`, 'regular', VERDICT_INK.pass, 7.5);

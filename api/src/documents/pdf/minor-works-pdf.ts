@@ -11,7 +11,7 @@ import {
 } from '@wiretrail/core';
 import { MINOR_WORKS_TITLE } from '../../paperwork/document-titles.js';
 import type { JobFile } from '../../paperwork/job-file.js';
-import { INK, type Row } from '../../paperwork/pdf/document-layout.js';
+import { type DocumentLayout, INK, type Row } from '../../paperwork/pdf/document-layout.js';
 import { dateTimeWords, dateWords, joined, limitWords, VERDICT_INK, VERDICT_WORDS } from '../../paperwork/pdf/document-words.js';
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
@@ -99,6 +99,25 @@ export function testRows(c: Certified): Row[] {
 }
 
 /** A certificate for an alteration or addition to an existing circuit, in Wiretrail's own layout. */
+/** One circuit's readings as judged: when and with what it was tested, then each test beside its limit and verdict. */
+export function judgedReadings(layout: DocumentLayout, heading: string, c: Certified, tz: string): void {
+  layout.heading(heading);
+  layout.paragraph(
+    joined([`Tested ${dateTimeWords(c.test.testedAt ?? c.test.createdAt, tz) || 'on the signed visit'}`, text(c.test.instrument) ? `with ${text(c.test.instrument)}` : '', `overall: ${VERDICT_WORDS[c.assessment.verdict]}`], ', ') + '.',
+    'regular',
+    INK.muted,
+  );
+  layout.table(
+    [
+      { header: 'Test', width: 2.2 },
+      { header: 'Reading', width: 1.6 },
+      { header: 'Limit', width: 2 },
+      { header: 'Verdict', width: 0.7 },
+    ],
+    [...testRows(c), ...buttonRows(c)],
+  );
+}
+
 export async function minorWorksPdf({ issue, file, content, rules, signature }: MinorWorksPdf): Promise<Buffer> {
   const tz = file.organisation.timeZone;
   const layout = await startJobDocument({ title: MINOR_WORKS_TITLE, subtitle: 'An alteration or addition to an existing circuit, inspected and tested', issue, file });
@@ -164,30 +183,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
     );
   }
 
-  for (const c of circuits) {
-    layout.heading(`Test results: ${circuitName(c.circuit)}`);
-    layout.paragraph(
-      joined(
-        [
-          `Tested ${dateTimeWords(c.test.testedAt ?? c.test.createdAt, tz) || 'on the signed visit'}`,
-          typeof c.test.instrument === 'string' && c.test.instrument ? `with ${c.test.instrument}` : '',
-          `overall: ${VERDICT_WORDS[c.assessment.verdict]}`,
-        ],
-        ', ',
-      ) + '.',
-      'regular',
-      INK.muted,
-    );
-    layout.table(
-      [
-        { header: 'Test', width: 2.2 },
-        { header: 'Reading', width: 1.6 },
-        { header: 'Limit', width: 2 },
-        { header: 'Verdict', width: 0.7 },
-      ],
-      [...testRows(c), ...buttonRows(c)],
-    );
-  }
+  for (const c of circuits) judgedReadings(layout, `Test results: ${circuitName(c.circuit)}`, c, tz);
 
   layout.heading('Observations');
   // Free text typed where departures used to go is kept as an observation: it departs from nothing.
@@ -218,28 +214,16 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   layout.heading('Declaration');
   layout.paragraph(minorWorksDeclaration(rules.edition, completedOn), 'medium');
   layout.ensure(120);
-  const top = layout.y;
-  const half = layout.width / 2 - 10;
-  layout.fields(
+  layout.signedBeside(
     [
       ['Work done and tested by', String(signer.signedByName)],
       ['Position', text(signer.signedByPosition) || 'Not given'],
       ['Signed on site', dateTimeWords(signer.signedAt, tz)],
       ['For', file.organisation.name],
     ],
-    1,
-    layout.left,
-    half,
+    signature,
+    `Signature of ${String(signer.signedByName)}, drawn on the phone at sign-off`,
   );
-  const below = layout.y;
-  const boxX = layout.left + half + 20;
-  const { doc } = layout;
-  doc.rect(boxX, top, half, 86).lineWidth(0.5).strokeColor(INK.rule).stroke();
-  doc.image(signature, boxX + 8, top + 6, { fit: [half - 16, 64], align: 'center', valign: 'center' });
-  layout.font('regular', 7.5, INK.muted);
-  doc.text(`Signature of ${String(signer.signedByName)}, drawn on the phone at sign-off`, boxX + 8, top + 72, { width: half - 16, align: 'center' });
-  layout.y = Math.max(below, top + 92);
-  doc.x = layout.left;
 
   // The verdicts' caution belongs to the app's screens; a signed certificate is the signer's declaration.
   layout.paragraph(`Limits applied are those of ${rules.edition}.`, 'regular', INK.muted, 7.5);

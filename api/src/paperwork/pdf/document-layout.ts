@@ -324,6 +324,22 @@ export class DocumentLayout {
     doc.y = y + h + 6;
   }
 
+  /** Who signed, as fields on the left, beside the signature drawn on the phone in a box on the right, with its caption. */
+  signedBeside(pairs: Array<[label: string, value: string]>, signature: Buffer, caption: string): void {
+    const top = this.doc.y;
+    const half = this.width / 2 - 10;
+    this.fields(pairs, 1, this.left, half);
+    const below = this.doc.y;
+    const boxX = this.left + half + 20;
+    const { doc } = this;
+    doc.rect(boxX, top, half, 86).lineWidth(0.5).strokeColor(INK.rule).stroke();
+    doc.image(signature, boxX + 8, top + 6, { fit: [half - 16, 64], align: 'center', valign: 'center' });
+    this.font('regular', 7.5, INK.muted);
+    doc.text(caption, boxX + 8, top + 72, { width: half - 16, align: 'center' });
+    doc.y = Math.max(below, top + 92);
+    doc.x = this.left;
+  }
+
   /** Footers on every page (page x of y is known only at the end), then the PDF's bytes. */
   async finish(): Promise<Buffer> {
     const { doc } = this;

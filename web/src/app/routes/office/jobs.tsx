@@ -15,12 +15,13 @@ import { paths } from '@/config/paths';
 import { useJobStatusCounts } from '@/features/jobs/api/get-job-status-counts';
 import { JobFiltersBar } from '@/features/jobs/components/job-filters-bar';
 import { JobsBoard } from '@/features/jobs/components/jobs-board';
-import { NewJobDialog } from '@/features/jobs/components/new-job-dialog';
 import { filtersOf, useJobScreen } from '@/features/jobs/job-filters';
 import { useCustomers } from '@/features/sites/api/get-customers';
 import { useDirectory } from '@/lib/directory';
 
 // The table brings the data grid with it; the board, the first thing the office sees, does without.
+// The new-job form brings the customer and site forms, their checks and the phone-number library: fetched when asked for.
+const NewJobDialog = lazy(() => import('@/features/jobs/components/new-job-dialog').then((m) => ({ default: m.NewJobDialog })));
 const JobsTable = lazy(() => import('@/features/jobs/components/jobs-table').then((m) => ({ default: m.JobsTable })));
 
 export function Component() {
@@ -82,7 +83,11 @@ export function Component() {
           <JobsTable state={state} change={change} personName={personName} />
         </Suspense>
       )}
-      {taking && <NewJobDialog onClose={() => setTaking(false)} onCreated={(job) => navigate(paths.job.href(job.id))} />}
+      {taking && (
+        <Suspense fallback={<LinearProgress aria-label="Opening the new job form" sx={{ position: 'fixed', top: 0, left: 0, right: 0, zIndex: 'modal' }} />}>
+          <NewJobDialog onClose={() => setTaking(false)} onCreated={(job) => navigate(paths.job.href(job.id))} />
+        </Suspense>
+      )}
     </>
   );
 }

@@ -7,7 +7,7 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { JOB_STATUSES } from '@wiretrail/core';
 import { useEffect, useState } from 'react';
-import { DateInput } from '@/components/forms/date-inputs';
+import { DateInputOnDemand } from '@/components/forms/date-input-on-demand';
 import type { JobStatusCounts } from '../api/get-job-status-counts';
 import type { JobScreenState } from '../job-filters';
 import { jobStatusWords } from '../job-status';
@@ -89,7 +89,7 @@ export function JobFiltersBar({ state, change, technicians, customers, withStatu
           ['toDate', 'Visits to', toBeforeFrom],
         ] as const
       ).map(([key, label, wrong]) => (
-        <DateInput
+        <DateInputOnDemand
           key={key}
           size="small"
           label={label}
