@@ -180,6 +180,14 @@ test('offline on a phone, two routes drawn over a photographed chase reach the o
     const job = new OfficeJobPage(desk.page);
     await desk.page.goto(`/jobs/${jobId}`);
     await job.expectJob(title);
+    // The job's photo trail draws the same routes over the photo in its viewer.
+    await job.tab('Photo trail');
+    await desk.page.getByRole('button', { name: `Open photo: ${caption}` }).click();
+    const viewer = desk.page.getByRole('dialog', { name: caption });
+    await expect(viewer.getByRole('img', { name: `${caption}: 2 cable routes drawn over it` })).toBeVisible({ timeout: 20_000 });
+    await desk.page.screenshot({ path: testInfo.outputPath('desk-photo-viewer.png') });
+    await viewer.getByRole('button', { name: 'Close' }).click();
+    await expect(viewer).toHaveCount(0);
     await job.issueHiddenRoutesRecord();
     const row = job.documentRow('Hidden routes record');
     await expect(row).toBeVisible({ timeout: 30_000 });

@@ -110,7 +110,7 @@ export function Component() {
             </Stack>
           )}
           {tab === 'photos' && (
-            <JobPhotoTrail jobId={j.id} reference={j.reference} areas={areaChoices} subjects={subjects} visits={visits.data?.items ?? []} personName={personName} />
+            <JobPhotoTrail jobId={j.id} siteId={j.siteId} reference={j.reference} areas={areaChoices} subjects={subjects} visits={visits.data?.items ?? []} personName={personName} />
           )}
           {tab === 'cables' && (
             <Stack spacing={3}>

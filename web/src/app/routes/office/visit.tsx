@@ -9,6 +9,7 @@ import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { cableStatusWords, MEDIUM_WORDS } from '@/features/cables/cable-words';
 import { usePhotos } from '@/features/photos/api/get-photos';
+import { useSiteMarkups } from '@/features/photos/api/get-site-markups';
 import { ServerPhotoImage } from '@/features/photos/components/server-photo-image';
 import { PhotoViewer, type ViewerPhoto } from '@/features/photos/desk/photo-viewer';
 import { ACTION_WORDS } from '@/features/points/point-words';
@@ -23,6 +24,7 @@ export function Component() {
   const record = useVisitRecord(visitId);
   const photos = usePhotos({ visitId, pageSize: 200 });
   const [open, setOpen] = useState<number | null>(null);
+  const markups = useSiteMarkups(record.data?.site.id);
 
   const photoItems = useMemo(() => photos.data?.items ?? [], [photos.data]);
   const viewerPhotos: ViewerPhoto[] = useMemo(
@@ -34,8 +36,9 @@ export function Component() {
         where: '',
         tags: Array.isArray(p.tags) ? p.tags.filter((t): t is string => typeof t === 'string') : [],
         filename: `${record.data?.job.reference ?? 'photo'}-${p.id.slice(-6)}.jpg`,
+        routes: markups.get(p.id),
       })),
-    [photoItems, record.data],
+    [photoItems, record.data, markups],
   );
 
   if (record.isPending) return <LinearProgress aria-label="Loading the visit" />;

@@ -12,6 +12,7 @@ import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
 import { useCallback, useMemo, useState } from 'react';
 import { type ServerPhoto, usePhotos } from '../api/get-photos';
+import { useSiteMarkups } from '../api/get-site-markups';
 import { useOfficeTags } from '../api/get-photo-tags';
 import { dayAndTime, tagList, trailTime } from '../trail-time';
 import { PhotoViewer, type ViewerPhoto } from './photo-viewer';
@@ -31,6 +32,8 @@ export interface TrailVisit {
 
 interface Props {
   jobId: string;
+  /** The job's site, whose photo markups are drawn over its photos in the viewer. */
+  siteId?: string;
   /** For the names originals download under. */
   reference: string | null;
   areas: { id: string; name: string }[];
@@ -74,7 +77,7 @@ export function groupTrail(items: ServerPhoto[], areaName: (id: string) => strin
 const fileTime = (iso: string | null) => (iso ? iso.slice(0, 16).replace(/[-:T]/g, '').replace(/^(\d{8})/, '$1-') : 'photo');
 
 /** A job's photo trail for the office: every photo of every visit in time order, filtered, with a full-screen viewer. */
-export function JobPhotoTrail({ jobId, reference, areas, subjects, visits, personName }: Props) {
+export function JobPhotoTrail({ jobId, siteId, reference, areas, subjects, visits, personName }: Props) {
   const tags = useOfficeTags();
   const [tag, setTag] = useState('');
   const [areaId, setAreaId] = useState('');
@@ -84,6 +87,7 @@ export function JobPhotoTrail({ jobId, reference, areas, subjects, visits, perso
   const [open, setOpen] = useState<number | null>(null);
   const [subjectType, subjectId] = subject ? subject.split(':') : [undefined, undefined];
   const photos = usePhotos({ jobId, tag, areaId, subjectType, subjectId, technicianId, page, pageSize: PAGE_SIZE });
+  const markups = useSiteMarkups(siteId);
 
   const areaName = useMemo(() => {
     const names = new Map(areas.map((a) => [a.id, a.name]));
@@ -113,8 +117,9 @@ export function JobPhotoTrail({ jobId, reference, areas, subjects, visits, perso
         where: [p.areaId ? areaName(p.areaId) : null, p.subjectId ? subjectName.get(p.subjectId) : null].filter(Boolean).join(' · '),
         tags: tagList(p.tags),
         filename: `${reference ?? 'photo'}-${fileTime(p.takenAt)}-${p.id.slice(-6)}.jpg`,
+        routes: markups.get(p.id),
       })),
-    [ordered, areaName, subjectName, reference, who],
+    [ordered, areaName, subjectName, reference, who, markups],
   );
   const filtered = !!(tag || areaId || subject || technicianId);
   const change = (set: (v: string) => void) => (e: { target: { value: string } }) => {

@@ -15,8 +15,11 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useQueryClient } from '@tanstack/react-query';
 import { type PointerEvent, useEffect, useRef, useState } from 'react';
+import { MarkedPhotoFrame } from '@/components/photo-markup/marked-photo-frame';
+import { MarkupOverlay } from '@/components/photo-markup/markup-overlay';
 import { useObjectUrl } from '@/lib/use-object-url';
 import { photoFileQueryOptions, usePhotoFile } from '../api/get-photo-file';
+import type { PhotoRoutes } from '../api/get-site-markups';
 
 /** What the viewer shows about each photo, worked out by the screen that opens it. */
 export interface ViewerPhoto {
@@ -28,6 +31,8 @@ export interface ViewerPhoto {
   tags: string[];
   /** The name the original downloads under. */
   filename: string;
+  /** Cable routes the technician drew over the photo, laid over it here too. */
+  routes?: PhotoRoutes;
 }
 
 interface Props {
@@ -51,6 +56,16 @@ function DisplayImage({ photo, zoomed, onToggleZoom }: { photo: ViewerPhoto; zoo
     );
   }
   if (!url) return <CircularProgress aria-label="Loading the photo" sx={{ color: 'grey.300' }} />;
+  const marked = photo.routes;
+  if (marked) {
+    const alt = photo.caption ?? 'Photo';
+    const count = marked.routes.length === 1 ? '1 cable route' : `${marked.routes.length} cable routes`;
+    return (
+      <MarkedPhotoFrame width={marked.width} height={marked.height} src={url} alt={alt} maxHeight={zoomed ? 'none' : 'calc(100vh - 170px)'}>
+        <MarkupOverlay width={marked.width} height={marked.height} routes={marked.routes} datums={marked.datums} accessories={marked.accessories} label={`${alt}: ${count} drawn over it`} />
+      </MarkedPhotoFrame>
+    );
+  }
   return (
     <Box
       component="img"
