@@ -127,6 +127,26 @@ describe('routes drawn on photos', () => {
     await phone.pullAll(t, tech1);
   });
 
+  it('makes one record of two markups of the same photo started offline on two phones, as the phone names a markup by its photo', async () => {
+    const photo = uuidv7();
+    const [made] = await push(t, tech1, 'markup-phone', [
+      onPhone('photo', photo, { visitId: ids.visit, siteId, areaId: ids.area, caption: 'Chase by the door', sha256: 'b'.repeat(64), width: 1600, height: 1200, sizeBytes: 1000, takenAt: new Date().toISOString() }),
+    ]);
+    expect(made!.status).toBe('applied');
+    const start = { photoId: photo, visitId: ids.visit, siteId, areaId: ids.area, recordedAt: new Date().toISOString() };
+    // Neither phone has seen the other's: both create the markup under the photo's id.
+    const [one] = await push(t, tech1, 'markup-phone', [mutation('photoMarkup', photo, { ...start, wallName: 'Door wall', routes: [routes[0]!] }, { baseVersion: 0, deviceId: 'markup-phone' })]);
+    const [two] = await push(t, tech1, 'markup-tablet3', [mutation('photoMarkup', photo, { ...start, wallWidthMm: 2800, routes: [routes[1]!] }, { baseVersion: 0, deviceId: 'markup-tablet3' })]);
+    expect(one!.status).toBe('applied');
+    expect(two).toMatchObject({ status: 'applied', conflictIds: [expect.any(String)] });
+    await desk.pullAll(t, office);
+    expect(desk.find('photoMarkup', (m) => m.photoId === photo)).toHaveLength(1);
+    // What only one phone wrote is kept from each; the two drawings of the routes meet at the office as a conflict.
+    expect(desk.one('photoMarkup', (m) => m.id === photo)).toMatchObject({ wallName: 'Door wall', wallWidthMm: 2800, routes: [routes[1]!] });
+    expect(desk.one('conflict', (c) => c.id === two!.conflictIds![0])).toMatchObject({ entity: 'photoMarkup', field: 'routes', discardedValue: [routes[0]!] });
+    await phone.pullAll(t, tech1);
+  });
+
   it('locks a technician’s edits once the visit is finished, and still takes the office’s', async () => {
     const visit = phone.one('visit', (r) => r.id === ids.visit);
     const [finished] = await push(t, tech1, 'markup-phone', [

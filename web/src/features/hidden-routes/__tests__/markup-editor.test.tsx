@@ -139,7 +139,8 @@ describe('drawing routes over a photo', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Save routes' }));
     await screen.findByText(/Routes saved on this phone/);
     const [row] = await db.photoMarkup.toArray();
-    expect(row).toMatchObject({ photoId: PHOTO, visitId: VISIT, siteId: SITE, wallWidthMm: 3000, wallHeightMm: 2400 });
+    // The photo's own id, so that a second phone's markup of the same photo is the same record.
+    expect(row).toMatchObject({ id: PHOTO, photoId: PHOTO, visitId: VISIT, siteId: SITE, wallWidthMm: 3000, wallHeightMm: 2400 });
     expect(row!.routes).toEqual([{ id: expect.any(String), points: [{ x: 850, y: 10 }, { x: 850, y: 852 }], cableRunId: null, circuitId: CIRCUIT, depthMm: 25, protection: 'none' }]);
     expect(row!.datums!.map((d) => [d.datum, d.lineAt, d.to, d.mm])).toEqual([
       ['left-corner', 100, { x: 350, y: 600 }, 500],

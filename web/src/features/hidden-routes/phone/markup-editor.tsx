@@ -27,7 +27,7 @@ import { startingValues, useFormDraft } from '@/components/forms/form-draft';
 import { AidLine } from '@/components/verdicts/verdict-chip';
 import type { CableRunRow, CircuitRow, PhotoMarkupRow, PhotoRow } from '@/lib/db';
 import { parseReading, readingProblem, readingText } from '@/lib/readings';
-import { createRecord, LocalWriteError, saveRecord } from '@/lib/sync/local-write';
+import { createRecords, LocalWriteError, saveRecord } from '@/lib/sync/local-write';
 import { MarkedPhotoFrame } from '@/components/photo-markup/marked-photo-frame';
 import { MarkupOverlay, type OverlayPointer } from '@/components/photo-markup/markup-overlay';
 import { RouteLegend } from '../components/route-legend';
@@ -246,7 +246,9 @@ export function MarkupEditor({ photo, markup, cables, circuits, visitId, locked,
         );
         if (Object.keys(changed).length) await saveRecord('photoMarkup', markup.id, changed);
       } else {
-        await createRecord('photoMarkup', { photoId: photo.id, visitId, siteId: photo.siteId, areaId: photo.areaId ?? null, recordedAt: new Date().toISOString(), ...fields });
+        // One markup per photo: it takes the photo's id, so two phones that each start one offline write the same
+        // record, merged field by field (a clash goes to the office), and neither drawing is hidden behind the other.
+        await createRecords([{ entity: 'photoMarkup', id: photo.id, fields: { photoId: photo.id, visitId, siteId: photo.siteId, areaId: photo.areaId ?? null, recordedAt: new Date().toISOString(), ...fields } }]);
       }
       saved.settle();
       setSaid('Routes saved on this phone; they reach the office with the next sync.');
