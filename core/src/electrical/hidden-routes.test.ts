@@ -50,6 +50,21 @@ describe('from photo pixels to wall millimetres', () => {
     expect(photoScale([...DATUMS])).toEqual({ mmPerPxX: 2, mmPerPxY: 2 });
   });
 
+  it('takes the scale from the edges of a socket box too, which alone do not place a point on the wall', () => {
+    // 100 mm over 50 px from the side of the box and 60 mm over 30 px below it: 2 mm a pixel (D, from the example's own figures)
+    const boxOnly = [
+      { id: 'b1', datum: 'box-side', lineAt: 812, to: { x: 862, y: 700 }, mm: 100 },
+      { id: 'b2', datum: 'box-top-or-bottom', lineAt: 896, to: { x: 850, y: 926 }, mm: 60 },
+    ] as const;
+    expect(photoScale([...boxOnly])).toEqual({ mmPerPxX: 2, mmPerPxY: 2 });
+    const placed = wallMapping({ ...MARKUP, datums: [...boxOnly] });
+    expect(placed).toEqual({ ok: false, missing: 'Measure from a corner of the wall.' });
+    // With the wall's corner and floor as well, the box's dimensions join the scale and the points are placed.
+    const both = wallMapping({ ...MARKUP, datums: [...DATUMS, ...boxOnly] });
+    if (!both.ok) throw new Error(both.missing);
+    expect(both.toWall({ x: 850, y: 875 })).toEqual({ x: 1500, y: 450 });
+  });
+
   it('uses one axis for both when only one is measured (square pixels of a square-on photo)', () => {
     expect(photoScale([DATUMS[0]])).toEqual({ mmPerPxX: 2, mmPerPxY: 2 });
     expect(photoScale([])).toBeNull();

@@ -16,7 +16,9 @@ import { checkSafeZone, type ConcealedCableProtection, type SafeZoneCheck, WALL_
 export type PhotoPoint = { x: number; y: number };
 
 /** The fixed lines a dimension is measured from: a corner (an angle with the next wall), the floor or the ceiling. */
-export const DATUM_KINDS = ['left-corner', 'right-corner', 'floor', 'ceiling'] as const;
+// The wall's own edges place a point on the wall; the edges of a socket box outlined on the photo measure the scale
+// only, since the box's own place on the wall comes from the wall's edges.
+export const DATUM_KINDS = ['left-corner', 'right-corner', 'floor', 'ceiling', 'box-side', 'box-top-or-bottom'] as const;
 export type DatumKind = (typeof DATUM_KINDS)[number];
 
 export const CONCEALED_PROTECTIONS = ['none', 'earthed-metallic-covering', 'earthed-conduit-or-trunking', 'mechanical-protection', 'selv-pelv'] as const;
@@ -64,7 +66,9 @@ export type PhotoMarkupShape = {
 /** Bounds of what may be drawn on one photo: our own, so that a synced markup stays small. */
 export const MARKUP_LIMITS = Object.freeze({ routes: 40, pointsPerRoute: 60, datums: 40, accessories: 20, datumMm: 30_000 });
 
-const horizontalDatum = (d: DatumKind) => d === 'left-corner' || d === 'right-corner';
+/** Whether a datum's distance is measured across the wall (from an upright line: a corner, the side of a box). */
+export const measuredAcross = (d: DatumKind): boolean => d === 'left-corner' || d === 'right-corner' || d === 'box-side';
+const horizontalDatum = measuredAcross;
 
 /** The next point of a route, snapped to run horizontally or vertically from the last, as cables in zones run. */
 export function snapPoint(from: PhotoPoint, to: PhotoPoint): PhotoPoint {
@@ -349,4 +353,6 @@ export const DATUM_WORDS: Readonly<Record<DatumKind, string>> = {
   'right-corner': 'from the right-hand corner',
   floor: 'up from the floor',
   ceiling: 'down from the ceiling',
+  'box-side': 'across from the side of a socket box',
+  'box-top-or-bottom': 'from the top or bottom of a socket box',
 };

@@ -1,6 +1,7 @@
 import {
   checkMarkedRoute,
   DATUM_WORDS,
+  measuredAcross,
   DRILLING_CAUTION,
   hiddenRoutesByWall,
   type MarkedRouteCheck,
@@ -130,7 +131,7 @@ function drawPhoto(layout: DocumentLayout, onPaper: PhotoOnPaper, images: Map<st
     doc.rect(cx - (a.widthPx * scale) / 2, cy - (a.heightPx * scale) / 2, a.widthPx * scale, a.heightPx * scale).lineWidth(1.2).dash(2, { space: 2 }).strokeColor('#ffffff').stroke().undash();
   }
   for (const d of markup.datums ?? []) {
-    const across = d.datum === 'left-corner' || d.datum === 'right-corner';
+    const across = measuredAcross(d.datum);
     const [tx, ty] = at(d.to);
     const [fx, fy] = across ? at({ x: d.lineAt, y: d.to.y }) : at({ x: d.to.x, y: d.lineAt });
     doc.moveTo(fx, fy).lineTo(tx, ty).lineWidth(1.4).dash(4, { space: 3 }).strokeColor(INK.copper).stroke().undash();

@@ -1,5 +1,5 @@
 import type { DatumMark, MarkedAccessory, MarkedRoute, PhotoPoint, Verdict } from '@wiretrail/core';
-import { routeColour } from '@wiretrail/core';
+import { measuredAcross, routeColour } from '@wiretrail/core';
 import { type PointerEvent as ReactPointerEvent, useRef } from 'react';
 
 export interface OverlayPointer {
@@ -93,7 +93,7 @@ export function MarkupOverlay({ width, height, routes, datums = [], accessories 
         />
       ))}
       {datums.map((d) => {
-        const across = d.datum === 'left-corner' || d.datum === 'right-corner';
+        const across = measuredAcross(d.datum);
         const from = across ? { x: d.lineAt, y: d.to.y } : { x: d.to.x, y: d.lineAt };
         return <Dimension key={d.id} from={from} to={d.to} text={`${d.mm} mm`} unit={unit} />;
       })}

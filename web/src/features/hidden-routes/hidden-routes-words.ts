@@ -6,6 +6,8 @@ export const DATUM_CHOICES: Array<{ value: DatumKind; label: string; tapLine: st
   { value: 'right-corner', label: 'Right-hand corner', tapLine: 'Tap the right-hand corner of the wall on the photo.' },
   { value: 'floor', label: 'Floor', tapLine: 'Tap the floor line on the photo.' },
   { value: 'ceiling', label: 'Ceiling', tapLine: 'Tap the ceiling line on the photo.' },
+  { value: 'box-side', label: 'Side of a socket box', tapLine: 'Tap the side of the socket box on the photo.' },
+  { value: 'box-top-or-bottom', label: 'Top or bottom of a socket box', tapLine: 'Tap the top or bottom edge of the socket box on the photo.' },
 ];
 export const datumLabel = (d: DatumKind) => DATUM_CHOICES.find((c) => c.value === d)?.label ?? d;
 

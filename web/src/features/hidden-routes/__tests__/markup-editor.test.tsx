@@ -136,6 +136,17 @@ describe('drawing routes over a photo', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Add box' }));
     expect(await within(legend).findByRole('button', { name: /Safe zones, route 1: Pass/ })).toBeTruthy();
 
+    // A distance from the side of the box measures the scale too: 100 mm over 50 px, the same 2 mm a pixel.
+    fireEvent.click(screen.getByRole('button', { name: 'Measure' }));
+    await choose('Measured from', 'Side of a socket box');
+    expect(screen.getByText('Tap the side of the socket box on the photo.')).toBeTruthy();
+    tap([406, 350]);
+    tap([431, 350]);
+    fireEvent.change(screen.getByLabelText('Distance (mm)'), { target: { value: '100' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add distance' }));
+    expect(await within(screen.getByRole('list', { name: 'Distances measured' })).findByText(/^100 mm from the side of a socket box$/i)).toBeTruthy();
+    expect(within(legend).getByText(/runs \(1500, 2180\) to \(1500, 496\) mm/)).toBeTruthy();
+
     fireEvent.click(screen.getByRole('button', { name: 'Save routes' }));
     await screen.findByText(/Routes saved on this phone/);
     const [row] = await db.photoMarkup.toArray();
@@ -145,6 +156,7 @@ describe('drawing routes over a photo', () => {
     expect(row!.datums!.map((d) => [d.datum, d.lineAt, d.to, d.mm])).toEqual([
       ['left-corner', 100, { x: 350, y: 600 }, 500],
       ['floor', 1100, { x: 850, y: 875 }, 450],
+      ['box-side', 812, { x: 862, y: 700 }, 100],
     ]);
     expect(row!.accessories).toEqual([{ id: expect.any(String), centre: { x: 849, y: 874 }, widthPx: 74, heightPx: 44, label: 'Socket box' }]);
     expect((await db.outbox.toArray()).map((o) => o.entity)).toEqual(['photoMarkup']);

@@ -15,6 +15,7 @@ import {
   type MarkedAccessory,
   type MarkedRoute,
   type PhotoPoint,
+  measuredAcross,
   photoMarkupProblems,
   routeTieWords,
   snapPoint,
@@ -205,7 +206,7 @@ export function MarkupEditor({ photo, markup, cables, circuits, visitId, locked,
     if (!datumLine || !datumTo) return;
     const mm = parseReading(datumMm);
     if (mm === null || Number.isNaN(mm) || mm <= 0 || mm > 30_000) return setError('Type the distance measured, in millimetres, like 450.');
-    const across = datumKind === 'left-corner' || datumKind === 'right-corner';
+    const across = measuredAcross(datumKind);
     const datum: DatumMark = { id: newId(), datum: datumKind, lineAt: across ? datumLine.x : datumLine.y, to: datumTo, mm };
     change({ datums: [...draft.datums, datum] });
     setDatumLine(null);
@@ -274,7 +275,7 @@ export function MarkupEditor({ photo, markup, cables, circuits, visitId, locked,
 
   const pendingDatum = datumLine
     ? {
-        from: datumKind === 'left-corner' || datumKind === 'right-corner' ? { x: datumLine.x, y: datumTo?.y ?? datumLine.y } : { x: datumTo?.x ?? datumLine.x, y: datumLine.y },
+        from: measuredAcross(datumKind) ? { x: datumLine.x, y: datumTo?.y ?? datumLine.y } : { x: datumTo?.x ?? datumLine.x, y: datumLine.y },
         to: datumTo,
       }
     : null;
