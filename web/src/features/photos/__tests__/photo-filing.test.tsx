@@ -161,7 +161,8 @@ describe('a photo opened from the trail', () => {
     // Read from the phone's database after the photo: on a busy machine that takes more than a moment.
     const drawn = await within(viewer).findByRole('img', { name: 'Photo 1: 2 cable routes drawn over it' }, { timeout: 10_000 });
     expect(drawn.querySelectorAll('polyline')).toHaveLength(4);
-    expect(within(viewer).getByRole('img', { name: 'Photo 1' })).toBeTruthy();
+    // The photo's own bytes are read apart from the markup, and may come a moment later.
+    expect(await within(viewer).findByRole('img', { name: 'Photo 1' }, { timeout: 10_000 })).toBeTruthy();
     expect(within(viewer).getByRole('link', { name: 'Mark cable routes' }).getAttribute('href')).toBe(`/visits/${VISIT}/photos/${photo(1).id}/routes`);
   });
 

@@ -145,7 +145,7 @@ function PhotoWithRoutes({ photo, alt, keptUrl, keptGone, markup }: { photo: Pho
   const height = photo.height && photo.height > 0 ? photo.height : 1200;
   const routes = markup.routes ?? [];
   return (
-    <MarkedPhotoFrame width={width} height={height} src={keptUrl ?? serverUrl} alt={alt} maxHeight="45vh">
+    <MarkedPhotoFrame width={width} height={height} src={keptUrl ?? serverUrl} alt={alt} maxHeight="45vh" missing={keptGone ? undefined : 'Loading the photo…'}>
       <MarkupOverlay width={width} height={height} routes={routes} datums={markup.datums ?? []} accessories={markup.accessories ?? []} label={`${alt}: ${routes.length === 1 ? '1 cable route' : `${routes.length} cable routes`} drawn over it`} />
     </MarkedPhotoFrame>
   );
