@@ -17,7 +17,7 @@ import { dateTimeWords, dateWords, joined, VERDICT_INK, VERDICT_WORDS } from '..
 import { type Issue, issuedBy, startJobDocument } from '../../paperwork/pdf/job-heading.js';
 import type { SyncRecord } from '../../sync/entities/sync-schemas.js';
 import type { InstallationCertificateContent } from '../document-content.js';
-import { judgedReadings } from './minor-works-pdf.js';
+import { departuresTable, judgedReadings } from './minor-works-pdf.js';
 
 export interface InstallationCertificatePdf {
   issue: Issue;
@@ -194,18 +194,7 @@ export async function installationCertificatePdf({ issue, file, content, rules, 
 
   layout.heading(`Comments on the existing installation (${EXISTING_INSTALLATION_REG})`);
   layout.paragraph(p.existingInstallationComments || 'None.');
-  layout.heading('Departures from the standard');
-  if (content.departures.length === 0) layout.paragraph('None.');
-  else {
-    layout.table(
-      [
-        { header: 'Regulation departed from', width: 1 },
-        { header: 'What is done instead', width: 2 },
-        { header: 'Why it gives no less safety', width: 2 },
-      ],
-      content.departures.map((d) => ({ cells: [{ text: d.regulation, weight: 'medium' }, d.instead, d.noLessSafe] })),
-    );
-  }
+  departuresTable(layout, content.departures);
 
   layout.heading('Schedule of inspections');
   layout.table(

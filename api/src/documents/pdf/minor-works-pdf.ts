@@ -99,6 +99,20 @@ export function testRows(c: Certified): Row[] {
 }
 
 /** A certificate for an alteration or addition to an existing circuit, in Wiretrail's own layout. */
+/** The departures from the standard the signer declared, each with what is done instead and why it is no less safe. */
+export function departuresTable(layout: DocumentLayout, departures: ReadonlyArray<{ regulation: string; instead: string; noLessSafe: string }>): void {
+  layout.heading('Departures from the standard');
+  if (departures.length === 0) return layout.paragraph('None.');
+  layout.table(
+    [
+      { header: 'Regulation departed from', width: 1 },
+      { header: 'What is done instead', width: 2 },
+      { header: 'Why it gives no less safety', width: 2 },
+    ],
+    departures.map((d) => ({ cells: [{ text: d.regulation, weight: 'medium' }, d.instead, d.noLessSafe] })),
+  );
+}
+
 /** One circuit's readings as judged: when and with what it was tested, then each test beside its limit and verdict. */
 export function judgedReadings(layout: DocumentLayout, heading: string, c: Certified, tz: string): void {
   layout.heading(heading);
@@ -188,18 +202,7 @@ export async function minorWorksPdf({ issue, file, content, rules, signature }: 
   layout.heading('Observations');
   // Free text typed where departures used to go is kept as an observation: it departs from nothing.
   layout.paragraph([...texts('observations'), ...texts('departures')].join('\n\n') || 'None recorded.');
-  layout.heading('Departures from the standard');
-  if (content.departures.length === 0) layout.paragraph('None.');
-  else {
-    layout.table(
-      [
-        { header: 'Regulation departed from', width: 1 },
-        { header: 'What is done instead', width: 2 },
-        { header: 'Why it gives no less safety', width: 2 },
-      ],
-      content.departures.map((d) => ({ cells: [{ text: d.regulation, weight: 'medium' }, d.instead, d.noLessSafe] })),
-    );
-  }
+  departuresTable(layout, content.departures);
   layout.heading(`Permitted exceptions (${PERMITTED_EXCEPTIONS_REG})`);
   const exceptions = texts('permittedExceptions');
   layout.paragraph(exceptions.join('\n\n') || 'None.');
