@@ -1,13 +1,10 @@
 // @vitest-environment happy-dom
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
+import { fireEvent, screen, within } from '@testing-library/react';
 import { certificateThatApplies, defaultParticulars, type InstallationCertificatePreview } from '@wiretrail/core';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { fakeApi, type FakeAnswer, type FakeCall } from '@/lib/fake-api';
-import { setSession } from '@/lib/session';
-import { JobDocuments } from '../components/job-documents';
+import { describe, expect, it } from 'vitest';
+import type { FakeAnswer, FakeCall } from '@/lib/fake-api';
+import { JOB, showJobDocuments, signedInAtTheDesk } from './job-documents-harness';
 
-const JOB = '01900000-0000-7000-8000-000000000010';
 const choice = certificateThatApplies({ visitIds: ['v1'], circuits: [{ id: 'c2', number: '2', description: 'Garden office sockets', newOnVisitId: 'v1' }], boards: [] });
 // Fernhill Close as recorded on site: TT, Ze 38 Ω, PFC 0.6 kA, nothing recorded of the earthing conductor or bonding.
 const PREVIEW: InstallationCertificatePreview = {
@@ -18,29 +15,15 @@ const PREVIEW: InstallationCertificatePreview = {
 };
 
 function show(answer: (c: FakeCall) => FakeAnswer = () => undefined) {
-  const api = fakeApi((c) => {
-    if (c.path === `/api/jobs/${JOB}`) return { status: 200, body: { id: JOB, customerId: 'c1' } };
-    if (c.path === '/api/customers/c1') return { status: 200, body: { name: 'Tom Okonjo', email: 'okonjo@example.com' } };
+  return showJobDocuments({ name: 'Tom Okonjo', email: 'okonjo@example.com' }, (c) => {
     if (c.path === `/api/jobs/${JOB}/documents` && c.method === 'GET') return { status: 200, body: { items: [] } };
     if (c.path === `/api/jobs/${JOB}/installation-certificate`) return { status: 200, body: PREVIEW };
     return answer(c);
   });
-  vi.stubGlobal('fetch', api.fetch);
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <JobDocuments jobId={JOB} />
-    </QueryClientProvider>,
-  );
-  return api.calls;
 }
 
 describe('issuing an installation certificate at the desk', () => {
-  beforeEach(() => setSession({ accessToken: 'a', refreshToken: 'r', user: { id: 'u', email: 'office@larkfield.example', name: 'Dan Whitlow', role: 'office', organisationId: 'o' } }));
-  afterEach(() => {
-    cleanup();
-    vi.unstubAllGlobals();
-    setSession(null);
-  });
+  signedInAtTheDesk();
 
   it('says which certificate applies, starts from the site’s records, and sends nothing until the particulars are complete', async () => {
     const calls = show((c) => (c.method === 'POST' ? { status: 201, body: { id: 'd1', number: 'EIC-0001', kind: 'installation-certificate', notices: [] } } : undefined));

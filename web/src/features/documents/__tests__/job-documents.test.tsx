@@ -1,13 +1,10 @@
 // @vitest-environment happy-dom
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { fakeApi, type FakeAnswer, type FakeCall } from '@/lib/fake-api';
-import { setSession } from '@/lib/session';
+import { fireEvent, screen, within } from '@testing-library/react';
+import { describe, expect, it, vi } from 'vitest';
+import type { FakeAnswer, FakeCall } from '@/lib/fake-api';
+import { JOB, showJobDocuments, signedInAtTheDesk } from './job-documents-harness';
 import type { JobDocument } from '../api/get-job-documents';
-import { JobDocuments } from '../components/job-documents';
 
-const JOB = '01900000-0000-7000-8000-000000000010';
 const doc = (n: number, extra: Partial<JobDocument>): JobDocument => ({
   id: `01900000-0000-7000-8000-00000000002${n}`, jobId: JOB, kind: 'photo-record', number: `PR-000${n}`, title: null, signerName: 'Dan Whitlow',
   pdfSha256: 'a'.repeat(64), pdfBytes: 1000, issuedAt: '2026-03-14T11:00:00.000Z', issuedById: null, emailState: null, emailedTo: null, emailedAt: null, emailError: null,
@@ -16,27 +13,11 @@ const doc = (n: number, extra: Partial<JobDocument>): JobDocument => ({
 });
 
 function show(answer: (c: FakeCall) => FakeAnswer) {
-  const api = fakeApi((c) => {
-    if (c.path === `/api/jobs/${JOB}`) return { status: 200, body: { id: JOB, customerId: 'c1' } };
-    if (c.path === '/api/customers/c1') return { status: 200, body: { name: 'Hannah Greaves', email: 'hannah.greaves@example.com' } };
-    return answer(c);
-  });
-  vi.stubGlobal('fetch', api.fetch);
-  render(
-    <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-      <JobDocuments jobId={JOB} />
-    </QueryClientProvider>,
-  );
-  return api.calls;
+  return showJobDocuments({ name: 'Hannah Greaves', email: 'hannah.greaves@example.com' }, answer);
 }
 
 describe('JobDocuments', () => {
-  beforeEach(() => setSession({ accessToken: 'a', refreshToken: 'r', user: { id: 'u', email: 'office@larkfield.example', name: 'Dan Whitlow', role: 'office', organisationId: 'o' } }));
-  afterEach(() => {
-    cleanup();
-    vi.unstubAllGlobals();
-    setSession(null);
-  });
+  signedInAtTheDesk();
 
   it('lists what was issued with how each e-mail is getting on', async () => {
     show(() => ({
