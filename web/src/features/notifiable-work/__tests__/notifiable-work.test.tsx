@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { notifiableWork, type NotifiableJob } from '@wiretrail/core';
+import { type Nation, notifiableWork, type NotifiableJob } from '@wiretrail/core';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { api } from '@/lib/api-client';
 import { NotificationSettings } from '../components/notification-settings';
@@ -67,12 +67,7 @@ describe('recording a notification', () => {
 
   it('clears a scheme emptied by the admin, and refuses a name over 100 characters', async () => {
     const patch = vi.spyOn(api, 'patch').mockResolvedValue({});
-    render(
-      <QueryClientProvider client={new QueryClient()}>
-        <NotificationSettings organisationId="org-1" nation="wales" scheme="Example Scheme" onClose={vi.fn()} />
-      </QueryClientProvider>,
-    );
-    const form = await screen.findByRole('form', { name: 'Rules and scheme' });
+    const form = await showSettings('wales', 'Example Scheme');
     const field = within(form).getByLabelText('Competent person scheme');
     fireEvent.change(field, { target: { value: 'x'.repeat(101) } });
     fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
@@ -84,16 +79,20 @@ describe('recording a notification', () => {
   });
 });
 
+async function showSettings(nation: Nation, scheme: string | null, onClose = vi.fn()): Promise<HTMLElement> {
+  render(
+    <QueryClientProvider client={new QueryClient()}>
+      <NotificationSettings organisationId="org-1" nation={nation} scheme={scheme} onClose={onClose} />
+    </QueryClientProvider>,
+  );
+  return screen.findByRole('form', { name: 'Rules and scheme' });
+}
+
 describe('the rules and scheme', () => {
   it('lets an admin choose Wales and name the scheme, sent as the organisation’s settings', async () => {
     const patch = vi.spyOn(api, 'patch').mockResolvedValue({});
     const onClose = vi.fn();
-    render(
-      <QueryClientProvider client={new QueryClient()}>
-        <NotificationSettings organisationId="org-1" nation="england" scheme={null} onClose={onClose} />
-      </QueryClientProvider>,
-    );
-    const form = await screen.findByRole('form', { name: 'Rules and scheme' });
+    const form = await showSettings('england', null, onClose);
     fireEvent.change(within(form).getByLabelText('Where the contractor works'), { target: { value: 'wales' } });
     fireEvent.change(within(form).getByLabelText('Competent person scheme'), { target: { value: ' Example Scheme ' } });
     fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
@@ -103,12 +102,7 @@ describe('the rules and scheme', () => {
 
   it('clears a scheme emptied by the admin, and refuses a name over 100 characters', async () => {
     const patch = vi.spyOn(api, 'patch').mockResolvedValue({});
-    render(
-      <QueryClientProvider client={new QueryClient()}>
-        <NotificationSettings organisationId="org-1" nation="wales" scheme="Example Scheme" onClose={vi.fn()} />
-      </QueryClientProvider>,
-    );
-    const form = await screen.findByRole('form', { name: 'Rules and scheme' });
+    const form = await showSettings('wales', 'Example Scheme');
     const field = within(form).getByLabelText('Competent person scheme');
     fireEvent.change(field, { target: { value: 'x'.repeat(101) } });
     fireEvent.click(within(form).getByRole('button', { name: 'Save' }));
